@@ -1,0 +1,118 @@
+/**
+ * Inputs and outputs shared by the near-field methods. Everything in SI.
+ * Frame: origin at the port centre, x east, y north, z up. Azimuths clockwise from north.
+ */
+import type { ResultWarning } from "../warnings";
+
+/** Ambient water column as seen by a jet: density, salinity and temperature by depth. */
+export interface AmbientColumn {
+  /** Total water depth at the diffuser, m. */
+  readonly depth: number;
+  /** Depths below surface, m, ascending (at least two points). */
+  readonly depths: readonly number[];
+  /** Density at each depth, kg/m³ (same equation of state as the discharge). */
+  readonly densities: readonly number[];
+  readonly salinities: readonly number[]; // g/kg
+  readonly temperatures: readonly number[]; // °C
+  readonly currentSpeed: number; // m/s
+  readonly currentDirection: number; // degrees clockwise from north, direction flowed toward
+}
+
+/** One round jet (a single port, or a merged group represented by an equivalent port). */
+export interface JetSource {
+  readonly diameter: number; // m, effective
+  readonly flow: number; // m³/s
+  readonly velocity: number; // m/s
+  readonly density: number; // kg/m³ of the discharge
+  readonly salinity: number; // g/kg
+  readonly temperature: number; // °C
+  readonly angle: number; // degrees above horizontal
+  readonly azimuth: number; // degrees clockwise from north
+  readonly portHeight: number; // m above seabed
+  /** Reduced gravity at the port g(ρ0 − ρa)/ρa, m/s² (positive for a dense jet). */
+  readonly reducedGravity: number;
+  /** Densimetric Froude number U/√(g′d). */
+  readonly froude: number;
+}
+
+export interface PathPoint {
+  readonly s: number; // m along the centreline
+  readonly x: number; // m east of the port
+  readonly y: number; // m north of the port
+  readonly z: number; // m above the port
+  readonly halfWidth: number; // m (velocity half-width, e-folding or top-hat as documented by the method)
+  readonly dilution: number; // centreline (minimum) dilution
+}
+
+export type NearFieldMethodName = "length-scale" | "integral";
+
+export interface NearFieldVariant {
+  readonly source: string;
+  readonly maxRiseHeight: number | null;
+  readonly maxRiseDistance: number | null;
+  readonly returnDistance: number | null;
+  readonly impactDistance: number | null;
+  readonly impactDilution: number | null;
+  readonly nearFieldDistance: number | null;
+  readonly nearFieldDilution: number | null;
+  readonly note?: string;
+}
+
+export interface NearFieldEvent {
+  readonly kind:
+    | "max-rise"
+    | "return-to-port-level"
+    | "seabed-contact"
+    | "surface-contact"
+    | "centreline-impact"
+    | "passive-layer"
+    | "step-limit"
+    | "length-limit"
+    | "trapped";
+  readonly s: number;
+  readonly x: number;
+  readonly y: number;
+  readonly z: number;
+  readonly dilution: number;
+}
+
+/** One method's result, the shape promised under `nearField` in the result contract. */
+export interface NearFieldMethodResult {
+  readonly method: NearFieldMethodName;
+  readonly source: string;
+  /** Upper edge of the jet above the port, m. */
+  readonly maxRiseHeight: number | null;
+  /** Plan distance from the port to the point of maximum rise, m. */
+  readonly maxRiseDistance: number | null;
+  /** Plan distance where the centreline is back at port level, m. */
+  readonly returnDistance: number | null;
+  /** Plan distance where the centreline reaches the seabed, m. */
+  readonly impactDistance: number | null;
+  /** Centreline dilution at impact. */
+  readonly impactDilution: number | null;
+  /** Plan distance to the end of the near field, m. */
+  readonly nearFieldDistance: number | null;
+  readonly nearFieldDilution: number | null;
+  /** Dilution at maximum rise (centreline), where the method gives it. */
+  readonly maxRiseDilution?: number | null;
+  /** [low, high] centreline impact dilution from the method's published scatter or documented bias. */
+  readonly dilutionRange: readonly [number, number] | null;
+  /** Entrained seawater flow at impact, m³/s (per port or group as stated in `scope`). */
+  readonly entrainedFlow: number | null;
+  /** Plain statement of the method's known bias, shown in results and the report. */
+  readonly bias: string;
+  readonly warnings: readonly ResultWarning[];
+  readonly variants?: readonly NearFieldVariant[];
+  /** Integral method only: the centreline path. */
+  readonly path?: readonly PathPoint[];
+  readonly events?: readonly NearFieldEvent[];
+  /** Whether the numbers were interpolated between tabulated angles, etc. */
+  readonly notes?: readonly string[];
+}
+
+/** Receiver of integral-model samples (chart arrays, 3D buffers, CSV) without core knowing which. */
+export interface PathSink {
+  begin(capacityHint: number): void;
+  sample(s: number, x: number, y: number, z: number, halfWidth: number, dilution: number): void;
+  end(): void;
+}

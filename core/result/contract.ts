@@ -1,0 +1,134 @@
+/**
+ * The `brinefield-result` contract, version 1: what `brinefield run --json` prints and what the
+ * app and the report read. Plain, serialisable, SI units. Additions are backwards compatible;
+ * a change of meaning bumps `version`. Documented in README.md ("Result contract").
+ */
+import type { ResultWarning } from "../warnings";
+import type { NearFieldMethodResult } from "../nearfield/types";
+
+export const RESULT_FORMAT = "brinefield-result" as const;
+export const RESULT_VERSION = 1 as const;
+
+export interface EquationOfStateInfo {
+  /** "TEOS-10" or "Sharqawy-2010+Nayar-2016" */
+  readonly name: string;
+  readonly source: string;
+  readonly reason: string;
+}
+
+export interface DensitiesResult {
+  readonly discharge: number; // kg/m³ at the port (in situ)
+  readonly ambient: number; // kg/m³ at the port depth
+  readonly reducedGravity: number; // m/s²
+  readonly ambientSurface: number; // kg/m³ at the surface
+  readonly ambientBottom: number; // kg/m³ at the seabed
+  readonly equationOfState: EquationOfStateInfo;
+}
+
+export interface PortResult {
+  readonly count: number;
+  readonly diameter: number; // m effective
+  readonly flow: number; // m³/s per port (mean of the split)
+  readonly flows: readonly number[]; // m³/s each port
+  readonly velocity: number; // m/s (of the mean port)
+  readonly froude: number;
+  readonly reynolds: number;
+  readonly headLoss: number | null; // m, exit loss estimate where a discharge coefficient is given
+}
+
+export interface MultiportResult {
+  readonly regime: string; // "single-port" | "independent" | "partially-merged" | "merged-line-source" | ...
+  readonly merged: boolean;
+  readonly portsUsed: number;
+  readonly reason: string;
+  readonly spacingRatio: number | null; // s/(dF)
+  readonly dilutionFactor: number; // applied to single-jet dilutions (≤ 1)
+  readonly source: string;
+}
+
+export interface ConstituentAtEdge {
+  readonly constituent: string;
+  readonly unit: string;
+  readonly concentration: number;
+  readonly increase: number;
+  readonly background: number;
+  readonly discharge: number;
+}
+
+export interface SeriesResult {
+  /** Plan distance from the diffuser, m. */
+  readonly distance: readonly number[];
+  /** Minimum (centreline) dilution at that distance. */
+  readonly dilution: readonly number[];
+  /** Salinity increase over background, g/kg. */
+  readonly salinityIncrease: readonly number[];
+  /** Dense-layer thickness, m (null inside the jet). */
+  readonly layerThickness: readonly (number | null)[];
+  /** Stage at each point: "jet", "spreading-layer", "passive-diffusion". */
+  readonly stage: readonly string[];
+}
+
+export interface MixingZoneResult {
+  readonly radius: number; // m
+  readonly dilution: number; // centreline dilution at the edge
+  readonly method: string; // method chain used to reach the edge
+  readonly nearFieldMethod: string; // which near-field method fed the edge
+  readonly edgeInsideNearField: boolean;
+  readonly alternatives: readonly { readonly method: string; readonly dilution: number }[];
+  readonly constituents: readonly ConstituentAtEdge[];
+  readonly layerThickness: number | null; // m at the edge
+  readonly footprint: {
+    readonly area: number; // m² of seabed where the governing limit is exceeded
+    readonly furthestExtent: number; // m from the diffuser
+  };
+  readonly series: SeriesResult;
+  readonly notModelled: readonly string[];
+}
+
+export interface ConstituentCompliance {
+  readonly constituent: string;
+  readonly unit: string;
+  readonly requiredDilution: number;
+  readonly edgeDilution: number;
+  readonly pass: boolean;
+  readonly margin: number; // edge dilution ÷ required dilution
+  readonly limit: string; // readable statement of the limit
+}
+
+export interface ComplianceResult {
+  readonly governingConstituent: string;
+  readonly requiredDilution: number;
+  readonly pass: boolean;
+  readonly margin: number;
+  readonly constituents: readonly ConstituentCompliance[];
+}
+
+export interface BrinefieldResult {
+  readonly format: typeof RESULT_FORMAT;
+  readonly version: typeof RESULT_VERSION;
+  readonly program: { readonly name: "brinefield"; readonly version: string };
+  /** Short hash of the normalised inputs: equal inputs give equal hashes. */
+  readonly inputsHash: string;
+  readonly scenarioName: string;
+  readonly caution: string;
+  readonly conversions: readonly string[];
+  readonly discharge: {
+    readonly flow: number;
+    readonly salinity: number;
+    readonly temperature: number;
+    readonly fromPlant: boolean;
+  };
+  readonly densities: DensitiesResult;
+  readonly port: PortResult;
+  readonly nearField: readonly NearFieldMethodResult[];
+  readonly multiport: MultiportResult;
+  readonly mixingZone: MixingZoneResult;
+  readonly compliance: ComplianceResult;
+  readonly warnings: readonly ResultWarning[];
+  readonly methods: readonly { readonly stage: string; readonly name: string; readonly source: string }[];
+}
+
+export const CAUTION =
+  "Caution: screening estimate only. Brinefield's results are not a substitute for detailed " +
+  "modelling, field measurements, the permitting authority's requirements, local codes or the " +
+  "judgement of a licensed professional, who decide whether a discharge is acceptable.";
