@@ -1,0 +1,12 @@
+export {
+  QUANTITY_KINDS,
+  quantityToSI,
+  siToDisplay,
+  displayToSI,
+  formatNumber,
+  unitSymbol,
+  siLabel,
+  matchPracticalSalinity,
+  matchTds,
+} from "./units";
+export type { QuantityKind, UnitSystem, QuantityParse } from "./units";
