@@ -1,0 +1,146 @@
+/**
+ * The properties stage: densities of the discharge and the ambient column, and the reduced gravity at
+ * the port, all from one equation of state chosen by {@link equationOfStateFor}.
+ *
+ * Depths are metres below the surface (positive down); pressure is sea pressure from
+ * {@link pressureFromDepth} at the default latitude (45°, the scenario carries no latitude). The ambient
+ * profile is interpolated linearly in depth and held constant beyond its first and last points.
+ * The stage computes only; a discharge lighter than the ambient is reported downstream, not rejected here.
+ */
+import type { AmbientColumn } from "../nearfield/types";
+import type { DensitiesResult } from "../result/contract";
+import type { ProfilePoint, Scenario } from "../scenario/types";
+import { warning, type ResultWarning } from "../warnings";
+import { equationOfStateFor, type EquationOfState } from "./equation-of-state";
+import { pressureFromDepth } from "./pressure-from-depth";
+
+/** Standard acceleration of gravity, m/s² (CGPM 1901 conventional value; common practice, no source needed). */
+export const STANDARD_GRAVITY = 9.80665;
+
+export interface PropertiesStage {
+  readonly eos: EquationOfState;
+  /** kg/m³ in situ at the port's depth. */
+  readonly dischargeDensity: number;
+  /** kg/m³ at the port's depth (depth − portHeight). */
+  readonly ambientDensityAtPort: number;
+  /** g(ρ0 − ρa)/ρa, m/s², with g = 9.80665 m/s² (standard gravity). */
+  readonly reducedGravity: number;
+  /** Densities at each profile depth plus the port depth and the seabed. */
+  readonly column: AmbientColumn;
+  readonly densities: DensitiesResult;
+  readonly warnings: ResultWarning[];
+}
+
+/**
+ * Linear interpolation of salinity and temperature in depth, constant beyond the ends.
+ * @param profile points sorted by depth (at least one)
+ * @param depth depth, m
+ */
+export function profileAtDepth(profile: readonly ProfilePoint[], depth: number): { salinity: number; temperature: number } {
+  const first = profile[0];
+  const last = profile[profile.length - 1];
+  if (depth <= first.depth) return { salinity: first.salinity, temperature: first.temperature };
+  if (depth >= last.depth) return { salinity: last.salinity, temperature: last.temperature };
+  for (let i = 1; i < profile.length; i++) {
+    const b = profile[i];
+    if (depth <= b.depth) {
+      const a = profile[i - 1];
+      const span = b.depth - a.depth;
+      // Two points at the same depth: take the deeper one's values rather than divide by zero.
+      const f = span > 0 ? (depth - a.depth) / span : 1;
+      return {
+        salinity: a.salinity + f * (b.salinity - a.salinity),
+        temperature: a.temperature + f * (b.temperature - a.temperature),
+      };
+    }
+  }
+  return { salinity: last.salinity, temperature: last.temperature };
+}
+
+/**
+ * Densities for the pipeline from a normalised scenario.
+ * @param scenario the frozen, SI scenario
+ * @returns the equation of state, densities at the port, reduced gravity, the ambient column and warnings
+ */
+export function propertiesFromScenario(scenario: Scenario): PropertiesStage {
+  const { ambient, discharge, diffuser } = scenario;
+  const warnings: ResultWarning[] = [];
+  const waterDepth = ambient.depth;
+  const profile = ambient.profile;
+
+  let portDepth = waterDepth - diffuser.portHeight;
+  if (portDepth < 0 || portDepth > waterDepth) {
+    warnings.push(
+      warning(
+        "port-outside-water-column",
+        "serious",
+        `The port height ${diffuser.portHeight} m puts the port outside the ${waterDepth} m water column; ` +
+          "densities are taken at the nearest point of the column.",
+        { parameter: "diffuser.portHeight", value: diffuser.portHeight, range: [0, waterDepth], stage: "properties" },
+      ),
+    );
+    portDepth = Math.min(Math.max(portDepth, 0), waterDepth);
+  }
+
+  const depthSet = new Set<number>();
+  for (const point of profile) if (point.depth >= 0 && point.depth <= waterDepth) depthSet.add(point.depth);
+  depthSet.add(portDepth);
+  depthSet.add(waterDepth);
+  const depths = [...depthSet].sort((a, b) => a - b);
+  const states = depths.map((d) => profileAtDepth(profile, d));
+  const portState = profileAtDepth(profile, portDepth);
+  const surfaceState = profileAtDepth(profile, 0);
+
+  const eos = equationOfStateFor(
+    [discharge.salinity, ...profile.map((p) => p.salinity)],
+    [discharge.temperature, ...profile.map((p) => p.temperature)],
+  );
+
+  const pressures = depths.map((d) => pressureFromDepth(d));
+  const densities = depths.map((_, i) => eos.density(states[i].salinity, states[i].temperature, pressures[i]));
+  const portPressure = pressureFromDepth(portDepth);
+  const dischargeDensity = eos.density(discharge.salinity, discharge.temperature, portPressure);
+  const ambientDensityAtPort = eos.density(portState.salinity, portState.temperature, portPressure);
+  const ambientSurface = eos.density(surfaceState.salinity, surfaceState.temperature, 0);
+  const ambientBottom = densities[depths.length - 1];
+  const reducedGravity = (STANDARD_GRAVITY * (dischargeDensity - ambientDensityAtPort)) / ambientDensityAtPort;
+
+  warnings.push(...eos.validityIssues(discharge.salinity, discharge.temperature, portPressure, "discharge"));
+  const seen = new Set(warnings.map((w) => `${w.code}|${w.parameter}`));
+  for (let i = 0; i < depths.length; i++) {
+    for (const w of eos.validityIssues(states[i].salinity, states[i].temperature, pressures[i], "ambient")) {
+      // One warning per code for the ambient column, with the first depth that triggered it.
+      const key = `${w.code}|${w.parameter}`;
+      if (seen.has(key)) continue;
+      seen.add(key);
+      warnings.push({ ...w, message: `${w.message} (first at ${depths[i]} m depth)` });
+    }
+  }
+
+  const column: AmbientColumn = {
+    depth: waterDepth,
+    depths,
+    densities,
+    salinities: states.map((s) => s.salinity),
+    temperatures: states.map((s) => s.temperature),
+    currentSpeed: ambient.currentSpeed,
+    currentDirection: ambient.currentDirection,
+  };
+
+  return {
+    eos,
+    dischargeDensity,
+    ambientDensityAtPort,
+    reducedGravity,
+    column,
+    densities: {
+      discharge: dischargeDensity,
+      ambient: ambientDensityAtPort,
+      reducedGravity,
+      ambientSurface,
+      ambientBottom,
+      equationOfState: eos.info,
+    },
+    warnings,
+  };
+}
