@@ -1,0 +1,25 @@
+export { beyondNearField, NOT_MODELLED } from "./stage";
+export type { BeyondInput, BeyondOutput } from "./stage";
+export {
+  entrainmentFromRichardson,
+  entrainmentFromRichardsonValidityIssues,
+  ENTRAINMENT_CUTOFF_RICHARDSON,
+  TURNER_1986_SOURCE,
+} from "./turner-1986-entrainment";
+export {
+  brooksDilutionFromDistance,
+  brooksDilutionFromDistanceValidityIssues,
+  brooksWidthFromDistance,
+  FOUR_THIRDS_LAW_COEFFICIENT,
+  BROOKS_1960_SOURCE,
+} from "./brooks-1960-diffusion";
+export {
+  spreadingLayerFromNearFieldEnd,
+  equilibriumRichardsonFromSlope,
+  DEFAULT_BED_DRAG,
+  SPREADING_LAYER_SOURCE,
+} from "./gravity-current";
+export type { SpreadingLayerInput, SpreadingLayerSeries } from "./gravity-current";
+export { jetProfileFromNearField, dilutionFromProfile, nearFieldEndFromResult } from "./jet-series";
+export type { JetProfile } from "./jet-series";
+export { erf } from "./erf";

@@ -1,0 +1,347 @@
+/**
+ * Stage "beyond the near field": multiport merging, the spreading dense layer and passive diffusion
+ * from the end of the near field to the mixing-zone edge, and compliance there.
+ *
+ * Chain: near-field dilution S_n (the lower method by default, `options.nearFieldForEdge`), then either
+ * the spreading layer (gravity-current.ts) or, with a current, Brooks (1960) passive diffusion; total
+ * dilution is multiplicative S(x) = S_n × S_ff (reference sheet §4c, Fischer et al. 1979, from memory).
+ * The lower far-field dilution governs by default (`options.farField`). If the edge lies inside the
+ * near field, the jet's own dilution where it crosses the edge is used.
+ */
+import type { Scenario } from "../scenario/types";
+import type { AmbientColumn, JetSource, NearFieldMethodResult } from "../nearfield/types";
+import type {
+  ComplianceResult,
+  DensitiesResult,
+  MixingZoneResult,
+  MultiportResult,
+  PortResult,
+  SeriesResult,
+} from "../result/contract";
+import { warning, type ResultWarning } from "../warnings";
+import { GRAVITY, multiportFromNearField, MERGING_SOURCE, portCountFromDiffuser } from "../multiport";
+import { complianceFromEdgeDilution } from "../compliance/required-dilution";
+import { dilutionFromProfile, jetProfileFromNearField, nearFieldEndFromResult, type JetProfile } from "./jet-series";
+import { spreadingLayerFromNearFieldEnd, SPREADING_LAYER_SOURCE } from "./gravity-current";
+import {
+  BROOKS_1960_SOURCE,
+  brooksDilutionFromDistance,
+  brooksDilutionFromDistanceValidityIssues,
+  brooksWidthFromDistance,
+} from "./brooks-1960-diffusion";
+import { TURNER_1986_SOURCE } from "./turner-1986-entrainment";
+
+export interface BeyondInput {
+  readonly scenario: Scenario;
+  readonly jet: JetSource;
+  readonly column: AmbientColumn;
+  readonly nearField: readonly NearFieldMethodResult[];
+  readonly densities: DensitiesResult;
+  readonly port: PortResult;
+}
+
+export interface BeyondOutput {
+  readonly multiport: MultiportResult;
+  /** Near-field results adjusted for merging (each carries a note when changed). */
+  readonly nearField: NearFieldMethodResult[];
+  readonly mixingZone: MixingZoneResult;
+  readonly compliance: ComplianceResult;
+  readonly warnings: ResultWarning[];
+  readonly methods: { stage: string; name: string; source: string }[];
+}
+
+export const NOT_MODELLED: readonly string[] = [
+  "Background build-up of salinity in enclosed or poorly flushed water is not modelled; the background is taken as constant.",
+  "Tidal reversal and re-entrainment of previously discharged brine are not modelled.",
+  "Brine reaching a seawater intake (recirculation into the plant) is not modelled.",
+  "Ambient density stratification beyond the near field and bed roughness features are not modelled.",
+];
+
+type FarMethod = "gravity-current" | "passive-diffusion";
+
+interface FarSeries {
+  distance: number[];
+  dilution: number[];
+  thickness: number[];
+  width: number[];
+}
+
+interface Chain {
+  nf: NearFieldMethodResult;
+  profile: JetProfile;
+  end: { distance: number; dilution: number };
+  impactDistance: number;
+  layerRadius: number;
+}
+
+const degToRad = (d: number) => (d * Math.PI) / 180;
+
+/** Run the stage. Never throws for out-of-range physics; returns warnings instead. */
+export function beyondNearField(input: BeyondInput): BeyondOutput {
+  const { scenario, jet, column, densities } = input;
+  const warnings: ResultWarning[] = [];
+  const mp = multiportFromNearField({ scenario, jet, nearField: input.nearField });
+  warnings.push(...mp.warnings);
+  const radius = scenario.mixingZone.radius;
+  const u = Math.max(0, column.currentSpeed);
+  const last = column.salinities.length - 1;
+  const seabedSalinity = column.salinities[last];
+  const seabedTemperature = column.temperatures[last];
+  const gBottom = (GRAVITY * (densities.discharge - densities.ambientBottom)) / densities.ambientBottom;
+  const diffuser = scenario.diffuser;
+  const nPorts = portCountFromDiffuser(scenario);
+  const diffuserLength = nPorts > 1 ? Math.max(diffuser.length, 0) : 0;
+
+  // Candidate chains, one per near-field method that reached an end point.
+  const chains: Chain[] = [];
+  for (const nf of mp.nearField) {
+    const end = nearFieldEndFromResult(nf);
+    if (!end) {
+      warnings.push(
+        warning("near-field-no-end", "warning", `Near-field method "${nf.method}" gave no near-field end; not carried to the edge.`, {
+          stage: "far-field",
+        }),
+      );
+      continue;
+    }
+    const xi = nf.impactDistance ?? nf.returnDistance ?? end.distance;
+    // Radius of the layer around the impact point at the near-field end: its spread since impact, or a
+    // quarter of the near-field distance when the method puts both at the same place (judgement).
+    const layerRadius = end.distance - xi > 0 ? end.distance - xi : Math.max(0.25 * end.distance, 0.5);
+    chains.push({ nf, profile: jetProfileFromNearField(nf), end, impactDistance: Math.min(xi, end.distance), layerRadius });
+  }
+
+  // Slope along the spreading direction: current direction if there is a current, else downslope.
+  const slopeAlong = (): number => {
+    if (!(scenario.ambient.bedSlope > 0)) return 0;
+    if (u === 0) return scenario.ambient.bedSlope;
+    const along = Math.cos(degToRad(column.currentDirection - scenario.ambient.bedSlopeAzimuth));
+    return Math.max(0, scenario.ambient.bedSlope * along);
+  };
+  const crossLength = (): number =>
+    u > 0 ? diffuserLength * Math.abs(Math.sin(degToRad(diffuser.diffuserAzimuth - column.currentDirection))) : diffuserLength;
+  const initialWidth = (c: Chain) => (u > 0 ? 2 * c.layerRadius + crossLength() : 2 * Math.PI * c.layerRadius);
+
+  const farSeries = (c: Chain, method: FarMethod, xEnd: number, steps = 400): FarSeries => {
+    const gc = spreadingLayerFromNearFieldEnd({
+      startDistance: c.end.distance,
+      endDistance: Math.max(xEnd, c.end.distance),
+      startDilution: c.end.dilution,
+      dischargeFlow: scenario.discharge.flow,
+      reducedGravity: gBottom,
+      initialWidth: initialWidth(c),
+      perimeterOffset: u > 0 ? 0 : 2 * diffuserLength,
+      currentSpeed: u,
+      bedSlope: slopeAlong(),
+      steps,
+    });
+    if (method === "gravity-current" || u === 0) {
+      return { distance: gc.distance, dilution: gc.dilution, thickness: gc.thickness, width: gc.width };
+    }
+    const b0 = initialWidth(c);
+    const h0 = gc.thickness[0];
+    const out: FarSeries = { distance: [], dilution: [], thickness: [], width: [] };
+    for (const r of gc.distance) {
+      const x = r - c.end.distance;
+      out.distance.push(r);
+      out.dilution.push(c.end.dilution * brooksDilutionFromDistance({ distance: x, initialWidth: b0, currentSpeed: u }));
+      out.thickness.push(h0); // Brooks (1960) assumes no vertical mixing: thickness stays at its start value
+      out.width.push(brooksWidthFromDistance({ distance: x, initialWidth: b0, currentSpeed: u }));
+    }
+    return out;
+  };
+  const atRadius = (s: FarSeries) => interpolate(s.distance, s.dilution, radius);
+
+  // Alternatives at the edge, for every near-field method and every applicable far-field method.
+  const farMethods: FarMethod[] = u > 0 ? ["gravity-current", "passive-diffusion"] : ["gravity-current"];
+  const alternatives: { method: string; dilution: number }[] = [];
+  const edgeOf = (c: Chain, m: FarMethod): number =>
+    radius <= c.end.distance ? dilutionFromProfile(c.profile, radius) : atRadius(farSeries(c, m, radius));
+  for (const c of chains) {
+    if (radius <= c.end.distance) alternatives.push({ method: `${c.nf.method} (jet crosses the edge)`, dilution: edgeOf(c, "gravity-current") });
+    else for (const m of farMethods) alternatives.push({ method: `${c.nf.method} + ${m}`, dilution: edgeOf(c, m) });
+  }
+
+  // Which near-field method feeds the edge.
+  const opts = scenario.options;
+  let chain: Chain | undefined;
+  if (opts.nearFieldForEdge !== "conservative") {
+    chain = chains.find((c) => c.nf.method === opts.nearFieldForEdge);
+    if (!chain && chains.length) {
+      warnings.push(
+        warning("near-field-choice-unavailable", "warning", `Near-field method "${opts.nearFieldForEdge}" gave no result; the more conservative available method was used.`, {
+          parameter: "options.nearFieldForEdge", stage: "far-field",
+        }),
+      );
+    }
+  }
+  chain ??= chains.reduce<Chain | undefined>((lo, c) => (lo === undefined || c.end.dilution < lo.end.dilution ? c : lo), undefined);
+
+  // Which far-field method governs.
+  let farMethod: FarMethod = "gravity-current";
+  if (opts.farField === "passive-diffusion") {
+    if (u > 0) farMethod = "passive-diffusion";
+    else
+      warnings.push(
+        warning("passive-diffusion-no-current", "warning", "Passive diffusion was requested but the water is stagnant; the spreading layer was used.", {
+          parameter: "options.farField", stage: "far-field",
+        }),
+      );
+  } else if (opts.farField === "conservative" && chain && u > 0 && radius > chain.end.distance) {
+    farMethod = edgeOf(chain, "passive-diffusion") < edgeOf(chain, "gravity-current") ? "passive-diffusion" : "gravity-current";
+  }
+
+  const xEnd = Math.max(2 * radius, chain ? 1.2 * chain.end.distance : 0, 1);
+  let edgeDilution = 1;
+  let edgeInside = false;
+  let layerAtEdge: number | null = null;
+  let series: SeriesResult = { distance: [0], dilution: [1], salinityIncrease: [scenario.discharge.salinity - seabedSalinity], layerThickness: [null], stage: ["jet"] };
+  let footprint = { area: 0, furthestExtent: 0 };
+  const excess = scenario.discharge.salinity - seabedSalinity;
+
+  if (!chain) {
+    warnings.push(
+      warning("edge-dilution-undiluted", "serious", "No near-field result reached the seabed; the edge dilution is taken as 1 (undiluted).", {
+        stage: "far-field",
+      }),
+    );
+  } else {
+    edgeInside = radius <= chain.end.distance;
+    edgeDilution = edgeOf(chain, farMethod);
+    if (edgeInside) {
+      warnings.push(
+        warning("edge-inside-near-field", "info", `The mixing-zone edge (${radius} m) lies inside the near field (ends at ${chain.end.distance.toFixed(1)} m); the jet's own dilution where it crosses the edge is used.`, {
+          parameter: "mixingZone.radius", value: radius, stage: "far-field",
+        }),
+      );
+    }
+    const far = farSeries(chain, farMethod, xEnd, 200);
+    if (!edgeInside) layerAtEdge = interpolate(far.distance, far.thickness, radius);
+    series = buildSeries(chain, far, farMethod, excess);
+  }
+
+  const assessment = complianceFromEdgeDilution(scenario, edgeDilution, seabedSalinity, seabedTemperature);
+  warnings.push(...assessment.warnings);
+  if (chain) {
+    footprint = footprintFromChain(chain, farSeries(chain, farMethod, Math.max(10 * radius, 2 * chain.end.distance), 2000), assessment.compliance.requiredDilution);
+    if (footprint.furthestExtent >= Math.max(10 * radius, 2 * chain.end.distance) * 0.999) {
+      warnings.push(
+        warning("footprint-beyond-range", "warning", `The governing limit is still exceeded at ${footprint.furthestExtent.toFixed(0)} m, the end of the computed range; the footprint is larger than reported.`, {
+          stage: "far-field",
+        }),
+      );
+    }
+  }
+  if (u > 0) warnings.push(...brooksDilutionFromDistanceValidityIssues({ distance: radius, initialWidth: 1, currentSpeed: u }));
+
+  const nfName = chain ? chain.nf.method : "none";
+  const farLabel = farMethod === "passive-diffusion" ? "Brooks (1960) passive diffusion" : "spreading dense layer E(Ri)";
+  const mixingZone: MixingZoneResult = {
+    radius,
+    dilution: edgeDilution,
+    method: edgeInside ? `${nfName} jet (edge inside the near field)` : `${nfName} near field × ${farLabel}`,
+    nearFieldMethod: nfName,
+    edgeInsideNearField: edgeInside,
+    alternatives,
+    constituents: assessment.constituents,
+    layerThickness: layerAtEdge,
+    footprint,
+    series,
+    notModelled: NOT_MODELLED,
+  };
+  const methods = [
+    { stage: "multiport", name: "jet merging and line-plume limit", source: MERGING_SOURCE },
+    { stage: "far-field", name: "spreading dense layer", source: SPREADING_LAYER_SOURCE },
+    { stage: "far-field", name: "entrainment law E(Ri)", source: TURNER_1986_SOURCE },
+    ...(u > 0 ? [{ stage: "far-field", name: "passive lateral diffusion", source: BROOKS_1960_SOURCE }] : []),
+    { stage: "compliance", name: "required dilution", source: "S_req = (C_d − C_b)/(C_limit − C_b), derived (reference sheet §0)" },
+  ];
+  return { multiport: mp.multiport, nearField: mp.nearField, mixingZone, compliance: assessment.compliance, warnings, methods };
+}
+
+function interpolate(xs: readonly number[], ys: readonly number[], x: number): number {
+  if (x <= xs[0]) return ys[0];
+  for (let i = 1; i < xs.length; i++) {
+    if (x <= xs[i]) {
+      const t = (x - xs[i - 1]) / (xs[i] - xs[i - 1]);
+      return ys[i - 1] + t * (ys[i] - ys[i - 1]);
+    }
+  }
+  return ys[ys.length - 1];
+}
+
+function buildSeries(chain: Chain, far: FarSeries, method: FarMethod, excess: number): SeriesResult {
+  const distance: number[] = [];
+  const dilution: number[] = [];
+  const layerThickness: (number | null)[] = [];
+  const stage: string[] = [];
+  const n = 40;
+  for (let i = 0; i < n; i++) {
+    const r = (chain.end.distance * i) / n;
+    distance.push(r);
+    dilution.push(dilutionFromProfile(chain.profile, r));
+    layerThickness.push(null);
+    stage.push("jet");
+  }
+  const label = method === "passive-diffusion" ? "passive-diffusion" : "spreading-layer";
+  for (let i = 0; i < far.distance.length; i++) {
+    distance.push(far.distance[i]);
+    dilution.push(far.dilution[i]);
+    layerThickness.push(Number.isFinite(far.thickness[i]) ? far.thickness[i] : null);
+    stage.push(i === 0 ? "spreading-layer" : label);
+  }
+  return { distance, dilution, salinityIncrease: dilution.map((s) => excess / s), layerThickness, stage };
+}
+
+/**
+ * Seabed area where the dilution is below the required dilution, and its furthest extent. The seabed is
+ * covered from the impact point on; between impact and the near-field end the layer width grows linearly
+ * from zero to its start width (judgement). Radial widths are perimeters, so ∫w dr is an annular area.
+ */
+function footprintFromChain(chain: Chain, far: FarSeries, required: number): { area: number; furthestExtent: number } {
+  if (!(required > 1)) return { area: 0, furthestExtent: 0 };
+  const xs: number[] = [];
+  const ss: number[] = [];
+  const ws: number[] = [];
+  const xi = chain.impactDistance;
+  const xn = chain.end.distance;
+  const w0 = far.width[0];
+  const m = 50;
+  for (let i = 0; i < m && xn > xi; i++) {
+    const r = xi + ((xn - xi) * i) / m;
+    xs.push(r);
+    ss.push(dilutionFromProfile(chain.profile, r));
+    ws.push((w0 * (r - xi)) / (xn - xi));
+  }
+  for (let i = 0; i < far.distance.length; i++) {
+    xs.push(far.distance[i]);
+    ss.push(far.dilution[i]);
+    ws.push(far.width[i]);
+  }
+  let area = 0;
+  let extent = 0;
+  for (let i = 1; i < xs.length; i++) {
+    const a = ss[i - 1] < required;
+    const b = ss[i] < required;
+    if (!a && !b) continue;
+    let x1 = xs[i];
+    let w1 = ws[i];
+    if (a && !b) {
+      // Crossing inside the segment: cut it where the dilution reaches the required value.
+      const t = (required - ss[i - 1]) / (ss[i] - ss[i - 1]);
+      x1 = xs[i - 1] + t * (xs[i] - xs[i - 1]);
+      w1 = ws[i - 1] + t * (ws[i] - ws[i - 1]);
+    }
+    let x0 = xs[i - 1];
+    let w0s = ws[i - 1];
+    if (!a && b) {
+      const t = (required - ss[i - 1]) / (ss[i] - ss[i - 1]);
+      x0 = xs[i - 1] + t * (xs[i] - xs[i - 1]);
+      w0s = ws[i - 1] + t * (ws[i] - ws[i - 1]);
+    }
+    area += 0.5 * (w0s + w1) * (x1 - x0);
+    extent = Math.max(extent, x1);
+  }
+  if (ss.length && ss[0] < required) extent = Math.max(extent, xs[0]);
+  return { area, furthestExtent: extent };
+}

@@ -1,0 +1,268 @@
+/**
+ * Merging of neighbouring dense jets on a multiport diffuser (straight line or rosette risers).
+ *
+ * Criterion (geometric): neighbouring jets merge where the full jet width equals the spacing between
+ * their centrelines — "plumes begin to merge when the width of the individual plumes becomes equal to
+ * the spacing between the ports" (Davis, L.R., *Fundamentals of Environmental Discharge Modeling*, CRC
+ * Press 1999, chapter on Eulerian integral methods — statement CONFIRMED in the pages corpus at
+ * taylorfrancis.com/chapters/mono/10.1201/9780203755310-4; book details from memory). The published
+ * dense-jet threshold in s/(dF) (Abessi & Roberts 2014, J. Hydraulic Engineering 140(8)) is TO FILL on
+ * the reference sheet §5 and is therefore NOT used; s/(dF) is reported for comparison only.
+ *
+ * Jet width: 2 × the half-width of the integral path where a path exists; otherwise 2 × 0.127·s (Gaussian
+ * 1/e tracer half-width of a round jet, Fischer et al. 1979, from memory) along an estimated path length s.
+ * Regimes: jets still apart at impact → "independent" (factor 1); touching before maximum rise →
+ * "merged-line-source" (line-plume dilution, see line-plume.ts); in between → "partially-merged", where the
+ * reduction is scaled by the fraction of the descent travelled after merging (engineering judgement).
+ * The dilution factor never exceeds 1: merging can only reduce the single-jet dilution here.
+ */
+import type { Scenario } from "../scenario/types";
+import type { JetSource, NearFieldMethodResult } from "../nearfield/types";
+import type { MultiportResult } from "../result/contract";
+import { warning, type ResultWarning } from "../warnings";
+import { portCountFromDiffuser } from "./port-hydraulics";
+import { LINE_PLUME_SOURCE, linePlumeDilutionFromFlux, linePlumeDilutionFromFluxValidityIssues } from "./line-plume";
+
+export const MERGING_SOURCE =
+  "Geometric merging criterion (jet width = spacing; Davis 1999, confirmed statement) with line-plume " +
+  "limit (Fischer et al. 1979; Roberts et al. 1989, from memory)";
+const JET_TRACER_SPREAD = 0.127; // Fischer et al. (1979) b_c/x, from memory (reference sheet §3a)
+
+export interface MultiportInput {
+  readonly scenario: Scenario;
+  readonly jet: JetSource;
+  readonly nearField: readonly NearFieldMethodResult[];
+}
+
+export interface JetWidths {
+  readonly maxRiseDistance: number; // m, plan
+  readonly impactDistance: number; // m, plan
+  readonly widthAtMaxRise: number; // m, full width
+  readonly widthAtImpact: number; // m, full width
+  readonly fallHeight: number; // m, from max rise to seabed
+  readonly basis: string;
+}
+
+export interface MethodMerging {
+  readonly method: string;
+  readonly regime: string;
+  readonly factor: number;
+  readonly widths: JetWidths | null;
+  readonly spacingAtMaxRise: number;
+  readonly spacingAtImpact: number;
+  readonly lineDilution: number | null;
+}
+
+export interface MultiportAssessment {
+  readonly multiport: MultiportResult;
+  readonly nearField: NearFieldMethodResult[];
+  readonly perMethod: readonly MethodMerging[];
+  readonly warnings: ResultWarning[];
+}
+
+const degToRad = (deg: number) => (deg * Math.PI) / 180;
+
+/** Widths of one method's jet at maximum rise and at impact, from its path or from its length scales. */
+export function jetWidthsFromNearField(nf: NearFieldMethodResult, portHeight: number): JetWidths | null {
+  const path = nf.path;
+  if (path && path.length >= 2) {
+    let iTop = 0;
+    for (let i = 1; i < path.length; i++) if (path[i].z > path[iTop].z) iTop = i;
+    let iImp = path.length - 1;
+    for (let i = iTop; i < path.length; i++) {
+      if (path[i].z <= -portHeight) {
+        iImp = i;
+        break;
+      }
+    }
+    const top = path[iTop];
+    const imp = path[iImp];
+    return {
+      maxRiseDistance: Math.hypot(top.x, top.y),
+      impactDistance: Math.hypot(imp.x, imp.y),
+      widthAtMaxRise: 2 * top.halfWidth,
+      widthAtImpact: 2 * imp.halfWidth,
+      fallHeight: top.z + portHeight,
+      basis: `${nf.method} path half-widths`,
+    };
+  }
+  if (nf.maxRiseHeight === null) return null;
+  const xi = nf.impactDistance ?? nf.returnDistance;
+  const xm = nf.maxRiseDistance ?? (xi !== null ? 0.5 * xi : null);
+  if (xm === null) return null;
+  const zm = nf.maxRiseHeight;
+  const ximp = xi ?? 2 * xm;
+  const sTop = Math.hypot(xm, zm);
+  const sImp = sTop + Math.hypot(Math.max(0, ximp - xm), zm + portHeight);
+  return {
+    maxRiseDistance: xm,
+    impactDistance: ximp,
+    widthAtMaxRise: 2 * JET_TRACER_SPREAD * sTop,
+    widthAtImpact: 2 * JET_TRACER_SPREAD * sImp,
+    fallHeight: zm + portHeight,
+    basis: `${nf.method} length scales with round-jet spreading 0.127 s (Fischer et al. 1979, from memory)`,
+  };
+}
+
+/** Smallest angular gap between port azimuths on one riser, radians (2π for a single port). */
+function smallestAzimuthGap(azimuths: readonly number[]): number {
+  if (azimuths.length < 2) return 2 * Math.PI;
+  const a = azimuths.map((x) => ((x % 360) + 360) % 360).sort((p, q) => p - q);
+  let gap = 360 - a[a.length - 1] + a[0];
+  for (let i = 1; i < a.length; i++) gap = Math.min(gap, a[i] - a[i - 1]);
+  return degToRad(gap);
+}
+
+/** Distance between neighbouring jet centrelines at plan distance r from their port, m. */
+export function neighbourSpacingAtDistance(scenario: Scenario, r: number): number {
+  const d = scenario.diffuser;
+  if (portCountFromDiffuser(scenario) <= 1) return Infinity;
+  if (d.layout === "rosette" && d.risers) {
+    const rs = d.risers;
+    const gap = smallestAzimuthGap(rs.portAzimuths);
+    const within = rs.portsPerRiser > 1 ? 2 * r * Math.sin(Math.min(gap, Math.PI) / 2) : Infinity;
+    const between = rs.count > 1 ? rs.spacing : Infinity;
+    return Math.min(within, between);
+  }
+  // Straight diffuser: the spacing seen across the jets is the port spacing projected normal to the jets.
+  return d.portSpacing * Math.abs(Math.sin(degToRad(d.diffuserAzimuth - d.portAzimuth)));
+}
+
+/** Diffuser length over which a merged discharge spreads, m (see module header). */
+function mergedLineLength(scenario: Scenario, maxRiseDistance: number): number {
+  const d = scenario.diffuser;
+  const n = portCountFromDiffuser(scenario);
+  if (d.layout === "rosette" && d.risers) {
+    // A single riser whose jets merge forms a ring at the max-rise radius (engineering judgement).
+    return d.risers.count > 1 ? d.risers.count * d.risers.spacing : 2 * Math.PI * Math.max(maxRiseDistance, 1e-6);
+  }
+  return n * d.portSpacing; // each port serves one spacing of diffuser (common practice, no source)
+}
+
+function scaleMethod(nf: NearFieldMethodResult, factor: number, note: string): NearFieldMethodResult {
+  if (factor >= 1) return nf;
+  const s = (v: number | null | undefined) => (v === null || v === undefined ? (v ?? null) : Math.max(1, v * factor));
+  const path = nf.path;
+  let iTop = 0;
+  if (path) for (let i = 1; i < path.length; i++) if (path[i].z > path[iTop].z) iTop = i;
+  return {
+    ...nf,
+    impactDilution: s(nf.impactDilution),
+    nearFieldDilution: s(nf.nearFieldDilution),
+    dilutionRange: nf.dilutionRange
+      ? [Math.max(1, nf.dilutionRange[0] * factor), Math.max(1, nf.dilutionRange[1] * factor)]
+      : null,
+    entrainedFlow: nf.entrainedFlow === null ? null : nf.entrainedFlow * factor,
+    path: path?.map((p, i) => (i > iTop ? { ...p, dilution: Math.max(1, p.dilution * factor) } : p)),
+    notes: [...(nf.notes ?? []), note],
+  };
+}
+
+/**
+ * Decide whether neighbouring jets merge and reduce each near-field method's dilutions accordingly.
+ * The returned `nearField` holds the adjusted results (unchanged when the jets stay apart).
+ */
+export function multiportFromNearField(input: MultiportInput): MultiportAssessment {
+  const { scenario, jet, nearField } = input;
+  const n = portCountFromDiffuser(scenario);
+  const warnings: ResultWarning[] = [];
+  const dF = jet.diameter * jet.froude;
+  if (n <= 1) {
+    return {
+      multiport: {
+        regime: "single-port",
+        merged: false,
+        portsUsed: 1,
+        reason: "One port: no neighbouring jets.",
+        spacingRatio: null,
+        dilutionFactor: 1,
+        source: MERGING_SOURCE,
+      },
+      nearField: [...nearField],
+      perMethod: [],
+      warnings,
+    };
+  }
+  const perMethod: MethodMerging[] = [];
+  const adjusted: NearFieldMethodResult[] = [];
+  const ph = scenario.diffuser.portHeight;
+  for (const nf of nearField) {
+    const widths = jetWidthsFromNearField(nf, ph);
+    if (!widths || nf.impactDilution === null) {
+      perMethod.push({ method: nf.method, regime: "unknown", factor: 1, widths, spacingAtMaxRise: NaN, spacingAtImpact: NaN, lineDilution: null });
+      adjusted.push(nf);
+      continue;
+    }
+    const sTop = neighbourSpacingAtDistance(scenario, widths.maxRiseDistance);
+    const sImp = neighbourSpacingAtDistance(scenario, widths.impactDistance);
+    const length = mergedLineLength(scenario, widths.maxRiseDistance);
+    const q = scenario.discharge.flow / length;
+    const lineDilution = linePlumeDilutionFromFlux(q, jet.reducedGravity, widths.fallHeight);
+    warnings.push(...linePlumeDilutionFromFluxValidityIssues(q, jet.reducedGravity, widths.fallHeight));
+    const mergedFactor = Math.min(1, lineDilution / nf.impactDilution);
+    const rTop = widths.widthAtMaxRise / sTop;
+    const rImp = widths.widthAtImpact / sImp;
+    let regime: string;
+    let factor: number;
+    if (rImp <= 1) {
+      regime = "independent";
+      factor = 1;
+    } else if (rTop >= 1) {
+      regime = "merged-line-source";
+      factor = mergedFactor;
+    } else {
+      regime = "partially-merged";
+      const after = Math.min(1, Math.max(0, (rImp - 1) / (rImp - rTop)));
+      factor = 1 - after * (1 - mergedFactor);
+    }
+    perMethod.push({ method: nf.method, regime, factor, widths, spacingAtMaxRise: sTop, spacingAtImpact: sImp, lineDilution });
+    const note =
+      `Multiport ${regime}: dilutions after maximum rise multiplied by ${factor.toFixed(3)} ` +
+      `(line-plume dilution ${lineDilution.toFixed(1)} vs single-jet impact dilution ${nf.impactDilution.toFixed(1)}).`;
+    adjusted.push(scaleMethod(nf, factor, note));
+  }
+  const known = perMethod.filter((m) => m.regime !== "unknown");
+  const worst = known.reduce<MethodMerging | null>((w, m) => (w === null || m.factor < w.factor ? m : w), null);
+  const regimeRank = ["independent", "partially-merged", "merged-line-source"];
+  const regime = known.length
+    ? known.map((m) => m.regime).sort((a, b) => regimeRank.indexOf(b) - regimeRank.indexOf(a))[0]
+    : "unknown";
+  const spacing = scenario.diffuser.layout === "rosette" && scenario.diffuser.risers
+    ? scenario.diffuser.risers.spacing
+    : scenario.diffuser.portSpacing;
+  const parts = known.map(
+    (m) =>
+      `${m.method}: jet width ${m.widths!.widthAtMaxRise.toFixed(2)} m at max rise vs spacing ` +
+      `${fmt(m.spacingAtMaxRise)} m, ${m.widths!.widthAtImpact.toFixed(2)} m at impact vs ${fmt(m.spacingAtImpact)} m ` +
+      `→ ${m.regime}, factor ${m.factor.toFixed(3)}`,
+  );
+  if (!known.length) {
+    warnings.push(
+      warning("multiport-merging-unknown", "warning", "No near-field method gave jet widths; merging was not assessed.", {
+        stage: "multiport",
+      }),
+    );
+  }
+  const reason =
+    (parts.length ? parts.join("; ") + ". " : "Merging not assessed. ") +
+    `s/(dF) = ${dF > 0 && Number.isFinite(dF) ? (spacing / dF).toFixed(2) : "n/a"} reported for comparison only: the ` +
+    "published dense-jet threshold (Abessi & Roberts 2014) is not on file, so the geometric criterion was used.";
+  return {
+    multiport: {
+      regime,
+      merged: regime === "merged-line-source",
+      portsUsed: n,
+      reason,
+      spacingRatio: dF > 0 && Number.isFinite(dF) ? spacing / dF : null,
+      dilutionFactor: worst ? worst.factor : 1,
+      source: `${MERGING_SOURCE}; ${LINE_PLUME_SOURCE}`,
+    },
+    nearField: adjusted,
+    perMethod,
+    warnings,
+  };
+}
+
+function fmt(v: number): string {
+  return Number.isFinite(v) ? v.toFixed(2) : "∞";
+}
