@@ -12,15 +12,6 @@ import type { ConstituentInput, LimitInput, Scenario } from "../scenario/types";
 import type { ComplianceResult, ConstituentAtEdge, ConstituentCompliance } from "../result/contract";
 import { warning, type ResultWarning } from "../warnings";
 
-export interface RequiredDilution {
-  /** Dilution needed (≥ 1), or Infinity when the limit can never be met. */
-  readonly required: number;
-  /** Readable statement of the limit in absolute terms. */
-  readonly statement: string;
-  /** Why the limit can never be met, when `required` is Infinity. */
-  readonly impossible?: string;
-}
-
 /**
  * Dilution needed to bring a discharge concentration down to a limit.
  * @param discharge C_d, in the constituent's unit

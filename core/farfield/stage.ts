@@ -19,7 +19,7 @@ import type {
   SeriesResult,
 } from "../result/contract";
 import { warning, type ResultWarning } from "../warnings";
-import { GRAVITY, multiportFromNearField, MERGING_SOURCE, portCountFromDiffuser } from "../multiport";
+import { GRAVITY, multiportFromNearField, MERGING_SOURCE, portCountFromDiffuser, portFlowsAndHydraulics } from "../multiport";
 import { complianceFromEdgeDilution } from "../compliance/required-dilution";
 import { dilutionFromProfile, jetProfileFromNearField, nearFieldEndFromResult, type JetProfile } from "./jet-series";
 import { spreadingLayerFromNearFieldEnd, SPREADING_LAYER_SOURCE } from "./gravity-current";
@@ -82,6 +82,9 @@ export function beyondNearField(input: BeyondInput): BeyondOutput {
   const warnings: ResultWarning[] = [];
   const mp = multiportFromNearField({ scenario, jet, nearField: input.nearField });
   warnings.push(...mp.warnings);
+  // Per-port velocities under the flow split: warnings only (the mean port is in `input.port`).
+  const hydraulics = portFlowsAndHydraulics({ scenario, dischargeDensity: densities.discharge, ambientDensity: densities.ambient });
+  warnings.push(...hydraulics.warnings);
   const radius = scenario.mixingZone.radius;
   const u = Math.max(0, column.currentSpeed);
   const last = column.salinities.length - 1;

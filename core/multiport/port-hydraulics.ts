@@ -13,7 +13,7 @@ import type { Scenario } from "../scenario/types";
 import type { PortResult } from "../result/contract";
 import { warning, type ResultWarning } from "../warnings";
 
-export const GRAVITY = 9.81; // m/s², standard value used throughout (common practice)
+export const GRAVITY = 9.80665; // m/s², standard gravity (3rd CGPM, 1901)
 /** Kinematic viscosity of seawater near 20 °C, m²/s (handbook value, from memory). */
 export const SEAWATER_KINEMATIC_VISCOSITY = 1.05e-6;
 export const USUAL_EXIT_VELOCITY: readonly [number, number] = [2, 6];
