@@ -78,20 +78,21 @@ export function quantityToSI(raw: unknown, kind: QuantityKind): QuantityParse {
   if (text === "") return { ok: false, message: "is empty" };
   const plain = Number(text);
   if (Number.isFinite(plain)) return { ok: true, value: plain, converted: false };
-  if (!Number.isNaN(plain)) return { ok: false, message: `"${raw}" is not a finite number` };
+  if (!Number.isNaN(plain)) return { ok: false, message: "is not a finite number" };
   const target = QUANTITY_KINDS[kind].si;
   if (target === "") return { ok: false, message: "must be a plain number (no unit)" };
   let value: number;
   try {
     const u = math.unit(normaliseUnitText(text));
-    if (u.value === null || u.value === undefined) return { ok: false, message: `"${raw}" has no number` };
+    if (u.value === null || u.value === undefined) return { ok: false, message: "has a unit but no number" };
     value = u.toNumber(target);
   } catch (err) {
     const msg = err instanceof Error ? err.message : String(err);
-    if (/not found/i.test(msg)) return { ok: false, message: `"${raw}" has a unit Brinefield does not know (${msg.replace(/^.*Unit /, "unit ")})` };
-    return { ok: false, message: `"${raw}" is not a ${QUANTITY_KINDS[kind].label} (expected a unit convertible to ${unitSymbol(target)})` };
+    const unknown = /Unit "([^"]*)" not found/i.exec(msg);
+    if (unknown) return { ok: false, message: `has a unit Brinefield does not know ("${unknown[1]}")` };
+    return { ok: false, message: `is not a ${QUANTITY_KINDS[kind].label} (expected a unit convertible to ${unitSymbol(target)})` };
   }
-  if (!Number.isFinite(value)) return { ok: false, message: `"${raw}" is not a finite ${QUANTITY_KINDS[kind].label}` };
+  if (!Number.isFinite(value)) return { ok: false, message: `is not a finite ${QUANTITY_KINDS[kind].label}` };
   return { ok: true, value, converted: true, note: `${raw} → ${formatNumber(value)} ${unitSymbol(target)}` };
 }
 

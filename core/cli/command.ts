@@ -1,0 +1,39 @@
+/**
+ * The command-line adapter's plug-in shape. Each subcommand lives in core/cli/commands/<name>.ts and
+ * exports `command: CliCommand`. The adapter is the one part of core/ that touches Node; it reaches
+ * the file system and the terminal only through `CliIO`, so commands are unit-testable.
+ */
+export interface CliIO {
+  readonly cwd: string;
+  stdout(text: string): void;
+  stderr(text: string): void;
+  /** Reads a UTF-8 file; throws CliError with a readable message on failure. */
+  readFile(path: string): string;
+  /** Writes atomically (temporary file + rename). */
+  writeFile(path: string, data: string | Uint8Array): void;
+  /** True when stdout is an interactive terminal (progress bars only then). */
+  readonly isTTY: boolean;
+  /** Number of logical cores available for worker threads. */
+  readonly cores: number;
+}
+
+export interface CliCommand {
+  readonly name: string;
+  /** One line for the top-level help. */
+  readonly summary: string;
+  /** Full help text for `brinefield <name> --help`, every option explained. */
+  readonly help: string;
+  /** Returns the process exit code. Throws CliError for user errors (message only, no stack). */
+  run(argv: readonly string[], io: CliIO): Promise<number>;
+}
+
+/** An error whose message is shown to the user as-is, without a stack trace. */
+export class CliError extends Error {
+  constructor(
+    message: string,
+    readonly exitCode = 2,
+  ) {
+    super(message);
+    this.name = "CliError";
+  }
+}

@@ -1,0 +1,147 @@
+/** The plain-text screening summary printed by `brinefield run`. */
+import type { BrinefieldResult } from "../result/contract";
+import type { Scenario } from "../scenario/types";
+import type { NearFieldMethodResult } from "../nearfield/types";
+import { formatNumber as f } from "../units";
+
+const n = (v: number | null | undefined, unit = "", digits = 3): string =>
+  v === null || v === undefined || !Number.isFinite(v) ? "—" : `${f(v, digits)}${unit ? ` ${unit}` : ""}`;
+
+function wrap(text: string, width = 96, indent = ""): string {
+  const words = text.split(/\s+/);
+  const lines: string[] = [];
+  let line = indent;
+  for (const w of words) {
+    if (line.length + w.length + 1 > width && line.trim()) {
+      lines.push(line);
+      line = indent;
+    }
+    line += (line.trim() ? " " : "") + w;
+  }
+  if (line.trim()) lines.push(line);
+  return lines.join("\n");
+}
+
+function table(rows: string[][]): string {
+  const widths = rows[0]!.map((_, c) => Math.max(...rows.map((r) => (r[c] ?? "").length)));
+  return rows.map((r) => "  " + r.map((cell, c) => (c === 0 ? cell.padEnd(widths[c]!) : cell.padStart(widths[c]!))).join("   ")).join("\n");
+}
+
+export function summaryText(s: Scenario, r: BrinefieldResult): string {
+  const out: string[] = [];
+  const rule = "─".repeat(96);
+  out.push(rule, wrap(r.caution), rule, "");
+  out.push(`Brinefield ${r.program.version} — screening summary: ${r.scenarioName}   (inputs ${r.inputsHash})`, "");
+
+  out.push("Inputs (SI)");
+  const d = s.diffuser;
+  const a = s.ambient;
+  const top = a.profile[0]!;
+  const bottom = a.profile[a.profile.length - 1]!;
+  out.push(
+    table([
+      ["Brine flow", n(s.discharge.flow, "m³/s", 4) + (s.plant ? "  (from plant mass balance)" : "")],
+      ["Brine salinity / temperature", `${n(s.discharge.salinity, "g/kg")} / ${n(s.discharge.temperature, "°C")}`],
+      ["Water depth", n(a.depth, "m")],
+      [
+        "Ambient salinity / temperature",
+        a.uniform
+          ? `${n(top.salinity, "g/kg")} / ${n(top.temperature, "°C")} (uniform)`
+          : `${n(top.salinity, "g/kg")} / ${n(top.temperature, "°C")} at surface, ${n(bottom.salinity, "g/kg")} / ${n(bottom.temperature, "°C")} at ${n(bottom.depth, "m")}`,
+      ],
+      ["Current", a.currentSpeed > 0 ? `${n(a.currentSpeed, "m/s")} toward ${n(a.currentDirection, "°")} from north` : "none (stagnant)"],
+      [
+        "Diffuser",
+        `${d.layout}, ${d.portCount} port${d.portCount > 1 ? "s" : ""} of ${n(d.portDiameter, "m")}${d.portCount > 1 && d.layout === "line" ? ` at ${n(d.portSpacing, "m")} spacing` : ""}`,
+      ],
+      ["Port angle / height / azimuth", `${n(d.portAngle, "°")} / ${n(d.portHeight, "m")} / ${n(d.portAzimuth, "°")}`],
+      ["Mixing-zone radius", n(s.mixingZone.radius, "m")],
+    ]),
+  );
+  if (r.conversions.length) {
+    out.push("", "Conversions applied");
+    for (const c of r.conversions) out.push(wrap(`- ${c}`, 96, "  "));
+  }
+
+  out.push("", "Densities and port (" + r.densities.equationOfState.name + ")");
+  out.push(
+    table([
+      ["Brine density at the port", n(r.densities.discharge, "kg/m³", 7)],
+      ["Ambient density at the port", n(r.densities.ambient, "kg/m³", 7)],
+      ["Reduced gravity g′", n(r.densities.reducedGravity, "m/s²", 4)],
+      ["Flow per port", n(r.port.flow, "m³/s", 4)],
+      ["Port exit velocity", n(r.port.velocity, "m/s")],
+      ["Densimetric Froude number F", n(r.port.froude, "")],
+      ["Port Reynolds number", n(r.port.reynolds, "", 3)],
+    ]),
+  );
+  out.push(wrap(`Equation of state: ${r.densities.equationOfState.reason}`, 96, "  "));
+
+  if (r.nearField.length) {
+    out.push("", "Near field, per port (centreline dilutions; distances in plan from the port)");
+    const m = r.nearField;
+    const row = (label: string, pick: (x: NearFieldMethodResult) => string) => [label, ...m.map(pick)];
+    const ratio = (pick: (x: NearFieldMethodResult) => number | null | undefined): string => {
+      const a0 = pick(m[0]!);
+      const a1 = m[1] ? pick(m[1]) : null;
+      return a0 && a1 ? f(a1 / a0, 3) : "—";
+    };
+    out.push(
+      table([
+        ["", ...m.map((x) => x.method), ...(m.length === 2 ? [`${m[1]!.method}/${m[0]!.method}`] : [])],
+        [...row("Max rise of upper edge", (x) => n(x.maxRiseHeight, "m")), ratio((x) => x.maxRiseHeight)],
+        [...row("Distance to max rise", (x) => n(x.maxRiseDistance, "m")), ratio((x) => x.maxRiseDistance)],
+        [...row("Return to port level", (x) => n(x.returnDistance, "m")), ratio((x) => x.returnDistance)],
+        [...row("Seabed impact", (x) => n(x.impactDistance, "m")), ratio((x) => x.impactDistance)],
+        [...row("Impact dilution", (x) => n(x.impactDilution)), ratio((x) => x.impactDilution)],
+        [...row("Impact dilution range", (x) => (x.dilutionRange ? `${f(x.dilutionRange[0], 3)}–${f(x.dilutionRange[1], 3)}` : "—")), ""],
+        [...row("Near-field end", (x) => n(x.nearFieldDistance, "m")), ratio((x) => x.nearFieldDistance)],
+        [...row("Near-field dilution", (x) => n(x.nearFieldDilution)), ratio((x) => x.nearFieldDilution)],
+        [...row("Entrained seawater flow", (x) => n(x.entrainedFlow, "m³/s")), ratio((x) => x.entrainedFlow)],
+      ]),
+    );
+    for (const x of m) {
+      out.push(wrap(`${x.method}: ${x.source}`, 96, "  "));
+      if (x.bias) out.push(wrap(`Known bias: ${x.bias}`, 96, "    "));
+      for (const note of x.notes ?? []) out.push(wrap(`Note: ${note}`, 96, "    "));
+    }
+  }
+
+  if (r.multiport) {
+    out.push("", `Multiport: ${r.multiport.regime}${r.multiport.merged ? " (merged)" : ""} — ${r.multiport.reason}`);
+  }
+  if (r.mixingZone) {
+    const z = r.mixingZone;
+    out.push("", `Mixing-zone edge at ${n(z.radius, "m")}: dilution ${n(z.dilution)} (${z.method}; near field from ${z.nearFieldMethod})`);
+    if (z.edgeInsideNearField) out.push("  The edge lies inside the near field: the jet's own dilution where it crosses the edge is used.");
+    for (const alt of z.alternatives) out.push(`  alternative: ${alt.method} → dilution ${n(alt.dilution)}`);
+    out.push(
+      table([
+        ["Constituent", "discharge", "background", "at edge", "increase"],
+        ...z.constituents.map((c) => [c.constituent, `${n(c.discharge)} ${c.unit}`, `${n(c.background)} ${c.unit}`, `${n(c.concentration)} ${c.unit}`, `${n(c.increase)} ${c.unit}`]),
+      ]),
+    );
+    if (z.layerThickness !== null) out.push(`  Dense-layer thickness at the edge: ${n(z.layerThickness, "m")}`);
+    out.push(`  Seabed footprint above the governing limit: ${n(z.footprint.area, "m²")}, furthest ${n(z.footprint.furthestExtent, "m")}`);
+  }
+  if (r.compliance) {
+    const c = r.compliance;
+    out.push("", `Compliance at the mixing-zone edge — governing: ${c.governingConstituent}: ${c.pass ? "MEETS" : "DOES NOT MEET"} the limit (margin ${n(c.margin)})`);
+    out.push(
+      table([
+        ["Constituent", "limit", "required dilution", "edge dilution", "margin", "verdict"],
+        ...c.constituents.map((x) => [x.constituent, x.limit, n(x.requiredDilution), n(x.edgeDilution), n(x.margin), x.pass ? "meets" : "does not meet"]),
+      ]),
+    );
+  }
+  if (r.warnings.length) {
+    out.push("", `Warnings (${r.warnings.length})`);
+    for (const w of r.warnings) out.push(wrap(`[${w.severity}] ${w.message}${w.source ? ` (${w.source})` : ""}`, 96, "  "));
+  }
+  if (r.mixingZone?.notModelled.length) {
+    out.push("", "Not modelled");
+    for (const x of r.mixingZone.notModelled) out.push(wrap(`- ${x}`, 96, "  "));
+  }
+  out.push("", rule, wrap(r.caution), rule);
+  return out.join("\n") + "\n";
+}

@@ -1,0 +1,138 @@
+/**
+ * The one pipeline every caller uses (CLI, app worker, report, studies, Monte Carlo):
+ * scenario → properties → port → near field (both methods, side by side) → multiport, spreading layer,
+ * mixing-zone edge → compliance → a plain, serialisable `BrinefieldResult`. Each stage is a pure function
+ * of the ones before; nothing reaches back.
+ */
+import type { Scenario } from "./scenario/types";
+import { ScenarioError } from "./scenario/parse";
+import { issue } from "./scenario/normalise";
+import { inputsHash } from "./scenario/hash";
+import { propertiesFromScenario, type PropertiesStage } from "./properties";
+import type { JetSource, NearFieldMethodResult, PathSink } from "./nearfield/types";
+import { nearFieldLengthScale } from "./nearfield/lengthScale";
+import { nearFieldIntegral } from "./nearfield/integral";
+import { jetSourceWarnings } from "./nearfield/sourceChecks";
+import { beyondNearField } from "./farfield/stage";
+import { viscosityFromST, SHARQAWY_2010_VISCOSITY_SOURCE } from "./correlations/sharqawy-2010-viscosity";
+import { CAUTION, RESULT_FORMAT, RESULT_VERSION, type BrinefieldResult, type PortResult } from "./result/contract";
+import type { ResultWarning } from "./warnings";
+import { BRINEFIELD_VERSION } from "./version";
+import { formatNumber } from "./units";
+
+export interface RunOptions {
+  /** Include the integral model's path in the result (default true; Monte Carlo turns it off). */
+  readonly includePath?: boolean;
+  /** Receives every accepted integration step of the integral model (charts, 3D buffers, CSV). */
+  readonly sink?: PathSink;
+}
+
+/** Port flows, velocity, Froude and Reynolds numbers for the mean port of the diffuser. */
+export function portFromScenario(scenario: Scenario, props: PropertiesStage): PortResult {
+  const d = scenario.diffuser;
+  const flows = d.flowSplit.map((f) => f * scenario.discharge.flow);
+  const flow = scenario.discharge.flow / d.portCount;
+  const area = (Math.PI * d.portDiameter * d.portDiameter) / 4;
+  const velocity = flow / area;
+  const gp = props.reducedGravity;
+  // Guard: a non-positive reduced gravity has no densimetric Froude number (rejected by runScenario).
+  const froude = gp > 0 ? velocity / Math.sqrt(gp * d.portDiameter) : Number.POSITIVE_INFINITY;
+  const nu = viscosityFromST(scenario.discharge.salinity, scenario.discharge.temperature) / props.dischargeDensity;
+  const reynolds = (velocity * d.portDiameter) / nu;
+  // Exit loss of a free jet: one velocity head (U²/2g) at the contracted section, with the orifice
+  // discharge coefficient when given, h = (q/(Cd·A))²/(2g) (standard orifice hydraulics, common practice).
+  const cd = d.dischargeCoefficient;
+  const nominalArea = (Math.PI * d.portDiameterNominal * d.portDiameterNominal) / 4;
+  const headLoss = cd ? Math.pow(flow / (cd * nominalArea), 2) / (2 * 9.80665) : null;
+  return { count: d.portCount, diameter: d.portDiameter, flow, flows, velocity, froude, reynolds, headLoss };
+}
+
+/** Builds the jet of the mean port. */
+export function jetFromScenario(scenario: Scenario, props: PropertiesStage, port: PortResult): JetSource {
+  const d = scenario.diffuser;
+  return {
+    diameter: d.portDiameter,
+    flow: port.flow,
+    velocity: port.velocity,
+    density: props.dischargeDensity,
+    salinity: scenario.discharge.salinity,
+    temperature: scenario.discharge.temperature,
+    angle: d.portAngle,
+    azimuth: d.portAzimuth,
+    portHeight: d.portHeight,
+    reducedGravity: props.reducedGravity,
+    froude: port.froude,
+  };
+}
+
+function dedupe(ws: readonly ResultWarning[]): ResultWarning[] {
+  const seen = new Set<string>();
+  const out: ResultWarning[] = [];
+  for (const w of ws) {
+    const k = `${w.code}|${w.message}`;
+    if (!seen.has(k)) {
+      seen.add(k);
+      out.push(w);
+    }
+  }
+  return out;
+}
+
+/**
+ * Runs the whole screening chain for one scenario and its stated ambient (ambient cases are the
+ * studies' business). Throws ScenarioError only for inputs outside Brinefield's scope (a discharge
+ * lighter than the sea); everything else comes back as warnings.
+ */
+export function runScenario(scenario: Scenario, options: RunOptions = {}): BrinefieldResult {
+  const props = propertiesFromScenario(scenario);
+  if (!(props.reducedGravity > 0)) {
+    throw new ScenarioError([
+      issue(
+        scenario.plant ? "plant" : "discharge.salinity",
+        `${formatNumber(props.dischargeDensity, 7)} kg/m³`,
+        `makes the discharge no denser than the sea at the port (${formatNumber(props.ambientDensityAtPort, 7)} kg/m³): it would rise as a buoyant plume, which is outside this version's dense-jet scope. Brinefield screens brines denser than the receiving water only.`,
+      ),
+    ]);
+  }
+  const port = portFromScenario(scenario, props);
+  const jet = jetFromScenario(scenario, props, port);
+  const lengthScale = nearFieldLengthScale(jet, props.column);
+  const integral = nearFieldIntegral(jet, props.column, { includePath: options.includePath ?? true, sink: options.sink });
+  const nearField: NearFieldMethodResult[] = [lengthScale, integral];
+  const beyond = beyondNearField({ scenario, jet, column: props.column, nearField, densities: props.densities, port });
+  const sourceWarnings = jetSourceWarnings(jet, props.column);
+  const warnings = dedupe([
+    ...props.warnings,
+    ...sourceWarnings,
+    ...beyond.nearField.flatMap((m) => m.warnings),
+    ...beyond.warnings,
+  ]);
+  return {
+    format: RESULT_FORMAT,
+    version: RESULT_VERSION,
+    program: { name: "brinefield", version: BRINEFIELD_VERSION },
+    inputsHash: inputsHash(scenario),
+    scenarioName: scenario.name,
+    caution: CAUTION,
+    conversions: scenario.conversions,
+    discharge: {
+      flow: scenario.discharge.flow,
+      salinity: scenario.discharge.salinity,
+      temperature: scenario.discharge.temperature,
+      fromPlant: scenario.plant !== undefined,
+    },
+    densities: props.densities,
+    port,
+    nearField: beyond.nearField,
+    multiport: beyond.multiport,
+    mixingZone: beyond.mixingZone,
+    compliance: beyond.compliance,
+    warnings,
+    methods: [
+      { stage: "properties", name: props.eos.info.name, source: props.eos.info.source },
+      { stage: "port", name: "Seawater viscosity for the Reynolds number", source: SHARQAWY_2010_VISCOSITY_SOURCE },
+      ...beyond.nearField.map((m) => ({ stage: "near field", name: m.method, source: m.source })),
+      ...beyond.methods,
+    ],
+  };
+}

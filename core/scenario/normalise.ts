@@ -1,0 +1,425 @@
+/**
+ * From the schema-checked file to the frozen, normalised `Scenario`: plant mass balance, salinity bases
+ * (psu, TDS) to Absolute Salinity, uniform ambient to a two-point profile, defaults, cross-field rules.
+ * Every problem is reported as an issue with the path, the value given and what is expected.
+ */
+import { create, unitDependencies, createUnitDependencies } from "mathjs";
+import type {
+  AmbientCase,
+  AmbientInput,
+  ConstituentInput,
+  DiffuserInput,
+  LimitInput,
+  ProfilePoint,
+  Scenario,
+  UncertainInput,
+} from "./types";
+import type { SalinityValue, ScenarioFileParsed } from "./schema";
+import { brineFromPlant } from "./plant";
+import { absoluteSalinityFromPractical, salinityFromTds } from "../properties";
+import { formatNumber } from "../units";
+
+const math = create({ unitDependencies, createUnitDependencies });
+
+export interface ScenarioIssue {
+  /** Dotted path in the scenario file, e.g. "diffuser.portDiameter" or "ambient.profile.2.depth". */
+  readonly path: string;
+  /** Full readable message: `path: "value" what is expected`. */
+  readonly message: string;
+  readonly value?: unknown;
+}
+
+export function issue(path: string, value: unknown, expectation: string): ScenarioIssue {
+  const shown =
+    value === undefined
+      ? "is missing;"
+      : typeof value === "number" && !Number.isFinite(value)
+        ? String(value)
+        : `${(JSON.stringify(value) ?? String(value)).slice(0, 80)}`;
+  return { path, value, message: `${path || "(file)"}: ${shown} ${expectation}` };
+}
+
+/** Default salt rejection of seawater RO membranes when not given (common practice, no source). */
+export const DEFAULT_SALT_REJECTION = 0.997;
+
+type Ctx = { issues: ScenarioIssue[]; conversions: string[] };
+
+function resolveSalinity(s: SalinityValue, temperature: number, path: string, ctx: Ctx): number {
+  if (s.basis === "absolute") return s.value;
+  if (s.basis === "practical") {
+    const sa = absoluteSalinityFromPractical(s.value);
+    ctx.conversions.push(
+      `${path}: ${String(s.raw)} practical salinity → ${formatNumber(sa)} g/kg Absolute Salinity (TEOS-10 reference-composition factor 35.16504/35)`,
+    );
+    return sa;
+  }
+  const sa = salinityFromTds(s.value, temperature, 0);
+  ctx.conversions.push(
+    `${path}: ${String(s.raw)} total dissolved solids → ${formatNumber(sa)} g/kg (divided by the solution's density at ${formatNumber(temperature)} °C, atmospheric pressure)`,
+  );
+  return sa;
+}
+
+interface RawAmbientLike {
+  depth?: number;
+  salinity?: SalinityValue;
+  temperature?: number;
+  profile?: { depth: number; salinity: SalinityValue; temperature: number }[];
+  currentSpeed?: number;
+  currentDirection?: number;
+}
+
+function buildProfile(a: RawAmbientLike, depth: number, path: string, ctx: Ctx): { profile: ProfilePoint[]; uniform: boolean } | null {
+  if (a.profile && (a.salinity !== undefined || a.temperature !== undefined)) {
+    ctx.issues.push(issue(`${path}.profile`, "(profile and uniform values)", "give either a profile or uniform salinity and temperature, not both"));
+    return null;
+  }
+  if (a.profile) {
+    const pts = a.profile.map((p, i) => ({
+      depth: p.depth,
+      temperature: p.temperature,
+      salinity: resolveSalinity(p.salinity, p.temperature, `${path}.profile.${i}.salinity`, ctx),
+    }));
+    pts.sort((p, q) => p.depth - q.depth);
+    for (let i = 1; i < pts.length; i++) {
+      if (pts[i]!.depth === pts[i - 1]!.depth) {
+        ctx.issues.push(issue(`${path}.profile`, pts[i]!.depth, "lists the same depth twice; each depth once"));
+        return null;
+      }
+    }
+    if (pts[0]!.depth > 0) {
+      ctx.conversions.push(`${path}.profile: extended from ${formatNumber(pts[0]!.depth)} m up to the surface with the shallowest point's values`);
+      pts.unshift({ ...pts[0]!, depth: 0 });
+    }
+    const last = pts[pts.length - 1]!;
+    if (last.depth < depth) {
+      ctx.conversions.push(`${path}.profile: extended from ${formatNumber(last.depth)} m down to the seabed at ${formatNumber(depth)} m with the deepest point's values`);
+      pts.push({ ...last, depth });
+    }
+    return { profile: pts, uniform: pts.every((p) => p.salinity === pts[0]!.salinity && p.temperature === pts[0]!.temperature) };
+  }
+  if (a.salinity === undefined) {
+    ctx.issues.push(issue(`${path}.salinity`, undefined, "expected the ambient salinity (g/kg) or a profile"));
+    return null;
+  }
+  if (a.temperature === undefined) {
+    ctx.issues.push(issue(`${path}.temperature`, undefined, "expected the ambient temperature (°C) or a profile"));
+    return null;
+  }
+  const s = resolveSalinity(a.salinity, a.temperature, `${path}.salinity`, ctx);
+  return {
+    profile: [
+      { depth: 0, salinity: s, temperature: a.temperature },
+      { depth, salinity: s, temperature: a.temperature },
+    ],
+    uniform: true,
+  };
+}
+
+function parseLimitValue(
+  raw: number | string | undefined,
+  constituent: string,
+  unit: string,
+  isIncrease: boolean,
+  path: string,
+  ctx: Ctx,
+): number | undefined {
+  if (raw === undefined) return undefined;
+  if (typeof raw === "number") {
+    if (!Number.isFinite(raw) || raw < (isIncrease ? 0 : -1e9) || Math.abs(raw) > 1e9) {
+      ctx.issues.push(issue(path, raw, isIncrease ? "must be a non-negative increase" : "must be a finite concentration"));
+      return undefined;
+    }
+    if (isIncrease && raw === 0) {
+      ctx.issues.push(issue(path, raw, "must be a positive increase (a zero increase can never be met)"));
+      return undefined;
+    }
+    return raw;
+  }
+  const m = /^\s*([-+]?(?:\d+\.?\d*|\.\d+)(?:e[-+]?\d+)?)\s*(.*)$/i.exec(raw);
+  if (!m) {
+    ctx.issues.push(issue(path, raw, `must be a number with an optional unit (in ${unit})`));
+    return undefined;
+  }
+  const value = Number(m[1]);
+  const u = m[2]!.trim();
+  if (u === "" || u === unit) return value;
+  const key = constituent.toLowerCase();
+  if (key === "salinity" && /^(psu|pss)$/i.test(u)) return isIncrease ? absoluteSalinityFromPractical(value) : absoluteSalinityFromPractical(value);
+  if (key === "salinity" && /^(g\/kg|ppt|‰)$/i.test(u)) return value;
+  if (key === "temperature" && isIncrease) {
+    // A temperature increase is a difference: 1 °F of difference is 5/9 K (exact).
+    if (/^(degF|°F|F)$/i.test(u)) return (value * 5) / 9;
+    if (/^(degC|°C|C|K)$/i.test(u)) return value;
+  }
+  try {
+    const target = key === "temperature" ? "degC" : unit;
+    const converted = math.unit(value, u).toNumber(target);
+    if (Number.isFinite(converted)) {
+      ctx.conversions.push(`${path}: ${raw} → ${formatNumber(converted)} ${target}`);
+      return converted;
+    }
+  } catch {
+    // fall through to the message below
+  }
+  ctx.issues.push(issue(path, raw, `has a unit that cannot be converted to the constituent's unit (${unit})`));
+  return undefined;
+}
+
+function num(v: number | undefined, fallback: number): number {
+  return v === undefined ? fallback : v;
+}
+
+export function normaliseScenario(f: ScenarioFileParsed): { scenario: Scenario | null; issues: ScenarioIssue[] } {
+  const ctx: Ctx = { issues: [], conversions: [] };
+  const d = f.discharge ?? {};
+
+  // --- discharge or plant -------------------------------------------------------------------------------
+  let flow = Number.NaN;
+  let salinity = Number.NaN;
+  let temperature = Number.NaN;
+  let plantOut: Scenario["plant"];
+  if (f.plant) {
+    if (d.flow !== undefined || d.salinity !== undefined) {
+      ctx.issues.push(issue("plant", "(plant and discharge.flow/salinity)", "give either plant (to compute the brine) or discharge.flow and discharge.salinity, not both"));
+    } else {
+      const p = f.plant;
+      const brineT = d.temperature ?? p.feedTemperature;
+      if (brineT === undefined) {
+        ctx.issues.push(issue("discharge.temperature", undefined, "expected the brine temperature (°C), or plant.feedTemperature"));
+      } else {
+        const feedS = resolveSalinity(p.feedSalinity, p.feedTemperature ?? brineT, "plant.feedSalinity", ctx);
+        const blending = (p.blending ?? []).map((b, i) => ({
+          name: b.name,
+          flow: b.flow,
+          temperature: b.temperature,
+          salinity: resolveSalinity(b.salinity, b.temperature, `plant.blending.${i}.salinity`, ctx),
+        }));
+        const rej = p.saltRejection ?? DEFAULT_SALT_REJECTION;
+        const bal = brineFromPlant({ productFlow: p.productFlow, recovery: p.recovery, feedSalinity: feedS, saltRejection: rej, brineTemperature: brineT, blending });
+        flow = bal.dischargeFlow;
+        salinity = bal.dischargeSalinity;
+        temperature = bal.dischargeTemperature;
+        ctx.conversions.push(
+          `plant: product ${formatNumber(p.productFlow)} m³/s at recovery ${formatNumber(p.recovery)} and salt rejection ${formatNumber(rej)}${p.saltRejection === undefined ? " (default)" : ""} → brine ${formatNumber(bal.brineFlow)} m³/s at ${formatNumber(bal.brineSalinity)} g/kg (${formatNumber(bal.concentrationFactor, 3)}× the feed)` +
+            (blending.length ? `; after blending ${blending.length} stream(s): ${formatNumber(flow)} m³/s at ${formatNumber(salinity)} g/kg, ${formatNumber(temperature)} °C` : ""),
+        );
+        plantOut = { productFlow: p.productFlow, recovery: p.recovery, feedSalinity: feedS, saltRejection: rej, feedTemperature: p.feedTemperature, blending };
+      }
+    }
+  } else {
+    if (d.flow === undefined) ctx.issues.push(issue("discharge.flow", undefined, "expected the total brine flow (m³/s, e.g. 0.5 or \"12 MGD\"), or a plant section"));
+    if (d.salinity === undefined) ctx.issues.push(issue("discharge.salinity", undefined, "expected the brine salinity (g/kg), or a plant section"));
+    if (d.temperature === undefined) ctx.issues.push(issue("discharge.temperature", undefined, "expected the brine temperature (°C)"));
+    if (d.flow !== undefined && d.salinity !== undefined && d.temperature !== undefined) {
+      flow = d.flow;
+      temperature = d.temperature;
+      salinity = resolveSalinity(d.salinity, d.temperature, "discharge.salinity", ctx);
+    }
+  }
+
+  const constituents: ConstituentInput[] = (d.constituents ?? []).map((c) => ({
+    name: c.name,
+    concentration: c.concentration,
+    unit: c.unit,
+    background: c.background ?? 0,
+  }));
+  const names = new Set<string>();
+  constituents.forEach((c, i) => {
+    const k = c.name.toLowerCase();
+    if (k === "salinity" || k === "temperature") ctx.issues.push(issue(`discharge.constituents.${i}.name`, c.name, "is implicit: salinity and temperature come from the discharge and ambient; use another name"));
+    if (names.has(k)) ctx.issues.push(issue(`discharge.constituents.${i}.name`, c.name, "is listed twice"));
+    names.add(k);
+  });
+
+  // --- ambient ------------------------------------------------------------------------------------------
+  const a = f.ambient;
+  const depth = a.depth;
+  const prof = buildProfile(a as RawAmbientLike, depth, "ambient", ctx);
+  const ambient: AmbientInput | null = prof && {
+    depth,
+    profile: prof.profile,
+    uniform: prof.uniform,
+    currentSpeed: num(a.currentSpeed, 0),
+    currentDirection: num(a.currentDirection, 0),
+    bedSlope: num(a.bedSlope, 0),
+    bedSlopeAzimuth: num(a.bedSlopeAzimuth, 0),
+  };
+
+  const ambientCases: AmbientCase[] = [];
+  (f.ambientCases ?? []).forEach((c, i) => {
+    if (!ambient) return;
+    const cd = c.depth ?? ambient.depth;
+    const hasOwnWater = c.profile !== undefined || c.salinity !== undefined || c.temperature !== undefined;
+    let profile = ambient.profile.map((p) => ({ ...p }));
+    let uniform = ambient.uniform;
+    if (hasOwnWater) {
+      const base = ambient.profile[0]!;
+      const own: RawAmbientLike = c.profile
+        ? { profile: c.profile }
+        : {
+            salinity: c.salinity ?? { basis: "absolute", value: base.salinity, raw: base.salinity },
+            temperature: c.temperature ?? base.temperature,
+          };
+      const pr = buildProfile(own, cd, `ambientCases.${i}`, ctx);
+      if (!pr) return;
+      profile = pr.profile;
+      uniform = pr.uniform;
+    } else if (cd !== ambient.depth) {
+      const last = profile[profile.length - 1]!;
+      if (last.depth < cd) profile.push({ ...last, depth: cd });
+    }
+    ambientCases.push({
+      ...ambient,
+      name: c.name,
+      weight: c.weight ?? 1,
+      depth: cd,
+      profile,
+      uniform,
+      currentSpeed: c.currentSpeed ?? ambient.currentSpeed,
+      currentDirection: c.currentDirection ?? ambient.currentDirection,
+    });
+  });
+
+  // --- diffuser -----------------------------------------------------------------------------------------
+  const g = f.diffuser;
+  let portCount = g.portCount ?? 1;
+  const layout = g.layout ?? (g.risers ? "rosette" : portCount > 1 ? "line" : "single");
+  if (layout === "rosette") {
+    if (!g.risers) ctx.issues.push(issue("diffuser.risers", undefined, "expected {count, portsPerRiser, spacing} for a rosette diffuser"));
+    else {
+      const n = g.risers.count * g.risers.portsPerRiser;
+      if (g.portCount !== undefined && g.portCount !== n)
+        ctx.issues.push(issue("diffuser.portCount", g.portCount, `must equal risers.count × risers.portsPerRiser = ${n} (or be left out)`));
+      portCount = n;
+      if (g.risers.count > 1 && g.risers.spacing === undefined) ctx.issues.push(issue("diffuser.risers.spacing", undefined, "expected the spacing between risers (m)"));
+      if (g.risers.portAzimuths && g.risers.portAzimuths.length !== g.risers.portsPerRiser)
+        ctx.issues.push(issue("diffuser.risers.portAzimuths", g.risers.portAzimuths, `must list ${g.risers.portsPerRiser} azimuths, one per port on a riser`));
+    }
+  }
+  if (layout === "single" && portCount !== 1) ctx.issues.push(issue("diffuser.portCount", portCount, 'must be 1 for layout "single" (use "line" or "rosette" for more ports)'));
+  if (layout === "line" && portCount > 1 && g.portSpacing === undefined)
+    ctx.issues.push(issue("diffuser.portSpacing", undefined, "expected the spacing between ports (m) for a diffuser with more than one port"));
+  const portSpacing = g.portSpacing ?? 0;
+  const portAzimuth = g.portAzimuth ?? 0;
+  // Ports usually point across the diffuser axis (common practice, no source): default axis ⟂ port azimuth.
+  const diffuserAzimuth = g.diffuserAzimuth ?? (portAzimuth + 90) % 360;
+  const riserSpacing = g.risers?.spacing ?? 0;
+  const naturalLength =
+    layout === "rosette" ? Math.max(0, ((g.risers?.count ?? 1) - 1) * riserSpacing) : Math.max(0, (portCount - 1) * portSpacing);
+  const length = g.length ?? naturalLength;
+  if (g.length !== undefined && g.length + 1e-9 < naturalLength)
+    ctx.issues.push(issue("diffuser.length", g.length, `must be at least the port layout's length ${formatNumber(naturalLength)} m`));
+  let flowSplit: number[];
+  if (g.flowSplit) {
+    const sum = g.flowSplit.reduce((s, v) => s + v, 0);
+    if (g.flowSplit.length !== portCount) {
+      ctx.issues.push(issue("diffuser.flowSplit", `${g.flowSplit.length} values`, `must list one share per port (${portCount})`));
+      flowSplit = [];
+    } else if (!(sum > 0) || g.flowSplit.some((v) => v <= 0)) {
+      ctx.issues.push(issue("diffuser.flowSplit", g.flowSplit.slice(0, 5), "must list positive shares (any scale; they are normalised)"));
+      flowSplit = [];
+    } else flowSplit = g.flowSplit.map((v) => v / sum);
+  } else flowSplit = new Array<number>(portCount).fill(1 / portCount);
+  const contraction = g.contraction ?? 1;
+  const effectiveDiameter = g.portDiameter * Math.sqrt(contraction);
+  if (contraction !== 1)
+    ctx.conversions.push(
+      `diffuser.portDiameter: vena-contracta contraction ${formatNumber(contraction)} applied to the area → effective diameter ${formatNumber(effectiveDiameter)} m`,
+    );
+  if (g.portHeight + g.portDiameter / 2 >= depth)
+    ctx.issues.push(issue("diffuser.portHeight", g.portHeight, `must leave the port below the surface: water depth is ${formatNumber(depth)} m`));
+  const riserAzimuths =
+    g.risers && (g.risers.portAzimuths ?? Array.from({ length: g.risers.portsPerRiser }, (_, k) => (portAzimuth + (360 * k) / g.risers!.portsPerRiser) % 360));
+
+  const diffuser: DiffuserInput = {
+    layout,
+    portCount,
+    portDiameter: effectiveDiameter,
+    portDiameterNominal: g.portDiameter,
+    contraction,
+    portAngle: g.portAngle,
+    portHeight: g.portHeight,
+    portSpacing,
+    portAzimuth,
+    diffuserAzimuth,
+    length,
+    flowSplit,
+    dischargeCoefficient: g.dischargeCoefficient,
+    risers: g.risers && {
+      count: g.risers.count,
+      portsPerRiser: g.risers.portsPerRiser,
+      spacing: riserSpacing,
+      portAzimuths: riserAzimuths ?? [],
+    },
+  };
+
+  // --- limits -------------------------------------------------------------------------------------------
+  const limits: LimitInput[] = [];
+  f.mixingZone.limits.forEach((l, i) => {
+    const path = `mixingZone.limits.${i}`;
+    const key = l.constituent.toLowerCase();
+    const c = constituents.find((x) => x.name.toLowerCase() === key);
+    if (key !== "salinity" && key !== "temperature" && !c) {
+      ctx.issues.push(issue(`${path}.constituent`, l.constituent, `must be "salinity", "temperature" or a name listed under discharge.constituents`));
+      return;
+    }
+    const unit = key === "salinity" ? "g/kg" : key === "temperature" ? "degC" : c!.unit;
+    if ((l.maxIncrease === undefined) === (l.maxConcentration === undefined)) {
+      ctx.issues.push(issue(path, l.constituent, "must give exactly one of maxIncrease or maxConcentration"));
+      return;
+    }
+    const inc = parseLimitValue(l.maxIncrease, key, unit, true, `${path}.maxIncrease`, ctx);
+    const abs = parseLimitValue(l.maxConcentration, key, unit, false, `${path}.maxConcentration`, ctx);
+    const bg = parseLimitValue(l.background, key, unit, false, `${path}.background`, ctx);
+    limits.push({
+      constituent: key === "salinity" || key === "temperature" ? key : c!.name,
+      unit,
+      ...(inc !== undefined ? { maxIncrease: inc } : {}),
+      ...(abs !== undefined ? { maxConcentration: abs } : {}),
+      ...(bg !== undefined ? { background: bg } : {}),
+      ...(l.basis ? { basis: l.basis } : {}),
+    });
+  });
+
+  // --- uncertainty --------------------------------------------------------------------------------------
+  const uncertainty = f.uncertainty && {
+    inputs: f.uncertainty.inputs.map((u): UncertainInput => {
+      const { path, distribution, ...rest } = u;
+      const params: Record<string, number> = {};
+      for (const [k, v] of Object.entries(rest)) if (typeof v === "number") params[k] = v;
+      return { path, distribution, params };
+    }),
+  };
+
+  if (ctx.issues.length || !ambient) return { scenario: null, issues: ctx.issues };
+
+  const scenario: Scenario = {
+    format: "brinefield-scenario",
+    version: 1,
+    name: f.name,
+    ...(f.description ? { description: f.description } : {}),
+    discharge: { flow, salinity, temperature, constituents },
+    ...(plantOut ? { plant: plantOut } : {}),
+    ambient,
+    ambientCases,
+    diffuser,
+    mixingZone: { radius: f.mixingZone.radius, limits },
+    options: {
+      nearFieldForEdge: f.options?.nearFieldForEdge ?? "conservative",
+      farField: f.options?.farField ?? "conservative",
+      addSlackWater: f.options?.addSlackWater ?? true,
+    },
+    ...(uncertainty ? { uncertainty } : {}),
+    conversions: ctx.conversions,
+  };
+  return { scenario: deepFreeze(scenario), issues: [] };
+}
+
+export function deepFreeze<T>(o: T): T {
+  if (o && typeof o === "object" && !Object.isFrozen(o)) {
+    Object.freeze(o);
+    for (const v of Object.values(o as Record<string, unknown>)) deepFreeze(v);
+  }
+  return o;
+}
