@@ -1,0 +1,307 @@
+/**
+ * Near-field Method 1, "length-scale": published laboratory laws for an inclined dense jet from a round port
+ * in stagnant, unstratified water, scaled by port diameter d and densimetric Froude number F
+ * (length = c·d·F, dilution = c·F; see core/correlations/dense-jet-dataset.ts).
+ *
+ * Datasets, in order of preference (the first one that covers the angle is the primary):
+ *  1. Roberts, Ferrier & Daviero (1997), 60° ± 2° — the one study whose rise, return distance, impact
+ *     dilution and near-field end all come from the same experiments at the design-standard angle; its five
+ *     coefficients are FROM MEMORY but quoted identically by independent sources.
+ *  2. Lai & Lee (2012), 15°–60° — CONFIRMED rise at 15° and 60° (interpolated between), and dilutions at
+ *     maximum rise and at impact for 38°–60°; the lower of the two 60° impact dilutions.
+ * Not implemented, because no coefficient could be traced: Papakonstantis et al. (2011a,b), Shao & Law
+ * (2010), Kikkert et al. (2007) analytical solution, Cipollina et al. (2005), Papakonstantis &
+ * Christodoulou (2020) polynomial, Abessi & Roberts (2014, 2017) fits.
+ *
+ * Fields the primary dataset does not give are filled from the first variant that does, and `notes` says so.
+ * Outside the studied angles (15°–60°) every dataset is evaluated at the nearest studied angle with a warning.
+ */
+import { warning, type ResultWarning } from "../warnings";
+import type { AmbientColumn, JetSource, NearFieldMethodResult, NearFieldVariant } from "./types";
+import type { DenseJetCoefficients, DenseJetDataset } from "../correlations/dense-jet-dataset";
+import { clampAngle } from "../correlations/dense-jet-dataset";
+import { ROBERTS_1997_DATASET } from "../correlations/roberts-1997-inclined-dense-jet";
+import { LAI_LEE_2012_DATASET, LAI_LEE_2012_MAX_RISE_DILUTION } from "../correlations/lai-lee-2012-inclined-dense-jet";
+import { crossflowFroudeFromSpeeds, crossflowFroudeValidityIssues, crossflowRegimeFromFroude } from "../correlations/lai-lee-2013-crossflow-regime";
+import { weakCurrentValidityIssues } from "../correlations/abessi-roberts-2016-weak-current";
+
+/** Datasets in order of preference for the primary result. */
+export const LENGTH_SCALE_DATASETS: readonly DenseJetDataset[] = [ROBERTS_1997_DATASET, LAI_LEE_2012_DATASET];
+
+/** Union of the studied angles, degrees. */
+export const LENGTH_SCALE_ANGLE_RANGE: readonly [number, number] = [
+  Math.min(...LENGTH_SCALE_DATASETS.map((d) => d.angleRange[0])),
+  Math.max(...LENGTH_SCALE_DATASETS.map((d) => d.angleRange[1])),
+];
+
+const PRIMARY_REASON: Record<string, string> = {
+  "roberts-1997":
+    "primary because it is the only dataset at this angle that gives rise, return distance, impact dilution and " +
+    "near-field end from the same experiments, at the design-standard 60° it was measured for",
+  "lai-lee-2012": "primary because it is the only traced dataset covering this angle (confirmed from the paper's abstract)",
+};
+
+const STANDARD_GRAVITY = 9.80665; // m/s², to turn g′ back into a density excess
+
+export interface EvaluatedDataset {
+  readonly dataset: DenseJetDataset;
+  readonly coefficients: DenseJetCoefficients;
+}
+
+/** Datasets usable at `angle` (clamped to the studied range), in order of preference. */
+export function denseJetDatasetsAtAngle(angle: number): {
+  readonly angleUsed: number;
+  readonly entries: readonly EvaluatedDataset[];
+} {
+  const angleUsed = clampAngle(angle, LENGTH_SCALE_ANGLE_RANGE);
+  const entries: EvaluatedDataset[] = [];
+  for (const dataset of LENGTH_SCALE_DATASETS) {
+    const coefficients = dataset.coefficientsAtAngle(angleUsed);
+    if (coefficients) entries.push({ dataset, coefficients });
+  }
+  return { angleUsed, entries };
+}
+
+/** Upper-edge rise above the port, m, from every usable dataset (used by the surface check). */
+export function publishedRiseHeights(jet: JetSource): { readonly source: string; readonly height: number }[] {
+  if (!isDenseJet(jet) || !(jet.angle > 0 && jet.angle <= 90)) return [];
+  const scale = jet.diameter * jet.froude;
+  return denseJetDatasetsAtAngle(jet.angle)
+    .entries.filter((e) => e.coefficients.riseEdge !== null)
+    .map((e) => ({ source: e.dataset.source, height: (e.coefficients.riseEdge as number) * scale }));
+}
+
+interface Dimensional extends NearFieldVariant {
+  readonly maxRiseDilution: number | null;
+}
+
+function toDimensional(e: EvaluatedDataset, jet: JetSource): Dimensional {
+  const c = e.coefficients;
+  const L = jet.diameter * jet.froude;
+  const F = jet.froude;
+  const len = (v: number | null) => (v === null ? null : v * L);
+  const dil = (v: number | null) => (v === null ? null : v * F);
+  const returnDistance = len(c.returnDistance);
+  // Seabed impact: the descending branch is continued below port level as a straight line leaving the return
+  // point at the discharge angle (mirror image of the ascent). Published dense-jet trajectories descend at
+  // least as steeply as they rise (FROM MEMORY), so the added distance portHeight/tanθ is an upper bound.
+  const drop = Math.max(0, jet.portHeight);
+  const impactDistance = returnDistance === null ? null : returnDistance + drop / Math.tan((c.angle * Math.PI) / 180);
+  return {
+    source: e.dataset.source,
+    maxRiseHeight: len(c.riseEdge),
+    maxRiseDistance: len(c.maxRiseDistance),
+    returnDistance,
+    impactDistance,
+    // Port-level (return) dilution reported as impact dilution: conservative for a raised port, because the
+    // jet keeps diluting on the way down to the bed.
+    impactDilution: dil(c.returnDilution),
+    nearFieldDistance: len(c.nearFieldDistance),
+    nearFieldDilution: dil(c.nearFieldDilution),
+    maxRiseDilution: dil(c.maxRiseDilution),
+    note: c.notes.length ? c.notes.join(" ") : undefined,
+  };
+}
+
+function isDenseJet(jet: JetSource): boolean {
+  return jet.reducedGravity > 0 && jet.froude > 0 && Number.isFinite(jet.froude) && jet.diameter > 0;
+}
+
+function emptyResult(warnings: ResultWarning[], why: string): NearFieldMethodResult {
+  return {
+    method: "length-scale",
+    source: "none: " + why,
+    maxRiseHeight: null,
+    maxRiseDistance: null,
+    returnDistance: null,
+    impactDistance: null,
+    impactDilution: null,
+    nearFieldDistance: null,
+    nearFieldDilution: null,
+    maxRiseDilution: null,
+    dilutionRange: null,
+    entrainedFlow: null,
+    bias: "No length-scale estimate: " + why,
+    warnings,
+    variants: [],
+    notes: [why],
+  };
+}
+
+/** Length-scale (Method 1) near-field estimate for one round dense jet. */
+export function nearFieldLengthScale(jet: JetSource, column: AmbientColumn): NearFieldMethodResult {
+  const stage = "length-scale";
+  if (!isDenseJet(jet)) {
+    const why = `the discharge is not a dense jet (g′ = ${jet.reducedGravity.toPrecision(3)} m/s², F = ${jet.froude.toPrecision(3)}, d = ${jet.diameter} m); the correlations are for negatively buoyant jets`;
+    return emptyResult([warning("not-a-dense-jet", "serious", `No length-scale estimate: ${why}.`, { stage })], why);
+  }
+  if (!(jet.angle > 0 && jet.angle <= 90)) {
+    const why = `discharge angle ${jet.angle}° is not upward (0° < θ ≤ 90°)`;
+    return emptyResult(
+      [warning("angle-not-upward", "serious", `No length-scale estimate: ${why}.`, { parameter: "angle", value: jet.angle, range: [0, 90], stage })],
+      why,
+    );
+  }
+
+  const warnings: ResultWarning[] = [];
+  const notes: string[] = [];
+  const { angleUsed, entries } = denseJetDatasetsAtAngle(jet.angle);
+  const [aLo, aHi] = LENGTH_SCALE_ANGLE_RANGE;
+  if (angleUsed !== jet.angle) {
+    const off = Math.abs(jet.angle - angleUsed);
+    warnings.push(
+      warning(
+        "angle-outside-studied-range",
+        off > 2 ? "serious" : "warning",
+        `Discharge angle ${jet.angle.toFixed(1)}° is outside the ${aLo}°–${aHi}° covered by the published datasets; ` +
+          `values are those at the nearest studied angle, ${angleUsed}°, not an extrapolation` +
+          `${jet.angle > aHi ? " (steeper jets rise higher: the rise is likely under-estimated)" : " (flatter jets rise less: the rise is likely over-estimated)"}.`,
+        { parameter: "angle", value: jet.angle, range: [aLo, aHi], stage },
+      ),
+    );
+    notes.push(`Evaluated at ${angleUsed}° (nearest studied angle) for a ${jet.angle.toFixed(1)}° port.`);
+  }
+  if (entries.length === 0) return emptyResult(warnings, `no dataset covers ${angleUsed}°`);
+
+  for (const e of entries) warnings.push(...e.dataset.validityIssues({ angle: angleUsed, froude: jet.froude }));
+  warnings.push(...currentIssues(jet, column, notes));
+  warnings.push(...stratificationIssues(jet, column));
+
+  const [primaryEntry, ...variantEntries] = entries;
+  const primary = toDimensional(primaryEntry, jet);
+  const variants = variantEntries.map((e) => ({ label: e.dataset.label, values: toDimensional(e, jet) }));
+  for (const e of entries) notes.push(...e.coefficients.notes);
+
+  // Fill what the primary lacks from the first variant that has it, and say so.
+  const fields = ["maxRiseHeight", "maxRiseDistance", "returnDistance", "impactDistance", "impactDilution", "nearFieldDistance", "nearFieldDilution", "maxRiseDilution"] as const;
+  const top: Record<(typeof fields)[number], number | null> = { ...primary };
+  const filledFrom = new Set<string>();
+  for (const f of fields) {
+    if (top[f] !== null) continue;
+    const donor = variants.find((v) => v.values[f] !== null);
+    if (donor) {
+      top[f] = donor.values[f];
+      filledFrom.add(donor.label);
+      notes.push(`${f} taken from ${donor.label}; the primary dataset gives none.`);
+    }
+  }
+  if (top.impactDistance !== null && jet.portHeight > 0) {
+    notes.push(
+      `Impact distance = return distance + portHeight/tan(${angleUsed}°): the descent below port level is continued ` +
+        `as a straight line at the discharge angle (an upper bound on the added distance).`,
+    );
+  }
+
+  const dilutions = [primary, ...variants.map((v) => v.values)].map((v) => v.impactDilution).filter((v): v is number => v !== null);
+  const dilutionRange: readonly [number, number] | null =
+    dilutions.length >= 2 ? [Math.min(...dilutions), Math.max(...dilutions)] : null;
+  if (dilutionRange === null) notes.push("No dilution range: fewer than two datasets give an impact dilution here and no published scatter was traced.");
+
+  const source =
+    `${primaryEntry.dataset.source} — ${PRIMARY_REASON[primaryEntry.dataset.id] ?? "primary"}` +
+    (filledFrom.size ? `; fields it lacks are filled from ${[...filledFrom].join(", ")}` : "");
+
+  return {
+    method: "length-scale",
+    source,
+    maxRiseHeight: top.maxRiseHeight,
+    maxRiseDistance: top.maxRiseDistance,
+    returnDistance: top.returnDistance,
+    impactDistance: top.impactDistance,
+    impactDilution: top.impactDilution,
+    nearFieldDistance: top.nearFieldDistance,
+    nearFieldDilution: top.nearFieldDilution,
+    maxRiseDilution: top.maxRiseDilution,
+    dilutionRange,
+    entrainedFlow: top.impactDilution === null ? null : jet.flow * (top.impactDilution - 1),
+    bias: BIAS,
+    warnings,
+    variants: variants.map((v) => toVariant(v.values)),
+    notes: [
+      ...notes,
+      "entrainedFlow = Q0 × (impact dilution − 1), from the centreline (minimum) dilution, so it is a lower bound on the flux-averaged entrainment.",
+    ],
+  };
+}
+
+const BIAS =
+  "Laboratory length-scale laws for one round jet in stagnant, unstratified, deep water, asymptotic in F " +
+  "(F ≳ 20–25). Impact dilution is the centreline (minimum) value where the centreline is back at port level, " +
+  "conservative for a raised port. Published 60° impact dilutions differ by 50 %: 1.6·F (Roberts et al. 1997, " +
+  "from memory) against 1.06·F (Lai & Lee 2012, confirmed) — treat the spread as real uncertainty and use the " +
+  "low end for compliance. Lai & Lee (2012) found a Lagrangian integral model under-predicts rise by 10–15 % " +
+  `and dilution at maximum rise by about 30 % against these measurements (S_t/F = ${LAI_LEE_2012_MAX_RISE_DILUTION.value}).`;
+
+/** The contract's variant shape (it has no dilution at maximum rise). */
+function toVariant(v: Dimensional): NearFieldVariant {
+  const { source, maxRiseHeight, maxRiseDistance, returnDistance, impactDistance, impactDilution } = v;
+  const { nearFieldDistance, nearFieldDilution, note } = v;
+  const out = { source, maxRiseHeight, maxRiseDistance, returnDistance, impactDistance, impactDilution, nearFieldDistance, nearFieldDilution };
+  const extra = v.maxRiseDilution === null ? [] : [`Dilution at maximum rise ${v.maxRiseDilution.toFixed(1)}.`];
+  const text = [...(note ? [note] : []), ...extra].join(" ");
+  return text ? { ...out, note: text } : out;
+}
+
+function currentIssues(jet: JetSource, column: AmbientColumn, notes: string[]): ResultWarning[] {
+  const fc = crossflowFroudeFromSpeeds(column.currentSpeed, jet.velocity, jet.froude);
+  if (!(fc > 0)) return [];
+  const rel = (((column.currentDirection - jet.azimuth) % 360) + 360) % 360;
+  const off = Math.min(rel, 360 - rel);
+  const relation = `${off < 45 ? "co-flowing" : off > 135 ? "counter-flowing" : "across the jet"} (${off.toFixed(0)}° from the jet azimuth)`;
+  notes.push(
+    `Crossflow Froude number F_c = (u_a/U)·F = (${column.currentSpeed.toFixed(3)}/${jet.velocity.toFixed(2)})·${jet.froude.toFixed(1)} = ` +
+      `${fc.toFixed(2)}: ${crossflowRegimeFromFroude(fc)} regime of Lai & Lee (2013); current ${relation}.`,
+  );
+  return [...crossflowFroudeValidityIssues(fc, relation), ...weakCurrentValidityIssues(fc)];
+}
+
+/** Ambient density at a depth below the surface, linear between profile points, held at the ends. */
+function densityAtDepth(column: AmbientColumn, depth: number): number {
+  const z = column.depths;
+  const r = column.densities;
+  if (depth <= z[0]) return r[0];
+  for (let i = 1; i < z.length; i++) {
+    if (depth <= z[i]) return r[i - 1] + ((depth - z[i - 1]) / (z[i] - z[i - 1])) * (r[i] - r[i - 1]);
+  }
+  return r[r.length - 1];
+}
+
+function stratificationIssues(jet: JetSource, column: AmbientColumn): ResultWarning[] {
+  if (column.densities.length < 2 || column.depths.length !== column.densities.length) return [];
+  const span = Math.max(...column.densities) - Math.min(...column.densities);
+  // 0.01 kg/m³: below CTD density resolution (common practice, no source).
+  if (!(span > 0.01)) return [];
+  const stage = "length-scale";
+  const portDepth = Math.max(0, column.depth - jet.portHeight);
+  const rise = Math.max(0, ...publishedRiseHeights(jet).map((r) => r.height));
+  const topDepth = Math.max(0, portDepth - rise);
+  const rhoPort = densityAtDepth(column, portDepth);
+  const strat = rhoPort - densityAtDepth(column, topDepth); // > 0 for stable water across the rise
+  const excess = (jet.reducedGravity * rhoPort) / STANDARD_GRAVITY;
+  // Ambient density change across the rise compared with the jet's excess at maximum rise, Δρ0/S_t with
+  // S_t = 0.45·F (Lai & Lee 2012, confirmed). The ratio is DERIVED; thresholds 0.1 and 1 are common
+  // practice, no source.
+  const ratio = (strat * LAI_LEE_2012_MAX_RISE_DILUTION.value * jet.froude) / excess;
+  const out: ResultWarning[] = [
+    warning(
+      "ambient-stratified",
+      "info",
+      `The water column is stratified (density varies by ${span.toFixed(2)} kg/m³ over the depth); the length-scale ` +
+        `correlations are for unstratified water.`,
+      { parameter: "ambient.densities", value: span, stage },
+    ),
+  ];
+  if (ratio >= 0.1) {
+    out.push(
+      warning(
+        "stratification-affects-jet",
+        ratio >= 1 ? "serious" : "warning",
+        `Across the jet's rise the ambient density changes by ${strat.toFixed(3)} kg/m³, ${(100 * ratio).toFixed(0)} % of the ` +
+          `jet's density excess at maximum rise (Δρ0/S_t with S_t = 0.45·F, Lai & Lee 2012); the unstratified ` +
+          `correlations ${ratio >= 1 ? "do not apply (the jet may be trapped)" : "are doubtful"}.`,
+        { parameter: "ambient.densities", value: ratio, range: [0, 0.1], stage },
+      ),
+    );
+  }
+  return out;
+}
