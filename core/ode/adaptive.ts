@@ -1,0 +1,207 @@
+/**
+ * Adaptive integration driver: error-controlled step-size selection around any embedded
+ * Runge–Kutta `Stepper`, with event location on the stepper's dense output, and hard guards
+ * (maximum steps, maximum t, minimum step) so that it always returns.
+ *
+ * Step-size control: standard elementary controller h_new = h·min(5, max(0.2, 0.9·err^(−1/(q+1))))
+ * with q the embedded (error) order, no growth right after a rejection (Hairer, Nørsett & Wanner
+ * 1993, §II.4). Event location: Illinois (modified regula falsi) on g(t_old + θh, y(θ)) with the
+ * dense output y(θ), to |Δt| ≤ 1e-12·max(1, |t|).
+ *
+ * The inner loop allocates nothing: all vectors are created once per call; event hits (rare)
+ * allocate their own state copies.
+ */
+import type { OdeRhs, Stepper } from "./stepper";
+
+export interface OdeEvent<P> {
+  /** Event function g(t, y); an event is a zero crossing of g. Must not allocate. */
+  readonly fn: (t: number, y: Float64Array, params: P) => number;
+  /** −1: only crossings from g > 0 to g ≤ 0; +1: from g < 0 to g ≥ 0; 0: either. */
+  readonly direction: -1 | 0 | 1;
+  /** Stop the integration at this event. */
+  readonly terminal: boolean;
+}
+
+export interface EventHit {
+  /** Index into the `events` array given to the driver. */
+  readonly index: number;
+  readonly t: number;
+  readonly y: Float64Array;
+}
+
+export type StopReason = "t-max" | "event" | "max-steps" | "step-underflow" | "callback";
+
+export interface AdaptiveOptions {
+  readonly rtol: number;
+  /** Absolute tolerance per component. */
+  readonly atol: Float64Array;
+  /** Initial step. */
+  readonly h0: number;
+  /** Smallest step allowed before giving up (returns "step-underflow"). */
+  readonly hMin: number;
+  readonly hMax: number;
+  readonly maxSteps: number;
+  readonly tMax: number;
+}
+
+export interface AdaptiveResult {
+  readonly reason: StopReason;
+  /** Final t and state (the terminal event's, when one stopped the run). */
+  readonly t: number;
+  readonly y: Float64Array;
+  readonly steps: number;
+  readonly rejected: number;
+  readonly evaluations: number;
+  /** Every located event in order of t (non-terminal ones included). */
+  readonly events: readonly EventHit[];
+}
+
+/**
+ * Called after every accepted step (and at the terminal event) with the new point. Return
+ * `false` to stop the integration ("callback"). Must not keep a reference to `y`.
+ */
+export type StepCallback = (t: number, y: Float64Array) => boolean | void;
+
+/** Integrates from (t0, y0) forward until tMax, a terminal event, a guard, or the callback stops it. */
+export function integrateAdaptive<P>(
+  stepper: Stepper<P>,
+  rhs: OdeRhs<P>,
+  params: P,
+  t0: number,
+  y0: Float64Array,
+  options: AdaptiveOptions,
+  events: readonly OdeEvent<P>[] = [],
+  onStep?: StepCallback,
+): AdaptiveResult {
+  void rhs; // the stepper holds the right-hand side; kept in the signature for readability at call sites
+  const n = stepper.dim;
+  const { rtol, atol, hMin, hMax, maxSteps, tMax } = options;
+  const yNew = new Float64Array(n);
+  const yTry = new Float64Array(n);
+  const ne = events.length;
+  const gOld = new Float64Array(ne);
+  const gNew = new Float64Array(ne);
+  const hits: EventHit[] = [];
+  const exponent = -1 / (stepper.errorOrder + 1);
+
+  stepper.reset(t0, y0, params);
+  for (let e = 0; e < ne; e++) gOld[e] = events[e].fn(t0, stepper.y, params);
+
+  let h = Math.min(Math.max(options.h0, hMin), hMax);
+  let steps = 0;
+  let rejected = 0;
+  let lastRejected = false;
+
+  const finish = (reason: StopReason, t: number, y: Float64Array): AdaptiveResult => ({
+    reason,
+    t,
+    y: Float64Array.from(y),
+    steps,
+    rejected,
+    evaluations: stepper.evaluations,
+    events: hits,
+  });
+
+  for (;;) {
+    const t = stepper.t;
+    if (t >= tMax) return finish("t-max", t, stepper.y);
+    if (steps >= maxSteps) return finish("max-steps", t, stepper.y);
+    if (t + h > tMax) h = tMax - t;
+    const err = stepper.attempt(h, yNew, atol, rtol);
+    if (err > 1) {
+      rejected++;
+      lastRejected = true;
+      h *= Math.max(0.2, 0.9 * Math.pow(err, exponent));
+      if (h < hMin) return finish("step-underflow", t, stepper.y);
+      continue;
+    }
+    // Accepted.
+    const hUsed = h;
+    stepper.accept();
+    steps++;
+    const tNew = stepper.t;
+    let factor = err === 0 ? 5 : Math.min(5, Math.max(0.2, 0.9 * Math.pow(err, exponent)));
+    if (lastRejected) factor = Math.min(1, factor);
+    lastRejected = false;
+    h = Math.min(hUsed * factor, hMax);
+
+    // Events in this step, earliest first; stop at the first terminal one.
+    let terminalHit: EventHit | null = null;
+    if (ne > 0) {
+      for (let e = 0; e < ne; e++) gNew[e] = events[e].fn(tNew, stepper.y, params);
+      const stepHits: EventHit[] = [];
+      for (let e = 0; e < ne; e++) {
+        const a = gOld[e];
+        const b = gNew[e];
+        const dir = events[e].direction;
+        const down = a > 0 && b <= 0;
+        const up = a < 0 && b >= 0;
+        if ((dir <= 0 && down) || (dir >= 0 && up)) {
+          const theta = locateRoot(stepper, events[e], params, t, hUsed, a, b, yTry);
+          stepper.interpolate(theta, yTry);
+          stepHits.push({ index: e, t: t + theta * hUsed, y: Float64Array.from(yTry) });
+        }
+      }
+      if (stepHits.length > 0) {
+        stepHits.sort((p, q) => p.t - q.t);
+        for (const hit of stepHits) {
+          hits.push(hit);
+          if (events[hit.index].terminal) {
+            terminalHit = hit;
+            break;
+          }
+        }
+      }
+      gOld.set(gNew);
+    }
+    if (terminalHit) {
+      onStep?.(terminalHit.t, terminalHit.y);
+      return finish("event", terminalHit.t, terminalHit.y);
+    }
+    if (onStep && onStep(tNew, stepper.y) === false) return finish("callback", tNew, stepper.y);
+    if (h < hMin) return finish("step-underflow", tNew, stepper.y);
+  }
+}
+
+/**
+ * Illinois (modified regula falsi) search for θ in (0, 1] on the dense output of the last
+ * accepted step. Returns the bracket end on the "after" side, so the reported state has crossed.
+ */
+function locateRoot<P>(
+  stepper: Stepper<P>,
+  event: OdeEvent<P>,
+  params: P,
+  t: number,
+  h: number,
+  gA: number,
+  gB: number,
+  scratch: Float64Array,
+): number {
+  if (gB === 0) return 1;
+  let a = 0;
+  let b = 1;
+  let fa = gA;
+  let fb = gB;
+  let side = 0;
+  const tol = (1e-12 * Math.max(1, Math.abs(t))) / Math.abs(h);
+  for (let it = 0; it < 200 && b - a > tol; it++) {
+    let m = (a * fb - b * fa) / (fb - fa);
+    // Bisect if the secant point is not strictly inside the bracket (flat or non-finite g).
+    if (!(m > a && m < b)) m = 0.5 * (a + b);
+    stepper.interpolate(m, scratch);
+    const fm = event.fn(t + m * h, scratch, params);
+    if (fm === 0) return m;
+    if (fm * fb < 0) {
+      a = m;
+      fa = fm;
+      if (side === -1) fb *= 0.5;
+      side = -1;
+    } else {
+      b = m;
+      fb = fm;
+      if (side === 1) fa *= 0.5;
+      side = 1;
+    }
+  }
+  return b;
+}
