@@ -11,7 +11,9 @@
  *   flat bed, or where that Ri exceeds 1, the thickness is taken at critical flow Ri = 1 (the thinnest
  *   subcritical layer). Above Ri = 0.8 the layer entrains nothing (Ellison & Turner 1959, confirmed).
  *   Bed drag C_D = 0.0025 (common practice, no source).
- * - "advected" (current u): the layer moves with the current, V = u, h = Q/(u·w), Ri = g′h·cosβ/u², and
+ * - "advected" (current u): the layer first spreads radially as above; once its own velocity falls to the
+ *   current speed it moves with the current, V = u, h = Q/(u·w), Ri = g′h·cosβ/u², starting from the
+ *   cross-current width of the radial layer (perimeter/π plus the diffuser's cross-current length), and
  *   widens sideways as a gravity current, dw/dx = 2·√(g′h)/u (front Froude number 1, judgement).
  */
 import { entrainmentFromRichardson, TURNER_1986_SOURCE } from "./turner-1986-entrainment";
@@ -31,10 +33,12 @@ export interface SpreadingLayerInput {
   readonly dischargeFlow: number;
   /** Reduced gravity of the undiluted discharge against the bottom water, m/s² (positive = dense). */
   readonly reducedGravity: number;
-  /** Layer width (advected) or perimeter (radial) at the start, m. */
+  /** Perimeter of the radial layer at the start (without `perimeterOffset`), m. */
   readonly initialWidth: number;
   /** Extra straight length added to the radial perimeter (e.g. 2 × diffuser length), m. */
   readonly perimeterOffset?: number;
+  /** Diffuser length seen across the current, added to the advected width at the switch, m. */
+  readonly crossCurrentLength?: number;
   /** Current speed, m/s (0 = stagnant, radial spreading). */
   readonly currentSpeed: number;
   /** Bed slope tanβ along the spreading direction, downslope positive. */
@@ -46,9 +50,12 @@ export interface SpreadingLayerInput {
 
 export interface SpreadingLayerSeries {
   readonly geometry: "radial" | "advected";
+  /** Distance where the radial layer slowed to the current speed and became advected (null if never). */
+  readonly switchDistance: number | null;
   readonly distance: number[];
   readonly dilution: number[];
   readonly thickness: number[];
+  /** Perimeter while radial, width once advected, m: either way ∫ width dr is the seabed area covered. */
   readonly width: number[];
   /** Layer volume flux Q, m³/s. */
   readonly flux: number[];
@@ -84,47 +91,59 @@ export function spreadingLayerFromNearFieldEnd(input: SpreadingLayerInput): Spre
   const drag = input.dragCoefficient ?? DEFAULT_BED_DRAG;
   const steps = Math.max(1, Math.round(input.steps ?? 400));
   const u = Math.max(0, input.currentSpeed);
-  const geometry: "radial" | "advected" = u > 0 ? "advected" : "radial";
   const cosb = 1 / Math.sqrt(1 + input.bedSlope * input.bedSlope);
   const q0 = input.dischargeFlow;
   const g0 = Math.max(input.reducedGravity, 0);
   const riSlope = equilibriumRichardsonFromSlope(input.bedSlope, drag);
   const riRadial = Math.min(riSlope, 1);
   const offset = input.perimeterOffset ?? 0;
+  let advected = false;
 
   const state = (q: number, w: number): LayerState => {
     const gp = (g0 * q0) / q; // buoyancy flux conserved
-    if (geometry === "advected") {
+    if (advected) {
       const h = q / (u * w);
       const ri = gp > 0 ? (gp * h * cosb) / (u * u) : 0;
-      return { h, v: u, ri, e: gp > 0 ? entrainmentFromRichardson(ri) : entrainmentFromRichardson(0) };
+      return { h, v: u, ri, e: entrainmentFromRichardson(ri) };
     }
     // A neutral layer (g′ = 0) has no gravity-driven thickness; keep a finite, non-entraining state.
     if (!(gp > 0)) return { h: Infinity, v: 0, ri: Infinity, e: 0 };
     const h = Math.cbrt((riRadial * q * q) / (gp * w * w * cosb));
     return { h, v: q / (h * w), ri: riSlope, e: entrainmentFromRichardson(riSlope) };
   };
-  const width = (r: number, wAdvected: number) =>
-    geometry === "radial" ? input.initialWidth + offset + 2 * Math.PI * (r - input.startDistance) : wAdvected;
-  // Derivatives of (Q, w_advected) with respect to distance.
+  let wAdv = 0;
+  const width = (r: number, wa: number) =>
+    advected ? wa : input.initialWidth + offset + 2 * Math.PI * (r - input.startDistance);
+  // Derivatives of (Q, advected width) with respect to distance.
   const deriv = (r: number, q: number, wa: number): [number, number] => {
     const w = width(r, wa);
     const s = state(q, w);
     const dq = s.e * s.v * w;
-    const dw = geometry === "advected" ? (2 * Math.sqrt(Math.max(0, ((g0 * q0) / q) * s.h))) / u : 0;
+    const dw = advected ? (2 * Math.sqrt(Math.max(0, ((g0 * q0) / q) * s.h))) / u : 0;
     return [dq, dw];
   };
 
-  const out: SpreadingLayerSeries = {
-    geometry,
-    distance: [],
-    dilution: [],
-    thickness: [],
-    width: [],
-    flux: [],
-    velocity: [],
-    richardson: [],
-    entrainment: [],
+  const out = {
+    geometry: (u > 0 ? "advected" : "radial") as "radial" | "advected",
+    switchDistance: null as number | null,
+    distance: [] as number[],
+    dilution: [] as number[],
+    thickness: [] as number[],
+    width: [] as number[],
+    flux: [] as number[],
+    velocity: [] as number[],
+    richardson: [] as number[],
+    entrainment: [] as number[],
+  };
+  const maybeSwitch = (r: number, q: number) => {
+    if (advected || !(u > 0)) return;
+    const w = width(r, 0);
+    if (state(q, w).v <= u) {
+      // The radial layer has slowed to the current: it is carried off with its cross-current width.
+      advected = true;
+      out.switchDistance = r;
+      wAdv = (w - offset) / Math.PI + (input.crossCurrentLength ?? 0);
+    }
   };
   const push = (r: number, q: number, wa: number) => {
     const w = width(r, wa);
@@ -140,21 +159,23 @@ export function spreadingLayerFromNearFieldEnd(input: SpreadingLayerInput): Spre
   };
   let r = input.startDistance;
   let q = q0 * input.startDilution;
-  let wa = input.initialWidth;
-  push(r, q, wa);
+  maybeSwitch(r, q);
+  push(r, q, wAdv);
   const span = Math.max(0, input.endDistance - input.startDistance);
   if (span === 0 || !(q0 > 0)) return out;
   const dr = span / steps;
   for (let i = 0; i < steps; i++) {
+    const wa = wAdv;
     // Classical fourth-order Runge–Kutta on (Q, w).
     const [k1q, k1w] = deriv(r, q, wa);
     const [k2q, k2w] = deriv(r + dr / 2, q + (dr / 2) * k1q, wa + (dr / 2) * k1w);
     const [k3q, k3w] = deriv(r + dr / 2, q + (dr / 2) * k2q, wa + (dr / 2) * k2w);
     const [k4q, k4w] = deriv(r + dr, q + dr * k3q, wa + dr * k3w);
     q += (dr / 6) * (k1q + 2 * k2q + 2 * k3q + k4q);
-    wa += (dr / 6) * (k1w + 2 * k2w + 2 * k3w + k4w);
+    wAdv = wa + (dr / 6) * (k1w + 2 * k2w + 2 * k3w + k4w);
     r = input.startDistance + (i + 1) * dr;
-    push(r, q, wa);
+    maybeSwitch(r, q);
+    push(r, q, wAdv);
   }
   return out;
 }

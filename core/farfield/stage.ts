@@ -21,6 +21,7 @@ import type {
 import { warning, type ResultWarning } from "../warnings";
 import { GRAVITY, multiportFromNearField, MERGING_SOURCE, portCountFromDiffuser, portFlowsAndHydraulics } from "../multiport";
 import { complianceFromEdgeDilution } from "../compliance/required-dilution";
+import { jetWidthsFromNearField } from "../multiport/merging";
 import { dilutionFromProfile, jetProfileFromNearField, nearFieldEndFromResult, type JetProfile } from "./jet-series";
 import { spreadingLayerFromNearFieldEnd, SPREADING_LAYER_SOURCE } from "./gravity-current";
 import {
@@ -108,9 +109,10 @@ export function beyondNearField(input: BeyondInput): BeyondOutput {
       continue;
     }
     const xi = nf.impactDistance ?? nf.returnDistance ?? end.distance;
-    // Radius of the layer around the impact point at the near-field end: its spread since impact, or a
-    // quarter of the near-field distance when the method puts both at the same place (judgement).
-    const layerRadius = end.distance - xi > 0 ? end.distance - xi : Math.max(0.25 * end.distance, 0.5);
+    // Radius of the layer around the impact point at the near-field end: its spread since impact, and at
+    // least the jet's half-width at impact (judgement); 0.5 m floor keeps the geometry finite.
+    const halfAtImpact = (jetWidthsFromNearField(nf, diffuser.portHeight)?.widthAtImpact ?? 0) / 2;
+    const layerRadius = Math.max(end.distance - xi, halfAtImpact, 0.5);
     chains.push({ nf, profile: jetProfileFromNearField(nf), end, impactDistance: Math.min(xi, end.distance), layerRadius });
   }
 
@@ -123,7 +125,7 @@ export function beyondNearField(input: BeyondInput): BeyondOutput {
   };
   const crossLength = (): number =>
     u > 0 ? diffuserLength * Math.abs(Math.sin(degToRad(diffuser.diffuserAzimuth - column.currentDirection))) : diffuserLength;
-  const initialWidth = (c: Chain) => (u > 0 ? 2 * c.layerRadius + crossLength() : 2 * Math.PI * c.layerRadius);
+  const crossWidth = (c: Chain) => 2 * c.layerRadius + crossLength();
 
   const farSeries = (c: Chain, method: FarMethod, xEnd: number, steps = 400): FarSeries => {
     const gc = spreadingLayerFromNearFieldEnd({
@@ -132,8 +134,9 @@ export function beyondNearField(input: BeyondInput): BeyondOutput {
       startDilution: c.end.dilution,
       dischargeFlow: scenario.discharge.flow,
       reducedGravity: gBottom,
-      initialWidth: initialWidth(c),
-      perimeterOffset: u > 0 ? 0 : 2 * diffuserLength,
+      initialWidth: 2 * Math.PI * c.layerRadius,
+      perimeterOffset: 2 * diffuserLength,
+      crossCurrentLength: crossLength(),
       currentSpeed: u,
       bedSlope: slopeAlong(),
       steps,
@@ -141,7 +144,7 @@ export function beyondNearField(input: BeyondInput): BeyondOutput {
     if (method === "gravity-current" || u === 0) {
       return { distance: gc.distance, dilution: gc.dilution, thickness: gc.thickness, width: gc.width };
     }
-    const b0 = initialWidth(c);
+    const b0 = crossWidth(c);
     const h0 = gc.thickness[0];
     const out: FarSeries = { distance: [], dilution: [], thickness: [], width: [] };
     for (const r of gc.distance) {
