@@ -8,7 +8,11 @@
  */
 import type { EquationOfStateInfo } from "../result/contract";
 import type { ResultWarning } from "../warnings";
-import { densitySharqawyNayar, densitySharqawyNayarValidityIssues, NAYAR_2016_SOURCE } from "./nayar-2016-pressure-correction";
+import {
+  densitySharqawyNayar,
+  densitySharqawyNayarValidityIssues,
+  NAYAR_2016_SOURCE,
+} from "./nayar-2016-pressure-correction";
 import { SHARQAWY_2010_SOURCE } from "./sharqawy-2010-density";
 import {
   densityTeos10,
@@ -62,14 +66,18 @@ export function equationOfStateFor(
     const maxS = salinities.length > 0 ? Math.max(...salinities) : 0;
     const hot = temperatures.filter((t) => t > 40 || t < -2);
     const note =
-      hot.length > 0 ? ` (temperatures up to ${Math.max(...hot)} °C are outside its −2–40 °C range and are flagged)` : "";
+      hot.length > 0
+        ? ` (temperatures up to ${Math.max(...hot)} °C are outside its −2–40 °C range and are flagged)`
+        : "";
     return equationOfStateTeos10(
-      `All salinities (max ${round(maxS)} g/kg) are within TEOS-10's 0–42 g/kg range, so TEOS-10 in-situ density is used for every water${note}.`,
+      `All salinities (max ${round(maxS)} g/kg) are within TEOS-10's 0–42 g/kg range, ` +
+        `so TEOS-10 in-situ density is used for every water${note}.`,
     );
   }
   const worst = outside.reduce((a, b) => (Math.abs(b - 21) > Math.abs(a - 21) ? b : a));
   return equationOfStateBrine(
-    `Salinity ${round(worst)} g/kg is outside TEOS-10's 0–42 g/kg range, so the brine correlation of Sharqawy (2010) with the Nayar (2016) pressure correction is used for the discharge and the ambient alike.`,
+    `Salinity ${round(worst)} g/kg is outside TEOS-10's 0–42 g/kg range, so the brine correlation of ` +
+      "Sharqawy (2010) with the Nayar (2016) pressure correction is used for the discharge and the ambient alike.",
   );
 }
 

@@ -1,4 +1,6 @@
-/** Seawater and brine properties: densities, salinity scales, depth ↔ pressure, the equation-of-state chooser. */
+/**
+ * Seawater and brine properties: densities, salinity scales, depth ↔ pressure, the equation-of-state chooser.
+ */
 export {
   densityTeos10,
   densityTeos10ValidityIssues,
@@ -52,7 +54,12 @@ export {
   practicalSalinityFromAbsolute,
   REFERENCE_COMPOSITION_FACTOR,
 } from "./salinity-scales";
-export { salinityFromTds, salinityFromTdsValidityIssues, tdsFromSalinity, type DensityFunction } from "./salinity-from-tds";
+export {
+  salinityFromTds,
+  salinityFromTdsValidityIssues,
+  tdsFromSalinity,
+  type DensityFunction,
+} from "./salinity-from-tds";
 export {
   equationOfStateFor,
   equationOfStateTeos10,

@@ -25,7 +25,9 @@ export const NAYAR_2016_SOURCE =
  * Equation number in the paper: from memory not reliable, not given.
  */
 export const NAYAR_2016_PRESSURE_COEFFICIENTS = {
-  c: [5.0792e-4, -3.4168e-6, 5.6931e-8, -3.7263e-10, 1.4465e-12, -1.7058e-15, -1.3389e-6, 4.8603e-9, -6.8039e-13],
+  c: [
+    5.0792e-4, -3.4168e-6, 5.6931e-8, -3.7263e-10, 1.4465e-12, -1.7058e-15, -1.3389e-6, 4.8603e-9, -6.8039e-13,
+  ],
   d: [-1.1077e-6, 5.5584e-9, -4.2539e-11, 8.3702e-9],
 } as const;
 
@@ -33,9 +35,15 @@ export const NAYAR_2016_PRESSURE_COEFFICIENTS = {
 export const ATMOSPHERIC_PRESSURE_MPA = 0.101325;
 /** Upper pressure limit of the correlation, MPa absolute (library header: P_sat < P < 12 MPa). */
 export const NAYAR_2016_MAX_PRESSURE_MPA = 12;
-/** Stated validity and accuracy (library header, CONFIRMED): 0–56 g/kg ±0.14 %; 56–180 g/kg ±0.21 % (extrapolation). */
+/**
+ * Stated validity and accuracy (library header, CONFIRMED): 0–56 g/kg ±0.14 %; 56–180 g/kg ±0.21 %
+ * (extrapolation).
+ */
 export const NAYAR_2016_FITTED_SALINITY_MAX = 56;
-/** Range of the authors' property tables and library: 0–120 °C, 0–120 g/kg, 0–12 MPa (web.mit.edu/seawater, CONFIRMED). */
+/**
+ * Range of the authors' property tables and library: 0–120 °C, 0–120 g/kg, 0–12 MPa
+ * (web.mit.edu/seawater, CONFIRMED).
+ */
 export const NAYAR_2016_SALINITY_RANGE: readonly [number, number] = [0, 120];
 export const NAYAR_2016_TEMPERATURE_RANGE: readonly [number, number] = [0, 120];
 
@@ -77,7 +85,8 @@ export function pressureFactorNayar2016(salinity: number, temperature: number, p
  * ±0.21 % above.
  */
 export function densitySharqawyNayar(salinity: number, temperature: number, pressureDbar: number): number {
-  return densitySharqawy2010(salinity, temperature) * pressureFactorNayar2016(salinity, temperature, pressureDbar);
+  const atmospheric = densitySharqawy2010(salinity, temperature);
+  return atmospheric * pressureFactorNayar2016(salinity, temperature, pressureDbar);
 }
 
 /**
@@ -95,25 +104,45 @@ export function densitySharqawyNayarValidityIssues(
   what = "water",
 ): ResultWarning[] {
   const out = densitySharqawy2010ValidityIssues(salinity, temperature, what);
-  const source = "Nayar, Sharqawy, Banchik & Lienhard (2016) and the authors' property library (0–120 g/kg, 0–120 °C, 0–12 MPa)";
+  const source =
+    "Nayar, Sharqawy, Banchik & Lienhard (2016) and the authors' property library (0–120 g/kg, 0–120 °C, 0–12 MPa)";
+  const maxSeaPressure = (NAYAR_2016_MAX_PRESSURE_MPA - ATMOSPHERIC_PRESSURE_MPA) * 100;
   if (Number.isFinite(salinity) && salinity > NAYAR_2016_SALINITY_RANGE[1] && salinity <= 160) {
     out.push(
       warning(
         "nayar-2016-salinity-out-of-range",
         "warning",
-        `${what}: salinity ${salinity} g/kg is above the 120 g/kg range of the Nayar (2016) seawater correlations; ` +
+        `${what}: salinity ${salinity} g/kg is above the 120 g/kg range of the Nayar (2016) seawater ` +
+          "correlations; " +
           "the pressure correction is extrapolated.",
-        { parameter: `${what}.salinity`, value: salinity, range: NAYAR_2016_SALINITY_RANGE, source, stage: "properties" },
+        {
+          parameter: `${what}.salinity`,
+          value: salinity,
+          range: NAYAR_2016_SALINITY_RANGE,
+          source,
+          stage: "properties",
+        },
       ),
     );
-  } else if (Number.isFinite(salinity) && salinity > NAYAR_2016_FITTED_SALINITY_MAX && salinity <= 120 && pressureDbar > 0) {
+  } else if (
+    Number.isFinite(salinity) &&
+    salinity > NAYAR_2016_FITTED_SALINITY_MAX &&
+    salinity <= 120 &&
+    pressureDbar > 0
+  ) {
     out.push(
       warning(
         "nayar-2016-pressure-extrapolated",
         "info",
         `${what}: salinity ${salinity} g/kg is above the 56 g/kg of the compressibility data; ` +
           "the density's stated accuracy is ±0.21 % instead of ±0.14 %.",
-        { parameter: `${what}.salinity`, value: salinity, range: [0, NAYAR_2016_FITTED_SALINITY_MAX], source, stage: "properties" },
+        {
+          parameter: `${what}.salinity`,
+          value: salinity,
+          range: [0, NAYAR_2016_FITTED_SALINITY_MAX],
+          source,
+          stage: "properties",
+        },
       ),
     );
   }
@@ -122,9 +151,15 @@ export function densitySharqawyNayarValidityIssues(
       warning(
         "nayar-2016-temperature-above-boiling",
         "serious",
-        `${what}: temperature ${temperature} °C is above 100 °C, where the correlation refers to the saturation ` +
-          "pressure, which is not modelled here.",
-        { parameter: `${what}.temperature`, value: temperature, range: [0, 100], source, stage: "properties" },
+        `${what}: temperature ${temperature} °C is above 100 °C, where the correlation refers to the ` +
+          "saturation pressure, which is not modelled here.",
+        {
+          parameter: `${what}.temperature`,
+          value: temperature,
+          range: [0, 100],
+          source,
+          stage: "properties",
+        },
       ),
     );
   }
@@ -134,11 +169,12 @@ export function densitySharqawyNayarValidityIssues(
       warning(
         "nayar-2016-pressure-out-of-range",
         "warning",
-        `${what}: sea pressure ${pressureDbar} dbar is outside 0–${Math.round((NAYAR_2016_MAX_PRESSURE_MPA - ATMOSPHERIC_PRESSURE_MPA) * 100)} dbar (12 MPa absolute).`,
+        `${what}: sea pressure ${pressureDbar} dbar is outside 0–${Math.round(maxSeaPressure)} dbar ` +
+          "(12 MPa absolute).",
         {
           parameter: `${what}.pressure`,
           value: pressureDbar,
-          range: [0, (NAYAR_2016_MAX_PRESSURE_MPA - ATMOSPHERIC_PRESSURE_MPA) * 100],
+          range: [0, maxSeaPressure],
           source,
           stage: "properties",
         },

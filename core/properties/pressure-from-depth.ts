@@ -63,7 +63,8 @@ export function pressureFromDepth(depthM: number, latitudeDeg: number = DEFAULT_
  * @returns depth, m (positive down)
  */
 export function depthFromPressure(pressureDbar: number, latitudeDeg: number = DEFAULT_LATITUDE_DEG): number {
-  const rhs = gibbsPressureIntegralTeos10(STANDARD_OCEAN_SALINITY, 0, pressureDbar) / gravityFromLatitude(latitudeDeg);
+  const integral = gibbsPressureIntegralTeos10(STANDARD_OCEAN_SALINITY, 0, pressureDbar);
+  const rhs = integral / gravityFromLatitude(latitudeDeg);
   // Solve d + ½γd² = rhs for the positive root (written to avoid cancellation).
   return (2 * rhs) / (1 + Math.sqrt(1 + 2 * GRAVITY_GRADIENT * rhs));
 }

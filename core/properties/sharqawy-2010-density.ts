@@ -25,7 +25,7 @@ export const SHARQAWY_2010_DENSITY_COEFFICIENTS = {
   b: [8.0200240891e2, -2.0005183488, 1.6771024982e-2, -3.0600536746e-5, -1.6132224742e-5],
 } as const;
 
-/** Stated validity of Eq. (8): 0–180 °C, 0–160 g/kg (paper, Table 2; CONFIRMED via the library's header). */
+/** Stated validity of Eq. (8): 0–180 °C, 0–160 g/kg (paper, Table 2; CONFIRMED via the library header). */
 export const SHARQAWY_2010_TEMPERATURE_RANGE: readonly [number, number] = [0, 180];
 export const SHARQAWY_2010_SALINITY_RANGE: readonly [number, number] = [0, 160];
 /** Stated accuracy of Eq. (8): ±0.1 % (paper). */
@@ -65,13 +65,24 @@ export function densitySharqawy2010ValidityIssues(
 ): ResultWarning[] {
   const out: ResultWarning[] = [];
   const source = "Sharqawy, Lienhard & Zubair (2010), Eq. (8) validity";
-  if (!Number.isFinite(salinity) || salinity < SHARQAWY_2010_SALINITY_RANGE[0] || salinity > SHARQAWY_2010_SALINITY_RANGE[1]) {
+  if (
+    !Number.isFinite(salinity) ||
+    salinity < SHARQAWY_2010_SALINITY_RANGE[0] ||
+    salinity > SHARQAWY_2010_SALINITY_RANGE[1]
+  ) {
     out.push(
       warning(
         "sharqawy-2010-salinity-out-of-range",
         "serious",
-        `${what}: salinity ${salinity} g/kg is outside the 0–160 g/kg range of the Sharqawy (2010) density fit.`,
-        { parameter: `${what}.salinity`, value: salinity, range: SHARQAWY_2010_SALINITY_RANGE, source, stage: "properties" },
+        `${what}: salinity ${salinity} g/kg is outside the 0–160 g/kg range of the Sharqawy (2010) ` +
+          "density fit.",
+        {
+          parameter: `${what}.salinity`,
+          value: salinity,
+          range: SHARQAWY_2010_SALINITY_RANGE,
+          source,
+          stage: "properties",
+        },
       ),
     );
   }
@@ -84,7 +95,8 @@ export function densitySharqawy2010ValidityIssues(
       warning(
         "sharqawy-2010-temperature-out-of-range",
         "serious",
-        `${what}: temperature ${temperature} °C is outside the 0–180 °C range of the Sharqawy (2010) density fit.`,
+        `${what}: temperature ${temperature} °C is outside the 0–180 °C range of the Sharqawy (2010) ` +
+          "density fit.",
         {
           parameter: `${what}.temperature`,
           value: temperature,

@@ -14,7 +14,7 @@ import { warning, type ResultWarning } from "../warnings";
 import { equationOfStateFor, type EquationOfState } from "./equation-of-state";
 import { pressureFromDepth } from "./pressure-from-depth";
 
-/** Standard acceleration of gravity, m/s² (CGPM 1901 conventional value; common practice, no source needed). */
+/** Standard acceleration of gravity, m/s² (CGPM 1901 conventional value; common practice, no source). */
 export const STANDARD_GRAVITY = 9.80665;
 
 export interface PropertiesStage {
@@ -36,7 +36,10 @@ export interface PropertiesStage {
  * @param profile points sorted by depth (at least one)
  * @param depth depth, m
  */
-export function profileAtDepth(profile: readonly ProfilePoint[], depth: number): { salinity: number; temperature: number } {
+export function profileAtDepth(
+  profile: readonly ProfilePoint[],
+  depth: number,
+): { salinity: number; temperature: number } {
   const first = profile[0];
   const last = profile[profile.length - 1];
   if (depth <= first.depth) return { salinity: first.salinity, temperature: first.temperature };
@@ -76,7 +79,12 @@ export function propertiesFromScenario(scenario: Scenario): PropertiesStage {
         "serious",
         `The port height ${diffuser.portHeight} m puts the port outside the ${waterDepth} m water column; ` +
           "densities are taken at the nearest point of the column.",
-        { parameter: "diffuser.portHeight", value: diffuser.portHeight, range: [0, waterDepth], stage: "properties" },
+        {
+          parameter: "diffuser.portHeight",
+          value: diffuser.portHeight,
+          range: [0, waterDepth],
+          stage: "properties",
+        },
       ),
     );
     portDepth = Math.min(Math.max(portDepth, 0), waterDepth);
@@ -97,13 +105,14 @@ export function propertiesFromScenario(scenario: Scenario): PropertiesStage {
   );
 
   const pressures = depths.map((d) => pressureFromDepth(d));
-  const densities = depths.map((_, i) => eos.density(states[i].salinity, states[i].temperature, pressures[i]));
+  const densities = states.map((s, i) => eos.density(s.salinity, s.temperature, pressures[i]));
   const portPressure = pressureFromDepth(portDepth);
   const dischargeDensity = eos.density(discharge.salinity, discharge.temperature, portPressure);
   const ambientDensityAtPort = eos.density(portState.salinity, portState.temperature, portPressure);
   const ambientSurface = eos.density(surfaceState.salinity, surfaceState.temperature, 0);
   const ambientBottom = densities[depths.length - 1];
-  const reducedGravity = (STANDARD_GRAVITY * (dischargeDensity - ambientDensityAtPort)) / ambientDensityAtPort;
+  const reducedGravity =
+    (STANDARD_GRAVITY * (dischargeDensity - ambientDensityAtPort)) / ambientDensityAtPort;
 
   warnings.push(...eos.validityIssues(discharge.salinity, discharge.temperature, portPressure, "discharge"));
   const seen = new Set(warnings.map((w) => `${w.code}|${w.parameter}`));

@@ -90,7 +90,12 @@ export function gibbsPressureIntegralTeos10(sa: number, t: number, p: number): n
  * @param p sea pressure, dbar
  * @param what label of the water concerned, e.g. "discharge"
  */
-export function densityTeos10ValidityIssues(sa: number, t: number, p: number, what = "water"): ResultWarning[] {
+export function densityTeos10ValidityIssues(
+  sa: number,
+  t: number,
+  p: number,
+  what = "water",
+): ResultWarning[] {
   const out: ResultWarning[] = [];
   const source = "TEOS-10 oceanographic range (IOC, SCOR & IAPSO 2010; GSW functions 0–42 g/kg)";
   const check = (name: string, value: number, range: readonly [number, number], unit: string) => {
@@ -106,7 +111,8 @@ export function densityTeos10ValidityIssues(sa: number, t: number, p: number, wh
         warning(
           `teos10-${name}-out-of-range`,
           "warning",
-          `${what}: ${name} ${value} ${unit} is outside the TEOS-10 range ${range[0]}–${range[1]} ${unit}; ` +
+          `${what}: ${name} ${value} ${unit} is outside the TEOS-10 range ` +
+            `${range[0]}–${range[1]} ${unit}; ` +
             "the density is an extrapolation.",
           { parameter: `${what}.${name}`, value, range, source, stage: "properties" },
         ),
