@@ -1,0 +1,50 @@
+/** Studies: comparisons, sweeps, design search and Monte Carlo — loops around the one pipeline. */
+export { Xoshiro128, streamFor, standardNormal, mix32, seedFromText } from "./random";
+export type { RandomSource } from "./random";
+export {
+  sampleDistribution,
+  resolveDistribution,
+  defaultUncertainInputs,
+  describeDistribution,
+  triangularQuantile,
+  DEFAULT_SPREADS_NOTE,
+} from "./distributions";
+export type { ResolvedDistribution } from "./distributions";
+export { quantile, quantileSorted, percentileSummary } from "./percentiles";
+export type { PercentileSummary } from "./percentiles";
+export { OVERRIDE_PATHS, OverrideError, withOverrides, withRawOverride, readPath, overrideIssue } from "./overrides";
+export type { Overrides } from "./overrides";
+export { expandCases, describeCases, scenarioForAmbient, SLACK_WATER_CASE } from "./cases";
+export type { StudyCase } from "./cases";
+export { summariseResult, worstIndex } from "./summary";
+export type { CaseSummary, Evaluator, MethodSummary } from "./summary";
+export { evaluatePoint, evaluatePoints, worstSummary } from "./evaluate-point";
+export type { PointEvaluation } from "./evaluate-point";
+export {
+  planMonteCarlo,
+  runMonteCarloChunk,
+  splitRuns,
+  summariseMonteCarlo,
+  mergeMonteCarloChunks,
+  samplesForRun,
+  histogram,
+} from "./montecarlo";
+export type { MonteCarloPlan, MonteCarloChunk, MonteCarloSummary, MonteCarloStats, MonteCarloSamples } from "./montecarlo";
+export { parseSweepAxis, axisFromParts, axisValues, sweepGrid, sweepRows, eosCrossings } from "./sweep";
+export type { SweepAxis, SweepRow, SweepGridPoint, EosCrossing } from "./sweep";
+export {
+  defaultConstraints,
+  designConstraintsFrom,
+  designCandidates,
+  candidateOverrides,
+  judgeDesign,
+  shortList,
+  designJson,
+  exitVelocity,
+} from "./design";
+export type { DesignConstraints, DesignCandidate, DesignVerdict, RankedDesign } from "./design";
+export { parseStudy, studyFileSchema, studyJsonSchema, STUDY_FORMAT, STUDY_VERSION } from "./study-file";
+export type { StudyFile, StudyIssue } from "./study-file";
+export { studyVariants, compareVariant, flattenRow, sortRows, columnsOf, WORST_CASE_ROW } from "./compare";
+export type { CompareRow, FlatRow, StudyVariant, ScenarioReader } from "./compare";
+export { evaluateScenario } from "./evaluate";

@@ -1,0 +1,85 @@
+/**
+ * The few numbers a study keeps from each pipeline run, and the evaluator protocol the study loops
+ * call. Studies only need a summary; the full result stays available to whoever runs one scenario.
+ */
+import type { BrinefieldResult } from "../result/contract";
+import type { Scenario } from "../scenario/types";
+
+export interface MethodSummary {
+  readonly method: string;
+  /** Upper edge of the jet above the port, m. */
+  readonly maxRiseHeight: number | null;
+  readonly impactDistance: number | null;
+  readonly impactDilution: number | null;
+}
+
+export interface CaseSummary {
+  readonly edgeDilution: number;
+  readonly requiredDilution: number;
+  /** Edge dilution ÷ required dilution (≥ 1 passes). */
+  readonly margin: number;
+  readonly pass: boolean;
+  readonly governingConstituent: string;
+  readonly equationOfState: string;
+  readonly warningCount: number;
+  readonly seriousWarningCount: number;
+  readonly exitVelocity: number;
+  readonly froude: number;
+  /** True when any near-field method puts the jet's upper edge at or above the water surface. */
+  readonly reachesSurface: boolean;
+  /** Water depth minus (port height + max rise), m: the smallest over methods (negative = surfaces). */
+  readonly surfaceClearance: number | null;
+  readonly methods: readonly MethodSummary[];
+}
+
+/** Runs one scenario (one ambient, no cases) and returns its summary. */
+export type Evaluator = (scenario: Scenario) => CaseSummary;
+
+const SURFACE_CODES = new Set(["jet-reaches-surface", "surface-contact"]);
+
+export function summariseResult(result: BrinefieldResult, scenario: Scenario): CaseSummary {
+  const methods = result.nearField.map((m) => ({
+    method: m.method,
+    maxRiseHeight: m.maxRiseHeight,
+    impactDistance: m.impactDistance,
+    impactDilution: m.impactDilution,
+  }));
+  let clearance: number | null = null;
+  for (const m of methods) {
+    if (m.maxRiseHeight === null) continue;
+    const c = scenario.ambient.depth - (scenario.diffuser.portHeight + m.maxRiseHeight);
+    clearance = clearance === null ? c : Math.min(clearance, c);
+  }
+  const surfaceWarning =
+    result.warnings.some((w) => SURFACE_CODES.has(w.code)) ||
+    result.nearField.some((m) => m.warnings.some((w) => SURFACE_CODES.has(w.code)));
+  return {
+    edgeDilution: result.mixingZone.dilution,
+    requiredDilution: result.compliance.requiredDilution,
+    margin: result.compliance.margin,
+    pass: result.compliance.pass,
+    governingConstituent: result.compliance.governingConstituent,
+    equationOfState: result.densities.equationOfState.name,
+    warningCount: result.warnings.length,
+    seriousWarningCount: result.warnings.filter((w) => w.severity === "serious").length,
+    exitVelocity: result.port.velocity,
+    froude: result.port.froude,
+    reachesSurface: surfaceWarning || (clearance !== null && clearance <= 0),
+    surfaceClearance: clearance,
+    methods,
+  };
+}
+
+/** Index of the governing (lowest-margin) summary; ties go to the first. */
+export function worstIndex(summaries: readonly CaseSummary[]): number {
+  let worst = 0;
+  for (let i = 1; i < summaries.length; i++) {
+    if (marginKey(summaries[i]!) < marginKey(summaries[worst]!)) worst = i;
+  }
+  return worst;
+}
+
+/** NaN margins (failed runs) sort as worst. */
+function marginKey(s: CaseSummary): number {
+  return Number.isNaN(s.margin) ? Number.NEGATIVE_INFINITY : s.margin;
+}
