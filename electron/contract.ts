@@ -34,6 +34,8 @@ export type HostResponse =
 export type MenuCommand =
   | "new"
   | "open"
+  /** Sent with the chosen path as the second argument; the renderer answers with `open-path`. */
+  | "open-recent"
   | "save"
   | "save-as"
   | "export-report"
@@ -46,6 +48,7 @@ export type MenuCommand =
 
 export interface BrinefieldHost {
   invoke(request: HostRequest): Promise<HostResponse>;
-  onMenu(listener: (command: MenuCommand) => void): () => void;
+  /** `path` is set only for "open-recent" (additive: listeners may ignore it). */
+  onMenu(listener: (command: MenuCommand, path?: string) => void): () => void;
   readonly platform: string;
 }

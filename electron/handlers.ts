@@ -1,0 +1,276 @@
+/**
+ * What main does for each `HostRequest`, with every Electron API injected so the logic runs in unit
+ * tests (tests/electron/handlers.test.ts). `handle()` never throws: a bad sender, a malformed payload
+ * or a failed file operation all become `{ kind: "error", message }`.
+ *
+ * Path policy: main reads or overwrites only files the user chose in a native dialog during this
+ * session or that are on the recent-files list. A renderer that asks for any other path gets an error
+ * (open) or a Save dialog (save), so a compromised page cannot read or clobber arbitrary files.
+ */
+import { dirname, extname, join, resolve } from "node:path";
+import type { FileFilter, HostRequest, HostResponse } from "./contract";
+import {
+  MAX_SCENARIO_BYTES,
+  type AutosaveStore,
+  type RecentFilesStore,
+  describeFileError,
+  readJsonTextFile,
+  samePath,
+  writeFileAtomic,
+} from "./fileStore";
+import { parseHostRequest } from "./requestSchema";
+
+/** Who sent an IPC message, reduced to plain values by main.ts. */
+export interface IpcSender {
+  /** `event.sender.id`. */
+  readonly webContentsId: number;
+  /** `event.senderFrame.url` (empty when the frame is gone). */
+  readonly frameUrl: string;
+  /** Whether the sending frame is the top-level frame of its page. */
+  readonly isMainFrame: boolean;
+}
+
+export interface TrustedRenderer {
+  /** The main window's `webContents.id`, or null before the window exists. */
+  readonly webContentsId: number | null;
+  /** file:// URL of dist/renderer/index.html. */
+  readonly indexUrl: string;
+}
+
+/** Accept only the main window's top frame showing our own index.html over file://. */
+export function isTrustedSender(sender: IpcSender, trusted: TrustedRenderer): boolean {
+  if (trusted.webContentsId === null || sender.webContentsId !== trusted.webContentsId) return false;
+  if (!sender.isMainFrame) return false;
+  let actual: URL;
+  let expected: URL;
+  try {
+    actual = new URL(sender.frameUrl);
+    expected = new URL(trusted.indexUrl);
+  } catch {
+    return false;
+  }
+  // Query and hash are the renderer's own state; scheme, host and path must match exactly.
+  return (
+    actual.protocol === "file:" &&
+    expected.protocol === "file:" &&
+    actual.host === expected.host &&
+    decodeURIComponent(actual.pathname) === decodeURIComponent(expected.pathname)
+  );
+}
+
+export interface SaveDialogOptions {
+  readonly title: string;
+  readonly defaultPath: string;
+  readonly filters: readonly FileFilter[];
+}
+
+export interface HostHandlerDeps {
+  trustedRenderer(): TrustedRenderer;
+  /** Native Open dialog for scenarios; resolves to the chosen path or null when cancelled. */
+  showOpenDialog(options: { title: string; defaultPath: string; filters: readonly FileFilter[] }): Promise<string | null>;
+  /** Native Save dialog; resolves to the chosen path or null when cancelled. */
+  showSaveDialog(options: SaveDialogOptions): Promise<string | null>;
+  /** `webContents.printToPDF` of the main window. */
+  printToPdf(): Promise<Uint8Array>;
+  readonly recent: RecentFilesStore;
+  readonly autosave: AutosaveStore;
+  /** Folder dialogs start in before the user has picked one (the Documents folder). */
+  readonly documentsDir: string;
+  setDocumentState(state: { dirty: boolean; title: string }): void;
+  /** Called after the recent list changed (main rebuilds the Open Recent menu). */
+  onRecentChanged?(paths: readonly string[]): void;
+  /** Called with the result of every save-file request (the close guard listens). */
+  onSaveResult?(response: HostResponse): void;
+  /** Diagnostics for rejected requests; defaults to nothing. */
+  log?(message: string): void;
+  readonly platform?: NodeJS.Platform;
+}
+
+export interface HostHandlers {
+  handle(sender: IpcSender, payload: unknown): Promise<HostResponse>;
+  /** Allow main to read/write `path` (the user picked it, e.g. from the Open Recent menu). */
+  grantPath(path: string): void;
+  isGranted(path: string): Promise<boolean>;
+}
+
+export const SCENARIO_FILTERS: readonly FileFilter[] = [
+  { name: "Brinefield scenario", extensions: ["json"] },
+  { name: "All files", extensions: ["*"] },
+];
+
+/**
+ * Linux save dialogs do not add the filter's extension; add it when the chosen name has none and the
+ * first filter names exactly one concrete extension.
+ */
+export function ensureExtension(path: string, filters: readonly FileFilter[]): string {
+  if (extname(path) !== "") return path;
+  const first = filters[0]?.extensions;
+  if (!first || first.length !== 1 || first[0] === "*") return path;
+  return `${path}.${first[0]}`;
+}
+
+export function createHostHandlers(deps: HostHandlerDeps): HostHandlers {
+  const platform = deps.platform ?? process.platform;
+  const granted: string[] = [];
+  let lastDir: string | null = null;
+  const log = deps.log ?? (() => undefined);
+
+  const grantPath = (path: string) => {
+    const full = resolve(path);
+    if (!granted.some((p) => samePath(p, full, platform))) granted.push(full);
+    lastDir = dirname(full);
+  };
+
+  async function isGranted(path: string): Promise<boolean> {
+    if (granted.some((p) => samePath(p, path, platform))) return true;
+    const recent = await deps.recent.list();
+    return recent.some((p) => samePath(p, path, platform));
+  }
+
+  async function rememberRecent(path: string): Promise<void> {
+    try {
+      const paths = await deps.recent.add(path);
+      deps.onRecentChanged?.(paths);
+    } catch (error) {
+      // The file itself is fine; a broken recent list must not turn a good open/save into an error.
+      log(`recent-files update failed: ${error instanceof Error ? error.message : String(error)}`);
+    }
+  }
+
+  const startDir = () => lastDir ?? deps.documentsDir;
+
+  async function openPath(path: string): Promise<HostResponse> {
+    const read = await readJsonTextFile(path, { maxBytes: MAX_SCENARIO_BYTES, label: "scenario" });
+    if (!read.ok) return { kind: "error", message: read.message };
+    grantPath(path);
+    await rememberRecent(path);
+    return { kind: "opened", path: resolve(path), text: read.text };
+  }
+
+  async function writeTo(path: string, data: string | Uint8Array): Promise<HostResponse> {
+    try {
+      await writeFileAtomic(path, data, { platform });
+      return { kind: "saved", path };
+    } catch (error) {
+      return { kind: "error", message: describeFileError(error, path, "save") };
+    }
+  }
+
+  async function dispatch(request: HostRequest): Promise<HostResponse> {
+    switch (request.kind) {
+      case "open-scenario": {
+        const path = await deps.showOpenDialog({ title: "Open scenario", defaultPath: startDir(), filters: SCENARIO_FILTERS });
+        return path === null ? { kind: "cancelled" } : openPath(path);
+      }
+      case "open-path": {
+        if (!(await isGranted(request.path))) {
+          return { kind: "error", message: "That file was not chosen in an Open dialog or from the recent files." };
+        }
+        const response = await openPath(request.path);
+        if (response.kind === "error") {
+          // A recent entry that no longer opens is dropped from the list.
+          try {
+            deps.onRecentChanged?.(await deps.recent.list());
+          } catch {
+            // Listing is best effort here.
+          }
+        }
+        return response;
+      }
+      case "save-file": {
+        let target = request.path !== null && (await isGranted(request.path)) ? resolve(request.path) : null;
+        if (target === null) {
+          const filters = request.filters.length > 0 ? request.filters : SCENARIO_FILTERS;
+          const chosen = await deps.showSaveDialog({
+            title: "Save scenario",
+            defaultPath: join(startDir(), request.suggestedName),
+            filters,
+          });
+          if (chosen === null) return { kind: "cancelled" };
+          target = ensureExtension(resolve(chosen), filters);
+        }
+        const response = await writeTo(target, request.text);
+        if (response.kind === "saved") {
+          grantPath(target);
+          await rememberRecent(target);
+        }
+        return response;
+      }
+      case "export-file": {
+        const chosen = await deps.showSaveDialog({
+          title: "Export",
+          defaultPath: join(startDir(), request.suggestedName),
+          filters: request.filters,
+        });
+        if (chosen === null) return { kind: "cancelled" };
+        const target = ensureExtension(resolve(chosen), request.filters);
+        const response = await writeTo(target, request.text);
+        if (response.kind === "saved") lastDir = dirname(target);
+        return response;
+      }
+      case "print-pdf": {
+        const pdfFilters: FileFilter[] = [{ name: "PDF document", extensions: ["pdf"] }];
+        const name = extname(request.suggestedName).toLowerCase() === ".pdf" ? request.suggestedName : `${request.suggestedName}.pdf`;
+        const chosen = await deps.showSaveDialog({ title: "Print to PDF", defaultPath: join(startDir(), name), filters: pdfFilters });
+        if (chosen === null) return { kind: "cancelled" };
+        const target = ensureExtension(resolve(chosen), pdfFilters);
+        let pdf: Uint8Array;
+        try {
+          pdf = await deps.printToPdf();
+        } catch (error) {
+          const detail = error instanceof Error ? error.message.split("\n")[0] : String(error);
+          return { kind: "error", message: `Could not print to PDF: ${detail}` };
+        }
+        const response = await writeTo(target, pdf);
+        if (response.kind === "saved") lastDir = dirname(target);
+        return response;
+      }
+      case "recent-files":
+        return { kind: "recent", paths: await deps.recent.list() };
+      case "autosave-write": {
+        try {
+          await deps.autosave.write(request.text);
+          return { kind: "ok" };
+        } catch (error) {
+          const detail = error instanceof Error ? error.message.split("\n")[0] : String(error);
+          return { kind: "error", message: `Autosave failed: ${detail}` };
+        }
+      }
+      case "autosave-read": {
+        const entry = await deps.autosave.read();
+        return { kind: "autosave", text: entry?.text ?? null, savedAt: entry?.savedAt ?? null };
+      }
+      case "autosave-clear":
+        await deps.autosave.clear();
+        return { kind: "ok" };
+      case "set-document-state":
+        deps.setDocumentState({ dirty: request.dirty, title: request.title });
+        return { kind: "ok" };
+    }
+  }
+
+  return {
+    grantPath,
+    isGranted,
+    async handle(sender, payload) {
+      if (!isTrustedSender(sender, deps.trustedRenderer())) {
+        log(`rejected IPC from untrusted sender ${sender.frameUrl.slice(0, 200)}`);
+        return { kind: "error", message: "Rejected host request: it did not come from the Brinefield window." };
+      }
+      const parsed = parseHostRequest(payload);
+      if (!parsed.ok) {
+        log(parsed.message);
+        return { kind: "error", message: parsed.message };
+      }
+      let response: HostResponse;
+      try {
+        response = await dispatch(parsed.request);
+      } catch (error) {
+        const detail = error instanceof Error ? error.message.split("\n")[0] : String(error);
+        response = { kind: "error", message: `The app could not complete “${parsed.request.kind}”: ${detail}` };
+      }
+      if (parsed.request.kind === "save-file") deps.onSaveResult?.(response);
+      return response;
+    },
+  };
+}
