@@ -130,7 +130,7 @@ export function summaryText(s: Scenario, r: BrinefieldResult): string {
     out.push(
       table([
         ["Constituent", "limit", "required dilution", "edge dilution", "margin", "verdict"],
-        ...c.constituents.map((x) => [x.constituent, x.limit, n(x.requiredDilution), n(x.edgeDilution), n(x.margin), x.pass ? "meets" : "does not meet"]),
+        ...c.constituents.map((x) => [x.constituent, x.limit.replace(/\s*\(.*$/s, ""), n(x.requiredDilution), n(x.edgeDilution), n(x.margin), x.pass ? "meets" : "does not meet"]),
       ]),
     );
   }

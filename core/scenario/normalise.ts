@@ -145,7 +145,8 @@ function parseLimitValue(
   const u = m[2]!.trim();
   if (u === "" || u === unit) return value;
   const key = constituent.toLowerCase();
-  if (key === "salinity" && /^(psu|pss)$/i.test(u)) return isIncrease ? absoluteSalinityFromPractical(value) : absoluteSalinityFromPractical(value);
+  // Practical-salinity values and increments both scale by the reference-composition factor (linear).
+  if (key === "salinity" && /^(psu|pss)$/i.test(u)) return absoluteSalinityFromPractical(value);
   if (key === "salinity" && /^(g\/kg|ppt|‰)$/i.test(u)) return value;
   if (key === "temperature" && isIncrease) {
     // A temperature increase is a difference: 1 °F of difference is 5/9 K (exact).
