@@ -1,0 +1,108 @@
+/**
+ * CSV exports of a result: key results (one row per near-field method and per constituent at the
+ * mixing-zone edge) and the dilution-against-distance series. Numbers are written at full precision
+ * (JavaScript's shortest round-trip form) so a CSV parses back to exactly the result's numbers.
+ */
+import { csvFormat } from "d3-dsv";
+import type { BrinefieldResult } from "../result/contract";
+
+/** Column order of `resultCsv`; units are in the column names. */
+export const RESULT_CSV_COLUMNS = [
+  "scenario",
+  "inputs_hash",
+  "section",
+  "name",
+  "source",
+  "max_rise_height_m",
+  "max_rise_distance_m",
+  "return_distance_m",
+  "impact_distance_m",
+  "impact_dilution",
+  "impact_dilution_low",
+  "impact_dilution_high",
+  "near_field_distance_m",
+  "near_field_dilution",
+  "entrained_flow_m3_s",
+  "unit",
+  "edge_radius_m",
+  "edge_dilution",
+  "discharge_concentration",
+  "background_concentration",
+  "edge_concentration",
+  "edge_increase",
+  "required_dilution",
+  "margin",
+  "pass",
+] as const;
+
+export const SERIES_CSV_COLUMNS = [
+  "distance_m",
+  "dilution",
+  "salinity_increase_g_kg",
+  "layer_thickness_m",
+  "stage",
+] as const;
+
+type Row = Partial<Record<(typeof RESULT_CSV_COLUMNS)[number], string>>;
+
+function num(value: number | null | undefined): string {
+  return value === null || value === undefined || !Number.isFinite(value) ? "" : String(value);
+}
+
+/** Key results: one row per near-field method, then one per constituent at the mixing-zone edge. */
+export function resultCsv(result: BrinefieldResult): string {
+  const rows: Row[] = [];
+  const common = { scenario: result.scenarioName, inputs_hash: result.inputsHash };
+  for (const m of result.nearField) {
+    rows.push({
+      ...common,
+      section: "near-field",
+      name: m.method,
+      source: m.source,
+      max_rise_height_m: num(m.maxRiseHeight),
+      max_rise_distance_m: num(m.maxRiseDistance),
+      return_distance_m: num(m.returnDistance),
+      impact_distance_m: num(m.impactDistance),
+      impact_dilution: num(m.impactDilution),
+      impact_dilution_low: num(m.dilutionRange?.[0]),
+      impact_dilution_high: num(m.dilutionRange?.[1]),
+      near_field_distance_m: num(m.nearFieldDistance),
+      near_field_dilution: num(m.nearFieldDilution),
+      entrained_flow_m3_s: num(m.entrainedFlow),
+    });
+  }
+  const mz = result.mixingZone;
+  for (const c of mz.constituents) {
+    const check = result.compliance.constituents.find((k) => k.constituent === c.constituent);
+    rows.push({
+      ...common,
+      section: "mixing-zone-edge",
+      name: c.constituent,
+      source: mz.method,
+      unit: c.unit,
+      edge_radius_m: num(mz.radius),
+      edge_dilution: num(mz.dilution),
+      discharge_concentration: num(c.discharge),
+      background_concentration: num(c.background),
+      edge_concentration: num(c.concentration),
+      edge_increase: num(c.increase),
+      required_dilution: num(check?.requiredDilution),
+      margin: num(check?.margin),
+      pass: check ? String(check.pass) : "",
+    });
+  }
+  return csvFormat(rows, [...RESULT_CSV_COLUMNS]);
+}
+
+/** Dilution, salinity increase and layer thickness against plan distance from the diffuser. */
+export function seriesCsv(result: BrinefieldResult): string {
+  const s = result.mixingZone.series;
+  const rows = s.distance.map((d, i) => ({
+    distance_m: num(d),
+    dilution: num(s.dilution[i]),
+    salinity_increase_g_kg: num(s.salinityIncrease[i]),
+    layer_thickness_m: num(s.layerThickness[i]),
+    stage: s.stage[i] ?? "",
+  }));
+  return csvFormat(rows, [...SERIES_CSV_COLUMNS]);
+}

@@ -1,0 +1,276 @@
+/**
+ * The report's two figures as inline SVG strings built by hand (no chart library in core):
+ * the side view of the jet(s) and dilution against distance. Coordinates: x = plan distance from the
+ * port along the discharge, m; y = elevation above the seabed, m. SVG y grows downward, so every
+ * vertical value passes through `sy()`.
+ */
+import type { NearFieldMethodResult } from "../nearfield/types";
+import type { MixingZoneResult } from "../result/contract";
+import { escapeHtml, reportNumber } from "./format";
+
+const FONT = `font-family="Helvetica, Arial, sans-serif"`;
+const METHOD_COLOURS: Readonly<Record<string, string>> = {
+  "length-scale": "#b45309",
+  integral: "#1d4ed8",
+};
+const STAGE_COLOURS: Readonly<Record<string, string>> = {
+  jet: "#1d4ed8",
+  "spreading-layer": "#0f766e",
+  "passive-diffusion": "#7c3aed",
+};
+
+/** "Nice" linear ticks covering [min, max] (1, 2, 5 × 10ⁿ steps). */
+export function linearTicks(min: number, max: number, count = 6): number[] {
+  if (!(max > min)) return [min];
+  const raw = (max - min) / count;
+  const power = Math.pow(10, Math.floor(Math.log10(raw)));
+  const step = [1, 2, 5, 10].map((m) => m * power).find((s) => s >= raw) ?? 10 * power;
+  const ticks: number[] = [];
+  // Round to the step's decimals so 0.30000000000000004 prints as 0.3.
+  const decimals = Math.max(0, -Math.floor(Math.log10(step)));
+  for (let t = Math.ceil(min / step) * step; t <= max + step * 1e-9; t += step) ticks.push(Number(t.toFixed(decimals)));
+  return ticks;
+}
+
+/** Ticks at 1, 2, 5 × 10ⁿ between min and max (both > 0). */
+export function logTicks(min: number, max: number): number[] {
+  const ticks: number[] = [];
+  for (let p = Math.floor(Math.log10(min)); p <= Math.ceil(Math.log10(max)); p++) {
+    for (const m of [1, 2, 5]) {
+      const t = m * Math.pow(10, p);
+      if (t >= min * (1 - 1e-9) && t <= max * (1 + 1e-9)) ticks.push(t);
+    }
+  }
+  return ticks;
+}
+
+interface Frame {
+  readonly width: number;
+  readonly height: number;
+  readonly left: number;
+  readonly right: number;
+  readonly top: number;
+  readonly bottom: number;
+}
+
+const FRAME: Frame = { width: 680, height: 300, left: 58, right: 18, top: 22, bottom: 44 };
+
+function plotWidth(f: Frame): number {
+  return f.width - f.left - f.right;
+}
+function plotHeight(f: Frame): number {
+  return f.height - f.top - f.bottom;
+}
+
+function n(value: number): string {
+  return (Math.round(value * 10) / 10).toString();
+}
+
+/** Catmull–Rom spline through the points as SVG cubic Bézier segments (smooth line through key points). */
+function smoothPath(points: readonly (readonly [number, number])[]): string {
+  if (points.length === 0) return "";
+  const [first] = points;
+  let d = `M${n(first![0])},${n(first![1])}`;
+  for (let i = 0; i < points.length - 1; i++) {
+    const p0 = points[Math.max(0, i - 1)]!;
+    const p1 = points[i]!;
+    const p2 = points[i + 1]!;
+    const p3 = points[Math.min(points.length - 1, i + 2)]!;
+    const c1 = [p1[0] + (p2[0] - p0[0]) / 6, p1[1] + (p2[1] - p0[1]) / 6];
+    const c2 = [p2[0] - (p3[0] - p1[0]) / 6, p2[1] - (p3[1] - p1[1]) / 6];
+    d += ` C${n(c1[0]!)},${n(c1[1]!)} ${n(c2[0]!)},${n(c2[1]!)} ${n(p2[0])},${n(p2[1])}`;
+  }
+  return d;
+}
+
+function polyline(points: readonly (readonly [number, number])[]): string {
+  return points.map(([x, y], i) => `${i === 0 ? "M" : "L"}${n(x)},${n(y)}`).join(" ");
+}
+
+export interface SideViewInput {
+  readonly nearField: readonly NearFieldMethodResult[];
+  /** Water depth at the diffuser, m (null when the scenario could not be read). */
+  readonly depth: number | null;
+  /** Port height above the seabed, m. */
+  readonly portHeight: number | null;
+  /** Port angle above horizontal, degrees. */
+  readonly portAngle: number | null;
+}
+
+/** Points (plan distance, elevation above seabed) of one method's centreline, as drawn. */
+export function sideViewPoints(method: NearFieldMethodResult, portHeight: number): [number, number][] {
+  if (method.path && method.path.length > 1) {
+    return method.path.map((p) => [Math.hypot(p.x, p.y), portHeight + p.z]);
+  }
+  // Length-scale laws give key points only: port, maximum rise, return to port level, seabed impact.
+  const points: [number, number][] = [[0, portHeight]];
+  if (method.maxRiseDistance !== null && method.maxRiseHeight !== null) {
+    points.push([method.maxRiseDistance, portHeight + method.maxRiseHeight]);
+  }
+  if (method.returnDistance !== null) points.push([method.returnDistance, portHeight]);
+  if (method.impactDistance !== null && (method.returnDistance === null || method.impactDistance > method.returnDistance)) {
+    points.push([method.impactDistance, 0]);
+  }
+  return points;
+}
+
+/** Side view: seabed, surface, port, each method's centreline and its impact point. */
+export function sideViewSvg(input: SideViewInput): string {
+  const f = FRAME;
+  const hp = input.portHeight ?? 0;
+  const lines = input.nearField.map((m) => ({ method: m, points: sideViewPoints(m, hp) }));
+  let xMax = 1;
+  let yMax = input.depth ?? 1;
+  for (const { method, points } of lines) {
+    for (const [x, y] of points) {
+      xMax = Math.max(xMax, x);
+      yMax = Math.max(yMax, y);
+    }
+    if (method.nearFieldDistance !== null && method.nearFieldDistance < 3 * xMax) xMax = Math.max(xMax, method.nearFieldDistance);
+  }
+  xMax *= 1.08;
+  yMax *= 1.05;
+  const sx = (x: number) => f.left + (x / xMax) * plotWidth(f);
+  const sy = (y: number) => f.top + plotHeight(f) - (y / yMax) * plotHeight(f);
+  const parts: string[] = [];
+  // Water, seabed and surface.
+  if (input.depth !== null) {
+    parts.push(`<rect x="${n(sx(0))}" y="${n(sy(input.depth))}" width="${n(plotWidth(f))}" height="${n(sy(0) - sy(input.depth))}" fill="#eef6fb"/>`);
+    parts.push(`<line x1="${n(sx(0))}" y1="${n(sy(input.depth))}" x2="${n(sx(xMax))}" y2="${n(sy(input.depth))}" stroke="#0369a1" stroke-width="1.2"/>`);
+    parts.push(`<text x="${n(sx(xMax) - 4)}" y="${n(sy(input.depth) - 4)}" text-anchor="end" font-size="10" fill="#0369a1" ${FONT}>water surface (depth ${escapeHtml(reportNumber(input.depth))} m)</text>`);
+  }
+  parts.push(`<rect x="${n(sx(0))}" y="${n(sy(0))}" width="${n(plotWidth(f))}" height="6" fill="#d6c7a1"/>`);
+  parts.push(`<line x1="${n(sx(0))}" y1="${n(sy(0))}" x2="${n(sx(xMax))}" y2="${n(sy(0))}" stroke="#7c6a3c" stroke-width="1.4"/>`);
+  // Axes and ticks.
+  parts.push(...axisTicks(linearTicks(0, xMax), (t) => sx(t), sy(0) + 6, "x"));
+  parts.push(...axisTicks(linearTicks(0, yMax, 5), (t) => sy(t), sx(0), "y"));
+  parts.push(`<text x="${n(f.left + plotWidth(f) / 2)}" y="${f.height - 6}" text-anchor="middle" font-size="11" ${FONT}>plan distance from the port (m)</text>`);
+  parts.push(`<text transform="translate(14 ${n(f.top + plotHeight(f) / 2)}) rotate(-90)" text-anchor="middle" font-size="11" ${FONT}>height above seabed (m)</text>`);
+  // Riser and port.
+  parts.push(`<line x1="${n(sx(0))}" y1="${n(sy(0))}" x2="${n(sx(0))}" y2="${n(sy(hp))}" stroke="#334155" stroke-width="3"/>`);
+  parts.push(`<circle cx="${n(sx(0))}" cy="${n(sy(hp))}" r="3" fill="#334155"/>`);
+  // Centrelines.
+  lines.forEach(({ method, points }, i) => {
+    const colour = METHOD_COLOURS[method.method] ?? "#475569";
+    const screen = points.map(([x, y]) => [sx(x), sy(y)] as const);
+    const d = method.path && method.path.length > 1 ? polyline(screen) : smoothPath(screen);
+    const dash = method.path && method.path.length > 1 ? "" : ` stroke-dasharray="6 3"`;
+    parts.push(`<path d="${d}" fill="none" stroke="${colour}" stroke-width="2"${dash}/>`);
+    if (method.impactDistance !== null) {
+      parts.push(`<circle cx="${n(sx(method.impactDistance))}" cy="${n(sy(0))}" r="3.5" fill="${colour}"/>`);
+    }
+    if (method.maxRiseHeight !== null) {
+      const xr = method.maxRiseDistance ?? 0;
+      parts.push(`<line x1="${n(sx(xr) - 5)}" y1="${n(sy(hp + method.maxRiseHeight))}" x2="${n(sx(xr) + 5)}" y2="${n(sy(hp + method.maxRiseHeight))}" stroke="${colour}" stroke-width="1.5"/>`);
+    }
+    const label = `${method.method}${method.path && method.path.length > 1 ? " (computed centreline)" : " (key points joined; bar = upper edge at max rise)"}`;
+    parts.push(`<line x1="${f.left + 10}" y1="${f.top + 10 + i * 14}" x2="${f.left + 34}" y2="${f.top + 10 + i * 14}" stroke="${colour}" stroke-width="2"${dash}/>`);
+    parts.push(`<text x="${f.left + 40}" y="${f.top + 14 + i * 14}" font-size="10" ${FONT}>${escapeHtml(label)}</text>`);
+  });
+  const ve = (plotHeight(f) / yMax) / (plotWidth(f) / xMax);
+  const veText = Math.abs(ve - 1) > 0.05 ? `vertical exaggeration ×${reportNumber(Number(ve.toPrecision(2)))}` : "true scale";
+  parts.push(`<text x="${f.width - f.right}" y="${f.height - 6}" text-anchor="end" font-size="9" fill="#64748b" ${FONT}>${escapeHtml(veText)}</text>`);
+  return svgWrap(parts, "Side view of the jet centrelines above the seabed");
+}
+
+function axisTicks(ticks: readonly number[], pos: (t: number) => number, base: number, axis: "x" | "y"): string[] {
+  return ticks.map((t) => {
+    const p = pos(t);
+    const label = escapeHtml(reportNumber(t));
+    return axis === "x"
+      ? `<line x1="${n(p)}" y1="${n(base)}" x2="${n(p)}" y2="${n(base + 4)}" stroke="#334155"/><text x="${n(p)}" y="${n(base + 15)}" text-anchor="middle" font-size="10" ${FONT}>${label}</text>`
+      : `<line x1="${n(base - 4)}" y1="${n(p)}" x2="${n(base)}" y2="${n(p)}" stroke="#334155"/><text x="${n(base - 6)}" y="${n(p + 3.5)}" text-anchor="end" font-size="10" ${FONT}>${label}</text>`;
+  });
+}
+
+function gridLines(ticks: readonly number[], pos: (t: number) => number, f: Frame, axis: "x" | "y"): string[] {
+  return ticks.map((t) =>
+    axis === "x"
+      ? `<line x1="${n(pos(t))}" y1="${f.top}" x2="${n(pos(t))}" y2="${f.top + plotHeight(f)}" stroke="#e2e8f0"/>`
+      : `<line x1="${f.left}" y1="${n(pos(t))}" x2="${f.left + plotWidth(f)}" y2="${n(pos(t))}" stroke="#e2e8f0"/>`,
+  );
+}
+
+function svgWrap(parts: readonly string[], title: string): string {
+  const f = FRAME;
+  return (
+    `<svg xmlns="http://www.w3.org/2000/svg" viewBox="0 0 ${f.width} ${f.height}" width="100%" role="img" aria-label="${escapeHtml(title)}">` +
+    `<title>${escapeHtml(title)}</title>${parts.join("")}</svg>`
+  );
+}
+
+export interface DilutionChartInput {
+  readonly mixingZone: MixingZoneResult;
+  /** Dilution the governing limit requires at the edge (null when no limit was set). */
+  readonly requiredDilution: number | null;
+}
+
+/** Centreline dilution against plan distance (log axis when it spans more than a decade), edge and limit marked. */
+export function dilutionChartSvg(input: DilutionChartInput): string {
+  const f = FRAME;
+  const { series, radius, dilution } = input.mixingZone;
+  const pts: { x: number; y: number; stage: string }[] = [];
+  for (let i = 0; i < series.distance.length; i++) {
+    const x = series.distance[i]!;
+    const y = series.dilution[i]!;
+    // Dilution below 1 is unphysical and cannot sit on a log axis; such points are left out of the drawing.
+    if (Number.isFinite(x) && Number.isFinite(y) && y >= 1) pts.push({ x, y, stage: series.stage[i] ?? "" });
+  }
+  const xMax = Math.max(radius, ...pts.map((p) => p.x), 1) * 1.05;
+  const ys = [...pts.map((p) => p.y), dilution, ...(input.requiredDilution !== null ? [input.requiredDilution] : [])].filter(
+    (v) => Number.isFinite(v) && v >= 1,
+  );
+  const yLo = Math.max(1, Math.min(...ys, 10) / 1.3);
+  const yHi = Math.max(...ys, 2) * 1.3;
+  const useLog = yHi / yLo > 10;
+  const sx = (x: number) => f.left + (x / xMax) * plotWidth(f);
+  const sy = useLog
+    ? (y: number) => f.top + plotHeight(f) * (1 - (Math.log(y) - Math.log(yLo)) / (Math.log(yHi) - Math.log(yLo)))
+    : (y: number) => f.top + plotHeight(f) * (1 - (y - 0) / yHi);
+  const yTicks = useLog ? logTicks(yLo, yHi) : linearTicks(0, yHi, 5);
+  const xTicks = linearTicks(0, xMax);
+  const parts: string[] = [];
+  parts.push(...gridLines(xTicks, sx, f, "x"), ...gridLines(yTicks, sy, f, "y"));
+  parts.push(`<rect x="${f.left}" y="${f.top}" width="${plotWidth(f)}" height="${plotHeight(f)}" fill="none" stroke="#94a3b8"/>`);
+  parts.push(...axisTicks(xTicks, sx, f.top + plotHeight(f), "x"), ...axisTicks(yTicks, sy, f.left, "y"));
+  parts.push(`<text x="${n(f.left + plotWidth(f) / 2)}" y="${f.height - 6}" text-anchor="middle" font-size="11" ${FONT}>plan distance from the diffuser (m)</text>`);
+  parts.push(`<text transform="translate(14 ${n(f.top + plotHeight(f) / 2)}) rotate(-90)" text-anchor="middle" font-size="11" ${FONT}>centreline dilution${useLog ? " (log scale)" : ""}</text>`);
+  // Required dilution and the mixing-zone edge.
+  if (input.requiredDilution !== null && Number.isFinite(input.requiredDilution) && input.requiredDilution >= 1) {
+    const y = sy(input.requiredDilution);
+    parts.push(`<line x1="${f.left}" y1="${n(y)}" x2="${f.left + plotWidth(f)}" y2="${n(y)}" stroke="#b91c1c" stroke-width="1.4" stroke-dasharray="7 4"/>`);
+    parts.push(`<text x="${f.left + plotWidth(f) - 4}" y="${n(y - 4)}" text-anchor="end" font-size="10" fill="#b91c1c" ${FONT}>required dilution ${escapeHtml(reportNumber(input.requiredDilution))}</text>`);
+  }
+  const ex = sx(radius);
+  parts.push(`<line x1="${n(ex)}" y1="${f.top}" x2="${n(ex)}" y2="${f.top + plotHeight(f)}" stroke="#0f172a" stroke-width="1.2" stroke-dasharray="3 3"/>`);
+  parts.push(`<text x="${n(ex + 4)}" y="${f.top + 12}" font-size="10" ${FONT}>mixing-zone edge ${escapeHtml(reportNumber(radius))} m</text>`);
+  // The series, coloured by stage.
+  let run: { x: number; y: number }[] = [];
+  let stage = pts[0]?.stage ?? "";
+  const flush = () => {
+    if (run.length > 1) {
+      parts.push(`<path d="${polyline(run.map((p) => [sx(p.x), sy(p.y)] as const))}" fill="none" stroke="${STAGE_COLOURS[stage] ?? "#475569"}" stroke-width="2"/>`);
+    }
+  };
+  for (const p of pts) {
+    if (p.stage !== stage) {
+      const last = run[run.length - 1];
+      flush();
+      run = last ? [last] : [];
+      stage = p.stage;
+    }
+    run.push(p);
+  }
+  flush();
+  if (Number.isFinite(dilution) && dilution >= 1) {
+    parts.push(`<circle cx="${n(ex)}" cy="${n(sy(dilution))}" r="4" fill="#0f172a"/>`);
+    parts.push(`<text x="${n(ex + 6)}" y="${n(sy(dilution) + 14)}" font-size="10" ${FONT}>S = ${escapeHtml(reportNumber(dilution))} at the edge</text>`);
+  }
+  const stages = [...new Set(pts.map((p) => p.stage))];
+  stages.forEach((s, i) => {
+    const y = f.top + plotHeight(f) - 12 - (stages.length - 1 - i) * 14;
+    parts.push(`<line x1="${f.left + plotWidth(f) - 150}" y1="${y}" x2="${f.left + plotWidth(f) - 126}" y2="${y}" stroke="${STAGE_COLOURS[s] ?? "#475569"}" stroke-width="2"/>`);
+    parts.push(`<text x="${f.left + plotWidth(f) - 120}" y="${y + 3.5}" font-size="10" ${FONT}>${escapeHtml(s)}</text>`);
+  });
+  return svgWrap(parts, "Centreline dilution against distance from the diffuser");
+}

@@ -1,0 +1,28 @@
+/**
+ * Printing the HTML report to PDF with headless Chromium. The document is self-contained (inline CSS,
+ * SVG and data-URI images), so it is loaded with setContent and no network is involved. Page size and
+ * margins come from the report's own @page rule.
+ */
+import { writeFileSync, renameSync } from "node:fs";
+import { dirname, basename, join } from "node:path";
+import { withChromium } from "./chromium";
+
+/** Renders `html` to PDF bytes (A4 from the document's @page rule, backgrounds printed). */
+export async function pdfFromHtml(html: string): Promise<Uint8Array> {
+  return withChromium(async (browser) => {
+    const page = await browser.newPage();
+    await page.setContent(html, { waitUntil: "load", timeout: 30_000 });
+    await page.emulateMedia({ media: "print" });
+    const pdf = await page.pdf({ printBackground: true, preferCSSPageSize: true, format: "A4" });
+    return new Uint8Array(pdf);
+  });
+}
+
+/** Renders `html` to a PDF file at `outPath` (written atomically); returns the bytes written. */
+export async function printPdf(html: string, outPath: string): Promise<Uint8Array> {
+  const bytes = await pdfFromHtml(html);
+  const tmp = join(dirname(outPath), `.${basename(outPath)}.${process.pid}.tmp`);
+  writeFileSync(tmp, bytes);
+  renameSync(tmp, outPath);
+  return bytes;
+}
