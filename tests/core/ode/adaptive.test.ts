@@ -1,0 +1,94 @@
+/**
+ * Specification of core/ode/adaptive.ts: error-controlled integration, event location on the
+ * dense output, and guards that always return. Exact solutions are DERIVED (closed form).
+ */
+import { describe, expect, it } from "vitest";
+import { integrateAdaptive, type OdeEvent } from "../../../core/ode/adaptive";
+import { stepperDormandPrince45 } from "../../../core/ode/dormandPrince45";
+
+const osc = (_t: number, y: Float64Array, out: Float64Array) => {
+  out[0] = y[1];
+  out[1] = -y[0];
+};
+const opts = (over: Partial<Parameters<typeof integrateAdaptive>[5]> = {}) => ({
+  rtol: 1e-9,
+  atol: Float64Array.of(1e-12, 1e-12),
+  h0: 0.01,
+  hMin: 1e-14,
+  hMax: 1,
+  maxSteps: 100000,
+  tMax: 10 * Math.PI,
+  ...over,
+});
+
+describe("integrateAdaptive()", () => {
+  it("integrates the harmonic oscillator over five periods to the requested accuracy", () => {
+    const st = stepperDormandPrince45(osc, 2);
+    const r = integrateAdaptive(st, osc, {}, 0, Float64Array.of(0, 1), opts());
+    expect(r.reason, "runs to tMax").toBe("t-max");
+    expect(r.t, "final t equals tMax").toBeCloseTo(10 * Math.PI, 12);
+    expect(Math.abs(r.y[0] - Math.sin(10 * Math.PI)), "sin(10π) = 0 (exact)").toBeLessThan(1e-7);
+    expect(Math.abs(r.y[1] - 1), "cos(10π) = 1 (exact)").toBeLessThan(1e-7);
+    expect(r.steps, "adaptive: far fewer steps than a fixed 1e-3 grid").toBeLessThan(3000);
+  });
+
+  it("locates a descending zero crossing (sin t = 0 at t = π) and stops there when terminal", () => {
+    const st = stepperDormandPrince45(osc, 2);
+    const events: OdeEvent<object>[] = [{ fn: (_t, y) => y[0], direction: -1, terminal: true }];
+    const r = integrateAdaptive(st, osc, {}, 0, Float64Array.of(0, 1), opts(), events);
+    expect(r.reason, "terminal event stops the run").toBe("event");
+    expect(Math.abs(r.t - Math.PI), "root of sin at π (exact)").toBeLessThan(1e-9);
+    expect(Math.abs(r.y[0]), "state at the event lies on the event surface").toBeLessThan(1e-9);
+  });
+
+  it("records every non-terminal crossing in order, respecting the direction filter", () => {
+    const st = stepperDormandPrince45(osc, 2);
+    const events: OdeEvent<object>[] = [
+      { fn: (_t, y) => y[0], direction: 1, terminal: false }, // upward crossings at 2π, 4π, …
+      { fn: (_t, y) => y[1], direction: 0, terminal: false }, // cos zero both ways: π/2, 3π/2, …
+    ];
+    const r = integrateAdaptive(st, osc, {}, 0, Float64Array.of(0, 1), opts({ tMax: 4.25 * Math.PI }), events);
+    const up = r.events.filter((e) => e.index === 0).map((e) => e.t);
+    const both = r.events.filter((e) => e.index === 1).map((e) => e.t);
+    expect(up.length, "upward sin crossings in (0, 4.25π]: 2π and 4π (t = 0 starts on the surface, not a crossing)").toBe(2);
+    expect(Math.abs(up[0] - 2 * Math.PI), "first upward crossing at 2π").toBeLessThan(1e-8);
+    expect(both.length, "cos crossings at π/2, 3π/2, 5π/2, 7π/2").toBe(4);
+    for (let i = 1; i < r.events.length; i++) {
+      expect(r.events[i].t, "events reported in order of t").toBeGreaterThanOrEqual(r.events[i - 1].t);
+    }
+  });
+
+  it("returns 'max-steps' instead of running on when the step budget is exhausted", () => {
+    const st = stepperDormandPrince45(osc, 2);
+    const r = integrateAdaptive(st, osc, {}, 0, Float64Array.of(0, 1), opts({ maxSteps: 5 }));
+    expect(r.reason, "step guard").toBe("max-steps");
+    expect(r.steps, "exactly the budget").toBe(5);
+  });
+
+  it("returns 'step-underflow' at a finite-time blow-up (y' = y², y(0) = 1, singular at t = 1)", () => {
+    const blow = (_t: number, y: Float64Array, out: Float64Array) => {
+      out[0] = y[0] * y[0];
+    };
+    const st = stepperDormandPrince45(blow, 1);
+    const r = integrateAdaptive(st, blow, {}, 0, Float64Array.of(1), {
+      rtol: 1e-8,
+      atol: Float64Array.of(1e-10),
+      h0: 0.01,
+      hMin: 1e-10,
+      hMax: 1,
+      maxSteps: 100000,
+      tMax: 2,
+    });
+    expect(r.reason, "the step-size guard fires near the singularity").toBe("step-underflow");
+    expect(r.t, "stops just before t = 1 (exact blow-up time)").toBeLessThan(1);
+    expect(r.t, "and close to it").toBeGreaterThan(0.99);
+  });
+
+  it("lets the step callback stop the run", () => {
+    const st = stepperDormandPrince45(osc, 2);
+    let calls = 0;
+    const r = integrateAdaptive(st, osc, {}, 0, Float64Array.of(0, 1), opts(), [], () => ++calls < 3);
+    expect(r.reason, "callback returned false").toBe("callback");
+    expect(calls, "called once per accepted step").toBe(3);
+  });
+});
