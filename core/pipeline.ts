@@ -97,7 +97,8 @@ export function runScenario(scenario: Scenario, options: RunOptions = {}): Brine
   const port = portFromScenario(scenario, props);
   const jet = jetFromScenario(scenario, props, port);
   const lengthScale = nearFieldLengthScale(jet, props.column);
-  const integral = nearFieldIntegral(jet, props.column, { includePath: options.includePath ?? true, sink: options.sink });
+  // The path is always computed: the edge may lie inside the jet, where its dilution is read off the path.
+  const integral = nearFieldIntegral(jet, props.column, { includePath: true, sink: options.sink });
   const nearField: NearFieldMethodResult[] = [lengthScale, integral];
   const beyond = beyondNearField({ scenario, jet, column: props.column, nearField, densities: props.densities, port });
   const sourceWarnings = jetSourceWarnings(jet, props.column);
@@ -123,7 +124,7 @@ export function runScenario(scenario: Scenario, options: RunOptions = {}): Brine
     },
     densities: props.densities,
     port,
-    nearField: beyond.nearField,
+    nearField: options.includePath === false ? beyond.nearField.map(({ path: _path, ...m }) => m) : beyond.nearField,
     multiport: beyond.multiport,
     mixingZone: beyond.mixingZone,
     compliance: beyond.compliance,

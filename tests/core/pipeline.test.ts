@@ -1,0 +1,78 @@
+/**
+ * The whole pipeline on the demo scenarios and on edge cases: contract shape, physical ordering and
+ * the scope refusal for a brine lighter than the sea.
+ */
+import { describe, it, expect } from "vitest";
+import { readFileSync, readdirSync } from "node:fs";
+import { join } from "node:path";
+import { parseScenario } from "../../core/scenario/parse";
+import { runScenario } from "../../core/pipeline";
+import { ScenarioError } from "../../core/scenario/parse";
+
+const demoDir = join(__dirname, "../../demo-scenarios");
+const demos = readdirSync(demoDir).filter((f) => f.endsWith(".json"));
+const load = (f: string) => JSON.parse(readFileSync(join(demoDir, f), "utf8"));
+function scenarioOf(raw: unknown) {
+  const r = parseScenario(raw);
+  if (!r.ok) throw new Error(r.issues.map((i) => i.message).join("; "));
+  return r.scenario;
+}
+
+describe("runScenario()", () => {
+  it.each(demos)("gives a complete, serialisable result for %s", (file) => {
+    const r = runScenario(scenarioOf(load(file)));
+    expect(r.format, "format").toBe("brinefield-result");
+    expect(r.version, "version").toBe(1);
+    expect(r.caution.startsWith("Caution"), "caution begins with the word Caution").toBe(true);
+    expect(JSON.parse(JSON.stringify(r)), "round-trips through JSON").toEqual(JSON.parse(JSON.stringify(r)));
+    expect(r.nearField.map((m) => m.method), "both methods side by side").toEqual(["length-scale", "integral"]);
+    expect(r.densities.discharge > r.densities.ambient, "brine denser than the sea").toBe(true);
+    const gp = (9.80665 * (r.densities.discharge - r.densities.ambient)) / r.densities.ambient;
+    expect(Math.abs(r.densities.reducedGravity - gp) < 1e-9, "g′ = g(ρ0 − ρa)/ρa").toBe(true);
+    const froude = r.port.velocity / Math.sqrt(r.densities.reducedGravity * r.port.diameter);
+    expect(Math.abs(r.port.froude - froude) < 1e-9 * froude, "F = U/√(g′d)").toBe(true);
+    expect(Math.abs(r.port.flow * r.port.count - r.discharge.flow) < 1e-12, "port flows add up").toBe(true);
+    for (const m of r.nearField) {
+      if (m.impactDilution !== null) expect(m.impactDilution >= 1, `${m.method}: impact dilution ≥ 1`).toBe(true);
+      if (m.nearFieldDilution !== null && m.impactDilution !== null)
+        expect(m.nearFieldDilution >= m.impactDilution, `${m.method}: near-field dilution ≥ impact dilution`).toBe(true);
+      expect(m.source.length > 10, `${m.method}: names its source`).toBe(true);
+    }
+    const edge = r.mixingZone.dilution;
+    expect(Number.isFinite(edge) && edge >= 1, "edge dilution finite and ≥ 1").toBe(true);
+    const s = r.mixingZone.series;
+    for (let i = 1; i < s.dilution.length; i++) {
+      expect(s.distance[i]! >= s.distance[i - 1]!, "series distances ascend").toBe(true);
+      expect(s.dilution[i]! >= s.dilution[i - 1]! * (1 - 1e-9), `series dilution non-decreasing at ${s.distance[i]} m`).toBe(true);
+    }
+    for (const c of r.mixingZone.constituents) {
+      const lo = Math.min(c.background, c.discharge) - 1e-9;
+      const hi = Math.max(c.background, c.discharge) + 1e-9;
+      expect(c.concentration >= lo && c.concentration <= hi, `${c.constituent} between background and discharge`).toBe(true);
+    }
+    expect(r.compliance.margin, "margin = edge ÷ required").toBeCloseTo(edge / r.compliance.requiredDilution, 9);
+  });
+
+  it("refuses a blend lighter than the sea at the port with a message that says why", () => {
+    const raw = load("sandy-shelf.json");
+    raw.discharge.salinity = 30; // fresher than the 35.6 g/kg sea: it would rise
+    let err: unknown;
+    try {
+      runScenario(scenarioOf(raw));
+    } catch (e) {
+      err = e;
+    }
+    expect(err instanceof ScenarioError, "a ScenarioError, not a crash").toBe(true);
+    expect((err as ScenarioError).issues[0]!.message, "names the scope").toMatch(
+      /^discharge\.salinity: .* no denser than the sea at the port .* rise as a buoyant plume, which is outside this version's dense-jet scope/,
+    );
+  });
+
+  it("reports the same numbers with and without the path (Monte Carlo mode)", () => {
+    const s = scenarioOf(load("island-cove.json"));
+    const a = runScenario(s);
+    const b = runScenario(s, { includePath: false });
+    expect(b.mixingZone.dilution, "edge dilution independent of path output").toBe(a.mixingZone.dilution);
+    expect(b.nearField[1]!.impactDilution, "integral impact dilution independent of path output").toBe(a.nearField[1]!.impactDilution);
+  });
+});
