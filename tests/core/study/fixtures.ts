@@ -1,0 +1,57 @@
+/** Small scenarios and fake evaluators shared by the study tests. */
+import { parseScenario } from "../../../core/scenario/parse";
+import type { Scenario } from "../../../core/scenario/types";
+import type { CaseSummary, Evaluator } from "../../../core/study/summary";
+
+/** A 4-port line diffuser in a uniform 15 m ambient with a weak current (invented example). */
+export function fourPortRaw(): Record<string, unknown> {
+  return {
+    format: "brinefield-scenario",
+    version: 1,
+    name: "Four-port test diffuser",
+    discharge: { flow: 0.25, salinity: 65, temperature: 22 },
+    ambient: { depth: 15, salinity: 36, temperature: 20, currentSpeed: 0.1, currentDirection: 90 },
+    diffuser: {
+      layout: "line",
+      portCount: 4,
+      portDiameter: 0.12,
+      portAngle: 60,
+      portHeight: 1,
+      portSpacing: 5,
+      portAzimuth: 0,
+      diffuserAzimuth: 90,
+    },
+    mixingZone: { radius: 100, limits: [{ constituent: "salinity", maxIncrease: 2 }] },
+  };
+}
+
+export function scenarioFrom(raw: unknown): Scenario {
+  const r = parseScenario(raw);
+  if (!r.ok) throw new Error(r.issues.map((i) => i.message).join("; "));
+  return r.scenario;
+}
+
+/**
+ * A fake evaluator whose "edge dilution" is the ambient current speed and whose required dilution is
+ * fixed: an identity-like, monotone output, so the output's percentiles are the input's.
+ */
+export function identityEvaluator(required: number, read: (s: Scenario) => number): Evaluator {
+  return (s: Scenario): CaseSummary => {
+    const d = read(s);
+    return {
+      edgeDilution: d,
+      requiredDilution: required,
+      margin: d / required,
+      pass: d >= required,
+      governingConstituent: "salinity",
+      equationOfState: "test",
+      warningCount: 0,
+      seriousWarningCount: 0,
+      exitVelocity: 0,
+      froude: 0,
+      reachesSurface: false,
+      surfaceClearance: null,
+      methods: [],
+    };
+  };
+}
