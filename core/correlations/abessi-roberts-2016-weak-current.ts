@@ -11,8 +11,8 @@
 import { warning, type ResultWarning } from "../warnings";
 
 export const ABESSI_ROBERTS_2016_SOURCE =
-  "Abessi & Roberts (2016), IAHR Int. Symp. on Outfall Systems, rosette risers at 60°: for U_r·F < 1 impact " +
-  "dilution can be lower than in stagnant water — CONFIRMED (abstract)";
+  "Abessi & Roberts (2016), IAHR Int. Symp. on Outfall Systems, rosette risers at 60°: for U_r·F < 1 " +
+  "impact dilution can be lower than in stagnant water — CONFIRMED (abstract)";
 
 /** U_r·F below which a weak current may reduce impact dilution (Abessi & Roberts 2016, CONFIRMED). */
 export const WEAK_CURRENT_CROSSFLOW_FROUDE = 1;
@@ -24,9 +24,9 @@ export function weakCurrentValidityIssues(crossflowFroude: number): ResultWarnin
     warning(
       "weak-current-lower-dilution",
       "warning",
-      `Weak current, U_r·F = ${crossflowFroude.toFixed(2)} < 1: Abessi & Roberts (2016) found that for rosette ` +
-        `risers at 60° the impact dilution can then be lower than in stagnant water, so the stagnant-water ` +
-        `value may not be conservative (finding for rosettes, applied here to a single jet).`,
+      `Weak current, U_r·F = ${crossflowFroude.toFixed(2)} < 1: Abessi & Roberts (2016) found that for ` +
+        `rosette risers at 60° the impact dilution can then be lower than in stagnant water, so the ` +
+        `stagnant-water value may not be conservative (finding for rosettes, applied here to a single jet).`,
       {
         parameter: "crossflowFroude",
         value: crossflowFroude,

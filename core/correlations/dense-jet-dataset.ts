@@ -87,7 +87,10 @@ export interface AngleInterpolation {
  * Linear interpolation of a coefficient in discharge angle between the two tabulated angles that bracket
  * `angle`. Returns null outside the tabulated range: callers clamp and warn, never extrapolate silently.
  */
-export function interpolateAngleTable(table: readonly AngleTablePoint[], angle: number): AngleInterpolation | null {
+export function interpolateAngleTable(
+  table: readonly AngleTablePoint[],
+  angle: number,
+): AngleInterpolation | null {
   if (table.length === 0 || !Number.isFinite(angle)) return null;
   const first = table[0];
   const last = table[table.length - 1];
@@ -98,7 +101,8 @@ export function interpolateAngleTable(table: readonly AngleTablePoint[], angle: 
     const q = table[i + 1];
     if (q && angle > p.angle && angle < q.angle) {
       const t = (angle - p.angle) / (q.angle - p.angle);
-      return { value: p.value.value + t * (q.value.value - p.value.value), bracket: [p.angle, q.angle], interpolated: true };
+      const value = p.value.value + t * (q.value.value - p.value.value);
+      return { value, bracket: [p.angle, q.angle], interpolated: true };
     }
   }
   return null; // unreachable for an ascending table; kept so a malformed table yields "no value", not NaN

@@ -2,20 +2,20 @@
  * Lai & Lee (2012): maximum rise, dilution at maximum rise and impact dilution of inclined dense jets in
  * stagnant, unstratified water, 15°–60°.
  *
- * Source: Lai, C.C.K., Lee, J.H.W., "Mixing of inclined dense jets in stationary ambient", J. Hydro-environment
- * Research 6:9–28 (2012). Angles 15, 30, 38, 45, 52 and 60°; F = 10–40; planar LIF and PIV. All numbers
- * below are CONFIRMED from the abstract (reference sheet §1a–1c: lai-etal-lab.github.io publication page and
- * the journal copy scribd "22-lai2012"):
+ * Source: Lai, C.C.K., Lee, J.H.W., "Mixing of inclined dense jets in stationary ambient",
+ * J. Hydro-environment Research 6:9–28 (2012). Angles 15, 30, 38, 45, 52 and 60°; F = 10–40; planar LIF
+ * and PIV. All numbers below are CONFIRMED from the abstract (reference sheet §1a–1c:
+ * lai-etal-lab.github.io publication page and the journal copy scribd "22-lai2012"):
  *
  *   Z_max/(F·D) = 0.44 at θ = 15°, 2.08 at θ = 60°, independent of source conditions for F ≥ 25
  *   S_t/F = 0.45 (dilution at terminal rise), asymptotic, little difference over θ = 38°–60°
  *   S_i/F = 1.06 (impact dilution), for F ≥ 20, insensitive to angle over θ = 38°–60°
  *
- * Not traced: the paper's own rise values at 30°, 38°, 45° and 52°, the plan distances to maximum rise and to
- * impact, and any stated scatter. Between 15° and 60° the rise is interpolated LINEARLY IN ANGLE between the two
- * traced end points; the result says so. The true curve is not straight, so interpolated values carry more
- * uncertainty than the end points (no number can be given for it). S_t and S_i are given only on 38°–60°,
- * where the paper states them; below 38° they are null.
+ * Not traced: the paper's own rise values at 30°, 38°, 45° and 52°, the plan distances to maximum rise and
+ * to impact, and any stated scatter. Between 15° and 60° the rise is interpolated LINEARLY IN ANGLE between
+ * the two traced end points; the result says so. The true curve is not straight, so interpolated values
+ * carry more uncertainty than the end points (no number can be given for it). S_t and S_i are given only
+ * on 38°–60°, where the paper states them; below 38° they are null.
  *
  * Definitions: Z_max is taken as the UPPER-EDGE terminal rise (definition FROM MEMORY; consistent with its
  * 60° value lying beside the edge-based 2.2 of Roberts et al. 1997). S_i is taken as the centreline dilution
@@ -77,7 +77,9 @@ export function laiLee2012CoefficientsAtAngle(angle: number): DenseJetCoefficien
   const [dLo, dHi] = LAI_LEE_2012_DILUTION_ANGLES;
   const inDilutionRange = angle >= dLo && angle <= dHi;
   if (!inDilutionRange) {
-    notes.push(`Lai & Lee (2012) state S_t and S_i only for ${dLo}°–${dHi}°; none given at ${angle.toFixed(1)}°.`);
+    notes.push(
+      `Lai & Lee (2012) state S_t and S_i only for ${dLo}°–${dHi}°; none given at ${angle.toFixed(1)}°.`,
+    );
   }
   return {
     angle,
@@ -115,7 +117,8 @@ export function laiLee2012CoefficientsAtAngleValidityIssues(input: DenseJetValid
       warning(
         "lai-lee-2012-froude-below-range",
         "serious",
-        `Densimetric Froude number ${froude.toFixed(1)} is below the F = ${fLo}–${fHi} Lai & Lee (2012) studied.`,
+        `Densimetric Froude number ${froude.toFixed(1)} is below the F = ${fLo}–${fHi} ` +
+          `Lai & Lee (2012) studied.`,
         { parameter: "froude", value: froude, range: [fLo, fHi], ...extra },
       ),
     );

@@ -26,8 +26,8 @@
 import { warning, type ResultWarning } from "../warnings";
 
 export const LAI_LEE_2013_SOURCE =
-  "Lai & Lee (2013), Environ. Fluid Mech., doi 10.1007/s10652-013-9290-7: F_c = U_r·F; < 0.8 jet-dominated, " +
-  "≥ 0.8 bent over on ascent, ≥ 2 detrainment irrelevant — CONFIRMED from the abstract";
+  "Lai & Lee (2013), Environ. Fluid Mech., doi 10.1007/s10652-013-9290-7: F_c = U_r·F; < 0.8 " +
+  "jet-dominated, ≥ 0.8 bent over on ascent, ≥ 2 detrainment irrelevant — CONFIRMED from the abstract";
 
 /** Below this F_c the jet is jet-dominated (Lai & Lee 2013, CONFIRMED). */
 export const CROSSFLOW_BENT_OVER_FROUDE = 0.8;
@@ -43,7 +43,11 @@ export type CrossflowRegime = "stagnant" | "jet-dominated" | "bent-over" | "cros
  * @param froude F = U/√(g′d), dimensionless
  * @returns F_c, dimensionless; 0 for no current; NaN when U ≤ 0
  */
-export function crossflowFroudeFromSpeeds(currentSpeed: number, exitVelocity: number, froude: number): number {
+export function crossflowFroudeFromSpeeds(
+  currentSpeed: number,
+  exitVelocity: number,
+  froude: number,
+): number {
   if (!(exitVelocity > 0)) return Number.NaN; // no jet: the ratio is undefined
   return (Math.max(0, currentSpeed) / exitVelocity) * froude;
 }
@@ -78,10 +82,10 @@ export function crossflowFroudeValidityIssues(crossflowFroude: number, relation 
       severe ? "current-dominates-jet" : "current-bends-jet",
       "serious",
       `Current too strong for the stagnant-water correlations: crossflow Froude number F_c = U_r·F = ` +
-        `${crossflowFroude.toFixed(2)} ≥ 0.8 (Lai & Lee 2013), so the jet is bent over before it reaches its ` +
-        `stagnant-water rise (momentum length in the current l_m = ${ratio.toFixed(2)} l_M)` +
-        `${severe ? "; at F_c ≥ 2 the current dominates the mixing" : ""}. Rise, return distance and dilution ` +
-        `from the length-scale method do not apply; use a method that models the current.${where}`,
+        `${crossflowFroude.toFixed(2)} ≥ 0.8 (Lai & Lee 2013), so the jet is bent over before it reaches ` +
+        `its stagnant-water rise (momentum length in the current l_m = ${ratio.toFixed(2)} l_M)` +
+        `${severe ? "; at F_c ≥ 2 the current dominates the mixing" : ""}. Rise, return distance and ` +
+        `dilution from the length-scale method do not apply; use a method that models the current.${where}`,
       {
         parameter: "crossflowFroude",
         value: crossflowFroude,

@@ -25,12 +25,17 @@
  * (1.6·F here vs 1.06·F in Lai & Lee 2012, CONFIRMED) — see the sheet's "Disagreement to record".
  */
 import { warning, type ResultWarning } from "../warnings";
-import type { DenseJetCoefficients, DenseJetDataset, DenseJetValidityInput, TracedValue } from "./dense-jet-dataset";
+import type {
+  DenseJetCoefficients,
+  DenseJetDataset,
+  DenseJetValidityInput,
+  TracedValue,
+} from "./dense-jet-dataset";
 
 export const ROBERTS_1997_SOURCE =
-  "Roberts, Ferrier & Daviero (1997), J. Hydraulic Eng. 123(8):693–699, 60° jet: y_t = 2.2 dF, x_i = 2.4 dF, " +
-  "S_i = 1.6 F, x_n = 9.0 dF, S_n = 2.6 F — coefficients FROM MEMORY, quoted identically by several " +
-  "independent secondary sources (not re-read in the paper)";
+  "Roberts, Ferrier & Daviero (1997), J. Hydraulic Eng. 123(8):693–699, 60° jet: y_t = 2.2 dF, " +
+  "x_i = 2.4 dF, S_i = 1.6 F, x_n = 9.0 dF, S_n = 2.6 F — coefficients FROM MEMORY, quoted identically " +
+  "by several independent secondary sources (not re-read in the paper)";
 
 const MEMORY = "FROM MEMORY (reference sheet §1b), widely and identically quoted";
 
@@ -44,7 +49,7 @@ export const ROBERTS_1997_COEFFICIENTS = {
   nearFieldDilution: { value: 2.6, provenance: MEMORY } as TracedValue,
 } as const;
 
-/** Angles within this many degrees of 60° are treated as 60° (build tolerance; common practice, no source). */
+/** Angles within this many degrees of 60° count as 60° (build tolerance; common practice, no source). */
 export const ROBERTS_1997_ANGLE_TOLERANCE = 2;
 
 /**
@@ -94,8 +99,15 @@ export function roberts1997CoefficientsAtAngleValidityIssues(input: DenseJetVali
       warning(
         "roberts-1997-angle-not-studied",
         "warning",
-        `Discharge angle ${angle.toFixed(1)}° is not the 60° Roberts et al. (1997) studied (accepted ${lo}–${hi}°).`,
-        { parameter: "angle", value: angle, range: [lo, hi], source: ROBERTS_1997_SOURCE, stage: "length-scale" },
+        `Discharge angle ${angle.toFixed(1)}° is not the 60° Roberts et al. (1997) studied ` +
+          `(accepted ${lo}–${hi}°).`,
+        {
+          parameter: "angle",
+          value: angle,
+          range: [lo, hi],
+          source: ROBERTS_1997_SOURCE,
+          stage: "length-scale",
+        },
       ),
     );
   }

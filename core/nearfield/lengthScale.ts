@@ -14,15 +14,23 @@
  * Christodoulou (2020) polynomial, Abessi & Roberts (2014, 2017) fits.
  *
  * Fields the primary dataset does not give are filled from the first variant that does, and `notes` says so.
- * Outside the studied angles (15°–60°) every dataset is evaluated at the nearest studied angle with a warning.
+ * Outside the studied angles (15°–60°) every dataset is evaluated at the nearest studied angle, with a
+ * warning.
  */
 import { warning, type ResultWarning } from "../warnings";
 import type { AmbientColumn, JetSource, NearFieldMethodResult, NearFieldVariant } from "./types";
 import type { DenseJetCoefficients, DenseJetDataset } from "../correlations/dense-jet-dataset";
 import { clampAngle } from "../correlations/dense-jet-dataset";
 import { ROBERTS_1997_DATASET } from "../correlations/roberts-1997-inclined-dense-jet";
-import { LAI_LEE_2012_DATASET, LAI_LEE_2012_MAX_RISE_DILUTION } from "../correlations/lai-lee-2012-inclined-dense-jet";
-import { crossflowFroudeFromSpeeds, crossflowFroudeValidityIssues, crossflowRegimeFromFroude } from "../correlations/lai-lee-2013-crossflow-regime";
+import {
+  LAI_LEE_2012_DATASET,
+  LAI_LEE_2012_MAX_RISE_DILUTION,
+} from "../correlations/lai-lee-2012-inclined-dense-jet";
+import {
+  crossflowFroudeFromSpeeds,
+  crossflowFroudeValidityIssues,
+  crossflowRegimeFromFroude,
+} from "../correlations/lai-lee-2013-crossflow-regime";
 import { weakCurrentValidityIssues } from "../correlations/abessi-roberts-2016-weak-current";
 
 /** Datasets in order of preference for the primary result. */
@@ -36,9 +44,10 @@ export const LENGTH_SCALE_ANGLE_RANGE: readonly [number, number] = [
 
 const PRIMARY_REASON: Record<string, string> = {
   "roberts-1997":
-    "primary because it is the only dataset at this angle that gives rise, return distance, impact dilution and " +
-    "near-field end from the same experiments, at the design-standard 60° it was measured for",
-  "lai-lee-2012": "primary because it is the only traced dataset covering this angle (confirmed from the paper's abstract)",
+    "primary because it is the only dataset at this angle that gives rise, return distance, impact " +
+    "dilution and near-field end from the same experiments, at the design-standard 60° it was measured for",
+  "lai-lee-2012":
+    "primary because it is the only traced dataset covering this angle (confirmed from the paper's abstract)",
 };
 
 const STANDARD_GRAVITY = 9.80665; // m/s², to turn g′ back into a density excess
@@ -86,7 +95,8 @@ function toDimensional(e: EvaluatedDataset, jet: JetSource): Dimensional {
   // point at the discharge angle (mirror image of the ascent). Published dense-jet trajectories descend at
   // least as steeply as they rise (FROM MEMORY), so the added distance portHeight/tanθ is an upper bound.
   const drop = Math.max(0, jet.portHeight);
-  const impactDistance = returnDistance === null ? null : returnDistance + drop / Math.tan((c.angle * Math.PI) / 180);
+  const slope = Math.tan((c.angle * Math.PI) / 180);
+  const impactDistance = returnDistance === null ? null : returnDistance + drop / slope;
   return {
     source: e.dataset.source,
     maxRiseHeight: len(c.riseEdge),
@@ -132,15 +142,22 @@ function emptyResult(warnings: ResultWarning[], why: string): NearFieldMethodRes
 export function nearFieldLengthScale(jet: JetSource, column: AmbientColumn): NearFieldMethodResult {
   const stage = "length-scale";
   if (!isDenseJet(jet)) {
-    const why = `the discharge is not a dense jet (g′ = ${jet.reducedGravity.toPrecision(3)} m/s², F = ${jet.froude.toPrecision(3)}, d = ${jet.diameter} m); the correlations are for negatively buoyant jets`;
-    return emptyResult([warning("not-a-dense-jet", "serious", `No length-scale estimate: ${why}.`, { stage })], why);
+    const why =
+      `the discharge is not a dense jet (g′ = ${jet.reducedGravity.toPrecision(3)} m/s², ` +
+      `F = ${jet.froude.toPrecision(3)}, d = ${jet.diameter} m); the correlations are for negatively ` +
+      `buoyant jets`;
+    const w = warning("not-a-dense-jet", "serious", `No length-scale estimate: ${why}.`, { stage });
+    return emptyResult([w], why);
   }
   if (!(jet.angle > 0 && jet.angle <= 90)) {
     const why = `discharge angle ${jet.angle}° is not upward (0° < θ ≤ 90°)`;
-    return emptyResult(
-      [warning("angle-not-upward", "serious", `No length-scale estimate: ${why}.`, { parameter: "angle", value: jet.angle, range: [0, 90], stage })],
-      why,
-    );
+    const w = warning("angle-not-upward", "serious", `No length-scale estimate: ${why}.`, {
+      parameter: "angle",
+      value: jet.angle,
+      range: [0, 90],
+      stage,
+    });
+    return emptyResult([w], why);
   }
 
   const warnings: ResultWarning[] = [];
@@ -149,13 +166,17 @@ export function nearFieldLengthScale(jet: JetSource, column: AmbientColumn): Nea
   const [aLo, aHi] = LENGTH_SCALE_ANGLE_RANGE;
   if (angleUsed !== jet.angle) {
     const off = Math.abs(jet.angle - angleUsed);
+    const effect =
+      jet.angle > aHi
+        ? "steeper jets rise higher: the rise is likely under-estimated"
+        : "flatter jets rise less: the rise is likely over-estimated";
     warnings.push(
       warning(
         "angle-outside-studied-range",
         off > 2 ? "serious" : "warning",
-        `Discharge angle ${jet.angle.toFixed(1)}° is outside the ${aLo}°–${aHi}° covered by the published datasets; ` +
-          `values are those at the nearest studied angle, ${angleUsed}°, not an extrapolation` +
-          `${jet.angle > aHi ? " (steeper jets rise higher: the rise is likely under-estimated)" : " (flatter jets rise less: the rise is likely over-estimated)"}.`,
+        `Discharge angle ${jet.angle.toFixed(1)}° is outside the ${aLo}°–${aHi}° covered by the published ` +
+          `datasets; values are those at the nearest studied angle, ${angleUsed}°, not an extrapolation ` +
+          `(${effect}).`,
         { parameter: "angle", value: jet.angle, range: [aLo, aHi], stage },
       ),
     );
@@ -163,7 +184,9 @@ export function nearFieldLengthScale(jet: JetSource, column: AmbientColumn): Nea
   }
   if (entries.length === 0) return emptyResult(warnings, `no dataset covers ${angleUsed}°`);
 
-  for (const e of entries) warnings.push(...e.dataset.validityIssues({ angle: angleUsed, froude: jet.froude }));
+  for (const e of entries) {
+    warnings.push(...e.dataset.validityIssues({ angle: angleUsed, froude: jet.froude }));
+  }
   warnings.push(...currentIssues(jet, column, notes));
   warnings.push(...stratificationIssues(jet, column));
 
@@ -173,7 +196,16 @@ export function nearFieldLengthScale(jet: JetSource, column: AmbientColumn): Nea
   for (const e of entries) notes.push(...e.coefficients.notes);
 
   // Fill what the primary lacks from the first variant that has it, and say so.
-  const fields = ["maxRiseHeight", "maxRiseDistance", "returnDistance", "impactDistance", "impactDilution", "nearFieldDistance", "nearFieldDilution", "maxRiseDilution"] as const;
+  const fields = [
+    "maxRiseHeight",
+    "maxRiseDistance",
+    "returnDistance",
+    "impactDistance",
+    "impactDilution",
+    "nearFieldDistance",
+    "nearFieldDilution",
+    "maxRiseDilution",
+  ] as const;
   const top: Record<(typeof fields)[number], number | null> = { ...primary };
   const filledFrom = new Set<string>();
   for (const f of fields) {
@@ -187,15 +219,22 @@ export function nearFieldLengthScale(jet: JetSource, column: AmbientColumn): Nea
   }
   if (top.impactDistance !== null && jet.portHeight > 0) {
     notes.push(
-      `Impact distance = return distance + portHeight/tan(${angleUsed}°): the descent below port level is continued ` +
-        `as a straight line at the discharge angle (an upper bound on the added distance).`,
+      `Impact distance = return distance + portHeight/tan(${angleUsed}°): the descent below port level is ` +
+        `continued as a straight line at the discharge angle (an upper bound on the added distance).`,
     );
   }
 
-  const dilutions = [primary, ...variants.map((v) => v.values)].map((v) => v.impactDilution).filter((v): v is number => v !== null);
+  const dilutions = [primary, ...variants.map((v) => v.values)]
+    .map((v) => v.impactDilution)
+    .filter((v): v is number => v !== null);
   const dilutionRange: readonly [number, number] | null =
     dilutions.length >= 2 ? [Math.min(...dilutions), Math.max(...dilutions)] : null;
-  if (dilutionRange === null) notes.push("No dilution range: fewer than two datasets give an impact dilution here and no published scatter was traced.");
+  if (dilutionRange === null) {
+    notes.push(
+      "No dilution range: fewer than two datasets give an impact dilution here and no published scatter " +
+        "was traced.",
+    );
+  }
 
   const source =
     `${primaryEntry.dataset.source} — ${PRIMARY_REASON[primaryEntry.dataset.id] ?? "primary"}` +
@@ -219,25 +258,37 @@ export function nearFieldLengthScale(jet: JetSource, column: AmbientColumn): Nea
     variants: variants.map((v) => toVariant(v.values)),
     notes: [
       ...notes,
-      "entrainedFlow = Q0 × (impact dilution − 1), from the centreline (minimum) dilution, so it is a lower bound on the flux-averaged entrainment.",
+      "entrainedFlow = Q0 × (impact dilution − 1), from the centreline (minimum) dilution, so it is a " +
+        "lower bound on the flux-averaged entrainment.",
     ],
   };
 }
 
 const BIAS =
-  "Laboratory length-scale laws for one round jet in stagnant, unstratified, deep water, asymptotic in F " +
-  "(F ≳ 20–25). Impact dilution is the centreline (minimum) value where the centreline is back at port level, " +
-  "conservative for a raised port. Published 60° impact dilutions differ by 50 %: 1.6·F (Roberts et al. 1997, " +
-  "from memory) against 1.06·F (Lai & Lee 2012, confirmed) — treat the spread as real uncertainty and use the " +
-  "low end for compliance. Lai & Lee (2012) found a Lagrangian integral model under-predicts rise by 10–15 % " +
-  `and dilution at maximum rise by about 30 % against these measurements (S_t/F = ${LAI_LEE_2012_MAX_RISE_DILUTION.value}).`;
+  "Laboratory length-scale laws for one round jet in stagnant, unstratified, deep water, asymptotic in " +
+  "F (F ≳ 20–25). Impact dilution is the centreline (minimum) value where the centreline is back at port " +
+  "level, conservative for a raised port. Published 60° impact dilutions differ by 50 %: 1.6·F (Roberts " +
+  "et al. 1997, from memory) against 1.06·F (Lai & Lee 2012, confirmed) — treat the spread as real " +
+  "uncertainty and use the low end for compliance. Lai & Lee (2012) found a Lagrangian integral model " +
+  "under-predicts rise by 10–15 % and dilution at maximum rise by about 30 % against these measurements " +
+  `(S_t/F = ${LAI_LEE_2012_MAX_RISE_DILUTION.value}).`;
 
 /** The contract's variant shape (it has no dilution at maximum rise). */
 function toVariant(v: Dimensional): NearFieldVariant {
   const { source, maxRiseHeight, maxRiseDistance, returnDistance, impactDistance, impactDilution } = v;
   const { nearFieldDistance, nearFieldDilution, note } = v;
-  const out = { source, maxRiseHeight, maxRiseDistance, returnDistance, impactDistance, impactDilution, nearFieldDistance, nearFieldDilution };
-  const extra = v.maxRiseDilution === null ? [] : [`Dilution at maximum rise ${v.maxRiseDilution.toFixed(1)}.`];
+  const out = {
+    source,
+    maxRiseHeight,
+    maxRiseDistance,
+    returnDistance,
+    impactDistance,
+    impactDilution,
+    nearFieldDistance,
+    nearFieldDilution,
+  };
+  const rise = v.maxRiseDilution;
+  const extra = rise === null ? [] : [`Dilution at maximum rise ${rise.toFixed(1)}.`];
   const text = [...(note ? [note] : []), ...extra].join(" ");
   return text ? { ...out, note: text } : out;
 }
@@ -247,10 +298,12 @@ function currentIssues(jet: JetSource, column: AmbientColumn, notes: string[]): 
   if (!(fc > 0)) return [];
   const rel = (((column.currentDirection - jet.azimuth) % 360) + 360) % 360;
   const off = Math.min(rel, 360 - rel);
-  const relation = `${off < 45 ? "co-flowing" : off > 135 ? "counter-flowing" : "across the jet"} (${off.toFixed(0)}° from the jet azimuth)`;
+  const sense = off < 45 ? "co-flowing" : off > 135 ? "counter-flowing" : "across the jet";
+  const relation = `${sense} (${off.toFixed(0)}° from the jet azimuth)`;
+  const ratio = `(${column.currentSpeed.toFixed(3)}/${jet.velocity.toFixed(2)})·${jet.froude.toFixed(1)}`;
   notes.push(
-    `Crossflow Froude number F_c = (u_a/U)·F = (${column.currentSpeed.toFixed(3)}/${jet.velocity.toFixed(2)})·${jet.froude.toFixed(1)} = ` +
-      `${fc.toFixed(2)}: ${crossflowRegimeFromFroude(fc)} regime of Lai & Lee (2013); current ${relation}.`,
+    `Crossflow Froude number F_c = (u_a/U)·F = ${ratio} = ${fc.toFixed(2)}: ` +
+      `${crossflowRegimeFromFroude(fc)} regime of Lai & Lee (2013); current ${relation}.`,
   );
   return [...crossflowFroudeValidityIssues(fc, relation), ...weakCurrentValidityIssues(fc)];
 }
@@ -286,8 +339,8 @@ function stratificationIssues(jet: JetSource, column: AmbientColumn): ResultWarn
     warning(
       "ambient-stratified",
       "info",
-      `The water column is stratified (density varies by ${span.toFixed(2)} kg/m³ over the depth); the length-scale ` +
-        `correlations are for unstratified water.`,
+      `The water column is stratified (density varies by ${span.toFixed(2)} kg/m³ over the depth); the ` +
+        `length-scale correlations are for unstratified water.`,
       { parameter: "ambient.densities", value: span, stage },
     ),
   ];
@@ -296,9 +349,10 @@ function stratificationIssues(jet: JetSource, column: AmbientColumn): ResultWarn
       warning(
         "stratification-affects-jet",
         ratio >= 1 ? "serious" : "warning",
-        `Across the jet's rise the ambient density changes by ${strat.toFixed(3)} kg/m³, ${(100 * ratio).toFixed(0)} % of the ` +
-          `jet's density excess at maximum rise (Δρ0/S_t with S_t = 0.45·F, Lai & Lee 2012); the unstratified ` +
-          `correlations ${ratio >= 1 ? "do not apply (the jet may be trapped)" : "are doubtful"}.`,
+        `Across the jet's rise the ambient density changes by ${strat.toFixed(3)} kg/m³, ` +
+          `${(100 * ratio).toFixed(0)} % of the jet's density excess at maximum rise (Δρ0/S_t with ` +
+          `S_t = 0.45·F, Lai & Lee 2012); the unstratified correlations ` +
+          `${ratio >= 1 ? "do not apply (the jet may be trapped)" : "are doubtful"}.`,
         { parameter: "ambient.densities", value: ratio, range: [0, 0.1], stage },
       ),
     );

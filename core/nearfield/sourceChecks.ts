@@ -33,15 +33,25 @@ export function jetSourceWarnings(jet: JetSource, column: AmbientColumn): Result
   if (rises.length > 0 && column.depth > 0) {
     const top = rises.reduce((a, b) => (b.height > a.height ? b : a));
     const reach = top.height + Math.max(0, jet.portHeight);
-    const beyond = jet.angle > 60 ? " (the port is steeper than any dataset, so the true rise is likely higher)" : "";
+    const beyond =
+      jet.angle > 60 ? " (the port is steeper than any dataset, so the true rise is likely higher)" : "";
+    const sum =
+      `upper-edge rise ${top.height.toFixed(2)} m + port height ${jet.portHeight.toFixed(2)} m = ` +
+      `${reach.toFixed(2)} m`;
     if (reach >= column.depth) {
       out.push(
         warning(
           "jet-reaches-surface",
           "serious",
-          `The jet reaches the surface: upper-edge rise ${top.height.toFixed(2)} m + port height ${jet.portHeight.toFixed(2)} m = ` +
-            `${reach.toFixed(2)} m ≥ water depth ${column.depth.toFixed(2)} m${beyond}. Near-field results assume deep water.`,
-          { parameter: "ambient.depth", value: column.depth, range: [reach, Infinity], source: top.source, stage },
+          `The jet reaches the surface: ${sum} ≥ water depth ${column.depth.toFixed(2)} m${beyond}. ` +
+            `Near-field results assume deep water.`,
+          {
+            parameter: "ambient.depth",
+            value: column.depth,
+            range: [reach, Infinity],
+            source: top.source,
+            stage,
+          },
         ),
       );
     } else if (reach >= SURFACE_MARGIN * column.depth) {
@@ -49,10 +59,16 @@ export function jetSourceWarnings(jet: JetSource, column: AmbientColumn): Result
         warning(
           "jet-near-surface",
           "warning",
-          `The jet's upper edge comes within ${(column.depth - reach).toFixed(2)} m of the surface (rise ${top.height.toFixed(2)} m + ` +
-            `port height ${jet.portHeight.toFixed(2)} m of ${column.depth.toFixed(2)} m depth, over ${SURFACE_MARGIN * 100} %; ` +
-            `margin is common practice, no source)${beyond}.`,
-          { parameter: "ambient.depth", value: column.depth, range: [reach / SURFACE_MARGIN, Infinity], source: top.source, stage },
+          `The jet's upper edge comes within ${(column.depth - reach).toFixed(2)} m of the surface: ` +
+            `${sum}, over ${SURFACE_MARGIN * 100} % of the ${column.depth.toFixed(2)} m depth ` +
+            `(margin: common practice, no source)${beyond}.`,
+          {
+            parameter: "ambient.depth",
+            value: column.depth,
+            range: [reach / SURFACE_MARGIN, Infinity],
+            source: top.source,
+            stage,
+          },
         ),
       );
     }
@@ -64,8 +80,9 @@ export function jetSourceWarnings(jet: JetSource, column: AmbientColumn): Result
       warning(
         "seabed-attachment-shallow-angle",
         "warning",
-        `Discharge angle ${jet.angle.toFixed(1)}° is below about ${JET_EDGE_SPREAD_ANGLE}°, the spreading angle of a jet's lower ` +
-          `edge, so the lower edge heads for the bed from the start and the jet may attach to it (common practice, no source).`,
+        `Discharge angle ${jet.angle.toFixed(1)}° is below about ${JET_EDGE_SPREAD_ANGLE}°, the spreading ` +
+          `angle of a jet's lower edge, so the lower edge heads for the bed from the start and the jet ` +
+          `may attach to it (common practice, no source).`,
         { parameter: "diffuser.portAngle", value: jet.angle, range: [JET_EDGE_SPREAD_ANGLE, 90], stage },
       ),
     );
@@ -76,9 +93,9 @@ export function jetSourceWarnings(jet: JetSource, column: AmbientColumn): Result
       warning(
         "seabed-attachment-low-port",
         "warning",
-        `Port height ${jet.portHeight.toFixed(2)} m is less than ${MIN_PORT_HEIGHT_DIAMETERS} port diameters ` +
-          `(${minHeight.toFixed(2)} m): the bed limits entrainment into the jet's underside and may draw it down ` +
-          `(common practice, no source).`,
+        `Port height ${jet.portHeight.toFixed(2)} m is less than ${MIN_PORT_HEIGHT_DIAMETERS} port ` +
+          `diameters (${minHeight.toFixed(2)} m): the bed limits entrainment into the jet's underside ` +
+          `and may draw it down (common practice, no source).`,
         { parameter: "diffuser.portHeight", value: jet.portHeight, range: [minHeight, Infinity], stage },
       ),
     );
@@ -92,9 +109,9 @@ export function jetSourceWarnings(jet: JetSource, column: AmbientColumn): Result
       warning(
         "port-reynolds-low",
         "warning",
-        `Port Reynolds number U·d/ν = ${reynolds.toPrecision(3)} is below 10⁴ (ν = ${nu.toExponential(2)} m²/s ` +
-          `at ${jet.salinity.toFixed(1)} g/kg, ${jet.temperature.toFixed(1)} °C): laboratory turbulent-jet laws ` +
-          `may not hold.`,
+        `Port Reynolds number U·d/ν = ${reynolds.toPrecision(3)} is below 10⁴ ` +
+          `(ν = ${nu.toExponential(2)} m²/s at ${jet.salinity.toFixed(1)} g/kg, ` +
+          `${jet.temperature.toFixed(1)} °C): laboratory turbulent-jet laws may not hold.`,
         {
           parameter: "port.reynolds",
           value: reynolds,
@@ -114,7 +131,8 @@ export function jetSourceWarnings(jet: JetSource, column: AmbientColumn): Result
         "exit-velocity-atypical",
         "info",
         `Exit velocity ${jet.velocity.toFixed(2)} m/s is outside the usual ${vLo}–${vHi} m/s ` +
-          `(${jet.velocity < vLo ? "low momentum, poorer dilution" : "high head loss"}; common practice, no source).`,
+          `(${jet.velocity < vLo ? "low momentum, poorer dilution" : "high head loss"}; common practice, ` +
+          `no source).`,
         { parameter: "port.velocity", value: jet.velocity, range: [vLo, vHi], stage },
       ),
     );

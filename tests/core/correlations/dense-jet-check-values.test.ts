@@ -62,17 +62,22 @@ describe("dense-jet check-value tables", () => {
         }
       });
       it("gives a reason for every skipped item", () => {
-        for (const s of table.skip) expect(s.reason.length, `skip "${s.what}" needs a reason`).toBeGreaterThan(10);
+        for (const s of table.skip) {
+          expect(s.reason.length, `skip "${s.what}" needs a reason`).toBeGreaterThan(10);
+        }
       });
       table.cases.forEach((c, index) => {
-        const label = `${c.function ?? table.function}(${c.inputs.join(", ")})${c.output ? "." + c.output : ""}`;
+        const field = c.output ? "." + c.output : "";
+        const label = `${c.function ?? table.function}(${c.inputs.join(", ")})${field}`;
         it(`case ${index + 1}: ${label} ≈ ${c.expected}`, () => {
           const got = evaluate(table, c);
-          const allowed =
-            c.tolerance.absolute ?? (c.tolerance.relative !== undefined ? c.tolerance.relative * Math.abs(c.expected) : 0);
+          const { relative: rel } = c.tolerance;
+          const relative = rel !== undefined ? rel * Math.abs(c.expected) : 0;
+          const allowed = c.tolerance.absolute ?? relative;
           expect(allowed, "every case needs a tolerance").toBeGreaterThan(0);
           expect(got, `${c.provenance} — no value returned`).not.toBeNull();
-          expect(Math.abs((got as number) - c.expected), `${c.provenance} — got ${got}`).toBeLessThanOrEqual(allowed);
+          const error = Math.abs((got as number) - c.expected);
+          expect(error, `${c.provenance} — got ${got}`).toBeLessThanOrEqual(allowed);
         });
       });
     });
