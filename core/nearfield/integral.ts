@@ -50,9 +50,9 @@ export interface IntegralOptions {
   sink?: PathSink;
   /** Include the decimated path in the result (default true). */
   includePath?: boolean;
-  /** Relative tolerance of the integrator (default 1e-6). */
+  /** Relative tolerance of the integrator (default 1e-8). */
   relTol?: number;
-  /** Absolute tolerance, relative to each variable's source scale (default 1e-8). */
+  /** Absolute tolerance, relative to each variable's source scale (default 1e-10). */
   absTol?: number;
   /** Maximum accepted steps (default 5000). */
   maxSteps?: number;
@@ -60,8 +60,8 @@ export interface IntegralOptions {
   maxLength?: number;
 }
 
-export const INTEGRAL_DEFAULT_REL_TOL = 1e-6;
-export const INTEGRAL_DEFAULT_ABS_TOL = 1e-8;
+export const INTEGRAL_DEFAULT_REL_TOL = 1e-8;
+export const INTEGRAL_DEFAULT_ABS_TOL = 1e-10;
 const DEFAULT_MAX_STEPS = 5000;
 const PATH_POINTS = 200;
 const G = 9.80665; // standard gravity, m/s² (CGPM 1901)
