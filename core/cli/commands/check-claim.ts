@@ -23,7 +23,7 @@ Verdicts: "above" (the claim is higher than any method gives), "within", "below"
 than every method). The exit code is 0 whatever the verdict; 2 for usage or scenario errors.`;
 
 function fmt(v: number): string {
-  return Number.isFinite(v) ? (Math.abs(v) >= 100 ? v.toFixed(0) : v.toPrecision(3)) : String(v);
+  return Number.isFinite(v) ? (Math.abs(v) >= 100 ? v.toFixed(0) : String(Number(v.toPrecision(3)))) : String(v);
 }
 
 export const command: CliCommand = {
