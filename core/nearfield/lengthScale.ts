@@ -305,7 +305,10 @@ function currentIssues(jet: JetSource, column: AmbientColumn, notes: string[]): 
     `Crossflow Froude number F_c = (u_a/U)·F = ${ratio} = ${fc.toFixed(2)}: ` +
       `${crossflowRegimeFromFroude(fc)} regime of Lai & Lee (2013); current ${relation}.`,
   );
-  return [...crossflowFroudeValidityIssues(fc, relation), ...weakCurrentValidityIssues(fc)];
+  // From F_c = 0.8 the stagnant laws are already declared inapplicable; the weak-current caveat
+  // (Abessi & Roberts 2016, U_r·F < 1) only matters below that.
+  const strong = crossflowFroudeValidityIssues(fc, relation);
+  return strong.length > 0 ? strong : weakCurrentValidityIssues(fc);
 }
 
 /** Ambient density at a depth below the surface, linear between profile points, held at the ends. */

@@ -213,6 +213,14 @@ describe("nearFieldLengthScale() ambient checks", () => {
     expect(w!.stage, "stage").toBe("length-scale");
   });
 
+  it("gives only the strong-current warning for 0.8 ≤ F_c < 1, not also the weak-current caveat", () => {
+    // u_a = 0.144 m/s: F_c = 0.036 × 25 = 0.9
+    const r = nearFieldLengthScale(makeJet(), makeColumn({ current: 0.144 }));
+    const codes = r.warnings.map((x) => x.code);
+    expect(codes, "strong-current warning").toContain("current-bends-jet");
+    expect(codes, "no contradictory weak-current caveat").not.toContain("weak-current-lower-dilution");
+  });
+
   it("notes the jet-dominated regime and warns of weak-current dilution loss (U_r·F < 1)", () => {
     const r = nearFieldLengthScale(makeJet(), makeColumn({ current: 0.08, direction: 270 }));
     const codes = r.warnings.map((w) => w.code);
