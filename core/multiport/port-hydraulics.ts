@@ -95,23 +95,23 @@ export function portFlowsAndHydraulics(input: PortHydraulicsInput): PortHydrauli
     const headLoss = cd && cd > 0 ? Math.pow(flow / (cd * nominalArea), 2) / (2 * GRAVITY) : null;
     return { index, flow, velocity, froude: froudeOf(velocity), headLoss };
   });
-  for (const p of ports) {
-    if (p.velocity < USUAL_EXIT_VELOCITY[0] || p.velocity > USUAL_EXIT_VELOCITY[1]) {
-      warnings.push(
-        warning(
-          "port-velocity-unusual",
-          "warning",
-          `Port ${p.index + 1} exit velocity ${p.velocity.toFixed(2)} m/s is outside the usual 2–6 m/s.`,
-          {
-            parameter: `port[${p.index}].velocity`,
-            value: p.velocity,
-            range: USUAL_EXIT_VELOCITY,
-            source: EXIT_VELOCITY_SOURCE,
-            stage: "multiport",
-          },
-        ),
-      );
-    }
+  // One warning for all ports outside the usual range (a long diffuser would otherwise repeat it per port).
+  const unusual = ports.filter((p) => p.velocity < USUAL_EXIT_VELOCITY[0] || p.velocity > USUAL_EXIT_VELOCITY[1]);
+  if (unusual.length) {
+    const vs = unusual.map((p) => p.velocity);
+    const lo = Math.min(...vs);
+    const hi = Math.max(...vs);
+    const which = unusual.length === n ? (n === 1 ? "The port" : `All ${n} ports`) : `Ports ${unusual.map((p) => p.index + 1).join(", ")}`;
+    const speed = lo === hi ? `${lo.toFixed(2)} m/s` : `${lo.toFixed(2)}–${hi.toFixed(2)} m/s`;
+    warnings.push(
+      warning("port-velocity-unusual", "warning", `${which}: exit velocity ${speed}, outside the usual 2–6 m/s.`, {
+        parameter: unusual.length === 1 ? `port[${unusual[0].index}].velocity` : "port.velocity",
+        value: Math.abs(hi - 4) > Math.abs(lo - 4) ? hi : lo,
+        range: USUAL_EXIT_VELOCITY,
+        source: EXIT_VELOCITY_SOURCE,
+        stage: "multiport",
+      }),
+    );
   }
   const meanFlow = scenario.discharge.flow / n;
   const meanVelocity = meanFlow / area;
