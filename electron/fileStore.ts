@@ -147,10 +147,9 @@ export async function readJsonTextFile(path: string, options: ReadJsonOptions = 
     const info = await handle.stat();
     if (!info.isFile()) return { ok: false, message: `“${name}” is not a regular file.` };
     if (info.size > maxBytes) {
-      return {
-        ok: false,
-        message: `“${name}” is ${formatBytes(info.size)}; a ${label} file may be at most ${formatBytes(maxBytes)}.`,
-      };
+      const limit = formatBytes(maxBytes);
+      const message = `“${name}” is ${formatBytes(info.size)}; a ${label} file may be at most ${limit}.`;
+      return { ok: false, message };
     }
     // Read at most one byte past the limit, in case the file grows between stat and read.
     const buffer = Buffer.alloc(Math.min(info.size, maxBytes) + 1);
@@ -161,7 +160,8 @@ export async function readJsonTextFile(path: string, options: ReadJsonOptions = 
       length += bytesRead;
     }
     if (length > maxBytes) {
-      return { ok: false, message: `“${name}” is larger than ${formatBytes(maxBytes)}; it cannot be opened.` };
+      const message = `“${name}” is larger than ${formatBytes(maxBytes)}; it cannot be opened.`;
+      return { ok: false, message };
     }
     let text: string;
     try {
@@ -239,7 +239,9 @@ export function createRecentFilesStore(options: RecentFilesOptions): RecentFiles
       if (!Array.isArray(paths)) return [];
       const clean: string[] = [];
       for (const p of paths) {
-        if (typeof p !== "string" || p.length === 0 || p.length > 4096 || p.includes("\0") || !isAbsolute(p)) continue;
+        const usable =
+          typeof p === "string" && p.length > 0 && p.length <= 4096 && !p.includes("\0") && isAbsolute(p);
+        if (!usable) continue;
         if (!clean.some((q) => samePath(q, p, platform))) clean.push(p);
       }
       return clean.slice(0, max);
@@ -322,11 +324,13 @@ export function createAutosaveStore(options: AutosaveOptions): AutosaveStore {
     async write(text) {
       const bytes = Buffer.byteLength(text, "utf8");
       if (bytes > maxBytes) {
-        throw new Error(`Unsaved work is ${formatBytes(bytes)}; autosave keeps at most ${formatBytes(maxBytes)}.`);
+        const limit = formatBytes(maxBytes);
+        throw new Error(`Unsaved work is ${formatBytes(bytes)}; autosave keeps at most ${limit}.`);
       }
       const savedAt = now().toISOString();
       await fsp.mkdir(dirname(options.file), { recursive: true });
-      await writeFileAtomic(options.file, `${AUTOSAVE_MAGIC} ${savedAt}\n${text}`, { platform: options.platform });
+      const content = `${AUTOSAVE_MAGIC} ${savedAt}\n${text}`;
+      await writeFileAtomic(options.file, content, { platform: options.platform });
       return { text, savedAt };
     },
     async read() {

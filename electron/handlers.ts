@@ -67,7 +67,11 @@ export interface SaveDialogOptions {
 export interface HostHandlerDeps {
   trustedRenderer(): TrustedRenderer;
   /** Native Open dialog for scenarios; resolves to the chosen path or null when cancelled. */
-  showOpenDialog(options: { title: string; defaultPath: string; filters: readonly FileFilter[] }): Promise<string | null>;
+  showOpenDialog(options: {
+    title: string;
+    defaultPath: string;
+    filters: readonly FileFilter[];
+  }): Promise<string | null>;
   /** Native Save dialog; resolves to the chosen path or null when cancelled. */
   showSaveDialog(options: SaveDialogOptions): Promise<string | null>;
   /** `webContents.printToPDF` of the main window. */
@@ -159,12 +163,17 @@ export function createHostHandlers(deps: HostHandlerDeps): HostHandlers {
   async function dispatch(request: HostRequest): Promise<HostResponse> {
     switch (request.kind) {
       case "open-scenario": {
-        const path = await deps.showOpenDialog({ title: "Open scenario", defaultPath: startDir(), filters: SCENARIO_FILTERS });
+        const path = await deps.showOpenDialog({
+          title: "Open scenario",
+          defaultPath: startDir(),
+          filters: SCENARIO_FILTERS,
+        });
         return path === null ? { kind: "cancelled" } : openPath(path);
       }
       case "open-path": {
         if (!(await isGranted(request.path))) {
-          return { kind: "error", message: "That file was not chosen in an Open dialog or from the recent files." };
+          const message = "That file was not chosen in an Open dialog or from the recent files.";
+          return { kind: "error", message };
         }
         const response = await openPath(request.path);
         if (response.kind === "error") {
@@ -210,8 +219,13 @@ export function createHostHandlers(deps: HostHandlerDeps): HostHandlers {
       }
       case "print-pdf": {
         const pdfFilters: FileFilter[] = [{ name: "PDF document", extensions: ["pdf"] }];
-        const name = extname(request.suggestedName).toLowerCase() === ".pdf" ? request.suggestedName : `${request.suggestedName}.pdf`;
-        const chosen = await deps.showSaveDialog({ title: "Print to PDF", defaultPath: join(startDir(), name), filters: pdfFilters });
+        const suggested = request.suggestedName;
+        const name = extname(suggested).toLowerCase() === ".pdf" ? suggested : `${suggested}.pdf`;
+        const chosen = await deps.showSaveDialog({
+          title: "Print to PDF",
+          defaultPath: join(startDir(), name),
+          filters: pdfFilters,
+        });
         if (chosen === null) return { kind: "cancelled" };
         const target = ensureExtension(resolve(chosen), pdfFilters);
         let pdf: Uint8Array;
@@ -255,7 +269,8 @@ export function createHostHandlers(deps: HostHandlerDeps): HostHandlers {
     async handle(sender, payload) {
       if (!isTrustedSender(sender, deps.trustedRenderer())) {
         log(`rejected IPC from untrusted sender ${sender.frameUrl.slice(0, 200)}`);
-        return { kind: "error", message: "Rejected host request: it did not come from the Brinefield window." };
+        const message = "Rejected host request: it did not come from the Brinefield window.";
+        return { kind: "error", message };
       }
       const parsed = parseHostRequest(payload);
       if (!parsed.ok) {
@@ -267,7 +282,8 @@ export function createHostHandlers(deps: HostHandlerDeps): HostHandlers {
         response = await dispatch(parsed.request);
       } catch (error) {
         const detail = error instanceof Error ? error.message.split("\n")[0] : String(error);
-        response = { kind: "error", message: `The app could not complete “${parsed.request.kind}”: ${detail}` };
+        const message = `The app could not complete “${parsed.request.kind}”: ${detail}`;
+        response = { kind: "error", message };
       }
       if (parsed.request.kind === "save-file") deps.onSaveResult?.(response);
       return response;

@@ -40,12 +40,16 @@ export interface BridgeIpc {
 
 /** Throws for a channel outside the app's namespace (a programming error, caught in tests). */
 export function checkedChannel(channel: string): string {
-  if (!channel.startsWith(CHANNEL_PREFIX)) throw new Error(`IPC channel ${channel} is outside ${CHANNEL_PREFIX}`);
+  if (!channel.startsWith(CHANNEL_PREFIX)) {
+    throw new Error(`IPC channel ${channel} is outside ${CHANNEL_PREFIX}`);
+  }
   return channel;
 }
 
 function isHostResponse(value: unknown): value is HostResponse {
-  return typeof value === "object" && value !== null && typeof (value as { kind?: unknown }).kind === "string";
+  return (
+    typeof value === "object" && value !== null && typeof (value as { kind?: unknown }).kind === "string"
+  );
 }
 
 export function createHostBridge(ipc: BridgeIpc, platform: string): BrinefieldHost {
@@ -55,7 +59,8 @@ export function createHostBridge(ipc: BridgeIpc, platform: string): BrinefieldHo
     async invoke(request: HostRequest): Promise<HostResponse> {
       try {
         const response = await ipc.invoke(invokeChannel, request);
-        return isHostResponse(response) ? response : { kind: "error", message: "The host sent no valid response." };
+        if (isHostResponse(response)) return response;
+        return { kind: "error", message: "The host sent no valid response." };
       } catch (error) {
         // Structured-clone failures and a closed channel surface here; the renderer sees one message.
         const message = error instanceof Error ? error.message.split("\n")[0] : "IPC failed";

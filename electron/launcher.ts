@@ -77,16 +77,26 @@ export type LaunchPlan =
   | { readonly kind: "download"; readonly packageDir: string }
   | { readonly kind: "web"; readonly reason: string; readonly hint: string };
 
-const INTERNET_HINT = "With Node ≥ 22.12 and an internet connection, `npm start` fetches Electron once and opens the desktop app.";
+const INTERNET_HINT =
+  "With Node ≥ 22.12 and an internet connection, `npm start` fetches Electron once " +
+  "and opens the desktop app.";
 
 /** Electron, a first-start download, or the browser fallback — and why. */
 export function decideLaunch(inputs: LaunchInputs): LaunchPlan {
   if (inputs.forceWeb) {
-    return { kind: "web", reason: "browser mode was requested (--web)", hint: "Run `npm start` without --web for the desktop app." };
+    return {
+      kind: "web",
+      reason: "browser mode was requested (--web)",
+      hint: "Run `npm start` without --web for the desktop app.",
+    };
   }
   const { electron } = inputs;
   if (electron.packageDir === null) {
-    return { kind: "web", reason: "the electron package is not installed", hint: "Run `npm install`, then `npm start`." };
+    return {
+      kind: "web",
+      reason: "the electron package is not installed",
+      hint: "Run `npm install`, then `npm start`.",
+    };
   }
   const hasDisplay =
     inputs.platform !== "linux" || Boolean(inputs.env.DISPLAY) || Boolean(inputs.env.WAYLAND_DISPLAY);
@@ -97,11 +107,15 @@ export function decideLaunch(inputs: LaunchInputs): LaunchPlan {
       hint: "Run `npm start` in a desktop session for the app window.",
     };
   }
-  if (electron.binaryExists && electron.binaryPath !== null) return { kind: "electron", binary: electron.binaryPath };
+  if (electron.binaryExists && electron.binaryPath !== null) {
+    return { kind: "electron", binary: electron.binaryPath };
+  }
   if (!nodeAtLeast(inputs.nodeVersion, ELECTRON_MIN_NODE)) {
     return {
       kind: "web",
-      reason: `the Electron runtime is not downloaded yet, and its download needs Node ≥ 22.12 (this is Node ${inputs.nodeVersion})`,
+      reason:
+        "the Electron runtime is not downloaded yet, " +
+        `and this Node (${inputs.nodeVersion}) is too old to fetch it`,
       hint: INTERNET_HINT,
     };
   }
@@ -128,10 +142,13 @@ export async function planLaunch(
   if (first.kind !== "download") return first;
   const failure = await download(first.packageDir);
   const electron = reprobe();
-  const downloadFailure = failure ?? (electron.binaryExists ? null : "the download finished but no executable was found");
+  const downloadFailure =
+    failure ?? (electron.binaryExists ? null : "the download finished but no executable was found");
   const second = decideLaunch({ ...inputs, electron, downloadFailure });
   // Never loop: a second "download" verdict means the binary is still missing.
-  return second.kind === "download" ? { kind: "web", reason: "the Electron runtime is missing", hint: INTERNET_HINT } : second;
+  return second.kind === "download"
+    ? { kind: "web", reason: "the Electron runtime is missing", hint: INTERNET_HINT }
+    : second;
 }
 
 /** First meaningful line of the downloader's error output (no stack frames), at most 160 characters. */
@@ -145,7 +162,13 @@ export function summariseDownloadError(stderr: string): string {
 }
 
 /** After Electron exits: a quick failure (before a window could matter) falls back to the browser. */
-export function fallbackAfterExit(exit: { code: number | null; signal: string | null; elapsedMs: number }): boolean {
+export interface ElectronExit {
+  readonly code: number | null;
+  readonly signal: string | null;
+  readonly elapsedMs: number;
+}
+
+export function fallbackAfterExit(exit: ElectronExit): boolean {
   const failed = exit.code !== 0 || exit.signal !== null;
   return failed && exit.elapsedMs < 5000 && exit.signal !== "SIGINT" && exit.signal !== "SIGTERM";
 }
@@ -231,11 +254,19 @@ async function buildRenderer(root: string, env: RunOptions["env"]): Promise<bool
   const result =
     npmCli && /\.c?js$/.test(npmCli)
       ? await runProcess(process.execPath, [npmCli, "run", "build"], { cwd: root, capture: false })
-      : await runProcess("npm", ["run", "build"], { cwd: root, capture: false, shell: process.platform === "win32" });
+      : await runProcess("npm", ["run", "build"], {
+          cwd: root,
+          capture: false,
+          shell: process.platform === "win32",
+        });
   return result.code === 0;
 }
 
-async function ensureRenderer(root: string, env: RunOptions["env"], log: (line: string) => void): Promise<boolean> {
+async function ensureRenderer(
+  root: string,
+  env: RunOptions["env"],
+  log: (line: string) => void,
+): Promise<boolean> {
   const index = join(root, "dist", "renderer", "index.html");
   const newest = await newestSourceMtime([join(root, "renderer"), join(root, "core")]);
   if (!isRendererStale(mtimeOrNull(index), newest)) return true;
@@ -264,7 +295,11 @@ async function downloadElectron(packageDir: string, log: (line: string) => void)
 }
 
 /** Serve dist/renderer until Ctrl+C; resolves to the exit code. */
-async function serveUntilInterrupted(root: string, port: number, log: (line: string) => void): Promise<number> {
+async function serveUntilInterrupted(
+  root: string,
+  port: number,
+  log: (line: string) => void,
+): Promise<number> {
   const rendererDir = join(root, "dist", "renderer");
   if (!existsSync(join(rendererDir, "index.html"))) {
     log("dist/renderer/index.html is missing: run `npm run build` first.");
@@ -298,7 +333,7 @@ function electronBinary(probed: string): string {
   }
 }
 
-function runElectron(binary: string, root: string): Promise<{ code: number | null; signal: string | null; elapsedMs: number }> {
+function runElectron(binary: string, root: string): Promise<ElectronExit> {
   return new Promise((done) => {
     const started = Date.now();
     const env = { ...process.env };
@@ -350,7 +385,8 @@ export async function runStart(options: RunOptions): Promise<number> {
   if (plan.kind === "electron") {
     const exit = await runElectron(electronBinary(plan.binary), options.root);
     if (!fallbackAfterExit(exit)) return exit.code ?? 0;
-    log(`Electron stopped at start-up (${exit.signal ?? `exit code ${String(exit.code)}`}); serving Brinefield in your browser instead.`);
+    const how = exit.signal ?? `exit code ${String(exit.code)}`;
+    log(`Electron stopped at start-up (${how}); serving Brinefield in your browser instead.`);
   } else if (plan.kind === "web") {
     log(`Electron cannot start here: ${plan.reason}.`);
     log(`${plan.hint} Meanwhile the same app runs in your browser:`);

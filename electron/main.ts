@@ -94,7 +94,8 @@ function refreshMenu(recentPaths: readonly string[]): void {
           message: `${APP_NAME} ${app.getVersion()}`,
           detail:
             "Screening of seabed diffusers for desalination brine outfalls.\n\n" +
-            `Electron ${process.versions.electron} · Chromium ${process.versions.chrome} · Node ${process.versions.node}`,
+            `Electron ${process.versions.electron} · Chromium ${process.versions.chrome} · ` +
+            `Node ${process.versions.node}`,
         });
       },
       quit: () => app.quit(),
@@ -137,7 +138,8 @@ const handlers = createHostHandlers({
   setDocumentState(state) {
     closeGuard.setDocumentState(state);
     if (!mainWindow) return;
-    mainWindow.setTitle(state.title ? `${state.title}${state.dirty ? " •" : ""} — ${APP_NAME}` : APP_NAME);
+    const marker = state.dirty ? " •" : "";
+    mainWindow.setTitle(state.title ? `${state.title}${marker} — ${APP_NAME}` : APP_NAME);
     if (isMac) mainWindow.setDocumentEdited(state.dirty);
   },
   onRecentChanged: (paths) => refreshMenu(paths),

@@ -98,7 +98,11 @@ export function buildMenuTemplate(options: MenuOptions, actions: MenuActions): M
         ? ([
             { type: "separator" },
             { label: "Reload", accelerator: "CmdOrCtrl+R", click: () => actions.reload() },
-            { label: "Toggle Developer Tools", accelerator: "CmdOrCtrl+Shift+I", click: () => actions.toggleDevTools() },
+            {
+              label: "Toggle Developer Tools",
+              accelerator: "CmdOrCtrl+Shift+I",
+              click: () => actions.toggleDevTools(),
+            },
           ] satisfies MenuItemConstructorOptions[])
         : []),
     ],

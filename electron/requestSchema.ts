@@ -38,18 +38,19 @@ const fileName = z
 function textUpTo(maxBytes: number, what: string) {
   // UTF-8 needs at least one byte per UTF-16 unit, so the cheap length check comes first and the byte
   // count only runs on strings that could fit.
+  const message = `${what} is larger than ${formatBytes(maxBytes)}`;
   return z
     .string()
-    .max(maxBytes, `${what} is larger than ${formatBytes(maxBytes)}`)
-    .refine((s) => Buffer.byteLength(s, "utf8") <= maxBytes, `${what} is larger than ${formatBytes(maxBytes)}`);
+    .max(maxBytes, message)
+    .refine((s) => Buffer.byteLength(s, "utf8") <= maxBytes, message);
 }
 
+const extension = z
+  .string()
+  .regex(/^(\*|[A-Za-z0-9][A-Za-z0-9_-]{0,15})$/, "file extension must be letters, digits, _ or -");
 const fileFilter = z.strictObject({
   name: z.string().min(1).max(100),
-  extensions: z
-    .array(z.string().regex(/^(\*|[A-Za-z0-9][A-Za-z0-9_-]{0,15})$/, "file extension must be letters and digits"))
-    .min(1)
-    .max(20),
+  extensions: z.array(extension).min(1).max(20),
 });
 const filters = z.array(fileFilter).max(10);
 
@@ -87,7 +88,9 @@ export const hostRequestSchema = z.discriminatedUnion("kind", [
 type Validated = z.infer<typeof hostRequestSchema>;
 // Compile-time guard: every contract request is accepted by the schema and vice versa.
 type Same<A, B> = [A] extends [B] ? ([B] extends [A] ? true : false) : false;
-type DeepMutable<T> = T extends readonly (infer U)[] ? DeepMutable<U>[] : { -readonly [K in keyof T]: DeepMutable<T[K]> };
+type DeepMutable<T> = T extends readonly (infer U)[]
+  ? DeepMutable<U>[]
+  : { -readonly [K in keyof T]: DeepMutable<T[K]> };
 const schemaMatchesContract: Same<DeepMutable<HostRequest>, DeepMutable<Validated>> = true;
 void schemaMatchesContract;
 

@@ -213,9 +213,8 @@ export async function startWebServer(options: StartWebServerOptions): Promise<St
     boundPort = await listen(server, options.port);
   } catch (error) {
     const code = (error as { code?: string }).code;
-    if (options.fallbackToFreePort === false || options.port === 0 || (code !== "EADDRINUSE" && code !== "EACCES")) {
-      throw error;
-    }
+    const canFallBack = options.fallbackToFreePort !== false && options.port !== 0;
+    if (!canFallBack || (code !== "EADDRINUSE" && code !== "EACCES")) throw error;
     boundPort = await listen(server, 0);
   }
   return {
@@ -230,10 +229,15 @@ export async function startWebServer(options: StartWebServerOptions): Promise<St
   };
 }
 
-export type PortChoice = { readonly ok: true; readonly port: number } | { readonly ok: false; readonly message: string };
+export type PortChoice =
+  | { readonly ok: true; readonly port: number }
+  | { readonly ok: false; readonly message: string };
 
 /** Port from `--port N` / `--port=N`, else the PORT environment variable, else 5178. */
-export function portFromArgs(argv: readonly string[], env: Readonly<Record<string, string | undefined>>): PortChoice {
+export function portFromArgs(
+  argv: readonly string[],
+  env: Readonly<Record<string, string | undefined>>,
+): PortChoice {
   let raw: string | undefined;
   for (let i = 0; i < argv.length; i++) {
     const arg = argv[i];
