@@ -1,0 +1,393 @@
+/**
+ * The main window: file commands, inputs, results with the caution, the 3D view and the charts, and the
+ * Study tab. The document is the raw scenario file; it changes only through actions.
+ */
+import { Suspense, lazy, useCallback, useEffect, useMemo, useRef, useState, type ComponentType } from "react";
+import { CAUTION } from "../core/result/contract";
+import type { UnitSystem } from "../core/units";
+import { DEMO_SCENARIOS, type DemoScenario } from "./demos";
+import { issuesByPath, useEngine } from "./engine/useEngine";
+import { AmbientSection } from "./inputs/AmbientSection";
+import { DiffuserSection } from "./inputs/DiffuserSection";
+import { DischargeSection } from "./inputs/DischargeSection";
+import { EditorContext, type Editor } from "./inputs/EditorContext";
+import { MixingZoneSection } from "./inputs/MixingZoneSection";
+import { TextField } from "./inputs/fields";
+import * as host from "./platform/host";
+import { ResultsPanel } from "./results/ResultsPanel";
+import type { Action } from "./state/actions";
+import {
+  blankScenario,
+  documentFromFile,
+  isPlainObject,
+  scenarioName,
+  serialiseScenario,
+  suggestedFileName,
+  type DocumentState,
+  type ScenarioFile,
+} from "./state/scenarioState";
+import { StartView } from "./start/StartView";
+import { ConfirmDialog, type ConfirmRequest } from "./ui/ConfirmDialog";
+import { PlumeView } from "./view3d/PlumeView";
+import { TrajectoryChart } from "./charts/TrajectoryChart";
+import { DistanceChart } from "./charts/DistanceCharts";
+import { exportSeriesCsv, exportReport } from "./exports";
+
+export const AUTOSAVE_INTERVAL_MS = 5000;
+const UNITS_KEY = "brinefield.units";
+
+type StudyProps = { scenarioFile: unknown; unitSystem: UnitSystem };
+const studyModules = import.meta.glob<{ StudyPanel: ComponentType<StudyProps> }>("./study/StudyPanel.tsx");
+const studyLoader = studyModules["./study/StudyPanel.tsx"];
+const StudyPanel = studyLoader ? lazy(() => studyLoader().then((m) => ({ default: m.StudyPanel }))) : null;
+
+function initialUnits(): UnitSystem {
+  try {
+    return localStorage.getItem(UNITS_KEY) === "us" ? "us" : "si";
+  } catch {
+    return "si";
+  }
+}
+
+function initialDocument(): DocumentState {
+  const first = DEMO_SCENARIOS[0];
+  return first ? documentFromFile(first.file, null) : documentFromFile(blankScenario(), null);
+}
+
+/** Reads scenario text; returns an error message for text that is not a JSON object. */
+export function fileFromText(text: string): { ok: true; file: ScenarioFile } | { ok: false; message: string } {
+  try {
+    const parsed: unknown = JSON.parse(text);
+    if (!isPlainObject(parsed)) return { ok: false, message: "The file is JSON but not a scenario object." };
+    return { ok: true, file: parsed };
+  } catch (error) {
+    return { ok: false, message: `The file is not valid JSON: ${error instanceof Error ? error.message : String(error)}` };
+  }
+}
+
+export function App() {
+  const [doc, setDoc] = useState<DocumentState>(initialDocument);
+  const [unitSystem, setUnitSystem] = useState<UnitSystem>(initialUnits);
+  const [tab, setTab] = useState<"design" | "study">("design");
+  const [showStart, setShowStart] = useState(false);
+  const [recent, setRecent] = useState<readonly string[]>([]);
+  const [confirm, setConfirm] = useState<ConfirmRequest | null>(null);
+  const [recovery, setRecovery] = useState<host.AutosaveRecord | null>(null);
+  const [notice, setNotice] = useState<string | null>(null);
+  const [resetSignal, setResetSignal] = useState(0);
+  const [dragging, setDragging] = useState(false);
+  const [chart, setChart] = useState<"trajectory" | "dilution" | "increase">("trajectory");
+  const engine = useEngine(doc.file);
+  const docRef = useRef(doc);
+  docRef.current = doc;
+
+  const perform = useCallback(<I,>(action: Action<I>, input: I) => setDoc((state) => action.perform(state, input)), []);
+  const issues = useMemo(() => issuesByPath(engine.issues), [engine.issues]);
+  const editor: Editor = useMemo(() => ({ file: doc.file, unitSystem, issues, perform }), [doc.file, unitSystem, issues, perform]);
+
+  // Title and dirty flag to the host; units remembered.
+  useEffect(() => {
+    void host.setDocumentState(doc.dirty, scenarioName(doc.file)).catch(() => {});
+  }, [doc.dirty, doc.file]);
+  useEffect(() => {
+    try {
+      localStorage.setItem(UNITS_KEY, unitSystem);
+    } catch {
+      // storage disabled: the choice lasts for the session
+    }
+  }, [unitSystem]);
+
+  // Autosave while dirty; offer recovery on start.
+  useEffect(() => {
+    void host.autosaveRead().then((record) => {
+      if (record && record.text.trim() !== "") setRecovery(record);
+    }).catch(() => {});
+    void host.recentFiles().then(setRecent).catch(() => {});
+  }, []);
+  useEffect(() => {
+    const timer = setInterval(() => {
+      const current = docRef.current;
+      if (current.dirty) void host.autosaveWrite(serialiseScenario(current.file)).catch(() => {});
+    }, AUTOSAVE_INTERVAL_MS);
+    return () => clearInterval(timer);
+  }, []);
+  useEffect(() => {
+    const onBeforeUnload = (event: BeforeUnloadEvent) => {
+      if (docRef.current.dirty && !host.isDesktop()) event.preventDefault();
+    };
+    window.addEventListener("beforeunload", onBeforeUnload);
+    return () => window.removeEventListener("beforeunload", onBeforeUnload);
+  }, []);
+
+  const flash = useCallback((message: string) => {
+    setNotice(message);
+    window.setTimeout(() => setNotice((n) => (n === message ? null : n)), 6000);
+  }, []);
+
+  /** Runs `proceed` now, or after the user agrees to lose unsaved changes. */
+  const guardUnsaved = useCallback((what: string, proceed: () => void) => {
+    if (!docRef.current.dirty) {
+      proceed();
+      return;
+    }
+    setConfirm({
+      title: "Unsaved changes",
+      message: `“${scenarioName(docRef.current.file)}” has changes that are not saved. ${what} anyway?`,
+      confirmLabel: "Discard changes",
+      extraLabel: "Save first",
+      onExtra: () => void saveAs(false).then((saved) => saved && proceed()),
+      onConfirm: proceed,
+    });
+    // saveAs (below) reads the document through docRef, so the first render's closure stays correct.
+  }, []);
+
+  const loadText = useCallback((text: string, path: string | null) => {
+    const read = fileFromText(text);
+    if (!read.ok) {
+      flash(read.message);
+      return;
+    }
+    setDoc(documentFromFile(read.file, path));
+    setShowStart(false);
+    setTab("design");
+    void host.recentFiles().then(setRecent).catch(() => {});
+  }, [flash]);
+
+  const saveAs = useCallback(async (forceDialog: boolean): Promise<boolean> => {
+    const current = docRef.current;
+    try {
+      const path = await host.saveScenario(forceDialog ? null : current.path, serialiseScenario(current.file), suggestedFileName(current.file));
+      if (path === null) return false;
+      setDoc((d) => (d.revision === current.revision ? { ...d, path, dirty: false } : { ...d, path }));
+      await host.autosaveClear().catch(() => {});
+      void host.recentFiles().then(setRecent).catch(() => {});
+      flash(`Saved ${path.replace(/^.*[\\/]/, "")}`);
+      return true;
+    } catch (error) {
+      flash(`Could not save: ${error instanceof Error ? error.message : String(error)}`);
+      return false;
+    }
+  }, [flash]);
+
+  const commands = useMemo(() => ({
+    newScenario: () => guardUnsaved("Start a new scenario", () => {
+      setDoc(documentFromFile(blankScenario(), null));
+      setShowStart(false);
+    }),
+    open: () => guardUnsaved("Open another scenario", () => {
+      void host.openScenario().then((opened) => opened && loadText(opened.text, opened.path)).catch((e: unknown) => flash(String(e)));
+    }),
+    openRecent: (path: string) => guardUnsaved("Open another scenario", () => {
+      void host.openRecent(path).then((opened) => (opened ? loadText(opened.text, opened.path) : flash(`${path} is no longer available`))).catch((e: unknown) => flash(String(e)));
+    }),
+    openDemo: (demo: DemoScenario) => guardUnsaved("Open a demo scenario", () => {
+      setDoc(documentFromFile(demo.file, null));
+      setShowStart(false);
+      setTab("design");
+    }),
+    save: () => void saveAs(false),
+    saveAs: () => void saveAs(true),
+    exportReport: () => {
+      if (!engine.result) return flash("No results to report yet.");
+      void exportReport(engine.result, docRef.current.file).then(flash, (e: unknown) => flash(String(e)));
+    },
+    exportCsv: () => {
+      if (!engine.result) return flash("No results to export yet.");
+      void exportSeriesCsv(engine.result, docRef.current.file, unitSystem).then(flash, (e: unknown) => flash(String(e)));
+    },
+    print: () => void host.printPdf(suggestedFileName(docRef.current.file, "pdf")).catch((e: unknown) => flash(String(e))),
+  }), [guardUnsaved, loadText, saveAs, flash, engine.result, unitSystem]);
+
+  // Keyboard shortcuts and host menu commands.
+  useEffect(() => {
+    const onKey = (e: KeyboardEvent) => {
+      if (!(e.ctrlKey || e.metaKey) || e.altKey) return;
+      const key = e.key.toLowerCase();
+      if (key === "n") commands.newScenario();
+      else if (key === "o") commands.open();
+      else if (key === "s" && e.shiftKey) commands.saveAs();
+      else if (key === "s") commands.save();
+      else return;
+      e.preventDefault();
+    };
+    window.addEventListener("keydown", onKey);
+    const unsubscribe = host.onMenuCommand((command) => {
+      switch (command) {
+        case "new": return commands.newScenario();
+        case "open": return commands.open();
+        case "save": return commands.save();
+        case "save-as": return commands.saveAs();
+        case "export-report": return commands.exportReport();
+        case "export-csv": return commands.exportCsv();
+        case "print-pdf": return commands.print();
+        case "start-view": return setShowStart(true);
+        case "reset-view": return setResetSignal((n) => n + 1);
+        case "units-si": return setUnitSystem("si");
+        case "units-us": return setUnitSystem("us");
+      }
+    });
+    return () => {
+      window.removeEventListener("keydown", onKey);
+      unsubscribe();
+    };
+  }, [commands]);
+
+  // Drag and drop of a scenario file anywhere on the window.
+  useEffect(() => {
+    const over = (e: DragEvent) => {
+      if (e.dataTransfer?.types.includes("Files")) {
+        e.preventDefault();
+        setDragging(true);
+      }
+    };
+    const leave = (e: DragEvent) => {
+      if (e.relatedTarget === null) setDragging(false);
+    };
+    const drop = (e: DragEvent) => {
+      e.preventDefault();
+      setDragging(false);
+      const file = e.dataTransfer?.files[0];
+      if (!file) return;
+      guardUnsaved("Open the dropped file", () => {
+        void host.readDroppedFile(file).then((opened) => loadText(opened.text, opened.path));
+      });
+    };
+    window.addEventListener("dragover", over);
+    window.addEventListener("dragleave", leave);
+    window.addEventListener("drop", drop);
+    return () => {
+      window.removeEventListener("dragover", over);
+      window.removeEventListener("dragleave", leave);
+      window.removeEventListener("drop", drop);
+    };
+  }, [guardUnsaved, loadText]);
+
+  const result = engine.result;
+  const scenario = engine.scenario;
+  const title = scenarioName(doc.file);
+
+  return (
+    <EditorContext.Provider value={editor}>
+      <div className="app" data-dirty={doc.dirty}>
+        <header className="topbar">
+          <div className="brand" aria-hidden="true">Brinefield</div>
+          <nav className="file-commands" aria-label="File">
+            <button type="button" onClick={() => setShowStart(true)} data-command="start">Start</button>
+            <button type="button" onClick={commands.newScenario} title="Ctrl+N">New</button>
+            <button type="button" onClick={commands.open} title="Ctrl+O" data-command="open">Open…</button>
+            <button type="button" onClick={commands.save} title="Ctrl+S" data-command="save">Save</button>
+            <button type="button" onClick={commands.saveAs} title="Ctrl+Shift+S">Save as…</button>
+            <button type="button" onClick={commands.exportReport} disabled={!result}>Export report</button>
+            <button type="button" onClick={commands.exportCsv} disabled={!result}>Export CSV</button>
+          </nav>
+          <div className="doc-title" title={doc.path ?? "not saved yet"}>
+            {doc.dirty ? <span className="dirty-dot" aria-label="unsaved changes">●</span> : null}
+            {title}
+            {doc.path ? <span className="doc-path">{doc.path.replace(/^.*[\\/]/, "")}</span> : null}
+          </div>
+          <div className="tabs" role="tablist" aria-label="View">
+            <button type="button" role="tab" aria-selected={tab === "design"} onClick={() => setTab("design")}>Design</button>
+            <button type="button" role="tab" aria-selected={tab === "study"} onClick={() => setTab("study")} data-command="study">Study</button>
+          </div>
+          <div className="segmented units" role="radiogroup" aria-label="Units">
+            <button type="button" role="radio" aria-checked={unitSystem === "si"} onClick={() => setUnitSystem("si")} data-units="si">SI</button>
+            <button type="button" role="radio" aria-checked={unitSystem === "us"} onClick={() => setUnitSystem("us")} data-units="us">US</button>
+          </div>
+        </header>
+
+        {recovery ? (
+          <div className="banner recovery" role="status">
+            Unsaved work from {recovery.savedAt ? new Date(recovery.savedAt).toLocaleString() : "an earlier session"} was kept.
+            <button type="button" onClick={() => { loadText(recovery.text, null); setDoc((d) => ({ ...d, dirty: true })); setRecovery(null); }}>Recover it</button>
+            <button type="button" className="link-button" onClick={() => { void host.autosaveClear(); setRecovery(null); }}>Discard</button>
+          </div>
+        ) : null}
+        {notice ? <div className="banner notice" role="status" data-role="notice">{notice}</div> : null}
+
+        {tab === "design" ? (
+          <main className="workspace">
+            <aside className="inputs" aria-label="Scenario inputs">
+              <section className="input-section">
+                <div className="field-grid">
+                  <TextField path="name" label="Scenario name" wide />
+                  <TextField path="description" label="Description" wide placeholder="site, case, assumptions" />
+                </div>
+              </section>
+              <DischargeSection />
+              <AmbientSection />
+              <DiffuserSection />
+              <MixingZoneSection />
+            </aside>
+
+            <section className="centre" aria-label="Views">
+              <div className="view3d-panel">
+                {result && scenario ? (
+                  <PlumeView scenario={scenario} result={result} unitSystem={unitSystem} resetSignal={resetSignal} />
+                ) : (
+                  <div className="placeholder">{engine.error ? "No results: fix the inputs marked in red." : "Calculating…"}</div>
+                )}
+              </div>
+              <div className="chart-panel">
+                <div className="tabs small" role="tablist" aria-label="Chart">
+                  <button type="button" role="tab" aria-selected={chart === "trajectory"} onClick={() => setChart("trajectory")}>Side view</button>
+                  <button type="button" role="tab" aria-selected={chart === "dilution"} onClick={() => setChart("dilution")}>Dilution vs distance</button>
+                  <button type="button" role="tab" aria-selected={chart === "increase"} onClick={() => setChart("increase")}>Salinity increase vs distance</button>
+                </div>
+                {result && scenario ? (
+                  chart === "trajectory" ? (
+                    <TrajectoryChart result={result} scenario={scenario} unitSystem={unitSystem} />
+                  ) : (
+                    <DistanceChart result={result} scenario={scenario} unitSystem={unitSystem} quantity={chart} />
+                  )
+                ) : null}
+              </div>
+            </section>
+
+            <aside className="results-column" aria-label="Results">
+              <p className="caution" data-role="caution">{CAUTION}</p>
+              <div className={`engine-status${engine.error ? " error" : ""}`} role="status" data-role="engine-status">
+                {engine.error ? (
+                  <>
+                    <b>{result ? "Showing the last good results." : "No results."}</b> {engine.error}
+                  </>
+                ) : engine.running ? (
+                  "Calculating…"
+                ) : engine.ms !== null ? (
+                  `Up to date · ${engine.ms.toFixed(0)} ms`
+                ) : null}
+              </div>
+              <div className={engine.stale ? "stale" : undefined}>
+                {result ? <ResultsPanel result={result} unitSystem={unitSystem} /> : null}
+              </div>
+            </aside>
+          </main>
+        ) : (
+          <main className="study-workspace">
+            <p className="caution" data-role="caution">{CAUTION}</p>
+            {StudyPanel ? (
+              <Suspense fallback={<div className="placeholder">Loading study tools…</div>}>
+                <StudyPanel scenarioFile={doc.file} unitSystem={unitSystem} />
+              </Suspense>
+            ) : (
+              <div className="placeholder">Study tools are not part of this build.</div>
+            )}
+          </main>
+        )}
+
+        {showStart ? (
+          <StartView
+            demos={DEMO_SCENARIOS}
+            recent={recent}
+            onDemo={commands.openDemo}
+            onRecent={commands.openRecent}
+            onNew={commands.newScenario}
+            onOpen={commands.open}
+            onClose={() => setShowStart(false)}
+          />
+        ) : null}
+        {confirm ? <ConfirmDialog request={confirm} onClose={() => setConfirm(null)} /> : null}
+        {dragging ? <div className="drop-overlay">Drop a scenario file to open it</div> : null}
+      </div>
+    </EditorContext.Provider>
+  );
+}

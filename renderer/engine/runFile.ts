@@ -1,0 +1,44 @@
+/**
+ * Runs one raw scenario file through core: parse, then the pipeline. Never throws; failures come back as
+ * issues by scenario path so the fields can show them inline. Used by the worker and the capture route.
+ */
+import { parseScenario } from "../../core/scenario/parse";
+import { runScenario } from "../../core/pipeline";
+import type { EngineIssue, EngineResponse } from "./messages";
+
+function issuesOf(error: unknown): EngineIssue[] | null {
+  if (typeof error !== "object" || error === null || !("issues" in error)) return null;
+  const issues = (error as { issues: unknown }).issues;
+  if (!Array.isArray(issues)) return null;
+  return issues.map((issue: { path?: unknown; message?: unknown; value?: unknown }) => ({
+    path: typeof issue.path === "string" ? issue.path : "",
+    message: typeof issue.message === "string" ? issue.message : String(issue.message),
+    ...(issue.value === undefined ? {} : { value: cloneable(issue.value) }),
+  }));
+}
+
+/** Issue values go through postMessage; keep only plain data. */
+function cloneable(value: unknown): unknown {
+  try {
+    return JSON.parse(JSON.stringify(value)) as unknown;
+  } catch {
+    return String(value);
+  }
+}
+
+export function runFile(id: number, file: unknown): EngineResponse {
+  const started = performance.now();
+  try {
+    const parsed = parseScenario(file);
+    if (!parsed.ok) {
+      const issues = parsed.issues.map((i) => ({ path: i.path, message: i.message, ...(i.value === undefined ? {} : { value: cloneable(i.value) }) }));
+      return { id, ok: false, issues, message: issues.map((i) => `${i.path || "scenario"}: ${i.message}`).join("; ") };
+    }
+    const result = runScenario(parsed.scenario, { includePath: true });
+    return { id, ok: true, scenario: parsed.scenario, result, ms: performance.now() - started };
+  } catch (error) {
+    const issues = issuesOf(error) ?? [];
+    const message = error instanceof Error ? error.message : String(error);
+    return { id, ok: false, issues, message };
+  }
+}

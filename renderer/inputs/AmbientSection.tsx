@@ -1,0 +1,127 @@
+/** Receiving water: depth, uniform or profiled salinity and temperature, current and bed slope. */
+import { useRef, useState } from "react";
+import { addProfileRow, removeArrayItem, replaceProfile, setAmbientMode } from "../state/actions";
+import { getAtPath } from "../state/scenarioState";
+import { useEditor } from "./EditorContext";
+import { QuantityField, SectionIssues } from "./fields";
+import { parseProfileText } from "./profileText";
+
+export function AmbientSection() {
+  const editor = useEditor();
+  const profile = getAtPath(editor.file, "ambient.profile");
+  const isProfile = Array.isArray(profile);
+  const [pasteOpen, setPasteOpen] = useState(false);
+  const [pasteText, setPasteText] = useState("");
+  const [pasteErrors, setPasteErrors] = useState<string[]>([]);
+  const fileInput = useRef<HTMLInputElement | null>(null);
+
+  const importText = (text: string) => {
+    const parsed = parseProfileText(text);
+    setPasteErrors(parsed.errors);
+    if (parsed.errors.length === 0) {
+      editor.perform(replaceProfile, { rows: parsed.rows });
+      setPasteOpen(false);
+      setPasteText("");
+    }
+  };
+
+  return (
+    <section className="input-section" aria-labelledby="sec-ambient">
+      <header>
+        <h2 id="sec-ambient">Receiving water</h2>
+        <div className="segmented" role="radiogroup" aria-label="Water column">
+          <button type="button" role="radio" aria-checked={!isProfile} onClick={() => editor.perform(setAmbientMode, { mode: "uniform" })}>
+            Uniform
+          </button>
+          <button type="button" role="radio" aria-checked={isProfile} onClick={() => editor.perform(setAmbientMode, { mode: "profile" })}>
+            Profile
+          </button>
+        </div>
+      </header>
+      <div className="field-grid">
+        <QuantityField path="ambient.depth" label="Water depth at diffuser" kind="length" />
+        {!isProfile ? (
+          <>
+            <QuantityField path="ambient.salinity" label="Salinity" kind="salinity" />
+            <QuantityField path="ambient.temperature" label="Temperature" kind="temperature" />
+          </>
+        ) : null}
+        <QuantityField path="ambient.currentSpeed" label="Current speed" kind="speed" hint="depth-averaged; 0 = still water" />
+        <QuantityField path="ambient.currentDirection" label="Current toward" kind="angle" hint="clockwise from north" />
+        <QuantityField path="ambient.bedSlope" label="Bed slope" kind="ratio" hint="rise/run, e.g. 0.02" />
+        <QuantityField path="ambient.bedSlopeAzimuth" label="Bed slopes down toward" kind="angle" hint="clockwise from north" />
+      </div>
+      {isProfile ? (
+        <div className="sub-table">
+          <h3>Profile (depth below surface)</h3>
+          <table className="profile-table">
+            <thead>
+              <tr>
+                <th scope="col">#</th>
+                <th scope="col">Depth</th>
+                <th scope="col">Salinity</th>
+                <th scope="col">Temperature</th>
+                <th />
+              </tr>
+            </thead>
+            <tbody>
+              {profile.map((_, i) => (
+                <tr key={i}>
+                  <td className="muted">{i + 1}</td>
+                  <td><QuantityField path={`ambient.profile.${i}.depth`} label={`Depth, row ${i + 1}`} kind="length" /></td>
+                  <td><QuantityField path={`ambient.profile.${i}.salinity`} label={`Salinity, row ${i + 1}`} kind="salinity" /></td>
+                  <td><QuantityField path={`ambient.profile.${i}.temperature`} label={`Temperature, row ${i + 1}`} kind="temperature" /></td>
+                  <td>
+                    <button type="button" className="icon-button" aria-label={`Remove row ${i + 1}`} onClick={() => editor.perform(removeArrayItem, { path: "ambient.profile", index: i })}>
+                      ×
+                    </button>
+                  </td>
+                </tr>
+              ))}
+            </tbody>
+          </table>
+          <div className="button-row">
+            <button type="button" className="link-button" onClick={() => editor.perform(addProfileRow, undefined)}>+ Add row</button>
+            <button type="button" className="link-button" onClick={() => setPasteOpen((o) => !o)}>Paste from spreadsheet…</button>
+            <button type="button" className="link-button" onClick={() => fileInput.current?.click()}>Load CSV…</button>
+            <input
+              ref={fileInput}
+              type="file"
+              accept=".csv,.tsv,.txt,text/csv"
+              hidden
+              data-role="profile-csv-input"
+              onChange={(event) => {
+                const file = event.target.files?.[0];
+                if (file) void file.text().then(importText);
+                event.target.value = "";
+              }}
+            />
+          </div>
+          {pasteOpen ? (
+            <div className="paste-box">
+              <label htmlFor="profile-paste">Paste rows: depth, salinity, temperature (header optional; units in brackets, e.g. "depth (ft)")</label>
+              <textarea id="profile-paste" rows={5} value={pasteText} onChange={(e) => setPasteText(e.target.value)} spellCheck={false} />
+              <div className="button-row">
+                <button type="button" onClick={() => importText(pasteText)}>Use these rows</button>
+                <button type="button" className="link-button" onClick={() => setPasteOpen(false)}>Cancel</button>
+              </div>
+            </div>
+          ) : null}
+          {pasteErrors.length ? (
+            <div className="section-issues" role="alert">
+              {pasteErrors.map((e, i) => <div key={i}>{e}</div>)}
+            </div>
+          ) : null}
+        </div>
+      ) : null}
+      <SectionIssues
+        path="ambient"
+        shownPaths={[
+          "ambient.depth", "ambient.salinity", "ambient.temperature", "ambient.currentSpeed", "ambient.currentDirection",
+          "ambient.bedSlope", "ambient.bedSlopeAzimuth",
+          ...(isProfile ? profile.flatMap((_, i) => ["depth", "salinity", "temperature"].map((k) => `ambient.profile.${i}.${k}`)) : []),
+        ]}
+      />
+    </section>
+  );
+}

@@ -1,0 +1,178 @@
+/**
+ * Input fields bound to a scenario path. Each shows its unit, accepts a typed unit ("8 in"), and shows
+ * core's parse issue for its path inline, in words.
+ */
+import { useId, useState, type ReactNode } from "react";
+import type { QuantityKind } from "../../core/units";
+import { setField } from "../state/actions";
+import { getAtPath } from "../state/scenarioState";
+import { issuesUnder, useEditor } from "./EditorContext";
+import { displayText, displayUnit, storedValueFromText } from "./quantityText";
+
+function FieldShell(props: { id: string; label: ReactNode; errors: readonly string[]; hint?: string; children: ReactNode; wide?: boolean }) {
+  const errorId = `${props.id}-error`;
+  return (
+    <div className={`field${props.errors.length ? " has-error" : ""}${props.wide ? " wide" : ""}`}>
+      <label htmlFor={props.id}>{props.label}</label>
+      {props.children}
+      {props.errors.length ? (
+        <div className="field-error" id={errorId} role="alert">
+          {props.errors.join("; ")}
+        </div>
+      ) : props.hint ? (
+        <div className="field-hint">{props.hint}</div>
+      ) : null}
+    </div>
+  );
+}
+
+export interface QuantityFieldProps {
+  readonly path: string;
+  readonly label: string;
+  readonly kind: QuantityKind;
+  readonly hint?: string;
+  /** Placeholder when the value is optional and absent. */
+  readonly placeholder?: string;
+}
+
+export function QuantityField({ path, label, kind, hint, placeholder }: QuantityFieldProps) {
+  const editor = useEditor();
+  const id = useId();
+  const raw = getAtPath(editor.file, path);
+  const [editing, setEditing] = useState<string | null>(null);
+  const unit = displayUnit(kind, editor.unitSystem);
+  const errors = issuesUnder(editor.issues, path, true);
+  const shown = editing ?? displayText(raw, kind, editor.unitSystem);
+  const typedUnit = typeof raw === "string" && /[a-zA-Z°‰%]/.test(raw) && editing === null;
+  return (
+    <FieldShell id={id} label={label} errors={errors} hint={typedUnit ? `as entered: ${raw}` : hint}>
+      <div className="quantity-input">
+        <input
+          id={id}
+          data-path={path}
+          type="text"
+          inputMode="decimal"
+          spellCheck={false}
+          autoComplete="off"
+          value={shown}
+          placeholder={placeholder}
+          aria-invalid={errors.length > 0}
+          aria-describedby={errors.length ? `${id}-error` : undefined}
+          onFocus={() => setEditing(displayText(raw, kind, editor.unitSystem))}
+          onBlur={() => setEditing(null)}
+          onChange={(event) => {
+            setEditing(event.target.value);
+            editor.perform(setField, { path, value: storedValueFromText(event.target.value, kind, editor.unitSystem) });
+          }}
+        />
+        <span className="unit" title={`Type a number in ${unit || "plain numbers"}, or a value with its own unit`}>
+          {unit || "–"}
+        </span>
+      </div>
+    </FieldShell>
+  );
+}
+
+/** A whole number (port counts). Stored as a number when it is one, else as typed for core to reject. */
+export function CountField({ path, label, hint }: { path: string; label: string; hint?: string }) {
+  const editor = useEditor();
+  const id = useId();
+  const raw = getAtPath(editor.file, path);
+  const [editing, setEditing] = useState<string | null>(null);
+  const errors = issuesUnder(editor.issues, path, true);
+  return (
+    <FieldShell id={id} label={label} errors={errors} hint={hint}>
+      <div className="quantity-input">
+        <input
+          id={id}
+          data-path={path}
+          type="text"
+          inputMode="numeric"
+          value={editing ?? (raw === undefined ? "" : String(raw))}
+          aria-invalid={errors.length > 0}
+          onFocus={() => setEditing(raw === undefined ? "" : String(raw))}
+          onBlur={() => setEditing(null)}
+          onChange={(event) => {
+            setEditing(event.target.value);
+            const text = event.target.value.trim();
+            const n = Number(text);
+            editor.perform(setField, { path, value: text === "" ? undefined : Number.isFinite(n) ? n : text });
+          }}
+        />
+        <span className="unit">ports</span>
+      </div>
+    </FieldShell>
+  );
+}
+
+export function TextField({ path, label, wide, placeholder }: { path: string; label: string; wide?: boolean; placeholder?: string }) {
+  const editor = useEditor();
+  const id = useId();
+  const raw = getAtPath(editor.file, path);
+  const errors = issuesUnder(editor.issues, path, true);
+  return (
+    <FieldShell id={id} label={label} errors={errors} wide={wide}>
+      <input
+        id={id}
+        data-path={path}
+        type="text"
+        value={typeof raw === "string" ? raw : raw === undefined ? "" : String(raw)}
+        placeholder={placeholder}
+        onChange={(event) => editor.perform(setField, { path, value: event.target.value === "" ? undefined : event.target.value })}
+      />
+    </FieldShell>
+  );
+}
+
+export function ChoiceField<T extends string>(props: {
+  path: string;
+  label: string;
+  options: readonly { value: T; label: string }[];
+  onChoose?: (value: T) => void;
+  fallback?: T;
+}) {
+  const editor = useEditor();
+  const id = useId();
+  const raw = getAtPath(editor.file, props.path);
+  const errors = issuesUnder(editor.issues, props.path, true);
+  const value = typeof raw === "string" ? raw : (props.fallback ?? "");
+  return (
+    <FieldShell id={id} label={props.label} errors={errors}>
+      <select
+        id={id}
+        data-path={props.path}
+        value={value}
+        onChange={(event) => {
+          const next = event.target.value as T;
+          if (props.onChoose) props.onChoose(next);
+          else editor.perform(setField, { path: props.path, value: next });
+        }}
+      >
+        {props.options.map((o) => (
+          <option key={o.value} value={o.value}>
+            {o.label}
+          </option>
+        ))}
+      </select>
+    </FieldShell>
+  );
+}
+
+/** Issues at a section path not already shown by a field (e.g. "diffuser" or "ambient.profile"). */
+export function SectionIssues({ path, shownPaths }: { path: string; shownPaths: readonly string[] }) {
+  const editor = useEditor();
+  const messages: string[] = [];
+  for (const [p, list] of editor.issues) {
+    if ((p === path || p.startsWith(path + ".")) && !shownPaths.includes(p)) {
+      messages.push(...list.map((m) => (p === path ? m : `${p.slice(path.length + 1)}: ${m}`)));
+    }
+  }
+  if (messages.length === 0) return null;
+  return (
+    <div className="section-issues" role="alert">
+      {messages.map((m, i) => (
+        <div key={i}>{m}</div>
+      ))}
+    </div>
+  );
+}

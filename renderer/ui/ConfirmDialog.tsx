@@ -1,0 +1,45 @@
+/** A small modal question with keyboard focus on the safe choice; Escape cancels. */
+import { useEffect, useRef } from "react";
+
+export interface ConfirmRequest {
+  readonly title: string;
+  readonly message: string;
+  readonly confirmLabel: string;
+  readonly cancelLabel?: string;
+  readonly extraLabel?: string;
+  readonly onConfirm: () => void;
+  readonly onExtra?: () => void;
+}
+
+export function ConfirmDialog({ request, onClose }: { request: ConfirmRequest; onClose: () => void }) {
+  const cancelRef = useRef<HTMLButtonElement | null>(null);
+  useEffect(() => {
+    cancelRef.current?.focus();
+    const onKey = (e: KeyboardEvent) => {
+      if (e.key === "Escape") onClose();
+    };
+    window.addEventListener("keydown", onKey);
+    return () => window.removeEventListener("keydown", onKey);
+  }, [onClose]);
+  return (
+    <div className="modal-backdrop">
+      <div className="modal" role="dialog" aria-modal="true" aria-labelledby="confirm-title">
+        <h2 id="confirm-title">{request.title}</h2>
+        <p>{request.message}</p>
+        <div className="button-row end">
+          {request.extraLabel && request.onExtra ? (
+            <button type="button" className="primary" onClick={() => { onClose(); request.onExtra?.(); }}>
+              {request.extraLabel}
+            </button>
+          ) : null}
+          <button type="button" className="danger" onClick={() => { onClose(); request.onConfirm(); }}>
+            {request.confirmLabel}
+          </button>
+          <button type="button" ref={cancelRef} onClick={onClose}>
+            {request.cancelLabel ?? "Cancel"}
+          </button>
+        </div>
+      </div>
+    </div>
+  );
+}

@@ -1,0 +1,394 @@
+/**
+ * Builds the three.js scene for one result: seabed with a distance grid, water surface, diffuser and
+ * ports, each jet as a dilution-coloured tube, impact spots, the spreading layer out to the mixing-zone
+ * edge, the mixing-zone boundary, the limit-exceedance extent, current and north arrows. It only places
+ * numbers core computed; the geometry itself comes from plumeGeometry.ts.
+ */
+import {
+  ArrowHelper,
+  BufferAttribute,
+  BufferGeometry,
+  CanvasTexture,
+  CircleGeometry,
+  Color,
+  CylinderGeometry,
+  DoubleSide,
+  Group,
+  Line,
+  LineBasicMaterial,
+  LineDashedMaterial,
+  LineSegments,
+  Mesh,
+  MeshLambertMaterial,
+  MeshBasicMaterial,
+  Object3D,
+  PlaneGeometry,
+  SphereGeometry,
+  Sprite,
+  SpriteMaterial,
+  SRGBColorSpace,
+  Vector3,
+} from "three";
+import type { BrinefieldResult } from "../../core/result/contract";
+import type { PathPoint } from "../../core/nearfield/types";
+import type { Scenario } from "../../core/scenario/types";
+import { displayToSI, formatNumber, siToDisplay, type UnitSystem } from "../../core/units";
+import { dilutionColour, dilutionDomain, type DilutionDomain, type Rgb } from "./colourScale";
+import {
+  annulusGeometry,
+  azimuthToEastNorth,
+  offsetOutline,
+  placePathPoint,
+  seabedGeometry,
+  seabedGridPositions,
+  seabedHeight,
+  tubeGeometry,
+  worldToScene,
+  type BedSpec,
+} from "./plumeGeometry";
+import { pathStartAzimuth, portPlacements, representativeAzimuth } from "./ports";
+
+export interface PlumeSceneInput {
+  readonly scenario: Scenario;
+  readonly result: BrinefieldResult;
+  readonly unitSystem: UnitSystem;
+}
+
+export interface PlumeSceneOutput {
+  readonly group: Group;
+  readonly domain: DilutionDomain;
+  /** Centre and size of the jets, for framing the camera (scene coordinates, m). */
+  readonly focus: { readonly centre: Vector3; readonly radius: number };
+  /** Half-size of the seabed patch, m. */
+  readonly extent: number;
+  /** Plan heading of the representative jet, degrees clockwise from north. */
+  readonly heading: number;
+  readonly depth: number;
+  /** Plain notes shown under the view (what is approximated in the drawing). */
+  readonly notes: readonly string[];
+  dispose(): void;
+}
+
+const COLOURS = {
+  seabed: 0xc9bfa8,
+  grid: 0x8a7f68,
+  water: 0x5a9bd4,
+  diffuser: 0x3b3f45,
+  mixingZone: 0xd9822b,
+  exceedance: 0xc0392b,
+  current: 0x1f5f99,
+  north: 0x333333,
+};
+
+/** Round step (1, 2, 5 × 10ⁿ) so that `span` holds about `count` steps. */
+export function niceStep(span: number, count: number): number {
+  const raw = span / Math.max(1, count);
+  const base = 10 ** Math.floor(Math.log10(raw));
+  for (const f of [1, 2, 5, 10]) if (f * base >= raw) return f * base;
+  return 10 * base;
+}
+
+function textSprite(text: string, heightWorld: number, colour = "#1d2733"): Sprite {
+  const fontPx = 48;
+  const canvas = document.createElement("canvas");
+  const ctx = canvas.getContext("2d");
+  const font = `600 ${fontPx}px system-ui, -apple-system, "Segoe UI", sans-serif`;
+  let width = 256;
+  if (ctx) {
+    ctx.font = font;
+    width = Math.ceil(ctx.measureText(text).width) + 24;
+  }
+  canvas.width = width;
+  canvas.height = fontPx + 20;
+  if (ctx) {
+    ctx.font = font;
+    ctx.fillStyle = "rgba(255,255,255,0.78)";
+    ctx.fillRect(0, 0, canvas.width, canvas.height);
+    ctx.fillStyle = colour;
+    ctx.textBaseline = "middle";
+    ctx.fillText(text, 12, canvas.height / 2);
+  }
+  const texture = new CanvasTexture(canvas);
+  texture.colorSpace = SRGBColorSpace;
+  const material = new SpriteMaterial({ map: texture, depthTest: false, transparent: true });
+  const sprite = new Sprite(material);
+  sprite.scale.set((heightWorld * canvas.width) / canvas.height, heightWorld, 1);
+  sprite.renderOrder = 10;
+  return sprite;
+}
+
+function lineFrom(points: Vector3[], material: LineBasicMaterial | LineDashedMaterial): Line {
+  const geometry = new BufferGeometry().setFromPoints(points);
+  const line = new Line(geometry, material);
+  if (material instanceof LineDashedMaterial) line.computeLineDistances();
+  return line;
+}
+
+function integralPath(result: BrinefieldResult): readonly PathPoint[] {
+  const integral = result.nearField.find((m) => m.method === "integral");
+  return integral?.path ?? [];
+}
+
+/** Where the centreline meets the seabed: the core's impact event, else the lowest point of the path. */
+function impactPoint(result: BrinefieldResult, path: readonly PathPoint[]): PathPoint | null {
+  const integral = result.nearField.find((m) => m.method === "integral");
+  const event = integral?.events?.find((e) => e.kind === "seabed-contact" || e.kind === "centreline-impact");
+  if (event && path.length > 0) {
+    let best = path[0];
+    for (const p of path) if (Math.abs(p.s - event.s) < Math.abs(best.s - event.s)) best = p;
+    return { ...best, x: event.x, y: event.y, z: event.z, dilution: event.dilution };
+  }
+  if (path.length === 0) return null;
+  return path.reduce((low, p) => (p.z < low.z ? p : low), path[0]);
+}
+
+export function buildPlumeScene(input: PlumeSceneInput): PlumeSceneOutput {
+  const { scenario, result, unitSystem } = input;
+  const group = new Group();
+  group.name = "plume-scene";
+  const disposables: { dispose(): void }[] = [];
+  const track = <T extends { dispose(): void }>(item: T): T => {
+    disposables.push(item);
+    return item;
+  };
+  const notes: string[] = [];
+
+  const depth = scenario.ambient.depth;
+  const bed: BedSpec = { depth, slope: scenario.ambient.bedSlope, slopeAzimuth: scenario.ambient.bedSlopeAzimuth };
+  const diffuser = scenario.diffuser;
+  const ports = portPlacements(diffuser);
+  const path = integralPath(result);
+  const portZ = -depth + diffuser.portHeight;
+  const mzRadius = scenario.mixingZone.radius;
+  const series = result.mixingZone.series;
+
+  // Colour domain spans every dilution drawn: jet, impact, layer to the edge.
+  const dilutions = [
+    ...path.map((p) => p.dilution),
+    ...series.dilution.filter((_, i) => series.distance[i] <= mzRadius * 1.05),
+    result.mixingZone.dilution,
+  ];
+  const domain = dilutionDomain(dilutions);
+  const colourOf = (d: number): Rgb => dilutionColour(d, domain);
+
+  const reach = path.reduce((m, p) => Math.max(m, Math.hypot(p.x, p.y)), 0);
+  const diffuserHalf = diffuser.length / 2;
+  const extent = Math.max(mzRadius * 1.15, reach * 1.6 + diffuserHalf, depth * 1.5, 10);
+
+  // Seabed and grid.
+  const seabed = new Mesh(
+    track(seabedGeometry(extent, bed, 32)),
+    track(new MeshLambertMaterial({ color: COLOURS.seabed, side: DoubleSide })),
+  );
+  seabed.name = "seabed";
+  group.add(seabed);
+
+  const stepDisplay = niceStep(siToDisplay(extent * 2, "length", unitSystem).value, 8);
+  const step = displayToSI(stepDisplay, "length", unitSystem);
+  const lift = Math.max(0.01, extent * 0.0008);
+  const gridGeometry = track(new BufferGeometry());
+  gridGeometry.setAttribute("position", new BufferAttribute(seabedGridPositions(extent, step, bed, lift), 3));
+  const grid = new LineSegments(gridGeometry, track(new LineBasicMaterial({ color: COLOURS.grid, transparent: true, opacity: 0.55 })));
+  grid.name = "distance-grid";
+  group.add(grid);
+  const labelHeight = extent * 0.035;
+  const unitLabel = siToDisplay(1, "length", unitSystem).unit;
+  for (let k = 1; k * step <= extent * 0.999; k++) {
+    const east = k * step;
+    const north = -extent;
+    const label = textSprite(`${formatNumber(k * stepDisplay)} ${unitLabel}`, labelHeight, "#4a4236");
+    label.position.copy(worldToScene({ x: east, y: north, z: seabedHeight(east, north, bed.depth, bed.slope, bed.slopeAzimuth) + labelHeight }));
+    track(label.material);
+    track(label.material.map!);
+    group.add(label);
+  }
+
+  // Water surface and the column's corner posts.
+  const surface = new Mesh(
+    track(new PlaneGeometry(extent * 2, extent * 2)),
+    track(new MeshBasicMaterial({ color: COLOURS.water, transparent: true, opacity: 0.12, side: DoubleSide, depthWrite: false })),
+  );
+  surface.rotation.x = -Math.PI / 2;
+  surface.name = "water-surface";
+  group.add(surface);
+  const postMaterial = track(new LineBasicMaterial({ color: COLOURS.water, transparent: true, opacity: 0.5 }));
+  const corners: [number, number][] = [[-extent, -extent], [extent, -extent], [extent, extent], [-extent, extent]];
+  const rim = corners.map(([e, n]) => worldToScene({ x: e, y: n, z: 0 }));
+  group.add(lineFrom([...rim, rim[0]], postMaterial));
+  for (const [e, n] of corners) {
+    group.add(lineFrom([worldToScene({ x: e, y: n, z: 0 }), worldToScene({ x: e, y: n, z: seabedHeight(e, n, bed.depth, bed.slope, bed.slopeAzimuth) })], postMaterial));
+  }
+
+  // Diffuser pipe, risers and ports.
+  const metal = track(new MeshLambertMaterial({ color: COLOURS.diffuser }));
+  const portRadius = Math.max(diffuser.portDiameterNominal / 2, extent * 0.003);
+  if (diffuser.length > 0 && ports.length > 1) {
+    const axis = azimuthToEastNorth(diffuser.diffuserAzimuth);
+    const a = { x: -axis.east * diffuser.length * 0.5, y: -axis.north * diffuser.length * 0.5 };
+    const b = { x: axis.east * diffuser.length * 0.5, y: axis.north * diffuser.length * 0.5 };
+    const pa = worldToScene({ ...a, z: seabedHeight(a.x, a.y, bed.depth, bed.slope, bed.slopeAzimuth) + portRadius });
+    const pb = worldToScene({ ...b, z: seabedHeight(b.x, b.y, bed.depth, bed.slope, bed.slopeAzimuth) + portRadius });
+    const pipe = new Mesh(track(new CylinderGeometry(portRadius * 1.6, portRadius * 1.6, pa.distanceTo(pb), 12)), metal);
+    pipe.position.copy(pa).add(pb).multiplyScalar(0.5);
+    pipe.quaternion.setFromUnitVectors(new Vector3(0, 1, 0), new Vector3().subVectors(pb, pa).normalize());
+    pipe.name = "diffuser-pipe";
+    group.add(pipe);
+  }
+  const sphere = track(new SphereGeometry(portRadius * 1.4, 14, 10));
+  for (const port of ports) {
+    const bedZ = seabedHeight(port.east, port.north, bed.depth, bed.slope, bed.slopeAzimuth);
+    const top = worldToScene({ x: port.east, y: port.north, z: bedZ + diffuser.portHeight });
+    const foot = worldToScene({ x: port.east, y: port.north, z: bedZ });
+    if (diffuser.portHeight > 0) {
+      const riser = new Mesh(track(new CylinderGeometry(portRadius * 0.7, portRadius * 0.7, top.distanceTo(foot), 8)), metal);
+      riser.position.copy(top).add(foot).multiplyScalar(0.5);
+      group.add(riser);
+    }
+    const nozzle = new Mesh(sphere, metal);
+    nozzle.position.copy(top);
+    nozzle.name = "port";
+    group.add(nozzle);
+  }
+
+  // Jets: the computed centreline at every port, turned to each port's azimuth.
+  const tubeMaterial = track(new MeshLambertMaterial({ vertexColors: true, side: DoubleSide }));
+  const computedAzimuth = pathStartAzimuth(path, representativeAzimuth(diffuser));
+  let turned = false;
+  if (path.length >= 2) {
+    const colours = path.map((p) => colourOf(p.dilution));
+    const radii = path.map((p) => p.halfWidth);
+    const segments = ports.length > 24 ? 8 : 16;
+    for (const port of ports) {
+      const turn = port.azimuth - computedAzimuth;
+      if (Math.abs(((turn + 540) % 360) - 180) > 0.5) turned = true;
+      const bedZ = seabedHeight(port.east, port.north, bed.depth, bed.slope, bed.slopeAzimuth);
+      const centreline = path.map((p) => {
+        const w = placePathPoint(p, port, turn);
+        return worldToScene({ x: w.x, y: w.y, z: w.z + bedZ + diffuser.portHeight });
+      });
+      const tube = new Mesh(track(tubeGeometry({ centreline, radii, colours, radialSegments: segments })), tubeMaterial);
+      tube.name = "jet";
+      group.add(tube);
+    }
+  } else {
+    notes.push("No centreline from the integral method; jets are not drawn.");
+  }
+  if (turned) notes.push("Ports at other azimuths show the computed jet turned to their azimuth (exact only in still water).");
+
+  // Impact spots on the seabed.
+  const impact = impactPoint(result, path);
+  if (impact) {
+    const spotMaterial = track(
+      new MeshBasicMaterial({ color: new Color(...colourOf(impact.dilution)), transparent: true, opacity: 0.85, side: DoubleSide, depthWrite: false }),
+    );
+    const spotGeometry = track(new CircleGeometry(Math.max(impact.halfWidth, portRadius * 2), 40));
+    for (const port of ports) {
+      const w = placePathPoint(impact, port, port.azimuth - computedAzimuth);
+      const spot = new Mesh(spotGeometry, spotMaterial);
+      spot.rotation.x = -Math.PI / 2;
+      spot.position.copy(worldToScene({ x: w.x, y: w.y, z: seabedHeight(w.x, w.y, bed.depth, bed.slope, bed.slopeAzimuth) + lift * 3 }));
+      spot.name = "impact";
+      group.add(spot);
+    }
+  }
+
+  // Spreading layer: the top of the dense layer, coloured by dilution, out to the mixing-zone edge.
+  const layer = series.distance
+    .map((d, i) => ({ d, h: series.layerThickness[i], s: series.dilution[i] }))
+    .filter((p): p is { d: number; h: number; s: number } => p.h !== null && Number.isFinite(p.h) && p.d <= mzRadius * 1.0001 && p.d > 0);
+  if (layer.length >= 2) {
+    const sheet = new Mesh(
+      track(
+        annulusGeometry({
+          distances: layer.map((p) => p.d),
+          heights: layer.map((p) => Math.max(p.h, lift * 4)),
+          colours: layer.map((p) => colourOf(p.s)),
+          bed,
+        }),
+      ),
+      track(new MeshLambertMaterial({ vertexColors: true, transparent: true, opacity: 0.55, side: DoubleSide, depthWrite: false })),
+    );
+    sheet.name = "spreading-layer";
+    group.add(sheet);
+  }
+
+  // Mixing-zone boundary and the distance where the governing limit is still exceeded.
+  const outline = (radius: number) =>
+    offsetOutline(radius, ports.length > 1 ? diffuser.length : 0, diffuser.diffuserAzimuth).map((p) =>
+      worldToScene({ x: p.east, y: p.north, z: seabedHeight(p.east, p.north, bed.depth, bed.slope, bed.slopeAzimuth) + lift * 6 }),
+    );
+  const mzLine = lineFrom(outline(mzRadius), track(new LineBasicMaterial({ color: COLOURS.mixingZone, linewidth: 2 })));
+  mzLine.name = "mixing-zone-edge";
+  group.add(mzLine);
+  const mzDisplay = siToDisplay(mzRadius, "length", unitSystem);
+  const mzLabel = textSprite(`mixing-zone edge ${formatNumber(mzDisplay.value, 3)} ${mzDisplay.unit}`, labelHeight, "#9a5410");
+  const mzLabelAt = azimuthToEastNorth(diffuser.diffuserAzimuth + 90);
+  mzLabel.position.copy(worldToScene({ x: mzLabelAt.east * mzRadius, y: mzLabelAt.north * mzRadius, z: -depth + labelHeight * 1.5 }));
+  track(mzLabel.material);
+  track(mzLabel.material.map!);
+  group.add(mzLabel);
+  const exceed = result.mixingZone.footprint.furthestExtent;
+  if (exceed > 0 && Number.isFinite(exceed)) {
+    const ring = lineFrom(outline(exceed), track(new LineDashedMaterial({ color: COLOURS.exceedance, dashSize: extent * 0.02, gapSize: extent * 0.012 })));
+    ring.name = "limit-exceedance";
+    group.add(ring);
+  }
+
+  // Current arrow near the surface, north arrow in a corner of the seabed.
+  const arrowLength = extent * 0.22;
+  const speed = scenario.ambient.currentSpeed;
+  const currentText = siToDisplay(speed, "speed", unitSystem);
+  if (speed > 0) {
+    const dir = azimuthToEastNorth(scenario.ambient.currentDirection);
+    const from = worldToScene({ x: -dir.east * arrowLength * 0.5 - extent * 0.55, y: -dir.north * arrowLength * 0.5 + extent * 0.55, z: -depth * 0.15 });
+    const direction = worldToScene({ x: dir.east, y: dir.north, z: 0 }).normalize();
+    const arrow = new ArrowHelper(direction, from, arrowLength, COLOURS.current, arrowLength * 0.25, arrowLength * 0.12);
+    arrow.name = "current-arrow";
+    group.add(arrow);
+    const label = textSprite(`current ${formatNumber(currentText.value, 3)} ${currentText.unit}`, labelHeight, "#1f5f99");
+    label.position.copy(from).addScaledVector(direction, arrowLength * 0.5).add(new Vector3(0, labelHeight * 1.2, 0));
+    track(label.material);
+    track(label.material.map!);
+    group.add(label);
+  } else {
+    notes.push("Still water (no current).");
+  }
+  const northFrom = worldToScene({ x: -extent * 0.85, y: -extent * 0.85, z: seabedHeight(-extent * 0.85, -extent * 0.85, bed.depth, bed.slope, bed.slopeAzimuth) + lift * 10 });
+  const north = new ArrowHelper(new Vector3(0, 0, -1), northFrom, extent * 0.14, COLOURS.north, extent * 0.04, extent * 0.025);
+  north.name = "north-arrow";
+  group.add(north);
+  const nLabel = textSprite("N", labelHeight * 1.2, "#111");
+  nLabel.position.copy(northFrom).add(new Vector3(0, labelHeight, -extent * 0.17));
+  track(nLabel.material);
+  track(nLabel.material.map!);
+  group.add(nLabel);
+
+  // Camera focus: the jets and their impact spots.
+  const focusPoints: Vector3[] = [];
+  for (const port of ports) {
+    focusPoints.push(worldToScene({ x: port.east, y: port.north, z: portZ }));
+    for (const p of [path[0], path[Math.floor(path.length / 2)], path[path.length - 1]]) {
+      if (!p) continue;
+      const w = placePathPoint(p, port, port.azimuth - computedAzimuth);
+      focusPoints.push(worldToScene({ x: w.x, y: w.y, z: w.z + portZ }));
+    }
+  }
+  const centre = focusPoints.reduce((acc, p) => acc.add(p), new Vector3()).multiplyScalar(1 / Math.max(1, focusPoints.length));
+  const radius = Math.max(depth * 0.6, ...focusPoints.map((p) => p.distanceTo(centre)), 2);
+
+  return {
+    group,
+    domain,
+    focus: { centre, radius },
+    extent,
+    heading: computedAzimuth,
+    depth,
+    notes,
+    dispose: () => {
+      for (const d of disposables) d.dispose();
+      group.traverse((o: Object3D) => {
+        if (o instanceof ArrowHelper) o.dispose();
+      });
+    },
+  };
+}
