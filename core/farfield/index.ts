@@ -23,3 +23,5 @@ export type { SpreadingLayerInput, SpreadingLayerSeries } from "./gravity-curren
 export { jetProfileFromNearField, dilutionFromProfile, nearFieldEndFromResult } from "./jet-series";
 export type { JetProfile } from "./jet-series";
 export { erf } from "./erf";
+export { footprintFromLayer } from "./footprint";
+export type { FootprintJet, FootprintLayer } from "./footprint";

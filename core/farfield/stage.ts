@@ -31,6 +31,7 @@ import {
   brooksWidthFromDistance,
 } from "./brooks-1960-diffusion";
 import { TURNER_1986_SOURCE } from "./turner-1986-entrainment";
+import { footprintFromLayer } from "./footprint";
 
 export interface BeyondInput {
   readonly scenario: Scenario;
@@ -229,7 +230,11 @@ export function beyondNearField(input: BeyondInput): BeyondOutput {
   const assessment = complianceFromEdgeDilution(scenario, edgeDilution, seabedSalinity, seabedTemperature);
   warnings.push(...assessment.warnings);
   if (chain) {
-    footprint = footprintFromChain(chain, farSeries(chain, farMethod, Math.max(10 * radius, 2 * chain.end.distance), 2000), assessment.compliance.requiredDilution);
+    footprint = footprintFromLayer(
+      { profile: chain.profile, impactDistance: chain.impactDistance, nearFieldEnd: chain.end.distance },
+      farSeries(chain, farMethod, Math.max(10 * radius, 2 * chain.end.distance), 2000),
+      assessment.compliance.requiredDilution,
+    );
     if (footprint.furthestExtent >= Math.max(10 * radius, 2 * chain.end.distance) * 0.999) {
       warnings.push(
         warning("footprint-beyond-range", "warning", `The governing limit is still exceeded at ${footprint.furthestExtent.toFixed(0)} m, the end of the computed range; the footprint is larger than reported.`, {
@@ -297,57 +302,4 @@ function buildSeries(chain: Chain, far: FarSeries, method: FarMethod, excess: nu
     stage.push(i === 0 ? "spreading-layer" : label);
   }
   return { distance, dilution, salinityIncrease: dilution.map((s) => excess / s), layerThickness, stage };
-}
-
-/**
- * Seabed area where the dilution is below the required dilution, and its furthest extent. The seabed is
- * covered from the impact point on; between impact and the near-field end the layer width grows linearly
- * from zero to its start width (judgement). Radial widths are perimeters, so ∫w dr is an annular area.
- */
-function footprintFromChain(chain: Chain, far: FarSeries, required: number): { area: number; furthestExtent: number } {
-  if (!(required > 1)) return { area: 0, furthestExtent: 0 };
-  const xs: number[] = [];
-  const ss: number[] = [];
-  const ws: number[] = [];
-  const xi = chain.impactDistance;
-  const xn = chain.end.distance;
-  const w0 = far.width[0];
-  const m = 50;
-  for (let i = 0; i < m && xn > xi; i++) {
-    const r = xi + ((xn - xi) * i) / m;
-    xs.push(r);
-    ss.push(dilutionFromProfile(chain.profile, r));
-    ws.push((w0 * (r - xi)) / (xn - xi));
-  }
-  for (let i = 0; i < far.distance.length; i++) {
-    xs.push(far.distance[i]);
-    ss.push(far.dilution[i]);
-    ws.push(far.width[i]);
-  }
-  let area = 0;
-  let extent = 0;
-  for (let i = 1; i < xs.length; i++) {
-    const a = ss[i - 1] < required;
-    const b = ss[i] < required;
-    if (!a && !b) continue;
-    let x1 = xs[i];
-    let w1 = ws[i];
-    if (a && !b) {
-      // Crossing inside the segment: cut it where the dilution reaches the required value.
-      const t = (required - ss[i - 1]) / (ss[i] - ss[i - 1]);
-      x1 = xs[i - 1] + t * (xs[i] - xs[i - 1]);
-      w1 = ws[i - 1] + t * (ws[i] - ws[i - 1]);
-    }
-    let x0 = xs[i - 1];
-    let w0s = ws[i - 1];
-    if (!a && b) {
-      const t = (required - ss[i - 1]) / (ss[i] - ss[i - 1]);
-      x0 = xs[i - 1] + t * (xs[i] - xs[i - 1]);
-      w0s = ws[i - 1] + t * (ws[i] - ws[i - 1]);
-    }
-    area += 0.5 * (w0s + w1) * (x1 - x0);
-    extent = Math.max(extent, x1);
-  }
-  if (ss.length && ss[0] < required) extent = Math.max(extent, xs[0]);
-  return { area, furthestExtent: extent };
 }
