@@ -284,7 +284,8 @@ export function nearFieldIntegral(
   };
   events[EV_SURFACE_CENTRE] = { fn: (_s, y) => surfaceAbovePort - y[IZ], direction: -1, terminal: true };
   events[EV_MAX_RISE] = {
-    fn: (s, y, p) => {
+    fn: (s, y, p, dy) => {
+      if (dy) return upperEdgeSlope(y, dy);
       integralJetRhs(s, y, scratchDy, p);
       return upperEdgeSlope(y, scratchDy);
     },
@@ -358,7 +359,7 @@ export function nearFieldIntegral(
       {
         rtol,
         atol,
-        h0: 0.5 * d,
+        h0: 0.1 * d,
         hMin: 1e-12 * Math.max(d, 1),
         hMax: Math.max(maxLength / 20, d),
         maxSteps,
@@ -575,7 +576,7 @@ function assemble(
     "Dilutions are centreline (minimum) values: flux-average (top-hat) dilution × λ²/(1+λ²) with λ = 1.2; " +
       "halfWidth is the top-hat radius (≈ √2 × the Gaussian 1/e velocity half-width).",
   );
-  notes.push(`Integration: Dormand–Prince 5(4), ${run.steps} steps, ${run.rejected} rejected, stop: ${run.reason}.`);
+  notes.push(`Integration: Dormand–Prince 5(4), ${run.steps} steps, ${run.rejected} rejected, ${run.evaluations} evaluations, stop: ${run.reason}.`);
 
   events.sort((a, b) => a.s - b.s);
   return {

@@ -120,7 +120,7 @@ export function integralJetRhs(_s: number, y: Float64Array, out: Float64Array, p
 
 /** Top-hat radius b = Q/√(π|M⃗|), m. */
 export function radiusFromState(y: Float64Array): number {
-  const m = Math.hypot(y[IMX], y[IMY], y[IMZ]);
+  const m = Math.sqrt(y[IMX] * y[IMX] + y[IMY] * y[IMY] + y[IMZ] * y[IMZ]);
   return y[IQ] / Math.sqrt(Math.PI * (m > TINY_MOMENTUM ? m : TINY_MOMENTUM));
 }
 
@@ -129,7 +129,7 @@ export function radiusFromState(y: Float64Array): number {
  * b·√(1 − t_z²) above and below the centreline.
  */
 export function verticalHalfExtent(y: Float64Array): number {
-  const m = Math.hypot(y[IMX], y[IMY], y[IMZ]);
+  const m = Math.sqrt(y[IMX] * y[IMX] + y[IMY] * y[IMY] + y[IMZ] * y[IMZ]);
   const safe = m > TINY_MOMENTUM ? m : TINY_MOMENTUM;
   const tz = y[IMZ] / safe;
   const c2 = 1 - tz * tz;

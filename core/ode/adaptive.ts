@@ -14,8 +14,12 @@
 import type { OdeRhs, Stepper } from "./stepper";
 
 export interface OdeEvent<P> {
-  /** Event function g(t, y); an event is a zero crossing of g. Must not allocate. */
-  readonly fn: (t: number, y: Float64Array, params: P) => number;
+  /**
+   * Event function g(t, y); an event is a zero crossing of g. Must not allocate. At step ends the
+   * driver also passes dy = f(t, y) (already computed by the stepper); inside a step (root search
+   * on the dense output) dy is undefined.
+   */
+  readonly fn: (t: number, y: Float64Array, params: P, dy?: Float64Array) => number;
   /** −1: only crossings from g > 0 to g ≤ 0; +1: from g < 0 to g ≥ 0; 0: either. */
   readonly direction: -1 | 0 | 1;
   /** Stop the integration at this event. */
@@ -51,6 +55,7 @@ export interface AdaptiveResult {
   readonly y: Float64Array;
   readonly steps: number;
   readonly rejected: number;
+  /** Right-hand-side evaluations by the stepper during this run (event functions not counted). */
   readonly evaluations: number;
   /** Every located event in order of t (non-terminal ones included). */
   readonly events: readonly EventHit[];
@@ -85,7 +90,8 @@ export function integrateAdaptive<P>(
   const exponent = -1 / (stepper.errorOrder + 1);
 
   stepper.reset(t0, y0, params);
-  for (let e = 0; e < ne; e++) gOld[e] = events[e].fn(t0, stepper.y, params);
+  const evaluations0 = stepper.evaluations;
+  for (let e = 0; e < ne; e++) gOld[e] = events[e].fn(t0, stepper.y, params, stepper.f);
 
   let h = Math.min(Math.max(options.h0, hMin), hMax);
   let steps = 0;
@@ -98,7 +104,7 @@ export function integrateAdaptive<P>(
     y: Float64Array.from(y),
     steps,
     rejected,
-    evaluations: stepper.evaluations,
+    evaluations: stepper.evaluations - evaluations0,
     events: hits,
   });
 
@@ -128,7 +134,7 @@ export function integrateAdaptive<P>(
     // Events in this step, earliest first; stop at the first terminal one.
     let terminalHit: EventHit | null = null;
     if (ne > 0) {
-      for (let e = 0; e < ne; e++) gNew[e] = events[e].fn(tNew, stepper.y, params);
+      for (let e = 0; e < ne; e++) gNew[e] = events[e].fn(tNew, stepper.y, params, stepper.f);
       const stepHits: EventHit[] = [];
       for (let e = 0; e < ne; e++) {
         const a = gOld[e];

@@ -4,7 +4,7 @@
  * published laboratory bands live in tests/check-values/entrainment-lee-cheung-1990.json.
  */
 import { describe, expect, it } from "vitest";
-import { solveODE } from "mathjs";
+import * as mathjs from "mathjs";
 import checkValues from "../../check-values/entrainment-lee-cheung-1990.json";
 import {
   CENTRELINE_PROFILE_FACTOR,
@@ -27,6 +27,16 @@ import {
 import { integrateAdaptive } from "../../../core/ode/adaptive";
 import { stepperDormandPrince45 } from "../../../core/ode/dormandPrince45";
 import type { AmbientColumn, JetSource, PathSink } from "../../../core/nearfield/types";
+
+/** mathjs ships `solveODE` (Dormand–Prince RK45) but its type declarations omit it. */
+const solveODE = (mathjs as unknown as {
+  solveODE: (
+    f: (t: number, y: number[]) => number[],
+    tspan: [number, number],
+    y0: number[],
+    options: { tol: number; firstStep: number; maxIter: number },
+  ) => { t: number[]; y: number[][] };
+}).solveODE;
 
 const G = 9.80665;
 
@@ -95,9 +105,7 @@ function mathjsState(jet: JetSource, column: AmbientColumn, sEnd: number): numbe
     integralJetRhs(s, yy, out, p);
     return Array.from(out);
   };
-  const sol = solveODE(f, [0, sEnd], y0, { tol: 1e-10, firstStep: 1e-3, maxIter: 200000 }) as {
-    y: number[][];
-  };
+  const sol = solveODE(f, [0, sEnd], y0, { tol: 1e-10, firstStep: 1e-3, maxIter: 200000 });
   return sol.y[sol.y.length - 1];
 }
 
