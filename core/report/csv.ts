@@ -3,7 +3,7 @@
  * mixing-zone edge) and the dilution-against-distance series. Numbers are written at full precision
  * (JavaScript's shortest round-trip form) so a CSV parses back to exactly the result's numbers.
  */
-import { csvFormat } from "d3-dsv";
+import { csvFormat, csvParse } from "d3-dsv";
 import type { BrinefieldResult } from "../result/contract";
 
 /** Column order of `resultCsv`; units are in the column names. */
@@ -105,4 +105,19 @@ export function seriesCsv(result: BrinefieldResult): string {
     stage: s.stage[i] ?? "",
   }));
   return csvFormat(rows, [...SERIES_CSV_COLUMNS]);
+}
+
+/** A study's key results: every variant's `resultCsv` rows with the variant name in front. */
+export function studyResultCsv(variants: readonly { readonly name: string; readonly result: BrinefieldResult }[]): string {
+  return withVariantColumn(variants.map((v) => ({ name: v.name, csv: resultCsv(v.result) })), [...RESULT_CSV_COLUMNS]);
+}
+
+/** A study's dilution series: every variant's `seriesCsv` rows with the variant name in front. */
+export function studySeriesCsv(variants: readonly { readonly name: string; readonly result: BrinefieldResult }[]): string {
+  return withVariantColumn(variants.map((v) => ({ name: v.name, csv: seriesCsv(v.result) })), [...SERIES_CSV_COLUMNS]);
+}
+
+function withVariantColumn(parts: readonly { name: string; csv: string }[], columns: string[]): string {
+  const rows: Record<string, string>[] = parts.flatMap((p) => csvParse(p.csv).map((row) => ({ variant: p.name, ...row }) as Record<string, string>));
+  return csvFormat(rows, ["variant", ...columns]);
 }

@@ -97,39 +97,41 @@ export interface SideViewInput {
   readonly portAngle: number | null;
 }
 
-/** Points (plan distance, elevation above seabed) of one method's centreline, as drawn. */
-export function sideViewPoints(method: NearFieldMethodResult, portHeight: number): [number, number][] {
-  if (method.path && method.path.length > 1) {
-    return method.path.map((p) => [Math.hypot(p.x, p.y), portHeight + p.z]);
-  }
-  // Length-scale laws give key points only: port, maximum rise, return to port level, seabed impact.
-  const points: [number, number][] = [[0, portHeight]];
+/** A method's centreline as computed (integral methods give a path; length-scale laws give none). */
+export function sideViewPath(method: NearFieldMethodResult, portHeight: number): [number, number][] | null {
+  if (!method.path || method.path.length < 2) return null;
+  return method.path.map((p) => [Math.hypot(p.x, p.y), portHeight + p.z]);
+}
+
+/** Key points a method reports, as (plan distance, elevation above seabed); only those it gives. */
+export function sideViewKeyPoints(method: NearFieldMethodResult, portHeight: number) {
+  const points: { kind: "max-rise" | "return" | "impact"; x: number; y: number }[] = [];
   if (method.maxRiseDistance !== null && method.maxRiseHeight !== null) {
-    points.push([method.maxRiseDistance, portHeight + method.maxRiseHeight]);
+    points.push({ kind: "max-rise", x: method.maxRiseDistance, y: portHeight + method.maxRiseHeight });
   }
-  if (method.returnDistance !== null) points.push([method.returnDistance, portHeight]);
-  if (method.impactDistance !== null && (method.returnDistance === null || method.impactDistance > method.returnDistance)) {
-    points.push([method.impactDistance, 0]);
-  }
+  if (method.returnDistance !== null) points.push({ kind: "return", x: method.returnDistance, y: portHeight });
+  if (method.impactDistance !== null) points.push({ kind: "impact", x: method.impactDistance, y: 0 });
   return points;
 }
 
-/** Side view: seabed, surface, port, each method's centreline and its impact point. */
+/** Side view: seabed, surface, port, each method's centreline or key points, maximum rise and impact. */
 export function sideViewSvg(input: SideViewInput): string {
   const f = FRAME;
   const hp = input.portHeight ?? 0;
-  const lines = input.nearField.map((m) => ({ method: m, points: sideViewPoints(m, hp) }));
+  const lines = input.nearField.map((m) => ({ method: m, path: sideViewPath(m, hp), keys: sideViewKeyPoints(m, hp) }));
   let xMax = 1;
-  let yMax = input.depth ?? 1;
-  for (const { method, points } of lines) {
-    for (const [x, y] of points) {
+  let yTop = input.depth ?? hp + 1;
+  for (const { method, path, keys } of lines) {
+    for (const [x, y] of path ?? []) {
       xMax = Math.max(xMax, x);
-      yMax = Math.max(yMax, y);
+      yTop = Math.max(yTop, y);
     }
-    if (method.nearFieldDistance !== null && method.nearFieldDistance < 3 * xMax) xMax = Math.max(xMax, method.nearFieldDistance);
+    for (const k of keys) xMax = Math.max(xMax, k.x);
+    if (method.maxRiseHeight !== null) yTop = Math.max(yTop, hp + method.maxRiseHeight);
   }
   xMax *= 1.08;
-  yMax *= 1.05;
+  // Headroom above the surface holds the legend.
+  const yMax = yTop * 1.04 + 0.12 * yTop + 14 * lines.length * (yTop / plotHeight(f));
   const sx = (x: number) => f.left + (x / xMax) * plotWidth(f);
   const sy = (y: number) => f.top + plotHeight(f) - (y / yMax) * plotHeight(f);
   const parts: string[] = [];
@@ -143,33 +145,50 @@ export function sideViewSvg(input: SideViewInput): string {
   parts.push(`<line x1="${n(sx(0))}" y1="${n(sy(0))}" x2="${n(sx(xMax))}" y2="${n(sy(0))}" stroke="#7c6a3c" stroke-width="1.4"/>`);
   // Axes and ticks.
   parts.push(...axisTicks(linearTicks(0, xMax), (t) => sx(t), sy(0) + 6, "x"));
-  parts.push(...axisTicks(linearTicks(0, yMax, 5), (t) => sy(t), sx(0), "y"));
-  parts.push(`<text x="${n(f.left + plotWidth(f) / 2)}" y="${f.height - 6}" text-anchor="middle" font-size="11" ${FONT}>plan distance from the port (m)</text>`);
-  parts.push(`<text transform="translate(14 ${n(f.top + plotHeight(f) / 2)}) rotate(-90)" text-anchor="middle" font-size="11" ${FONT}>height above seabed (m)</text>`);
+  parts.push(...axisTicks(linearTicks(0, yTop, 5), (t) => sy(t), sx(0), "y"));
+  parts.push(`<line x1="${n(sx(0))}" y1="${n(sy(0))}" x2="${n(sx(0))}" y2="${n(sy(yTop))}" stroke="#334155"/>`);
+  parts.push(`<text x="${n(f.left + plotWidth(f) / 2)}" y="${f.height - 6}" text-anchor="middle" font-size="11" ${FONT}>plan distance from the port along the discharge (m)</text>`);
+  parts.push(`<text transform="translate(14 ${n(sy(yTop / 2))}) rotate(-90)" text-anchor="middle" font-size="11" ${FONT}>height above seabed (m)</text>`);
   // Riser and port.
   parts.push(`<line x1="${n(sx(0))}" y1="${n(sy(0))}" x2="${n(sx(0))}" y2="${n(sy(hp))}" stroke="#334155" stroke-width="3"/>`);
   parts.push(`<circle cx="${n(sx(0))}" cy="${n(sy(hp))}" r="3" fill="#334155"/>`);
-  // Centrelines.
-  lines.forEach(({ method, points }, i) => {
+  lines.forEach(({ method, path, keys }, i) => {
     const colour = METHOD_COLOURS[method.method] ?? "#475569";
-    const screen = points.map(([x, y]) => [sx(x), sy(y)] as const);
-    const d = method.path && method.path.length > 1 ? polyline(screen) : smoothPath(screen);
-    const dash = method.path && method.path.length > 1 ? "" : ` stroke-dasharray="6 3"`;
-    parts.push(`<path d="${d}" fill="none" stroke="${colour}" stroke-width="2"${dash}/>`);
-    if (method.impactDistance !== null) {
-      parts.push(`<circle cx="${n(sx(method.impactDistance))}" cy="${n(sy(0))}" r="3.5" fill="${colour}"/>`);
+    if (path) {
+      parts.push(`<path d="${polyline(path.map(([x, y]) => [sx(x), sy(y)] as const))}" fill="none" stroke="${colour}" stroke-width="2"/>`);
+    } else if (keys.some((k) => k.kind === "max-rise")) {
+      // A line through the reported points only (port, max rise, return, impact): no shape is invented between them.
+      const pts: [number, number][] = [[sx(0), sy(hp)], ...keys.map((k) => [sx(k.x), sy(k.y)] as [number, number])];
+      parts.push(`<path d="${smoothPath(pts)}" fill="none" stroke="${colour}" stroke-width="1.6" stroke-dasharray="6 3"/>`);
+    }
+    for (const k of keys) {
+      if (k.kind === "impact") parts.push(`<circle cx="${n(sx(k.x))}" cy="${n(sy(0))}" r="4" fill="${colour}"/>`);
+      if (k.kind === "return") parts.push(`<rect x="${n(sx(k.x) - 3.5)}" y="${n(sy(k.y) - 3.5)}" width="7" height="7" fill="none" stroke="${colour}" stroke-width="1.5"/>`);
     }
     if (method.maxRiseHeight !== null) {
-      const xr = method.maxRiseDistance ?? 0;
-      parts.push(`<line x1="${n(sx(xr) - 5)}" y1="${n(sy(hp + method.maxRiseHeight))}" x2="${n(sx(xr) + 5)}" y2="${n(sy(hp + method.maxRiseHeight))}" stroke="${colour}" stroke-width="1.5"/>`);
+      const y = sy(hp + method.maxRiseHeight);
+      if (method.maxRiseDistance !== null) {
+        const x = sx(method.maxRiseDistance);
+        parts.push(`<line x1="${n(x - 7)}" y1="${n(y)}" x2="${n(x + 7)}" y2="${n(y)}" stroke="${colour}" stroke-width="2"/>`);
+      } else {
+        // Location of the maximum not reported: the height is drawn as a level across the rising jet.
+        const xEnd = sx(keys.find((k) => k.kind === "return")?.x ?? keys[0]?.x ?? xMax / 2);
+        parts.push(`<line x1="${n(sx(0))}" y1="${n(y)}" x2="${n(xEnd)}" y2="${n(y)}" stroke="${colour}" stroke-width="1.2" stroke-dasharray="2 3"/>`);
+      }
     }
-    const label = `${method.method}${method.path && method.path.length > 1 ? " (computed centreline)" : " (key points joined; bar = upper edge at max rise)"}`;
-    parts.push(`<line x1="${f.left + 10}" y1="${f.top + 10 + i * 14}" x2="${f.left + 34}" y2="${f.top + 10 + i * 14}" stroke="${colour}" stroke-width="2"${dash}/>`);
-    parts.push(`<text x="${f.left + 40}" y="${f.top + 14 + i * 14}" font-size="10" ${FONT}>${escapeHtml(label)}</text>`);
+    const label = path
+      ? `${method.method}: computed centreline; bar = upper edge at maximum rise`
+      : method.maxRiseDistance !== null
+        ? `${method.method}: reported points joined; bar = upper edge at maximum rise`
+        : `${method.method}: reported points; dotted level = maximum rise of the upper edge`;
+    const ly = f.top + 10 + i * 14;
+    parts.push(`<line x1="${f.left + 10}" y1="${ly}" x2="${f.left + 34}" y2="${ly}" stroke="${colour}" stroke-width="2"${path ? "" : ` stroke-dasharray="6 3"`}/>`);
+    parts.push(`<text x="${f.left + 40}" y="${ly + 3.5}" font-size="10" ${FONT}>${escapeHtml(label)}</text>`);
   });
   const ve = (plotHeight(f) / yMax) / (plotWidth(f) / xMax);
   const veText = Math.abs(ve - 1) > 0.05 ? `vertical exaggeration ×${reportNumber(Number(ve.toPrecision(2)))}` : "true scale";
-  parts.push(`<text x="${f.width - f.right}" y="${f.height - 6}" text-anchor="end" font-size="9" fill="#64748b" ${FONT}>${escapeHtml(veText)}</text>`);
+  parts.push(`<text x="${f.width - f.right - 4}" y="${f.top + 10}" text-anchor="end" font-size="9" fill="#64748b" ${FONT}>● seabed impact  □ return to port level</text>`);
+  parts.push(`<text x="${f.width - f.right - 4}" y="${f.top + 22}" text-anchor="end" font-size="9" fill="#64748b" ${FONT}>${escapeHtml(veText)}</text>`);
   return svgWrap(parts, "Side view of the jet centrelines above the seabed");
 }
 

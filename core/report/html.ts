@@ -401,13 +401,13 @@ ${appendix}
   return doc.__html;
 }
 
-function appendixHtml(result: BrinefieldResult, input: ReportInput, idPrefix = ""): RawHtml {
+function appendixHtml(result: BrinefieldResult, input: ReportInput, idPrefix = "", title = "Appendix: the scenario file as read"): RawHtml {
   const conversions =
     result.conversions.length > 0 ? html`<p><strong>Conversions made while reading the inputs:</strong></p><ul>${join(result.conversions.map((c) => html`<li>${c}</li>`))}</ul>` : html``;
   const text = input.scenarioText ?? JSON.stringify(input.scenarioFile, null, 2);
   return section(
     `${idPrefix}scenario-file`,
-    "Appendix: the scenario file as read",
+    title,
     join([conversions, html`<p class="note">Run it again with <code>brinefield run</code> to reproduce this report; the inputs hash must match.</p>`, html`<pre class="scenario">${text}</pre>`]),
     "page-break",
   );

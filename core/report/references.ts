@@ -61,6 +61,7 @@ export const REFERENCES: readonly Reference[] = [
   ref("Saeidi Hosseini et al. 2022", "Saeidi Hosseini", "2022", "Saeidi Hosseini, S.A.R., Mohammadian, A., Roberts, P.J.W., Abessi, O. (2022). Numerical study on the effect of port orientation on multiple inclined dense jets. Journal of Marine Science and Engineering 10(5), 590.", "confirmed"),
   ref("Ben Meftah et al. 2017", "Ben Meftah", "2017", "Ben Meftah, M., Malcangio, D., De Serio, F., Mossa, M. (2017). Vertical dense jet in flowing current. Environmental Fluid Mechanics. doi:10.1007/s10652-017-9515-2.", "confirmed"),
   ref("Jiang, Law & Zhang 2018", "Jiang", "2018", "Jiang, M.T., Law, A.W.K., Zhang, S. (2018). Mixing behavior of 45° inclined dense jets in currents. Journal of Hydro-environment Research 18, 37–48.", "confirmed"),
+  ref("Davis 1999", "Davis", "1999", "Davis, L.R. (1999). Fundamentals of Environmental Discharge Modeling. CRC Press, Boca Raton.", "from memory"),
   ref("Chen & Jirka 1999", "Chen", "1999", "Chen, D.Y., Jirka, G.H. (1999). LIF study of plane jet bounded in shallow water layer. Journal of Hydraulic Engineering 125, 817–826.", "confirmed"),
   ref("Jirka & Doneker 1991", "Jirka", "1991", "Jirka, G.H., Doneker, R.L. (1991). Hydrodynamic classification of submerged single-port discharges. Journal of Hydraulic Engineering 117, 1095–1112.", "confirmed"),
   // Integral models and jet/plume constants
@@ -126,7 +127,10 @@ export function sourceCites(source: string, entry: Reference): boolean {
 export interface CollectedReferences {
   /** Cited works, in the order of the table above (grouped by topic). */
   readonly references: readonly Reference[];
-  /** Source strings that cite nothing in the table, kept verbatim (e.g. "common practice, no source"). */
+  /**
+   * Source strings kept verbatim because they cite nothing in the table (e.g. "common practice, no
+   * source") or mention a year no tabled work accounts for (a work missing from the table).
+   */
   readonly uncited: readonly string[];
 }
 
@@ -138,7 +142,9 @@ export function referencesFromSources(sources: readonly string[]): CollectedRefe
   for (const source of unique) {
     const hits = REFERENCES.filter((entry) => sourceCites(source, entry));
     hits.forEach((hit) => cited.add(hit));
-    if (hits.length === 0) uncited.push(source);
+    const years = source.match(/\b(?:1[89]|20)\d{2}\b/g) ?? [];
+    const unexplained = years.some((y) => !hits.some((h) => h.year === y || (h.aliases ?? []).some((a) => a.test(source) && source.includes(y))));
+    if (hits.length === 0 || unexplained) uncited.push(source);
   }
   return { references: REFERENCES.filter((entry) => cited.has(entry)), uncited };
 }

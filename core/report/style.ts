@@ -29,6 +29,7 @@ code, .path, .hash { font-family: "DejaVu Sans Mono", Menlo, Consolas, monospace
 .verdict.pass .badge { background: var(--pass); }
 .verdict.fail .badge { background: var(--fail); }
 table { border-collapse: collapse; width: 100%; margin: 2mm 0 3mm; font-size: 8.6pt; }
+table:not(.inputs):not(.layout):not(#warnings-table):not(#methods-table) { break-inside: avoid; }
 caption { text-align: left; font-weight: 700; padding: 1mm 0; caption-side: top; }
 th, td { border-bottom: 0.6px solid var(--rule); padding: 0.8mm 1.6mm; text-align: left; vertical-align: top; }
 thead th { border-bottom: 1.2px solid var(--ink); background: #f1f5f9; }
@@ -51,6 +52,8 @@ ol.refs li { margin-bottom: 1mm; break-inside: avoid; }
 .prov { color: var(--muted); font-style: italic; }
 pre.scenario { font-size: 7.4pt; white-space: pre-wrap; word-break: break-word; border: 0.6px solid var(--rule); padding: 2mm; background: #f8fafc; }
 .page-break { break-before: page; }
+h2.variant-title { font-size: 16pt; border-bottom-width: 3px; }
+.variant section h2 { font-size: 12pt; }
 section { break-inside: auto; }
 .print-footer { display: none; }
 table.layout, table.layout > * > tr > td { border: 0; padding: 0; margin: 0; background: none; }

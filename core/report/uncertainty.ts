@@ -18,8 +18,14 @@ function isSummary(v: Record<string, unknown>): boolean {
   return PERCENTILE_KEYS.every((k) => typeof v[k] === "number");
 }
 
+/** "cases.Winter storm.edgeDilution" → "cases · Winter storm · edge dilution". */
 function humanPath(path: string): string {
-  return path === "" ? "(value)" : path;
+  if (path === "") return "(value)";
+  return path
+    .split(".")
+    .map((part) => (/^[a-z][A-Za-z0-9]*$/.test(part) ? part.replace(/([a-z0-9])([A-Z])/g, "$1 $2").toLowerCase() : part))
+    .map((part) => (/^\d+$/.test(part) ? String(Number(part) + 1) : part))
+    .join(" · ");
 }
 
 /** Collects percentile summaries, scalar facts and sample counts from an uncertainty result. */
@@ -34,7 +40,13 @@ export function flattenUncertainty(value: unknown): { summaries: Summary[]; fact
     else if (Array.isArray(v) || ArrayBuffer.isView(v)) {
       const arr = v as ArrayLike<unknown>;
       if (arr.length > 0 && typeof arr[0] === "number") facts.push([humanPath(path), `${arr.length} values`]);
-      else Array.from(arr).forEach((item, i) => walk(item, path ? `${path}.${i}` : String(i), depth + 1));
+      else
+        Array.from(arr).forEach((item, i) => {
+          // Items that carry a name (ambient cases, variants) are labelled by it rather than by index.
+          const named = item !== null && typeof item === "object" && typeof (item as { name?: unknown }).name === "string";
+          const key = named ? (item as { name: string }).name : String(i);
+          walk(item, path ? `${path}.${key}` : key, depth + 1);
+        });
     } else if (v !== null && typeof v === "object") {
       const o = v as Record<string, unknown>;
       if (isSummary(o)) {
@@ -43,7 +55,7 @@ export function flattenUncertainty(value: unknown): { summaries: Summary[]; fact
         summaries.push({ path: humanPath(path), values });
         return;
       }
-      for (const [k, child] of Object.entries(o)) walk(child, path ? `${path}.${k}` : k, depth + 1);
+      for (const [k, child] of Object.entries(o)) if (k !== "name") walk(child, path ? `${path}.${k}` : k, depth + 1);
     }
   };
   walk(value, "", 0);
@@ -56,7 +68,7 @@ export function uncertaintyHtml(value: unknown): RawHtml {
   if (summaries.length > 0) {
     const rows = summaries.map(
       (s) =>
-        html`<tr><td class="path">${s.path}</td>${join(
+        html`<tr><td>${s.path}</td>${join(
           ["p5", "p50", "p95", "mean", "min", "max", "count"].map((k) => html`<td class="num">${reportNumber(s.values[k])}</td>`),
         )}</tr>`,
     );
@@ -66,7 +78,7 @@ export function uncertaintyHtml(value: unknown): RawHtml {
   }
   if (facts.length > 0) {
     parts.push(
-      html`<table><caption>Run facts</caption><tbody>${join(facts.map(([k, v]) => html`<tr><td class="path">${k}</td><td>${v}</td></tr>`))}</tbody></table>`,
+      html`<table><caption>Run facts</caption><tbody>${join(facts.map(([k, v]) => html`<tr><td>${k}</td><td>${v}</td></tr>`))}</tbody></table>`,
     );
   }
   if (parts.length === 0) parts.push(html`<p class="note">The uncertainty result given to the report held no numbers.</p>`);

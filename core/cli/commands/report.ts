@@ -1,0 +1,199 @@
+/**
+ * `brinefield report`: the screening report of a scenario or a study as a printable HTML document, with
+ * optional PDF (headless Chromium), CSV and JSON exports. The 3D view is captured from the built
+ * renderer when possible; when not, the report says why. Browser-driving code lives in
+ * renderer/headless/ and is imported only when a PDF or the 3D image is asked for.
+ */
+import { basename, dirname, extname, resolve } from "node:path";
+import type { CliCommand, CliIO } from "../command";
+import { CliError } from "../command";
+import { readArgs, numberOption } from "../args";
+import { formatIssues, loadJsonFile } from "../load";
+import { parseScenario } from "../../scenario/parse";
+import type { Scenario } from "../../scenario/types";
+import { runScenario } from "../../pipeline";
+import type { BrinefieldResult } from "../../result/contract";
+import { reportHtml, resultCsv, seriesCsv, studyReportHtml, studyResultCsv, studySeriesCsv } from "../../report";
+import type { StudyReportVariant } from "../../report";
+import { parseStudy, withRawOverride, planMonteCarlo, runMonteCarloChunk, summariseMonteCarlo, evaluateScenario } from "../../study";
+
+const HELP = `Usage: brinefield report <scenario-or-study.json> [--out report.html] [--pdf report.pdf]
+                         [--csv results.csv] [--series-csv series.csv] [--json result.json]
+                         [--no-3d] [--uncertainty <runs>] [--seed <n>]
+
+Writes the screening report: a self-contained, printable HTML document with the permitting caution,
+the job and question, every input (as entered and in SI), derived quantities, each near-field method's
+results with its source and known bias, the multiport regime, dilution and concentration at the
+mixing-zone edge, verdict and margin, warnings, figures and the full references. A study file
+("format": "brinefield-study") gives one section per variant and a comparison table.
+
+Options:
+  --out <file>          HTML report (default: <input name>-report.html in the current folder).
+  --pdf <file>          Also print the report to PDF with headless Chromium (/usr/bin/chromium).
+  --csv <file>          Key results as CSV: one row per near-field method and per constituent
+                        (studies: one block per variant, with a "variant" column).
+  --series-csv <file>   Dilution, salinity increase and layer thickness against distance, as CSV.
+  --json <file>         The result exactly as \`brinefield run --json\` prints it (studies: a list of
+                        {variant, result}).
+  --no-3d               Leave out the rendered 3D view (it needs the renderer built and Chromium).
+  --uncertainty <runs>  Run a Monte Carlo of that many runs on the scenario's uncertain inputs (or
+                        default spreads) and add the percentiles to the report (scenarios only).
+  --seed <n>            Seed of the Monte Carlo (default 1), for repeatable numbers.
+  -h, --help            Show this help.
+
+Exit codes: 0 report written; 2 the input or the options are invalid; 3 the PDF could not be printed
+(the HTML and other files are still written); 70 an internal error.`;
+
+interface Written {
+  readonly path: string;
+  readonly what: string;
+}
+
+function defaultOut(input: string): string {
+  const name = basename(input, extname(input));
+  return `${name}-report.html`;
+}
+
+async function tryCapture3d(text: string, io: CliIO): Promise<{ png?: string; note?: string }> {
+  try {
+    const { capture3dView } = await import("../../../renderer/headless/capture-3d");
+    return { png: await capture3dView(text) };
+  } catch (err) {
+    const reason = err instanceof Error ? err.message : String(err);
+    io.stderr(`brinefield report: 3D view left out: ${reason}\n`);
+    return { note: `the 3D view could not be rendered (${reason})` };
+  }
+}
+
+function readScenarioRaw(raw: unknown, where: string): Scenario {
+  const parsed = parseScenario(raw);
+  if (!parsed.ok) throw new CliError(formatIssues(where, parsed.issues));
+  return parsed.scenario;
+}
+
+function monteCarlo(scenario: Scenario, runs: number, seed: number, io: CliIO): unknown {
+  const planned = planMonteCarlo(scenario, runs, seed);
+  if (!planned.ok) throw new CliError(`brinefield report: the uncertainty run cannot start:\n${planned.issues.map((i) => `  - ${i.path}: ${i.message}`).join("\n")}`);
+  io.stderr(`brinefield report: running ${runs} Monte Carlo runs (seed ${seed})…\n`);
+  const chunk = runMonteCarloChunk(scenario, planned.plan, 0, runs, evaluateScenario);
+  return summariseMonteCarlo(planned.plan, [chunk]);
+}
+
+export const command: CliCommand = {
+  name: "report",
+  summary: "Write the screening report (HTML; optional PDF, CSV, JSON) for a scenario or a study.",
+  help: HELP,
+  async run(argv, io) {
+    const { values, positionals } = readArgs(
+      argv,
+      {
+        out: { type: "string" },
+        pdf: { type: "string" },
+        csv: { type: "string" },
+        "series-csv": { type: "string" },
+        json: { type: "string" },
+        "no-3d": { type: "boolean" },
+        uncertainty: { type: "string" },
+        seed: { type: "string" },
+      },
+      "report",
+    );
+    if (positionals.length !== 1) {
+      throw new CliError("brinefield report: give exactly one scenario or study file, e.g. `brinefield report demo-scenarios/island-cove.json --pdf report.pdf`");
+    }
+    const inputPath = positionals[0]!;
+    const runs = numberOption(values.uncertainty, "uncertainty", "report", (v) => (Number.isInteger(v) && v >= 1 && v <= 100_000 ? null : "must be a whole number from 1 to 100000"));
+    const seed = numberOption(values.seed, "seed", "report", (v) => (Number.isInteger(v) && v >= 0 && v <= 0xffffffff ? null : "must be a whole number from 0 to 4294967295")) ?? 1;
+    const text = io.readFile(inputPath);
+    let file: unknown;
+    try {
+      file = JSON.parse(text);
+    } catch (err) {
+      throw new CliError(`${inputPath}: is not valid JSON: ${err instanceof Error ? err.message : String(err)}`);
+    }
+    const format = file !== null && typeof file === "object" ? (file as { format?: unknown }).format : undefined;
+    const want3d = !values["no-3d"];
+    const generatedAt = new Date().toISOString();
+    let html: string;
+    let csv: string;
+    let series: string;
+    let json: string;
+
+    if (format === "brinefield-study") {
+      const parsed = parseStudy(file);
+      if (!parsed.ok) throw new CliError(formatIssues(inputPath, parsed.issues));
+      const study = parsed.study;
+      const baseRaw = typeof study.base === "string" ? loadJsonFile(resolve(io.cwd, dirname(inputPath), study.base), io) : study.base;
+      const list = [{ name: "base", description: undefined as string | undefined, overrides: {} as Record<string, unknown> }, ...(study.variants ?? [])];
+      const variants: StudyReportVariant[] = list.map((v, i) => {
+        const where = i === 0 ? `${inputPath} (base)` : `${inputPath} variants.${i - 1} (${v.name})`;
+        let raw: unknown = baseRaw;
+        try {
+          for (const [path, value] of Object.entries(v.overrides)) raw = withRawOverride(raw, path, value);
+        } catch (err) {
+          throw new CliError(`${where}: ${err instanceof Error ? err.message : String(err)}`);
+        }
+        const scenario = readScenarioRaw(raw, where);
+        return { name: v.name, description: v.description, overrides: v.overrides, scenarioFile: raw, result: runScenario(scenario) };
+      });
+      if (runs !== undefined) io.stderr("brinefield report: --uncertainty applies to scenarios only; run it per scenario for a study's variants.\n");
+      let pngs: (string | undefined)[] | undefined;
+      let note: string | undefined = want3d ? undefined : "it was turned off (--no-3d)";
+      if (want3d) {
+        pngs = [];
+        for (const v of variants) {
+          const shot = await tryCapture3d(JSON.stringify(v.scenarioFile), io);
+          pngs.push(shot.png);
+          note ??= shot.note;
+          if (!shot.png) break; // the same reason would repeat for every variant
+        }
+      }
+      html = studyReportHtml(
+        { name: study.name, description: study.description, studyText: text, variants },
+        { view3dPngs: pngs, view3dNote: note, generatedAt },
+      );
+      csv = studyResultCsv(variants);
+      series = studySeriesCsv(variants);
+      json = JSON.stringify(variants.map((v) => ({ variant: v.name, result: v.result })), null, 2) + "\n";
+    } else {
+      const scenario = readScenarioRaw(file, inputPath);
+      const result: BrinefieldResult = runScenario(scenario);
+      const uncertainty = runs !== undefined ? monteCarlo(scenario, runs, seed, io) : undefined;
+      const shot = want3d ? await tryCapture3d(text, io) : { note: "it was turned off (--no-3d)" };
+      html = reportHtml(result, { scenarioFile: file, scenarioText: text }, { view3dPng: shot.png, view3dNote: shot.note, uncertainty, generatedAt });
+      csv = resultCsv(result);
+      series = seriesCsv(result);
+      json = JSON.stringify(result, null, 2) + "\n";
+    }
+
+    const written: Written[] = [];
+    const out = values.out ?? defaultOut(inputPath);
+    io.writeFile(out, html);
+    written.push({ path: out, what: "HTML report" });
+    if (values.csv) {
+      io.writeFile(values.csv, csv);
+      written.push({ path: values.csv, what: "key results CSV" });
+    }
+    if (values["series-csv"]) {
+      io.writeFile(values["series-csv"], series);
+      written.push({ path: values["series-csv"], what: "dilution series CSV" });
+    }
+    if (values.json) {
+      io.writeFile(values.json, json);
+      written.push({ path: values.json, what: "result JSON" });
+    }
+    let code = 0;
+    if (values.pdf) {
+      try {
+        const { pdfFromHtml } = await import("../../../renderer/headless/print-pdf");
+        io.writeFile(values.pdf, await pdfFromHtml(html));
+        written.push({ path: values.pdf, what: "PDF report" });
+      } catch (err) {
+        io.stderr(`brinefield report: the PDF was not written: ${err instanceof Error ? err.message : String(err)}\n`);
+        code = 3;
+      }
+    }
+    io.stdout(written.map((w) => `wrote ${w.what}: ${w.path}`).join("\n") + "\n");
+    return code;
+  },
+};
