@@ -14,6 +14,7 @@ import { nearFieldLengthScale } from "./nearfield/lengthScale";
 import { nearFieldIntegral } from "./nearfield/integral";
 import { jetSourceWarnings } from "./nearfield/sourceChecks";
 import { beyondNearField } from "./farfield/stage";
+import { portFlowsAndHydraulics } from "./multiport";
 import { viscosityFromST, SHARQAWY_2010_VISCOSITY_SOURCE } from "./correlations/sharqawy-2010-viscosity";
 import { CAUTION, RESULT_FORMAT, RESULT_VERSION, type BrinefieldResult, type PortResult } from "./result/contract";
 import type { ResultWarning } from "./warnings";
@@ -27,24 +28,15 @@ export interface RunOptions {
   readonly sink?: PathSink;
 }
 
-/** Port flows, velocity, Froude and Reynolds numbers for the mean port of the diffuser. */
+/** Port flows, velocity, Froude and Reynolds numbers (core/multiport) with the brine's own viscosity. */
 export function portFromScenario(scenario: Scenario, props: PropertiesStage): PortResult {
-  const d = scenario.diffuser;
-  const flows = d.flowSplit.map((f) => f * scenario.discharge.flow);
-  const flow = scenario.discharge.flow / d.portCount;
-  const area = (Math.PI * d.portDiameter * d.portDiameter) / 4;
-  const velocity = flow / area;
-  const gp = props.reducedGravity;
-  // Guard: a non-positive reduced gravity has no densimetric Froude number (rejected by runScenario).
-  const froude = gp > 0 ? velocity / Math.sqrt(gp * d.portDiameter) : Number.POSITIVE_INFINITY;
   const nu = viscosityFromST(scenario.discharge.salinity, scenario.discharge.temperature) / props.dischargeDensity;
-  const reynolds = (velocity * d.portDiameter) / nu;
-  // Exit loss of a free jet: one velocity head (U²/2g) at the contracted section, with the orifice
-  // discharge coefficient when given, h = (q/(Cd·A))²/(2g) (standard orifice hydraulics, common practice).
-  const cd = d.dischargeCoefficient;
-  const nominalArea = (Math.PI * d.portDiameterNominal * d.portDiameterNominal) / 4;
-  const headLoss = cd ? Math.pow(flow / (cd * nominalArea), 2) / (2 * 9.80665) : null;
-  return { count: d.portCount, diameter: d.portDiameter, flow, flows, velocity, froude, reynolds, headLoss };
+  return portFlowsAndHydraulics({
+    scenario,
+    dischargeDensity: props.dischargeDensity,
+    ambientDensity: props.ambientDensityAtPort,
+    kinematicViscosity: nu,
+  }).port;
 }
 
 /** Builds the jet of the mean port. */

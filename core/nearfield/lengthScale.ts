@@ -89,7 +89,9 @@ function toDimensional(e: EvaluatedDataset, jet: JetSource): Dimensional {
   const L = jet.diameter * jet.froude;
   const F = jet.froude;
   const len = (v: number | null) => (v === null ? null : v * L);
-  const dil = (v: number | null) => (v === null ? null : v * F);
+  // Guard: a dilution is never below 1 (undiluted brine); at very low F the law c·F falls under 1, far
+  // outside its studied range, which the Froude-range warning already reports.
+  const dil = (v: number | null) => (v === null ? null : Math.max(1, v * F));
   const returnDistance = len(c.returnDistance);
   // Seabed impact: the descending branch is continued below port level as a straight line leaving the return
   // point at the discharge angle (mirror image of the ascent). Published dense-jet trajectories descend at

@@ -10,7 +10,10 @@ export interface AmbientColumn {
   readonly depth: number;
   /** Depths below surface, m, ascending (at least two points). */
   readonly depths: readonly number[];
-  /** Density at each depth, kg/m³ (same equation of state as the discharge). */
+  /**
+   * Potential density at each depth referenced to the port's pressure, kg/m³ (same equation of state as
+   * the discharge), so a uniform column is neutral and the jet's buoyancy compares like with like.
+   */
   readonly densities: readonly number[];
   readonly salinities: readonly number[]; // g/kg
   readonly temperatures: readonly number[]; // °C

@@ -105,12 +105,16 @@ export function propertiesFromScenario(scenario: Scenario): PropertiesStage {
   );
 
   const pressures = depths.map((d) => pressureFromDepth(d));
-  const densities = states.map((s, i) => eos.density(s.salinity, s.temperature, pressures[i]));
   const portPressure = pressureFromDepth(portDepth);
+  // The column carries potential densities referenced to the port's pressure: a column of uniform
+  // salinity and temperature is then neutral (no spurious "stratification" from compressibility), and the
+  // jet's buoyancy compares like with like. In-situ values are reported as ambientSurface/ambientBottom.
+  const densities = states.map((s) => eos.density(s.salinity, s.temperature, portPressure));
   const dischargeDensity = eos.density(discharge.salinity, discharge.temperature, portPressure);
   const ambientDensityAtPort = eos.density(portState.salinity, portState.temperature, portPressure);
   const ambientSurface = eos.density(surfaceState.salinity, surfaceState.temperature, 0);
-  const ambientBottom = densities[depths.length - 1];
+  const bottomState = states[depths.length - 1];
+  const ambientBottom = eos.density(bottomState.salinity, bottomState.temperature, pressures[depths.length - 1]);
   const reducedGravity =
     (STANDARD_GRAVITY * (dischargeDensity - ambientDensityAtPort)) / ambientDensityAtPort;
 

@@ -39,6 +39,9 @@ export function issue(path: string, value: unknown, expectation: string): Scenar
   return { path, value, message: `${path || "(file)"}: ${shown} ${expectation}` };
 }
 
+/** Highest port exit velocity accepted as input, m/s (see the check in normaliseScenario). */
+export const MAX_EXIT_VELOCITY = 30;
+
 /** Default salt rejection of seawater RO membranes when not given (common practice, no source). */
 export const DEFAULT_SALT_REJECTION = 0.997;
 
@@ -328,6 +331,20 @@ export function normaliseScenario(f: ScenarioFileParsed): { scenario: Scenario |
     ctx.conversions.push(
       `diffuser.portDiameter: vena-contracta contraction ${formatNumber(contraction)} applied to the area → effective diameter ${formatNumber(effectiveDiameter)} m`,
     );
+  // Port exit velocity bounds: the trade designs for about 2–6 m/s (common practice, no source); anything
+  // above 30 m/s (over 45 m of velocity head) is taken as an input mistake, not a design to screen.
+  if (Number.isFinite(flow) && flowSplit.length === portCount) {
+    const area = (Math.PI * effectiveDiameter * effectiveDiameter) / 4;
+    const fastest = (Math.max(...flowSplit) * flow) / area;
+    if (fastest > MAX_EXIT_VELOCITY)
+      ctx.issues.push(
+        issue(
+          "diffuser.portDiameter",
+          g.portDiameter,
+          `gives a port exit velocity of ${formatNumber(fastest)} m/s for the flow per port; Brinefield screens exit velocities up to ${MAX_EXIT_VELOCITY} m/s (usual designs: about 2–6 m/s) — check the flow, the port count and the diameter`,
+        ),
+      );
+  }
   if (g.portHeight + g.portDiameter / 2 >= depth)
     ctx.issues.push(issue("diffuser.portHeight", g.portHeight, `must leave the port below the surface: water depth is ${formatNumber(depth)} m`));
   const riserAzimuths =

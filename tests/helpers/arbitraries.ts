@@ -48,11 +48,14 @@ export const validScenarioFile = fc
     ambient.currentSpeed = v.current;
     ambient.currentDirection = v.currentDir;
     ambient.bedSlope = v.slope;
+    // Keep the exit velocity within the accepted 30 m/s (the format refuses faster ports as input mistakes).
+    const area = (Math.PI * v.diameter * v.diameter) / 4;
+    const flow = Math.min(v.flow, 0.95 * 30 * area * v.portCount);
     return {
       format: "brinefield-scenario",
       version: 1,
       name: "generated",
-      discharge: { flow: v.unitStrings ? `${v.flow} m^3/s` : v.flow, salinity: brineS, temperature: brineT },
+      discharge: { flow: v.unitStrings ? `${flow} m^3/s` : flow, salinity: brineS, temperature: brineT },
       ambient,
       diffuser: {
         portCount: v.portCount,
