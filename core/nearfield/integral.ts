@@ -123,11 +123,10 @@ export function integralParamsFrom(jet: JetSource, column: AmbientColumn): Integ
   const n = column.depths.length;
   const depths = Float64Array.from(column.depths);
   const rho = Float64Array.from(column.densities);
-  const sal = Float64Array.from(column.salinities.length === n ? column.salinities : column.densities.map(() => 0));
-  const tmpD = depths;
+  const sal = Float64Array.from(column.salinities.length === n ? column.salinities : column.depths.map(() => 0));
   // Ambient at port level by the same interpolation the RHS uses.
-  const rho0 = interp(tmpD, rho, portDepth);
-  const sal0 = interp(tmpD, sal, portDepth);
+  const rho0 = interp(depths, rho, portDepth);
+  const sal0 = interp(depths, sal, portDepth);
   const epsilon = new Float64Array(n);
   const salinityExcess = new Float64Array(n);
   let stratified = false;
@@ -178,7 +177,9 @@ export function integralInitialState(jet: JetSource, column: AmbientColumn): Flo
   y0[IMZ] = m0 * Math.sin(th);
   y0[IB] = q0 * jet.reducedGravity;
   const portDepth = column.depth - jet.portHeight;
-  const sal0 = interp(Float64Array.from(column.depths), Float64Array.from(column.salinities), portDepth);
+  // A missing salinity profile counts as uniform (salinity excess then equals discharge − 0).
+  const sal = column.salinities.length === column.depths.length ? column.salinities : column.depths.map(() => 0);
+  const sal0 = interp(Float64Array.from(column.depths), Float64Array.from(sal), portDepth);
   y0[IC] = q0 * (jet.salinity - sal0);
   return y0;
 }
