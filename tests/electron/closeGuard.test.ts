@@ -53,7 +53,7 @@ describe("createCloseGuard()", () => {
     expect(calls.at(-1), "closed after save").toBe("close");
   });
 
-  it("Save followed by a cancelled save dialog keeps the window open, and a later save does not close it", async () => {
+  it("Save then a cancelled save dialog keeps the window open; a later save does not close it", async () => {
     const { guard, calls } = setup("save");
     guard.setDocumentState({ dirty: true, title: "A" });
     guard.onCloseRequested();

@@ -53,7 +53,7 @@ describe("writeFileAtomic()", () => {
     expect(await readdir(dir), "the failed attempt cleans its temporary file").toEqual(["scenario.json"]);
   });
 
-  it("writes the temporary file in the same folder as the target (a rename across disks is not atomic)", async () => {
+  it("writes the temporary file next to the target (a rename across disks is not atomic)", async () => {
     const target = join(dir, "sub-target.json");
     let tempDir = "";
     await writeFileAtomic(target, "x", {
@@ -92,14 +92,20 @@ describe("readJsonTextFile()", () => {
     await writeFile(path, `"${"x".repeat(2048)}"`);
     const result = await readJsonTextFile(path, { maxBytes: 1024 });
     expect(result.ok, "refused").toBe(false);
-    expect(!result.ok && result.message, "message names actual and allowed size").toMatch(/2 kB.*at most 1 kB/);
+    expect(
+      !result.ok && result.message,
+      "message names actual and allowed size",
+    ).toMatch(/2 kB.*at most 1 kB/);
   });
 
   it("accepts a file exactly at the size limit", async () => {
     const path = join(dir, "edge.json");
     const text = `"${"y".repeat(1022)}"`;
     await writeFile(path, text);
-    expect((await readJsonTextFile(path, { maxBytes: 1024 })).ok, "1024 bytes with a 1024-byte limit").toBe(true);
+    expect(
+      (await readJsonTextFile(path, { maxBytes: 1024 })).ok,
+      "1024 bytes with a 1024-byte limit",
+    ).toBe(true);
   });
 
   it("reports a file that is not UTF-8 instead of crashing", async () => {
@@ -184,12 +190,13 @@ describe("createRecentFilesStore()", () => {
     expect(saved.paths, "pruned list persisted").toEqual([keep]);
   });
 
-  it("treats a corrupt or hostile list file as empty and ignores relative or non-string entries", async () => {
+  it("treats a corrupt list as empty and ignores relative or non-string entries", async () => {
     const file = join(dir, "recent.json");
     const store = createRecentFilesStore({ file, exists: async () => true });
     await writeFile(file, "{not json");
     expect(await store.list(), "corrupt file → empty list").toEqual([]);
-    await writeFile(file, JSON.stringify({ version: 1, paths: ["relative/x.json", 42, "/abs/ok.json", "/a\0b"] }));
+    const paths = ["relative/x.json", 42, "/abs/ok.json", "/a\0b"];
+    await writeFile(file, JSON.stringify({ version: 1, paths }));
     expect(await store.list(), "only absolute, NUL-free strings survive").toEqual(["/abs/ok.json"]);
   });
 

@@ -80,7 +80,10 @@ describe("isTrustedSender()", () => {
   it("rejects another window, a subframe, a web page and another local file", () => {
     expect(isTrustedSender({ ...good, webContentsId: 8 }, trusted()), "other webContents").toBe(false);
     expect(isTrustedSender({ ...good, isMainFrame: false }, trusted()), "subframe").toBe(false);
-    expect(isTrustedSender({ ...good, frameUrl: "https://example.com/index.html" }, trusted()), "https").toBe(false);
+    expect(
+      isTrustedSender({ ...good, frameUrl: "https://example.com/index.html" }, trusted()),
+      "https",
+    ).toBe(false);
     const other = pathToFileURL(join(dir, "Downloads", "index.html")).href;
     expect(isTrustedSender({ ...good, frameUrl: other }, trusted()), "other file").toBe(false);
     expect(isTrustedSender({ ...good, frameUrl: "" }, trusted()), "destroyed frame").toBe(false);
@@ -91,10 +94,11 @@ describe("isTrustedSender()", () => {
 describe("parseHostRequest()", () => {
   it("accepts every well-formed request kind", () => {
     const abs = join(dir, "x.json");
+    const json = { name: "JSON", extensions: ["json"] };
     const requests = [
       { kind: "open-scenario" },
       { kind: "open-path", path: abs },
-      { kind: "save-file", path: null, text: "{}", suggestedName: "x.json", filters: [{ name: "JSON", extensions: ["json"] }] },
+      { kind: "save-file", path: null, text: "{}", suggestedName: "x.json", filters: [json] },
       { kind: "export-file", suggestedName: "r.csv", text: "a,b", filters: [] },
       { kind: "print-pdf", suggestedName: "report" },
       { kind: "recent-files" },
@@ -115,7 +119,10 @@ describe("parseHostRequest()", () => {
       [{ kind: "open-path", path: `${join(dir, "a")}\0.json` }, /NUL/],
       [{ kind: "print-pdf", suggestedName: "../../evil" }, /folder/],
       [{ kind: "set-document-state", dirty: "yes", title: "" }, /dirty/],
-      [{ kind: "export-file", suggestedName: "a.csv", text: "", filters: [{ name: "x", extensions: ["c;rm"] }] }, /extension/],
+      [
+        { kind: "export-file", suggestedName: "a.csv", text: "", filters: [{ name: "x", extensions: ["c;r"] }] },
+        /extension/,
+      ],
       [null, /Rejected/],
       ["open-scenario", /Rejected/],
     ];
@@ -172,7 +179,10 @@ describe("createHostHandlers().handle()", () => {
     h.openAnswers.push(path);
     const opened = await handlers.handle(good, { kind: "open-scenario" });
     expect(opened, "opened response").toEqual({ kind: "opened", path, text: '{"name":"Outfall A"}' });
-    expect(await handlers.handle(good, { kind: "recent-files" }), "recent list").toEqual({ kind: "recent", paths: [path] });
+    expect(
+      await handlers.handle(good, { kind: "recent-files" }),
+      "recent list",
+    ).toEqual({ kind: "recent", paths: [path] });
     expect(h.recentChanges.at(-1), "menu told about the new list").toEqual([path]);
     const again = await handlers.handle(good, { kind: "open-path", path });
     expect(again.kind, "granted path reopens").toBe("opened");
@@ -204,18 +214,20 @@ describe("createHostHandlers().handle()", () => {
     expect(await handlers.handle(good, save), "save").toEqual({ kind: "cancelled" });
   });
 
-  it("saves through the dialog, adds the extension, then saves again to the same path without asking", async () => {
+  it("saves via the dialog, adds the extension, then saves to the same path without asking", async () => {
     const h = harness();
     const handlers = createHostHandlers(h.deps);
     const chosen = join(dir, "new-outfall");
     h.saveAnswers.push(chosen);
     const filters = [{ name: "Brinefield scenario", extensions: ["json"] }];
-    const first = await handlers.handle(good, { kind: "save-file", path: null, text: '{"v":1}', suggestedName: "Outfall.json", filters });
+    const save = (path: string | null, text: string) =>
+      handlers.handle(good, { kind: "save-file", path, text, suggestedName: "Outfall.json", filters });
+    const first = await save(null, '{"v":1}');
     expect(first, "saved with .json added").toEqual({ kind: "saved", path: `${chosen}.json` });
     expect(h.saveDialogs[0].defaultPath, "dialog starts in Documents with the suggested name").toBe(
       join(dir, "Documents", "Outfall.json"),
     );
-    const second = await handlers.handle(good, { kind: "save-file", path: `${chosen}.json`, text: '{"v":2}', suggestedName: "x.json", filters });
+    const second = await save(`${chosen}.json`, '{"v":2}');
     expect(second.kind, "saved").toBe("saved");
     expect(h.saveDialogs.length, "no second dialog for a granted path").toBe(1);
     expect(await readFile(`${chosen}.json`, "utf8"), "new content").toBe('{"v":2}');
@@ -270,15 +282,24 @@ describe("createHostHandlers().handle()", () => {
 
   it("writes, reads and clears the autosave slot", async () => {
     const handlers = createHostHandlers(harness().deps);
-    expect(await handlers.handle(good, { kind: "autosave-read" }), "empty").toEqual({ kind: "autosave", text: null, savedAt: null });
-    expect(await handlers.handle(good, { kind: "autosave-write", text: '{"u":1}' }), "write").toEqual({ kind: "ok" });
+    expect(
+      await handlers.handle(good, { kind: "autosave-read" }),
+      "empty",
+    ).toEqual({ kind: "autosave", text: null, savedAt: null });
+    expect(
+      await handlers.handle(good, { kind: "autosave-write", text: '{"u":1}' }),
+      "write",
+    ).toEqual({ kind: "ok" });
     expect(await handlers.handle(good, { kind: "autosave-read" }), "read back").toEqual({
       kind: "autosave",
       text: '{"u":1}',
       savedAt: "1970-01-01T00:00:00.000Z",
     });
     expect(await handlers.handle(good, { kind: "autosave-clear" }), "clear").toEqual({ kind: "ok" });
-    expect(await handlers.handle(good, { kind: "autosave-read" }), "gone").toEqual({ kind: "autosave", text: null, savedAt: null });
+    expect(
+      await handlers.handle(good, { kind: "autosave-read" }),
+      "gone",
+    ).toEqual({ kind: "autosave", text: null, savedAt: null });
   });
 
   it("passes document state to main and a failing dependency becomes an error response", async () => {
@@ -290,7 +311,10 @@ describe("createHostHandlers().handle()", () => {
       },
     });
     h.saveAnswers.push(join(dir, "r.pdf"));
-    expect(await handlers.handle(good, { kind: "set-document-state", dirty: true, title: "Outfall A" }), "ok").toEqual({ kind: "ok" });
+    expect(
+      await handlers.handle(good, { kind: "set-document-state", dirty: true, title: "Outfall A" }),
+      "ok",
+    ).toEqual({ kind: "ok" });
     expect(h.documentStates, "state forwarded").toEqual([{ dirty: true, title: "Outfall A" }]);
     const pdf = await handlers.handle(good, { kind: "print-pdf", suggestedName: "r.pdf" });
     expect(pdf.kind === "error" && pdf.message, "error response").toMatch(/renderer crashed/);

@@ -1,6 +1,12 @@
 import { describe, expect, it } from "vitest";
 import { IPC_INVOKE, IPC_MENU, type MenuCommand } from "../../electron/contract";
-import { CHANNEL_PREFIX, MENU_COMMANDS, checkedChannel, createHostBridge, type BridgeIpc } from "../../electron/hostBridge";
+import {
+  CHANNEL_PREFIX,
+  MENU_COMMANDS,
+  checkedChannel,
+  createHostBridge,
+  type BridgeIpc,
+} from "../../electron/hostBridge";
 
 type Listener = (event: unknown, ...args: unknown[]) => void;
 
@@ -80,7 +86,20 @@ describe("createHostBridge()", () => {
   });
 
   it("knows every menu command of the contract", () => {
-    const all: MenuCommand[] = ["new", "open", "open-recent", "save", "save-as", "export-report", "export-csv", "print-pdf", "start-view", "reset-view", "units-si", "units-us"];
+    const all: MenuCommand[] = [
+      "new",
+      "open",
+      "open-recent",
+      "save",
+      "save-as",
+      "export-report",
+      "export-csv",
+      "print-pdf",
+      "start-view",
+      "reset-view",
+      "units-si",
+      "units-us",
+    ];
     expect([...MENU_COMMANDS].sort(), "same set").toEqual([...all].sort());
   });
 });
@@ -89,6 +108,9 @@ describe("checkedChannel()", () => {
   it("accepts brinefield: channels and refuses anything else", () => {
     expect(checkedChannel(IPC_INVOKE), "invoke channel").toBe(IPC_INVOKE);
     expect(IPC_MENU.startsWith(CHANNEL_PREFIX), "menu channel in namespace").toBe(true);
-    expect(() => checkedChannel("ELECTRON_BROWSER_REQUIRE"), "foreign channel").toThrow(/outside brinefield:/);
+    expect(
+      () => checkedChannel("ELECTRON_BROWSER_REQUIRE"),
+      "foreign channel",
+    ).toThrow(/outside brinefield:/);
   });
 });

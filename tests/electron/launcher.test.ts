@@ -15,8 +15,13 @@ import {
   type LaunchInputs,
 } from "../../electron/launcher";
 
-const installed: ElectronProbe = { packageDir: "/app/node_modules/electron", binaryPath: "/app/node_modules/electron/dist/electron", binaryExists: true };
-const notDownloaded: ElectronProbe = { packageDir: "/app/node_modules/electron", binaryPath: null, binaryExists: false };
+const PACKAGE = "/app/node_modules/electron";
+const installed: ElectronProbe = {
+  packageDir: PACKAGE,
+  binaryPath: `${PACKAGE}/dist/electron`,
+  binaryExists: true,
+};
+const notDownloaded: ElectronProbe = { packageDir: PACKAGE, binaryPath: null, binaryExists: false };
 
 function inputs(overrides: Partial<LaunchInputs> = {}): LaunchInputs {
   return {
@@ -32,15 +37,27 @@ function inputs(overrides: Partial<LaunchInputs> = {}): LaunchInputs {
 describe("decideLaunch()", () => {
   it("starts Electron when its binary is present and there is a display", () => {
     expect(decideLaunch(inputs()), "electron").toEqual({ kind: "electron", binary: installed.binaryPath });
-    expect(decideLaunch(inputs({ platform: "win32", env: {} })), "Windows needs no DISPLAY").toMatchObject({ kind: "electron" });
-    expect(decideLaunch(inputs({ env: { WAYLAND_DISPLAY: "wayland-0" } })), "Wayland counts").toMatchObject({ kind: "electron" });
+    expect(
+      decideLaunch(inputs({ platform: "win32", env: {} })),
+      "Windows needs no DISPLAY",
+    ).toMatchObject({ kind: "electron" });
+    expect(
+      decideLaunch(inputs({ env: { WAYLAND_DISPLAY: "wayland-0" } })),
+      "Wayland counts",
+    ).toMatchObject({ kind: "electron" });
   });
 
   it("falls back to the browser when the binary is missing and Node is too old to fetch it", () => {
     const plan = decideLaunch(inputs({ electron: notDownloaded, nodeVersion: "20.20.2" }));
     expect(plan.kind, "web fallback").toBe("web");
-    expect(plan.kind === "web" && plan.reason, "reason names this Node version").toMatch(/Node \(20\.20\.2\) is too old/);
-    expect(plan.kind === "web" && plan.hint, "hint: Node ≥ 22.12 with internet fetches it").toMatch(/Node ≥ 22\.12 and an internet/);
+    expect(
+      plan.kind === "web" && plan.reason,
+      "reason names this Node version",
+    ).toMatch(/Node \(20\.20\.2\) is too old/);
+    expect(
+      plan.kind === "web" && plan.hint,
+      "hint: Node ≥ 22.12 with internet fetches it",
+    ).toMatch(/Node ≥ 22\.12 and an internet/);
   });
 
   it("asks for a download when the binary is missing on a recent Node, and falls back once it failed", () => {
@@ -48,13 +65,20 @@ describe("decideLaunch()", () => {
       kind: "download",
       packageDir: notDownloaded.packageDir,
     });
-    const failed = decideLaunch(inputs({ electron: notDownloaded, downloadFailure: "getaddrinfo ENOTFOUND github.com" }));
-    expect(failed.kind === "web" && failed.reason, "failure reason shown").toMatch(/could not be downloaded \(getaddrinfo/);
+    const downloadFailure = "getaddrinfo ENOTFOUND github.com";
+    const failed = decideLaunch(inputs({ electron: notDownloaded, downloadFailure }));
+    expect(
+      failed.kind === "web" && failed.reason,
+      "failure reason shown",
+    ).toMatch(/could not be downloaded \(getaddrinfo/);
   });
 
   it("falls back for --web, a missing electron package and a headless Linux session", () => {
     expect(decideLaunch(inputs({ forceWeb: true })).kind, "--web").toBe("web");
-    expect(decideLaunch(inputs({ electron: { packageDir: null, binaryPath: null, binaryExists: false } })).kind, "no package").toBe("web");
+    expect(
+      decideLaunch(inputs({ electron: { packageDir: null, binaryPath: null, binaryExists: false } })).kind,
+      "no package",
+    ).toBe("web");
     const headless = decideLaunch(inputs({ env: {} }));
     expect(headless.kind === "web" && headless.reason, "no display").toMatch(/no graphical display/);
   });
@@ -96,16 +120,23 @@ describe("probeElectron()", () => {
   });
 
   it("reads path.txt like the electron package does, without downloading", async () => {
-    expect(probeElectron(dir, {}), "no path.txt yet").toEqual({ packageDir: dir, binaryPath: null, binaryExists: false });
+    expect(
+      probeElectron(dir, {}),
+      "no path.txt yet",
+    ).toEqual({ packageDir: dir, binaryPath: null, binaryExists: false });
     await writeFile(join(dir, "path.txt"), "electron");
     expect(probeElectron(dir, {}).binaryExists, "path.txt but no dist").toBe(false);
     await mkdir(join(dir, "dist"));
     await writeFile(join(dir, "dist", "electron"), "");
-    expect(probeElectron(dir, {}), "installed").toEqual({ packageDir: dir, binaryPath: join(dir, "dist", "electron"), binaryExists: true });
+    expect(
+      probeElectron(dir, {}),
+      "installed",
+    ).toEqual({ packageDir: dir, binaryPath: join(dir, "dist", "electron"), binaryExists: true });
   });
 
   it("honours ELECTRON_OVERRIDE_DIST_PATH and reports a missing package", () => {
-    const probe = probeElectron(dir, { ELECTRON_OVERRIDE_DIST_PATH: "/opt/electron" }, () => true, () => null);
+    const env = { ELECTRON_OVERRIDE_DIST_PATH: "/opt/electron" };
+    const probe = probeElectron(dir, env, () => true, () => null);
     expect(probe.binaryPath, "override").toBe(join("/opt/electron", "electron"));
     expect(probeElectron(null, {}).packageDir, "not installed").toBeNull();
   });
@@ -120,17 +151,25 @@ describe("helpers", () => {
   });
 
   it("summariseDownloadError() keeps the first message line and drops stack frames", () => {
-    const stderr = "\nRequestError: getaddrinfo ENOTFOUND github.com\n    at ClientRequest.<anonymous> (/x/y.js:1:2)\n    at emit\n";
+    const stderr =
+      "\nRequestError: getaddrinfo ENOTFOUND github.com\n" +
+      "    at ClientRequest.<anonymous> (/x/y.js:1:2)\n    at emit\n";
     expect(summariseDownloadError(stderr), "one line").toBe("RequestError: getaddrinfo ENOTFOUND github.com");
     expect(summariseDownloadError(""), "empty").toBe("no details");
     expect(summariseDownloadError("x".repeat(500)).length, "capped").toBeLessThanOrEqual(160);
   });
 
   it("fallbackAfterExit() falls back only for an early failure", () => {
-    expect(fallbackAfterExit({ code: 127, signal: null, elapsedMs: 300 }), "missing libraries at start").toBe(true);
+    expect(
+      fallbackAfterExit({ code: 127, signal: null, elapsedMs: 300 }),
+      "missing libraries at start",
+    ).toBe(true);
     expect(fallbackAfterExit({ code: null, signal: null, elapsedMs: 10 }), "spawn error").toBe(true);
     expect(fallbackAfterExit({ code: 0, signal: null, elapsedMs: 300 }), "clean quit").toBe(false);
-    expect(fallbackAfterExit({ code: 1, signal: null, elapsedMs: 60_000 }), "late crash is not a start failure").toBe(false);
+    expect(
+      fallbackAfterExit({ code: 1, signal: null, elapsedMs: 60_000 }),
+      "late crash is not a start failure",
+    ).toBe(false);
     expect(fallbackAfterExit({ code: null, signal: "SIGINT", elapsedMs: 300 }), "Ctrl+C").toBe(false);
   });
 
@@ -145,7 +184,10 @@ describe("helpers", () => {
       await writeFile(join(dir, "src", "node_modules", "b.js"), "");
       await utimes(join(dir, "src", "a.ts"), 1000, 1000);
       await utimes(join(dir, "src", "node_modules", "b.js"), 5000, 5000);
-      expect(await newestSourceMtime([join(dir, "src"), join(dir, "absent")]), "node_modules skipped").toBe(1_000_000);
+      expect(
+        await newestSourceMtime([join(dir, "src"), join(dir, "absent")]),
+        "node_modules skipped",
+      ).toBe(1_000_000);
     } finally {
       await rm(dir, { recursive: true, force: true });
     }

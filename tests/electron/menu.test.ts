@@ -14,7 +14,12 @@ function build(options: { isMac?: boolean; isDev?: boolean; recent?: string[] } 
     toggleDevTools: () => undefined,
   };
   const template = buildMenuTemplate(
-    { isMac: options.isMac ?? false, isDev: options.isDev ?? false, recent: options.recent ?? [], appName: "Brinefield" },
+    {
+      isMac: options.isMac ?? false,
+      isDev: options.isDev ?? false,
+      recent: options.recent ?? [],
+      appName: "Brinefield",
+    },
     actions,
   );
   return { template, sent };

@@ -10,7 +10,10 @@ const fileUrl = (p: string) => pathToFileURL(p).href;
 describe("isAllowedRequestUrl()", () => {
   it("allows files of the built renderer and page-made data/blob URLs", () => {
     expect(isAllowedRequestUrl(fileUrl(join(rendererDir, "index.html")), rendererDir), "index").toBe(true);
-    expect(isAllowedRequestUrl(fileUrl(join(rendererDir, "assets", "app.js")), rendererDir), "asset").toBe(true);
+    expect(
+      isAllowedRequestUrl(fileUrl(join(rendererDir, "assets", "app.js")), rendererDir),
+      "asset",
+    ).toBe(true);
     expect(isAllowedRequestUrl("data:image/png;base64,AAAA", rendererDir), "data").toBe(true);
     expect(isAllowedRequestUrl("blob:file:///1234", rendererDir), "blob").toBe(true);
   });
@@ -34,12 +37,18 @@ describe("isAllowedRequestUrl()", () => {
 
 describe("withSecurityHeaders()", () => {
   it("forces our CSP and nosniff, replacing any CSP a response brought", () => {
-    const out = withSecurityHeaders({ "content-security-policy": ["default-src *"], "Content-Type": ["text/html"] });
+    const out = withSecurityHeaders({
+      "content-security-policy": ["default-src *"],
+      "Content-Type": ["text/html"],
+    });
     expect(out["Content-Security-Policy"], "our policy").toEqual([CONTENT_SECURITY_POLICY]);
     expect(out["content-security-policy"], "old policy removed").toBeUndefined();
     expect(out["X-Content-Type-Options"], "nosniff").toEqual(["nosniff"]);
     expect(out["Content-Type"], "other headers kept").toEqual(["text/html"]);
-    expect(withSecurityHeaders(undefined)["Content-Security-Policy"], "no headers at all").toEqual([CONTENT_SECURITY_POLICY]);
+    expect(
+      withSecurityHeaders(undefined)["Content-Security-Policy"],
+      "no headers at all",
+    ).toEqual([CONTENT_SECURITY_POLICY]);
   });
 });
 

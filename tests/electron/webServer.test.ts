@@ -84,11 +84,21 @@ describe("startWebServer()", () => {
     expect(js.status, "js found").toBe(200);
     expect(js.headers["content-type"], "js type").toBe("text/javascript; charset=utf-8");
     const wasm = await raw("/assets/core.wasm");
-    expect(wasm.headers["content-type"], "wasm type (needed by WebAssembly.instantiateStreaming)").toBe("application/wasm");
+    expect(
+      wasm.headers["content-type"],
+      "wasm type (needed by WebAssembly.instantiateStreaming)",
+    ).toBe("application/wasm");
   });
 
   it("refuses ../ traversal in raw and percent-encoded forms", async () => {
-    for (const path of ["/../secret.json", "/assets/../../secret.json", "/%2e%2e/secret.json", "/..%2fsecret.json", "/..%5csecret.json"]) {
+    const attempts = [
+      "/../secret.json",
+      "/assets/../../secret.json",
+      "/%2e%2e/secret.json",
+      "/..%2fsecret.json",
+      "/..%5csecret.json",
+    ];
+    for (const path of attempts) {
       const res = await raw(path);
       expect([400, 403], `${path} refused (status ${res.status})`).toContain(res.status);
       expect(res.body, `${path} leaks nothing`).not.toContain("token");
@@ -106,7 +116,10 @@ describe("startWebServer()", () => {
     const folder = await raw("/assets/");
     expect(folder.status, "folder").toBe(404);
     expect(folder.body, "no listing").not.toContain("app.js");
-    expect(folder.headers["content-security-policy"], "errors carry the CSP too").toBe(CONTENT_SECURITY_POLICY);
+    expect(
+      folder.headers["content-security-policy"],
+      "errors carry the CSP too",
+    ).toBe(CONTENT_SECURITY_POLICY);
   });
 
   it("answers only GET and HEAD", async () => {
@@ -130,9 +143,8 @@ describe("startWebServer()", () => {
     const other = await startWebServer({ root, port: taken });
     try {
       expect(other.port, "different port").not.toBe(taken);
-      await expect(startWebServer({ root, port: taken, fallbackToFreePort: false }), "no fallback → error").rejects.toMatchObject({
-        code: "EADDRINUSE",
-      });
+      const strict = startWebServer({ root, port: taken, fallbackToFreePort: false });
+      await expect(strict, "no fallback → error").rejects.toMatchObject({ code: "EADDRINUSE" });
     } finally {
       await other.close();
       await new Promise<void>((r) => blocker.close(() => r()));
@@ -142,12 +154,18 @@ describe("startWebServer()", () => {
 
 describe("resolveRequestPath()", () => {
   it("maps / to index.html and refuses NUL, backslashes, drive letters and bad escapes", () => {
-    expect(resolveRequestPath("/srv/r", "/"), "root").toEqual({ ok: true, file: join("/srv/r", "index.html") });
+    expect(
+      resolveRequestPath("/srv/r", "/"),
+      "root",
+    ).toEqual({ ok: true, file: join("/srv/r", "index.html") });
     expect(resolveRequestPath("/srv/r", "/a%00.js"), "NUL").toEqual({ ok: false, status: 400 });
     expect(resolveRequestPath("/srv/r", "/a\\..\\b"), "backslash").toEqual({ ok: false, status: 400 });
     expect(resolveRequestPath("/srv/r", "/C:/Windows/win.ini"), "drive").toEqual({ ok: false, status: 403 });
     expect(resolveRequestPath("/srv/r", "/%E0%A4%A"), "malformed escape").toEqual({ ok: false, status: 400 });
-    expect(resolveRequestPath("/srv/r", "http://evil/x"), "absolute-form target").toEqual({ ok: false, status: 400 });
+    expect(
+      resolveRequestPath("/srv/r", "http://evil/x"),
+      "absolute-form target",
+    ).toEqual({ ok: false, status: 400 });
   });
 });
 
