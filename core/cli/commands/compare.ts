@@ -1,0 +1,93 @@
+/** `brinefield compare`: a study's variants side by side, per ambient case and worst case. */
+import { dirname, join } from "node:path";
+import { csvFormat } from "d3-dsv";
+import { CliError, type CliCommand, type CliIO } from "../command";
+import { readArgs } from "../args";
+import { loadJsonFile } from "../load";
+import { parseScenario } from "../../scenario/parse";
+import { parseStudy } from "../../study/study-file";
+import { columnsOf, compareVariant, flattenRow, sortRows, studyVariants, type FlatRow } from "../../study/compare";
+import { describeCases, expandCases } from "../../study/cases";
+import { evaluateScenario } from "../../study/evaluate";
+import { textTable } from "../../study/table";
+
+const NAME = "compare";
+
+const HELP = `Usage: brinefield compare <study.json> [--json] [--csv out.csv] [--sort column]
+
+Runs the base scenario of a study and each of its variants under every ambient case (plus slack water
+unless options.addSlackWater is false) and tabulates one row per variant and case, plus each variant's
+worst case (the case with the lowest margin): dilution at the mixing-zone edge, required dilution,
+margin (edge ÷ required), verdict, number of warnings, equation of state, and for each near-field method
+the maximum rise of the jet's upper edge (m), the impact distance (m) and the impact dilution.
+
+A study file (format "brinefield-study", version 1; JSON Schema in core/study/study.schema.json):
+  { "format": "brinefield-study", "version": 1, "name": "…",
+    "base": "site.json"  (a path relative to the study file, or the scenario object itself),
+    "variants": [ { "name": "deeper", "overrides": { "ambient.depth": "25 m", "diffuser.portCount": 6 } } ] }
+Overrides are written like scenario fields (numbers in SI or strings with units) and the patched
+scenario is read again, so every scenario rule applies.
+
+Options:
+  --json          Print the rows as JSON.
+  --csv FILE      Also write the rows as CSV.
+  --sort COLUMN   Sort rows by a column (e.g. margin, edgeDilution, integralImpactDistance); prefix
+                  with "-" for descending (e.g. --sort=-margin).
+  -h, --help      Show this help.`;
+
+async function run(argv: readonly string[], io: CliIO): Promise<number> {
+  const { values, positionals } = readArgs(argv, { json: { type: "boolean" }, csv: { type: "string" }, sort: { type: "string" } }, NAME);
+  if (positionals.length !== 1) throw new CliError(`brinefield ${NAME}: give one study file.\n\n${HELP}`);
+  const path = positionals[0]!;
+  const st = parseStudy(loadJsonFile(path, io));
+  if (!st.ok) throw new CliError(`${path}: ${st.issues.length} problem(s) in the study:\n${st.issues.map((i) => `  - ${i.message}`).join("\n")}`);
+  const basePath = typeof st.study.base === "string" ? join(dirname(path), st.study.base) : null;
+  const baseRaw = basePath ? loadJsonFile(basePath, io) : st.study.base;
+  const v = studyVariants(st.study, baseRaw, parseScenario);
+  if (!v.ok) {
+    throw new CliError(`${basePath ?? path}: ${v.issues.length} problem(s) in the study's scenarios:\n${v.issues.map((i) => `  - ${i.message}`).join("\n")}`);
+  }
+  const rows = v.variants.flatMap((x) => compareVariant(x, evaluateScenario));
+  let flat: FlatRow[] = rows.map(flattenRow);
+  if (values.sort) {
+    const sorted = sortRows(flat, values.sort);
+    if (!sorted) throw new CliError(`brinefield ${NAME}: --sort ${values.sort}: no such column; columns: ${columnsOf(flat).join(", ")}`);
+    flat = sorted;
+  }
+  const columns = columnsOf(flat);
+  if (values.csv) io.writeFile(values.csv, csvFormat(flat as never, columns as never));
+  const notes = v.variants.map((x) => `${x.name}: ${describeCases(expandCases(x.scenario), x.scenario)}`);
+  if (values.json) {
+    io.stdout(JSON.stringify({ format: "brinefield-compare", version: 1, study: st.study.name, columns, rows: flat, notes }, null, 2) + "\n");
+    return 0;
+  }
+  const methodCols = columns.filter((c) => /(MaxRise|ImpactDistance|ImpactDilution)$/.test(c));
+  const headers = ["variant", "case", "edge dilution", "required", "margin", "verdict", "warnings", ...methodCols.map(label)];
+  const body = flat.map((r) => [
+    r.variant as string,
+    r.case === "worst case" ? `worst case (${r.governingCase})` : (r.case as string),
+    r.edgeDilution as number | null,
+    r.requiredDilution as number | null,
+    r.margin as number | null,
+    r.verdict as string,
+    r.warnings as number | null,
+    ...methodCols.map((c) => (r[c] ?? null) as number | null),
+  ]);
+  io.stdout(`Study: ${st.study.name}\n\n${textTable(headers, body)}\n${notes.join("\n")}\n`);
+  return 0;
+}
+
+/** "lengthScaleMaxRise" → "length-scale max rise (m)". */
+function label(col: string): string {
+  const m = /^(.*?)(MaxRise|ImpactDistance|ImpactDilution)$/.exec(col)!;
+  const method = m[1]!.replace(/[A-Z]/g, (c) => `-${c.toLowerCase()}`);
+  const what = { MaxRise: "max rise (m)", ImpactDistance: "impact dist. (m)", ImpactDilution: "impact dilution" }[m[2] as "MaxRise"];
+  return `${method} ${what}`;
+}
+
+export const command: CliCommand = {
+  name: NAME,
+  summary: "Compare a study's variants (options, sites) per ambient case and worst case; CSV export",
+  help: HELP,
+  run,
+};

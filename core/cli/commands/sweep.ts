@@ -1,0 +1,163 @@
+/** `brinefield sweep`: vary one or two inputs over a range and tabulate the verdict at each point. */
+import { dirname, join } from "node:path";
+import { csvFormat } from "d3-dsv";
+import { CliError, type CliCommand, type CliIO } from "../command";
+import { readArgs } from "../args";
+import { formatIssues, loadJsonFile } from "../load";
+import { parseScenario } from "../../scenario/parse";
+import type { Scenario } from "../../scenario/types";
+import { describeCases, expandCases } from "../../study/cases";
+import { parseStudy } from "../../study/study-file";
+import { axisFromParts, eosCrossings, parseSweepAxis, sweepGrid, sweepRows, type SweepAxis } from "../../study/sweep";
+import { textTable } from "../../study/table";
+import { formatNumber } from "../../units";
+import { EXIT_CANCELLED, isCancelled, pointsOnWorkers, progressBar, workersOption } from "../workers/run-study";
+
+const NAME = "sweep";
+
+const HELP = `Usage: brinefield sweep <scenario.json | study.json> --vary path=from:to:steps [--vary path2=from:to:steps]
+                       [--json] [--csv out.csv] [--workers K]
+
+Runs the screening pipeline over a grid of one or two inputs and reports, per point, the dilution at the
+mixing-zone edge, the margin (edge ÷ required dilution), the verdict, the governing ambient case and the
+equation of state used; it says where neighbouring points cross from one equation of state to the other.
+Every point is run under all ambient cases (plus slack water unless options.addSlackWater is false); an
+ambient.* input is set in every case.
+
+  --vary path=from:to:steps   Input and range, e.g. ambient.currentSpeed=0:0.5:11 or
+                              diffuser.portDiameter=4 in:10 in:7. Bounds are SI numbers or values with
+                              units; steps ≥ 1. Paths: ambient.depth, ambient.salinity, ambient.temperature,
+                              ambient.currentSpeed, ambient.currentDirection, discharge.flow,
+                              discharge.salinity, discharge.temperature, diffuser.portCount,
+                              diffuser.portDiameter, diffuser.portAngle, diffuser.portHeight,
+                              diffuser.portSpacing, diffuser.length, mixingZone.radius, …
+                              A study file with a "sweep" block needs no --vary.
+  --json                      Print the points as JSON.
+  --csv FILE                  Also write the points as CSV.
+  --workers K                 Worker threads (default: all cores).
+  -h, --help                  Show this help.`;
+
+function loadTarget(path: string, io: CliIO): { scenario: Scenario; studyAxes: SweepAxis[] } {
+  const raw = loadJsonFile(path, io);
+  const isStudy = (raw as { format?: unknown } | null)?.format === "brinefield-study";
+  if (!isStudy) {
+    const r = parseScenario(raw);
+    if (!r.ok) throw new CliError(formatIssues(path, r.issues));
+    return { scenario: r.scenario, studyAxes: [] };
+  }
+  const st = parseStudy(raw);
+  if (!st.ok) throw new CliError(`${path}: ${st.issues.length} problem(s) in the study:\n${st.issues.map((i) => `  - ${i.message}`).join("\n")}`);
+  const baseRaw = typeof st.study.base === "string" ? loadJsonFile(join(dirname(path), st.study.base), io) : st.study.base;
+  const r = parseScenario(baseRaw);
+  if (!r.ok) throw new CliError(formatIssues(typeof st.study.base === "string" ? st.study.base : `${path} (base)`, r.issues));
+  const axes = (st.study.sweep?.vary ?? []).map((v, i) => {
+    const a = axisFromParts(v.path, v.from, v.to, v.steps);
+    if (!a.ok) throw new CliError(`${path}: sweep.vary.${i}: ${a.message}`);
+    return a.axis;
+  });
+  return { scenario: r.scenario, studyAxes: axes };
+}
+
+async function run(argv: readonly string[], io: CliIO): Promise<number> {
+  const { values, positionals } = readArgs(
+    argv,
+    { vary: { type: "string", multiple: true }, json: { type: "boolean" }, csv: { type: "string" }, workers: { type: "string" } },
+    NAME,
+  );
+  if (positionals.length !== 1) throw new CliError(`brinefield ${NAME}: give one scenario or study file.\n\n${HELP}`);
+  const workers = workersOption(values.workers, io, NAME);
+  const { scenario, studyAxes } = loadTarget(positionals[0]!, io);
+  const axes =
+    values.vary && values.vary.length > 0
+      ? values.vary.map((t) => {
+          const a = parseSweepAxis(t);
+          if (!a.ok) throw new CliError(`brinefield ${NAME}: --vary ${a.message}`);
+          return a.axis;
+        })
+      : studyAxes;
+  if (axes.length < 1 || axes.length > 2) throw new CliError(`brinefield ${NAME}: give one or two --vary options.\n\n${HELP}`);
+  if (axes.length === 2 && axes[0]!.path === axes[1]!.path) throw new CliError(`brinefield ${NAME}: ${axes[0]!.path} is varied twice`);
+  const grid = sweepGrid(axes);
+  const bar = progressBar(io, "Sweep", grid.length);
+  const t0 = performance.now();
+  let points;
+  try {
+    points = await pointsOnWorkers(scenario, grid.map((g) => g.overrides), workers, (d) => bar.update(d));
+  } catch (err) {
+    bar.finish();
+    if (isCancelled(err)) {
+      io.stderr("Cancelled: no results.\n");
+      return EXIT_CANCELLED;
+    }
+    throw err;
+  }
+  bar.finish();
+  const elapsedSeconds = (performance.now() - t0) / 1000;
+  const rows = sweepRows(grid, points);
+  const crossings = eosCrossings(axes, rows);
+  const casesNote = describeCases(expandCases(scenario), scenario);
+  const flat = rows.map((r) => ({
+    ...r.values,
+    governingCase: r.governingCase,
+    edgeDilution: r.edgeDilution,
+    requiredDilution: r.requiredDilution,
+    margin: r.margin,
+    pass: r.pass,
+    equationOfState: r.equationOfState,
+    ...(r.error ? { error: r.error } : {}),
+  }));
+  if (values.csv) {
+    const cols = [...axes.map((a) => a.path), "governingCase", "edgeDilution", "requiredDilution", "margin", "pass", "equationOfState", "error"];
+    io.writeFile(values.csv, csvFormat(flat as Record<string, unknown>[] as never, cols as never));
+  }
+  const crossingText = crossings.map(
+    (c) =>
+      `Equation of state changes from ${c.from} to ${c.to} between ${c.path} = ${formatNumber(c.between[0][c.path]!)} and ${formatNumber(c.between[1][c.path]!)}` +
+      (axes.length === 2 ? ` (${axes.find((a) => a.path !== c.path)!.path} = ${formatNumber(c.between[0][axes.find((a) => a.path !== c.path)!.path]!)})` : ""),
+  );
+  if (values.json) {
+    io.stdout(
+      JSON.stringify(
+        {
+          format: "brinefield-sweep",
+          version: 1,
+          scenarioName: scenario.name,
+          axes,
+          points: flat,
+          equationOfStateCrossings: crossings,
+          notes: [casesNote, ...crossingText],
+          elapsedSeconds,
+        },
+        null,
+        2,
+      ) + "\n",
+    );
+    return 0;
+  }
+  const out = [`Sweep: ${scenario.name} — ${grid.length} points, ${formatNumber(elapsedSeconds)} s`, casesNote, ""];
+  out.push(
+    textTable(
+      [...axes.map((a) => a.path), "governing case", "edge dilution", "required", "margin", "verdict", "equation of state"],
+      rows.map((r) => [
+        ...axes.map((a) => r.values[a.path]!),
+        r.governingCase ?? `error: ${r.error}`,
+        r.edgeDilution,
+        r.requiredDilution,
+        r.margin,
+        r.error ? "error" : r.pass ? "pass" : "FAIL",
+        r.equationOfState,
+      ]),
+    ),
+  );
+  if (crossingText.length > 0) out.push(...crossingText);
+  else out.push("The equation of state is the same at every point.");
+  io.stdout(out.join("\n") + "\n");
+  return 0;
+}
+
+export const command: CliCommand = {
+  name: NAME,
+  summary: "Vary one or two inputs over a range: edge dilution, margin and verdict at each point",
+  help: HELP,
+  run,
+};

@@ -1,0 +1,144 @@
+/** `brinefield uncertainty`: seeded, reproducible Monte Carlo over uncertain inputs, on all cores. */
+import { CliError, type CliCommand, type CliIO } from "../command";
+import { readArgs } from "../args";
+import { loadScenarioFile } from "../load";
+import { planMonteCarlo, summariseMonteCarlo, type MonteCarloStats } from "../../study/montecarlo";
+import { describeCases, expandCases } from "../../study/cases";
+import { seedFromText } from "../../study/random";
+import { textTable } from "../../study/table";
+import { formatNumber } from "../../units";
+import { EXIT_CANCELLED, isCancelled, monteCarloOnWorkers, progressBar, workersOption } from "../workers/run-study";
+
+const NAME = "uncertainty";
+const DEFAULT_RUNS = 1000;
+const DEFAULT_SEED = 1;
+
+const HELP = `Usage: brinefield uncertainty <scenario.json> [--runs N] [--seed S] [--workers K] [--json]
+
+Monte Carlo over uncertain inputs: each run draws the inputs, runs the same screening pipeline under
+every ambient case (plus a slack-water case unless options.addSlackWater is false), and records the
+dilution at the mixing-zone edge and whether every limit is met. Reports P5, P50 and P95 of the edge
+dilution and the probability of not meeting the limit, per ambient case and for the worst case (per
+run, the case with the lowest margin; a run fails if any case fails).
+
+Inputs come from the scenario's "uncertainty.inputs" (normal, uniform, lognormal, triangular; SI
+values; a missing mean/median/mode is the scenario's own value). When the scenario states none, these
+default spreads are used and the output says so (screening judgement, no source):
+  current speed   lognormal, geometric sd 1.5 about the stated speed (fixed when it is zero)
+  ambient salinity normal, sd 0.5 g/kg      ambient temperature normal, sd 1.5 °C
+  brine salinity   normal, sd 2 %            brine flow          normal, sd 5 %
+A distribution on an ambient.* input describes the base ambient; each ambient case gets the same
+deviation from the base value (a ratio for lognormal), and slack water keeps zero current.
+
+Options:
+  --runs N       Number of runs (default ${DEFAULT_RUNS}).
+  --seed S       Seed, a whole number 0 … 4294967295 (default ${DEFAULT_SEED}). The same seed gives the same
+                 results whatever the number of workers: run i always draws from stream i of the seed.
+  --workers K    Worker threads (default: all cores).
+  --json         Print the results as JSON (keys p5, p50, p95, probabilityOfExceedance; timings in …Seconds).
+  -h, --help     Show this help.
+
+A progress bar is drawn on stderr when it is a terminal. Ctrl-C cancels cleanly (exit code 130).`;
+
+function statsJson(s: MonteCarloStats) {
+  return {
+    name: s.name,
+    edgeDilution: s.edgeDilution,
+    margin: s.margin,
+    probabilityOfExceedance: s.probabilityOfExceedance,
+    failedRuns: s.failedRuns,
+  };
+}
+
+async function run(argv: readonly string[], io: CliIO): Promise<number> {
+  const { values, positionals } = readArgs(
+    argv,
+    { runs: { type: "string" }, seed: { type: "string" }, workers: { type: "string" }, json: { type: "boolean" } },
+    NAME,
+  );
+  if (positionals.length !== 1) throw new CliError(`brinefield ${NAME}: give one scenario file.\n\n${HELP}`);
+  const runs = values.runs === undefined ? DEFAULT_RUNS : Number(values.runs);
+  if (!Number.isInteger(runs) || runs < 1 || runs > 10_000_000) {
+    throw new CliError(`brinefield ${NAME}: --runs ${values.runs} must be a whole number from 1 to 10000000`);
+  }
+  const seed = values.seed === undefined ? DEFAULT_SEED : seedFromText(values.seed);
+  if (seed === null) throw new CliError(`brinefield ${NAME}: --seed ${values.seed} must be a whole number from 0 to 4294967295`);
+  const workers = Math.min(workersOption(values.workers, io, NAME), runs);
+  const scenario = loadScenarioFile(positionals[0]!, io);
+  const planned = planMonteCarlo(scenario, runs, seed);
+  if (!planned.ok) {
+    throw new CliError(`${positionals[0]}: the uncertainty inputs cannot be used:\n${planned.issues.map((i) => `  - ${i.path}: ${i.message}`).join("\n")}`);
+  }
+  const plan = planned.plan;
+  const bar = progressBar(io, "Monte Carlo", runs);
+  const t0 = performance.now();
+  let chunks;
+  try {
+    chunks = await monteCarloOnWorkers(scenario, plan, workers, (d) => bar.update(d));
+  } catch (err) {
+    bar.finish();
+    if (isCancelled(err)) {
+      io.stderr("Cancelled: no results.\n");
+      return EXIT_CANCELLED;
+    }
+    throw err;
+  }
+  bar.finish();
+  const elapsedSeconds = (performance.now() - t0) / 1000;
+  const summary = summariseMonteCarlo(plan, chunks);
+  const casesNote = describeCases(expandCases(scenario), scenario);
+  if (values.json) {
+    io.stdout(
+      JSON.stringify(
+        {
+          format: "brinefield-uncertainty",
+          version: 1,
+          scenarioName: scenario.name,
+          runs: summary.runs,
+          seed: summary.seed,
+          usedDefaultSpreads: summary.usedDefaultSpreads,
+          inputs: plan.distributions,
+          notes: [...summary.notes, casesNote],
+          cases: summary.cases.map(statsJson),
+          worstCase: statsJson(summary.worstCase),
+          clampedSamples: summary.clampedSamples,
+          firstError: summary.firstError,
+          workers,
+          elapsedSeconds,
+        },
+        null,
+        2,
+      ) + "\n",
+    );
+    return 0;
+  }
+  const out: string[] = [];
+  out.push(`Monte Carlo: ${scenario.name}`);
+  out.push(`${summary.runs} runs, seed ${summary.seed}, ${workers} worker${workers === 1 ? "" : "s"}, ${formatNumber(elapsedSeconds)} s`);
+  if (summary.usedDefaultSpreads) out.push("NOTE: the scenario states no uncertain inputs; default spreads were used (see below).");
+  out.push("Inputs:");
+  for (const n of summary.notes) out.push(`  ${n}`);
+  out.push(casesNote, "");
+  const rows = [...summary.cases, summary.worstCase].map((s) => [
+    s.name,
+    s.edgeDilution.p5,
+    s.edgeDilution.p50,
+    s.edgeDilution.p95,
+    s.margin.p5,
+    s.probabilityOfExceedance,
+    s.failedRuns,
+  ]);
+  out.push("Dilution at the mixing-zone edge:");
+  out.push(textTable(["case", "P5", "P50", "P95", "margin P5", "P(not meeting limit)", "failed runs"], rows));
+  if (summary.clampedSamples > 0) out.push(`${summary.clampedSamples} samples fell outside their physical bounds and were clamped.`);
+  if (summary.firstError) out.push(`Some runs failed; first: ${summary.firstError}`);
+  io.stdout(out.join("\n") + "\n");
+  return 0;
+}
+
+export const command: CliCommand = {
+  name: NAME,
+  summary: "Monte Carlo over uncertain inputs: P5/P50/P95 edge dilution and probability of not meeting the limit",
+  help: HELP,
+  run,
+};

@@ -1,0 +1,25 @@
+/** Messages between the command-line adapter and its study worker threads (structured-clone data only). */
+import type { Scenario } from "../../scenario/types";
+import type { MonteCarloChunk, MonteCarloPlan } from "../../study/montecarlo";
+import type { PointEvaluation } from "../../study/evaluate-point";
+import type { Overrides } from "../../study/overrides";
+
+/** Marks workerData so `runWorkerThread` knows the thread is a study worker. */
+export const STUDY_WORKER_TAG = "brinefield-study-worker";
+
+export type WorkerTask =
+  | {
+      readonly kind: "monte-carlo";
+      readonly id: number;
+      readonly scenario: Scenario;
+      readonly plan: MonteCarloPlan;
+      readonly start: number;
+      readonly end: number;
+    }
+  | { readonly kind: "points"; readonly id: number; readonly scenario: Scenario; readonly overrides: readonly Overrides[] };
+
+export type WorkerReply =
+  | { readonly kind: "progress"; readonly id: number; readonly done: number }
+  | { readonly kind: "monte-carlo-done"; readonly id: number; readonly chunk: MonteCarloChunk }
+  | { readonly kind: "points-done"; readonly id: number; readonly points: readonly PointEvaluation[] }
+  | { readonly kind: "error"; readonly id: number; readonly message: string };

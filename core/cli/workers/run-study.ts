@@ -1,0 +1,112 @@
+/**
+ * Running study work on worker threads from the command line: deterministic chunking, a progress bar
+ * on stderr (only when it is a terminal) and clean cancellation on Ctrl-C.
+ */
+import { CliError, type CliIO } from "../command";
+import type { Scenario } from "../../scenario/types";
+import { splitRuns, type MonteCarloChunk, type MonteCarloPlan } from "../../study/montecarlo";
+import type { PointEvaluation } from "../../study/evaluate-point";
+import type { Overrides } from "../../study/overrides";
+import { CancelledError, StudyPool } from "./pool";
+
+export { CancelledError } from "./pool";
+
+/** Exit code after Ctrl-C (128 + SIGINT), the shell convention. */
+export const EXIT_CANCELLED = 130;
+
+export interface ProgressBar {
+  update(done: number): void;
+  finish(): void;
+}
+
+/** A one-line progress bar on stderr, redrawn at most ten times a second; silent when not a terminal. */
+export function progressBar(io: CliIO, label: string, total: number): ProgressBar {
+  if (!io.isTTY || total <= 0) return { update() {}, finish() {} };
+  let last = 0;
+  const width = 30;
+  const draw = (done: number) => {
+    const f = Math.min(1, done / total);
+    const filled = Math.round(f * width);
+    io.stderr(`\r${label} [${"#".repeat(filled)}${" ".repeat(width - filled)}] ${(f * 100).toFixed(0).padStart(3)}% (${done}/${total})`);
+  };
+  return {
+    update(done) {
+      const now = Date.now();
+      if (now - last < 100 && done < total) return;
+      last = now;
+      draw(done);
+    },
+    finish() {
+      io.stderr(`\r${" ".repeat(label.length + width + 30)}\r`);
+    },
+  };
+}
+
+/** Runs `work` with a pool; Ctrl-C cancels the pool and the promise rejects with CancelledError. */
+export async function withPool<T>(workers: number, work: (pool: StudyPool) => Promise<T>): Promise<T> {
+  const pool = new StudyPool(workers);
+  const onSigint = () => pool.cancel();
+  process.once("SIGINT", onSigint);
+  try {
+    return await work(pool);
+  } finally {
+    process.removeListener("SIGINT", onSigint);
+    await pool.close();
+  }
+}
+
+/** Chunks per worker: enough for load balancing and smooth progress, few enough to keep overhead low. */
+const CHUNKS_PER_WORKER = 4;
+
+export async function monteCarloOnWorkers(
+  scenario: Scenario,
+  plan: MonteCarloPlan,
+  workers: number,
+  onProgress?: (done: number) => void,
+): Promise<MonteCarloChunk[]> {
+  return withPool(workers, async (pool) => {
+    const chunks = splitRuns(plan.runs, workers * CHUNKS_PER_WORKER);
+    const replies = await pool.run(
+      chunks.map((c) => ({ kind: "monte-carlo" as const, scenario, plan, start: c.start, end: c.end })),
+      onProgress,
+    );
+    return replies.map((r) => {
+      if (r.kind !== "monte-carlo-done") throw new Error("unexpected worker reply");
+      return r.chunk;
+    });
+  });
+}
+
+export async function pointsOnWorkers(
+  scenario: Scenario,
+  list: readonly Overrides[],
+  workers: number,
+  onProgress?: (done: number) => void,
+): Promise<PointEvaluation[]> {
+  if (list.length === 0) return [];
+  return withPool(Math.min(workers, list.length), async (pool) => {
+    const chunks = splitRuns(list.length, Math.min(workers, list.length) * CHUNKS_PER_WORKER);
+    const replies = await pool.run(
+      chunks.map((c) => ({ kind: "points" as const, scenario, overrides: list.slice(c.start, c.end) })),
+      onProgress,
+    );
+    return replies.flatMap((r) => {
+      if (r.kind !== "points-done") throw new Error("unexpected worker reply");
+      return r.points;
+    });
+  });
+}
+
+/** Reads --workers: default all cores; must be a whole number from 1 to 256. */
+export function workersOption(value: string | undefined, io: CliIO, command: string): number {
+  if (value === undefined) return Math.max(1, io.cores);
+  const n = Number(value);
+  if (!Number.isInteger(n) || n < 1 || n > 256) {
+    throw new CliError(`brinefield ${command}: --workers ${value} must be a whole number from 1 to 256`);
+  }
+  return n;
+}
+
+export function isCancelled(err: unknown): boolean {
+  return err instanceof CancelledError;
+}

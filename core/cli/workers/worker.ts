@@ -1,0 +1,43 @@
+/**
+ * The body of a study worker thread. The bundled CLI starts workers on its own file
+ * (`new Worker(new URL(import.meta.url))`); core/cli/main.ts calls `runWorkerThread()` when
+ * `!isMainThread`. Each task is a loop around the one pipeline (`evaluateScenario`); progress is
+ * posted every few runs so the main thread can draw a bar.
+ */
+import { parentPort, workerData } from "node:worker_threads";
+import { evaluateScenario } from "../../study/evaluate";
+import { evaluatePoints } from "../../study/evaluate-point";
+import { runMonteCarloChunk } from "../../study/montecarlo";
+import { STUDY_WORKER_TAG, type WorkerReply, type WorkerTask } from "./protocol";
+
+const PROGRESS_EVERY = 25;
+
+export function isStudyWorker(): boolean {
+  return (workerData as { tag?: unknown } | null)?.tag === STUDY_WORKER_TAG;
+}
+
+/** Serves tasks until the main thread terminates the worker. Returns false when not a study worker. */
+export function runWorkerThread(): boolean {
+  const port = parentPort;
+  if (!port || !isStudyWorker()) return false;
+  port.on("message", (task: WorkerTask) => {
+    const post = (m: WorkerReply, transfer?: ArrayBuffer[]) => port.postMessage(m, transfer);
+    try {
+      if (task.kind === "monte-carlo") {
+        const chunk = runMonteCarloChunk(task.scenario, task.plan, task.start, task.end, evaluateScenario, (done) => {
+          if (done % PROGRESS_EVERY === 0) post({ kind: "progress", id: task.id, done });
+        });
+        const buffers = [...chunk.edgeDilution, ...chunk.margin, ...chunk.pass].map((a) => a.buffer as ArrayBuffer);
+        post({ kind: "monte-carlo-done", id: task.id, chunk }, buffers);
+      } else {
+        const points = evaluatePoints(task.scenario, task.overrides, evaluateScenario, (done) => {
+          if (done % PROGRESS_EVERY === 0) post({ kind: "progress", id: task.id, done });
+        });
+        post({ kind: "points-done", id: task.id, points });
+      }
+    } catch (err) {
+      post({ kind: "error", id: task.id, message: err instanceof Error ? err.message : String(err) });
+    }
+  });
+  return true;
+}
