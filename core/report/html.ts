@@ -118,7 +118,12 @@ function derivedHtml(result: BrinefieldResult): RawHtml {
   ]);
   const eosHtml = html`<p><strong>Equation of state:</strong> ${eos.name}. ${eos.reason} <span class="note">Source: ${eos.source}.</span></p>`;
   const p = result.port;
-  const flows = p.flows.length > 1 ? html`<tr><td>Port flows (smallest – largest)</td><td class="num">${reportNumber(Math.min(...p.flows))} – ${reportNumber(Math.max(...p.flows))}</td><td>m³/s</td></tr>` : html``;
+  const iMin = p.flows.indexOf(Math.min(...p.flows));
+  const iMax = p.flows.indexOf(Math.max(...p.flows));
+  const flows =
+    p.flows.length > 1
+      ? html`<tr><td>Port flows (smallest – largest)</td><td class="num"><span data-path="port.flows.${String(iMin)}">${reportNumber(p.flows[iMin])}</span> – <span data-path="port.flows.${String(iMax)}">${reportNumber(p.flows[iMax])}</span></td><td>m³/s</td></tr>`
+      : html``;
   const port = keyValueTable("Ports (mean port of the diffuser)", [
     resultRow(result, "Number of ports", "port.count", "–"),
     resultRow(result, "Effective port diameter", "port.diameter", "m"),
