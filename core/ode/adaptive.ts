@@ -135,7 +135,7 @@ export function integrateAdaptive<P>(
     let terminalHit: EventHit | null = null;
     if (ne > 0) {
       for (let e = 0; e < ne; e++) gNew[e] = events[e].fn(tNew, stepper.y, params, stepper.f);
-      const stepHits: EventHit[] = [];
+      let stepHits: EventHit[] | null = null; // allocated only when a crossing occurs
       for (let e = 0; e < ne; e++) {
         const a = gOld[e];
         const b = gNew[e];
@@ -145,10 +145,10 @@ export function integrateAdaptive<P>(
         if ((dir <= 0 && down) || (dir >= 0 && up)) {
           const theta = locateRoot(stepper, events[e], params, t, hUsed, a, b, yTry);
           stepper.interpolate(theta, yTry);
-          stepHits.push({ index: e, t: t + theta * hUsed, y: Float64Array.from(yTry) });
+          (stepHits ??= []).push({ index: e, t: t + theta * hUsed, y: Float64Array.from(yTry) });
         }
       }
-      if (stepHits.length > 0) {
+      if (stepHits) {
         stepHits.sort((p, q) => p.t - q.t);
         for (const hit of stepHits) {
           hits.push(hit);
