@@ -120,7 +120,7 @@ describe("parseHostRequest()", () => {
       [{ kind: "print-pdf", suggestedName: "../../evil" }, /folder/],
       [{ kind: "set-document-state", dirty: "yes", title: "" }, /dirty/],
       [
-        { kind: "export-file", suggestedName: "a.csv", text: "", filters: [{ name: "x", extensions: ["c;r"] }] },
+        { kind: "export-file", suggestedName: "a", text: "", filters: [{ name: "x", extensions: ["c;r"] }] },
         /extension/,
       ],
       [null, /Rejected/],
