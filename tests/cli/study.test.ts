@@ -1,0 +1,168 @@
+/**
+ * The study commands as a user meets them: compare, sweep, design and uncertainty, run in-process with
+ * a recording CliIO (worker threads start from the TypeScript source through tsx).
+ */
+import { describe, it, expect, beforeAll } from "vitest";
+import { mkdtempSync, readFileSync, writeFileSync } from "node:fs";
+import { tmpdir } from "node:os";
+import { join, resolve } from "node:path";
+import { csvParse } from "d3-dsv";
+import { CliError, type CliIO } from "../../core/cli/command";
+import { command as compare } from "../../core/cli/commands/compare";
+import { command as sweep } from "../../core/cli/commands/sweep";
+import { command as design } from "../../core/cli/commands/design";
+import { command as uncertainty } from "../../core/cli/commands/uncertainty";
+import { parseScenario } from "../../core/scenario/parse";
+import { runScenario } from "../../core/pipeline";
+import { withOverrides } from "../../core/study/overrides";
+import { expandCases } from "../../core/study/cases";
+import { fourPortRaw } from "../core/study/fixtures";
+
+let dir = "";
+
+function fakeIO(cores = 2) {
+  const out: string[] = [];
+  const err: string[] = [];
+  const files = new Map<string, string>();
+  const io: CliIO = {
+    cwd: dir,
+    isTTY: false,
+    cores,
+    stdout: (t) => void out.push(t),
+    stderr: (t) => void err.push(t),
+    readFile: (p) => {
+      try {
+        return readFileSync(resolve(dir, p), "utf8");
+      } catch {
+        throw new CliError(`${p}: cannot be read (no such file)`);
+      }
+    },
+    writeFile: (p, d) => void files.set(p, typeof d === "string" ? d : new TextDecoder().decode(d)),
+  };
+  return { io, out: () => out.join(""), err: () => err.join(""), files };
+}
+
+beforeAll(() => {
+  dir = mkdtempSync(join(tmpdir(), "brinefield-study-"));
+  const raw = fourPortRaw();
+  raw.ambientCases = [{ name: "spring tide", currentSpeed: 0.3 }, { name: "neap tide", currentSpeed: 0.05 }];
+  writeFileSync(join(dir, "site.json"), JSON.stringify(raw));
+  writeFileSync(
+    join(dir, "study.json"),
+    JSON.stringify({
+      format: "brinefield-study",
+      version: 1,
+      name: "Options",
+      base: "site.json",
+      variants: [
+        { name: "deeper", overrides: { "ambient.depth": "60 ft" } },
+        { name: "eight ports", overrides: { "diffuser.portCount": 8 } },
+      ],
+    }),
+  );
+});
+
+describe("brinefield uncertainty", () => {
+  it("repeats exactly with the same seed for 1 and 2 workers, with the promised JSON keys", async () => {
+    const run = async (workers: string) => {
+      const f = fakeIO();
+      const code = await uncertainty.run(["site.json", "--runs", "24", "--seed", "99", "--workers", workers, "--json"], f.io);
+      expect(code, f.err()).toBe(0);
+      return JSON.parse(f.out());
+    };
+    const one = await run("1");
+    const two = await run("2");
+    const strip = (j: Record<string, unknown>) => ({ ...j, workers: 0, elapsedSeconds: 0 });
+    expect(strip(two), "same seed, different worker count: identical results").toEqual(strip(one));
+    for (const k of ["p5", "p50", "p95"]) expect(typeof one.worstCase.edgeDilution[k], `worstCase.edgeDilution.${k}`).toBe("number");
+    expect(typeof one.worstCase.probabilityOfExceedance, "probabilityOfExceedance").toBe("number");
+    expect(one.cases.map((c: { name: string }) => c.name), "per ambient case plus slack water").toEqual([
+      "spring tide",
+      "neap tide",
+      "slack water",
+    ]);
+    expect(one.usedDefaultSpreads, "no uncertainty block → default spreads").toBe(true);
+    expect(one.notes.join(" "), "the output says default spreads were used").toMatch(/default spreads/);
+    expect(typeof one.elapsedSeconds, "timing key ends in Seconds").toBe("number");
+  });
+
+  it("rejects a bad seed or run count, naming the option", async () => {
+    const f = fakeIO();
+    await expect(uncertainty.run(["site.json", "--seed", "-3"], f.io), "negative seed").rejects.toThrow(/--seed/);
+    await expect(uncertainty.run(["site.json", "--runs", "0"], f.io), "zero runs").rejects.toThrow(/--runs/);
+  });
+});
+
+describe("brinefield sweep", () => {
+  it("tabulates each point with the governing case and equation of state, and writes CSV", async () => {
+    const f = fakeIO();
+    const code = await sweep.run(["site.json", "--vary", "ambient.depth=12:30 m:3", "--json", "--csv", "out.csv", "--workers", "2"], f.io);
+    expect(code, f.err()).toBe(0);
+    const j = JSON.parse(f.out());
+    expect(j.points.map((p: Record<string, number>) => p["ambient.depth"]), "12, 21, 30 m").toEqual([12, 21, 30]);
+    for (const p of j.points) {
+      expect(typeof p.edgeDilution, "edge dilution per point").toBe("number");
+      expect(typeof p.equationOfState === "string" && p.equationOfState.length > 0, "equation of state named").toBe(true);
+      expect(["spring tide", "neap tide", "slack water"], "governing case is one of the cases").toContain(p.governingCase);
+    }
+    const csv = csvParse(f.files.get("out.csv")!);
+    expect(csv.length, "one CSV row per point").toBe(3);
+    expect(csv.columns.slice(0, 3), "CSV columns").toEqual(["ambient.depth", "governingCase", "edgeDilution"]);
+  });
+
+  it("explains a malformed --vary", async () => {
+    const f = fakeIO();
+    await expect(sweep.run(["site.json", "--vary", "ambient.depth=5:10"], f.io), "missing steps").rejects.toThrow(/from:to:steps/);
+  });
+});
+
+describe("brinefield design", () => {
+  it("returns a short list whose every design re-checks as passing with runScenario", async () => {
+    const f = fakeIO();
+    const code = await design.run(
+      ["site.json", "--max-ports", "5", "--diameter-steps", "2", "--angles", "45,60", "--max-length", "30 m", "--json", "--workers", "2"],
+      f.io,
+    );
+    expect(code, f.err()).toBe(0);
+    const j = JSON.parse(f.out());
+    expect(j.slackWaterAdded, "slack water added and said so").toBe(true);
+    expect(j.designs.length, "a list, not one answer").toBeGreaterThan(1);
+    const parsed = parseScenario(JSON.parse(readFileSync(join(dir, "site.json"), "utf8")));
+    if (!parsed.ok) throw new Error("site must parse");
+    for (const d of j.designs) {
+      for (const k of ["portCount", "portDiameter", "portAngle", "portSpacing"]) expect(typeof d[k], `design field ${k}`).toBe("number");
+      const s = withOverrides(parsed.scenario, {
+        "diffuser.portCount": d.portCount,
+        "diffuser.portDiameter": d.portDiameter,
+        "diffuser.portAngle": d.portAngle,
+        "diffuser.portHeight": d.portHeight,
+        ...(d.portCount > 1 ? { "diffuser.portSpacing": d.portSpacing } : { "diffuser.length": 0 }),
+      });
+      for (const c of expandCases(s)) {
+        const r = runScenario(c.scenario, { includePath: false });
+        expect(r.compliance.pass, `design #${d.rank} passes in ${c.name}`).toBe(true);
+        expect(d.length, `design #${d.rank} within 30 m`).toBeLessThanOrEqual(30);
+      }
+    }
+  });
+});
+
+describe("brinefield compare", () => {
+  it("resolves the base path relative to the study, sorts and exports CSV", async () => {
+    const f = fakeIO();
+    const code = await compare.run(["study.json", "--json", "--sort=-margin", "--csv", "rows.csv"], f.io);
+    expect(code, f.err()).toBe(0);
+    const j = JSON.parse(f.out());
+    expect(new Set(j.rows.map((r: { variant: string }) => r.variant)), "base and both variants").toEqual(new Set(["base", "deeper", "eight ports"]));
+    expect(j.rows.length, "3 variants × (3 cases + worst case)").toBe(12);
+    const margins = j.rows.map((r: { margin: number }) => r.margin);
+    expect([...margins].sort((a, b) => b - a), "sorted by descending margin").toEqual(margins);
+    expect(csvParse(f.files.get("rows.csv")!).length, "CSV rows").toBe(12);
+  });
+
+  it("names the path of a bad study", async () => {
+    writeFileSync(join(dir, "bad-study.json"), JSON.stringify({ format: "brinefield-study", version: 1, name: "x", base: "site.json", variants: [{ name: "v" }] }));
+    const f = fakeIO();
+    await expect(compare.run(["bad-study.json"], f.io), "missing overrides").rejects.toThrow(/variants\.0\.overrides/);
+  });
+});
