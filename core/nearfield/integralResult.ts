@@ -1,0 +1,270 @@
+/**
+ * Assembly of the integral model's `NearFieldMethodResult` from an integrator run: located events,
+ * warnings (stage "integral"), the documented bias and the dilution range, the decimated path.
+ */
+import { warning, type ResultWarning } from "../warnings";
+import { entrainmentLeeCheung1990ValidityIssues } from "../correlations/entrainmentLeeCheung1990";
+import type { AdaptiveResult } from "../ode/adaptive";
+import { INTEGRAL_DIM, IQ, IX, IY, IZ, verticalHalfExtent, type IntegralParams } from "./integralRhs";
+import type { IntegralPathBuffer } from "./integralPath";
+import {
+  CENTRELINE_PROFILE_FACTOR,
+  DILUTION_BIAS_FACTOR,
+  EV_IMPACT,
+  EV_MAX_RISE,
+  EV_RETURN,
+  EV_SEABED_EDGE,
+  EV_SURFACE_CENTRE,
+  EV_SURFACE_EDGE,
+  INTEGRAL_BIAS,
+  INTEGRAL_SOURCE,
+  centrelineDilution,
+} from "./integralSetup";
+import type { AmbientColumn, JetSource, NearFieldEvent, NearFieldMethodResult } from "./types";
+
+/** Result for inputs the model cannot run with: nulls and one serious warning. */
+export function invalidIntegralResult(message: string, value: number | undefined, parameter: string): NearFieldMethodResult {
+  return {
+    method: "integral",
+    source: INTEGRAL_SOURCE,
+    maxRiseHeight: null,
+    maxRiseDistance: null,
+    returnDistance: null,
+    impactDistance: null,
+    impactDilution: null,
+    nearFieldDistance: null,
+    nearFieldDilution: null,
+    maxRiseDilution: null,
+    dilutionRange: null,
+    entrainedFlow: null,
+    bias: INTEGRAL_BIAS,
+    warnings: [warning("integral-invalid-input", "serious", message, { parameter, value, stage: "integral" })],
+    path: [],
+    events: [],
+  };
+}
+
+function planDistance(y: Float64Array): number {
+  return Math.hypot(y[IX], y[IY]);
+}
+
+/** Turns the integrator's run into the method result: events, warnings, numbers, notes. */
+export function assembleIntegralResult(
+  jet: JetSource,
+  column: AmbientColumn,
+  params: IntegralParams,
+  run: AdaptiveResult,
+  stopKind: "passive-layer" | "trapped" | null,
+  q0: number,
+  u0: number,
+  includePath: boolean,
+  path: IntegralPathBuffer,
+  maxSteps: number,
+  maxLength: number,
+): NearFieldMethodResult {
+  const warnings: ResultWarning[] = [];
+  const notes: string[] = [];
+  const events: NearFieldEvent[] = [];
+  const push = (kind: NearFieldEvent["kind"], s: number, y: Float64Array) => {
+    events.push({ kind, s, x: y[IX], y: y[IY], z: y[IZ], dilution: centrelineDilution(y[IQ], q0) });
+  };
+
+  let returnHit: Float64Array | null = null;
+  let impactHit: Float64Array | null = null;
+  let maxRise: { s: number; y: Float64Array; edge: number } | null = null;
+  let surfaceEdge = false;
+  let surfaceCentre = false;
+  let seabedEdge = false;
+  for (const hit of run.events) {
+    switch (hit.index) {
+      case EV_RETURN:
+        push("return-to-port-level", hit.t, hit.y);
+        if (!returnHit) {
+          returnHit = hit.y;
+        }
+        break;
+      case EV_SEABED_EDGE:
+        if (!seabedEdge) push("seabed-contact", hit.t, hit.y);
+        seabedEdge = true;
+        break;
+      case EV_IMPACT:
+        push("centreline-impact", hit.t, hit.y);
+        impactHit = hit.y;
+        break;
+      case EV_SURFACE_EDGE:
+        if (!surfaceEdge) push("surface-contact", hit.t, hit.y);
+        surfaceEdge = true;
+        break;
+      case EV_SURFACE_CENTRE:
+        surfaceCentre = true;
+        push("surface-contact", hit.t, hit.y);
+        break;
+      case EV_MAX_RISE: {
+        const edge = hit.y[IZ] + verticalHalfExtent(hit.y);
+        if (!maxRise || edge > maxRise.edge) maxRise = { s: hit.t, y: hit.y, edge };
+        break;
+      }
+    }
+  }
+  // The jet may stop (surface, trap, limits) before its edge turns over: use the highest sample.
+  if (!maxRise && path.length > 0) {
+    let iBest = 0;
+    for (let i = 1; i < path.length; i++) if (path.edge[i] > path.edge[iBest]) iBest = i;
+    notes.push(
+      "No turning point of the upper edge was located; the maximum rise is the highest sampled upper edge.",
+    );
+    const y = new Float64Array(INTEGRAL_DIM);
+    y[IX] = path.x[iBest];
+    y[IY] = path.y[iBest];
+    y[IZ] = path.z[iBest];
+    y[IQ] = Math.max(1, path.dilution[iBest] / CENTRELINE_PROFILE_FACTOR) * q0;
+    maxRise = { s: path.s[iBest], y, edge: path.edge[iBest] };
+  }
+  if (maxRise) {
+    events.push({
+      kind: "max-rise",
+      s: maxRise.s,
+      x: maxRise.y[IX],
+      y: maxRise.y[IY],
+      z: maxRise.y[IZ],
+      dilution: centrelineDilution(maxRise.y[IQ], q0),
+    });
+  }
+
+  const last = run.y;
+  const stage = "integral";
+  if (surfaceEdge || surfaceCentre) {
+    warnings.push(
+      warning(
+        "jet-reaches-surface",
+        surfaceCentre ? "serious" : "warning",
+        surfaceCentre
+          ? `The jet centreline reaches the surface ${column.depth.toFixed(1)} m above the seabed; the integral model stops there and its dilutions do not apply.`
+          : "The upper edge of the jet reaches the water surface; surface interaction is not modelled and the rise and dilutions are approximate.",
+        { parameter: "depth", value: column.depth, stage },
+      ),
+    );
+  }
+  if (stopKind === "trapped") {
+    push("trapped", run.t, last);
+    warnings.push(
+      warning(
+        "jet-trapped",
+        "warning",
+        `The jet is trapped by the ambient stratification at ${(params.portDepth - last[IZ]).toFixed(1)} m depth (neutral buoyancy with small vertical velocity); it spreads as a layer there instead of reaching the seabed.`,
+        { parameter: "column.densities", stage },
+      ),
+    );
+  } else if (stopKind === "passive-layer") {
+    push("passive-layer", run.t, last);
+    warnings.push(
+      warning(
+        "jet-momentum-exhausted",
+        "warning",
+        `The jet's velocity relative to the ambient fell below 0.1 % of the exit velocity at s = ${run.t.toFixed(2)} m; the integral model cannot follow the flow further (passive layer or stalled fountain).`,
+        { stage },
+      ),
+    );
+  }
+  if (run.reason === "max-steps") {
+    push("step-limit", run.t, last);
+    warnings.push(
+      warning("integral-step-limit", "warning", `The integrator stopped after ${maxSteps} steps without reaching the seabed.`, {
+        parameter: "maxSteps",
+        value: maxSteps,
+        stage,
+      }),
+    );
+  } else if (run.reason === "t-max") {
+    push("length-limit", run.t, last);
+    warnings.push(
+      warning(
+        "integral-length-limit",
+        "warning",
+        `The jet centreline reached the length limit of ${maxLength.toFixed(0)} m without reaching the seabed.`,
+        { parameter: "maxLength", value: maxLength, stage },
+      ),
+    );
+  } else if (run.reason === "step-underflow") {
+    warnings.push(
+      warning(
+        "integral-step-underflow",
+        "warning",
+        `The integrator's step size collapsed at s = ${run.t.toPrecision(4)} m (a singular point, e.g. a fountain top); results beyond it are not available.`,
+        { stage },
+      ),
+    );
+  }
+  if (Math.abs(jet.froude) > 1000 || jet.reducedGravity === 0) {
+    warnings.push(
+      warning(
+        "integral-near-neutral",
+        "warning",
+        `Near-neutral buoyancy (g′ = ${jet.reducedGravity.toPrecision(3)} m/s², F = ${Number.isFinite(jet.froude) ? jet.froude.toFixed(0) : "∞"}): the discharge behaves as a pure jet and may not return to the seabed within the model.`,
+        { parameter: "reducedGravity", value: jet.reducedGravity, stage },
+      ),
+    );
+  } else if (jet.reducedGravity < 0) {
+    warnings.push(
+      warning(
+        "integral-positively-buoyant",
+        "warning",
+        "The discharge is lighter than the ambient water at the port; it rises and impact quantities do not apply.",
+        { parameter: "reducedGravity", value: jet.reducedGravity, stage },
+      ),
+    );
+  }
+  if (!impactHit) {
+    warnings.push(
+      warning("integral-no-impact", "warning", "The jet centreline did not reach the seabed; impact distance and dilution are not available.", {
+        stage,
+      }),
+    );
+  }
+  if (!returnHit && jet.angle <= 0) {
+    notes.push("The port does not point upward, so the centreline never rises above port level (no return point).");
+  }
+  warnings.push(
+    ...entrainmentLeeCheung1990ValidityIssues({
+      froude: jet.froude,
+      angleDeg: jet.angle,
+      currentSpeed: params.currentSpeed,
+      velocity: u0,
+    }),
+  );
+
+  const impactDilution = impactHit ? centrelineDilution(impactHit[IQ], q0) : null;
+  if (impactDilution !== null) {
+    notes.push(
+      `dilutionRange: low = the computed centreline impact dilution; high = computed ÷ ${DILUTION_BIAS_FACTOR}, ` +
+        "the ~30 % under-prediction Lai & Lee (2012) found for integral-model dilution at maximum rise, " +
+        "extrapolated to the impact point (an estimate, not a published impact correction).",
+    );
+  }
+  notes.push(
+    "Dilutions are centreline (minimum) values: flux-average (top-hat) dilution × λ²/(1+λ²) with λ = 1.2; " +
+      "halfWidth is the top-hat radius (≈ √2 × the Gaussian 1/e velocity half-width).",
+  );
+  notes.push(`Integration: Dormand–Prince 5(4), ${run.steps} steps, ${run.rejected} rejected, ${run.evaluations} evaluations, stop: ${run.reason}.`);
+
+  events.sort((a, b) => a.s - b.s);
+  return {
+    method: "integral",
+    source: INTEGRAL_SOURCE,
+    maxRiseHeight: maxRise ? maxRise.edge : null,
+    maxRiseDistance: maxRise ? planDistance(maxRise.y) : null,
+    returnDistance: returnHit ? planDistance(returnHit) : null,
+    impactDistance: impactHit ? planDistance(impactHit) : null,
+    impactDilution,
+    nearFieldDistance: null,
+    nearFieldDilution: null,
+    maxRiseDilution: maxRise ? centrelineDilution(maxRise.y[IQ], q0) : null,
+    dilutionRange: impactDilution !== null ? [impactDilution, impactDilution / DILUTION_BIAS_FACTOR] : null,
+    entrainedFlow: impactHit ? impactHit[IQ] - q0 : null,
+    bias: INTEGRAL_BIAS,
+    warnings,
+    path: includePath ? path.decimate() : undefined,
+    events,
+    notes,
+  };
+}
