@@ -52,6 +52,10 @@ ol.refs li { margin-bottom: 1mm; break-inside: avoid; }
 .prov { color: var(--muted); font-style: italic; }
 pre.scenario { font-size: 7.4pt; white-space: pre-wrap; word-break: break-word; border: 0.6px solid var(--rule); padding: 2mm; background: #f8fafc; }
 .page-break { break-before: page; }
+#comparison-table { font-size: 7.8pt; table-layout: fixed; }
+#comparison-table th, #comparison-table td { white-space: normal; overflow-wrap: anywhere; padding: 0.8mm 1mm; }
+#comparison-table th:nth-child(2), #comparison-table td:nth-child(2) { width: 24%; }
+td.path { overflow-wrap: anywhere; }
 h2.variant-title { font-size: 16pt; border-bottom-width: 3px; }
 .variant section h2 { font-size: 12pt; }
 section { break-inside: auto; }
