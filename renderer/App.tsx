@@ -75,12 +75,18 @@ export function App() {
   const [recovery, setRecovery] = useState<host.AutosaveRecord | null>(null);
   const [notice, setNotice] = useState<string | null>(null);
   const [resetSignal, setResetSignal] = useState(0);
+  const [documentKey, setDocumentKey] = useState(0);
   const [dragging, setDragging] = useState(false);
   const [chart, setChart] = useState<"trajectory" | "dilution" | "increase">("trajectory");
   const engine = useEngine(doc.file);
   const docRef = useRef(doc);
   docRef.current = doc;
 
+  /** Replaces the document (open, new, demo) and gives the 3D view a fresh camera. */
+  const loadDocument = useCallback((next: DocumentState) => {
+    setDoc(next);
+    setDocumentKey((n) => n + 1);
+  }, []);
   const perform = useCallback(<I,>(action: Action<I>, input: I) => setDoc((state) => action.perform(state, input)), []);
   const issues = useMemo(() => issuesByPath(engine.issues), [engine.issues]);
   const editor: Editor = useMemo(() => ({ file: doc.file, unitSystem, issues, perform }), [doc.file, unitSystem, issues, perform]);
@@ -147,11 +153,11 @@ export function App() {
       flash(read.message);
       return;
     }
-    setDoc(documentFromFile(read.file, path));
+    loadDocument(documentFromFile(read.file, path));
     setShowStart(false);
     setTab("design");
     void host.recentFiles().then(setRecent).catch(() => {});
-  }, [flash]);
+  }, [flash, loadDocument]);
 
   const saveAs = useCallback(async (forceDialog: boolean): Promise<boolean> => {
     const current = docRef.current;
@@ -171,7 +177,7 @@ export function App() {
 
   const commands = useMemo(() => ({
     newScenario: () => guardUnsaved("Start a new scenario", () => {
-      setDoc(documentFromFile(blankScenario(), null));
+      loadDocument(documentFromFile(blankScenario(), null));
       setShowStart(false);
     }),
     open: () => guardUnsaved("Open another scenario", () => {
@@ -181,7 +187,7 @@ export function App() {
       void host.openRecent(path).then((opened) => (opened ? loadText(opened.text, opened.path) : flash(`${path} is no longer available`))).catch((e: unknown) => flash(String(e)));
     }),
     openDemo: (demo: DemoScenario) => guardUnsaved("Open a demo scenario", () => {
-      setDoc(documentFromFile(demo.file, null));
+      loadDocument(documentFromFile(demo.file, null));
       setShowStart(false);
       setTab("design");
     }),
@@ -196,7 +202,7 @@ export function App() {
       void exportSeriesCsv(engine.result, docRef.current.file, unitSystem).then(flash, (e: unknown) => flash(String(e)));
     },
     print: () => void host.printPdf(suggestedFileName(docRef.current.file, "pdf")).catch((e: unknown) => flash(String(e))),
-  }), [guardUnsaved, loadText, saveAs, flash, engine.result, unitSystem]);
+  }), [guardUnsaved, loadText, loadDocument, saveAs, flash, engine.result, unitSystem]);
 
   // Keyboard shortcuts and host menu commands.
   useEffect(() => {
@@ -322,7 +328,7 @@ export function App() {
             <section className="centre" aria-label="Views">
               <div className="view3d-panel">
                 {result && scenario ? (
-                  <PlumeView scenario={scenario} result={result} unitSystem={unitSystem} resetSignal={resetSignal} />
+                  <PlumeView scenario={scenario} result={result} unitSystem={unitSystem} resetSignal={resetSignal} documentKey={documentKey} />
                 ) : (
                   <div className="placeholder">{engine.error ? "No results: fix the inputs marked in red." : "Calculating…"}</div>
                 )}

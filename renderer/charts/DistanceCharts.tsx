@@ -10,7 +10,7 @@ import { formatNumber, siToDisplay, type UnitSystem } from "../../core/units";
 import { useSize } from "../ui/useSize";
 import { distanceSeries, impactDilutionMarkers, salinityIncreaseLimit, type DistanceSeriesPoint } from "./chartData";
 
-const MARGIN = { top: 14, right: 14, bottom: 34, left: 52 };
+const MARGIN = { top: 26, right: 14, bottom: 34, left: 52 };
 
 interface Props {
   readonly result: BrinefieldResult;

@@ -7,7 +7,7 @@ import { useSize } from "../ui/useSize";
 import { riseMarkers, trajectorySeries } from "./chartData";
 import { dilutionColour, dilutionDomain, rgbToHex } from "../view3d/colourScale";
 
-const MARGIN = { top: 14, right: 14, bottom: 34, left: 46 };
+const MARGIN = { top: 26, right: 14, bottom: 34, left: 46 };
 
 export function TrajectoryChart({ result, scenario, unitSystem }: { result: BrinefieldResult; scenario: Scenario; unitSystem: UnitSystem }) {
   const [ref, size] = useSize<HTMLDivElement>();

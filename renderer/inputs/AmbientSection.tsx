@@ -48,8 +48,8 @@ export function AmbientSection() {
         ) : null}
         <QuantityField path="ambient.currentSpeed" label="Current speed" kind="speed" hint="depth-averaged; 0 = still water" />
         <QuantityField path="ambient.currentDirection" label="Current toward" kind="angle" hint="clockwise from north" />
-        <QuantityField path="ambient.bedSlope" label="Bed slope" kind="ratio" hint="rise/run, e.g. 0.02" />
-        <QuantityField path="ambient.bedSlopeAzimuth" label="Bed slopes down toward" kind="angle" hint="clockwise from north" />
+        <QuantityField path="ambient.bedSlope" label="Bed slope" kind="ratio" hint="rise/run, e.g. 0.02" placeholder="0 (flat)" />
+        <QuantityField path="ambient.bedSlopeAzimuth" label="Bed slopes down toward" kind="angle" hint="clockwise from north" placeholder="0" />
       </div>
       {isProfile ? (
         <div className="sub-table">

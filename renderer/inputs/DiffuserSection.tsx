@@ -59,32 +59,30 @@ export function DiffuserSection() {
       <header>
         <h2 id="sec-diffuser">Diffuser</h2>
       </header>
-      <div className="diffuser-body">
-        <div className="field-grid">
-          <ChoiceField path="diffuser.layout" label="Layout" options={LAYOUTS} fallback="single" onChoose={(value) => editor.perform(setLayout, { layout: value })} />
-          {layout === "line" ? <CountField path="diffuser.portCount" label="Number of ports" /> : null}
-          <QuantityField path="diffuser.portDiameter" label="Port diameter" kind="smallLength" />
-          <QuantityField path="diffuser.portAngle" label="Port angle" kind="angle" hint="above horizontal, 0–90" />
-          <QuantityField path="diffuser.portHeight" label="Port height" kind="length" hint="above seabed" />
-          {layout !== "rosette" ? <QuantityField path="diffuser.portAzimuth" label="Port azimuth" kind="angle" hint="clockwise from north" /> : null}
-          {layout === "line" ? <QuantityField path="diffuser.portSpacing" label="Port spacing" kind="length" /> : null}
-          {layout !== "single" ? <QuantityField path="diffuser.diffuserAzimuth" label="Diffuser axis" kind="angle" hint="clockwise from north" /> : null}
-          {layout === "rosette" ? (
-            <>
-              <CountField path="diffuser.risers.count" label="Risers" />
-              <CountField path="diffuser.risers.portsPerRiser" label="Ports per riser" />
-              <QuantityField path="diffuser.risers.spacing" label="Riser spacing" kind="length" />
-            </>
-          ) : null}
-          <QuantityField path="diffuser.dischargeCoefficient" label="Discharge coefficient" kind="ratio" placeholder="optional" hint="for head loss" />
-          <QuantityField path="diffuser.contraction" label="Contraction coefficient" kind="ratio" placeholder="1 (none)" />
-        </div>
-        <DiffuserSketch
-          diffuser={diffuser}
-          currentDirection={siNumber(getAtPath(editor.file, "ambient.currentDirection"), "angle", 0)}
-          currentSpeed={siNumber(getAtPath(editor.file, "ambient.currentSpeed"), "speed", 0)}
-          unitSystem={editor.unitSystem}
-        />
+      <DiffuserSketch
+        diffuser={diffuser}
+        currentDirection={siNumber(getAtPath(editor.file, "ambient.currentDirection"), "angle", 0)}
+        currentSpeed={siNumber(getAtPath(editor.file, "ambient.currentSpeed"), "speed", 0)}
+        unitSystem={editor.unitSystem}
+      />
+      <div className="field-grid">
+        <ChoiceField path="diffuser.layout" label="Layout" options={LAYOUTS} fallback="single" onChoose={(value) => editor.perform(setLayout, { layout: value })} />
+        {layout === "line" ? <CountField path="diffuser.portCount" label="Number of ports" /> : null}
+        <QuantityField path="diffuser.portDiameter" label="Port diameter" kind="smallLength" />
+        <QuantityField path="diffuser.portAngle" label="Port angle" kind="angle" hint="above horizontal, 0–90" />
+        <QuantityField path="diffuser.portHeight" label="Port height" kind="length" hint="above seabed" />
+        {layout !== "rosette" ? <QuantityField path="diffuser.portAzimuth" label="Port azimuth" kind="angle" hint="clockwise from north" /> : null}
+        {layout === "line" ? <QuantityField path="diffuser.portSpacing" label="Port spacing" kind="length" /> : null}
+        {layout !== "single" ? <QuantityField path="diffuser.diffuserAzimuth" label="Diffuser axis" kind="angle" hint="clockwise from north" /> : null}
+        {layout === "rosette" ? (
+          <>
+            <CountField path="diffuser.risers.count" label="Risers" />
+            <CountField path="diffuser.risers.portsPerRiser" label="Ports per riser" />
+            <QuantityField path="diffuser.risers.spacing" label="Riser spacing" kind="length" />
+          </>
+        ) : null}
+        <QuantityField path="diffuser.dischargeCoefficient" label="Discharge coefficient" kind="ratio" placeholder="optional" hint="for head loss" />
+        <QuantityField path="diffuser.contraction" label="Contraction coefficient" kind="ratio" placeholder="1 (none)" />
       </div>
       {layout === "rosette" && Array.isArray(azimuths) ? (
         <div className="sub-table">

@@ -7,7 +7,7 @@ import type { QuantityKind } from "../../core/units";
 import { setField } from "../state/actions";
 import { getAtPath } from "../state/scenarioState";
 import { issuesUnder, useEditor } from "./EditorContext";
-import { displayText, displayUnit, storedValueFromText } from "./quantityText";
+import { displayText, displayUnit, enteredNote, storedValueFromText } from "./quantityText";
 
 function FieldShell(props: { id: string; label: ReactNode; errors: readonly string[]; hint?: string; children: ReactNode; wide?: boolean }) {
   const errorId = `${props.id}-error`;
@@ -43,9 +43,9 @@ export function QuantityField({ path, label, kind, hint, placeholder }: Quantity
   const unit = displayUnit(kind, editor.unitSystem);
   const errors = issuesUnder(editor.issues, path, true);
   const shown = editing ?? displayText(raw, kind, editor.unitSystem);
-  const typedUnit = typeof raw === "string" && /[a-zA-Z°‰%]/.test(raw) && editing === null;
+  const note = editing === null ? enteredNote(raw, kind, editor.unitSystem) : null;
   return (
-    <FieldShell id={id} label={label} errors={errors} hint={typedUnit ? `as entered: ${raw}` : hint}>
+    <FieldShell id={id} label={label} errors={errors} hint={note ? `entered as ${note}` : hint}>
       <div className="quantity-input">
         <input
           id={id}
@@ -58,7 +58,7 @@ export function QuantityField({ path, label, kind, hint, placeholder }: Quantity
           placeholder={placeholder}
           aria-invalid={errors.length > 0}
           aria-describedby={errors.length ? `${id}-error` : undefined}
-          onFocus={() => setEditing(displayText(raw, kind, editor.unitSystem))}
+          onFocus={() => setEditing(displayText(raw, kind, editor.unitSystem, 9))}
           onBlur={() => setEditing(null)}
           onChange={(event) => {
             setEditing(event.target.value);

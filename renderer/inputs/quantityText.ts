@@ -27,11 +27,11 @@ export function displayValue(raw: unknown, kind: QuantityKind, system: UnitSyste
 }
 
 /** Text a field shows for a stored value when the user is not editing it. */
-export function displayText(raw: unknown, kind: QuantityKind, system: UnitSystem): string {
+export function displayText(raw: unknown, kind: QuantityKind, system: UnitSystem, significant = 4): string {
   if (raw === undefined || raw === null) return "";
   const value = displayValue(raw, kind, system);
   if (value === null) return typeof raw === "string" ? raw : JSON.stringify(raw);
-  return formatNumber(value, 5);
+  return formatNumber(value, significant);
 }
 
 /**
@@ -47,6 +47,19 @@ export function storedValueFromText(text: string, kind: QuantityKind, system: Un
   const unit = displayUnitName(kind, system);
   if (unit === QUANTITY_KINDS[kind].si || unit === "") return plain;
   return `${trimmed} ${unit}`;
+}
+
+/**
+ * The stored text when it says something the field does not (a unit other than the one shown, e.g.
+ * "8 in" shown as 0.2032 m); null when the field already shows the same number.
+ */
+export function enteredNote(raw: unknown, kind: QuantityKind, system: UnitSystem): string | null {
+  if (typeof raw !== "string") return null;
+  const shown = displayValue(raw, kind, system);
+  if (shown === null) return null;
+  const m = /^\s*([-+]?(?:\d+\.?\d*|\.\d+)(?:e[-+]?\d+)?)/i.exec(raw);
+  if (m && Math.abs(Number(m[1]) - shown) <= 1e-9 * Math.max(1, Math.abs(shown))) return null;
+  return raw.trim();
 }
 
 /** SI value of a display number (for sketches and tables that work in SI). */

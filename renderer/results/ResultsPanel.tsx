@@ -131,7 +131,10 @@ export function ResultsPanel({ result, unitSystem: s }: { result: BrinefieldResu
           <tbody>
             {result.compliance.constituents.map((c) => (
               <tr key={c.constituent} className={c.pass ? "pass" : "fail"}>
-                <th scope="row" title={c.limit}>{c.limit || c.constituent}</th>
+                <th scope="row" title={c.limit}>
+                  <b>{c.constituent}</b>
+                  <span className="limit-text">{c.limit}</span>
+                </th>
                 <td><D value={c.requiredDilution} /></td>
                 <td><D value={c.edgeDilution} /></td>
                 <td>{formatNumber(c.margin, 3)}</td>

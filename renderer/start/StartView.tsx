@@ -1,4 +1,5 @@
 /** Start view: demo scenarios, recent files, a new blank scenario, open from disk. */
+import { useEffect } from "react";
 import type { DemoScenario } from "../demos";
 
 export interface StartViewProps {
@@ -16,6 +17,14 @@ function baseName(path: string): string {
 }
 
 export function StartView(props: StartViewProps) {
+  const { onClose } = props;
+  useEffect(() => {
+    const onKey = (e: KeyboardEvent) => {
+      if (e.key === "Escape") onClose();
+    };
+    window.addEventListener("keydown", onKey);
+    return () => window.removeEventListener("keydown", onKey);
+  }, [onClose]);
   return (
     <div className="start-view" role="dialog" aria-modal="true" aria-labelledby="start-title" data-role="start-view">
       <div className="start-card">

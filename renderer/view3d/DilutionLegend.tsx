@@ -16,6 +16,7 @@ export function DilutionLegend({ domain, notes }: { domain: DilutionDomain; note
         ))}
       </div>
       <div className="legend-key">
+        <span><i className="key-swatch layer" /> spreading layer (top)</span>
         <span><i className="key-line mz" /> mixing-zone edge</span>
         <span><i className="key-line exceed" /> limit exceeded within</span>
         <span><i className="key-line current" /> current</span>

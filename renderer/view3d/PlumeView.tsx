@@ -21,8 +21,10 @@ export interface PlumeViewProps {
   /** Called once after the first frame with content has been drawn. */
   readonly onFirstFrame?: () => void;
   readonly compact?: boolean;
-  /** Bumping this number resets the camera (menu command). */
+  /** Bumping this number resets the camera now (menu command). */
   readonly resetSignal?: number;
+  /** Changes when another document is loaded: the camera is placed afresh on its first result. */
+  readonly documentKey?: number;
 }
 
 interface Stage {
@@ -40,14 +42,19 @@ function placeCamera(stage: Stage, preset: ViewPreset): void {
   const { centre, radius } = content.focus;
   const heading = azimuthToEastNorth(content.heading);
   const fovFactor = 1 / Math.tan(((stage.camera.fov / 2) * Math.PI) / 180);
-  const distance = radius * fovFactor * 1.25;
+  const distance = radius * fovFactor * 1.5;
   const target = centre.clone();
   let offset: Vector3;
   switch (preset) {
-    case "side":
-      // Looking across the jet (perpendicular to its heading), horizontally.
-      offset = new Vector3(-heading.north, 0, -heading.east).multiplyScalar(distance);
+    case "side": {
+      // Looking across the jet (perpendicular to its heading), horizontally, at the nearest port's jet.
+      const across = new Vector3(-heading.north, 0, -heading.east);
+      const jets = content.jets;
+      const nearest = jets.centres.reduce((best, c) => (c.dot(across) > best.dot(across) ? c : best), jets.centres[0] ?? centre);
+      target.copy(nearest);
+      offset = across.multiplyScalar(jets.radius * fovFactor * 1.35);
       break;
+    }
     case "plan":
       offset = new Vector3(0, distance * 1.1, 0.0001);
       break;
@@ -59,7 +66,7 @@ function placeCamera(stage: Stage, preset: ViewPreset): void {
     }
     default:
       // Oblique from behind-left of the jet and above.
-      offset = new Vector3(-heading.east * 0.55 - heading.north * 0.75, 0.45, heading.north * 0.55 - heading.east * 0.75)
+      offset = new Vector3(-heading.east * 0.45 - heading.north * 0.8, 0.75, heading.north * 0.45 - heading.east * 0.8)
         .normalize()
         .multiplyScalar(distance);
   }
@@ -73,11 +80,12 @@ function placeCamera(stage: Stage, preset: ViewPreset): void {
 }
 
 export function PlumeView(props: PlumeViewProps) {
-  const { scenario, result, unitSystem, onFirstFrame, compact, resetSignal } = props;
+  const { scenario, result, unitSystem, onFirstFrame, compact, resetSignal, documentKey } = props;
   const hostRef = useRef<HTMLDivElement | null>(null);
   const stageRef = useRef<Stage | null>(null);
   const firstFrameSent = useRef(false);
   const presetRef = useRef<ViewPreset>("perspective");
+  const placedForDocument = useRef<number | undefined>(documentKey);
   const [failure, setFailure] = useState<string | null>(null);
   const [legend, setLegend] = useState<{ domain: PlumeSceneOutput["domain"]; notes: readonly string[] } | null>(null);
 
@@ -165,9 +173,16 @@ export function PlumeView(props: PlumeViewProps) {
     }
     stage.scene.add(content.group);
     stage.content = content;
-    if (!previous) placeCamera(stage, presetRef.current);
+    // A new document (or a very different scale) gets a fresh camera; edits keep the user's view.
+    const rescaled = previous !== null && (content.extent > previous.extent * 1.6 || content.extent < previous.extent / 1.6);
+    const newDocument = placedForDocument.current !== documentKey;
+    if (newDocument) presetRef.current = "perspective";
+    if (!previous || rescaled || newDocument) placeCamera(stage, presetRef.current);
+    placedForDocument.current = documentKey;
     setLegend({ domain: content.domain, notes: content.notes });
     render();
+    // documentKey is read through placedForDocument; a new key alone (old result) must not re-place.
+    // eslint-disable-next-line react-hooks/exhaustive-deps
   }, [scenario, result, unitSystem, render]);
 
   const choose = useCallback(
@@ -184,6 +199,22 @@ export function PlumeView(props: PlumeViewProps) {
   useEffect(() => {
     if (resetSignal) choose("perspective");
   }, [resetSignal, choose]);
+
+  // Keyboard: R resets, S side, P plan, M mixing zone, while the canvas has focus.
+  useEffect(() => {
+    const canvas = stageRef.current?.renderer.domElement;
+    if (!canvas) return;
+    const onKey = (e: KeyboardEvent) => {
+      if (e.ctrlKey || e.metaKey || e.altKey) return;
+      const preset = ({ r: "perspective", s: "side", p: "plan", m: "overview" } as const)[e.key.toLowerCase() as "r" | "s" | "p" | "m"];
+      if (preset) {
+        e.preventDefault();
+        choose(preset);
+      }
+    };
+    canvas.addEventListener("keydown", onKey);
+    return () => canvas.removeEventListener("keydown", onKey);
+  }, [choose]);
 
   return (
     <div className={compact ? "plume-view compact" : "plume-view"}>

@@ -199,22 +199,28 @@ export interface AnnulusInput {
   readonly heights: readonly number[];
   readonly colours: readonly Rgb[];
   readonly bed: BedSpec;
-  readonly angularSegments?: number;
+  /** Length (m) and azimuth (degrees) of the diffuser the distances are measured from (0 = a point). */
+  readonly diffuserLength?: number;
+  readonly diffuserAzimuth?: number;
+  readonly pointsPerHalf?: number;
 }
 
-/** A sheet over the seabed between the first and last distance (the top of the spreading layer). */
+/**
+ * A sheet over the seabed between the first and last distance (the top of the spreading layer). Each ring
+ * is the outline at that distance from the diffuser: a circle for a point source, a stadium for a line.
+ */
 export function annulusGeometry(input: AnnulusInput): BufferGeometry {
-  const segments = Math.max(8, Math.floor(input.angularSegments ?? 72));
+  const half = Math.max(4, Math.floor(input.pointsPerHalf ?? 36));
   const geometry = new BufferGeometry();
   const n = input.distances.length;
   if (n < 2) return geometry;
+  const rings = input.distances.map((d) => offsetOutline(d, input.diffuserLength ?? 0, input.diffuserAzimuth ?? 0, half));
+  const segments = rings[0].length - 1;
   const positions = new Float32Array(n * (segments + 1) * 3);
   const colours = new Float32Array(n * (segments + 1) * 3);
   for (let i = 0; i < n; i++) {
     for (let j = 0; j <= segments; j++) {
-      const a = (j / segments) * Math.PI * 2;
-      const east = input.distances[i] * Math.sin(a);
-      const north = input.distances[i] * Math.cos(a);
+      const { east, north } = rings[i][j];
       const z = seabedHeight(east, north, input.bed.depth, input.bed.slope, input.bed.slopeAzimuth) + input.heights[i];
       const p = worldToScene({ x: east, y: north, z });
       const k = (i * (segments + 1) + j) * 3;

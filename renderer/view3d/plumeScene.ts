@@ -59,6 +59,8 @@ export interface PlumeSceneOutput {
   readonly domain: DilutionDomain;
   /** Centre and size of the jets, for framing the camera (scene coordinates, m). */
   readonly focus: { readonly centre: Vector3; readonly radius: number };
+  /** Middle of each port's jet and the size of one jet (for close views of a single jet). */
+  readonly jets: { readonly centres: readonly Vector3[]; readonly radius: number };
   /** Half-size of the seabed patch, m. */
   readonly extent: number;
   /** Plan heading of the representative jet, degrees clockwise from north. */
@@ -88,11 +90,15 @@ export function niceStep(span: number, count: number): number {
   return 10 * base;
 }
 
-function textSprite(text: string, heightWorld: number, colour = "#1d2733"): Sprite {
+/** Label height as a fraction of the distance to the camera: labels keep one screen size at any zoom. */
+const LABEL_SCREEN_HEIGHT = 0.026;
+
+function textSprite(text: string, scale = 1, colour = "#1d2733"): Sprite {
+  const heightWorld = LABEL_SCREEN_HEIGHT * scale;
   const fontPx = 48;
   const canvas = document.createElement("canvas");
   const ctx = canvas.getContext("2d");
-  const font = `600 ${fontPx}px system-ui, -apple-system, "Segoe UI", sans-serif`;
+  const font = `600 ${fontPx}px "Segoe UI", "DejaVu Sans", "Noto Sans", Arial, sans-serif`;
   let width = 256;
   if (ctx) {
     ctx.font = font;
@@ -110,7 +116,7 @@ function textSprite(text: string, heightWorld: number, colour = "#1d2733"): Spri
   }
   const texture = new CanvasTexture(canvas);
   texture.colorSpace = SRGBColorSpace;
-  const material = new SpriteMaterial({ map: texture, depthTest: false, transparent: true });
+  const material = new SpriteMaterial({ map: texture, depthTest: false, transparent: true, sizeAttenuation: false });
   const sprite = new Sprite(material);
   sprite.scale.set((heightWorld * canvas.width) / canvas.height, heightWorld, 1);
   sprite.renderOrder = 10;
@@ -173,7 +179,7 @@ export function buildPlumeScene(input: PlumeSceneInput): PlumeSceneOutput {
 
   const reach = path.reduce((m, p) => Math.max(m, Math.hypot(p.x, p.y)), 0);
   const diffuserHalf = diffuser.length / 2;
-  const extent = Math.max(mzRadius * 1.15, reach * 1.6 + diffuserHalf, depth * 1.5, 10);
+  const extent = Math.max(mzRadius * 1.12 + (ports.length > 1 ? diffuserHalf : 0), reach * 1.6 + diffuserHalf, depth * 1.5, 10);
 
   // Seabed and grid.
   const seabed = new Mesh(
@@ -191,12 +197,14 @@ export function buildPlumeScene(input: PlumeSceneInput): PlumeSceneOutput {
   const grid = new LineSegments(gridGeometry, track(new LineBasicMaterial({ color: COLOURS.grid, transparent: true, opacity: 0.55 })));
   grid.name = "distance-grid";
   group.add(grid);
-  const labelHeight = extent * 0.035;
+  const labelHeight = extent * 0.02; // world-space lift of labels above what they mark
   const unitLabel = siToDisplay(1, "length", unitSystem).unit;
-  for (let k = 1; k * step <= extent * 0.999; k++) {
+  const labelCount = Math.floor((extent * 0.999) / step);
+  for (let k = -labelCount; k <= labelCount; k++) {
+    if (k === 0) continue;
     const east = k * step;
-    const north = -extent;
-    const label = textSprite(`${formatNumber(k * stepDisplay)} ${unitLabel}`, labelHeight, "#4a4236");
+    const north = -step;
+    const label = textSprite(`${formatNumber(Math.abs(k) * stepDisplay)} ${unitLabel}`, 0.85, "#4a4236");
     label.position.copy(worldToScene({ x: east, y: north, z: seabedHeight(east, north, bed.depth, bed.slope, bed.slopeAzimuth) + labelHeight }));
     track(label.material);
     track(label.material.map!);
@@ -304,9 +312,11 @@ export function buildPlumeScene(input: PlumeSceneInput): PlumeSceneOutput {
           heights: layer.map((p) => Math.max(p.h, lift * 4)),
           colours: layer.map((p) => colourOf(p.s)),
           bed,
+          diffuserLength: ports.length > 1 ? diffuser.length : 0,
+          diffuserAzimuth: diffuser.diffuserAzimuth,
         }),
       ),
-      track(new MeshLambertMaterial({ vertexColors: true, transparent: true, opacity: 0.55, side: DoubleSide, depthWrite: false })),
+      track(new MeshLambertMaterial({ vertexColors: true, transparent: true, opacity: 0.32, side: DoubleSide, depthWrite: false })),
     );
     sheet.name = "spreading-layer";
     group.add(sheet);
@@ -321,7 +331,7 @@ export function buildPlumeScene(input: PlumeSceneInput): PlumeSceneOutput {
   mzLine.name = "mixing-zone-edge";
   group.add(mzLine);
   const mzDisplay = siToDisplay(mzRadius, "length", unitSystem);
-  const mzLabel = textSprite(`mixing-zone edge ${formatNumber(mzDisplay.value, 3)} ${mzDisplay.unit}`, labelHeight, "#9a5410");
+  const mzLabel = textSprite(`mixing-zone edge ${formatNumber(mzDisplay.value, 3)} ${mzDisplay.unit}`, 1, "#9a5410");
   const mzLabelAt = azimuthToEastNorth(diffuser.diffuserAzimuth + 90);
   mzLabel.position.copy(worldToScene({ x: mzLabelAt.east * mzRadius, y: mzLabelAt.north * mzRadius, z: -depth + labelHeight * 1.5 }));
   track(mzLabel.material);
@@ -345,7 +355,7 @@ export function buildPlumeScene(input: PlumeSceneInput): PlumeSceneOutput {
     const arrow = new ArrowHelper(direction, from, arrowLength, COLOURS.current, arrowLength * 0.25, arrowLength * 0.12);
     arrow.name = "current-arrow";
     group.add(arrow);
-    const label = textSprite(`current ${formatNumber(currentText.value, 3)} ${currentText.unit}`, labelHeight, "#1f5f99");
+    const label = textSprite(`current ${formatNumber(currentText.value, 3)} ${currentText.unit}`, 1, "#1f5f99");
     label.position.copy(from).addScaledVector(direction, arrowLength * 0.5).add(new Vector3(0, labelHeight * 1.2, 0));
     track(label.material);
     track(label.material.map!);
@@ -357,7 +367,7 @@ export function buildPlumeScene(input: PlumeSceneInput): PlumeSceneOutput {
   const north = new ArrowHelper(new Vector3(0, 0, -1), northFrom, extent * 0.14, COLOURS.north, extent * 0.04, extent * 0.025);
   north.name = "north-arrow";
   group.add(north);
-  const nLabel = textSprite("N", labelHeight * 1.2, "#111");
+  const nLabel = textSprite("N", 1.2, "#111");
   nLabel.position.copy(northFrom).add(new Vector3(0, labelHeight, -extent * 0.17));
   track(nLabel.material);
   track(nLabel.material.map!);
@@ -375,11 +385,21 @@ export function buildPlumeScene(input: PlumeSceneInput): PlumeSceneOutput {
   }
   const centre = focusPoints.reduce((acc, p) => acc.add(p), new Vector3()).multiplyScalar(1 / Math.max(1, focusPoints.length));
   const radius = Math.max(depth * 0.6, ...focusPoints.map((p) => p.distanceTo(centre)), 2);
+  const jetCentres = ports.map((port) => {
+    const mid = path[Math.floor(path.length / 2)];
+    const last = path[path.length - 1];
+    if (!mid || !last) return worldToScene({ x: port.east, y: port.north, z: portZ });
+    const w = placePathPoint({ x: last.x / 2, y: last.y / 2, z: mid.z / 2 }, port, port.azimuth - computedAzimuth);
+    return worldToScene({ x: w.x, y: w.y, z: w.z + portZ });
+  });
+  const rise = path.reduce((m, p) => Math.max(m, p.z + p.halfWidth), 0);
+  const jetRadius = Math.max(reach * 0.6, rise * 0.8, depth * 0.5, 1);
 
   return {
     group,
     domain,
     focus: { centre, radius },
+    jets: { centres: jetCentres, radius: jetRadius },
     extent,
     heading: computedAzimuth,
     depth,
