@@ -12,9 +12,12 @@ import { fileURLToPath, pathToFileURL } from "node:url";
 
 export const ROOT = resolve(dirname(fileURLToPath(import.meta.url)), "..");
 
-/** Build all three bundles into `<root>/dist/electron`. Throws when esbuild reports errors. */
-export async function buildElectron({ root = ROOT, minify = false } = {}) {
-  const outDir = join(root, "dist", "electron");
+/** Build all three bundles into `outDir` (default `<root>/dist/electron`). Throws on esbuild errors. */
+export async function buildElectron({
+  root = ROOT,
+  outDir = join(root, "dist", "electron"),
+  minify = false,
+} = {}) {
   const common = {
     bundle: true,
     platform: "node",

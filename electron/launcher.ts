@@ -100,16 +100,15 @@ export function decideLaunch(inputs: LaunchInputs): LaunchPlan {
   }
   const hasDisplay =
     inputs.platform !== "linux" || Boolean(inputs.env.DISPLAY) || Boolean(inputs.env.WAYLAND_DISPLAY);
-  if (!hasDisplay) {
-    return {
-      kind: "web",
-      reason: "there is no graphical display (DISPLAY and WAYLAND_DISPLAY are unset)",
-      hint: "Run `npm start` in a desktop session for the app window.",
-    };
-  }
+  const noDisplay: LaunchPlan = {
+    kind: "web",
+    reason: "there is no graphical display (DISPLAY and WAYLAND_DISPLAY are unset)",
+    hint: "Run `npm start` in a desktop session for the app window.",
+  };
   if (electron.binaryExists && electron.binaryPath !== null) {
-    return { kind: "electron", binary: electron.binaryPath };
+    return hasDisplay ? { kind: "electron", binary: electron.binaryPath } : noDisplay;
   }
+  // The binary is missing: explain that first, since a display alone would not help.
   if (!nodeAtLeast(inputs.nodeVersion, ELECTRON_MIN_NODE)) {
     return {
       kind: "web",
@@ -126,6 +125,8 @@ export function decideLaunch(inputs: LaunchInputs): LaunchPlan {
       hint: INTERNET_HINT,
     };
   }
+  // No point fetching a window toolkit for a session that cannot show a window.
+  if (!hasDisplay) return noDisplay;
   return { kind: "download", packageDir: electron.packageDir };
 }
 

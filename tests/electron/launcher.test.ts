@@ -81,6 +81,13 @@ describe("decideLaunch()", () => {
     ).toBe("web");
     const headless = decideLaunch(inputs({ env: {} }));
     expect(headless.kind === "web" && headless.reason, "no display").toMatch(/no graphical display/);
+    const headlessMissing = decideLaunch(inputs({ env: {}, electron: notDownloaded, nodeVersion: "24.0.0" }));
+    expect(headlessMissing.kind, "no download for a headless session").toBe("web");
+  });
+
+  it("explains the missing binary before the missing display", () => {
+    const plan = decideLaunch(inputs({ env: {}, electron: notDownloaded, nodeVersion: "20.20.2" }));
+    expect(plan.kind === "web" && plan.reason, "binary reason first").toMatch(/not downloaded yet/);
   });
 });
 
