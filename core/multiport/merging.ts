@@ -145,15 +145,25 @@ function scaleMethod(nf: NearFieldMethodResult, factor: number, note: string): N
   const path = nf.path;
   let iTop = 0;
   if (path) for (let i = 1; i < path.length; i++) if (path[i].z > path[iTop].z) iTop = i;
+  // Merging lowers dilution from the top of the jets on, but dilution never falls along the path: the
+  // reduced curve is held at the dilution reached where the jets merge until it climbs above it.
+  const atMerge = path && path.length ? path[iTop].dilution : 1;
+  let running = atMerge;
+  const scaledPath = path?.map((p, i) => {
+    if (i <= iTop) return p;
+    running = Math.max(running, p.dilution * factor);
+    return { ...p, dilution: running };
+  });
+  const impact = nf.impactDilution === null ? null : Math.max(atMerge, s(nf.impactDilution)!);
   return {
     ...nf,
-    impactDilution: s(nf.impactDilution),
+    impactDilution: impact,
     nearFieldDilution: s(nf.nearFieldDilution),
     dilutionRange: nf.dilutionRange
       ? [Math.max(1, nf.dilutionRange[0] * factor), Math.max(1, nf.dilutionRange[1] * factor)]
       : null,
     entrainedFlow: nf.entrainedFlow === null ? null : nf.entrainedFlow * factor,
-    path: path?.map((p, i) => (i > iTop ? { ...p, dilution: Math.max(1, p.dilution * factor) } : p)),
+    path: scaledPath,
     notes: [...(nf.notes ?? []), note],
   };
 }
