@@ -172,7 +172,8 @@ export function sideViewSvg(input: SideViewInput): string {
         parts.push(`<line x1="${n(x - 7)}" y1="${n(y)}" x2="${n(x + 7)}" y2="${n(y)}" stroke="${colour}" stroke-width="2"/>`);
       } else {
         // Location of the maximum not reported: the height is drawn as a level across the rising jet.
-        const xEnd = sx(keys.find((k) => k.kind === "return")?.x ?? keys[0]?.x ?? xMax / 2);
+        // Without a return point the level runs across the whole plot: it states a height, not a place.
+        const xEnd = sx(keys.find((k) => k.kind === "return")?.x ?? xMax);
         parts.push(`<line x1="${n(sx(0))}" y1="${n(y)}" x2="${n(xEnd)}" y2="${n(y)}" stroke="${colour}" stroke-width="1.2" stroke-dasharray="2 3"/>`);
       }
     }
