@@ -7,7 +7,7 @@
  * session or that are on the recent-files list. A renderer that asks for any other path gets an error
  * (open) or a Save dialog (save), so a compromised page cannot read or clobber arbitrary files.
  */
-import { dirname, extname, join, resolve } from "node:path";
+import { dirname, extname, isAbsolute, join, resolve } from "node:path";
 import type { FileFilter, HostRequest, HostResponse } from "./contract";
 import {
   MAX_SCENARIO_BYTES,
@@ -187,12 +187,16 @@ export function createHostHandlers(deps: HostHandlerDeps): HostHandlers {
         return response;
       }
       case "save-file": {
-        let target = request.path !== null && (await isGranted(request.path)) ? resolve(request.path) : null;
+        const known = request.path !== null && isAbsolute(request.path) && (await isGranted(request.path));
+        let target = known && request.path !== null ? resolve(request.path) : null;
         if (target === null) {
+          // Unknown or bare-name paths only suggest a name; the user picks the folder.
+          const bare = request.path !== null && !isAbsolute(request.path);
+          const name = bare && request.path !== null ? request.path : request.suggestedName;
           const filters = request.filters.length > 0 ? request.filters : SCENARIO_FILTERS;
           const chosen = await deps.showSaveDialog({
             title: "Save scenario",
-            defaultPath: join(startDir(), request.suggestedName),
+            defaultPath: join(startDir(), name),
             filters,
           });
           if (chosen === null) return { kind: "cancelled" };

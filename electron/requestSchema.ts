@@ -35,6 +35,12 @@ const fileName = z
   .refine((s) => !/[\\/]/.test(s), "file name must not contain a folder")
   .refine((s) => s !== "." && s !== "..", "file name must not be . or ..");
 
+/**
+ * Where to save: an absolute path, or just a file name (a file dropped on the window has no path);
+ * main shows a Save dialog for a bare name or any path the user has not chosen before.
+ */
+const savePath = z.union([absolutePath, fileName], { error: "path must be absolute or a bare file name" });
+
 function textUpTo(maxBytes: number, what: string) {
   // UTF-8 needs at least one byte per UTF-16 unit, so the cheap length check comes first and the byte
   // count only runs on strings that could fit.
@@ -59,7 +65,7 @@ export const hostRequestSchema = z.discriminatedUnion("kind", [
   z.strictObject({ kind: z.literal("open-path"), path: absolutePath }),
   z.strictObject({
     kind: z.literal("save-file"),
-    path: absolutePath.nullable(),
+    path: savePath.nullable(),
     text: textUpTo(MAX_SCENARIO_BYTES, "scenario"),
     suggestedName: fileName,
     filters,
@@ -103,7 +109,9 @@ export function parseHostRequest(payload: unknown): ParsedRequest {
   const issue = result.error.issues[0];
   const where = issue && issue.path.length > 0 ? `${issue.path.join(".")}: ` : "";
   let what = issue?.message ?? "invalid request";
-  if (issue?.code === "invalid_union" || (issue?.code === "invalid_value" && issue.path[0] === "kind")) {
+  const atKind = issue !== undefined && (issue.path.length === 0 || issue.path.join(".") === "kind");
+  const badKind = issue?.code === "invalid_union" && atKind;
+  if (badKind || (issue?.code === "invalid_value" && issue.path[0] === "kind")) {
     what = "unknown request kind";
   } else if (issue?.code === "unrecognized_keys") {
     what = `unexpected field(s) ${issue.keys.map((k) => JSON.stringify(k.slice(0, 40))).join(", ")}`;

@@ -19,7 +19,7 @@ afterAll(async () => {
 });
 
 describe("electron/build-main.mjs", () => {
-  it("bundles the preload into one file requiring only electron (a sandboxed preload cannot load more)", async () => {
+  it("bundles the preload into one file that requires only electron (sandbox rule)", async () => {
     const code = await readFile(join(outDir, "preload.cjs"), "utf8");
     expect(new Set(requires(code)), "only electron").toEqual(new Set(["electron"]));
     expect(code, "exposes the bridge").toContain('exposeInMainWorld("brinefieldHost"');

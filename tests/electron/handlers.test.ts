@@ -115,6 +115,10 @@ describe("parseHostRequest()", () => {
       [{ kind: "delete-everything" }, /unknown request kind/],
       [{ kind: "recent-files", path: "/etc/passwd" }, /unexpected field/],
       [{ kind: "open-path", path: "relative.json" }, /absolute/],
+      [
+        { kind: "save-file", path: "../up.json", text: "", suggestedName: "a", filters: [] },
+        /absolute or a bare/,
+      ],
       [{ kind: "open-path", path: 42 }, /path/],
       [{ kind: "open-path", path: `${join(dir, "a")}\0.json` }, /NUL/],
       [{ kind: "print-pdf", suggestedName: "../../evil" }, /folder/],
@@ -232,6 +236,23 @@ describe("createHostHandlers().handle()", () => {
     expect(h.saveDialogs.length, "no second dialog for a granted path").toBe(1);
     expect(await readFile(`${chosen}.json`, "utf8"), "new content").toBe('{"v":2}');
     expect(h.saveResults.map((r) => r.kind), "close guard told of both saves").toEqual(["saved", "saved"]);
+  });
+
+  it("asks where to save a dropped file that only has a name", async () => {
+    const h = harness();
+    h.saveAnswers.push(join(dir, "dropped.json"));
+    const response = await createHostHandlers(h.deps).handle(good, {
+      kind: "save-file",
+      path: "dropped.json",
+      text: "{}",
+      suggestedName: "Untitled.json",
+      filters: [],
+    });
+    const saved = { kind: "saved", path: join(dir, "dropped.json") };
+    expect(response, "saved where the user chose").toEqual(saved);
+    expect(h.saveDialogs[0].defaultPath, "dialog suggests the dropped name").toBe(
+      join(dir, "Documents", "dropped.json"),
+    );
   });
 
   it("asks with a dialog instead of overwriting a path the user never chose", async () => {
