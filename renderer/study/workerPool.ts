@@ -1,0 +1,93 @@
+/**
+ * A pool of Study Web Workers. Tasks go to free workers in order; replies come back by task index, so
+ * merged results do not depend on scheduling (Monte Carlo runs draw from per-run streams anyway).
+ * `cancel()` terminates the workers at once; the pool starts fresh ones for the next job.
+ */
+import type { StudyReply, StudyTask } from "./messages";
+
+export class StudyCancelled extends Error {
+  constructor() {
+    super("cancelled");
+    this.name = "StudyCancelled";
+  }
+}
+
+type Done = Exclude<StudyReply, { kind: "progress" } | { kind: "error" }>;
+
+export class StudyWorkerPool {
+  private workers: Worker[] = [];
+  private abort: ((e: Error) => void) | null = null;
+
+  constructor(readonly size: number) {}
+
+  private ensure(n: number): Worker[] {
+    while (this.workers.length < n) {
+      this.workers.push(new Worker(new URL("./studyWorker.ts", import.meta.url), { type: "module" }));
+    }
+    return this.workers.slice(0, n);
+  }
+
+  /** Runs tasks on up to `size` workers; `onProgress` gets the summed progress of every task. */
+  run(tasks: readonly StudyTask[], onProgress?: (done: number) => void, maxWorkers = this.size): Promise<Done[]> {
+    const workers = this.ensure(Math.max(1, Math.min(maxWorkers, this.size, tasks.length)));
+    return new Promise<Done[]>((resolve, reject) => {
+      const results: Done[] = new Array(tasks.length);
+      const progress = new Array<number>(tasks.length).fill(0);
+      let next = 0;
+      let finished = 0;
+      let settled = false;
+      const finish = (e?: Error) => {
+        if (settled) return;
+        settled = true;
+        this.abort = null;
+        for (const w of workers) w.onmessage = null;
+        if (e) reject(e);
+        else resolve(results);
+      };
+      this.abort = finish;
+      const feed = (w: Worker) => {
+        if (next < tasks.length) {
+          const id = next++;
+          w.postMessage({ ...tasks[id]!, id });
+        }
+      };
+      for (const w of workers) {
+        w.onmessage = (ev: MessageEvent<StudyReply>) => {
+          const m = ev.data;
+          if (m.kind === "progress") {
+            progress[m.id] = m.done;
+            onProgress?.(progress.reduce((a, b) => a + b, 0));
+            return;
+          }
+          if (m.kind === "error") {
+            finish(new Error(m.message));
+            return;
+          }
+          results[m.id] = m;
+          finished++;
+          if (finished === tasks.length) finish();
+          else feed(w);
+        };
+        w.onerror = (ev) => finish(new Error(ev.message || "study worker failed"));
+      }
+      if (tasks.length === 0) finish();
+      for (const w of workers) feed(w);
+    });
+  }
+
+  /** Stops all running work now. */
+  cancel(): void {
+    for (const w of this.workers) w.terminate();
+    this.workers = [];
+    this.abort?.(new StudyCancelled());
+  }
+
+  dispose(): void {
+    this.cancel();
+  }
+}
+
+export function defaultWorkerCount(): number {
+  const n = typeof navigator !== "undefined" ? navigator.hardwareConcurrency : 2;
+  return Math.max(1, Math.min(8, n || 2));
+}
