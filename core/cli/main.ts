@@ -5,7 +5,9 @@
 import { readFileSync, writeFileSync, renameSync, statSync, openSync, fsyncSync, closeSync } from "node:fs";
 import { resolve, dirname, basename, join } from "node:path";
 import { availableParallelism } from "node:os";
+import { isMainThread } from "node:worker_threads";
 import { COMMANDS } from "./commands/index";
+import { runWorkerThread } from "./workers/worker";
 import { CliError, type CliIO } from "./command";
 import { ScenarioError } from "../scenario/parse";
 import { BRINEFIELD_VERSION } from "../version";
@@ -106,3 +108,6 @@ async function dispatch(argv: readonly string[], io: CliIO): Promise<number> {
   }
   return cmd.run(rest, io);
 }
+
+// Worker threads of studies and Monte Carlo start on this same bundle (core/cli/workers/pool.ts).
+if (!isMainThread) runWorkerThread();

@@ -2,6 +2,12 @@
 import type { CliCommand } from "../command";
 import { command as run } from "./run";
 import { command as checkClaim } from "./check-claim";
+import { command as compare } from "./compare";
+import { command as sweep } from "./sweep";
+import { command as design } from "./design";
+import { command as uncertainty } from "./uncertainty";
+import { command as report } from "./report";
 import { command as schema } from "./schema";
+import { command as bench } from "./bench";
 
-export const COMMANDS: readonly CliCommand[] = [run, checkClaim, schema];
+export const COMMANDS: readonly CliCommand[] = [run, checkClaim, compare, sweep, design, uncertainty, report, schema, bench];
