@@ -27,6 +27,8 @@ export interface CloseGuard {
   /** Call from the window's "close" event: true lets it close, false means preventDefault(). */
   onCloseRequested(): boolean;
   onSaveResult(response: HostResponse): void;
+  /** Forget everything (a new window was opened, e.g. on macOS after the last one closed). */
+  reset(): void;
   readonly dirty: boolean;
 }
 
@@ -71,6 +73,13 @@ export function createCloseGuard(deps: CloseGuardDeps): CloseGuard {
           }
         });
       return false;
+    },
+    reset() {
+      dirty = false;
+      title = "";
+      prompting = false;
+      closeAfterSave = false;
+      closing = false;
     },
     onSaveResult(response) {
       if (!closeAfterSave) return;

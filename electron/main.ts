@@ -195,6 +195,7 @@ function createWindow(): void {
     webPreferences: secureWebPreferences(preloadPath, isDev),
   });
   mainWindow = win; // its webContents was hardened by the "web-contents-created" hook below
+  closeGuard.reset();
   win.on("page-title-updated", (event) => event.preventDefault());
   win.once("ready-to-show", () => win.show());
   win.on("close", (event) => {

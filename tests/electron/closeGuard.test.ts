@@ -63,6 +63,18 @@ describe("createCloseGuard()", () => {
     expect(calls.includes("close"), "never closed").toBe(false);
   });
 
+  it("reset() forgets a finished close, so a new window asks again", async () => {
+    const { guard, calls } = setup("discard");
+    guard.setDocumentState({ dirty: true, title: "A" });
+    guard.onCloseRequested();
+    await tick();
+    guard.reset();
+    guard.setDocumentState({ dirty: true, title: "B" });
+    expect(guard.onCloseRequested(), "new dirty window is held").toBe(false);
+    await tick();
+    expect(calls.filter((c) => c.startsWith("confirm")), "asked for both").toEqual(["confirm:A", "confirm:B"]);
+  });
+
   it("shows one dialog even if close is requested repeatedly", async () => {
     let release: (c: CloseChoice) => void = () => undefined;
     const { guard, calls } = setup(() => new Promise<CloseChoice>((r) => (release = r)));
