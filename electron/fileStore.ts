@@ -88,7 +88,8 @@ export async function writeFileAtomic(
   options: AtomicWriteOptions = {},
 ): Promise<void> {
   const platform = options.platform ?? process.platform;
-  const target = resolve(targetPath);
+  // Saving through a symlink updates the file it points to rather than replacing the link.
+  const target = await fsp.realpath(resolve(targetPath)).catch(() => resolve(targetPath));
   let mode = 0o644;
   try {
     mode = (await fsp.stat(target)).mode & 0o777;

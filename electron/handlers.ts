@@ -50,12 +50,16 @@ export function isTrustedSender(sender: IpcSender, trusted: TrustedRenderer): bo
     return false;
   }
   // Query and hash are the renderer's own state; scheme, host and path must match exactly.
-  return (
-    actual.protocol === "file:" &&
-    expected.protocol === "file:" &&
-    actual.host === expected.host &&
-    decodeURIComponent(actual.pathname) === decodeURIComponent(expected.pathname)
-  );
+  try {
+    return (
+      actual.protocol === "file:" &&
+      expected.protocol === "file:" &&
+      actual.host === expected.host &&
+      decodeURIComponent(actual.pathname) === decodeURIComponent(expected.pathname)
+    );
+  } catch {
+    return false; // malformed percent-escape
+  }
 }
 
 export interface SaveDialogOptions {

@@ -72,7 +72,8 @@ describe("createCloseGuard()", () => {
     guard.setDocumentState({ dirty: true, title: "B" });
     expect(guard.onCloseRequested(), "new dirty window is held").toBe(false);
     await tick();
-    expect(calls.filter((c) => c.startsWith("confirm")), "asked for both").toEqual(["confirm:A", "confirm:B"]);
+    const asked = calls.filter((c) => c.startsWith("confirm"));
+    expect(asked, "asked for both").toEqual(["confirm:A", "confirm:B"]);
   });
 
   it("shows one dialog even if close is requested repeatedly", async () => {

@@ -1,4 +1,4 @@
-import { chmod, mkdtemp, readFile, readdir, rm, stat, writeFile } from "node:fs/promises";
+import { chmod, lstat, mkdtemp, readFile, readdir, rm, stat, symlink, writeFile } from "node:fs/promises";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { afterEach, beforeEach, describe, expect, it } from "vitest";
@@ -70,6 +70,16 @@ describe("writeFileAtomic()", () => {
     await chmod(target, 0o600);
     await writeFileAtomic(target, "new");
     expect((await stat(target)).mode & 0o777, "mode preserved").toBe(0o600);
+  });
+
+  it.skipIf(process.platform === "win32")("writes through a symlink to the file it points to", async () => {
+    const real = join(dir, "real.json");
+    const link = join(dir, "link.json");
+    await writeFile(real, "old");
+    await symlink(real, link);
+    await writeFileAtomic(link, "new");
+    expect(await readFile(real, "utf8"), "target updated").toBe("new");
+    expect((await lstat(link)).isSymbolicLink(), "link kept").toBe(true);
   });
 
   it("fails with the fs error when the folder does not exist, without creating anything", async () => {

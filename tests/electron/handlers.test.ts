@@ -87,6 +87,8 @@ describe("isTrustedSender()", () => {
     const other = pathToFileURL(join(dir, "Downloads", "index.html")).href;
     expect(isTrustedSender({ ...good, frameUrl: other }, trusted()), "other file").toBe(false);
     expect(isTrustedSender({ ...good, frameUrl: "" }, trusted()), "destroyed frame").toBe(false);
+    const malformed = indexUrl.replace("index.html", "%E0%A4%A/index.html");
+    expect(isTrustedSender({ ...good, frameUrl: malformed }, trusted()), "bad escape, no throw").toBe(false);
     expect(isTrustedSender(good, { webContentsId: null, indexUrl }), "no window yet").toBe(false);
   });
 });
