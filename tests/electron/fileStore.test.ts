@@ -1,6 +1,8 @@
 import { chmod, lstat, mkdtemp, readFile, readdir, rm, stat, symlink, writeFile } from "node:fs/promises";
+import { spawnSync } from "node:child_process";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
+import { pathToFileURL } from "node:url";
 import { afterEach, beforeEach, describe, expect, it } from "vitest";
 import {
   MAX_RECENT_FILES,
@@ -52,6 +54,30 @@ describe("writeFileAtomic()", () => {
     expect(await readFile(target, "utf8"), "previous file untouched").toBe('{"version":"previous"}');
     expect(await readdir(dir), "the failed attempt cleans its temporary file").toEqual(["scenario.json"]);
   });
+
+  it.skipIf(process.platform === "win32")(
+    "keeps the previous file when the saving process is killed outright before the rename",
+    async () => {
+      const target = join(dir, "scenario.json");
+      await writeFile(target, '{"version":"previous"}');
+      const moduleUrl = pathToFileURL(join(process.cwd(), "electron", "fileStore.ts")).href;
+      const script = [
+        `import { writeFileAtomic } from ${JSON.stringify(moduleUrl)};`,
+        `await writeFileAtomic(${JSON.stringify(target)}, '{"version":"next"}', {`,
+        `  beforeRename: () => process.kill(process.pid, "SIGKILL"),`,
+        `});`,
+      ].join("\n");
+      const child = spawnSync(process.execPath, ["--import", "tsx", "--input-type=module", "-e", script], {
+        encoding: "utf8",
+        timeout: 20_000,
+      });
+      expect(child.signal, `child was killed (stderr: ${child.stderr})`).toBe("SIGKILL");
+      expect(await readFile(target, "utf8"), "previous file intact after the kill").toBe('{"version":"previous"}');
+      const leftovers = (await readdir(dir)).filter((f) => f.endsWith(".tmp"));
+      expect(leftovers.length, "the killed save left its complete temporary file, nothing else").toBe(1);
+      expect(await readFile(join(dir, leftovers[0]), "utf8"), "temp file complete").toBe('{"version":"next"}');
+    },
+  );
 
   it("writes the temporary file next to the target (a rename across disks is not atomic)", async () => {
     const target = join(dir, "sub-target.json");
