@@ -72,10 +72,12 @@ describe("writeFileAtomic()", () => {
         timeout: 20_000,
       });
       expect(child.signal, `child was killed (stderr: ${child.stderr})`).toBe("SIGKILL");
-      expect(await readFile(target, "utf8"), "previous file intact after the kill").toBe('{"version":"previous"}');
+      const after = await readFile(target, "utf8");
+      expect(after, "previous file intact after the kill").toBe('{"version":"previous"}');
       const leftovers = (await readdir(dir)).filter((f) => f.endsWith(".tmp"));
       expect(leftovers.length, "the killed save left its complete temporary file, nothing else").toBe(1);
-      expect(await readFile(join(dir, leftovers[0]), "utf8"), "temp file complete").toBe('{"version":"next"}');
+      const temp = await readFile(join(dir, leftovers[0]), "utf8");
+      expect(temp, "temp file complete").toBe('{"version":"next"}');
     },
   );
 
