@@ -6,15 +6,27 @@ import { parseScenario } from "../../core/scenario/parse";
 import { runScenario } from "../../core/pipeline";
 import type { EngineIssue, EngineResponse } from "./messages";
 
+/** Core's messages may already start with their path; fields show the message without it. */
+export function withoutPathPrefix(path: string, message: string): string {
+  return path !== "" && message.startsWith(`${path}: `) ? message.slice(path.length + 2) : message;
+}
+
+function summary(issues: readonly EngineIssue[]): string {
+  return issues.map((i) => `${i.path || "scenario"}: ${i.message}`).join("; ");
+}
+
 function issuesOf(error: unknown): EngineIssue[] | null {
   if (typeof error !== "object" || error === null || !("issues" in error)) return null;
   const issues = (error as { issues: unknown }).issues;
   if (!Array.isArray(issues)) return null;
-  return issues.map((issue: { path?: unknown; message?: unknown; value?: unknown }) => ({
-    path: typeof issue.path === "string" ? issue.path : "",
-    message: typeof issue.message === "string" ? issue.message : String(issue.message),
-    ...(issue.value === undefined ? {} : { value: cloneable(issue.value) }),
-  }));
+  return issues.map((issue: { path?: unknown; message?: unknown; value?: unknown }) => {
+    const path = typeof issue.path === "string" ? issue.path : "";
+    return {
+      path,
+      message: withoutPathPrefix(path, typeof issue.message === "string" ? issue.message : String(issue.message)),
+      ...(issue.value === undefined ? {} : { value: cloneable(issue.value) }),
+    };
+  });
 }
 
 /** Issue values go through postMessage; keep only plain data. */
@@ -31,14 +43,18 @@ export function runFile(id: number, file: unknown): EngineResponse {
   try {
     const parsed = parseScenario(file);
     if (!parsed.ok) {
-      const issues = parsed.issues.map((i) => ({ path: i.path, message: i.message, ...(i.value === undefined ? {} : { value: cloneable(i.value) }) }));
-      return { id, ok: false, issues, message: issues.map((i) => `${i.path || "scenario"}: ${i.message}`).join("; ") };
+      const issues = parsed.issues.map((i) => ({
+        path: i.path,
+        message: withoutPathPrefix(i.path, i.message),
+        ...(i.value === undefined ? {} : { value: cloneable(i.value) }),
+      }));
+      return { id, ok: false, issues, message: summary(issues) };
     }
     const result = runScenario(parsed.scenario, { includePath: true });
     return { id, ok: true, scenario: parsed.scenario, result, ms: performance.now() - started };
   } catch (error) {
     const issues = issuesOf(error) ?? [];
-    const message = error instanceof Error ? error.message : String(error);
+    const message = issues.length > 0 ? summary(issues) : error instanceof Error ? error.message : String(error);
     return { id, ok: false, issues, message };
   }
 }

@@ -1,0 +1,240 @@
+/**
+ * The app in a real browser (Debian chromium, software WebGL): the built renderer served from
+ * dist/renderer with the app's Content-Security-Policy, driven as a user would. Screenshots of the main
+ * screens go to test-artifacts/ for review.
+ */
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { chromium, type Browser, type Page } from "playwright-core";
+import { spawnSync } from "node:child_process";
+import { existsSync, mkdirSync, readFileSync, readdirSync, statSync } from "node:fs";
+import { dirname, join, resolve } from "node:path";
+import { fileURLToPath } from "node:url";
+import { serveDirectory, type StaticServer } from "../renderer/support/staticServer";
+import { CAUTION } from "../../core/result/contract";
+
+const root = resolve(dirname(fileURLToPath(import.meta.url)), "../..");
+const dist = join(root, "dist/renderer");
+const artifacts = join(root, "test-artifacts");
+
+function newestSource(dir: string): number {
+  let newest = 0;
+  for (const entry of readdirSync(dir, { withFileTypes: true })) {
+    const p = join(dir, entry.name);
+    if (entry.isDirectory()) newest = Math.max(newest, newestSource(p));
+    else newest = Math.max(newest, statSync(p).mtimeMs);
+  }
+  return newest;
+}
+
+/** Builds the renderer unless dist/renderer is newer than every renderer, core and demo source. */
+function ensureBuilt(): void {
+  const index = join(dist, "index.html");
+  const sources = Math.max(newestSource(join(root, "renderer")), newestSource(join(root, "core")), newestSource(join(root, "demo-scenarios")));
+  if (existsSync(index) && statSync(index).mtimeMs > sources) return;
+  const run = spawnSync(process.execPath, [join(root, "node_modules/vite/bin/vite.js"), "build", "--config", "renderer/vite.config.ts", "--logLevel", "error"], {
+    cwd: root,
+    encoding: "utf8",
+    timeout: 240_000,
+  });
+  if (run.status !== 0) throw new Error(`renderer build failed: ${run.stderr || run.stdout}`);
+}
+
+interface CanvasSample {
+  readonly width: number;
+  readonly height: number;
+  /** Share of pixels that differ clearly from the view's clear colour (#eef3f7, set in PlumeView.tsx). */
+  readonly contentFraction: number;
+  readonly distinctColours: number;
+  /** Coarse grid of grey levels, for comparing two frames. */
+  readonly grid: number[];
+}
+
+/** Reads the 3D canvas (its drawing buffer is preserved) through a 2D canvas. */
+async function sampleCanvas(page: Page): Promise<CanvasSample> {
+  return page.evaluate(() => {
+    const source = document.querySelector<HTMLCanvasElement>("canvas[data-role=plume-canvas]");
+    if (!source) throw new Error("no 3D canvas");
+    const w = 160;
+    const h = Math.max(1, Math.round((source.height / source.width) * w));
+    const copy = document.createElement("canvas");
+    copy.width = w;
+    copy.height = h;
+    const ctx = copy.getContext("2d", { willReadFrequently: true })!;
+    ctx.drawImage(source, 0, 0, w, h);
+    const data = ctx.getImageData(0, 0, w, h).data;
+    const counts = new Map<number, number>();
+    const grid: number[] = [];
+    for (let i = 0; i < data.length; i += 4) {
+      const key = ((data[i] >> 3) << 10) | ((data[i + 1] >> 3) << 5) | (data[i + 2] >> 3);
+      counts.set(key, (counts.get(key) ?? 0) + 1);
+      grid.push((data[i] + data[i + 1] + data[i + 2]) / 3);
+    }
+    const [br, bg, bb] = [0xee, 0xf3, 0xf7];
+    let content = 0;
+    for (let i = 0; i < data.length; i += 4) {
+      if (Math.abs(data[i] - br) + Math.abs(data[i + 1] - bg) + Math.abs(data[i + 2] - bb) > 40) content++;
+    }
+    return { width: source.width, height: source.height, contentFraction: content / (w * h), distinctColours: counts.size, grid };
+  });
+}
+
+function meanDifference(a: CanvasSample, b: CanvasSample): number {
+  const n = Math.min(a.grid.length, b.grid.length);
+  let sum = 0;
+  for (let i = 0; i < n; i++) sum += Math.abs(a.grid[i] - b.grid[i]);
+  return sum / n;
+}
+
+const cell = (page: Page, name: string) => page.locator(`[data-cell="${name}"]`);
+
+let server: StaticServer;
+let browser: Browser;
+let page: Page;
+const consoleProblems: string[] = [];
+
+beforeAll(async () => {
+  ensureBuilt();
+  mkdirSync(artifacts, { recursive: true });
+  server = await serveDirectory(dist);
+  browser = await chromium.launch({
+    executablePath: "/usr/bin/chromium",
+    args: [
+      "--headless",
+      "--no-sandbox",
+      "--disable-gpu",
+      "--enable-unsafe-swiftshader",
+      "--disable-background-networking",
+      "--disable-component-update",
+      "--no-first-run",
+      "--disable-sync",
+    ],
+  });
+  const context = await browser.newContext({ viewport: { width: 1600, height: 950 }, acceptDownloads: true });
+  page = await context.newPage();
+  page.on("console", (m) => {
+    if (m.type() === "error" || /Content Security Policy/i.test(m.text())) consoleProblems.push(m.text());
+  });
+  page.on("pageerror", (e) => consoleProblems.push(e.message));
+  await page.goto(server.url);
+  await page.locator("[data-role=headline-table]").waitFor({ timeout: 60_000 });
+});
+
+afterAll(async () => {
+  await browser?.close();
+  await server?.close();
+});
+
+describe("the built app", () => {
+  it("carries the Content-Security-Policy as a meta tag and runs under it without violations", async () => {
+    const html = readFileSync(join(dist, "index.html"), "utf8");
+    expect(html, "index.html has the CSP meta tag").toMatch(/<meta http-equiv="Content-Security-Policy" content="default-src &#39;self&#39;|<meta http-equiv="Content-Security-Policy" content="default-src 'self'/);
+    expect(html, "no inline scripts").not.toMatch(/<script(?![^>]*\bsrc=)[^>]*>/);
+    expect(consoleProblems, "no console errors or CSP violations while loading").toEqual([]);
+  });
+
+  it("opens on the first demo scenario with results, the 3D view and the caution on screen", async () => {
+    const caution = page.locator("[data-role=caution]");
+    await expect.poll(() => caution.isVisible(), { message: "caution visible" }).toBe(true);
+    expect(await caution.textContent(), "the caution text from the result contract").toBe(CAUTION);
+    expect(CAUTION.startsWith("Caution"), "the caution begins with the word Caution").toBe(true);
+    expect(await page.locator("[data-role=verdict]").isVisible(), "verdict visible").toBe(true);
+    expect(await page.locator("[data-role=headline-table] thead th").count(), "a column per near-field method plus labels").toBeGreaterThanOrEqual(3);
+    await page.waitForTimeout(500);
+    await page.screenshot({ path: join(artifacts, "app-main.png") });
+  });
+
+  it("draws a 3D view that is not blank", async () => {
+    const sample = await sampleCanvas(page);
+    expect(sample.width, "canvas has a size").toBeGreaterThan(200);
+    expect(sample.contentFraction, "more than a third of the canvas differs from the clear colour").toBeGreaterThan(0.33);
+    expect(sample.distinctColours, "shaded geometry, not a flat fill").toBeGreaterThan(50);
+  });
+
+  it("updates the results and the 3D view when the port angle changes", async () => {
+    const riseCell = cell(page, "integral:Max rise above port (upper edge)");
+    const riseBefore = await riseCell.textContent();
+    const before = await sampleCanvas(page);
+    const angle = page.locator('input[data-path="diffuser.portAngle"]');
+    await angle.fill("30");
+    await expect.poll(() => riseCell.textContent(), { message: "integral max rise changes", timeout: 15_000 }).not.toBe(riseBefore);
+    await page.waitForTimeout(400);
+    const after = await sampleCanvas(page);
+    expect(meanDifference(before, after), "mean grey-level change across the 3D view").toBeGreaterThan(1);
+    expect(await page.locator(".doc-title .dirty-dot").count(), "the document is marked unsaved").toBe(1);
+    await page.screenshot({ path: join(artifacts, "app-port-angle-30.png") });
+  });
+
+  it("shows a clear inline error for a bad value and keeps the last good results", async () => {
+    const riseCell = cell(page, "integral:Max rise above port (upper edge)");
+    const good = await riseCell.textContent();
+    const angle = page.locator('input[data-path="diffuser.portAngle"]');
+    await angle.fill("120");
+    const error = page.locator(".field.has-error .field-error").first();
+    await error.waitFor({ timeout: 15_000 });
+    expect(await error.textContent(), "the message names the allowed range").toMatch(/0 to 90/);
+    expect(await page.locator("[data-role=engine-status]").textContent(), "status says the results shown are the last good ones").toMatch(/last good results/);
+    expect(await riseCell.textContent(), "results still shown").toBe(good);
+    await page.screenshot({ path: join(artifacts, "app-inline-error.png") });
+    await angle.fill("30");
+    await expect.poll(() => page.locator(".field.has-error").count(), { message: "error clears", timeout: 15_000 }).toBe(0);
+  });
+
+  it("saves the scenario as a download and opens it again by upload", async () => {
+    const saved = join(artifacts, "app-saved-scenario.json");
+    const [download] = await Promise.all([page.waitForEvent("download"), page.click("[data-command=save]")]);
+    await download.saveAs(saved);
+    const file = JSON.parse(readFileSync(saved, "utf8")) as { diffuser: { portAngle: unknown }; format: string };
+    expect(file.format, "a scenario file").toBe("brinefield-scenario");
+    expect(file.diffuser.portAngle, "the edited port angle was saved").toBe(30);
+    expect(await page.locator(".doc-title .dirty-dot").count(), "saved documents are clean").toBe(0);
+
+    // Change it again, then open the saved file: the unsaved change is offered for discarding first.
+    await page.locator('input[data-path="diffuser.portAngle"]').fill("45");
+    await page.click("[data-command=open]");
+    const [chooser] = await Promise.all([page.waitForEvent("filechooser"), page.getByRole("button", { name: "Discard changes" }).click()]);
+    await chooser.setFiles(saved);
+    await expect
+      .poll(() => page.locator('input[data-path="diffuser.portAngle"]').inputValue(), { message: "the saved angle is back", timeout: 15_000 })
+      .toBe("30");
+    expect(await page.locator(".doc-title .dirty-dot").count(), "a freshly opened file is clean").toBe(0);
+  });
+
+  it("switches the whole app to US customary units", async () => {
+    await page.click("[data-units=us]");
+    const depthUnit = page.locator('input[data-path="ambient.depth"] + .unit');
+    expect(await depthUnit.textContent(), "depth in feet").toBe("ft");
+    await expect.poll(() => cell(page, "integral:Impact distance").textContent(), { message: "results in feet" }).toMatch(/ft$/);
+    await page.waitForTimeout(300);
+    await page.screenshot({ path: join(artifacts, "app-us-units.png") });
+    await page.click("[data-units=si]");
+  });
+
+  it("shows the charts and the start view", async () => {
+    await page.getByRole("tab", { name: "Dilution vs distance" }).click();
+    await page.locator("[data-role=dilution-chart] .limit-line").waitFor();
+    await page.screenshot({ path: join(artifacts, "app-dilution-chart.png") });
+    await page.click("[data-command=start]");
+    await page.locator("[data-role=start-view]").waitFor();
+    expect(await page.locator("[data-demo]").count(), "every bundled demo is offered").toBe(readdirSync(join(root, "demo-scenarios")).filter((f) => f.endsWith(".json")).length);
+    await page.screenshot({ path: join(artifacts, "app-start-view.png") });
+    await page.keyboard.press("Escape");
+    await expect.poll(() => page.locator("[data-role=start-view]").count(), { message: "Escape closes the start view" }).toBe(0);
+  });
+
+  it("renders only the 3D view on the capture route and reports ready", async () => {
+    const text = readFileSync(join(root, "demo-scenarios", readdirSync(join(root, "demo-scenarios")).filter((f) => f.endsWith(".json")).sort()[1]), "utf8");
+    const context = await browser.newContext({ viewport: { width: 1000, height: 600 } });
+    await context.addInitScript((scenarioText: string) => {
+      (window as unknown as { __brinefieldCapture: string }).__brinefieldCapture = scenarioText;
+    }, text);
+    const capture = await context.newPage();
+    await capture.goto(`${server.url}?capture=3d`);
+    await capture.waitForFunction(() => document.body.dataset.ready === "true", undefined, { timeout: 60_000 });
+    expect(await capture.locator(".inputs, [data-role=results]").count(), "no inputs or results on the capture route").toBe(0);
+    const sample = await sampleCanvas(capture);
+    expect(sample.width, "canvas fills the window width").toBeGreaterThanOrEqual(1000);
+    expect(sample.contentFraction, "capture is not blank").toBeGreaterThan(0.1);
+    await capture.screenshot({ path: join(artifacts, "app-capture-3d.png") });
+    await context.close();
+  });
+});
