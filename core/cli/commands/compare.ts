@@ -1,5 +1,5 @@
 /** `brinefield compare`: a study's variants side by side, per ambient case and worst case. */
-import { dirname, join } from "node:path";
+import { dirname, isAbsolute, join } from "node:path";
 import { csvFormat } from "d3-dsv";
 import { CliError, type CliCommand, type CliIO } from "../command";
 import { readArgs } from "../args";
@@ -41,7 +41,7 @@ async function run(argv: readonly string[], io: CliIO): Promise<number> {
   const path = positionals[0]!;
   const st = parseStudy(loadJsonFile(path, io));
   if (!st.ok) throw new CliError(`${path}: ${st.issues.length} problem(s) in the study:\n${st.issues.map((i) => `  - ${i.message}`).join("\n")}`);
-  const basePath = typeof st.study.base === "string" ? join(dirname(path), st.study.base) : null;
+  const basePath = typeof st.study.base === "string" ? (isAbsolute(st.study.base) ? st.study.base : join(dirname(path), st.study.base)) : null;
   const baseRaw = basePath ? loadJsonFile(basePath, io) : st.study.base;
   const v = studyVariants(st.study, baseRaw, parseScenario);
   if (!v.ok) {

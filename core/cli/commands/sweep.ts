@@ -1,5 +1,5 @@
 /** `brinefield sweep`: vary one or two inputs over a range and tabulate the verdict at each point. */
-import { dirname, join } from "node:path";
+import { dirname, isAbsolute, join } from "node:path";
 import { csvFormat } from "d3-dsv";
 import { CliError, type CliCommand, type CliIO } from "../command";
 import { readArgs } from "../args";
@@ -47,7 +47,8 @@ function loadTarget(path: string, io: CliIO): { scenario: Scenario; studyAxes: S
   }
   const st = parseStudy(raw);
   if (!st.ok) throw new CliError(`${path}: ${st.issues.length} problem(s) in the study:\n${st.issues.map((i) => `  - ${i.message}`).join("\n")}`);
-  const baseRaw = typeof st.study.base === "string" ? loadJsonFile(join(dirname(path), st.study.base), io) : st.study.base;
+  const base = st.study.base;
+  const baseRaw = typeof base === "string" ? loadJsonFile(isAbsolute(base) ? base : join(dirname(path), base), io) : base;
   const r = parseScenario(baseRaw);
   if (!r.ok) throw new CliError(formatIssues(typeof st.study.base === "string" ? st.study.base : `${path} (base)`, r.issues));
   const axes = (st.study.sweep?.vary ?? []).map((v, i) => {
