@@ -26,6 +26,11 @@ export interface RunOptions {
   readonly includePath?: boolean;
   /** Receives every accepted integration step of the integral model (charts, 3D buffers, CSV). */
   readonly sink?: PathSink;
+  /**
+   * "full" (default), or "edge" for loops that read only the edge verdict and near-field numbers:
+   * `mixingZone.alternatives`, `series` and `footprint` are then left empty (same physics, less output).
+   */
+  readonly detail?: "full" | "edge";
 }
 
 /** Port flows, velocity, Froude and Reynolds numbers (core/multiport) with the brine's own viscosity. */
@@ -92,7 +97,7 @@ export function runScenario(scenario: Scenario, options: RunOptions = {}): Brine
   // The path is always computed: the edge may lie inside the jet, where its dilution is read off the path.
   const integral = nearFieldIntegral(jet, props.column, { includePath: true, sink: options.sink });
   const nearField: NearFieldMethodResult[] = [lengthScale, integral];
-  const beyond = beyondNearField({ scenario, jet, column: props.column, nearField, densities: props.densities, port });
+  const beyond = beyondNearField({ scenario, jet, column: props.column, nearField, densities: props.densities, port, detail: options.detail });
   const sourceWarnings = jetSourceWarnings(jet, props.column);
   const warnings = dedupe([
     ...props.warnings,

@@ -86,6 +86,11 @@ interface LayerState {
   e: number;
 }
 
+// Module-scope scratch for the integration (the function is not re-entrant across threads' shared memory,
+// and JavaScript runs it to completion, so one set serves every call).
+const scratchState: LayerState = { h: 0, v: 0, ri: 0, e: 0 };
+const scratchK = [new Float64Array(2), new Float64Array(2), new Float64Array(2), new Float64Array(2)];
+
 /** Integrates the spreading layer from `startDistance` to `endDistance`; never throws. */
 export function spreadingLayerFromNearFieldEnd(input: SpreadingLayerInput): SpreadingLayerSeries {
   const drag = input.dragCoefficient ?? DEFAULT_BED_DRAG;
@@ -99,28 +104,41 @@ export function spreadingLayerFromNearFieldEnd(input: SpreadingLayerInput): Spre
   const offset = input.perimeterOffset ?? 0;
   let advected = false;
 
+  // Layer state for flux q and width w, written into module-scope scratch (no allocation per call).
   const state = (q: number, w: number): LayerState => {
     const gp = (g0 * q0) / q; // buoyancy flux conserved
+    const st = scratchState;
     if (advected) {
-      const h = q / (u * w);
-      const ri = gp > 0 ? (gp * h * cosb) / (u * u) : 0;
-      return { h, v: u, ri, e: entrainmentFromRichardson(ri) };
+      st.h = q / (u * w);
+      st.v = u;
+      st.ri = gp > 0 ? (gp * st.h * cosb) / (u * u) : 0;
+      st.e = entrainmentFromRichardson(st.ri);
+      return st;
     }
     // A neutral layer (g′ = 0) has no gravity-driven thickness; keep a finite, non-entraining state.
-    if (!(gp > 0)) return { h: Infinity, v: 0, ri: Infinity, e: 0 };
-    const h = Math.cbrt((riRadial * q * q) / (gp * w * w * cosb));
-    return { h, v: q / (h * w), ri: riSlope, e: entrainmentFromRichardson(riSlope) };
+    if (!(gp > 0)) {
+      st.h = Infinity;
+      st.v = 0;
+      st.ri = Infinity;
+      st.e = 0;
+      return st;
+    }
+    st.h = Math.cbrt((riRadial * q * q) / (gp * w * w * cosb));
+    st.v = q / (st.h * w);
+    st.ri = riSlope;
+    st.e = eSlope;
+    return st;
   };
+  const eSlope = entrainmentFromRichardson(riSlope);
   let wAdv = 0;
   const width = (r: number, wa: number) =>
     advected ? wa : input.initialWidth + offset + 2 * Math.PI * (r - input.startDistance);
-  // Derivatives of (Q, advected width) with respect to distance.
-  const deriv = (r: number, q: number, wa: number): [number, number] => {
+  // Derivatives of (Q, advected width) with respect to distance, into `k[0]`, `k[1]`.
+  const deriv = (r: number, q: number, wa: number, k: Float64Array): void => {
     const w = width(r, wa);
-    const s = state(q, w);
-    const dq = s.e * s.v * w;
-    const dw = advected ? (2 * Math.sqrt(Math.max(0, ((g0 * q0) / q) * s.h))) / u : 0;
-    return [dq, dw];
+    const st = state(q, w);
+    k[0] = st.e * st.v * w;
+    k[1] = advected ? (2 * Math.sqrt(Math.max(0, ((g0 * q0) / q) * st.h))) / u : 0;
   };
 
   const out = {
@@ -147,15 +165,15 @@ export function spreadingLayerFromNearFieldEnd(input: SpreadingLayerInput): Spre
   };
   const push = (r: number, q: number, wa: number) => {
     const w = width(r, wa);
-    const s = state(q, w);
+    const st = state(q, w);
     out.distance.push(r);
     out.dilution.push(q / q0);
-    out.thickness.push(s.h);
+    out.thickness.push(st.h);
     out.width.push(w);
     out.flux.push(q);
-    out.velocity.push(s.v);
-    out.richardson.push(s.ri);
-    out.entrainment.push(s.e);
+    out.velocity.push(st.v);
+    out.richardson.push(st.ri);
+    out.entrainment.push(st.e);
   };
   let r = input.startDistance;
   let q = q0 * input.startDilution;
@@ -164,15 +182,19 @@ export function spreadingLayerFromNearFieldEnd(input: SpreadingLayerInput): Spre
   const span = Math.max(0, input.endDistance - input.startDistance);
   if (span === 0 || !(q0 > 0)) return out;
   const dr = span / steps;
+  const k1 = scratchK[0];
+  const k2 = scratchK[1];
+  const k3 = scratchK[2];
+  const k4 = scratchK[3];
   for (let i = 0; i < steps; i++) {
     const wa = wAdv;
     // Classical fourth-order Runge–Kutta on (Q, w).
-    const [k1q, k1w] = deriv(r, q, wa);
-    const [k2q, k2w] = deriv(r + dr / 2, q + (dr / 2) * k1q, wa + (dr / 2) * k1w);
-    const [k3q, k3w] = deriv(r + dr / 2, q + (dr / 2) * k2q, wa + (dr / 2) * k2w);
-    const [k4q, k4w] = deriv(r + dr, q + dr * k3q, wa + dr * k3w);
-    q += (dr / 6) * (k1q + 2 * k2q + 2 * k3q + k4q);
-    wAdv = wa + (dr / 6) * (k1w + 2 * k2w + 2 * k3w + k4w);
+    deriv(r, q, wa, k1);
+    deriv(r + dr / 2, q + (dr / 2) * k1[0], wa + (dr / 2) * k1[1], k2);
+    deriv(r + dr / 2, q + (dr / 2) * k2[0], wa + (dr / 2) * k2[1], k3);
+    deriv(r + dr, q + dr * k3[0], wa + dr * k3[1], k4);
+    q += (dr / 6) * (k1[0] + 2 * k2[0] + 2 * k3[0] + k4[0]);
+    wAdv = wa + (dr / 6) * (k1[1] + 2 * k2[1] + 2 * k3[1] + k4[1]);
     r = input.startDistance + (i + 1) * dr;
     maybeSwitch(r, q);
     push(r, q, wAdv);

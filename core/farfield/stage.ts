@@ -40,6 +40,11 @@ export interface BeyondInput {
   readonly nearField: readonly NearFieldMethodResult[];
   readonly densities: DensitiesResult;
   readonly port: PortResult;
+  /**
+   * "full" (default) or "edge": only what the edge verdict needs — `alternatives`, `series` and
+   * `footprint` are left empty. For loops (Monte Carlo, sweeps, design) that read the edge numbers only.
+   */
+  readonly detail?: "full" | "edge";
 }
 
 export interface BeyondOutput {
@@ -128,7 +133,9 @@ export function beyondNearField(input: BeyondInput): BeyondOutput {
     u > 0 ? diffuserLength * Math.abs(Math.sin(degToRad(diffuser.diffuserAzimuth - column.currentDirection))) : diffuserLength;
   const crossWidth = (c: Chain) => 2 * c.layerRadius + crossLength();
 
-  const farSeries = (c: Chain, method: FarMethod, xEnd: number, steps = 400): FarSeries => {
+  const integrateFar = (c: Chain, method: FarMethod, xEnd: number, steps: number): FarSeries => {
+    // Passive diffusion reuses the spreading layer's distances and start thickness (memoised below).
+    if (method === "passive-diffusion" && u > 0) return passiveFromLayer(c, farSeries(c, "gravity-current"));
     const gc = spreadingLayerFromNearFieldEnd({
       startDistance: c.end.distance,
       endDistance: Math.max(xEnd, c.end.distance),
@@ -142,9 +149,9 @@ export function beyondNearField(input: BeyondInput): BeyondOutput {
       bedSlope: slopeAlong(),
       steps,
     });
-    if (method === "gravity-current" || u === 0) {
-      return { distance: gc.distance, dilution: gc.dilution, thickness: gc.thickness, width: gc.width };
-    }
+    return { distance: gc.distance, dilution: gc.dilution, thickness: gc.thickness, width: gc.width };
+  };
+  const passiveFromLayer = (c: Chain, gc: FarSeries): FarSeries => {
     const b0 = crossWidth(c);
     const h0 = gc.thickness[0];
     const out: FarSeries = { distance: [], dilution: [], thickness: [], width: [] };
@@ -157,14 +164,28 @@ export function beyondNearField(input: BeyondInput): BeyondOutput {
     }
     return out;
   };
+  // One integration per chain and method, over the whole range the edge, the series and the footprint need,
+  // memoised: the edge value is interpolated from it (200 RK4 steps over ten radii: steps of radius/20).
+  const farRange = (c: Chain) => Math.max(10 * radius, 2 * c.end.distance);
+  const farCache = new Map<string, FarSeries>();
+  const farSeries = (c: Chain, method: FarMethod): FarSeries => {
+    const key = `${chains.indexOf(c)}|${method}`;
+    let f = farCache.get(key);
+    if (!f) {
+      f = integrateFar(c, method, farRange(c), FAR_STEPS);
+      farCache.set(key, f);
+    }
+    return f;
+  };
   const atRadius = (s: FarSeries) => interpolate(s.distance, s.dilution, radius);
 
   // Alternatives at the edge, for every near-field method and every applicable far-field method.
   const farMethods: FarMethod[] = u > 0 ? ["gravity-current", "passive-diffusion"] : ["gravity-current"];
   const alternatives: { method: string; dilution: number }[] = [];
   const edgeOf = (c: Chain, m: FarMethod): number =>
-    radius <= c.end.distance ? dilutionFromProfile(c.profile, radius) : atRadius(farSeries(c, m, radius));
-  for (const c of chains) {
+    radius <= c.end.distance ? dilutionFromProfile(c.profile, radius) : atRadius(farSeries(c, m));
+  const full = input.detail !== "edge";
+  for (const c of full ? chains : []) {
     if (radius <= c.end.distance) alternatives.push({ method: `${c.nf.method} (jet crosses the edge)`, dilution: edgeOf(c, "gravity-current") });
     else for (const m of farMethods) alternatives.push({ method: `${c.nf.method} + ${m}`, dilution: edgeOf(c, m) });
   }
@@ -222,20 +243,20 @@ export function beyondNearField(input: BeyondInput): BeyondOutput {
         }),
       );
     }
-    const far = farSeries(chain, farMethod, xEnd, 200);
+    const far = farSeries(chain, farMethod);
     if (!edgeInside) layerAtEdge = interpolate(far.distance, far.thickness, radius);
-    series = buildSeries(chain, far, farMethod, excess);
+    if (full) series = buildSeries(chain, truncateSeries(far, xEnd), farMethod, excess);
   }
 
   const assessment = complianceFromEdgeDilution(scenario, edgeDilution, seabedSalinity, seabedTemperature);
   warnings.push(...assessment.warnings);
-  if (chain) {
+  if (chain && full) {
     footprint = footprintFromLayer(
       { profile: chain.profile, impactDistance: chain.impactDistance, nearFieldEnd: chain.end.distance },
-      farSeries(chain, farMethod, Math.max(10 * radius, 2 * chain.end.distance), 2000),
+      farSeries(chain, farMethod),
       assessment.compliance.requiredDilution,
     );
-    if (footprint.furthestExtent >= Math.max(10 * radius, 2 * chain.end.distance) * 0.999) {
+    if (footprint.furthestExtent >= farRange(chain) * 0.999) {
       warnings.push(
         warning("footprint-beyond-range", "warning", `The governing limit is still exceeded at ${footprint.furthestExtent.toFixed(0)} m, the end of the computed range; the footprint is larger than reported.`, {
           stage: "far-field",
@@ -268,6 +289,30 @@ export function beyondNearField(input: BeyondInput): BeyondOutput {
     { stage: "compliance", name: "required dilution", source: "S_req = (C_d − C_b)/(C_limit − C_b), derived (reference sheet §0)" },
   ];
   return { multiport: mp.multiport, nearField: mp.nearField, mixingZone, compliance: assessment.compliance, warnings, methods };
+}
+
+/** Steps of the far-field integration (fourth-order Runge–Kutta; see farSeries above). */
+const FAR_STEPS = 200;
+
+/** The part of a far-field series up to `xEnd` (the displayed range), ending exactly at `xEnd`. */
+function truncateSeries(f: FarSeries, xEnd: number): FarSeries {
+  const out: FarSeries = { distance: [], dilution: [], thickness: [], width: [] };
+  for (let i = 0; i < f.distance.length; i++) {
+    if (f.distance[i] > xEnd) {
+      if (i > 0) {
+        out.distance.push(xEnd);
+        out.dilution.push(interpolate(f.distance, f.dilution, xEnd));
+        out.thickness.push(interpolate(f.distance, f.thickness, xEnd));
+        out.width.push(interpolate(f.distance, f.width, xEnd));
+      }
+      break;
+    }
+    out.distance.push(f.distance[i]);
+    out.dilution.push(f.dilution[i]);
+    out.thickness.push(f.thickness[i]);
+    out.width.push(f.width[i]);
+  }
+  return out;
 }
 
 function interpolate(xs: readonly number[], ys: readonly number[], x: number): number {

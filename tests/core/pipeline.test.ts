@@ -75,4 +75,13 @@ describe("runScenario()", () => {
     expect(b.mixingZone.dilution, "edge dilution independent of path output").toBe(a.mixingZone.dilution);
     expect(b.nearField[1]!.impactDilution, "integral impact dilution independent of path output").toBe(a.nearField[1]!.impactDilution);
   });
+
+  it.each(demos)("gives the same edge verdict in the lighter \"edge\" detail used by study loops (%s)", (file) => {
+    const s = scenarioOf(load(file));
+    const full = runScenario(s);
+    const edge = runScenario(s, { includePath: false, detail: "edge" });
+    expect(edge.mixingZone.dilution, "edge dilution").toBe(full.mixingZone.dilution);
+    expect(edge.compliance, "compliance").toEqual(full.compliance);
+    expect(edge.nearField.map((m) => m.impactDilution), "near-field dilutions").toEqual(full.nearField.map((m) => m.impactDilution));
+  });
 });
