@@ -2,7 +2,7 @@
  * The main window: file commands, inputs, results with the caution, the 3D view and the charts, and the
  * Study tab. The document is the raw scenario file; it changes only through actions.
  */
-import { Suspense, lazy, useCallback, useEffect, useMemo, useRef, useState, type ComponentType } from "react";
+import { Suspense, lazy, useCallback, useEffect, useMemo, useRef, useState } from "react";
 import { CAUTION } from "../core/result/contract";
 import type { UnitSystem } from "../core/units";
 import { DEMO_SCENARIOS, type DemoScenario } from "./demos";
@@ -36,10 +36,8 @@ import { exportSeriesCsv, exportReport } from "./exports";
 export const AUTOSAVE_INTERVAL_MS = 5000;
 const UNITS_KEY = "brinefield.units";
 
-type StudyProps = { scenarioFile: unknown; unitSystem: UnitSystem };
-const studyModules = import.meta.glob<{ StudyPanel: ComponentType<StudyProps> }>("./study/StudyPanel.tsx");
-const studyLoader = studyModules["./study/StudyPanel.tsx"];
-const StudyPanel = studyLoader ? lazy(() => studyLoader().then((m) => ({ default: m.StudyPanel }))) : null;
+// The Study tab loads on first use (its own workers and charts stay out of the first screen).
+const StudyPanel = lazy(() => import("./study/StudyPanel").then((m) => ({ default: m.StudyPanel })));
 
 function initialUnits(): UnitSystem {
   try {
@@ -292,7 +290,7 @@ export function App() {
             {doc.path ? <span className="doc-path">{doc.path.replace(/^.*[\\/]/, "")}</span> : null}
           </div>
           <div className="tabs" role="tablist" aria-label="View">
-            <button type="button" role="tab" aria-selected={tab === "design"} onClick={() => setTab("design")}>Design</button>
+            <button type="button" role="tab" aria-selected={tab === "design"} onClick={() => setTab("design")} data-command="design">Design</button>
             <button type="button" role="tab" aria-selected={tab === "study"} onClick={() => setTab("study")} data-command="study">Study</button>
           </div>
           <div className="segmented units" role="radiogroup" aria-label="Units">
@@ -370,13 +368,9 @@ export function App() {
         ) : (
           <main className="study-workspace">
             <p className="caution" data-role="caution">{CAUTION}</p>
-            {StudyPanel ? (
-              <Suspense fallback={<div className="placeholder">Loading study tools…</div>}>
-                <StudyPanel scenarioFile={doc.file} unitSystem={unitSystem} />
-              </Suspense>
-            ) : (
-              <div className="placeholder">Study tools are not part of this build.</div>
-            )}
+            <Suspense fallback={<div className="placeholder">Loading study tools…</div>}>
+              <StudyPanel scenarioFile={doc.file} unitSystem={unitSystem} />
+            </Suspense>
           </main>
         )}
 

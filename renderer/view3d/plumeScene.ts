@@ -5,12 +5,12 @@
  * numbers core computed; the geometry itself comes from plumeGeometry.ts.
  */
 import {
-  ArrowHelper,
   BufferAttribute,
   BufferGeometry,
   CanvasTexture,
   CircleGeometry,
   Color,
+  ConeGeometry,
   CylinderGeometry,
   DoubleSide,
   Group,
@@ -21,7 +21,6 @@ import {
   Mesh,
   MeshLambertMaterial,
   MeshBasicMaterial,
-  Object3D,
   PlaneGeometry,
   SphereGeometry,
   Sprite,
@@ -121,6 +120,21 @@ function textSprite(text: string, scale = 1, colour = "#1d2733"): Sprite {
   sprite.scale.set((heightWorld * canvas.width) / canvas.height, heightWorld, 1);
   sprite.renderOrder = 10;
   return sprite;
+}
+
+/** A solid arrow (shaft and head) that stays visible at any zoom, unlike a one-pixel line. */
+function solidArrow(from: Vector3, direction: Vector3, length: number, colour: number, track: <T extends { dispose(): void }>(item: T) => T): Group {
+  const arrow = new Group();
+  const material = track(new MeshLambertMaterial({ color: colour }));
+  const head = length * 0.28;
+  const shaft = new Mesh(track(new CylinderGeometry(length * 0.025, length * 0.025, length - head, 10)), material);
+  shaft.position.y = (length - head) / 2;
+  const cone = new Mesh(track(new ConeGeometry(length * 0.09, head, 16)), material);
+  cone.position.y = length - head / 2;
+  arrow.add(shaft, cone);
+  arrow.position.copy(from);
+  arrow.quaternion.setFromUnitVectors(new Vector3(0, 1, 0), direction.clone().normalize());
+  return arrow;
 }
 
 function lineFrom(points: Vector3[], material: LineBasicMaterial | LineDashedMaterial): Line {
@@ -352,7 +366,7 @@ export function buildPlumeScene(input: PlumeSceneInput): PlumeSceneOutput {
     const dir = azimuthToEastNorth(scenario.ambient.currentDirection);
     const from = worldToScene({ x: -dir.east * arrowLength * 0.5 - extent * 0.55, y: -dir.north * arrowLength * 0.5 + extent * 0.55, z: -depth * 0.15 });
     const direction = worldToScene({ x: dir.east, y: dir.north, z: 0 }).normalize();
-    const arrow = new ArrowHelper(direction, from, arrowLength, COLOURS.current, arrowLength * 0.25, arrowLength * 0.12);
+    const arrow = solidArrow(from, direction, arrowLength, COLOURS.current, track);
     arrow.name = "current-arrow";
     group.add(arrow);
     const label = textSprite(`current ${formatNumber(currentText.value, 3)} ${currentText.unit}`, 1, "#1f5f99");
@@ -364,7 +378,7 @@ export function buildPlumeScene(input: PlumeSceneInput): PlumeSceneOutput {
     notes.push("Still water (no current).");
   }
   const northFrom = worldToScene({ x: -extent * 0.85, y: -extent * 0.85, z: seabedHeight(-extent * 0.85, -extent * 0.85, bed.depth, bed.slope, bed.slopeAzimuth) + lift * 10 });
-  const north = new ArrowHelper(new Vector3(0, 0, -1), northFrom, extent * 0.14, COLOURS.north, extent * 0.04, extent * 0.025);
+  const north = solidArrow(northFrom, new Vector3(0, 0, -1), extent * 0.14, COLOURS.north, track);
   north.name = "north-arrow";
   group.add(north);
   const nLabel = textSprite("N", 1.2, "#111");
@@ -406,9 +420,6 @@ export function buildPlumeScene(input: PlumeSceneInput): PlumeSceneOutput {
     notes,
     dispose: () => {
       for (const d of disposables) d.dispose();
-      group.traverse((o: Object3D) => {
-        if (o instanceof ArrowHelper) o.dispose();
-      });
     },
   };
 }

@@ -85,6 +85,8 @@ function meanDifference(a: CanvasSample, b: CanvasSample): number {
   return sum / n;
 }
 
+const demoFiles = () => readdirSync(join(root, "demo-scenarios")).filter((f) => f.endsWith(".json")).sort();
+
 const cell = (page: Page, name: string) => page.locator(`[data-cell="${name}"]`);
 
 let server: StaticServer;
@@ -174,6 +176,7 @@ describe("the built app", () => {
     expect(await error.textContent(), "the message names the allowed range").toMatch(/0 to 90/);
     expect(await page.locator("[data-role=engine-status]").textContent(), "status says the results shown are the last good ones").toMatch(/last good results/);
     expect(await riseCell.textContent(), "results still shown").toBe(good);
+    await angle.scrollIntoViewIfNeeded();
     await page.screenshot({ path: join(artifacts, "app-inline-error.png") });
     await angle.fill("30");
     await expect.poll(() => page.locator(".field.has-error").count(), { message: "error clears", timeout: 15_000 }).toBe(0);
@@ -181,7 +184,9 @@ describe("the built app", () => {
 
   it("saves the scenario as a download and opens it again by upload", async () => {
     const saved = join(artifacts, "app-saved-scenario.json");
-    const [download] = await Promise.all([page.waitForEvent("download"), page.click("[data-command=save]")]);
+    // Ctrl+S from inside a field: the shortcut works while typing.
+    await page.locator('input[data-path="diffuser.portAngle"]').focus();
+    const [download] = await Promise.all([page.waitForEvent("download"), page.keyboard.press("Control+s")]);
     await download.saveAs(saved);
     const file = JSON.parse(readFileSync(saved, "utf8")) as { diffuser: { portAngle: unknown }; format: string };
     expect(file.format, "a scenario file").toBe("brinefield-scenario");
@@ -215,14 +220,50 @@ describe("the built app", () => {
     await page.screenshot({ path: join(artifacts, "app-dilution-chart.png") });
     await page.click("[data-command=start]");
     await page.locator("[data-role=start-view]").waitFor();
-    expect(await page.locator("[data-demo]").count(), "every bundled demo is offered").toBe(readdirSync(join(root, "demo-scenarios")).filter((f) => f.endsWith(".json")).length);
+    expect(await page.locator("[data-demo]").count(), "every bundled demo is offered").toBe(demoFiles().length);
     await page.screenshot({ path: join(artifacts, "app-start-view.png") });
     await page.keyboard.press("Escape");
     await expect.poll(() => page.locator("[data-role=start-view]").count(), { message: "Escape closes the start view" }).toBe(0);
   });
 
+  it("opens a scenario file dropped on the window", async () => {
+    const text = readFileSync(join(root, "demo-scenarios", demoFiles()[0]), "utf8").replace(/"name":\s*"[^"]*"/, '"name": "Dropped scenario"');
+    await page.evaluate((content: string) => {
+      const transfer = new DataTransfer();
+      transfer.items.add(new File([content], "dropped.json", { type: "application/json" }));
+      window.dispatchEvent(new DragEvent("dragover", { dataTransfer: transfer, cancelable: true, bubbles: true }));
+      window.dispatchEvent(new DragEvent("drop", { dataTransfer: transfer, cancelable: true, bubbles: true }));
+    }, text);
+    await expect.poll(() => page.locator(".doc-title").textContent(), { message: "the dropped file is the document", timeout: 10_000 }).toMatch(/Dropped scenario/);
+    await page.locator("[data-role=headline-table]").waitFor();
+  });
+
+  it("autosaves unsaved work and offers to recover it on the next start", async () => {
+    page.on("dialog", (dialog) => void dialog.accept());
+    await page.locator('input[data-path="name"]').fill("Autosaved edit");
+    await page.waitForTimeout(5_600); // one autosave interval (AUTOSAVE_INTERVAL_MS = 5 s) and a little
+    await page.reload();
+    const recover = page.getByRole("button", { name: "Recover it" });
+    await recover.waitFor({ timeout: 30_000 });
+    await recover.click();
+    await expect.poll(() => page.locator('input[data-path="name"]').inputValue(), { message: "recovered name" }).toBe("Autosaved edit");
+    expect(await page.locator(".doc-title .dirty-dot").count(), "recovered work is still unsaved").toBe(1);
+  });
+
+  it("mounts the study panel in the Study tab", async () => {
+    await page.click("[data-command=study]");
+    await expect
+      .poll(() => page.locator(".study-workspace").evaluate((el) => el.textContent ?? ""), { message: "study panel loaded", timeout: 20_000 })
+      .not.toMatch(/Loading study tools/);
+    expect(await page.locator(".study-workspace [data-role=caution]").isVisible(), "caution stays visible on the Study tab").toBe(true);
+    await page.waitForTimeout(500);
+    await page.screenshot({ path: join(artifacts, "app-study-tab.png") });
+    await page.click("[data-command=design]");
+    await page.locator("[data-role=headline-table]").waitFor();
+  });
+
   it("renders only the 3D view on the capture route and reports ready", async () => {
-    const text = readFileSync(join(root, "demo-scenarios", readdirSync(join(root, "demo-scenarios")).filter((f) => f.endsWith(".json")).sort()[1]), "utf8");
+    const text = readFileSync(join(root, "demo-scenarios", demoFiles()[1]), "utf8");
     const context = await browser.newContext({ viewport: { width: 1000, height: 600 } });
     await context.addInitScript((scenarioText: string) => {
       (window as unknown as { __brinefieldCapture: string }).__brinefieldCapture = scenarioText;
