@@ -349,7 +349,7 @@ export function App() {
 
             <aside className="results-column" aria-label="Results">
               <p className="caution" data-role="caution">{CAUTION}</p>
-              <div className={`engine-status${engine.error ? " error" : ""}`} role="status" data-role="engine-status">
+              <div className={`engine-status${engine.error ? " error" : ""}`} role="status" data-role="engine-status" data-engine={engine.inWorker ? "worker" : "in-thread"}>
                 {engine.error ? (
                   <>
                     <b>{result ? "Showing the last good results." : "No results."}</b> {engine.error}

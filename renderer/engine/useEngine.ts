@@ -6,6 +6,7 @@ import { useEffect, useRef, useState } from "react";
 import type { BrinefieldResult } from "../../core/result/contract";
 import type { Scenario } from "../../core/scenario/types";
 import type { EngineIssue, EngineRequest, EngineResponse } from "./messages";
+import { runFile } from "./runFile";
 
 export const ENGINE_DEBOUNCE_MS = 150;
 
@@ -21,29 +22,52 @@ export interface EngineState {
   readonly stale: boolean;
   readonly running: boolean;
   readonly ms: number | null;
+  /** False once core had to run on the UI thread because no worker could start. */
+  readonly inWorker: boolean;
 }
 
-const INITIAL: EngineState = { result: null, scenario: null, issues: [], error: null, stale: false, running: false, ms: null };
+const INITIAL: EngineState = { result: null, scenario: null, issues: [], error: null, stale: false, running: false, ms: null, inWorker: true };
+
+/** Next engine state for a response: success replaces everything; failure keeps the last good result. */
+export function applyResponse(previous: EngineState, response: EngineResponse): EngineState {
+  return response.ok
+    ? { ...previous, result: response.result, scenario: response.scenario, issues: [], error: null, stale: false, running: false, ms: response.ms }
+    : { ...previous, issues: response.issues, error: response.message, stale: previous.result !== null, running: false };
+}
 
 export function useEngine(file: unknown): EngineState {
   const [state, setState] = useState<EngineState>(INITIAL);
   const workerRef = useRef<Worker | null>(null);
   const latestId = useRef(0);
+  const latestFile = useRef<unknown>(file);
+  latestFile.current = file;
+  // Set when no worker can run (e.g. a platform that refuses module workers): core then runs here.
+  const inThread = useRef(false);
 
   useEffect(() => {
-    const worker = new Worker(new URL("../worker.ts", import.meta.url), { type: "module" });
-    workerRef.current = worker;
-    worker.addEventListener("message", (event: MessageEvent<EngineResponse>) => {
-      const response = event.data;
+    const accept = (response: EngineResponse) => {
       if (response.id !== latestId.current) return;
-      setState((previous) =>
-        response.ok
-          ? { result: response.result, scenario: response.scenario, issues: [], error: null, stale: false, running: false, ms: response.ms }
-          : { ...previous, issues: response.issues, error: response.message, stale: previous.result !== null, running: false },
-      );
-    });
+      setState((previous) => applyResponse(previous, response));
+    };
+    let worker: Worker;
+    try {
+      worker = new Worker(new URL("../worker.ts", import.meta.url), { type: "module" });
+    } catch {
+      inThread.current = true;
+      setState((previous) => ({ ...previous, inWorker: false }));
+      accept(runFile(latestId.current, latestFile.current));
+      return;
+    }
+    workerRef.current = worker;
+    worker.addEventListener("message", (event: MessageEvent<EngineResponse>) => accept(event.data));
     worker.addEventListener("error", (event) => {
-      setState((previous) => ({ ...previous, error: `Calculation worker failed: ${event.message}`, running: false, stale: true }));
+      // The worker could not load or crashed: keep working on this thread rather than stop.
+      event.preventDefault();
+      worker.terminate();
+      workerRef.current = null;
+      inThread.current = true;
+      setState((previous) => ({ ...previous, inWorker: false }));
+      accept(runFile(latestId.current, latestFile.current));
     });
     return () => {
       worker.terminate();
@@ -56,7 +80,13 @@ export function useEngine(file: unknown): EngineState {
     setState((previous) => (previous.running ? previous : { ...previous, running: true }));
     const timer = setTimeout(() => {
       const request: EngineRequest = { id, file };
-      workerRef.current?.postMessage(request);
+      if (workerRef.current) workerRef.current.postMessage(request);
+      else if (inThread.current) {
+        const response = runFile(id, file);
+        if (response.id === latestId.current) {
+          setState((previous) => applyResponse(previous, response));
+        }
+      }
     }, ENGINE_DEBOUNCE_MS);
     return () => clearTimeout(timer);
   }, [file]);

@@ -140,6 +140,7 @@ describe("the built app", () => {
     expect(await caution.textContent(), "the caution text from the result contract").toBe(CAUTION);
     expect(CAUTION.startsWith("Caution"), "the caution begins with the word Caution").toBe(true);
     expect(await page.locator("[data-role=verdict]").isVisible(), "verdict visible").toBe(true);
+    expect(await page.locator("[data-role=engine-status]").getAttribute("data-engine"), "core runs in the Web Worker").toBe("worker");
     expect(await page.locator("[data-role=headline-table] thead th").count(), "a column per near-field method plus labels").toBeGreaterThanOrEqual(3);
     await page.waitForTimeout(500);
     await page.screenshot({ path: join(artifacts, "app-main.png") });
@@ -202,6 +203,16 @@ describe("the built app", () => {
       .poll(() => page.locator('input[data-path="diffuser.portAngle"]').inputValue(), { message: "the saved angle is back", timeout: 15_000 })
       .toBe("30");
     expect(await page.locator(".doc-title .dirty-dot").count(), "a freshly opened file is clean").toBe(0);
+  });
+
+  it("exports an HTML report with the caution and the 3D view embedded", async () => {
+    const [download] = await Promise.all([page.waitForEvent("download"), page.getByRole("button", { name: "Export report" }).click()]);
+    const path = join(artifacts, "app-report.html");
+    await download.saveAs(path);
+    const html = readFileSync(path, "utf8");
+    expect(html, "a complete HTML document").toMatch(/<html/i);
+    expect(html, "the caution is printed").toContain("Caution: screening estimate only");
+    expect(html, "the 3D view is embedded as a PNG").toContain("data:image/png;base64,");
   });
 
   it("switches the whole app to US customary units", async () => {

@@ -1,0 +1,79 @@
+/**
+ * The engine's state rule: a successful run replaces what is shown; a failed run keeps the last good
+ * result on screen, marked stale, with the issues for the fields. runFile() never throws.
+ */
+import { readFileSync } from "node:fs";
+import { join } from "node:path";
+import { describe, expect, it } from "vitest";
+import { applyResponse, issuesByPath, type EngineState } from "../../../renderer/engine/useEngine";
+import { runFile, withoutPathPrefix } from "../../../renderer/engine/runFile";
+import { blankScenario } from "../../../renderer/state/scenarioState";
+
+const empty: EngineState = { result: null, scenario: null, issues: [], error: null, stale: false, running: true, ms: null, inWorker: true };
+
+describe("runFile()", () => {
+  it("runs a valid scenario through core and returns the result with the centreline path", () => {
+    const response = runFile(7, blankScenario());
+    expect(response.ok, "blank scenario runs").toBe(true);
+    if (!response.ok) return;
+    expect(response.id, "id echoed").toBe(7);
+    const integral = response.result.nearField.find((m) => m.method === "integral");
+    expect((integral?.path ?? []).length, "the 3D view gets a path").toBeGreaterThan(2);
+  });
+  it("returns issues by path for a bad field instead of throwing", () => {
+    const file = { ...blankScenario(), diffuser: { ...(blankScenario()["diffuser"] as object), portAngle: "abc" } };
+    const response = runFile(1, file);
+    expect(response.ok, "bad angle fails").toBe(false);
+    if (response.ok) return;
+    expect(response.issues.map((i) => i.path), "issue at the field's path").toContain("diffuser.portAngle");
+    expect(response.issues.every((i) => !i.message.startsWith(`${i.path}: `)), "field messages do not repeat the path").toBe(true);
+  });
+  it("reports a file that is not a scenario at all", () => {
+    const response = runFile(1, "not an object");
+    expect(response.ok, "a string is not a scenario").toBe(false);
+  });
+  it("runs every bundled demo scenario", () => {
+    const dir = join(__dirname, "../../../demo-scenarios");
+    for (const name of ["island-cove.json", "sandy-shelf.json", "sheltered-bay.json"]) {
+      const response = runFile(1, JSON.parse(readFileSync(join(dir, name), "utf8")));
+      expect(response.ok ? "ok" : response.message, `${name} runs`).toBe("ok");
+    }
+  });
+});
+
+describe("applyResponse()", () => {
+  const good = runFile(1, blankScenario());
+  const bad = runFile(2, { ...blankScenario(), ambient: { depth: -3 } });
+
+  it("shows a successful run", () => {
+    const next = applyResponse(empty, good);
+    expect(next.result, "result shown").not.toBeNull();
+    expect(next.stale || next.running || next.error !== null, "fresh, finished, no error").toBe(false);
+  });
+  it("keeps the last good result when a later run fails, and marks it stale", () => {
+    const shown = applyResponse(empty, good);
+    const next = applyResponse(shown, bad);
+    expect(next.result, "last good result kept").toBe(shown.result);
+    expect(next.stale, "marked stale").toBe(true);
+    expect(next.error, "message shown").not.toBeNull();
+    expect(next.issues.length, "issues for the fields").toBeGreaterThan(0);
+  });
+  it("is not stale when there never was a result", () => {
+    expect(applyResponse(empty, bad).stale, "nothing to be stale").toBe(false);
+  });
+});
+
+describe("withoutPathPrefix() and issuesByPath()", () => {
+  it("strips a leading path from a message once", () => {
+    expect(withoutPathPrefix("a.b", "a.b: must be positive"), "prefix removed").toBe("must be positive");
+    expect(withoutPathPrefix("a.b", "must be positive"), "no prefix").toBe("must be positive");
+  });
+  it("groups messages by path", () => {
+    const map = issuesByPath([
+      { path: "x", message: "one" },
+      { path: "x", message: "two" },
+      { path: "y", message: "three" },
+    ]);
+    expect(map.get("x"), "two messages at x").toEqual(["one", "two"]);
+  });
+});
