@@ -57,8 +57,15 @@ export function expandCases(s: Scenario): StudyCase[] {
 export function describeCases(cases: readonly StudyCase[], s: Scenario): string {
   const names = cases.map((c) => c.name).join(", ");
   if (cases.some((c) => c.addedSlackWater)) {
-    return `Ambient cases: ${names}. A slack-water case (zero current) was added; set options.addSlackWater to false to leave it out.`;
+    return (
+      `Ambient cases: ${names}. A slack-water case (zero current) was added; ` +
+      "set options.addSlackWater to false to leave it out."
+    );
   }
-  if (!s.options.addSlackWater) return `Ambient cases: ${names}. No slack-water case (options.addSlackWater is false).`;
-  return `Ambient cases: ${names} (a listed case already has zero current, so no slack-water case was added).`;
+  if (!s.options.addSlackWater) {
+    return `Ambient cases: ${names}. No slack-water case (options.addSlackWater is false).`;
+  }
+  return (
+    `Ambient cases: ${names} ` + "(a listed case already has zero current, so no slack-water case was added)."
+  );
 }

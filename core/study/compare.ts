@@ -41,7 +41,9 @@ export function studyVariants(
     }
     const r = read(raw);
     if (!r.ok) {
-      for (const is of r.issues) issues.push({ path: `${where}.${is.path}`, message: `${where}: ${is.message}` });
+      for (const is of r.issues) {
+        issues.push({ path: `${where}.${is.path}`, message: `${where}: ${is.message}` });
+      }
       return;
     }
     out.push({ name: v.name, scenario: r.scenario });
@@ -72,7 +74,14 @@ export function compareVariant(v: StudyVariant, evaluate: Evaluator): CompareRow
       rows.push({ variant: v.name, case: c.name, worstCase: false, governingCase: null, summary });
     } catch (err) {
       const error = err instanceof Error ? err.message : String(err);
-      rows.push({ variant: v.name, case: c.name, worstCase: false, governingCase: null, summary: null, error });
+      rows.push({
+        variant: v.name,
+        case: c.name,
+        worstCase: false,
+        governingCase: null,
+        summary: null,
+        error,
+      });
     }
   }
   if (summaries.length > 0) {

@@ -94,7 +94,9 @@ export function designConstraintsFrom(
     if (block === undefined) continue;
     const r = designBlockSchema.safeParse(block);
     if (!r.success) {
-      for (const i of r.error.issues) issues.push({ path: ["design", ...i.path.map(String)].join("."), message: i.message });
+      for (const i of r.error.issues) {
+        issues.push({ path: ["design", ...i.path.map(String)].join("."), message: i.message });
+      }
       continue;
     }
     const b = r.data;
@@ -116,7 +118,10 @@ export function designConstraintsFrom(
     issues.push({ path: "design.minExitVelocity", message: "must not exceed the maximum exit velocity" });
   }
   if (s.diffuser.layout === "rosette") {
-    issues.push({ path: "diffuser.layout", message: "design search covers single-port and line diffusers, not rosettes" });
+    issues.push({
+      path: "diffuser.layout",
+      message: "design search covers single-port and line diffusers, not rosettes",
+    });
   }
   return issues.length > 0 ? { ok: false, issues } : { ok: true, constraints: c };
 }
@@ -134,7 +139,12 @@ export interface DesignCandidate {
 }
 
 /** Exit velocity of the mean port for a nominal diameter (contraction applied to the area). */
-export function exitVelocity(flow: number, portCount: number, nominalDiameter: number, contraction: number): number {
+export function exitVelocity(
+  flow: number,
+  portCount: number,
+  nominalDiameter: number,
+  contraction: number,
+): number {
   return flow / portCount / ((Math.PI * nominalDiameter * nominalDiameter * contraction) / 4);
 }
 
@@ -212,7 +222,11 @@ export interface DesignVerdict {
   readonly reasons: readonly string[];
 }
 
-export function judgeDesign(candidate: DesignCandidate, p: PointEvaluation, c: DesignConstraints): DesignVerdict {
+export function judgeDesign(
+  candidate: DesignCandidate,
+  p: PointEvaluation,
+  c: DesignConstraints,
+): DesignVerdict {
   const reasons: string[] = [];
   if (p.worst < 0) {
     return {
@@ -227,13 +241,18 @@ export function judgeDesign(candidate: DesignCandidate, p: PointEvaluation, c: D
   }
   let clearance: number | null = null;
   for (const k of p.cases) {
-    if (!k.summary.pass) reasons.push(`does not meet the limit in case "${k.name}" (margin ${k.summary.margin.toFixed(2)})`);
+    if (!k.summary.pass) {
+      reasons.push(`does not meet the limit in case "${k.name}" (margin ${k.summary.margin.toFixed(2)})`);
+    }
     if (k.summary.reachesSurface) reasons.push(`jet reaches the surface in case "${k.name}"`);
     const sc = k.summary.surfaceClearance;
     if (sc !== null) clearance = clearance === null ? sc : Math.min(clearance, sc);
   }
-  if (clearance !== null && clearance < c.surfaceClearance && !reasons.some((r) => r.startsWith("jet reaches"))) {
-    reasons.push(`jet's upper edge only ${clearance.toFixed(2)} m below the surface (${c.surfaceClearance} m required)`);
+  const surfaced = reasons.some((r) => r.startsWith("jet reaches"));
+  if (clearance !== null && clearance < c.surfaceClearance && !surfaced) {
+    reasons.push(
+      `jet's upper edge only ${clearance.toFixed(2)} m below the surface (${c.surfaceClearance} m required)`,
+    );
   }
   const w = p.cases[p.worst]!;
   return {
@@ -247,7 +266,11 @@ export function judgeDesign(candidate: DesignCandidate, p: PointEvaluation, c: D
   };
 }
 
-export type DesignCriterion = "fewest ports" | "lowest exit velocity" | "largest margin" | "shortest diffuser";
+export type DesignCriterion =
+  | "fewest ports"
+  | "lowest exit velocity"
+  | "largest margin"
+  | "shortest diffuser";
 
 export interface RankedDesign extends DesignVerdict {
   readonly rank: number;
@@ -263,14 +286,16 @@ export interface RankedDesign extends DesignVerdict {
 export function shortList(verdicts: readonly DesignVerdict[], max: number): RankedDesign[] {
   const ok = verdicts.filter((v) => v.ok);
   if (ok.length === 0) return [];
-  const crit: Record<DesignCriterion, (a: DesignVerdict, b: DesignVerdict) => number> = {
-    "fewest ports": (a, b) => a.candidate.portCount - b.candidate.portCount || b.worstMargin - a.worstMargin,
-    "lowest exit velocity": (a, b) => a.candidate.exitVelocity - b.candidate.exitVelocity || b.worstMargin - a.worstMargin,
-    "largest margin": (a, b) => b.worstMargin - a.worstMargin || a.candidate.portCount - b.candidate.portCount,
-    "shortest diffuser": (a, b) => a.candidate.length - b.candidate.length || b.worstMargin - a.worstMargin,
+  type Order = (a: DesignVerdict, b: DesignVerdict) => number;
+  const byMargin: Order = (a, b) => b.worstMargin - a.worstMargin;
+  const crit: Record<DesignCriterion, Order> = {
+    "fewest ports": (a, b) => a.candidate.portCount - b.candidate.portCount || byMargin(a, b),
+    "lowest exit velocity": (a, b) => a.candidate.exitVelocity - b.candidate.exitVelocity || byMargin(a, b),
+    "largest margin": (a, b) => byMargin(a, b) || a.candidate.portCount - b.candidate.portCount,
+    "shortest diffuser": (a, b) => a.candidate.length - b.candidate.length || byMargin(a, b),
   };
   const best = new Map<DesignVerdict, DesignCriterion[]>();
-  for (const [name, cmp] of Object.entries(crit) as [DesignCriterion, (a: DesignVerdict, b: DesignVerdict) => number][]) {
+  for (const [name, cmp] of Object.entries(crit) as [DesignCriterion, Order][]) {
     const top = [...ok].sort(cmp)[0]!;
     best.set(top, [...(best.get(top) ?? []), name]);
   }

@@ -13,7 +13,12 @@ export type DistributionName = UncertainInput["distribution"];
 export type ResolvedDistribution =
   | { readonly path: string; readonly distribution: "normal"; readonly mean: number; readonly sd: number }
   | { readonly path: string; readonly distribution: "uniform"; readonly min: number; readonly max: number }
-  | { readonly path: string; readonly distribution: "lognormal"; readonly median: number; readonly gsd: number }
+  | {
+      readonly path: string;
+      readonly distribution: "lognormal";
+      readonly median: number;
+      readonly gsd: number;
+    }
   | {
       readonly path: string;
       readonly distribution: "triangular";
@@ -82,13 +87,17 @@ export function resolveDistribution(
       return { ok: true, value: { path, distribution: "normal", mean, sd: p.sd } };
     }
     case "uniform": {
-      if (!finite(p.min) || !finite(p.max) || p.max < p.min) return bad("uniform distribution needs min ≤ max");
+      if (!finite(p.min) || !finite(p.max) || p.max < p.min) {
+        return bad("uniform distribution needs min ≤ max");
+      }
       return { ok: true, value: { path, distribution: "uniform", min: p.min, max: p.max } };
     }
     case "lognormal": {
       const median = p.median ?? centre;
       if (!finite(median) || median <= 0) return bad("lognormal distribution needs a positive median");
-      if (!finite(p.gsd) || p.gsd < 1) return bad("lognormal distribution needs a geometric standard deviation gsd ≥ 1");
+      if (!finite(p.gsd) || p.gsd < 1) {
+        return bad("lognormal distribution needs a geometric standard deviation gsd ≥ 1");
+      }
       return { ok: true, value: { path, distribution: "lognormal", median, gsd: p.gsd } };
     }
     case "triangular": {
@@ -148,7 +157,8 @@ export function defaultUncertainInputs(base: Scenario): UncertainInput[] {
   }
   inputs.push({ path: "ambient.salinity", distribution: "normal", params: { sd: 0.5 } });
   inputs.push({ path: "ambient.temperature", distribution: "normal", params: { sd: 1.5 } });
-  inputs.push({ path: "discharge.salinity", distribution: "normal", params: { sd: 0.02 * base.discharge.salinity } });
+  const brineSalinitySd = 0.02 * base.discharge.salinity;
+  inputs.push({ path: "discharge.salinity", distribution: "normal", params: { sd: brineSalinitySd } });
   inputs.push({ path: "discharge.flow", distribution: "normal", params: { sd: 0.05 * base.discharge.flow } });
   return inputs;
 }
@@ -156,4 +166,5 @@ export function defaultUncertainInputs(base: Scenario): UncertainInput[] {
 export const DEFAULT_SPREADS_NOTE =
   "The scenario states no uncertain inputs, so default spreads were used (screening judgement, no source): " +
   "current speed lognormal with geometric sd 1.5 about the stated speed (fixed if zero), ambient salinity " +
-  "normal sd 0.5 g/kg, ambient temperature normal sd 1.5 °C, brine salinity normal sd 2 %, brine flow normal sd 5 %.";
+  "normal sd 0.5 g/kg, ambient temperature normal sd 1.5 °C, brine salinity normal sd 2 %, " +
+  "brine flow normal sd 5 %.";

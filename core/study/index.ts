@@ -12,7 +12,14 @@ export {
 export type { ResolvedDistribution } from "./distributions";
 export { quantile, quantileSorted, percentileSummary } from "./percentiles";
 export type { PercentileSummary } from "./percentiles";
-export { OVERRIDE_PATHS, OverrideError, withOverrides, withRawOverride, readPath, overrideIssue } from "./overrides";
+export {
+  OVERRIDE_PATHS,
+  OverrideError,
+  withOverrides,
+  withRawOverride,
+  readPath,
+  overrideIssue,
+} from "./overrides";
 export type { Overrides } from "./overrides";
 export { expandCases, describeCases, scenarioForAmbient, SLACK_WATER_CASE } from "./cases";
 export type { StudyCase } from "./cases";
@@ -29,7 +36,13 @@ export {
   samplesForRun,
   histogram,
 } from "./montecarlo";
-export type { MonteCarloPlan, MonteCarloChunk, MonteCarloSummary, MonteCarloStats, MonteCarloSamples } from "./montecarlo";
+export type {
+  MonteCarloPlan,
+  MonteCarloChunk,
+  MonteCarloSummary,
+  MonteCarloStats,
+  MonteCarloSamples,
+} from "./montecarlo";
 export { parseSweepAxis, axisFromParts, axisValues, sweepGrid, sweepRows, eosCrossings } from "./sweep";
 export type { SweepAxis, SweepRow, SweepGridPoint, EosCrossing } from "./sweep";
 export {

@@ -54,7 +54,10 @@ export function planMonteCarlo(scenario: Scenario, runs: number, seed: number): 
   inputs.forEach((input, i) => {
     const variable = input.path.startsWith("ambient.") || input.path.startsWith("discharge.");
     if (!OVERRIDE_PATHS[input.path] || !variable) {
-      issues.push({ path: `uncertainty.inputs.${i}.path`, message: `"${input.path}" cannot be varied in a Monte Carlo study` });
+      issues.push({
+        path: `uncertainty.inputs.${i}.path`,
+        message: `"${input.path}" cannot be varied in a Monte Carlo study`,
+      });
       return;
     }
     const r = resolveDistribution(input, scenario);
@@ -73,7 +76,7 @@ export function planMonteCarlo(scenario: Scenario, runs: number, seed: number): 
   };
 }
 
-/** Results of runs [start, end), per case, in run order. Plain typed arrays: cheap to post between threads. */
+/** Results of runs [start, end), per case, in run order. Typed arrays: cheap to post between threads. */
 export interface MonteCarloChunk {
   readonly start: number;
   readonly end: number;
@@ -147,7 +150,8 @@ export function runMonteCarloChunk(
       try {
         s = evaluate(withOverrides(cases[c]!.scenario, overrides));
       } catch (err) {
-        firstError ??= `run ${start + k}, case ${cases[c]!.name}: ${err instanceof Error ? err.message : String(err)}`;
+        const why = err instanceof Error ? err.message : String(err);
+        firstError ??= `run ${start + k}, case ${cases[c]!.name}: ${why}`;
       }
       edge[c]![k] = s ? s.edgeDilution : Number.NaN;
       margin[c]![k] = s ? s.margin : Number.NaN;
@@ -206,7 +210,10 @@ export interface MonteCarloSamples {
 }
 
 /** Merges chunks (in any order) by run index. */
-export function mergeMonteCarloChunks(plan: MonteCarloPlan, chunks: readonly MonteCarloChunk[]): MonteCarloSamples {
+export function mergeMonteCarloChunks(
+  plan: MonteCarloPlan,
+  chunks: readonly MonteCarloChunk[],
+): MonteCarloSamples {
   const ordered = [...chunks].sort((a, b) => a.start - b.start);
   const total = ordered.reduce((n, c) => n + (c.end - c.start), 0);
   const nc = plan.caseNames.length;
@@ -273,7 +280,10 @@ function stats(name: string, e: Float64Array, m: Float64Array, p: Uint8Array): M
 }
 
 /** Percentiles and exceedance probabilities per case and for the worst case. */
-export function summariseMonteCarlo(plan: MonteCarloPlan, chunks: readonly MonteCarloChunk[]): MonteCarloSummary {
+export function summariseMonteCarlo(
+  plan: MonteCarloPlan,
+  chunks: readonly MonteCarloChunk[],
+): MonteCarloSummary {
   const m = mergeMonteCarloChunks(plan, chunks);
   return {
     runs: m.worstPass.length,
@@ -288,7 +298,10 @@ export function summariseMonteCarlo(plan: MonteCarloPlan, chunks: readonly Monte
 }
 
 /** Histogram of a sample for charts: `bins` equal-width bins between the finite min and max. */
-export function histogram(values: ArrayLike<number>, bins: number): { x0: number; x1: number; count: number }[] {
+export function histogram(
+  values: ArrayLike<number>,
+  bins: number,
+): { x0: number; x1: number; count: number }[] {
   let lo = Number.POSITIVE_INFINITY;
   let hi = Number.NEGATIVE_INFINITY;
   for (let i = 0; i < values.length; i++) {
@@ -300,7 +313,11 @@ export function histogram(values: ArrayLike<number>, bins: number): { x0: number
   }
   if (!Number.isFinite(lo)) return [];
   const width = hi > lo ? (hi - lo) / bins : 1;
-  const out = Array.from({ length: bins }, (_, i) => ({ x0: lo + i * width, x1: lo + (i + 1) * width, count: 0 }));
+  const out = Array.from({ length: bins }, (_, i) => ({
+    x0: lo + i * width,
+    x1: lo + (i + 1) * width,
+    count: 0,
+  }));
   for (let i = 0; i < values.length; i++) {
     const v = values[i]!;
     if (!Number.isFinite(v)) continue;

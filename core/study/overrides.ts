@@ -40,7 +40,13 @@ export const OVERRIDE_PATHS: Readonly<Record<string, OverridePathInfo>> = {
   "diffuser.portAzimuth": { kind: "angle", label: "port azimuth", min: 0, max: 360 },
   "diffuser.diffuserAzimuth": { kind: "angle", label: "diffuser azimuth", min: 0, max: 360 },
   "diffuser.length": { kind: "length", label: "diffuser length", min: 0, max: 10000 },
-  "mixingZone.radius": { kind: "length", label: "mixing-zone radius", min: 0, max: 20000, exclusiveMin: true },
+  "mixingZone.radius": {
+    kind: "length",
+    label: "mixing-zone radius",
+    min: 0,
+    max: 20000,
+    exclusiveMin: true,
+  },
 };
 
 export class OverrideError extends Error {
@@ -77,7 +83,9 @@ function bottom(profile: readonly ProfilePoint[], key: "salinity" | "temperature
 export function readPath(s: Scenario, path: string): number {
   if (!OVERRIDE_PATHS[path]) throw new OverrideError(path, overrideIssue(path, 0) ?? "unknown path");
   const [group, field] = path.split(".") as [string, string];
-  if (group === "ambient" && (field === "salinity" || field === "temperature")) return bottom(s.ambient.profile, field);
+  if (group === "ambient" && (field === "salinity" || field === "temperature")) {
+    return bottom(s.ambient.profile, field);
+  }
   if (group === "diffuser" && field === "portDiameter") return s.diffuser.portDiameterNominal;
   const obj = (s as unknown as Record<string, Record<string, unknown>>)[group];
   const v = obj?.[field];
@@ -108,11 +116,19 @@ export function withOverrides(s: Scenario, overrides: Overrides): Scenario {
     out = {
       ...out,
       ambient: patchAmbient(out.ambient, ambientPatch),
-      ambientCases: out.ambientCases.map((c) => ({ ...patchAmbient(c, ambientPatch), name: c.name, weight: c.weight })),
+      ambientCases: out.ambientCases.map((c) => ({
+        ...patchAmbient(c, ambientPatch),
+        name: c.name,
+        weight: c.weight,
+      })),
     };
   }
-  if (Object.keys(dischargePatch).length > 0) out = { ...out, discharge: { ...out.discharge, ...dischargePatch } };
-  if (Object.keys(diffuserPatch).length > 0) out = { ...out, diffuser: patchDiffuser(out.diffuser, diffuserPatch) };
+  if (Object.keys(dischargePatch).length > 0) {
+    out = { ...out, discharge: { ...out.discharge, ...dischargePatch } };
+  }
+  if (Object.keys(diffuserPatch).length > 0) {
+    out = { ...out, diffuser: patchDiffuser(out.diffuser, diffuserPatch) };
+  }
   if (radius !== undefined) out = { ...out, mixingZone: { ...out.mixingZone, radius } };
   return deepFreeze(out);
 }
@@ -190,7 +206,8 @@ function patchDiffuser(d: DiffuserInput, p: Record<string, number>): DiffuserInp
     };
   }
   if (p.portDiameter !== undefined) {
-    out = { ...out, portDiameterNominal: p.portDiameter, portDiameter: p.portDiameter * Math.sqrt(out.contraction) };
+    const effective = p.portDiameter * Math.sqrt(out.contraction); // contraction applies to the area
+    out = { ...out, portDiameterNominal: p.portDiameter, portDiameter: effective };
   }
   if (p.portSpacing !== undefined && out.layout !== "rosette") {
     out = { ...out, portSpacing: p.portSpacing, length: (out.portCount - 1) * p.portSpacing };

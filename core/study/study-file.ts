@@ -22,9 +22,10 @@ const overridePath = z
     error: () => 'must be a dotted scenario path such as "ambient.depth" or "diffuser.portCount"',
   });
 
-const overrideValue = z.union([z.number(), z.string(), z.boolean(), z.array(z.unknown()), z.record(z.string(), z.unknown())], {
-  error: () => "must be a number, a string with a unit, true/false, a list or an object",
-});
+const overrideValue = z.union(
+  [z.number(), z.string(), z.boolean(), z.array(z.unknown()), z.record(z.string(), z.unknown())],
+  { error: () => "must be a number, a string with a unit, true/false, a list or an object" },
+);
 
 const variant = z.strictObject({
   name: name("variant name"),
@@ -42,6 +43,8 @@ const sweepAxis = z.strictObject({
     .min(1, { error: () => "must be at least 1" })
     .max(500, { error: () => "must be at most 500" }),
 });
+
+const RESERVED = '"base" is reserved for the unmodified scenario';
 
 export const studyFileSchema = z
   .strictObject({
@@ -73,13 +76,16 @@ export const studyFileSchema = z
         ctx.addIssue({
           code: "custom",
           path: ["variants", i, "name"],
-          message: v.name === "base" ? '"base" is reserved for the unmodified scenario' : `"${v.name}" is used twice`,
+          message: v.name === "base" ? RESERVED : `"${v.name}" is used twice`,
         });
       }
       seen.add(v.name);
     });
   })
-  .meta({ title: "Brinefield study", description: "Variants and sweeps of a Brinefield scenario (format version 1)." });
+  .meta({
+    title: "Brinefield study",
+    description: "Variants and sweeps of a Brinefield scenario (format version 1).",
+  });
 
 export type StudyFile = z.output<typeof studyFileSchema>;
 
@@ -89,7 +95,9 @@ export interface StudyIssue {
   readonly message: string;
 }
 
-export function parseStudy(raw: unknown): { ok: true; study: StudyFile } | { ok: false; issues: StudyIssue[] } {
+export function parseStudy(
+  raw: unknown,
+): { ok: true; study: StudyFile } | { ok: false; issues: StudyIssue[] } {
   const r = studyFileSchema.safeParse(raw);
   if (r.success) return { ok: true, study: r.data };
   return {

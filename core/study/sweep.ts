@@ -22,7 +22,12 @@ export const MAX_SWEEP_STEPS = 500;
  */
 export function parseSweepAxis(text: string): { ok: true; axis: SweepAxis } | { ok: false; message: string } {
   const eq = text.indexOf("=");
-  if (eq <= 0) return { ok: false, message: `"${text}" must look like path=from:to:steps, e.g. ambient.currentSpeed=0:0.5:11` };
+  if (eq <= 0) {
+    return {
+      ok: false,
+      message: `"${text}" must look like path=from:to:steps, e.g. ambient.currentSpeed=0:0.5:11`,
+    };
+  }
   const path = text.slice(0, eq).trim();
   const parts = text.slice(eq + 1).split(":");
   if (parts.length !== 3) return { ok: false, message: `"${text}" must give from:to:steps after "${path}="` };
@@ -72,7 +77,9 @@ export interface SweepGridPoint {
 /** Grid points, first axis slowest. */
 export function sweepGrid(axes: readonly SweepAxis[]): SweepGridPoint[] {
   if (axes.length < 1 || axes.length > 2) throw new Error("a sweep varies one or two inputs");
-  if (axes.length === 2 && axes[0]!.path === axes[1]!.path) throw new Error(`${axes[0]!.path} is varied twice`);
+  if (axes.length === 2 && axes[0]!.path === axes[1]!.path) {
+    throw new Error(`${axes[0]!.path} is varied twice`);
+  }
   const v0 = axisValues(axes[0]!);
   const v1 = axes.length === 2 ? axisValues(axes[1]!) : [null];
   const out: SweepGridPoint[] = [];
@@ -148,7 +155,12 @@ export function eosCrossings(axes: readonly SweepAxis[], rows: readonly SweepRow
       next[a] = next[a]! + 1;
       const n = byIndex.get(key(next));
       if (n && r.equationOfState && n.equationOfState && n.equationOfState !== r.equationOfState) {
-        out.push({ path: axis.path, between: [r.values, n.values], from: r.equationOfState, to: n.equationOfState });
+        out.push({
+          path: axis.path,
+          between: [r.values, n.values],
+          from: r.equationOfState,
+          to: n.equationOfState,
+        });
       }
     });
   }

@@ -13,7 +13,9 @@ export function formatCell(v: Cell): string {
 /** Renders rows under headers; numeric columns are right-aligned. */
 export function textTable(headers: readonly string[], rows: readonly (readonly Cell[])[]): string {
   const cells = rows.map((r) => r.map(formatCell));
-  const numeric = headers.map((_, c) => rows.every((r) => typeof r[c] === "number" || r[c] === null || r[c] === undefined));
+  const numeric = headers.map((_, c) =>
+    rows.every((r) => typeof r[c] === "number" || r[c] === null || r[c] === undefined),
+  );
   const width = headers.map((h, c) => Math.max(h.length, ...cells.map((r) => (r[c] ?? "").length)));
   const line = (r: readonly string[]) =>
     r.map((x, c) => (numeric[c] ? x.padStart(width[c]!) : x.padEnd(width[c]!))).join("  ").trimEnd();

@@ -16,7 +16,12 @@ export type WorkerTask =
       readonly start: number;
       readonly end: number;
     }
-  | { readonly kind: "points"; readonly id: number; readonly scenario: Scenario; readonly overrides: readonly Overrides[] };
+  | {
+      readonly kind: "points";
+      readonly id: number;
+      readonly scenario: Scenario;
+      readonly overrides: readonly Overrides[];
+    };
 
 export type WorkerReply =
   | { readonly kind: "progress"; readonly id: number; readonly done: number }

@@ -27,7 +27,8 @@ export function progressBar(io: CliIO, label: string, total: number): ProgressBa
   const draw = (done: number) => {
     const f = Math.min(1, done / total);
     const filled = Math.round(f * width);
-    io.stderr(`\r${label} [${"#".repeat(filled)}${" ".repeat(width - filled)}] ${(f * 100).toFixed(0).padStart(3)}% (${done}/${total})`);
+    const bar = "#".repeat(filled) + " ".repeat(width - filled);
+    io.stderr(`\r${label} [${bar}] ${(f * 100).toFixed(0).padStart(3)}% (${done}/${total})`);
   };
   return {
     update(done) {

@@ -24,10 +24,13 @@ export function runWorkerThread(): boolean {
     const post = (m: WorkerReply, transfer?: ArrayBuffer[]) => port.postMessage(m, transfer);
     try {
       if (task.kind === "monte-carlo") {
-        const chunk = runMonteCarloChunk(task.scenario, task.plan, task.start, task.end, evaluateScenario, (done) => {
+        const progress = (done: number) => {
           if (done % PROGRESS_EVERY === 0) post({ kind: "progress", id: task.id, done });
-        });
-        const buffers = [...chunk.edgeDilution, ...chunk.margin, ...chunk.pass].map((a) => a.buffer as ArrayBuffer);
+        };
+        const { scenario, plan, start, end } = task;
+        const chunk = runMonteCarloChunk(scenario, plan, start, end, evaluateScenario, progress);
+        const arrays = [...chunk.edgeDilution, ...chunk.margin, ...chunk.pass];
+        const buffers = arrays.map((a) => a.buffer as ArrayBuffer);
         post({ kind: "monte-carlo-done", id: task.id, chunk }, buffers);
       } else {
         const points = evaluatePoints(task.scenario, task.overrides, evaluateScenario, (done) => {
