@@ -89,10 +89,11 @@ export function App() {
   const issues = useMemo(() => issuesByPath(engine.issues), [engine.issues]);
   const editor: Editor = useMemo(() => ({ file: doc.file, unitSystem, issues, perform }), [doc.file, unitSystem, issues, perform]);
 
-  // Title and dirty flag to the host; units remembered.
+  // Title and dirty flag to the host (only when they change, not on every keystroke); units remembered.
+  const documentTitle = scenarioName(doc.file);
   useEffect(() => {
-    void host.setDocumentState(doc.dirty, scenarioName(doc.file)).catch(() => {});
-  }, [doc.dirty, doc.file]);
+    void host.setDocumentState(doc.dirty, documentTitle).catch(() => {});
+  }, [doc.dirty, documentTitle]);
   useEffect(() => {
     try {
       localStorage.setItem(UNITS_KEY, unitSystem);
@@ -109,9 +110,13 @@ export function App() {
     void host.recentFiles().then(setRecent).catch(() => {});
   }, []);
   useEffect(() => {
+    let written: ScenarioFile | null = null;
     const timer = setInterval(() => {
       const current = docRef.current;
-      if (current.dirty) void host.autosaveWrite(serialiseScenario(current.file)).catch(() => {});
+      // Only unsaved work, and only when it changed since the last autosave.
+      if (!current.dirty || current.file === written) return;
+      written = current.file;
+      void host.autosaveWrite(serialiseScenario(current.file)).catch(() => {});
     }, AUTOSAVE_INTERVAL_MS);
     return () => clearInterval(timer);
   }, []);
@@ -268,7 +273,7 @@ export function App() {
 
   const result = engine.result;
   const scenario = engine.scenario;
-  const title = scenarioName(doc.file);
+  const title = documentTitle;
 
   return (
     <EditorContext.Provider value={editor}>

@@ -280,13 +280,20 @@ describe("the built app", () => {
       (window as unknown as { __brinefieldCapture: string }).__brinefieldCapture = scenarioText;
     }, text);
     const capture = await context.newPage();
+    capture.on("console", (m) => {
+      if (m.type() === "error" || /Content Security Policy/i.test(m.text())) consoleProblems.push(`capture: ${m.text()}`);
+    });
     await capture.goto(`${server.url}?capture=3d`);
     await capture.waitForFunction(() => document.body.dataset.ready === "true", undefined, { timeout: 60_000 });
     expect(await capture.locator(".inputs, [data-role=results]").count(), "no inputs or results on the capture route").toBe(0);
     const sample = await sampleCanvas(capture);
     expect(sample.width, "canvas fills the window width").toBeGreaterThanOrEqual(1000);
-    expect(sample.contentFraction, "capture is not blank").toBeGreaterThan(0.1);
+    expect(sample.contentFraction, "capture is not blank").toBeGreaterThan(0.33);
     await capture.screenshot({ path: join(artifacts, "app-capture-3d.png") });
     await context.close();
+  });
+
+  it("logged no console errors or Content-Security-Policy violations during the whole session", () => {
+    expect(consoleProblems, "console errors, page errors and CSP reports").toEqual([]);
   });
 });
