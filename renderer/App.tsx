@@ -27,6 +27,7 @@ import {
   type ScenarioFile,
 } from "./state/scenarioState";
 import { StartView } from "./start/StartView";
+import { historyPush, historyRedo, historyReplace, historyStart, historyUndo, type History } from "./state/history";
 import { ConfirmDialog, type ConfirmRequest } from "./ui/ConfirmDialog";
 import { PlumeView } from "./view3d/PlumeView";
 import { TrajectoryChart } from "./charts/TrajectoryChart";
@@ -64,7 +65,11 @@ export function fileFromText(text: string): { ok: true; file: ScenarioFile } | {
 }
 
 export function App() {
-  const [doc, setDoc] = useState<DocumentState>(initialDocument);
+  const [history, setHistory] = useState<History>(() => historyStart(initialDocument()));
+  const doc = history.present;
+  /** The file as last opened or saved: undoing back to it makes the document clean again. */
+  const savedFile = useRef<ScenarioFile | null>(doc.file);
+  const setDoc = useCallback((update: (d: DocumentState) => DocumentState) => setHistory((h) => historyReplace(h, update(h.present))), []);
   const [unitSystem, setUnitSystem] = useState<UnitSystem>(initialUnits);
   const [tab, setTab] = useState<"design" | "study">("design");
   const [showStart, setShowStart] = useState(false);
@@ -82,10 +87,23 @@ export function App() {
 
   /** Replaces the document (open, new, demo) and gives the 3D view a fresh camera. */
   const loadDocument = useCallback((next: DocumentState) => {
-    setDoc(next);
+    savedFile.current = next.file;
+    setHistory(historyStart(next));
     setDocumentKey((n) => n + 1);
   }, []);
-  const perform = useCallback(<I,>(action: Action<I>, input: I) => setDoc((state) => action.perform(state, input)), []);
+  const perform = useCallback(<I,>(action: Action<I>, input: I) => {
+    const path = typeof input === "object" && input !== null && "path" in input ? String((input as { path: unknown }).path) : "";
+    setHistory((h) => historyPush(h, action.perform(h.present, input), `${action.name}:${path}`, Date.now()));
+  }, []);
+  const step = useCallback((direction: "undo" | "redo") => {
+    // A field being edited keeps its own text; let go of it so it shows the restored value.
+    const active = document.activeElement;
+    if (active instanceof HTMLInputElement || active instanceof HTMLTextAreaElement) active.blur();
+    setHistory((h) => {
+      const moved = direction === "undo" ? historyUndo(h) : historyRedo(h);
+      return moved === h ? h : historyReplace(moved, { ...moved.present, dirty: moved.present.file !== savedFile.current });
+    });
+  }, []);
   const issues = useMemo(() => issuesByPath(engine.issues), [engine.issues]);
   const editor: Editor = useMemo(() => ({ file: doc.file, unitSystem, issues, perform }), [doc.file, unitSystem, issues, perform]);
 
@@ -167,6 +185,7 @@ export function App() {
     try {
       const path = await host.saveScenario(forceDialog ? null : current.path, serialiseScenario(current.file), suggestedFileName(current.file));
       if (path === null) return false;
+      savedFile.current = current.file;
       setDoc((d) => (d.revision === current.revision ? { ...d, path, dirty: false } : { ...d, path }));
       await host.autosaveClear().catch(() => {});
       void host.recentFiles().then(setRecent).catch(() => {});
@@ -176,7 +195,7 @@ export function App() {
       flash(`Could not save: ${error instanceof Error ? error.message : String(error)}`);
       return false;
     }
-  }, [flash]);
+  }, [flash, setDoc]);
 
   const commands = useMemo(() => ({
     newScenario: () => guardUnsaved("Start a new scenario", () => {
@@ -212,7 +231,9 @@ export function App() {
     const onKey = (e: KeyboardEvent) => {
       if (!(e.ctrlKey || e.metaKey) || e.altKey) return;
       const key = e.key.toLowerCase();
-      if (key === "n") commands.newScenario();
+      if (key === "z" && !e.shiftKey) step("undo");
+      else if ((key === "z" && e.shiftKey) || key === "y") step("redo");
+      else if (key === "n") commands.newScenario();
       else if (key === "o") commands.open();
       else if (key === "s" && e.shiftKey) commands.saveAs();
       else if (key === "s") commands.save();
@@ -239,7 +260,7 @@ export function App() {
       window.removeEventListener("keydown", onKey);
       unsubscribe();
     };
-  }, [commands]);
+  }, [commands, step]);
 
   // Drag and drop of a scenario file anywhere on the window.
   useEffect(() => {
@@ -286,6 +307,8 @@ export function App() {
             <button type="button" onClick={commands.open} title="Ctrl+O" data-command="open">Open…</button>
             <button type="button" onClick={commands.save} title="Ctrl+S" data-command="save">Save</button>
             <button type="button" onClick={commands.saveAs} title="Ctrl+Shift+S">Save as…</button>
+            <button type="button" onClick={() => step("undo")} disabled={history.past.length === 0} title="Undo (Ctrl+Z)" aria-label="Undo" data-command="undo">↶</button>
+            <button type="button" onClick={() => step("redo")} disabled={history.future.length === 0} title="Redo (Ctrl+Shift+Z)" aria-label="Redo" data-command="redo">↷</button>
             <button type="button" onClick={commands.exportReport} disabled={!result}>Export report</button>
             <button type="button" onClick={commands.exportCsv} disabled={!result}>Export CSV</button>
           </nav>
@@ -307,7 +330,7 @@ export function App() {
         {recovery ? (
           <div className="banner recovery" role="status">
             Unsaved work from {recovery.savedAt ? new Date(recovery.savedAt).toLocaleString() : "an earlier session"} was kept.
-            <button type="button" onClick={() => { loadText(recovery.text, null); setDoc((d) => ({ ...d, dirty: true })); setRecovery(null); }}>Recover it</button>
+            <button type="button" onClick={() => { loadText(recovery.text, null); savedFile.current = null; setDoc((d) => ({ ...d, dirty: true })); setRecovery(null); }}>Recover it</button>
             <button type="button" className="link-button" onClick={() => { void host.autosaveClear(); setRecovery(null); }}>Discard</button>
           </div>
         ) : null}

@@ -205,6 +205,19 @@ describe("the built app", () => {
     expect(await page.locator(".doc-title .dirty-dot").count(), "a freshly opened file is clean").toBe(0);
   });
 
+  it("undoes and redoes edits from the keyboard, and undoing to the saved text makes the document clean", async () => {
+    const angle = page.locator('input[data-path="diffuser.portAngle"]');
+    await angle.fill("50");
+    await expect.poll(() => page.locator(".doc-title .dirty-dot").count(), { message: "edited" }).toBe(1);
+    await page.keyboard.press("Control+z");
+    await expect.poll(() => angle.inputValue(), { message: "undo restores 30" }).toBe("30");
+    expect(await page.locator(".doc-title .dirty-dot").count(), "back at the opened file: clean").toBe(0);
+    await page.keyboard.press("Control+Shift+z");
+    await expect.poll(() => angle.inputValue(), { message: "redo restores 50" }).toBe("50");
+    await page.keyboard.press("Control+z");
+    await expect.poll(() => angle.inputValue(), { message: "undo again" }).toBe("30");
+  });
+
   it("exports an HTML report with the caution and the 3D view embedded", async () => {
     const [download] = await Promise.all([page.waitForEvent("download"), page.getByRole("button", { name: "Export report" }).click()]);
     const path = join(artifacts, "app-report.html");
