@@ -3,7 +3,8 @@
  * Monte Carlo, where re-reading unit strings thousands of times would be slow. Derived fields are kept
  * consistent: a uniform ambient's two-point profile follows its salinity, temperature and depth; the
  * flow split, layout and diffuser length follow the port count; spacing and length follow each other;
- * the effective port diameter follows the nominal one through the contraction coefficient.
+ * the effective port diameter follows the nominal one through the contraction coefficient; a
+ * `discharge.*` override removes the plant block (the discharge is then the stated one, not the plant's).
  *
  * An `ambient.*` override sets that field in the base ambient and in every ambient case.
  * A profile (non-uniform ambient) is shifted as a whole by `ambient.salinity` / `ambient.temperature`
@@ -124,7 +125,10 @@ export function withOverrides(s: Scenario, overrides: Overrides): Scenario {
     };
   }
   if (Object.keys(dischargePatch).length > 0) {
-    out = { ...out, discharge: { ...out.discharge, ...dischargePatch } };
+    // An overridden discharge no longer follows the plant's mass balance: drop the plant so results
+    // and messages speak of the discharge (result.discharge.fromPlant becomes false).
+    const { plant: _plant, ...rest } = out;
+    out = { ...rest, discharge: { ...out.discharge, ...dischargePatch } };
   }
   if (Object.keys(diffuserPatch).length > 0) {
     out = { ...out, diffuser: patchDiffuser(out.diffuser, diffuserPatch) };

@@ -6,7 +6,14 @@ import { readArgs } from "../args";
 import { loadJsonFile } from "../load";
 import { parseScenario } from "../../scenario/parse";
 import { parseStudy } from "../../study/study-file";
-import { columnsOf, compareVariant, flattenRow, sortRows, studyVariants, type FlatRow } from "../../study/compare";
+import {
+  columnsOf,
+  compareVariant,
+  flattenRow,
+  sortRows,
+  studyVariants,
+  type FlatRow,
+} from "../../study/compare";
 import { describeCases, expandCases } from "../../study/cases";
 import { evaluateScenario } from "../../study/evaluate";
 import { textTable } from "../../study/table";
@@ -36,33 +43,50 @@ Options:
   -h, --help      Show this help.`;
 
 async function run(argv: readonly string[], io: CliIO): Promise<number> {
-  const { values, positionals } = readArgs(argv, { json: { type: "boolean" }, csv: { type: "string" }, sort: { type: "string" } }, NAME);
+  const { values, positionals } = readArgs(
+    argv,
+    { json: { type: "boolean" }, csv: { type: "string" }, sort: { type: "string" } },
+    NAME,
+  );
   if (positionals.length !== 1) throw new CliError(`brinefield ${NAME}: give one study file.\n\n${HELP}`);
   const path = positionals[0]!;
   const st = parseStudy(loadJsonFile(path, io));
-  if (!st.ok) throw new CliError(`${path}: ${st.issues.length} problem(s) in the study:\n${st.issues.map((i) => `  - ${i.message}`).join("\n")}`);
-  const basePath = typeof st.study.base === "string" ? (isAbsolute(st.study.base) ? st.study.base : join(dirname(path), st.study.base)) : null;
+  if (!st.ok) {
+    throw new CliError(`${path}: ${st.issues.length} problem(s) in the study:\n${bullets(st.issues)}`);
+  }
+  const base = st.study.base;
+  const basePath = typeof base === "string" ? (isAbsolute(base) ? base : join(dirname(path), base)) : null;
   const baseRaw = basePath ? loadJsonFile(basePath, io) : st.study.base;
   const v = studyVariants(st.study, baseRaw, parseScenario);
   if (!v.ok) {
-    throw new CliError(`${basePath ?? path}: ${v.issues.length} problem(s) in the study's scenarios:\n${v.issues.map((i) => `  - ${i.message}`).join("\n")}`);
+    const n = v.issues.length;
+    const where = basePath ?? path;
+    throw new CliError(`${where}: ${n} problem(s) in the study's scenarios:\n${bullets(v.issues)}`);
   }
   const rows = v.variants.flatMap((x) => compareVariant(x, evaluateScenario));
   let flat: FlatRow[] = rows.map(flattenRow);
   if (values.sort) {
     const sorted = sortRows(flat, values.sort);
-    if (!sorted) throw new CliError(`brinefield ${NAME}: --sort ${values.sort}: no such column; columns: ${columnsOf(flat).join(", ")}`);
+    if (!sorted) {
+      const cols = columnsOf(flat).join(", ");
+      throw new CliError(`brinefield ${NAME}: --sort ${values.sort}: no such column; columns: ${cols}`);
+    }
     flat = sorted;
   }
   const columns = columnsOf(flat);
   if (values.csv) io.writeFile(values.csv, csvFormat(flat as never, columns as never));
   const notes = v.variants.map((x) => `${x.name}: ${describeCases(expandCases(x.scenario), x.scenario)}`);
   if (values.json) {
-    io.stdout(JSON.stringify({ format: "brinefield-compare", version: 1, study: st.study.name, columns, rows: flat, notes }, null, 2) + "\n");
+    const study = st.study.name;
+    const json = { format: "brinefield-compare", version: 1, study, columns, rows: flat, notes };
+    io.stdout(JSON.stringify(json, null, 2) + "\n");
     return 0;
   }
   const methodCols = columns.filter((c) => /(MaxRise|ImpactDistance|ImpactDilution)$/.test(c));
-  const headers = ["variant", "case", "edge dilution", "required", "margin", "verdict", "warnings", ...methodCols.map(label)];
+  const headers = [
+    ...["variant", "case", "edge dilution", "required", "margin", "verdict", "warnings"],
+    ...methodCols.map(label),
+  ];
   const body = flat.map((r) => [
     r.variant as string,
     r.case === "worst case" ? `worst case (${r.governingCase})` : (r.case as string),
@@ -81,8 +105,17 @@ async function run(argv: readonly string[], io: CliIO): Promise<number> {
 function label(col: string): string {
   const m = /^(.*?)(MaxRise|ImpactDistance|ImpactDilution)$/.exec(col)!;
   const method = m[1]!.replace(/[A-Z]/g, (c) => `-${c.toLowerCase()}`);
-  const what = { MaxRise: "max rise (m)", ImpactDistance: "impact dist. (m)", ImpactDilution: "impact dilution" }[m[2] as "MaxRise"];
+  const names = {
+    MaxRise: "max rise (m)",
+    ImpactDistance: "impact dist. (m)",
+    ImpactDilution: "impact dilution",
+  };
+  const what = names[m[2] as keyof typeof names];
   return `${method} ${what}`;
+}
+
+function bullets(issues: readonly { message: string }[]): string {
+  return issues.map((i) => `  - ${i.message}`).join("\n");
 }
 
 export const command: CliCommand = {

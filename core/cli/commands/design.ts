@@ -14,7 +14,13 @@ import {
 } from "../../study/design";
 import { textTable } from "../../study/table";
 import { formatNumber } from "../../units";
-import { EXIT_CANCELLED, isCancelled, pointsOnWorkers, progressBar, workersOption } from "../workers/run-study";
+import {
+  EXIT_CANCELLED,
+  isCancelled,
+  pointsOnWorkers,
+  progressBar,
+  workersOption,
+} from "../workers/run-study";
 
 const NAME = "design";
 
@@ -34,7 +40,8 @@ numbers or values with units, e.g. "design": { "maxExitVelocity": "5 m/s", "maxL
                          (3–6 m/s is the typical range, Bleninger & Jirka 2008, from memory)
   --max-length L         Longest diffuser (default: the scenario's diffuser length, or 50 m for a
                          single port).                                      design.maxLength
-  --max-ports N          Try 1 … N ports (default 12).                      design.maxPorts / design.portCounts
+  --max-ports N          Try 1 … N ports (default 12).                      design.maxPorts
+                         (or design.portCounts, a list such as [2, 4, 6, 8])
   --angles A,B,…         Port angles above horizontal (default 30,45,60).   design.portAngles
   --port-heights H,…     Port heights above the seabed (default: the scenario's). design.portHeights
   --diameter-steps N     Diameters tried per port count (default 5).        design.diameterSteps
@@ -85,8 +92,12 @@ async function run(argv: readonly string[], io: CliIO): Promise<number> {
   const parsed = parseScenario(raw);
   if (!parsed.ok) throw new CliError(formatIssues(path, parsed.issues));
   let scenario = parsed.scenario;
-  if (values["no-slack-water"]) scenario = { ...scenario, options: { ...scenario.options, addSlackWater: false } };
-  const num = (v: string | undefined) => (v === undefined ? undefined : Number.isFinite(Number(v)) ? Number(v) : v);
+  if (values["no-slack-water"]) {
+    scenario = { ...scenario, options: { ...scenario.options, addSlackWater: false } };
+  }
+  // Plain numbers are SI; anything else (e.g. "5 m/s") is read with its unit by the constraint schema.
+  const num = (v: string | undefined) =>
+    v === undefined ? undefined : Number.isFinite(Number(v)) ? Number(v) : v;
   const flags = Object.fromEntries(
     Object.entries({
       minExitVelocity: num(values["min-velocity"]),
@@ -102,17 +113,25 @@ async function run(argv: readonly string[], io: CliIO): Promise<number> {
   );
   const block = (raw as { design?: unknown }).design;
   const cons = designConstraintsFrom(scenario, block, flags);
-  if (!cons.ok) throw new CliError(`${path}: design constraints:\n${cons.issues.map((i) => `  - ${i.path}: ${i.message}`).join("\n")}`);
+  if (!cons.ok) {
+    const list = cons.issues.map((i) => `  - ${i.path}: ${i.message}`).join("\n");
+    throw new CliError(`${path}: design constraints:\n${list}`);
+  }
   const c = cons.constraints;
   const candidates = designCandidates(scenario, c);
   if (candidates.length === 0) {
-    throw new CliError(`brinefield ${NAME}: no candidate geometry fits the constraints (exit velocity ${c.minExitVelocity}–${c.maxExitVelocity} m/s, length ≤ ${c.maxLength} m); widen them.`, 1);
+    throw new CliError(
+      `brinefield ${NAME}: no candidate geometry fits the constraints (exit velocity ` +
+        `${c.minExitVelocity}–${c.maxExitVelocity} m/s, length ≤ ${c.maxLength} m); widen them.`,
+      1,
+    );
   }
   const bar = progressBar(io, "Design search", candidates.length);
   const t0 = performance.now();
   let points;
   try {
-    points = await pointsOnWorkers(scenario, candidates.map(candidateOverrides), workers, (d) => bar.update(d));
+    const list = candidates.map(candidateOverrides);
+    points = await pointsOnWorkers(scenario, list, workers, (d) => bar.update(d));
   } catch (err) {
     bar.finish();
     if (isCancelled(err)) {
@@ -152,21 +171,29 @@ async function run(argv: readonly string[], io: CliIO): Promise<number> {
   }
   const out = [
     `Design search: ${scenario.name}`,
-    `${candidates.length} candidates tried, ${passing} meet every limit under every case (${formatNumber(elapsedSeconds)} s).`,
+    `${candidates.length} candidates tried, ${passing} meet every limit under every case ` +
+      `(${formatNumber(elapsedSeconds)} s).`,
     casesNote,
-    `Constraints: exit velocity ${c.minExitVelocity}–${c.maxExitVelocity} m/s, diffuser length ≤ ${formatNumber(c.maxLength)} m, ` +
-      `angles ${c.portAngles.join(", ")}°, port height ${c.portHeights.map((h) => formatNumber(h)).join(", ")} m, ` +
+    `Constraints: exit velocity ${c.minExitVelocity}–${c.maxExitVelocity} m/s, ` +
+      `diffuser length ≤ ${formatNumber(c.maxLength)} m, angles ${c.portAngles.join(", ")}°, ` +
+      `port height ${c.portHeights.map((h) => formatNumber(h)).join(", ")} m, ` +
       `jet's upper edge ≥ ${c.surfaceClearance} m below the surface.`,
     "",
   ];
   if (designs.length === 0) {
-    out.push("No design meets every limit under every case. Try more ports, a longer diffuser or a wider velocity range.");
+    out.push(
+      "No design meets every limit under every case. " +
+        "Try more ports, a longer diffuser or a wider velocity range.",
+    );
     io.stdout(out.join("\n") + "\n");
     return 1;
   }
   out.push(
     textTable(
-      ["#", "ports", "diameter (m)", "angle (°)", "spacing (m)", "length (m)", "height (m)", "exit vel. (m/s)", "worst margin", "governing case", "best for"],
+      [
+        ...["#", "ports", "diameter (m)", "angle (°)", "spacing (m)", "length (m)", "height (m)"],
+        ...["exit vel. (m/s)", "worst margin", "governing case", "best for"],
+      ],
       designs.map((d) => [
         d.rank,
         d.candidate.portCount,

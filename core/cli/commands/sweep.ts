@@ -8,15 +8,28 @@ import { parseScenario } from "../../scenario/parse";
 import type { Scenario } from "../../scenario/types";
 import { describeCases, expandCases } from "../../study/cases";
 import { parseStudy } from "../../study/study-file";
-import { axisFromParts, eosCrossings, parseSweepAxis, sweepGrid, sweepRows, type SweepAxis } from "../../study/sweep";
+import {
+  axisFromParts,
+  eosCrossings,
+  parseSweepAxis,
+  sweepGrid,
+  sweepRows,
+  type SweepAxis,
+} from "../../study/sweep";
 import { textTable } from "../../study/table";
 import { formatNumber } from "../../units";
-import { EXIT_CANCELLED, isCancelled, pointsOnWorkers, progressBar, workersOption } from "../workers/run-study";
+import {
+  EXIT_CANCELLED,
+  isCancelled,
+  pointsOnWorkers,
+  progressBar,
+  workersOption,
+} from "../workers/run-study";
 
 const NAME = "sweep";
 
-const HELP = `Usage: brinefield sweep <scenario.json | study.json> --vary path=from:to:steps [--vary path2=from:to:steps]
-                       [--json] [--csv out.csv] [--workers K]
+const HELP = `Usage: brinefield sweep <scenario.json | study.json> --vary path=from:to:steps
+                       [--vary path2=from:to:steps] [--json] [--csv out.csv] [--workers K]
 
 Runs the screening pipeline over a grid of one or two inputs and reports, per point, the dilution at the
 mixing-zone edge, the margin (edge ÷ required dilution), the verdict, the governing ambient case and the
@@ -46,11 +59,15 @@ function loadTarget(path: string, io: CliIO): { scenario: Scenario; studyAxes: S
     return { scenario: r.scenario, studyAxes: [] };
   }
   const st = parseStudy(raw);
-  if (!st.ok) throw new CliError(`${path}: ${st.issues.length} problem(s) in the study:\n${st.issues.map((i) => `  - ${i.message}`).join("\n")}`);
+  if (!st.ok) {
+    const list = st.issues.map((i) => `  - ${i.message}`).join("\n");
+    throw new CliError(`${path}: ${st.issues.length} problem(s) in the study:\n${list}`);
+  }
   const base = st.study.base;
-  const baseRaw = typeof base === "string" ? loadJsonFile(isAbsolute(base) ? base : join(dirname(path), base), io) : base;
+  const basePath = typeof base === "string" ? (isAbsolute(base) ? base : join(dirname(path), base)) : null;
+  const baseRaw = basePath ? loadJsonFile(basePath, io) : base;
   const r = parseScenario(baseRaw);
-  if (!r.ok) throw new CliError(formatIssues(typeof st.study.base === "string" ? st.study.base : `${path} (base)`, r.issues));
+  if (!r.ok) throw new CliError(formatIssues(basePath ?? `${path} (base)`, r.issues));
   const axes = (st.study.sweep?.vary ?? []).map((v, i) => {
     const a = axisFromParts(v.path, v.from, v.to, v.steps);
     if (!a.ok) throw new CliError(`${path}: sweep.vary.${i}: ${a.message}`);
@@ -62,10 +79,17 @@ function loadTarget(path: string, io: CliIO): { scenario: Scenario; studyAxes: S
 async function run(argv: readonly string[], io: CliIO): Promise<number> {
   const { values, positionals } = readArgs(
     argv,
-    { vary: { type: "string", multiple: true }, json: { type: "boolean" }, csv: { type: "string" }, workers: { type: "string" } },
+    {
+      vary: { type: "string", multiple: true },
+      json: { type: "boolean" },
+      csv: { type: "string" },
+      workers: { type: "string" },
+    },
     NAME,
   );
-  if (positionals.length !== 1) throw new CliError(`brinefield ${NAME}: give one scenario or study file.\n\n${HELP}`);
+  if (positionals.length !== 1) {
+    throw new CliError(`brinefield ${NAME}: give one scenario or study file.\n\n${HELP}`);
+  }
   const workers = workersOption(values.workers, io, NAME);
   const { scenario, studyAxes } = loadTarget(positionals[0]!, io);
   const axes =
@@ -76,8 +100,12 @@ async function run(argv: readonly string[], io: CliIO): Promise<number> {
           return a.axis;
         })
       : studyAxes;
-  if (axes.length < 1 || axes.length > 2) throw new CliError(`brinefield ${NAME}: give one or two --vary options.\n\n${HELP}`);
-  if (axes.length === 2 && axes[0]!.path === axes[1]!.path) throw new CliError(`brinefield ${NAME}: ${axes[0]!.path} is varied twice`);
+  if (axes.length < 1 || axes.length > 2) {
+    throw new CliError(`brinefield ${NAME}: give one or two --vary options.\n\n${HELP}`);
+  }
+  if (axes.length === 2 && axes[0]!.path === axes[1]!.path) {
+    throw new CliError(`brinefield ${NAME}: ${axes[0]!.path} is varied twice`);
+  }
   const grid = sweepGrid(axes);
   const bar = progressBar(io, "Sweep", grid.length);
   const t0 = performance.now();
@@ -108,14 +136,21 @@ async function run(argv: readonly string[], io: CliIO): Promise<number> {
     ...(r.error ? { error: r.error } : {}),
   }));
   if (values.csv) {
-    const cols = [...axes.map((a) => a.path), "governingCase", "edgeDilution", "requiredDilution", "margin", "pass", "equationOfState", "error"];
+    const cols = [
+      ...axes.map((a) => a.path),
+      ...["governingCase", "edgeDilution", "requiredDilution", "margin", "pass", "equationOfState", "error"],
+    ];
     io.writeFile(values.csv, csvFormat(flat as Record<string, unknown>[] as never, cols as never));
   }
-  const crossingText = crossings.map(
-    (c) =>
-      `Equation of state changes from ${c.from} to ${c.to} between ${c.path} = ${formatNumber(c.between[0][c.path]!)} and ${formatNumber(c.between[1][c.path]!)}` +
-      (axes.length === 2 ? ` (${axes.find((a) => a.path !== c.path)!.path} = ${formatNumber(c.between[0][axes.find((a) => a.path !== c.path)!.path]!)})` : ""),
-  );
+  const crossingText = crossings.map((c) => {
+    const [a, b] = c.between;
+    const other = axes.find((x) => x.path !== c.path)?.path;
+    return (
+      `Equation of state changes from ${c.from} to ${c.to} between ` +
+      `${c.path} = ${formatNumber(a[c.path]!)} and ${formatNumber(b[c.path]!)}` +
+      (other ? ` (${other} = ${formatNumber(a[other]!)})` : "")
+    );
+  });
   if (values.json) {
     io.stdout(
       JSON.stringify(
@@ -135,13 +170,17 @@ async function run(argv: readonly string[], io: CliIO): Promise<number> {
     );
     return 0;
   }
-  const out = [`Sweep: ${scenario.name} — ${grid.length} points, ${formatNumber(elapsedSeconds)} s`, casesNote, ""];
+  const out = [`Sweep: ${scenario.name} — ${grid.length} points, ${formatNumber(elapsedSeconds)} s`];
+  out.push(casesNote, "");
   out.push(
     textTable(
-      [...axes.map((a) => a.path), "governing case", "edge dilution", "required", "margin", "verdict", "equation of state"],
+      [
+        ...axes.map((a) => a.path),
+        ...["governing case", "edge dilution", "required", "margin", "verdict", "equation of state"],
+      ],
       rows.map((r) => [
         ...axes.map((a) => r.values[a.path]!),
-        r.governingCase ?? `error: ${r.error}`,
+        r.governingCase ?? "(not run, see below)",
         r.edgeDilution,
         r.requiredDilution,
         r.margin,
@@ -150,6 +189,12 @@ async function run(argv: readonly string[], io: CliIO): Promise<number> {
       ]),
     ),
   );
+  const failed = rows.filter((r) => r.error !== undefined);
+  for (const r of failed.slice(0, 5)) {
+    const at = axes.map((a) => `${a.path} = ${formatNumber(r.values[a.path]!)}`).join(", ");
+    out.push(`Not run at ${at}: ${r.error}`);
+  }
+  if (failed.length > 5) out.push(`… and ${failed.length - 5} more points not run.`);
   if (crossingText.length > 0) out.push(...crossingText);
   else out.push("The equation of state is the same at every point.");
   io.stdout(out.join("\n") + "\n");

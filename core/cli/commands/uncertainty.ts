@@ -7,7 +7,13 @@ import { describeCases, expandCases } from "../../study/cases";
 import { seedFromText } from "../../study/random";
 import { textTable } from "../../study/table";
 import { formatNumber } from "../../units";
-import { EXIT_CANCELLED, isCancelled, monteCarloOnWorkers, progressBar, workersOption } from "../workers/run-study";
+import {
+  EXIT_CANCELLED,
+  isCancelled,
+  monteCarloOnWorkers,
+  progressBar,
+  workersOption,
+} from "../workers/run-study";
 
 const NAME = "uncertainty";
 const DEFAULT_RUNS = 1000;
@@ -35,7 +41,8 @@ Options:
   --seed S       Seed, a whole number 0 … 4294967295 (default ${DEFAULT_SEED}). The same seed gives the same
                  results whatever the number of workers: run i always draws from stream i of the seed.
   --workers K    Worker threads (default: all cores).
-  --json         Print the results as JSON (keys p5, p50, p95, probabilityOfExceedance; timings in …Seconds).
+  --json         Print the results as JSON (keys p5, p50, p95, probabilityOfExceedance;
+                 timings end in Seconds).
   -h, --help     Show this help.
 
 A progress bar is drawn on stderr when it is a terminal. Ctrl-C cancels cleanly (exit code 130).`;
@@ -53,7 +60,12 @@ function statsJson(s: MonteCarloStats) {
 async function run(argv: readonly string[], io: CliIO): Promise<number> {
   const { values, positionals } = readArgs(
     argv,
-    { runs: { type: "string" }, seed: { type: "string" }, workers: { type: "string" }, json: { type: "boolean" } },
+    {
+      runs: { type: "string" },
+      seed: { type: "string" },
+      workers: { type: "string" },
+      json: { type: "boolean" },
+    },
     NAME,
   );
   if (positionals.length !== 1) throw new CliError(`brinefield ${NAME}: give one scenario file.\n\n${HELP}`);
@@ -62,12 +74,16 @@ async function run(argv: readonly string[], io: CliIO): Promise<number> {
     throw new CliError(`brinefield ${NAME}: --runs ${values.runs} must be a whole number from 1 to 10000000`);
   }
   const seed = values.seed === undefined ? DEFAULT_SEED : seedFromText(values.seed);
-  if (seed === null) throw new CliError(`brinefield ${NAME}: --seed ${values.seed} must be a whole number from 0 to 4294967295`);
+  if (seed === null) {
+    const problem = "must be a whole number from 0 to 4294967295";
+    throw new CliError(`brinefield ${NAME}: --seed ${values.seed} ${problem}`);
+  }
   const workers = Math.min(workersOption(values.workers, io, NAME), runs);
   const scenario = loadScenarioFile(positionals[0]!, io);
   const planned = planMonteCarlo(scenario, runs, seed);
   if (!planned.ok) {
-    throw new CliError(`${positionals[0]}: the uncertainty inputs cannot be used:\n${planned.issues.map((i) => `  - ${i.path}: ${i.message}`).join("\n")}`);
+    const list = planned.issues.map((i) => `  - ${i.path}: ${i.message}`).join("\n");
+    throw new CliError(`${positionals[0]}: the uncertainty inputs cannot be used:\n${list}`);
   }
   const plan = planned.plan;
   const bar = progressBar(io, "Monte Carlo", runs);
@@ -114,8 +130,12 @@ async function run(argv: readonly string[], io: CliIO): Promise<number> {
   }
   const out: string[] = [];
   out.push(`Monte Carlo: ${scenario.name}`);
-  out.push(`${summary.runs} runs, seed ${summary.seed}, ${workers} worker${workers === 1 ? "" : "s"}, ${formatNumber(elapsedSeconds)} s`);
-  if (summary.usedDefaultSpreads) out.push("NOTE: the scenario states no uncertain inputs; default spreads were used (see below).");
+  const plural = workers === 1 ? "" : "s";
+  const took = formatNumber(elapsedSeconds);
+  out.push(`${summary.runs} runs, seed ${summary.seed}, ${workers} worker${plural}, ${took} s`);
+  if (summary.usedDefaultSpreads) {
+    out.push("NOTE: the scenario states no uncertain inputs; default spreads were used (see below).");
+  }
   out.push("Inputs:");
   for (const n of summary.notes) out.push(`  ${n}`);
   out.push(casesNote, "");
@@ -130,7 +150,9 @@ async function run(argv: readonly string[], io: CliIO): Promise<number> {
   ]);
   out.push("Dilution at the mixing-zone edge:");
   out.push(textTable(["case", "P5", "P50", "P95", "margin P5", "P(not meeting limit)", "failed runs"], rows));
-  if (summary.clampedSamples > 0) out.push(`${summary.clampedSamples} samples fell outside their physical bounds and were clamped.`);
+  if (summary.clampedSamples > 0) {
+    out.push(`${summary.clampedSamples} samples fell outside their physical bounds and were clamped.`);
+  }
   if (summary.firstError) out.push(`Some runs failed; first: ${summary.firstError}`);
   io.stdout(out.join("\n") + "\n");
   return 0;
@@ -138,7 +160,7 @@ async function run(argv: readonly string[], io: CliIO): Promise<number> {
 
 export const command: CliCommand = {
   name: NAME,
-  summary: "Monte Carlo over uncertain inputs: P5/P50/P95 edge dilution and probability of not meeting the limit",
+  summary: "Monte Carlo over uncertain inputs: P5/P50/P95 edge dilution, chance of not meeting the limit",
   help: HELP,
   run,
 };

@@ -66,6 +66,19 @@ describe("withOverrides()", () => {
     expect(Object.isFrozen(p.diffuser), "the result is frozen like a parsed scenario").toBe(true);
   });
 
+  it("drops the plant block when the discharge is overridden (the plant's mass balance no longer applies)", () => {
+    const raw = fourPortRaw();
+    delete raw.discharge;
+    raw.plant = { productFlow: 0.2, recovery: 0.45, feedSalinity: 36, saltRejection: 0.996, feedTemperature: 22 };
+    const s = scenarioFrom(raw);
+    expect(s.plant, "the parsed scenario has a plant").toBeDefined();
+    const p = withOverrides(s, { "discharge.salinity": 60 });
+    expect(p.plant, "plant removed").toBeUndefined();
+    expect(p.discharge.salinity, "discharge overridden").toBe(60);
+    expect(p.discharge.flow, "other discharge fields kept from the plant balance").toBe(s.discharge.flow);
+    expect(withOverrides(s, { "ambient.depth": 20 }).plant, "other overrides keep the plant").toBeDefined();
+  });
+
   it("rejects unknown paths and out-of-range or fractional values, naming the path", () => {
     expect(() => withOverrides(base, { "ambient.colour": 1 }), "unknown path").toThrow(/ambient\.colour/);
     expect(() => withOverrides(base, { "diffuser.portCount": 2.5 }), "fractional count").toThrow(OverrideError);
