@@ -89,6 +89,8 @@ export function App() {
   const loadDocument = useCallback((next: DocumentState) => {
     savedFile.current = next.file;
     setHistory(historyStart(next));
+    // The user opened something else (after agreeing to drop unsaved work): the autosave is obsolete.
+    void host.autosaveClear().catch(() => {});
     setDocumentKey((n) => n + 1);
   }, []);
   const perform = useCallback(<I,>(action: Action<I>, input: I) => {

@@ -4,6 +4,10 @@ import { getAtPath, isPlainObject } from "../state/scenarioState";
 import { useEditor } from "./EditorContext";
 import { QuantityField, SectionIssues, TextField } from "./fields";
 
+function constituentUnit(c: unknown): string {
+  return isPlainObject(c) && typeof c["unit"] === "string" && c["unit"].trim() !== "" ? c["unit"] : "–";
+}
+
 export function DischargeSection() {
   const editor = useEditor();
   const plant = isPlainObject(editor.file["plant"]);
@@ -65,12 +69,12 @@ export function DischargeSection() {
       <div className="sub-table">
         <h3>Other constituents</h3>
         {Array.isArray(constituents) && constituents.length ? (
-          constituents.map((_, i) => (
+          constituents.map((c, i) => (
             <div className="row-fields" key={i}>
               <TextField path={`discharge.constituents.${i}.name`} label="Name" />
-              <QuantityField path={`discharge.constituents.${i}.concentration`} label="In discharge" kind="ratio" />
+              <QuantityField path={`discharge.constituents.${i}.concentration`} label="In discharge" kind="ratio" unitText={constituentUnit(c)} />
               <TextField path={`discharge.constituents.${i}.unit`} label="Unit" placeholder="mg/L" />
-              <QuantityField path={`discharge.constituents.${i}.background`} label="Background" kind="ratio" />
+              <QuantityField path={`discharge.constituents.${i}.background`} label="Background" kind="ratio" unitText={constituentUnit(c)} />
               <button type="button" className="icon-button" aria-label={`Remove constituent ${i + 1}`} onClick={() => editor.perform(removeArrayItem, { path: "discharge.constituents", index: i })}>
                 ×
               </button>

@@ -4,6 +4,20 @@ import { getAtPath, isPlainObject } from "../state/scenarioState";
 import { useEditor } from "./EditorContext";
 import { ChoiceField, QuantityField, SectionIssues, TextField } from "./fields";
 
+/** Unit a limit is stated in: its own, else g/kg for salinity, °C for temperature, else the constituent's. */
+export function limitUnit(file: unknown, limit: unknown): string {
+  if (!isPlainObject(limit)) return "–";
+  if (typeof limit["unit"] === "string" && limit["unit"].trim() !== "") return limit["unit"];
+  const name = typeof limit["constituent"] === "string" ? limit["constituent"].trim().toLowerCase() : "";
+  if (name === "salinity") return "g/kg";
+  if (name === "temperature") return "°C";
+  const constituents = getAtPath(file, "discharge.constituents");
+  const match = Array.isArray(constituents)
+    ? constituents.find((c) => isPlainObject(c) && typeof c["name"] === "string" && c["name"].trim().toLowerCase() === name)
+    : undefined;
+  return isPlainObject(match) && typeof match["unit"] === "string" ? match["unit"] : "–";
+}
+
 export function MixingZoneSection() {
   const editor = useEditor();
   const limits = getAtPath(editor.file, "mixingZone.limits");
@@ -61,9 +75,9 @@ export function MixingZoneSection() {
                 </select>
               </div>
               {byIncrease ? (
-                <QuantityField path={`${base}.maxIncrease`} label="Max increase" kind="ratio" />
+                <QuantityField path={`${base}.maxIncrease`} label="Max increase" kind="ratio" unitText={limitUnit(editor.file, limit)} />
               ) : (
-                <QuantityField path={`${base}.maxConcentration`} label="Max concentration" kind="ratio" />
+                <QuantityField path={`${base}.maxConcentration`} label="Max concentration" kind="ratio" unitText={limitUnit(editor.file, limit)} />
               )}
               <TextField path={`${base}.unit`} label="Unit" placeholder="g/kg" />
               <TextField path={`${base}.basis`} label="Basis" placeholder="permit, rule…" />

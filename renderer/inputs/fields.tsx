@@ -33,14 +33,16 @@ export interface QuantityFieldProps {
   readonly hint?: string;
   /** Placeholder when the value is optional and absent. */
   readonly placeholder?: string;
+  /** Unit to show for a free-unit quantity (a constituent's "mg/L"); plain numbers are taken in it. */
+  readonly unitText?: string;
 }
 
-export function QuantityField({ path, label, kind, hint, placeholder }: QuantityFieldProps) {
+export function QuantityField({ path, label, kind, hint, placeholder, unitText }: QuantityFieldProps) {
   const editor = useEditor();
   const id = useId();
   const raw = getAtPath(editor.file, path);
   const [editing, setEditing] = useState<string | null>(null);
-  const unit = displayUnit(kind, editor.unitSystem);
+  const unit = unitText ?? displayUnit(kind, editor.unitSystem);
   const errors = issuesUnder(editor.issues, path, true);
   const shown = editing ?? displayText(raw, kind, editor.unitSystem);
   const note = editing === null ? enteredNote(raw, kind, editor.unitSystem) : null;

@@ -84,6 +84,9 @@ export function PlumeView(props: PlumeViewProps) {
   const hostRef = useRef<HTMLDivElement | null>(null);
   const stageRef = useRef<Stage | null>(null);
   const firstFrameSent = useRef(false);
+  // Held in a ref so a new callback identity never rebuilds the renderer.
+  const onFirstFrameRef = useRef(onFirstFrame);
+  onFirstFrameRef.current = onFirstFrame;
   const presetRef = useRef<ViewPreset>("perspective");
   const placedForDocument = useRef<number | undefined>(documentKey);
   const [failure, setFailure] = useState<string | null>(null);
@@ -97,10 +100,10 @@ export function PlumeView(props: PlumeViewProps) {
       stage.renderer.render(stage.scene, stage.camera);
       if (stage.content && !firstFrameSent.current) {
         firstFrameSent.current = true;
-        onFirstFrame?.();
+        onFirstFrameRef.current?.();
       }
     });
-  }, [onFirstFrame]);
+  }, []);
 
   // Renderer, camera, controls: created once.
   useEffect(() => {
