@@ -81,16 +81,35 @@ export function SweepHeatmap({
   const lo = Math.log10(Math.min(...finite, 0.5));
   const hi = Math.log10(Math.max(...finite, 2));
   const colour = scaleSequential(interpolateRdYlGn).domain([Math.min(lo, -Math.max(Math.abs(lo), Math.abs(hi))), Math.max(hi, Math.max(Math.abs(lo), Math.abs(hi)))]);
-  // The limit contour: margin = 1 (edge dilution equals the required dilution), on the cell-centre grid.
-  const field = grid.map((v) => (Number.isFinite(v) ? v : 0));
-  const limit = nx > 1 && ny > 1 ? contours().size([nx, ny]).thresholds([1])(field)[0] : null;
+  // The limit contour: margin = 1 (edge dilution equals the required dilution). d3-contour closes every
+  // ring along the grid's border, which would draw the plot's frame as if it were the limit; the grid is
+  // therefore padded by one replicated cell on each side and the padding is clipped away.
+  const px = nx + 2;
+  const py = ny + 2;
+  const field = new Array<number>(px * py);
+  for (let j = 0; j < py; j++) {
+    for (let i = 0; i < px; i++) {
+      const v = grid[Math.min(ny - 1, Math.max(0, j - 1)) * nx + Math.min(nx - 1, Math.max(0, i - 1))]!;
+      field[j * px + i] = Number.isFinite(v) ? v : 0; // a point that could not run counts as failing
+    }
+  }
+  const hasPass = field.some((v) => v >= 1);
+  const hasFail = field.some((v) => v < 1);
+  const limit = nx > 1 && ny > 1 && hasPass && hasFail ? contours().size([px, py]).thresholds([1])(field)[0] : null;
   // d3-contour places value (i, j) at (i + 0.5, j + 0.5) in grid units: scaling by the cell size maps
-  // the contour onto the cell centres of the heat map.
+  // the contour onto the cell centres of the heat map (after removing the one-cell padding).
   const project = geoPath(null);
+  const clipId = `study-heatmap-clip-${nx}-${ny}`;
   return (
     <div className="chart study-chart" ref={ref} data-role="sweep-heatmap">
       <svg width={w} height={h} role="img" aria-label={`Margin over ${a.label} and ${b.label}, limit contour marked`}>
-        <g transform={`translate(${M.left},${h - M.bottom}) scale(1,-1)`}>
+        <defs>
+          <clipPath id={clipId}>
+            {/* In the heat map's own (translated, y-up) coordinates. */}
+            <rect x={0} y={0} width={w - M.left - M.right} height={h - M.top - M.bottom} />
+          </clipPath>
+        </defs>
+        <g transform={`translate(${M.left},${h - M.bottom}) scale(1,-1)`} clipPath={`url(#${clipId})`}>
           {grid.map((v, k) => (
             <rect
               key={k}
@@ -104,7 +123,7 @@ export function SweepHeatmap({
             </rect>
           ))}
           {limit ? (
-            <g transform={`scale(${cw},${ch})`}>
+            <g transform={`scale(${cw},${ch}) translate(-1,-1)`}>
               <path d={project(limit) ?? ""} className="study-contour" vectorEffect="non-scaling-stroke" />
             </g>
           ) : null}
