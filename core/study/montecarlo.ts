@@ -7,8 +7,9 @@
  * Ambient cases: a distribution on an `ambient.*` path describes the base ambient. In each ambient case
  * the sample is applied as a deviation from the base value (added; multiplied for lognormal), so cases
  * keep their differences; the slack-water case keeps zero current. Samples outside the physical bounds
- * of a path (e.g. negative current) are clamped and counted. Each run uses the same samples in every
- * case (common random numbers), so the worst case of a run is the lowest-margin case under one draw.
+ * of a path (e.g. negative current) are clamped and counted; azimuths wrap around. Each run uses the
+ * same samples in every case (common random numbers), so the worst case of a run is the lowest-margin
+ * case under one draw.
  */
 import type { Scenario } from "../scenario/types";
 import { expandCases } from "./cases";
@@ -139,6 +140,10 @@ export function runMonteCarloChunk(
           v = d.distribution === "lognormal" && ref > 0 ? own * (v / ref) : own + (v - ref);
         }
         const info = OVERRIDE_PATHS[d.path]!;
+        if (info.kind === "angle" && info.max === 360) {
+          overrides[d.path] = ((v % 360) + 360) % 360; // azimuths wrap around instead of clamping
+          return;
+        }
         const low = info.exclusiveMin ? info.min + Number.EPSILON : info.min;
         if (v < low || v > info.max) {
           clamped++;

@@ -168,6 +168,21 @@ describe("Monte Carlo — against the pipeline", () => {
     ]);
   });
 
+  it("wraps a sampled current direction around north instead of clamping it", () => {
+    const s = withUncertainty({ options: { addSlackWater: false } }, [
+      { path: "ambient.currentDirection", distribution: "uniform", min: 340, max: 380 },
+    ]);
+    const seen: number[] = [];
+    runMonteCarloChunk(s, plan(s, 400, 2), 0, 400, (x) => {
+      seen.push(x.ambient.currentDirection);
+      return identityEvaluator(1, () => 1)(x);
+    });
+    expect(seen.every((d) => d >= 0 && d < 360), "directions stay in [0, 360)").toBe(true);
+    // Half of U(340, 380) lies past 360° and wraps to [0, 20): about 200 of 400 draws (binomial sd 10).
+    const wrapped = seen.filter((d) => d < 20).length;
+    expect(Math.abs(wrapped - 200), `wrapped draws ${wrapped}`).toBeLessThan(50);
+  });
+
   it("rejects an impossible distribution naming the input", () => {
     const s = withUncertainty({}, [{ path: "discharge.flow", distribution: "uniform", min: 0.3, max: 0.2 }]);
     const p = planMonteCarlo(s, 10, 1);
