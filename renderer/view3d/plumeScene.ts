@@ -95,6 +95,12 @@ const LABEL_SCREEN_HEIGHT = 0.026;
 function textSprite(text: string, scale = 1, colour = "#1d2733"): Sprite {
   const heightWorld = LABEL_SCREEN_HEIGHT * scale;
   const fontPx = 48;
+  if (typeof document === "undefined") {
+    // No DOM (scene built in a test or a worker): keep the label's place, without text.
+    const blank = new Sprite(new SpriteMaterial({ transparent: true, opacity: 0, sizeAttenuation: false }));
+    blank.name = `label:${text}`;
+    return blank;
+  }
   const canvas = document.createElement("canvas");
   const ctx = canvas.getContext("2d");
   const font = `600 ${fontPx}px "Segoe UI", "DejaVu Sans", "Noto Sans", Arial, sans-serif`;
@@ -119,6 +125,7 @@ function textSprite(text: string, scale = 1, colour = "#1d2733"): Sprite {
   const sprite = new Sprite(material);
   sprite.scale.set((heightWorld * canvas.width) / canvas.height, heightWorld, 1);
   sprite.renderOrder = 10;
+  sprite.name = `label:${text}`;
   return sprite;
 }
 
@@ -172,6 +179,10 @@ export function buildPlumeScene(input: PlumeSceneInput): PlumeSceneOutput {
     return item;
   };
   const notes: string[] = [];
+  const trackSprite = (sprite: Sprite) => {
+    track(sprite.material);
+    if (sprite.material.map) track(sprite.material.map);
+  };
 
   const depth = scenario.ambient.depth;
   const bed: BedSpec = { depth, slope: scenario.ambient.bedSlope, slopeAzimuth: scenario.ambient.bedSlopeAzimuth };
@@ -220,8 +231,7 @@ export function buildPlumeScene(input: PlumeSceneInput): PlumeSceneOutput {
     const north = -step;
     const label = textSprite(`${formatNumber(Math.abs(k) * stepDisplay)} ${unitLabel}`, 0.85, "#4a4236");
     label.position.copy(worldToScene({ x: east, y: north, z: seabedHeight(east, north, bed.depth, bed.slope, bed.slopeAzimuth) + labelHeight }));
-    track(label.material);
-    track(label.material.map!);
+    trackSprite(label);
     group.add(label);
   }
 
@@ -348,8 +358,7 @@ export function buildPlumeScene(input: PlumeSceneInput): PlumeSceneOutput {
   const mzLabel = textSprite(`mixing-zone edge ${formatNumber(mzDisplay.value, 3)} ${mzDisplay.unit}`, 1, "#9a5410");
   const mzLabelAt = azimuthToEastNorth(diffuser.diffuserAzimuth + 90);
   mzLabel.position.copy(worldToScene({ x: mzLabelAt.east * mzRadius, y: mzLabelAt.north * mzRadius, z: -depth + labelHeight * 1.5 }));
-  track(mzLabel.material);
-  track(mzLabel.material.map!);
+  trackSprite(mzLabel);
   group.add(mzLabel);
   const exceed = result.mixingZone.footprint.furthestExtent;
   if (exceed > 0 && Number.isFinite(exceed)) {
@@ -371,8 +380,7 @@ export function buildPlumeScene(input: PlumeSceneInput): PlumeSceneOutput {
     group.add(arrow);
     const label = textSprite(`current ${formatNumber(currentText.value, 3)} ${currentText.unit}`, 1, "#1f5f99");
     label.position.copy(from).addScaledVector(direction, arrowLength * 0.5).add(new Vector3(0, labelHeight * 1.2, 0));
-    track(label.material);
-    track(label.material.map!);
+    trackSprite(label);
     group.add(label);
   } else {
     notes.push("Still water (no current).");
@@ -383,8 +391,7 @@ export function buildPlumeScene(input: PlumeSceneInput): PlumeSceneOutput {
   group.add(north);
   const nLabel = textSprite("N", 1.2, "#111");
   nLabel.position.copy(northFrom).add(new Vector3(0, labelHeight, -extent * 0.17));
-  track(nLabel.material);
-  track(nLabel.material.map!);
+  trackSprite(nLabel);
   group.add(nLabel);
 
   // Camera focus: the jets and their impact spots.
