@@ -218,6 +218,20 @@ describe("the built app", () => {
     await expect.poll(() => angle.inputValue(), { message: "undo again" }).toBe("30");
   });
 
+  it("takes a receiving-water profile pasted from a spreadsheet", async () => {
+    await page.getByRole("radio", { name: "Profile" }).click();
+    await page.getByRole("button", { name: "Paste from spreadsheet…" }).click();
+    await page.locator("#profile-paste").fill("Depth (m)\tSalinity (g/kg)\tTemperature (degC)\n0\t38.0\t24\n6\t38.3\t22\n18\t38.6\t19");
+    await page.getByRole("button", { name: "Use these rows" }).click();
+    expect(await page.locator(".profile-table tbody tr").count(), "three rows").toBe(3);
+    await expect.poll(() => page.locator("[data-role=engine-status]").textContent(), { message: "runs with the profile", timeout: 15_000 }).toMatch(/Up to date/);
+    await page.locator(".profile-table").scrollIntoViewIfNeeded();
+    await page.screenshot({ path: join(artifacts, "app-profile.png") });
+    await page.keyboard.press("Control+z");
+    await page.keyboard.press("Control+z");
+    await expect.poll(() => page.locator(".profile-table").count(), { message: "undo back to uniform water" }).toBe(0);
+  });
+
   it("exports an HTML report with the caution and the 3D view embedded", async () => {
     const [download] = await Promise.all([page.waitForEvent("download"), page.getByRole("button", { name: "Export report" }).click()]);
     const path = join(artifacts, "app-report.html");

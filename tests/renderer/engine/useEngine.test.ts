@@ -2,7 +2,7 @@
  * The engine's state rule: a successful run replaces what is shown; a failed run keeps the last good
  * result on screen, marked stale, with the issues for the fields. runFile() never throws.
  */
-import { readFileSync } from "node:fs";
+import { readFileSync, readdirSync } from "node:fs";
 import { join } from "node:path";
 import { describe, expect, it } from "vitest";
 import { applyResponse, issuesByPath, type EngineState } from "../../../renderer/engine/useEngine";
@@ -34,7 +34,9 @@ describe("runFile()", () => {
   });
   it("runs every bundled demo scenario", () => {
     const dir = join(__dirname, "../../../demo-scenarios");
-    for (const name of ["island-cove.json", "sandy-shelf.json", "sheltered-bay.json"]) {
+    const names = readdirSync(dir).filter((f) => f.endsWith(".json"));
+    expect(names.length, "demo scenarios are bundled").toBeGreaterThan(0);
+    for (const name of names) {
       const response = runFile(1, JSON.parse(readFileSync(join(dir, name), "utf8")));
       expect(response.ok ? "ok" : response.message, `${name} runs`).toBe("ok");
     }
