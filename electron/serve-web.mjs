@@ -13,5 +13,13 @@ try {
   console.error("The launcher build failed (see the errors above).");
   process.exit(1);
 }
-const { runServeWeb } = await import(pathToFileURL(join(ROOT, "dist", "electron", "launcher.mjs")).href);
-process.exitCode = await runServeWeb({ root: ROOT, argv: process.argv.slice(2), env: process.env });
+try {
+  const launcherUrl = pathToFileURL(join(ROOT, "dist", "electron", "launcher.mjs")).href;
+  const { runServeWeb } = await import(launcherUrl);
+  process.exitCode = await runServeWeb({ root: ROOT, argv: process.argv.slice(2), env: process.env });
+} catch (error) {
+  // One readable line, never a stack trace.
+  const detail = error instanceof Error ? error.message.split("\n")[0] : String(error);
+  console.error(`Brinefield could not start: ${detail}`);
+  process.exitCode = 1;
+}

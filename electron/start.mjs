@@ -13,5 +13,13 @@ try {
   console.error("The Electron build failed (see the errors above).");
   process.exit(1);
 }
-const { runStart } = await import(pathToFileURL(join(ROOT, "dist", "electron", "launcher.mjs")).href);
-process.exitCode = await runStart({ root: ROOT, argv: process.argv.slice(2), env: process.env });
+try {
+  const launcherUrl = pathToFileURL(join(ROOT, "dist", "electron", "launcher.mjs")).href;
+  const { runStart } = await import(launcherUrl);
+  process.exitCode = await runStart({ root: ROOT, argv: process.argv.slice(2), env: process.env });
+} catch (error) {
+  // One readable line, never a stack trace.
+  const detail = error instanceof Error ? error.message.split("\n")[0] : String(error);
+  console.error(`Brinefield could not start: ${detail}`);
+  process.exitCode = 1;
+}
