@@ -1,7 +1,7 @@
 /**
  * The object the preload exposes as `window.brinefieldHost`, built from an injected slice of
  * `ipcRenderer` so it can be unit-tested without Electron. It has exactly three members (`invoke`,
- * `onMenu`, `platform`), talks only on channels that start with `brinefield:`, and never hands the
+ * `onMenu`, `platform`), uses only channels that start with `brinefield:`, and never hands the
  * renderer an `ipcRenderer`, an `IpcRendererEvent` or any other Electron object.
  */
 import { IPC_INVOKE, IPC_MENU } from "./contract";
