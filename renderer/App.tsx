@@ -107,7 +107,11 @@ export function App() {
     });
   }, []);
   const issues = useMemo(() => issuesByPath(engine.issues), [engine.issues]);
-  const editor: Editor = useMemo(() => ({ file: doc.file, unitSystem, issues, perform }), [doc.file, unitSystem, issues, perform]);
+  const normalised = engine.error === null ? engine.scenario : null;
+  const editor: Editor = useMemo(
+    () => ({ file: doc.file, unitSystem, issues, perform, normalised }),
+    [doc.file, unitSystem, issues, perform, normalised],
+  );
 
   // Title and dirty flag to the host (only when they change, not on every keystroke); units remembered.
   const documentTitle = scenarioName(doc.file);

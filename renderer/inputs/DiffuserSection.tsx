@@ -42,7 +42,8 @@ export function sketchDiffuser(file: unknown): DiffuserInput {
     portHeight: siNumber(raw["portHeight"], "length", 1),
     portSpacing: spacing,
     portAzimuth: siNumber(raw["portAzimuth"], "angle", 0),
-    diffuserAzimuth: siNumber(raw["diffuserAzimuth"], "angle", 0),
+    // Core's default axis is square to the ports (core/scenario/normalise.ts).
+    diffuserAzimuth: siNumber(raw["diffuserAzimuth"], "angle", (siNumber(raw["portAzimuth"], "angle", 0) + 90) % 360),
     length: siNumber(raw["length"], "length", length),
     flowSplit: [],
     ...(risers ? { risers } : {}),
@@ -52,7 +53,8 @@ export function sketchDiffuser(file: unknown): DiffuserInput {
 export function DiffuserSection() {
   const editor = useEditor();
   const layout = getAtPath(editor.file, "diffuser.layout");
-  const diffuser = sketchDiffuser(editor.file);
+  // Core's reading fills in defaults (e.g. the diffuser axis); the raw fields stand in while it has errors.
+  const diffuser = editor.normalised?.diffuser ?? sketchDiffuser(editor.file);
   const azimuths = getAtPath(editor.file, "diffuser.risers.portAzimuths");
   return (
     <section className="input-section" aria-labelledby="sec-diffuser">
@@ -73,7 +75,7 @@ export function DiffuserSection() {
         <QuantityField path="diffuser.portHeight" label="Port height" kind="length" hint="above seabed" />
         {layout !== "rosette" ? <QuantityField path="diffuser.portAzimuth" label="Port azimuth" kind="angle" hint="clockwise from north" /> : null}
         {layout === "line" ? <QuantityField path="diffuser.portSpacing" label="Port spacing" kind="length" /> : null}
-        {layout !== "single" ? <QuantityField path="diffuser.diffuserAzimuth" label="Diffuser axis" kind="angle" hint="clockwise from north" /> : null}
+        {layout !== "single" ? <QuantityField path="diffuser.diffuserAzimuth" label="Diffuser axis" kind="angle" hint="clockwise from north" placeholder="⊥ to ports" /> : null}
         {layout === "rosette" ? (
           <>
             <CountField path="diffuser.risers.count" label="Risers" />

@@ -1,6 +1,7 @@
 /** What every input needs: the document, the unit system, issues by path and a way to perform actions. */
 import { createContext, useContext } from "react";
 import type { UnitSystem } from "../../core/units";
+import type { Scenario } from "../../core/scenario/types";
 import type { Action } from "../state/actions";
 import type { ScenarioFile } from "../state/scenarioState";
 
@@ -8,6 +9,8 @@ export interface Editor {
   readonly file: ScenarioFile;
   readonly unitSystem: UnitSystem;
   readonly issues: ReadonlyMap<string, readonly string[]>;
+  /** Core's reading of the document (defaults filled in), or null while the document has errors. */
+  readonly normalised: Scenario | null;
   perform<I>(action: Action<I>, input: I): void;
 }
 
