@@ -10,7 +10,14 @@ import type { Scenario } from "../../core/scenario/types";
 import { formatNumber, siToDisplay, type UnitSystem } from "../../core/units";
 import { OVERRIDE_PATHS, type Overrides } from "../../core/study/overrides";
 import { columnsOf, flattenRow, sortRows, type FlatRow } from "../../core/study/compare";
-import { axisFromParts, eosCrossings, sweepGrid, sweepRows, type SweepAxis, type SweepRow } from "../../core/study/sweep";
+import {
+  axisFromParts,
+  eosCrossings,
+  sweepGrid,
+  sweepRows,
+  type SweepAxis,
+  type SweepRow,
+} from "../../core/study/sweep";
 import {
   candidateOverrides,
   designCandidates,
@@ -37,6 +44,14 @@ import { MonteCarloHistogram, SweepHeatmap, SweepLineChart, type AxisDisplay } f
 import "./study.css";
 
 type Section = "variants" | "sweep" | "design" | "monte-carlo";
+
+type Replies = Awaited<ReturnType<StudyWorkerPool["run"]>>;
+type Histogram = { x0: number; x1: number; count: number }[];
+
+/** Replaces item i of a list with a patched copy (form rows). */
+function patchAt<T>(list: readonly T[], i: number, patch: Partial<T>): T[] {
+  return list.map((x, k) => (k === i ? { ...x, ...patch } : x));
+}
 
 interface Job {
   readonly label: string;
@@ -98,7 +113,7 @@ export function StudyPanel({ scenarioFile, unitSystem }: Props) {
 
   /** Runs tasks on the pool with a progress bar; returns null when cancelled or failed. */
   const runJob = useCallback(
-    async <T,>(label: string, total: number, tasks: readonly StudyTask[], finish: (r: Awaited<ReturnType<StudyWorkerPool["run"]>>) => T) => {
+    async <T,>(label: string, total: number, tasks: readonly StudyTask[], finish: (r: Replies) => T) => {
       setError(null);
       setJob({ label, total, done: 0 });
       try {
@@ -138,7 +153,14 @@ export function StudyPanel({ scenarioFile, unitSystem }: Props) {
             ["monte-carlo", "Monte Carlo"],
           ] as const
         ).map(([k, label]) => (
-          <button key={k} type="button" role="tab" aria-selected={section === k} onClick={() => setSection(k)} data-study={k}>
+          <button
+            key={k}
+            type="button"
+            role="tab"
+            aria-selected={section === k}
+            onClick={() => setSection(k)}
+            data-study={k}
+          >
             {label}
           </button>
         ))}
@@ -156,7 +178,10 @@ export function StudyPanel({ scenarioFile, unitSystem }: Props) {
             </button>
           </>
         ) : scenarioError ? (
-          <span className="study-error">The scenario has problems; fix them to run studies.{"\n"}{scenarioError}</span>
+          <span className="study-error">
+            The scenario has problems; fix them to run studies.{"\n"}
+            {scenarioError}
+          </span>
         ) : scenario ? (
           <span className="study-note">{describeCases(expandCases(scenario), scenario)}</span>
         ) : (
@@ -166,11 +191,22 @@ export function StudyPanel({ scenarioFile, unitSystem }: Props) {
       </div>
       <div>
         {section === "variants" ? (
-          <VariantsSection scenarioFile={scenarioFile} busy={busy || !scenario} runJob={runJob} />
+          <VariantsSection
+            scenarioFile={scenarioFile}
+            unitSystem={unitSystem}
+            busy={busy || !scenario}
+            runJob={runJob}
+          />
         ) : section === "sweep" ? (
           <SweepSection scenario={scenario} unitSystem={unitSystem} busy={busy} runPoints={runPoints} />
         ) : section === "design" ? (
-          <DesignSection scenario={scenario} scenarioFile={scenarioFile} unitSystem={unitSystem} busy={busy} runPoints={runPoints} />
+          <DesignSection
+            scenario={scenario}
+            scenarioFile={scenarioFile}
+            unitSystem={unitSystem}
+            busy={busy}
+            runPoints={runPoints}
+          />
         ) : (
           <MonteCarloSection scenario={scenario} busy={busy} runJob={runJob} poolSize={pool.size} />
         )}
@@ -183,12 +219,52 @@ type RunJob = <T>(
   label: string,
   total: number,
   tasks: readonly StudyTask[],
-  finish: (r: Awaited<ReturnType<StudyWorkerPool["run"]>>) => T,
+  finish: (r: Replies) => T,
 ) => Promise<T | null>;
+
+type RunPoints = (
+  label: string,
+  s: Scenario,
+  list: readonly Overrides[],
+) => Promise<PointEvaluation[] | null>;
 
 // --- Variants --------------------------------------------------------------------------------------
 
-function VariantsSection({ scenarioFile, busy, runJob }: { scenarioFile: unknown; busy: boolean; runJob: RunJob }) {
+interface VariantsProps {
+  readonly scenarioFile: unknown;
+  readonly unitSystem: UnitSystem;
+  readonly busy: boolean;
+  readonly runJob: RunJob;
+}
+
+const COLUMN_LABELS: Readonly<Record<string, string>> = {
+  governingCase: "governing case",
+  edgeDilution: "edge dilution",
+  requiredDilution: "required dilution",
+  equationOfState: "equation of state",
+};
+
+/** Readable header for a comparison column; lengths carry the display unit. */
+function columnLabel(c: string, lengthUnit: string): string {
+  const m = /^(.*?)(MaxRise|ImpactDistance|ImpactDilution)$/.exec(c);
+  if (!m) return COLUMN_LABELS[c] ?? c;
+  const method = m[1]!.replace(/[A-Z]/g, (x) => `-${x.toLowerCase()}`);
+  const what = { MaxRise: `max rise (${lengthUnit})`, ImpactDistance: `impact distance (${lengthUnit})` }[
+    m[2] as "MaxRise" | "ImpactDistance"
+  ];
+  return `${method} ${what ?? "impact dilution"}`;
+}
+
+function cellText(v: FlatRow[string] | undefined): string {
+  if (typeof v === "number") return formatNumber(v);
+  return v === null || v === undefined ? "—" : String(v);
+}
+
+const isLengthColumn = (c: string) => /(MaxRise|ImpactDistance)$/.test(c);
+
+function VariantsSection({ scenarioFile, unitSystem, busy, runJob }: VariantsProps) {
+  const lengthUnit = siToDisplay(1, "length", unitSystem).unit;
+  const toLength = (m: number) => siToDisplay(m, "length", unitSystem).value;
   const [variants, setVariants] = useState([
     { name: "deeper water", text: "ambient.depth = 25 m" },
     { name: "more ports", text: "diffuser.portCount = 8" },
@@ -210,30 +286,41 @@ function VariantsSection({ scenarioFile, busy, runJob }: { scenarioFile: unknown
       specs.push({ name: v.name, overrides: o.overrides });
     }
     setProblem(null);
-    const r = await runJob("Comparing variants", specs.length + 1, [{ kind: "compare", file: scenarioFile, variants: specs }], (replies) =>
+    const task: StudyTask = { kind: "compare", file: scenarioFile, variants: specs };
+    const r = await runJob("Comparing variants", specs.length + 1, [task], (replies) =>
       replies[0]?.kind === "compared" ? replies[0].rows.map(flattenRow) : [],
     );
     if (r) setRows(r);
   };
 
-  const exportCsv = () => void exportFile("brinefield-variants.csv", csvFormat(sorted as never, columnsOf(sorted) as never), [{ name: "CSV", extensions: ["csv"] }]);
+  const exportCsv = () => {
+    const text = csvFormat(sorted as never, columnsOf(sorted) as never);
+    void exportFile("brinefield-variants.csv", text, [{ name: "CSV", extensions: ["csv"] }]);
+  };
 
   return (
     <section className="study-variants">
       <h3>Variants</h3>
       <p className="study-note">
-        Each variant changes the scenario by “path = value” entries (units allowed), e.g. “ambient.depth = 12 m; diffuser.portCount = 6”.
+        Each variant changes the scenario by “path = value” entries (units allowed), e.g.
+        “ambient.depth = 12 m; diffuser.portCount = 6”.
         Every variant runs under every ambient case; the worst case is the one with the lowest margin.
       </p>
       {variants.map((v, i) => (
         <div className="study-form" key={i}>
           <label>
             name
-            <input value={v.name} onChange={(e) => setVariants(variants.map((x, k) => (k === i ? { ...x, name: e.target.value } : x)))} />
+            <input
+              value={v.name}
+              onChange={(e) => setVariants(patchAt(variants, i, { name: e.target.value }))}
+            />
           </label>
           <label>
             overrides
-            <textarea value={v.text} onChange={(e) => setVariants(variants.map((x, k) => (k === i ? { ...x, text: e.target.value } : x)))} />
+            <textarea
+              value={v.text}
+              onChange={(e) => setVariants(patchAt(variants, i, { text: e.target.value }))}
+            />
           </label>
           <button type="button" onClick={() => setVariants(variants.filter((_, k) => k !== i))}>
             Remove
@@ -241,50 +328,64 @@ function VariantsSection({ scenarioFile, busy, runJob }: { scenarioFile: unknown
         </div>
       ))}
       <div className="button-row">
-        <button type="button" onClick={() => setVariants([...variants, { name: `variant ${variants.length + 1}`, text: "" }])}>
+        <button
+          type="button"
+          onClick={() => setVariants([...variants, { name: `variant ${variants.length + 1}`, text: "" }])}
+        >
           Add variant
         </button>
         <button type="button" disabled={busy} onClick={() => void run()} data-command="study-compare">
           Compare
         </button>
-        <button type="button" disabled={rows.length === 0} onClick={exportCsv} data-command="study-compare-csv">
+        <button
+          type="button"
+          disabled={rows.length === 0}
+          onClick={exportCsv}
+          data-command="study-compare-csv"
+        >
           Export CSV
         </button>
       </div>
       {problem ? <div className="study-error">{problem}</div> : null}
       {rows.length > 0 ? (
-        <table data-role="study-variants-table">
-          <thead>
-            <tr>
-              {columns.map((c) => (
-                <th
-                  key={c}
-                  className={typeof rows[0]![c] === "number" ? "" : "text"}
-                  onClick={() => setSort(sort === c ? `-${c}` : c)}
-                  aria-sort={sort === c ? "ascending" : sort === `-${c}` ? "descending" : "none"}
-                >
-                  {c}
-                  {sort === c ? " ▲" : sort === `-${c}` ? " ▼" : ""}
-                </th>
-              ))}
-            </tr>
-          </thead>
-          <tbody>
-            {sorted.map((r, i) => (
-              <tr key={i} className={r.case === "worst case" ? "worst" : ""}>
-                {columns.map((c) => {
-                  const v = r[c];
-                  const cls = c === "verdict" ? (v === "pass" ? "pass" : "fail") : typeof v === "number" ? "" : "text";
-                  return (
-                    <td key={c} className={cls}>
-                      {typeof v === "number" ? formatNumber(v) : v === null || v === undefined ? "—" : String(v)}
-                    </td>
-                  );
-                })}
+        <div className="study-table-wrap">
+          <table data-role="study-variants-table">
+            <thead>
+              <tr>
+                {columns.map((c) => (
+                  <th
+                    key={c}
+                    className={typeof rows[0]![c] === "number" ? "" : "text"}
+                    onClick={() => setSort(sort === c ? `-${c}` : c)}
+                    aria-sort={sort === c ? "ascending" : sort === `-${c}` ? "descending" : "none"}
+                  >
+                    {columnLabel(c, lengthUnit)}
+                    {sort === c ? " ▲" : sort === `-${c}` ? " ▼" : ""}
+                  </th>
+                ))}
               </tr>
-            ))}
-          </tbody>
-        </table>
+            </thead>
+            <tbody>
+              {sorted.map((r, i) => (
+                <tr key={i} className={r.case === "worst case" ? "worst" : ""}>
+                  {columns.map((c) => {
+                    const raw = r[c];
+                  // Lengths are SI in the rows (and the CSV); the table shows the chosen unit system.
+                  const v = typeof raw === "number" && isLengthColumn(c) ? toLength(raw) : raw;
+                  const verdict = v === "pass" ? "pass" : "fail";
+                  const cls = c === "verdict" ? verdict : typeof v === "number" ? "" : "text";
+                  const shown = cellText(v);
+                  return (
+                      <td key={c} className={cls}>
+                        {shown}
+                      </td>
+                    );
+                  })}
+                </tr>
+              ))}
+            </tbody>
+          </table>
+        </div>
       ) : null}
     </section>
   );
@@ -308,9 +409,11 @@ function SweepSection({
   scenario: Scenario | null;
   unitSystem: UnitSystem;
   busy: boolean;
-  runPoints: (label: string, s: Scenario, list: readonly Overrides[]) => Promise<PointEvaluation[] | null>;
+  runPoints: RunPoints;
 }) {
-  const [forms, setForms] = useState<AxisForm[]>([{ path: "ambient.currentSpeed", from: "0", to: "0.5", steps: "11" }]);
+  const [forms, setForms] = useState<AxisForm[]>([
+    { path: "ambient.currentSpeed", from: "0", to: "0.5", steps: "11" },
+  ]);
   const [result, setResult] = useState<{ axes: SweepAxis[]; rows: SweepRow[] } | null>(null);
   const [problem, setProblem] = useState<string | null>(null);
 
@@ -339,12 +442,15 @@ function SweepSection({
   return (
     <section>
       <h3>Sweep</h3>
-      <p className="study-note">Bounds are SI numbers or values with units (e.g. “0.5 knot”, “8 in”). One input draws a line chart; two draw a heat map of the margin with the limit contour.</p>
+      <p className="study-note">
+        Bounds are SI numbers or values with units (e.g. “0.5 knot”, “8 in”). One input draws a line chart;
+        two draw a heat map of the margin with the limit contour.
+      </p>
       {forms.map((f, i) => (
         <div className="study-form" key={i}>
           <label>
             input {i + 1}
-            <select value={f.path} onChange={(e) => setForms(forms.map((x, k) => (k === i ? { ...x, path: e.target.value } : x)))}>
+            <select value={f.path} onChange={(e) => setForms(patchAt(forms, i, { path: e.target.value }))}>
               {PATHS.map((p) => (
                 <option key={p} value={p}>
                   {p}
@@ -355,7 +461,11 @@ function SweepSection({
           {(["from", "to", "steps"] as const).map((k) => (
             <label key={k}>
               {k}
-              <input className="narrow" value={f[k]} onChange={(e) => setForms(forms.map((x, j) => (j === i ? { ...x, [k]: e.target.value } : x)))} />
+              <input
+                className="narrow"
+                value={f[k]}
+                onChange={(e) => setForms(patchAt(forms, i, { [k]: e.target.value }))}
+              />
             </label>
           ))}
           {i === 1 ? (
@@ -367,25 +477,35 @@ function SweepSection({
       ))}
       <div className="button-row">
         {forms.length === 1 ? (
-          <button type="button" onClick={() => setForms([...forms, { path: "diffuser.portDiameter", from: "0.1", to: "0.3", steps: "11" }])}>
+          <button
+            type="button"
+            onClick={() =>
+              setForms([...forms, { path: "diffuser.portDiameter", from: "0.1", to: "0.3", steps: "11" }])
+            }
+          >
             Add second input
           </button>
         ) : null}
-        <button type="button" disabled={busy || !scenario} onClick={() => void run()} data-command="study-sweep">
+        <button
+          type="button"
+          disabled={busy || !scenario}
+          onClick={() => void run()}
+          data-command="study-sweep"
+        >
           Run sweep
         </button>
       </div>
       {problem ? <div className="study-error">{problem}</div> : null}
       {result && result.axes.length === 1 ? (
-        <SweepLineChart rows={result.rows} axis={{ ...axisDisplay(result.axes[0]!.path, unitSystem), path: result.axes[0]!.path }} />
+        <SweepLineChart
+          rows={result.rows}
+          axis={{ ...axisDisplay(result.axes[0]!.path, unitSystem), path: result.axes[0]!.path }}
+        />
       ) : null}
       {result && result.axes.length === 2 ? (
         <SweepHeatmap
           rows={result.rows}
-          axes={[
-            { ...axisDisplay(result.axes[0]!.path, unitSystem), path: result.axes[0]!.path, steps: result.axes[0]!.steps },
-            { ...axisDisplay(result.axes[1]!.path, unitSystem), path: result.axes[1]!.path, steps: result.axes[1]!.steps },
-          ]}
+          axes={[heatAxis(result.axes[0]!, unitSystem), heatAxis(result.axes[1]!, unitSystem)]}
         />
       ) : null}
       {result ? (
@@ -393,12 +513,20 @@ function SweepSection({
           {crossings.length === 0
             ? `Equation of state at every point: ${result.rows[0]?.equationOfState ?? "—"}.`
             : crossings
-                .map((c) => `Equation of state changes from ${c.from} to ${c.to} between ${c.path} = ${formatNumber(c.between[0][c.path]!)} and ${formatNumber(c.between[1][c.path]!)} (SI).`)
+                .map(
+                  (c) =>
+                    `Equation of state changes from ${c.from} to ${c.to} between ${c.path} = ` +
+                    `${formatNumber(c.between[0][c.path]!)} and ${formatNumber(c.between[1][c.path]!)} (SI).`,
+                )
                 .join(" ")}
         </p>
       ) : null}
     </section>
   );
+}
+
+function heatAxis(a: SweepAxis, unitSystem: UnitSystem) {
+  return { ...axisDisplay(a.path, unitSystem), path: a.path, steps: a.steps };
 }
 
 // --- Design search ---------------------------------------------------------------------------------
@@ -414,9 +542,14 @@ function DesignSection({
   scenarioFile: unknown;
   unitSystem: UnitSystem;
   busy: boolean;
-  runPoints: (label: string, s: Scenario, list: readonly Overrides[]) => Promise<PointEvaluation[] | null>;
+  runPoints: RunPoints;
 }) {
-  const [form, setForm] = useState({ minExitVelocity: "3 m/s", maxExitVelocity: "6 m/s", maxLength: "", maxPorts: "12" });
+  const [form, setForm] = useState({
+    minExitVelocity: "3 m/s",
+    maxExitVelocity: "6 m/s",
+    maxLength: "",
+    maxPorts: "12",
+  });
   const [designs, setDesigns] = useState<RankedDesign[] | null>(null);
   const [summary, setSummary] = useState<string>("");
   const [problem, setProblem] = useState<string | null>(null);
@@ -445,7 +578,8 @@ function DesignSection({
     if (!points) return;
     const verdicts = candidates.map((d, i) => judgeDesign(d, points[i]!, c.constraints));
     setDesigns(shortList(verdicts, c.constraints.maxDesigns));
-    setSummary(`${candidates.length} candidates tried, ${verdicts.filter((v) => v.ok).length} meet every limit under every case.`);
+    const passing = verdicts.filter((v) => v.ok).length;
+    setSummary(`${candidates.length} candidates tried, ${passing} meet every limit under every case.`);
   };
 
   const len = (v: number) => {
@@ -465,9 +599,9 @@ function DesignSection({
     <section>
       <h3>Design search</h3>
       <p className="study-note">
-        Port count, diameter, angle (30°, 45°, 60°) and spacing within the maximum length; every design must meet every limit at the
-        mixing-zone edge under all ambient cases, keep the jet below the surface and stay within the velocity range. The scenario's
-        “design” block supplies further constraints.
+        Port count, diameter, angle (30°, 45°, 60°) and spacing within the maximum length; every design must
+        meet every limit at the mixing-zone edge under all ambient cases, keep the jet below the surface and
+        stay within the velocity range. The scenario's “design” block supplies further constraints.
       </p>
       <div className="study-form">
         {(
@@ -480,10 +614,19 @@ function DesignSection({
         ).map(([k, label]) => (
           <label key={k}>
             {label}
-            <input className="narrow" value={form[k]} onChange={(e) => setForm({ ...form, [k]: e.target.value })} />
+            <input
+              className="narrow"
+              value={form[k]}
+              onChange={(e) => setForm({ ...form, [k]: e.target.value })}
+            />
           </label>
         ))}
-        <button type="button" disabled={busy || !scenario} onClick={() => void run()} data-command="study-design">
+        <button
+          type="button"
+          disabled={busy || !scenario}
+          onClick={() => void run()}
+          data-command="study-design"
+        >
           Search
         </button>
       </div>
@@ -494,7 +637,7 @@ function DesignSection({
         <table data-role="study-design-table">
           <thead>
             <tr>
-              {["#", "ports", "diameter", "angle", "spacing", "length", "exit velocity", "worst margin", "governing case", "best for"].map((h) => (
+              {DESIGN_HEADERS.map((h) => (
                 <th key={h} className={h === "governing case" || h === "best for" ? "text" : ""}>
                   {h}
                 </th>
@@ -523,13 +666,25 @@ function DesignSection({
   );
 }
 
+const DESIGN_HEADERS = [
+  ...["#", "ports", "diameter", "angle", "spacing", "length"],
+  ...["exit velocity", "worst margin", "governing case", "best for"],
+];
+
 // --- Monte Carlo -----------------------------------------------------------------------------------
 
-function MonteCarloSection({ scenario, busy, runJob, poolSize }: { scenario: Scenario | null; busy: boolean; runJob: RunJob; poolSize: number }) {
+interface MonteCarloProps {
+  readonly scenario: Scenario | null;
+  readonly busy: boolean;
+  readonly runJob: RunJob;
+  readonly poolSize: number;
+}
+
+function MonteCarloSection({ scenario, busy, runJob, poolSize }: MonteCarloProps) {
   const [runs, setRuns] = useState("1000");
   const [seed, setSeed] = useState("1");
   const [problem, setProblem] = useState<string | null>(null);
-  const [out, setOut] = useState<{ summary: MonteCarloSummary; bins: { x0: number; x1: number; count: number }[] } | null>(null);
+  const [out, setOut] = useState<{ summary: MonteCarloSummary; bins: Histogram } | null>(null);
 
   const run = async () => {
     if (!scenario) return;
@@ -567,11 +722,18 @@ function MonteCarloSection({ scenario, busy, runJob, poolSize }: { scenario: Sce
           seed
           <input className="narrow" value={seed} onChange={(e) => setSeed(e.target.value)} />
         </label>
-        <button type="button" disabled={busy || !scenario} onClick={() => void run()} data-command="study-monte-carlo">
+        <button
+          type="button"
+          disabled={busy || !scenario}
+          onClick={() => void run()}
+          data-command="study-monte-carlo"
+        >
           Run
         </button>
       </div>
-      <p className="study-note">The same seed gives the same results on any machine and any number of workers.</p>
+      <p className="study-note">
+        The same seed gives the same results on any machine and any number of workers.
+      </p>
       {problem ? <div className="study-error">{problem}</div> : null}
       {out && w ? (
         <>
@@ -581,10 +743,17 @@ function MonteCarloSection({ scenario, busy, runJob, poolSize }: { scenario: Sce
             </p>
           ))}
           <p data-role="study-exceedance">
-            Worst case: P5 {formatNumber(w.edgeDilution.p5)}, P50 {formatNumber(w.edgeDilution.p50)}, P95 {formatNumber(w.edgeDilution.p95)};
+            Worst case: P5 {formatNumber(w.edgeDilution.p5)}, P50 {formatNumber(w.edgeDilution.p50)}, P95{" "}
+            {formatNumber(w.edgeDilution.p95)};
             probability of not meeting the limit {formatNumber(100 * w.probabilityOfExceedance, 3)} %.
           </p>
-          <MonteCarloHistogram bins={out.bins} p5={w.edgeDilution.p5} p50={w.edgeDilution.p50} p95={w.edgeDilution.p95} required={null} />
+          <MonteCarloHistogram
+            bins={out.bins}
+            p5={w.edgeDilution.p5}
+            p50={w.edgeDilution.p50}
+            p95={w.edgeDilution.p95}
+            required={null}
+          />
           <table>
             <thead>
               <tr>

@@ -30,7 +30,13 @@ function handle(req: StudyRequest): void {
       return;
     }
     case "compare": {
-      const st = parseStudy({ format: "brinefield-study", version: 1, name: "Study panel", base: req.file, variants: req.variants });
+      const st = parseStudy({
+        format: "brinefield-study",
+        version: 1,
+        name: "Study panel",
+        base: req.file,
+        variants: req.variants,
+      });
       if (!st.ok) {
         post({ id: req.id, kind: "error", message: st.issues.map((i) => i.message).join("\n") });
         return;
@@ -49,11 +55,14 @@ function handle(req: StudyRequest): void {
       return;
     }
     case "points":
-      post({ id: req.id, kind: "points", points: evaluatePoints(req.scenario, req.overrides, evaluateScenario, progress) });
+      const points = evaluatePoints(req.scenario, req.overrides, evaluateScenario, progress);
+      post({ id: req.id, kind: "points", points });
       return;
     case "monte-carlo": {
-      const chunk = runMonteCarloChunk(req.scenario, req.plan, req.start, req.end, evaluateScenario, progress);
-      post({ id: req.id, kind: "monte-carlo", chunk }, [...chunk.edgeDilution, ...chunk.margin, ...chunk.pass].map((a) => a.buffer));
+      const { scenario, plan, start, end } = req;
+      const chunk = runMonteCarloChunk(scenario, plan, start, end, evaluateScenario, progress);
+      const arrays = [...chunk.edgeDilution, ...chunk.margin, ...chunk.pass];
+      post({ id: req.id, kind: "monte-carlo", chunk }, arrays.map((a) => a.buffer));
       return;
     }
   }
