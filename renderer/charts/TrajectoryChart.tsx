@@ -19,7 +19,9 @@ export function TrajectoryChart({ result, scenario, unitSystem }: { result: Brin
   const height = Math.max(150, size.height);
   const maxX = Math.max(1, ...points.map((p) => p.distance), ...markers.map((m) => m.distance)) * 1.08;
   const x = scaleLinear().domain([0, maxX]).range([MARGIN.left, width - MARGIN.right]).nice();
-  const y = scaleLinear().domain([0, depth * 1.06]).range([height - MARGIN.bottom, MARGIN.top]);
+  // The water column, or the jet's top if core's path leaves it (a jet that reaches the surface).
+  const top = Math.max(depth * 1.06, ...points.map((p) => p.upper * 1.04));
+  const y = scaleLinear().domain([0, top]).range([height - MARGIN.bottom, MARGIN.top]);
   const centre = line<(typeof points)[number]>().x((p) => x(p.distance)).y((p) => y(p.height));
   const band = area<(typeof points)[number]>().x((p) => x(p.distance)).y0((p) => y(p.lower)).y1((p) => y(p.upper));
   const domain = dilutionDomain(points.map((p) => p.dilution));
