@@ -66,7 +66,8 @@ describe("brinefield uncertainty", () => {
   it("repeats exactly with the same seed for 1 and 2 workers, with the promised JSON keys", async () => {
     const run = async (workers: string) => {
       const f = fakeIO();
-      const code = await uncertainty.run(["site.json", "--runs", "24", "--seed", "99", "--workers", workers, "--json"], f.io);
+      const args = ["site.json", "--runs", "24", "--seed", "99", "--workers", workers, "--json"];
+      const code = await uncertainty.run(args, f.io);
       expect(code, f.err()).toBe(0);
       return JSON.parse(f.out());
     };
@@ -74,7 +75,9 @@ describe("brinefield uncertainty", () => {
     const two = await run("2");
     const strip = (j: Record<string, unknown>) => ({ ...j, workers: 0, elapsedSeconds: 0 });
     expect(strip(two), "same seed, different worker count: identical results").toEqual(strip(one));
-    for (const k of ["p5", "p50", "p95"]) expect(typeof one.worstCase.edgeDilution[k], `worstCase.edgeDilution.${k}`).toBe("number");
+    for (const k of ["p5", "p50", "p95"]) {
+      expect(typeof one.worstCase.edgeDilution[k], `worstCase.edgeDilution.${k}`).toBe("number");
+    }
     expect(typeof one.worstCase.probabilityOfExceedance, "probabilityOfExceedance").toBe("number");
     expect(one.cases.map((c: { name: string }) => c.name), "per ambient case plus slack water").toEqual([
       "spring tide",
@@ -88,7 +91,9 @@ describe("brinefield uncertainty", () => {
 
   it("rejects a bad seed or run count, naming the option", async () => {
     const f = fakeIO();
-    await expect(uncertainty.run(["site.json", "--seed", "-3"], f.io), "negative seed").rejects.toThrow(/--seed/);
+    await expect(uncertainty.run(["site.json", "--seed", "-3"], f.io), "negative seed").rejects.toThrow(
+      /--seed/,
+    );
     await expect(uncertainty.run(["site.json", "--runs", "0"], f.io), "zero runs").rejects.toThrow(/--runs/);
   });
 });
@@ -96,23 +101,37 @@ describe("brinefield uncertainty", () => {
 describe("brinefield sweep", () => {
   it("tabulates each point with the governing case and equation of state, and writes CSV", async () => {
     const f = fakeIO();
-    const code = await sweep.run(["site.json", "--vary", "ambient.depth=12:30 m:3", "--json", "--csv", "out.csv", "--workers", "2"], f.io);
+    const args = ["site.json", "--vary", "ambient.depth=12:30 m:3", "--json", "--csv", "out.csv"];
+    args.push("--workers", "2");
+    const code = await sweep.run(args, f.io);
     expect(code, f.err()).toBe(0);
     const j = JSON.parse(f.out());
-    expect(j.points.map((p: Record<string, number>) => p["ambient.depth"]), "12, 21, 30 m").toEqual([12, 21, 30]);
+    expect(j.points.map((p: Record<string, number>) => p["ambient.depth"]), "12, 21, 30 m").toEqual(
+      [12, 21, 30],
+    );
     for (const p of j.points) {
       expect(typeof p.edgeDilution, "edge dilution per point").toBe("number");
-      expect(typeof p.equationOfState === "string" && p.equationOfState.length > 0, "equation of state named").toBe(true);
-      expect(["spring tide", "neap tide", "slack water"], "governing case is one of the cases").toContain(p.governingCase);
+      expect(
+        typeof p.equationOfState === "string" && p.equationOfState.length > 0,
+        "equation of state named",
+      ).toBe(true);
+      expect(["spring tide", "neap tide", "slack water"], "governing case is one of the cases").toContain(
+        p.governingCase,
+      );
     }
     const csv = csvParse(f.files.get("out.csv")!);
     expect(csv.length, "one CSV row per point").toBe(3);
-    expect(csv.columns.slice(0, 3), "CSV columns").toEqual(["ambient.depth", "governingCase", "edgeDilution"]);
+    expect(csv.columns.slice(0, 3), "CSV columns").toEqual(
+      ["ambient.depth", "governingCase", "edgeDilution"],
+    );
   });
 
   it("explains a malformed --vary", async () => {
     const f = fakeIO();
-    await expect(sweep.run(["site.json", "--vary", "ambient.depth=5:10"], f.io), "missing steps").rejects.toThrow(/from:to:steps/);
+    await expect(
+      sweep.run(["site.json", "--vary", "ambient.depth=5:10"], f.io),
+      "missing steps",
+    ).rejects.toThrow(/from:to:steps/);
   });
 });
 
@@ -120,7 +139,10 @@ describe("brinefield design", () => {
   it("returns a short list whose every design re-checks as passing with runScenario", async () => {
     const f = fakeIO();
     const code = await design.run(
-      ["site.json", "--max-ports", "5", "--diameter-steps", "2", "--angles", "45,60", "--max-length", "30 m", "--json", "--workers", "2"],
+      [
+        ...["site.json", "--max-ports", "5", "--diameter-steps", "2", "--angles", "45,60"],
+        ...["--max-length", "30 m", "--json", "--workers", "2"],
+      ],
       f.io,
     );
     expect(code, f.err()).toBe(0);
@@ -130,7 +152,9 @@ describe("brinefield design", () => {
     const parsed = parseScenario(JSON.parse(readFileSync(join(dir, "site.json"), "utf8")));
     if (!parsed.ok) throw new Error("site must parse");
     for (const d of j.designs) {
-      for (const k of ["portCount", "portDiameter", "portAngle", "portSpacing"]) expect(typeof d[k], `design field ${k}`).toBe("number");
+      for (const k of ["portCount", "portDiameter", "portAngle", "portSpacing"]) {
+        expect(typeof d[k], `design field ${k}`).toBe("number");
+      }
       const s = withOverrides(parsed.scenario, {
         "diffuser.portCount": d.portCount,
         "diffuser.portDiameter": d.portDiameter,
@@ -153,7 +177,9 @@ describe("brinefield compare", () => {
     const code = await compare.run(["study.json", "--json", "--sort=-margin", "--csv", "rows.csv"], f.io);
     expect(code, f.err()).toBe(0);
     const j = JSON.parse(f.out());
-    expect(new Set(j.rows.map((r: { variant: string }) => r.variant)), "base and both variants").toEqual(new Set(["base", "deeper", "eight ports"]));
+    expect(new Set(j.rows.map((r: { variant: string }) => r.variant)), "base and both variants").toEqual(
+      new Set(["base", "deeper", "eight ports"]),
+    );
     expect(j.rows.length, "3 variants × (3 cases + worst case)").toBe(12);
     const margins = j.rows.map((r: { margin: number }) => r.margin);
     expect([...margins].sort((a, b) => b - a), "sorted by descending margin").toEqual(margins);
@@ -161,8 +187,17 @@ describe("brinefield compare", () => {
   });
 
   it("names the path of a bad study", async () => {
-    writeFileSync(join(dir, "bad-study.json"), JSON.stringify({ format: "brinefield-study", version: 1, name: "x", base: "site.json", variants: [{ name: "v" }] }));
+    const bad = {
+      format: "brinefield-study",
+      version: 1,
+      name: "x",
+      base: "site.json",
+      variants: [{ name: "v" }],
+    };
+    writeFileSync(join(dir, "bad-study.json"), JSON.stringify(bad));
     const f = fakeIO();
-    await expect(compare.run(["bad-study.json"], f.io), "missing overrides").rejects.toThrow(/variants\.0\.overrides/);
+    await expect(compare.run(["bad-study.json"], f.io), "missing overrides").rejects.toThrow(
+      /variants\.0\.overrides/,
+    );
   });
 });

@@ -6,6 +6,7 @@ import {
   judgeDesign,
   shortList,
   exitVelocity,
+  type DesignCandidate,
   type DesignConstraints,
 } from "../../../core/study/design";
 import { evaluatePoint } from "../../../core/study/evaluate-point";
@@ -52,38 +53,46 @@ describe("design search (against the pipeline)", () => {
   raw.ambientCases = [{ name: "spring tide", currentSpeed: 0.35 }, { name: "neap tide", currentSpeed: 0.05 }];
   const s = scenarioFrom(raw);
   const c = constraints(s, { maxPorts: 6, maxLength: 30, diameterSteps: 3 });
-  const verdicts = designCandidates(s, c).map((d) => judgeDesign(d, evaluatePoint(s, candidateOverrides(d), evaluateScenario), c));
+  const judge = (d: DesignCandidate) =>
+    judgeDesign(d, evaluatePoint(s, candidateOverrides(d), evaluateScenario), c);
+  const verdicts = designCandidates(s, c).map(judge);
   const list = shortList(verdicts, c.maxDesigns);
 
   it("returns a short list with trade-offs, not one answer", () => {
     expect(list.length, "more than one design passes in this example").toBeGreaterThan(1);
     const labels = list.flatMap((d) => d.bestFor);
-    for (const k of ["fewest ports", "lowest exit velocity", "largest margin"]) expect(labels, `a design is best for ${k}`).toContain(k);
+    for (const k of ["fewest ports", "lowest exit velocity", "largest margin"]) {
+      expect(labels, `a design is best for ${k}`).toContain(k);
+    }
     const fewest = list.find((d) => d.bestFor.includes("fewest ports"))!;
     const passing = verdicts.filter((v) => v.ok);
     expect(fewest.candidate.portCount, "fewest ports is the minimum over passing designs").toBe(
       Math.min(...passing.map((v) => v.candidate.portCount)),
     );
-    expect(list.find((d) => d.bestFor.includes("largest margin"))!.worstMargin, "largest margin is the maximum").toBe(
-      Math.max(...passing.map((v) => v.worstMargin)),
-    );
+    const largest = list.find((d) => d.bestFor.includes("largest margin"))!;
+    const best = Math.max(...passing.map((v) => v.worstMargin));
+    expect(largest.worstMargin, "largest margin is the maximum").toBe(best);
   });
 
-  it("every returned design re-checks as passing with runScenario under all cases, slack water included", () => {
+  it("every returned design re-checks as passing with runScenario in all cases, slack water included", () => {
     for (const d of list) {
       const patched = withOverrides(s, candidateOverrides(d.candidate));
       const cases = expandCases(patched);
-      expect(cases.map((k) => k.name), "spring, neap and slack water").toEqual(["spring tide", "neap tide", "slack water"]);
+      expect(cases.map((k) => k.name), "spring, neap and slack water").toEqual(
+        ["spring tide", "neap tide", "slack water"],
+      );
       for (const k of cases) {
         const r = runScenario(k.scenario);
-        expect(r.compliance.pass, `design #${d.rank} passes in ${k.name} (margin ${r.compliance.margin})`).toBe(true);
+        expect(
+          r.compliance.pass,
+          `design #${d.rank} passes in ${k.name} (margin ${r.compliance.margin})`,
+        ).toBe(true);
         expect(r.port.velocity, `design #${d.rank} exit velocity in range`).toBeGreaterThanOrEqual(3 - 1e-9);
         expect(r.port.velocity, `design #${d.rank} exit velocity in range`).toBeLessThanOrEqual(6 + 1e-9);
         for (const m of r.nearField) {
           if (m.maxRiseHeight === null) continue;
-          expect(k.scenario.diffuser.portHeight + m.maxRiseHeight, `${m.method}: jet stays below the surface`).toBeLessThan(
-            k.scenario.ambient.depth,
-          );
+          const top = k.scenario.diffuser.portHeight + m.maxRiseHeight;
+          expect(top, `${m.method}: jet stays below the surface`).toBeLessThan(k.scenario.ambient.depth);
         }
       }
     }
@@ -95,7 +104,9 @@ describe("design search (against the pipeline)", () => {
       mixingZone: { radius: 1, limits: [{ constituent: "salinity", maxIncrease: 0.01 }] },
     });
     const cs = constraints(strict, { maxPorts: 2, diameterSteps: 2 });
-    const v = designCandidates(strict, cs).map((d) => judgeDesign(d, evaluatePoint(strict, candidateOverrides(d), evaluateScenario), cs));
+    const v = designCandidates(strict, cs).map((d) =>
+      judgeDesign(d, evaluatePoint(strict, candidateOverrides(d), evaluateScenario), cs),
+    );
     expect(shortList(v, 8), "a 0.01 g/kg rise 1 m from the ports cannot be met").toEqual([]);
   });
 });

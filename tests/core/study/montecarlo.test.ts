@@ -45,8 +45,10 @@ describe("Monte Carlo — closed-form cases (identity-like output)", () => {
       0.006,
       "percentiles of a uniform input",
     );
-    // P(U < 0.2) = (0.2 − 0.1)/(0.5 − 0.1) = 0.25: the required "dilution" 0.2 is not met a quarter of the time.
-    assertInDelta(r.cases[0]!.probabilityOfExceedance, 0.25, 0.012, "exceedance probability of a uniform input");
+    // P(U < 0.2) = (0.2 − 0.1)/(0.5 − 0.1) = 0.25: the required "dilution" 0.2 is not met a quarter of
+    // the time.
+    const pe = r.cases[0]!.probabilityOfExceedance;
+    assertInDelta(pe, 0.25, 0.012, "exceedance probability of a uniform input");
   });
 
   it("a normal brine salinity N(65, 1.5) through an identity output has P5/P95 = 65 ∓ 1.6449·1.5", () => {
@@ -59,7 +61,8 @@ describe("Monte Carlo — closed-form cases (identity-like output)", () => {
     const e = r.cases[0]!.edgeDilution;
     assertInDelta([e.p5, e.p50, e.p95], [62.5327, 65, 67.4673], 0.05, "percentiles of a normal input");
     // P(X < 66) = Φ((66 − 65)/1.5) = Φ(0.6667) = 0.7475 (NormalDist().cdf).
-    assertInDelta(r.cases[0]!.probabilityOfExceedance, 0.7475, 0.012, "exceedance probability of a normal input");
+    const pe = r.cases[0]!.probabilityOfExceedance;
+    assertInDelta(pe, 0.7475, 0.012, "exceedance probability of a normal input");
   });
 
   it("a lognormal current with median 0.1 and gsd 2 has P95 = 0.1·2^1.6449 = 0.3127", () => {
@@ -73,13 +76,15 @@ describe("Monte Carlo — closed-form cases (identity-like output)", () => {
   });
 
   it("a triangular flow (0.2, 0.25, 0.3) has median 0.25 and P5 = 0.2 + √(0.05)·0.1·… (closed form)", () => {
-    // Symmetric triangular on [a, b]: F⁻¹(p) = a + (b − a)·√(p/2) for p ≤ ½ → P5 = 0.2 + 0.1·√0.025 = 0.215811.
+    // Symmetric triangular on [a, b]: F⁻¹(p) = a + (b − a)·√(p/2) for p ≤ ½
+    // → P5 = 0.2 + 0.1·√0.025 = 0.215811.
     const s = withUncertainty({ options: { addSlackWater: false } }, [
       { path: "discharge.flow", distribution: "triangular", min: 0.2, mode: 0.25, max: 0.3 },
     ]);
     const r = run(s, plan(s, 20_000, 8), identityEvaluator(1, (x) => x.discharge.flow), 1);
     const e = r.cases[0]!.edgeDilution;
-    assertInDelta([e.p5, e.p50, e.p95], [0.215811, 0.25, 0.284189], 0.0012, "percentiles of a triangular input");
+    const expected = [0.215811, 0.25, 0.284189];
+    assertInDelta([e.p5, e.p50, e.p95], expected, 0.0012, "percentiles of a triangular input");
   });
 });
 
@@ -97,7 +102,9 @@ describe("Monte Carlo — reproducibility", () => {
       expect(run(s, pl, fake, parts), `split into ${parts} chunks gives identical results`).toEqual(one);
     }
     const other = run(s, plan(s, 1000, 12346), fake, 1);
-    expect(other.cases[0]!.edgeDilution.p50, "another seed gives another sample").not.toBe(one.cases[0]!.edgeDilution.p50);
+    expect(other.cases[0]!.edgeDilution.p50, "another seed gives another sample").not.toBe(
+      one.cases[0]!.edgeDilution.p50,
+    );
   });
 
   it("splits runs into contiguous chunks covering every run once", () => {
@@ -125,7 +132,10 @@ describe("Monte Carlo — reproducibility", () => {
 describe("Monte Carlo — against the pipeline", () => {
   it("with zero spread equals the deterministic run in every case", () => {
     const raw = fourPortRaw();
-    raw.ambientCases = [{ name: "spring tide", currentSpeed: 0.3 }, { name: "neap tide", currentSpeed: 0.05, temperature: 24 }];
+    raw.ambientCases = [
+      { name: "spring tide", currentSpeed: 0.3 },
+      { name: "neap tide", currentSpeed: 0.05, temperature: 24 },
+    ];
     const s = scenarioFrom({
       ...raw,
       uncertainty: {
@@ -145,12 +155,11 @@ describe("Monte Carlo — against the pipeline", () => {
     cases.forEach((c, i) => {
       const det = evaluateScenario(c.scenario);
       const e = r.cases[i]!.edgeDilution;
-      expect([e.p5, e.p50, e.p95], `case ${c.name}: every run equals the deterministic edge dilution`).toEqual([
-        det.edgeDilution,
-        det.edgeDilution,
-        det.edgeDilution,
-      ]);
-      expect(r.cases[i]!.probabilityOfExceedance, `case ${c.name}: exceedance is 0 or 1`).toBe(det.pass ? 0 : 1);
+      const d = det.edgeDilution;
+      expect([e.p5, e.p50, e.p95], `${c.name}: every run equals the deterministic run`).toEqual([d, d, d]);
+      expect(r.cases[i]!.probabilityOfExceedance, `case ${c.name}: exceedance is 0 or 1`).toBe(
+        det.pass ? 0 : 1,
+      );
     });
   });
 

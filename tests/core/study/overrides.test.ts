@@ -5,16 +5,24 @@ import { fourPortRaw, scenarioFrom } from "./fixtures";
 describe("withOverrides()", () => {
   const base = scenarioFrom(fourPortRaw());
 
-  it("gives the same normalised scenario as re-reading the file with the same change (uniform ambient)", () => {
+  it("gives the same scenario as re-reading the file with the same change (uniform ambient)", () => {
     const raw = fourPortRaw();
     (raw.ambient as Record<string, unknown>).salinity = 37.5;
     (raw.ambient as Record<string, unknown>).depth = 20;
     (raw.diffuser as Record<string, unknown>).portCount = 6;
     const reread = scenarioFrom(raw);
-    const patched = withOverrides(base, { "ambient.salinity": 37.5, "ambient.depth": 20, "diffuser.portCount": 6 });
+    const patched = withOverrides(base, {
+      "ambient.salinity": 37.5,
+      "ambient.depth": 20,
+      "diffuser.portCount": 6,
+    });
     expect(patched.ambient, "ambient and its two-point profile follow the overrides").toEqual(reread.ambient);
-    expect(patched.diffuser.flowSplit, "equal split over the new port count").toEqual(reread.diffuser.flowSplit);
-    expect(patched.diffuser.length, "length follows port count × spacing").toBeCloseTo(reread.diffuser.length, 12);
+    expect(patched.diffuser.flowSplit, "equal split over the new port count").toEqual(
+      reread.diffuser.flowSplit,
+    );
+    expect(patched.diffuser.length, "length follows port count × spacing").toBeCloseTo(
+      reread.diffuser.length, 12,
+    );
   });
 
   it("keeps nominal and effective diameters consistent through the contraction coefficient", () => {
@@ -46,8 +54,13 @@ describe("withOverrides()", () => {
     ];
     const s = scenarioFrom(raw);
     const p = withOverrides(s, { "ambient.salinity": 37, "ambient.temperature": 17 });
-    expect(p.ambient.profile.map((q) => q.salinity), "salinity shifted by +1 g/kg at every depth").toEqual([36, 37]);
-    expect(p.ambient.profile.map((q) => q.temperature), "temperature shifted by −1 °C at every depth").toEqual([23, 17]);
+    expect(p.ambient.profile.map((q) => q.salinity), "salinity shifted by +1 g/kg at every depth").toEqual(
+      [36, 37],
+    );
+    expect(
+      p.ambient.profile.map((q) => q.temperature),
+      "temperature shifted by −1 °C at every depth",
+    ).toEqual([23, 17]);
     const shallower = withOverrides(s, { "ambient.depth": 7.5 });
     expect(shallower.ambient.profile.at(-1), "profile cut at the new seabed, interpolated").toEqual({
       depth: 7.5,
@@ -66,10 +79,16 @@ describe("withOverrides()", () => {
     expect(Object.isFrozen(p.diffuser), "the result is frozen like a parsed scenario").toBe(true);
   });
 
-  it("drops the plant block when the discharge is overridden (the plant's mass balance no longer applies)", () => {
+  it("drops the plant block when the discharge is overridden (its mass balance no longer applies)", () => {
     const raw = fourPortRaw();
     delete raw.discharge;
-    raw.plant = { productFlow: 0.2, recovery: 0.45, feedSalinity: 36, saltRejection: 0.996, feedTemperature: 22 };
+    raw.plant = {
+      productFlow: 0.2,
+      recovery: 0.45,
+      feedSalinity: 36,
+      saltRejection: 0.996,
+      feedTemperature: 22,
+    };
     const s = scenarioFrom(raw);
     expect(s.plant, "the parsed scenario has a plant").toBeDefined();
     const p = withOverrides(s, { "discharge.salinity": 60 });
@@ -81,8 +100,12 @@ describe("withOverrides()", () => {
 
   it("rejects unknown paths and out-of-range or fractional values, naming the path", () => {
     expect(() => withOverrides(base, { "ambient.colour": 1 }), "unknown path").toThrow(/ambient\.colour/);
-    expect(() => withOverrides(base, { "diffuser.portCount": 2.5 }), "fractional count").toThrow(OverrideError);
-    expect(() => withOverrides(base, { "ambient.currentSpeed": -1 }), "negative current").toThrow(/ambient\.currentSpeed/);
+    expect(() => withOverrides(base, { "diffuser.portCount": 2.5 }), "fractional count").toThrow(
+      OverrideError,
+    );
+    expect(() => withOverrides(base, { "ambient.currentSpeed": -1 }), "negative current").toThrow(
+      /ambient\.currentSpeed/,
+    );
   });
 });
 
@@ -90,7 +113,8 @@ describe("withRawOverride()", () => {
   it("sets nested and indexed paths on a deep copy", () => {
     const raw = fourPortRaw();
     raw.ambientCases = [{ name: "a" }];
-    const p = withRawOverride(withRawOverride(raw, "ambient.depth", "12 m"), "ambientCases.0.currentSpeed", 0.4) as typeof raw;
+    const deeper = withRawOverride(raw, "ambient.depth", "12 m");
+    const p = withRawOverride(deeper, "ambientCases.0.currentSpeed", 0.4) as typeof raw;
     expect((p.ambient as Record<string, unknown>).depth, "unit string kept for the parser").toBe("12 m");
     expect((p.ambientCases as Record<string, unknown>[])[0]!.currentSpeed, "array index path").toBe(0.4);
     expect((raw.ambient as Record<string, unknown>).depth, "input unchanged").toBe(15);

@@ -70,7 +70,8 @@ describe("standardNormal() (Box–Muller)", () => {
     }
     assertInDelta(sum / N, 0, 0.012, "normal mean (5 standard errors, 1/√N = 0.0022)");
     assertInDelta(sum2 / N, 1, 0.016, "normal variance (5 standard errors, √(2/N) = 0.0032)");
-    assertInDelta(inside / N, 0.95, 0.0025, "fraction within ±1.96 (5 standard errors, √(0.0475/N) = 4.9e-4)");
+    // 5 standard errors of a proportion: √(0.95·0.05/N) = 4.9e-4.
+    assertInDelta(inside / N, 0.95, 0.0025, "fraction within ±1.96");
   });
 
   it("consumes exactly two uniforms per call, so streams stay aligned", () => {

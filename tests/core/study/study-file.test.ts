@@ -23,25 +23,31 @@ describe("parseStudy()", () => {
     expect(parseStudy(good()).ok, "valid study").toBe(true);
   });
 
+  type Study = Record<string, unknown> & { variants: { name: string; overrides: object }[] };
+  const sweepOf = (steps: number) => ({ vary: [{ path: "ambient.depth", from: 5, to: 10, steps }] });
   it.each([
-    ["format", (s: Record<string, unknown>) => (s.format = "brinefield-scenario"), "format"],
-    ["version", (s: Record<string, unknown>) => (s.version = 2), "version"],
-    ["variant name", (s: Record<string, unknown>) => ((s.variants as { name: string }[])[1]!.name = ""), "variants.1.name"],
-    ["duplicate name", (s: Record<string, unknown>) => ((s.variants as { name: string }[])[1]!.name = "deeper"), "variants.1.name"],
-    ["reserved name", (s: Record<string, unknown>) => ((s.variants as { name: string }[])[0]!.name = "base"), "variants.0.name"],
-    ["override path", (s: Record<string, unknown>) => ((s.variants as { overrides: object }[])[0]!.overrides = { "ambient depth": 3 }), "variants.0.overrides.ambient depth"],
-    ["unknown key", (s: Record<string, unknown>) => (s.extra = 1), "(study)"],
-    ["sweep steps", (s: Record<string, unknown>) => (s.sweep = { vary: [{ path: "ambient.depth", from: 5, to: 10, steps: 0 }] }), "sweep.vary.0.steps"],
+    ["format", (s: Study) => (s.format = "brinefield-scenario"), "format"],
+    ["version", (s: Study) => (s.version = 2), "version"],
+    ["variant name", (s: Study) => (s.variants[1]!.name = ""), "variants.1.name"],
+    ["duplicate name", (s: Study) => (s.variants[1]!.name = "deeper"), "variants.1.name"],
+    ["reserved name", (s: Study) => (s.variants[0]!.name = "base"), "variants.0.name"],
+    [
+      "override path",
+      (s: Study) => (s.variants[0]!.overrides = { "ambient depth": 3 }),
+      "variants.0.overrides.ambient depth",
+    ],
+    ["unknown key", (s: Study) => (s.extra = 1), "(study)"],
+    ["sweep steps", (s: Study) => (s.sweep = sweepOf(0)), "sweep.vary.0.steps"],
   ])("rejects a bad %s, naming the path", (_what, mutate, path) => {
-    const s = good() as Record<string, unknown>;
+    const s = good() as unknown as Study;
     mutate(s);
     const r = parseStudy(s);
     expect(r.ok, "bad study rejected").toBe(false);
     const paths = r.ok ? [] : r.issues.map((i) => i.path);
     expect(paths, `an issue at ${path}`).toContain(path);
-    expect(r.ok ? "" : r.issues.find((i) => i.path === path)!.message, "the message starts with the path").toMatch(
-      new RegExp(`^${path.replace(/[.()]/g, "\\$&")}: `),
-    );
+    const message = r.ok ? "" : r.issues.find((i) => i.path === path)!.message;
+    const escaped = path.replace(/[.()]/g, "\\$&");
+    expect(message, "the message starts with the path").toMatch(new RegExp(`^${escaped}: `));
   });
 
   it("matches the checked-in JSON Schema core/study/study.schema.json", () => {
@@ -58,7 +64,9 @@ describe("studyVariants() and compareVariant()", () => {
     if (!parsed.ok) throw new Error("study should parse");
     const v = studyVariants(parsed.study, study.base, parseScenario);
     if (!v.ok) throw new Error(v.issues.map((i) => i.message).join("; "));
-    expect(v.variants.map((x) => x.name), "base first, then the variants").toEqual(["base", "deeper", "six ports"]);
+    expect(v.variants.map((x) => x.name), "base first, then the variants").toEqual(
+      ["base", "deeper", "six ports"],
+    );
     expect(v.variants[1]!.scenario.ambient.depth, "25 m").toBe(25);
     expect(v.variants[1]!.scenario.ambientCases[0]!.depth, "the case inherits the variant's depth").toBe(25);
     expect(v.variants[2]!.scenario.diffuser.length, "6 ports × 5 m spacing → 25 m").toBe(25);
@@ -71,7 +79,9 @@ describe("studyVariants() and compareVariant()", () => {
     if (!parsed.ok) throw new Error("study should parse");
     const v = studyVariants(parsed.study, study.base, parseScenario);
     expect(v.ok, "zero ports rejected").toBe(false);
-    expect(v.ok ? "" : v.issues[0]!.message, "variant and path named").toMatch(/^variants\.1 \(six ports\): diffuser\.portCount/);
+    expect(v.ok ? "" : v.issues[0]!.message, "variant and path named").toMatch(
+      /^variants\.1 \(six ports\): diffuser\.portCount/,
+    );
   });
 
   it("gives one row per ambient case plus a worst-case row, sortable by any column", () => {
@@ -92,14 +102,21 @@ describe("studyVariants() and compareVariant()", () => {
       "six ports/worst case",
     ]);
     const worst = rows[2]!;
-    expect(worst.summary!.margin, "worst case has the lowest margin").toBe(Math.min(rows[0]!.summary!.margin, rows[1]!.summary!.margin));
+    expect(worst.summary!.margin, "worst case has the lowest margin").toBe(
+      Math.min(rows[0]!.summary!.margin, rows[1]!.summary!.margin),
+    );
     const flat = rows.map(flattenRow);
     expect(Object.keys(flat[0]!), "per-method columns").toEqual(
-      expect.arrayContaining(["lengthScaleMaxRise", "integralImpactDistance", "integralImpactDilution", "edgeDilution", "verdict"]),
+      expect.arrayContaining([
+        ...["lengthScaleMaxRise", "integralImpactDistance", "integralImpactDilution"],
+        ...["edgeDilution", "verdict"],
+      ]),
     );
     const sorted = sortRows(flat, "-margin")!;
     for (let i = 1; i < sorted.length; i++) {
-      expect((sorted[i - 1]!.margin as number) >= (sorted[i]!.margin as number), "descending margin").toBe(true);
+      expect((sorted[i - 1]!.margin as number) >= (sorted[i]!.margin as number), "descending margin").toBe(
+        true,
+      );
     }
     expect(sortRows(flat, "nonsense"), "unknown column").toBeNull();
   });

@@ -10,7 +10,8 @@ describe("parseSweepAxis()", () => {
     const a = parseSweepAxis("ambient.currentSpeed=0:1 knot:5");
     expect(a.ok, "a valid axis").toBe(true);
     // 1 knot = 1852 m / 3600 s exactly (international nautical mile).
-    if (a.ok) expect(a.axis, "to converted to m/s").toEqual({ path: "ambient.currentSpeed", from: 0, to: 1852 / 3600, steps: 5 });
+    const expected = { path: "ambient.currentSpeed", from: 0, to: 1852 / 3600, steps: 5 };
+    if (a.ok) expect(a.axis, "to converted to m/s").toEqual(expected);
   });
 
   it("names the problem: unknown path, bad steps, wrong unit, out of range", () => {
@@ -28,8 +29,12 @@ describe("parseSweepAxis()", () => {
 
 describe("sweepGrid()", () => {
   it("spaces values evenly, inclusive, whole numbers for port counts, first axis slowest", () => {
-    expect(axisValues({ path: "ambient.depth", from: 10, to: 20, steps: 3 }), "three depths").toEqual([10, 15, 20]);
-    expect(axisValues({ path: "diffuser.portCount", from: 2, to: 6, steps: 3 }), "port counts").toEqual([2, 4, 6]);
+    expect(axisValues({ path: "ambient.depth", from: 10, to: 20, steps: 3 }), "three depths").toEqual(
+      [10, 15, 20],
+    );
+    expect(axisValues({ path: "diffuser.portCount", from: 2, to: 6, steps: 3 }), "port counts").toEqual(
+      [2, 4, 6],
+    );
     const g = sweepGrid([
       { path: "ambient.depth", from: 10, to: 20, steps: 2 },
       { path: "diffuser.portCount", from: 2, to: 3, steps: 2 },
@@ -44,7 +49,10 @@ describe("sweepRows() and eosCrossings()", () => {
     const s = scenarioFrom(fourPortRaw());
     const base = identityEvaluator(50, (x) => 100 * x.ambient.currentSpeed);
     // A fake evaluator that switches equation of state above 30 °C brine temperature.
-    const fake: Evaluator = (x) => ({ ...base(x), equationOfState: x.discharge.temperature > 30 ? "B" : "A" });
+    const fake: Evaluator = (x) => ({
+      ...base(x),
+      equationOfState: x.discharge.temperature > 30 ? "B" : "A",
+    });
     const axes = [{ path: "discharge.temperature", from: 20, to: 40, steps: 5 }];
     const grid = sweepGrid(axes);
     const rows = sweepRows(grid, evaluatePoints(s, grid.map((g) => g.overrides), fake));
@@ -63,9 +71,13 @@ describe("sweepRows() and eosCrossings()", () => {
     const axes = [{ path: "diffuser.portCount", from: 2, to: 8, steps: 4 }];
     const grid = sweepGrid(axes);
     const rows = sweepRows(grid, evaluatePoints(s, grid.map((g) => g.overrides), evaluateScenario));
-    expect(rows.every((r) => r.error === undefined && Number.isFinite(r.edgeDilution)), "every point ran").toBe(true);
+    expect(
+      rows.every((r) => r.error === undefined && Number.isFinite(r.edgeDilution)),
+      "every point ran",
+    ).toBe(true);
     expect(rows.every((r) => r.equationOfState.length > 0), "the equation of state is named").toBe(true);
-    // Same total flow through more, equally spaced ports: smaller jets, more dilution (common practice, no source).
+    // Same total flow through more, equally spaced ports: smaller jets, more dilution
+    // (common practice, no source).
     expect(rows[3]!.edgeDilution, "8 ports dilute more than 2").toBeGreaterThan(rows[0]!.edgeDilution);
   });
 });
