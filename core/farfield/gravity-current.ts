@@ -13,8 +13,8 @@
  *   Bed drag C_D = 0.0025 (common practice, no source).
  * - "advected" (current u): the layer first spreads radially as above; once its own velocity falls to the
  *   current speed it moves with the current, V = u, h = Q/(u·w), Ri = g′h·cosβ/u², starting from the
- *   cross-current width of the radial layer (perimeter/π plus the diffuser's cross-current length), and
- *   widens sideways as a gravity current, dw/dx = 2·√(g′h)/u (front Froude number 1, judgement).
+ *   cross-current width of the radial layer (perimeter/π plus the diffuser's cross-current length, or
+ *   wider where needed to keep the layer's thickness continuous at the switch), and widens sideways as a gravity current, dw/dx = 2·√(g′h)/u (front Froude number 1, judgement).
  */
 import { entrainmentFromRichardson, TURNER_1986_SOURCE } from "./turner-1986-entrainment";
 
@@ -156,11 +156,17 @@ export function spreadingLayerFromNearFieldEnd(input: SpreadingLayerInput): Spre
   const maybeSwitch = (r: number, q: number) => {
     if (advected || !(u > 0)) return;
     const w = width(r, 0);
-    if (state(q, w).v <= u) {
-      // The radial layer has slowed to the current: it is carried off with its cross-current width.
+    const st = state(q, w);
+    if (st.v <= u) {
+      // The radial layer has slowed to the current: it is carried off with its cross-current width, but not
+      // narrower than keeps its thickness continuous (Q = u·h·w), so the layer does not jump in thickness
+      // where it starts to drift (judgement: a sudden pile-up of several metres is not observed in the
+      // thin dense layers this model is for).
+      const hSwitch = st.h;
       advected = true;
       out.switchDistance = r;
-      wAdv = (w - offset) / Math.PI + (input.crossCurrentLength ?? 0);
+      const crossWidth = (w - offset) / Math.PI + (input.crossCurrentLength ?? 0);
+      wAdv = Number.isFinite(hSwitch) && hSwitch > 0 ? Math.max(crossWidth, q / (u * hSwitch)) : crossWidth;
     }
   };
   const push = (r: number, q: number, wa: number) => {

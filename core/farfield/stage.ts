@@ -245,6 +245,18 @@ export function beyondNearField(input: BeyondInput): BeyondOutput {
     }
     const far = farSeries(chain, farMethod);
     if (!edgeInside) layerAtEdge = interpolate(far.distance, far.thickness, radius);
+    const depth = scenario.ambient.depth;
+    const thickest = far.thickness.reduce((m, h) => (Number.isFinite(h) && h > m ? h : m), 0);
+    if (thickest > 0.5 * depth) {
+      warnings.push(
+        warning(
+          "layer-thick-for-depth",
+          "warning",
+          `The spreading layer reaches ${thickest.toFixed(1)} m thick in ${depth.toFixed(1)} m of water: the thin-layer assumptions behind the far-field dilution do not hold; treat the edge dilution as rough.`,
+          { parameter: "ambient.depth", value: depth, stage: "far-field" },
+        ),
+      );
+    }
     if (full) series = buildSeries(chain, truncateSeries(far, xEnd), farMethod, excess);
   }
 
