@@ -239,6 +239,9 @@ export function App() {
       const key = e.key.toLowerCase();
       if (key === "z" && !e.shiftKey) step("undo");
       else if ((key === "z" && e.shiftKey) || key === "y") step("redo");
+      // In the desktop app the File menu's accelerators send these as menu commands; handling the keys
+      // here as well would open two dialogs for one key press.
+      else if (host.isDesktop() && (key === "n" || key === "o" || key === "s")) return;
       else if (key === "n") commands.newScenario();
       else if (key === "o") commands.open();
       else if (key === "s" && e.shiftKey) commands.saveAs();
@@ -247,8 +250,9 @@ export function App() {
       e.preventDefault();
     };
     window.addEventListener("keydown", onKey);
-    const unsubscribe = host.onMenuCommand((command) => {
+    const unsubscribe = host.onMenuCommand((command, path) => {
       switch (command) {
+        case "open-recent": return path ? commands.openRecent(path) : undefined;
         case "new": return commands.newScenario();
         case "open": return commands.open();
         case "save": return commands.save();

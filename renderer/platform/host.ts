@@ -225,7 +225,7 @@ export async function setDocumentState(dirty: boolean, title: string): Promise<v
 }
 
 /** Subscribes to menu commands from the desktop host. Returns an unsubscribe function. */
-export function onMenuCommand(listener: (command: MenuCommand) => void): () => void {
+export function onMenuCommand(listener: (command: MenuCommand, path?: string) => void): () => void {
   const host = electronHost();
   return host ? host.onMenu(listener) : () => {};
 }
