@@ -20,6 +20,9 @@ import { fourPortRaw } from "../core/study/fixtures";
 
 let dir = "";
 
+/** Worker threads start from TypeScript source here (tsx in each thread), slow on a busy machine. */
+const WORKERS = { timeout: 120_000 };
+
 function fakeIO(cores = 2) {
   const out: string[] = [];
   const err: string[] = [];
@@ -63,7 +66,7 @@ beforeAll(() => {
 });
 
 describe("brinefield uncertainty", () => {
-  it("repeats exactly with the same seed for 1 and 2 workers, with the promised JSON keys", async () => {
+  it("repeats exactly with the same seed for 1 and 2 workers, with the JSON keys", WORKERS, async () => {
     const run = async (workers: string) => {
       const f = fakeIO();
       const args = ["site.json", "--runs", "24", "--seed", "99", "--workers", workers, "--json"];
@@ -89,7 +92,7 @@ describe("brinefield uncertainty", () => {
     expect(typeof one.elapsedSeconds, "timing key ends in Seconds").toBe("number");
   });
 
-  it("rejects a bad seed or run count, naming the option", async () => {
+  it("rejects a bad seed or run count, naming the option", WORKERS, async () => {
     const f = fakeIO();
     await expect(uncertainty.run(["site.json", "--seed", "-3"], f.io), "negative seed").rejects.toThrow(
       /--seed/,
@@ -99,7 +102,7 @@ describe("brinefield uncertainty", () => {
 });
 
 describe("brinefield sweep", () => {
-  it("tabulates each point with the governing case and equation of state, and writes CSV", async () => {
+  it("tabulates each point with governing case and equation of state; writes CSV", WORKERS, async () => {
     const f = fakeIO();
     const args = ["site.json", "--vary", "ambient.depth=12:30 m:3", "--json", "--csv", "out.csv"];
     args.push("--workers", "2");
@@ -126,7 +129,7 @@ describe("brinefield sweep", () => {
     );
   });
 
-  it("explains a malformed --vary", async () => {
+  it("explains a malformed --vary", WORKERS, async () => {
     const f = fakeIO();
     await expect(
       sweep.run(["site.json", "--vary", "ambient.depth=5:10"], f.io),
@@ -136,7 +139,7 @@ describe("brinefield sweep", () => {
 });
 
 describe("brinefield design", () => {
-  it("returns a short list whose every design re-checks as passing with runScenario", async () => {
+  it("returns a short list whose every design re-checks as passing with runScenario", WORKERS, async () => {
     const f = fakeIO();
     const code = await design.run(
       [
@@ -172,7 +175,7 @@ describe("brinefield design", () => {
 });
 
 describe("brinefield compare", () => {
-  it("resolves the base path relative to the study, sorts and exports CSV", async () => {
+  it("resolves the base path relative to the study, sorts and exports CSV", WORKERS, async () => {
     const f = fakeIO();
     const code = await compare.run(["study.json", "--json", "--sort=-margin", "--csv", "rows.csv"], f.io);
     expect(code, f.err()).toBe(0);
@@ -186,7 +189,7 @@ describe("brinefield compare", () => {
     expect(csvParse(f.files.get("rows.csv")!).length, "CSV rows").toBe(12);
   });
 
-  it("names the path of a bad study", async () => {
+  it("names the path of a bad study", WORKERS, async () => {
     const bad = {
       format: "brinefield-study",
       version: 1,
