@@ -129,6 +129,23 @@ describe("brinefield sweep", () => {
     );
   });
 
+  it("takes the inputs from a study file's sweep block when no --vary is given", WORKERS, async () => {
+    const study = {
+      format: "brinefield-study",
+      version: 1,
+      name: "Current sweep",
+      base: "site.json",
+      sweep: { vary: [{ path: "ambient.currentSpeed", from: "0 knot", to: "0.5 knot", steps: 2 }] },
+    };
+    writeFileSync(join(dir, "sweep-study.json"), JSON.stringify(study));
+    const f = fakeIO();
+    const code = await sweep.run(["sweep-study.json", "--json", "--workers", "1"], f.io);
+    expect(code, f.err()).toBe(0);
+    const speeds = JSON.parse(f.out()).points.map((p: Record<string, number>) => p["ambient.currentSpeed"]);
+    // 0.5 knot = 0.5 × 1852/3600 m/s (international knot, exact).
+    expect(speeds, "two points from the study's sweep block, converted to m/s").toEqual([0, (0.5 * 1852) / 3600]);
+  });
+
   it("explains a malformed --vary", WORKERS, async () => {
     const f = fakeIO();
     await expect(
