@@ -16,10 +16,9 @@ import { textTable } from "../../study/table";
 import { formatNumber } from "../../units";
 import {
   EXIT_CANCELLED,
-  isCancelled,
   pointsOnWorkers,
-  progressBar,
   workersOption,
+  withProgress,
 } from "../workers/run-study";
 
 const NAME = "design";
@@ -126,22 +125,12 @@ async function run(argv: readonly string[], io: CliIO): Promise<number> {
       1,
     );
   }
-  const bar = progressBar(io, "Design search", candidates.length);
-  const t0 = performance.now();
-  let points;
-  try {
-    const list = candidates.map(candidateOverrides);
-    points = await pointsOnWorkers(scenario, list, workers, (d) => bar.update(d));
-  } catch (err) {
-    bar.finish();
-    if (isCancelled(err)) {
-      io.stderr("Cancelled: no results.\n");
-      return EXIT_CANCELLED;
-    }
-    throw err;
-  }
-  bar.finish();
-  const elapsedSeconds = (performance.now() - t0) / 1000;
+  const overrides = candidates.map(candidateOverrides);
+  const done = await withProgress(io, "Design search", candidates.length, (onProgress) =>
+    pointsOnWorkers(scenario, overrides, workers, onProgress),
+  );
+  if (!done) return EXIT_CANCELLED;
+  const { value: points, elapsedSeconds } = done;
   const verdicts = candidates.map((d, i) => judgeDesign(d, points[i]!, c));
   const designs = shortList(verdicts, c.maxDesigns);
   const cases = expandCases(scenario);

@@ -20,10 +20,9 @@ import { textTable } from "../../study/table";
 import { formatNumber } from "../../units";
 import {
   EXIT_CANCELLED,
-  isCancelled,
   pointsOnWorkers,
-  progressBar,
   workersOption,
+  withProgress,
 } from "../workers/run-study";
 
 const NAME = "sweep";
@@ -107,21 +106,11 @@ async function run(argv: readonly string[], io: CliIO): Promise<number> {
     throw new CliError(`brinefield ${NAME}: ${axes[0]!.path} is varied twice`);
   }
   const grid = sweepGrid(axes);
-  const bar = progressBar(io, "Sweep", grid.length);
-  const t0 = performance.now();
-  let points;
-  try {
-    points = await pointsOnWorkers(scenario, grid.map((g) => g.overrides), workers, (d) => bar.update(d));
-  } catch (err) {
-    bar.finish();
-    if (isCancelled(err)) {
-      io.stderr("Cancelled: no results.\n");
-      return EXIT_CANCELLED;
-    }
-    throw err;
-  }
-  bar.finish();
-  const elapsedSeconds = (performance.now() - t0) / 1000;
+  const done = await withProgress(io, "Sweep", grid.length, (onProgress) =>
+    pointsOnWorkers(scenario, grid.map((g) => g.overrides), workers, onProgress),
+  );
+  if (!done) return EXIT_CANCELLED;
+  const { value: points, elapsedSeconds } = done;
   const rows = sweepRows(grid, points);
   const crossings = eosCrossings(axes, rows);
   const casesNote = describeCases(expandCases(scenario), scenario);

@@ -9,10 +9,9 @@ import { textTable } from "../../study/table";
 import { formatNumber } from "../../units";
 import {
   EXIT_CANCELLED,
-  isCancelled,
   monteCarloOnWorkers,
-  progressBar,
   workersOption,
+  withProgress,
 } from "../workers/run-study";
 
 const NAME = "uncertainty";
@@ -86,21 +85,11 @@ async function run(argv: readonly string[], io: CliIO): Promise<number> {
     throw new CliError(`${positionals[0]}: the uncertainty inputs cannot be used:\n${list}`);
   }
   const plan = planned.plan;
-  const bar = progressBar(io, "Monte Carlo", runs);
-  const t0 = performance.now();
-  let chunks;
-  try {
-    chunks = await monteCarloOnWorkers(scenario, plan, workers, (d) => bar.update(d));
-  } catch (err) {
-    bar.finish();
-    if (isCancelled(err)) {
-      io.stderr("Cancelled: no results.\n");
-      return EXIT_CANCELLED;
-    }
-    throw err;
-  }
-  bar.finish();
-  const elapsedSeconds = (performance.now() - t0) / 1000;
+  const done = await withProgress(io, "Monte Carlo", runs, (onProgress) =>
+    monteCarloOnWorkers(scenario, plan, workers, onProgress),
+  );
+  if (!done) return EXIT_CANCELLED;
+  const { value: chunks, elapsedSeconds } = done;
   const summary = summariseMonteCarlo(plan, chunks);
   const casesNote = describeCases(expandCases(scenario), scenario);
   if (values.json) {

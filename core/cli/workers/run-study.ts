@@ -111,3 +111,30 @@ export function workersOption(value: string | undefined, io: CliIO, command: str
 export function isCancelled(err: unknown): boolean {
   return err instanceof CancelledError;
 }
+
+/**
+ * Runs a long task with a progress bar on stderr; on Ctrl-C prints "Cancelled: no results." and returns
+ * null (the caller exits with EXIT_CANCELLED). Other errors propagate.
+ */
+export async function withProgress<T>(
+  io: CliIO,
+  label: string,
+  total: number,
+  work: (onProgress: (done: number) => void) => Promise<T>,
+): Promise<{ value: T; elapsedSeconds: number } | null> {
+  const bar = progressBar(io, label, total);
+  const t0 = performance.now();
+  try {
+    const value = await work((d) => bar.update(d));
+    return { value, elapsedSeconds: (performance.now() - t0) / 1000 };
+  } catch (err) {
+    if (isCancelled(err)) {
+      bar.finish();
+      io.stderr("Cancelled: no results.\n");
+      return null;
+    }
+    throw err;
+  } finally {
+    bar.finish();
+  }
+}
