@@ -88,6 +88,8 @@ export interface MonteCarloChunk {
   readonly pass: Uint8Array[];
   readonly clampedSamples: number;
   readonly firstError: string | null;
+  /** Evaluations per equation of state (a run can cross from TEOS-10 to the brine correlation). */
+  readonly equationsOfState: Readonly<Record<string, number>>;
 }
 
 /** The values a run draws, in distribution order. */
@@ -115,6 +117,7 @@ export function runMonteCarloChunk(
   const caseValues = cases.map((c) => plan.distributions.map((d) => readPath(c.scenario, d.path)));
   let clamped = 0;
   let firstError: string | null = null;
+  const eos: Record<string, number> = {};
   for (let k = 0; k < n; k++) {
     if (shouldStop?.()) {
       const cut = <T extends Float64Array | Uint8Array>(a: T): T => a.slice(0, k) as T;
@@ -126,6 +129,7 @@ export function runMonteCarloChunk(
         pass: pass.map(cut),
         clampedSamples: clamped,
         firstError,
+        equationsOfState: eos,
       };
     }
     const samples = samplesForRun(plan, start + k);
@@ -158,13 +162,14 @@ export function runMonteCarloChunk(
         const why = err instanceof Error ? err.message : String(err);
         firstError ??= `run ${start + k}, case ${cases[c]!.name}: ${why}`;
       }
+      if (s) eos[s.equationOfState] = (eos[s.equationOfState] ?? 0) + 1;
       edge[c]![k] = s ? s.edgeDilution : Number.NaN;
       margin[c]![k] = s ? s.margin : Number.NaN;
       pass[c]![k] = s ? (s.pass ? 1 : 0) : 2;
     }
     onProgress?.(k + 1);
   }
-  return { start, end, edgeDilution: edge, margin, pass, clampedSamples: clamped, firstError };
+  return { start, end, edgeDilution: edge, margin, pass, clampedSamples: clamped, firstError, equationsOfState: eos };
 }
 
 /**
@@ -199,6 +204,8 @@ export interface MonteCarloSummary {
   readonly worstCase: MonteCarloStats;
   readonly clampedSamples: number;
   readonly firstError: string | null;
+  /** Evaluations per equation of state over all runs and cases. */
+  readonly equationsOfState: Readonly<Record<string, number>>;
 }
 
 /** Every run's results in run order, per case and for the per-run worst case. */
@@ -212,6 +219,7 @@ export interface MonteCarloSamples {
   readonly worstPass: Uint8Array;
   readonly clampedSamples: number;
   readonly firstError: string | null;
+  readonly equationsOfState: Readonly<Record<string, number>>;
 }
 
 /** Merges chunks (in any order) by run index. */
@@ -261,7 +269,23 @@ export function mergeMonteCarloChunks(
     worstPass: wp,
     clampedSamples: ordered.reduce((n, c) => n + c.clampedSamples, 0),
     firstError: ordered.find((c) => c.firstError !== null)?.firstError ?? null,
+    equationsOfState: sumCounts(ordered.map((c) => c.equationsOfState)),
   };
+}
+
+function sumCounts(list: readonly Readonly<Record<string, number>>[]): Record<string, number> {
+  const out: Record<string, number> = {};
+  for (const r of list) for (const [k, v] of Object.entries(r)) out[k] = (out[k] ?? 0) + v;
+  return out;
+}
+
+/** A note when the runs do not all use one equation of state (salinity crossing 42 g/kg). */
+export function equationOfStateNote(counts: Readonly<Record<string, number>>): string | null {
+  const names = Object.keys(counts);
+  if (names.length < 2) return null;
+  const total = names.reduce((n, k) => n + counts[k]!, 0);
+  const parts = names.map((k) => `${counts[k]} of ${total} evaluations used ${k}`);
+  return `The equation of state changes between runs (a salinity crosses TEOS-10's 42 g/kg range): ${parts.join("; ")}.`;
 }
 
 function marginKey(m: number): number {
@@ -294,7 +318,8 @@ export function summariseMonteCarlo(
     runs: m.worstPass.length,
     seed: plan.seed,
     usedDefaultSpreads: plan.usedDefaultSpreads,
-    notes: plan.notes,
+    notes: [...plan.notes, ...[equationOfStateNote(m.equationsOfState)].filter((x): x is string => x !== null)],
+    equationsOfState: m.equationsOfState,
     cases: plan.caseNames.map((name, c) => stats(name, m.edgeDilution[c]!, m.margin[c]!, m.pass[c]!)),
     worstCase: stats("worst case", m.worstEdgeDilution, m.worstMargin, m.worstPass),
     clampedSamples: m.clampedSamples,

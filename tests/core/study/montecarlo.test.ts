@@ -199,3 +199,27 @@ describe("Monte Carlo — against the pipeline", () => {
     expect(p.ok ? "" : p.issues[0]!.path, "the issue names the input").toBe("uncertainty.inputs.0");
   });
 });
+
+describe("Monte Carlo — equation of state", () => {
+  it("says when runs cross from TEOS-10 to the brine correlation (brine salinity straddling 42 g/kg)", () => {
+    // TEOS-10 holds to 42 g/kg Absolute Salinity (IOC, SCOR & IAPSO 2010); a brine drawn around 42 g/kg must
+    // use TEOS-10 in some runs and the brine correlation in others, and the summary must say so.
+    const s = withUncertainty({ options: { addSlackWater: false } }, [
+      { path: "discharge.salinity", distribution: "uniform", min: 40, max: 44 },
+    ]);
+    const pl = plan(s, 40, 5);
+    const summary = run(s, pl, evaluateScenario, 2);
+    const names = Object.keys(summary.equationsOfState).sort();
+    expect(names, "both equations of state were used").toEqual(["Sharqawy 2010 + Nayar 2016", "TEOS-10"]);
+    expect(summary.notes.some((n) => /equation of state changes between runs/.test(n)), "a note says so").toBe(true);
+  });
+
+  it("adds no note when every run uses one equation of state", () => {
+    const s = withUncertainty({ options: { addSlackWater: false } }, [
+      { path: "ambient.currentSpeed", distribution: "uniform", min: 0.05, max: 0.2 },
+    ]);
+    const summary = run(s, plan(s, 10, 5), evaluateScenario, 1);
+    expect(Object.keys(summary.equationsOfState).length, "one equation").toBe(1);
+    expect(summary.notes.some((n) => /equation of state changes/.test(n)), "no crossing note").toBe(false);
+  });
+});
