@@ -50,4 +50,12 @@ describe("brinefield command line", () => {
     expect(unknown.status, "exit code").toBe(2);
     expect(unknown.stderr, "message").toMatch(/unknown command "frobnicate"/);
   });
+
+  it("compares the demo study's variants (a regression check on the study format)", () => {
+    const r = cli("compare", "demo-scenarios/studies/sandy-shelf-options.json", "--json");
+    expect(r.status, r.stderr).toBe(0);
+    const j = JSON.parse(r.stdout);
+    const variants = new Set(j.rows.map((row: any) => row.variant));
+    expect(variants.size, "base and three variants").toBe(4);
+  });
 });
