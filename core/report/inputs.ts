@@ -30,6 +30,8 @@ interface InputRow {
   readonly label: string;
   /** Path in the raw file. */
   readonly path: string;
+  /** Shown under "As entered" when the file leaves the field out (default "(default)"). */
+  readonly whenAbsent?: string;
   /** SI value used (number, text, or null when it does not apply). */
   readonly si: number | string | null;
   readonly unit: string;
@@ -41,7 +43,7 @@ function rowsHtml(file: unknown, rows: readonly InputRow[]): RawHtml {
       const entered = valueAtPath(file, r.path);
       const si = typeof r.si === "number" ? reportNumber(r.si) : (r.si ?? "—");
       const cls = entered === undefined ? ` class="default"` : "";
-      return html`<tr${raw(cls)}><td>${r.label}</td><td class="path">${r.path}</td><td class="entered">${asEntered(entered)}</td><td class="num">${si}</td><td>${r.unit}</td></tr>`;
+      return html`<tr${raw(cls)}><td>${r.label}</td><td class="path">${r.path}</td><td class="entered">${entered === undefined && r.whenAbsent ? r.whenAbsent : asEntered(entered)}</td><td class="num">${si}</td><td>${r.unit}</td></tr>`;
     }),
   );
 }
@@ -54,10 +56,11 @@ function table(caption: string, body: RawHtml): RawHtml {
 export function inputsHtml(file: unknown, s: Scenario): RawHtml {
   const parts: RawHtml[] = [];
   const d = s.discharge;
+  const fromPlant = s.plant ? "(from the plant below)" : undefined;
   const dischargeRows: InputRow[] = [
-    { label: "Total brine flow", path: "discharge.flow", si: d.flow, unit: "m³/s" },
-    { label: "Brine salinity (Absolute Salinity)", path: "discharge.salinity", si: d.salinity, unit: "g/kg" },
-    { label: "Brine temperature", path: "discharge.temperature", si: d.temperature, unit: "°C" },
+    { label: "Total brine flow", path: "discharge.flow", si: d.flow, unit: "m³/s", whenAbsent: fromPlant },
+    { label: "Brine salinity (Absolute Salinity)", path: "discharge.salinity", si: d.salinity, unit: "g/kg", whenAbsent: fromPlant },
+    { label: "Brine temperature", path: "discharge.temperature", si: d.temperature, unit: "°C", whenAbsent: fromPlant },
   ];
   parts.push(table("Discharge", rowsHtml(file, dischargeRows)));
   if (d.constituents.length > 0) {
