@@ -190,8 +190,25 @@ export function beyondNearField(input: BeyondInput): BeyondOutput {
     else for (const m of farMethods) alternatives.push({ method: `${c.nf.method} + ${m}`, dilution: edgeOf(c, m) });
   }
 
-  // Which near-field method feeds the edge.
+  // Which far-field method governs one chain: the requested one, or the lower edge dilution of the two.
   const opts = scenario.options;
+  const farMethodFor = (c: Chain): FarMethod => {
+    if (opts.farField === "passive-diffusion") return u > 0 ? "passive-diffusion" : "gravity-current";
+    if (opts.farField === "conservative" && u > 0 && radius > c.end.distance)
+      return edgeOf(c, "passive-diffusion") < edgeOf(c, "gravity-current") ? "passive-diffusion" : "gravity-current";
+    return "gravity-current";
+  };
+  if (opts.farField === "passive-diffusion" && !(u > 0)) {
+    warnings.push(
+      warning("passive-diffusion-no-current", "warning", "Passive diffusion was requested but the water is stagnant; the spreading layer was used.", {
+        parameter: "options.farField", stage: "far-field",
+      }),
+    );
+  }
+
+  // Which near-field method feeds the edge: the requested one, or by default the more conservative — the
+  // one whose chain gives the lower dilution at the mixing-zone edge (compared at the same place, since the
+  // methods' near fields end at different distances).
   let chain: Chain | undefined;
   if (opts.nearFieldForEdge !== "conservative") {
     chain = chains.find((c) => c.nf.method === opts.nearFieldForEdge);
@@ -203,21 +220,11 @@ export function beyondNearField(input: BeyondInput): BeyondOutput {
       );
     }
   }
-  chain ??= chains.reduce<Chain | undefined>((lo, c) => (lo === undefined || c.end.dilution < lo.end.dilution ? c : lo), undefined);
-
-  // Which far-field method governs.
-  let farMethod: FarMethod = "gravity-current";
-  if (opts.farField === "passive-diffusion") {
-    if (u > 0) farMethod = "passive-diffusion";
-    else
-      warnings.push(
-        warning("passive-diffusion-no-current", "warning", "Passive diffusion was requested but the water is stagnant; the spreading layer was used.", {
-          parameter: "options.farField", stage: "far-field",
-        }),
-      );
-  } else if (opts.farField === "conservative" && chain && u > 0 && radius > chain.end.distance) {
-    farMethod = edgeOf(chain, "passive-diffusion") < edgeOf(chain, "gravity-current") ? "passive-diffusion" : "gravity-current";
-  }
+  chain ??= chains.reduce<Chain | undefined>(
+    (lo, c) => (lo === undefined || edgeOf(c, farMethodFor(c)) < edgeOf(lo, farMethodFor(lo)) ? c : lo),
+    undefined,
+  );
+  const farMethod: FarMethod = chain ? farMethodFor(chain) : "gravity-current";
 
   const xEnd = Math.max(2 * radius, chain ? 1.2 * chain.end.distance : 0, 1);
   let edgeDilution = 1;
