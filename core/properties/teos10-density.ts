@@ -25,10 +25,25 @@ export const TEOS10_PRESSURE_RANGE: readonly [number, number] = [0, 10000];
 const ALL_TERMS = [...TEOS10_GIBBS_WATER_PRESSURE_TERMS, ...TEOS10_GIBBS_SALINE_PRESSURE_TERMS];
 const DBAR_TO_PA = 1e4;
 
-function reduced(sa: number, t: number, p: number): [number, number, number] {
+// The terms as flat typed arrays, and module-scope tables of x^i, y^j, z^k filled once per call: the sums
+// below then multiply table entries instead of calling pow three times per term (same values, same order).
+const TERM_I = Int32Array.from(ALL_TERMS, (t) => t[0]);
+const TERM_J = Int32Array.from(ALL_TERMS, (t) => t[1]);
+const TERM_K = Int32Array.from(ALL_TERMS, (t) => t[2]);
+const TERM_G = Float64Array.from(ALL_TERMS, (t) => t[3]);
+const xPow = new Float64Array(Math.max(...TERM_I) + 1);
+const yPow = new Float64Array(Math.max(...TERM_J) + 1);
+const zPow = new Float64Array(Math.max(...TERM_K) + 1);
+
+/** Fills the power tables with the reduced variables' powers. */
+function fillPowers(sa: number, t: number, p: number): void {
   // The Gibbs function needs √SA; a slightly negative salinity (round-off upstream) is read as zero.
   const x = Math.sqrt(Math.max(sa, 0) / TEOS10_SALINITY_UNIT);
-  return [x, t / TEOS10_TEMPERATURE_UNIT, (p * DBAR_TO_PA) / TEOS10_PRESSURE_UNIT_PA];
+  const y = t / TEOS10_TEMPERATURE_UNIT;
+  const z = (p * DBAR_TO_PA) / TEOS10_PRESSURE_UNIT_PA;
+  for (let i = 0; i < xPow.length; i++) xPow[i] = x ** i;
+  for (let j = 0; j < yPow.length; j++) yPow[j] = y ** j;
+  for (let k = 0; k < zPow.length; k++) zPow[k] = z ** k;
 }
 
 /**
@@ -44,10 +59,11 @@ function reduced(sa: number, t: number, p: number): [number, number, number] {
  * Accuracy: the Gibbs function reproduces density measurements to a few ppm in this range (from memory).
  */
 export function specificVolumeTeos10(sa: number, t: number, p: number): number {
-  const [x, y, z] = reduced(sa, t, p);
+  fillPowers(sa, t, p);
   let sum = 0;
-  for (const [i, j, k, g] of ALL_TERMS) {
-    sum += k * g * x ** i * y ** j * z ** (k - 1);
+  for (let n = 0; n < TERM_G.length; n++) {
+    const k = TERM_K[n];
+    sum += k * TERM_G[n] * xPow[TERM_I[n]] * yPow[TERM_J[n]] * zPow[k - 1];
   }
   return sum / TEOS10_PRESSURE_UNIT_PA;
 }
@@ -75,10 +91,10 @@ export function densityTeos10(sa: number, t: number, p: number): number {
  * @param p sea pressure, dbar
  */
 export function gibbsPressureIntegralTeos10(sa: number, t: number, p: number): number {
-  const [x, y, z] = reduced(sa, t, p);
+  fillPowers(sa, t, p);
   let sum = 0;
-  for (const [i, j, k, g] of ALL_TERMS) {
-    sum += g * x ** i * y ** j * z ** k;
+  for (let n = 0; n < TERM_G.length; n++) {
+    sum += TERM_G[n] * xPow[TERM_I[n]] * yPow[TERM_J[n]] * zPow[TERM_K[n]];
   }
   return sum;
 }
