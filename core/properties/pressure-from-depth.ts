@@ -43,6 +43,23 @@ export function gravityFromLatitude(latitudeDeg: number): number {
  */
 export function pressureFromDepth(depthM: number, latitudeDeg: number = DEFAULT_LATITUDE_DEG): number {
   if (depthM === 0) return 0;
+  const cache = latitudeDeg === DEFAULT_LATITUDE_DEG ? pressureCache : undefined;
+  const known = cache?.get(depthM);
+  if (known !== undefined) return known;
+  const p = pressureFromDepthNewton(depthM, latitudeDeg);
+  if (cache) {
+    if (cache.size >= PRESSURE_CACHE_SIZE) cache.clear();
+    cache.set(depthM, p);
+  }
+  return p;
+}
+
+// Study loops evaluate the same few depths (profile points, port, seabed) in every run, and each Newton
+// solve costs several Gibbs sums: remember recent depths at the default latitude (bounded; a pure function).
+const PRESSURE_CACHE_SIZE = 64;
+const pressureCache = new Map<number, number>();
+
+function pressureFromDepthNewton(depthM: number, latitudeDeg: number): number {
   const target = gravityFromLatitude(latitudeDeg) * (depthM + 0.5 * GRAVITY_GRADIENT * depthM * depthM);
   let p = depthM; // 1 dbar ≈ 1 m: the usual first guess
   for (let iteration = 0; iteration < 20; iteration++) {
