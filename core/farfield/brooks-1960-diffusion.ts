@@ -36,28 +36,59 @@ export interface BrooksInput {
 }
 
 /**
+ * Constants of one wastefield (initial width, current, α_ε) for evaluating the closed forms below at many
+ * distances: {@link brooksFieldFromInput} computes the growth rates once, {@link brooksDilutionInField} and
+ * {@link brooksWidthInField} then cost one power each (same arithmetic as the single-distance functions).
+ */
+export interface BrooksField {
+  /** Initial field width b, m. */
+  readonly b: number;
+  /** Current speed u, m/s. */
+  readonly u: number;
+  /** 4/3-law coefficient α_ε, m^{2/3}/s. */
+  readonly alpha: number;
+  /** (2/3)·β of the dilution formula, β = 12·ε₀/(u·b). */
+  readonly dilutionRate: number;
+  /** (2/3)·β of the width formula (the same β, multiplied in another order). */
+  readonly widthRate: number;
+}
+
+/** The field constants of {@link BrooksField}; `distance` in the input is ignored. */
+export function brooksFieldFromInput(input: Omit<BrooksInput, "distance">): BrooksField {
+  const { initialWidth: b, currentSpeed: u } = input;
+  const alpha = input.alpha ?? FOUR_THIRDS_LAW_COEFFICIENT;
+  const eps0 = alpha * Math.pow(b, 4 / 3);
+  const beta = (12 * eps0) / (u * b);
+  const betaWidth = (12 * alpha * Math.pow(b, 4 / 3)) / (u * b);
+  return { b, u, alpha, dilutionRate: (2 / 3) * beta, widthRate: (2 / 3) * betaWidth };
+}
+
+/**
  * Centreline far-field dilution S_ff = c₀/c_max from Brooks (1960).
  * @returns dilution ≥ 1 (dimensionless); 1 at x = 0 or when the current is zero (no transport)
  */
 export function brooksDilutionFromDistance(input: BrooksInput): number {
-  const { distance: x, initialWidth: b, currentSpeed: u } = input;
-  const alpha = input.alpha ?? FOUR_THIRDS_LAW_COEFFICIENT;
+  return brooksDilutionInField(brooksFieldFromInput(input), input.distance);
+}
+
+/** {@link brooksDilutionFromDistance} at distance x (m) in a field from {@link brooksFieldFromInput}. */
+export function brooksDilutionInField(f: BrooksField, x: number): number {
   // No transport or no width: the closed form is undefined; no passive dilution is credited.
-  if (!(x > 0) || !(b > 0) || !(u > 0) || !(alpha > 0)) return 1;
-  const eps0 = alpha * Math.pow(b, 4 / 3);
-  const beta = (12 * eps0) / (u * b);
-  const grow = Math.pow(1 + ((2 / 3) * beta * x) / b, 3) - 1;
+  if (!(x > 0) || !(f.b > 0) || !(f.u > 0) || !(f.alpha > 0)) return 1;
+  const grow = Math.pow(1 + (f.dilutionRate * x) / f.b, 3) - 1;
   const cRatio = erf(Math.sqrt(1.5 / grow));
   return 1 / cRatio;
 }
 
 /** Field width b(x)/b = (1 + (2/3)·β·x/b)^{3/2} of the 4/3-law solution (Brooks 1960, from memory). */
 export function brooksWidthFromDistance(input: BrooksInput): number {
-  const { distance: x, initialWidth: b, currentSpeed: u } = input;
-  const alpha = input.alpha ?? FOUR_THIRDS_LAW_COEFFICIENT;
-  if (!(x > 0) || !(b > 0) || !(u > 0)) return Math.max(b, 0);
-  const beta = (12 * alpha * Math.pow(b, 4 / 3)) / (u * b);
-  return b * Math.pow(1 + ((2 / 3) * beta * x) / b, 1.5);
+  return brooksWidthInField(brooksFieldFromInput(input), input.distance);
+}
+
+/** {@link brooksWidthFromDistance} at distance x (m) in a field from {@link brooksFieldFromInput}. */
+export function brooksWidthInField(f: BrooksField, x: number): number {
+  if (!(x > 0) || !(f.b > 0) || !(f.u > 0)) return Math.max(f.b, 0);
+  return f.b * Math.pow(1 + (f.widthRate * x) / f.b, 1.5);
 }
 
 /** Range checks for {@link brooksDilutionFromDistance}; never throws. */

@@ -10,6 +10,9 @@ export {
   brooksDilutionFromDistance,
   brooksDilutionFromDistanceValidityIssues,
   brooksWidthFromDistance,
+  brooksFieldFromInput,
+  brooksDilutionInField,
+  brooksWidthInField,
   FOUR_THIRDS_LAW_COEFFICIENT,
   BROOKS_1960_SOURCE,
 } from "./brooks-1960-diffusion";
@@ -19,6 +22,7 @@ export {
   DEFAULT_BED_DRAG,
   SPREADING_LAYER_SOURCE,
 } from "./gravity-current";
+export type { BrooksField, BrooksInput } from "./brooks-1960-diffusion";
 export type { SpreadingLayerInput, SpreadingLayerSeries } from "./gravity-current";
 export { jetProfileFromNearField, dilutionFromProfile, nearFieldEndFromResult } from "./jet-series";
 export type { JetProfile } from "./jet-series";

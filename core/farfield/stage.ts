@@ -26,9 +26,10 @@ import { dilutionFromProfile, jetProfileFromNearField, nearFieldEndFromResult, t
 import { spreadingLayerFromNearFieldEnd, SPREADING_LAYER_SOURCE } from "./gravity-current";
 import {
   BROOKS_1960_SOURCE,
-  brooksDilutionFromDistance,
   brooksDilutionFromDistanceValidityIssues,
-  brooksWidthFromDistance,
+  brooksDilutionInField,
+  brooksFieldFromInput,
+  brooksWidthInField,
 } from "./brooks-1960-diffusion";
 import { TURNER_1986_SOURCE } from "./turner-1986-entrainment";
 import { footprintFromLayer } from "./footprint";
@@ -152,15 +153,15 @@ export function beyondNearField(input: BeyondInput): BeyondOutput {
     return { distance: gc.distance, dilution: gc.dilution, thickness: gc.thickness, width: gc.width };
   };
   const passiveFromLayer = (c: Chain, gc: FarSeries): FarSeries => {
-    const b0 = crossWidth(c);
+    const field = brooksFieldFromInput({ initialWidth: crossWidth(c), currentSpeed: u });
     const h0 = gc.thickness[0];
     const out: FarSeries = { distance: [], dilution: [], thickness: [], width: [] };
     for (const r of gc.distance) {
       const x = r - c.end.distance;
       out.distance.push(r);
-      out.dilution.push(c.end.dilution * brooksDilutionFromDistance({ distance: x, initialWidth: b0, currentSpeed: u }));
+      out.dilution.push(c.end.dilution * brooksDilutionInField(field, x));
       out.thickness.push(h0); // Brooks (1960) assumes no vertical mixing: thickness stays at its start value
-      out.width.push(brooksWidthFromDistance({ distance: x, initialWidth: b0, currentSpeed: u }));
+      out.width.push(brooksWidthInField(field, x));
     }
     return out;
   };
