@@ -19,7 +19,7 @@ import type { Action } from "./state/actions";
 import {
   blankScenario,
   documentFromFile,
-  isPlainObject,
+  fileFromText,
   scenarioName,
   serialiseScenario,
   suggestedFileName,
@@ -53,17 +53,6 @@ function initialDocument(): DocumentState {
   return first ? documentFromFile(first.file, null) : documentFromFile(blankScenario(), null);
 }
 
-/** Reads scenario text; returns an error message for text that is not a JSON object. */
-export function fileFromText(text: string): { ok: true; file: ScenarioFile } | { ok: false; message: string } {
-  try {
-    const parsed: unknown = JSON.parse(text);
-    if (!isPlainObject(parsed)) return { ok: false, message: "The file is JSON but not a scenario object." };
-    return { ok: true, file: parsed };
-  } catch (error) {
-    return { ok: false, message: `The file is not valid JSON: ${error instanceof Error ? error.message : String(error)}` };
-  }
-}
-
 export function App() {
   const [history, setHistory] = useState<History>(() => historyStart(initialDocument()));
   const doc = history.present;
@@ -90,7 +79,9 @@ export function App() {
     savedFile.current = next.file;
     setHistory(historyStart(next));
     // The user opened something else (after agreeing to drop unsaved work): the autosave is obsolete.
-    void host.autosaveClear().catch(() => {});
+    // Recovered work is the exception: it is unsaved, so it is written back at once (below).
+    if (next.dirty) void host.autosaveWrite(serialiseScenario(next.file)).catch(() => {});
+    else void host.autosaveClear().catch(() => {});
     setDocumentKey((n) => n + 1);
   }, []);
   const perform = useCallback(<I,>(action: Action<I>, input: I) => {
@@ -157,23 +148,6 @@ export function App() {
     window.setTimeout(() => setNotice((n) => (n === message ? null : n)), 6000);
   }, []);
 
-  /** Runs `proceed` now, or after the user agrees to lose unsaved changes. */
-  const guardUnsaved = useCallback((what: string, proceed: () => void) => {
-    if (!docRef.current.dirty) {
-      proceed();
-      return;
-    }
-    setConfirm({
-      title: "Unsaved changes",
-      message: `“${scenarioName(docRef.current.file)}” has changes that are not saved. ${what} anyway?`,
-      confirmLabel: "Discard changes",
-      extraLabel: "Save first",
-      onExtra: () => void saveAs(false).then((saved) => saved && proceed()),
-      onConfirm: proceed,
-    });
-    // saveAs (below) reads the document through docRef, so the first render's closure stays correct.
-  }, []);
-
   const loadText = useCallback((text: string, path: string | null) => {
     const read = fileFromText(text);
     if (!read.ok) {
@@ -183,6 +157,7 @@ export function App() {
     loadDocument(documentFromFile(read.file, path));
     setShowStart(false);
     setTab("design");
+    if (path !== null) host.rememberOpened({ path, text });
     void host.recentFiles().then(setRecent).catch(() => {});
   }, [flash, loadDocument]);
 
@@ -202,6 +177,22 @@ export function App() {
       return false;
     }
   }, [flash, setDoc]);
+
+  /** Runs `proceed` now, or after the user agrees to lose unsaved changes. */
+  const guardUnsaved = useCallback((what: string, proceed: () => void) => {
+    if (!docRef.current.dirty) {
+      proceed();
+      return;
+    }
+    setConfirm({
+      title: "Unsaved changes",
+      message: `“${scenarioName(docRef.current.file)}” has changes that are not saved. ${what} anyway?`,
+      confirmLabel: "Discard changes",
+      extraLabel: "Save first",
+      onExtra: () => void saveAs(false).then((saved) => saved && proceed()),
+      onConfirm: proceed,
+    });
+  }, [saveAs]);
 
   const commands = useMemo(() => ({
     newScenario: () => guardUnsaved("Start a new scenario", () => {
@@ -231,6 +222,26 @@ export function App() {
     },
     print: () => void host.printPdf(suggestedFileName(docRef.current.file, "pdf")).catch((e: unknown) => flash(String(e))),
   }), [guardUnsaved, loadText, loadDocument, saveAs, flash, engine.result, unitSystem]);
+
+  /**
+   * Brings back autosaved work as an unsaved document. Text that is no longer a scenario is dropped with
+   * a message; edits made since the start are not thrown away without asking.
+   */
+  const recover = useCallback((record: host.AutosaveRecord) => {
+    setRecovery(null);
+    const read = fileFromText(record.text);
+    if (!read.ok) {
+      flash(`The unsaved work could not be recovered. ${read.message}`);
+      void host.autosaveClear().catch(() => {});
+      return;
+    }
+    guardUnsaved("Recover the earlier unsaved work", () => {
+      loadDocument({ ...documentFromFile(read.file, null), dirty: true });
+      savedFile.current = null; // nothing of it is on disk: undoing back to it stays dirty
+      setShowStart(false);
+      setTab("design");
+    });
+  }, [flash, guardUnsaved, loadDocument]);
 
   // Keyboard shortcuts and host menu commands.
   useEffect(() => {
@@ -288,9 +299,16 @@ export function App() {
       setDragging(false);
       const file = e.dataTransfer?.files[0];
       if (!file) return;
-      guardUnsaved("Open the dropped file", () => {
-        void host.readDroppedFile(file).then((opened) => loadText(opened.text, opened.path));
-      });
+      // Read and check the file first: a picture or any other file must not cost the user their
+      // unsaved work, nor replace the document.
+      void host.readDroppedFile(file).then(
+        (opened) => {
+          const read = fileFromText(opened.text);
+          if (!read.ok) return flash(`${file.name}: ${read.message}`);
+          guardUnsaved("Open the dropped file", () => loadText(opened.text, opened.path));
+        },
+        (error: unknown) => flash(`Could not read ${file.name}: ${error instanceof Error ? error.message : String(error)}`),
+      );
     };
     window.addEventListener("dragover", over);
     window.addEventListener("dragleave", leave);
@@ -300,7 +318,7 @@ export function App() {
       window.removeEventListener("dragleave", leave);
       window.removeEventListener("drop", drop);
     };
-  }, [guardUnsaved, loadText]);
+  }, [guardUnsaved, loadText, flash]);
 
   const result = engine.result;
   const scenario = engine.scenario;
@@ -340,8 +358,8 @@ export function App() {
         {recovery ? (
           <div className="banner recovery" role="status">
             Unsaved work from {recovery.savedAt ? new Date(recovery.savedAt).toLocaleString() : "an earlier session"} was kept.
-            <button type="button" onClick={() => { loadText(recovery.text, null); savedFile.current = null; setDoc((d) => ({ ...d, dirty: true })); setRecovery(null); }}>Recover it</button>
-            <button type="button" className="link-button" onClick={() => { void host.autosaveClear(); setRecovery(null); }}>Discard</button>
+            <button type="button" onClick={() => recover(recovery)}>Recover it</button>
+            <button type="button" className="link-button" onClick={() => { void host.autosaveClear().catch(() => {}); setRecovery(null); }}>Discard</button>
           </div>
         ) : null}
         {notice ? <div className="banner notice" role="status" data-role="notice">{notice}</div> : null}
@@ -379,7 +397,7 @@ export function App() {
                   chart === "trajectory" ? (
                     <TrajectoryChart result={result} scenario={scenario} unitSystem={unitSystem} />
                   ) : (
-                    <DistanceChart result={result} scenario={scenario} unitSystem={unitSystem} quantity={chart} />
+                    <DistanceChart result={result} unitSystem={unitSystem} quantity={chart} />
                   )
                 ) : null}
               </div>

@@ -79,12 +79,27 @@ function rememberWebRecent(name: string, text: string): void {
   }
 }
 
-/** Reads a File chosen by the user or dropped on the window. */
+/** Largest file read from a drop or the browser's file picker, in bytes (main's cap for scenario files). */
+export const MAX_DROPPED_FILE_BYTES = 5 * 1024 * 1024;
+
+/**
+ * Reads a File chosen by the user or dropped on the window. Refuses files too large to be a scenario
+ * without reading them. Nothing is remembered here: the caller calls `rememberOpened` once the text
+ * proved to be a scenario, so a stray picture never joins the recent list.
+ */
 export function readDroppedFile(file: File): Promise<OpenedFile> {
-  return file.text().then((text) => {
-    rememberWebRecent(file.name, text);
-    return { path: file.name, text };
-  });
+  if (file.size > MAX_DROPPED_FILE_BYTES) {
+    return Promise.reject(new Error(`the file is larger than ${MAX_DROPPED_FILE_BYTES / 1024 / 1024} MB, too large for a scenario`));
+  }
+  return file.text().then((text) => ({ path: file.name, text }));
+}
+
+/**
+ * Records a scenario that opened successfully in the browser's recent list. The desktop host keeps its
+ * own list of files picked in its dialogs, so there is nothing to do there.
+ */
+export function rememberOpened(opened: OpenedFile): void {
+  if (!isDesktop()) rememberWebRecent(opened.path, opened.text);
 }
 
 function pickWebFile(): Promise<OpenedFile | null> {

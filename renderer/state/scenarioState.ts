@@ -4,6 +4,9 @@
  * The document changes only through `updateScenario`, which returns a new state and never mutates.
  */
 
+import { MAX_SCENARIO_TEXT } from "../../core/scenario/parse";
+import { SCENARIO_FORMAT } from "../../core/scenario/schema";
+
 /** The raw scenario file: plain, serialisable JSON. Parsing and validation belong to core. */
 export type ScenarioFile = { readonly [key: string]: unknown };
 
@@ -116,6 +119,31 @@ export function suggestedFileName(file: ScenarioFile, extension = "brinefield.js
     .replace(/\s+/g, "-")
     .toLowerCase();
   return `${stem || "scenario"}.${extension}`;
+}
+
+/**
+ * Reads the text of a file the user opened or dropped. Only a JSON object marked as a Brinefield scenario
+ * becomes a document (its fields may still be wrong: the inputs show those errors); anything else — a
+ * picture, a study or result file, any other JSON — is refused with a message, so it never replaces the
+ * open document.
+ */
+export function fileFromText(text: string): { ok: true; file: ScenarioFile } | { ok: false; message: string } {
+  if (text.length > MAX_SCENARIO_TEXT) {
+    return { ok: false, message: `The file is larger than the ${MAX_SCENARIO_TEXT / 1e6} MB a scenario file may be.` };
+  }
+  let parsed: unknown;
+  try {
+    parsed = JSON.parse(text.charCodeAt(0) === 0xfeff ? text.slice(1) : text);
+  } catch (error) {
+    return { ok: false, message: `The file is not valid JSON: ${error instanceof Error ? error.message : String(error)}` };
+  }
+  if (!isPlainObject(parsed)) return { ok: false, message: "The file is JSON but not a scenario object." };
+  const format = parsed["format"];
+  if (format !== SCENARIO_FORMAT) {
+    const what = typeof format === "string" ? `its format is "${format.slice(0, 60)}"` : "it has no \"format\" field";
+    return { ok: false, message: `The file is not a Brinefield scenario: ${what}, not "${SCENARIO_FORMAT}".` };
+  }
+  return { ok: true, file: parsed };
 }
 
 /** Serialises the document as saved on disk: two-space JSON with a final newline. */

@@ -276,6 +276,25 @@ describe("the built app", () => {
     await page.locator("[data-role=headline-table]").waitFor();
   });
 
+  it("refuses a dropped file that is not a scenario without asking to discard edits or replacing the document", async () => {
+    await page.locator('input[data-path="name"]').fill("Edited before the drop");
+    await page.locator('input[data-path="name"]').blur();
+    const dropNamed = (name: string, content: string) =>
+      page.evaluate(({ name, content }: { name: string; content: string }) => {
+        const transfer = new DataTransfer();
+        transfer.items.add(new File([content], name));
+        window.dispatchEvent(new DragEvent("dragover", { dataTransfer: transfer, cancelable: true, bubbles: true }));
+        window.dispatchEvent(new DragEvent("drop", { dataTransfer: transfer, cancelable: true, bubbles: true }));
+      }, { name, content });
+    await dropNamed("photo.png", "\u0089PNG\r\n\u001a\nnot a scenario");
+    await expect.poll(() => page.locator("[data-role=notice]").textContent(), { message: "the refusal is explained" }).toMatch(/photo\.png: .*not valid JSON/);
+    expect(await page.locator('[role="dialog"], [role="alertdialog"]').count(), "no unsaved-changes prompt for a file that cannot open").toBe(0);
+    expect(await page.locator('input[data-path="name"]').inputValue(), "the edited document stays").toBe("Edited before the drop");
+    await dropNamed("study.json", JSON.stringify({ format: "brinefield-study", version: 1 }));
+    await expect.poll(() => page.locator("[data-role=notice]").textContent(), { message: "another Brinefield format is named" }).toMatch(/study\.json: .*brinefield-study/);
+    expect(await page.locator(".doc-title .dirty-dot").count(), "the edits are still unsaved").toBe(1);
+  });
+
   it("autosaves unsaved work and offers to recover it on the next start", async () => {
     page.on("dialog", (dialog) => void dialog.accept());
     await page.locator('input[data-path="name"]').fill("Autosaved edit");

@@ -4,10 +4,11 @@
  * serialisable data that core can parse.
  */
 import { describe, expect, it } from "vitest";
-import { parseScenario } from "../../../core/scenario/parse";
+import { MAX_SCENARIO_TEXT, parseScenario } from "../../../core/scenario/parse";
 import {
   blankScenario,
   documentFromFile,
+  fileFromText,
   getAtPath,
   mergePatch,
   patchAtPath,
@@ -152,5 +153,33 @@ describe("suggestedFileName()", () => {
       "sandy-shelf-large-plant-24-ports.brinefield.json",
     );
     expect(suggestedFileName({}), "unnamed scenario").toBe("untitled-scenario.brinefield.json");
+  });
+});
+
+describe("fileFromText()", () => {
+  it("accepts a saved scenario, fields and all, even when some fields would fail validation", () => {
+    const text = serialiseScenario({ ...blankScenario(), ambient: { depth: -3 } });
+    const read = fileFromText(text);
+    expect(read.ok, "a scenario file opens so its errors can be fixed in the inputs").toBe(true);
+    expect(read.ok && read.file["ambient"], "the file as written").toEqual({ depth: -3 });
+  });
+  it("accepts a byte-order mark before the JSON, as core's reader does", () => {
+    expect(fileFromText("\ufeff" + serialiseScenario(blankScenario())).ok, "BOM skipped").toBe(true);
+  });
+  it("refuses text that is not JSON, such as a dropped picture", () => {
+    const read = fileFromText("\u0089PNG\r\n\u001a\n binary");
+    expect(read.ok, "not opened").toBe(false);
+    expect(!read.ok && read.message, "says why").toMatch(/not valid JSON/);
+  });
+  it("refuses JSON that is not a Brinefield scenario, naming its format", () => {
+    const study = fileFromText(JSON.stringify({ format: "brinefield-study", version: 1 }));
+    expect(!study.ok && study.message, "a study file is named as such").toMatch(/brinefield-study/);
+    const other = fileFromText(JSON.stringify({ name: "my-package", version: "1.0.0" }));
+    expect(!other.ok && other.message, "any other JSON object lacks the format field").toMatch(/no "format" field/);
+    expect(fileFromText("[1, 2]").ok, "an array is not a scenario").toBe(false);
+  });
+  it("refuses text larger than the largest scenario core reads", () => {
+    const read = fileFromText(" ".repeat(MAX_SCENARIO_TEXT + 1));
+    expect(!read.ok && read.message, "too large").toMatch(/larger than/);
   });
 });
