@@ -1,6 +1,6 @@
 /** Export commands: the HTML report (core/report/html.ts) and the distance series as CSV. */
 import { csvFormatRows } from "d3-dsv";
-import type { BrinefieldResult } from "../core/result/contract";
+import { CAUTION, type BrinefieldResult } from "../core/result/contract";
 import { formatNumber, siToDisplay, type UnitSystem } from "../core/units";
 import { exportFile } from "./platform/host";
 import { serialiseScenario, suggestedFileName, type ScenarioFile } from "./state/scenarioState";
@@ -47,8 +47,16 @@ export function seriesCsv(result: BrinefieldResult, unitSystem: UnitSystem): str
   return csvFormatRows(rows) + "\n";
 }
 
+/**
+ * An exported CSV with the caution in its first row (one quoted cell, so a spreadsheet shows it whole in
+ * the first cell and no reader splits it), then the table. Readers of the data skip one row.
+ */
+export function csvWithCaution(csv: string, caution: string = CAUTION): string {
+  return csvFormatRows([[caution || CAUTION]]) + "\n" + csv;
+}
+
 export async function exportSeriesCsv(result: BrinefieldResult, file: ScenarioFile, unitSystem: UnitSystem): Promise<string> {
   const name = suggestedFileName(file, "series.csv");
-  const done = await exportFile(name, seriesCsv(result, unitSystem), [{ name: "CSV", extensions: ["csv"] }]);
+  const done = await exportFile(name, csvWithCaution(seriesCsv(result, unitSystem), result.caution), [{ name: "CSV", extensions: ["csv"] }]);
   return done ? `Series exported: ${name}` : "Export cancelled.";
 }

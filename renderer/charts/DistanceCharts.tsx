@@ -5,7 +5,6 @@
  */
 import { line, scaleLinear, scaleLog } from "d3";
 import type { BrinefieldResult } from "../../core/result/contract";
-import type { Scenario } from "../../core/scenario/types";
 import { formatNumber, siToDisplay, type UnitSystem } from "../../core/units";
 import { useSize } from "../ui/useSize";
 import { distanceSeries, impactDilutionMarkers, salinityIncreaseLimit, type DistanceSeriesPoint } from "./chartData";
@@ -14,12 +13,11 @@ const MARGIN = { top: 26, right: 14, bottom: 34, left: 52 };
 
 interface Props {
   readonly result: BrinefieldResult;
-  readonly scenario: Scenario;
   readonly unitSystem: UnitSystem;
   readonly quantity: "dilution" | "increase";
 }
 
-export function DistanceChart({ result, scenario, unitSystem, quantity }: Props) {
+export function DistanceChart({ result, unitSystem, quantity }: Props) {
   const [ref, size] = useSize<HTMLDivElement>();
   const points = distanceSeries(result, unitSystem);
   const unit = siToDisplay(1, "length", unitSystem).unit;
@@ -31,7 +29,7 @@ export function DistanceChart({ result, scenario, unitSystem, quantity }: Props)
   const shown = points.filter((p) => p.distance <= x.domain()[1]);
   const value = (p: DistanceSeriesPoint) => (quantity === "dilution" ? p.dilution : p.increase);
   const required = result.compliance.requiredDilution;
-  const limitIncrease = salinityIncreaseLimit(scenario);
+  const limitIncrease = salinityIncreaseLimit(result);
   const limit = quantity === "dilution" ? (Number.isFinite(required) && required > 0 ? required : null) : limitIncrease;
   const markers = quantity === "dilution" ? impactDilutionMarkers(result, unitSystem) : [];
   const values = [...shown.map(value), ...(limit !== null ? [limit] : []), ...markers.map((m) => m.value)].filter((v) => Number.isFinite(v) && v > 0);

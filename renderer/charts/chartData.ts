@@ -3,6 +3,7 @@
  */
 import type { BrinefieldResult } from "../../core/result/contract";
 import type { Scenario } from "../../core/scenario/types";
+import { concentrationFromDilution } from "../../core/compliance";
 import { siToDisplay, type UnitSystem } from "../../core/units";
 
 export interface TrajectoryPoint {
@@ -83,11 +84,17 @@ export function impactDilutionMarkers(result: BrinefieldResult, system: UnitSyst
   return out;
 }
 
-/** The salinity increase allowed by the scenario's salinity limit, g/kg, or null when none is stated as one. */
-export function salinityIncreaseLimit(scenario: Scenario): number | null {
-  const limit = scenario.mixingZone.limits.find((l) => l.constituent.toLowerCase() === "salinity");
-  if (!limit) return null;
-  if (limit.maxIncrease !== undefined) return limit.maxIncrease;
-  if (limit.maxConcentration !== undefined && limit.background !== undefined) return limit.maxConcentration - limit.background;
-  return null;
+/**
+ * The salinity increase over background at which the series meets the salinity limit, g/kg, read from the
+ * result's verdict: the increase left after the dilution the limit requires (core's
+ * `concentrationFromDilution`), so the line crosses the curve exactly where the edge verdict changes.
+ * Null without a salinity limit, or when the limit is met undiluted or can never be met.
+ */
+export function salinityIncreaseLimit(result: BrinefieldResult): number | null {
+  const salinity = result.mixingZone.constituents.find((c) => c.constituent === "salinity");
+  const required = result.compliance.constituents
+    .filter((c) => c.constituent.toLowerCase() === "salinity")
+    .reduce((max, c) => Math.max(max, c.requiredDilution), 0);
+  if (!salinity || !Number.isFinite(required) || required <= 1) return null;
+  return concentrationFromDilution(salinity.discharge, salinity.background, required) - salinity.background;
 }

@@ -36,6 +36,7 @@ import {
 } from "../../core/study/montecarlo";
 import { describeCases, expandCases } from "../../core/study/cases";
 import type { PointEvaluation } from "../../core/study/evaluate-point";
+import { csvWithCaution } from "../exports";
 import { exportFile } from "../platform/host";
 import type { StudyTask } from "./messages";
 import { StudyCancelled, StudyWorkerPool, defaultWorkerCount } from "./workerPool";
@@ -294,8 +295,10 @@ function VariantsSection({ scenarioFile, unitSystem, busy, runJob }: VariantsPro
   };
 
   const exportCsv = () => {
-    const text = csvFormat(sorted as never, columnsOf(sorted) as never);
-    void exportFile("brinefield-variants.csv", text, [{ name: "CSV", extensions: ["csv"] }]);
+    const text = csvWithCaution(csvFormat(sorted as never, columnsOf(sorted) as never));
+    void exportFile("brinefield-variants.csv", text, [{ name: "CSV", extensions: ["csv"] }]).catch((error: unknown) =>
+      setProblem(`Could not export: ${error instanceof Error ? error.message : String(error)}`),
+    );
   };
 
   return (

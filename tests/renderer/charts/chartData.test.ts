@@ -1,7 +1,9 @@
 /** Chart series are core's arrays in display units; nothing is recomputed. */
 import { describe, expect, it } from "vitest";
 import { distanceSeries, riseMarkers, salinityIncreaseLimit, trajectorySeries } from "../../../renderer/charts/chartData";
-import { seriesCsv } from "../../../renderer/exports";
+import { csvParseRows } from "d3-dsv";
+import { CAUTION } from "../../../core/result/contract";
+import { csvWithCaution, seriesCsv } from "../../../renderer/exports";
 import { runFile } from "../../../renderer/engine/runFile";
 import { blankScenario } from "../../../renderer/state/scenarioState";
 
@@ -46,11 +48,52 @@ describe("distanceSeries() and seriesCsv()", () => {
   });
 });
 
+/** Runs the blank scenario with other mixing-zone limits. */
+function resultWithLimits(limits: unknown[]) {
+  const blank = blankScenario();
+  const r = runFile(2, { ...blank, mixingZone: { ...(blank.mixingZone as object), limits } });
+  if (!r.ok) throw new Error(r.message);
+  return r.result;
+}
+
 describe("salinityIncreaseLimit()", () => {
   it("reads the allowed increase of a salinity limit", () => {
-    expect(salinityIncreaseLimit(scenario), "blank scenario allows 2 g/kg").toBe(2);
+    expect(salinityIncreaseLimit(result), "blank scenario allows 2 g/kg").toBe(2);
   });
   it("is null when there is no salinity limit", () => {
-    expect(salinityIncreaseLimit({ ...scenario, mixingZone: { ...scenario.mixingZone, limits: [] } }), "no limit").toBeNull();
+    expect(salinityIncreaseLimit({ ...result, compliance: { ...result.compliance, constituents: [] } }), "no limit").toBeNull();
+  });
+  it("follows the stricter of two salinity limits, as the verdict does", () => {
+    // Blank scenario: discharge 70 g/kg into 38 g/kg water. "at most 2 above background" and "at most 39"
+    // together allow 1 g/kg, so the required dilution is (70 − 38)/1 = 32 (definition of dilution,
+    // S = ΔC_d/ΔC, core/compliance/required-dilution.ts).
+    const both = resultWithLimits([
+      { constituent: "salinity", maxIncrease: 2, unit: "g/kg" },
+      { constituent: "salinity", maxConcentration: 39, unit: "g/kg" },
+    ]);
+    expect(both.compliance.requiredDilution, "core requires the stricter limit's dilution").toBeCloseTo(32, 9);
+    expect(salinityIncreaseLimit(both), "the line sits at the stricter 1 g/kg").toBeCloseTo(1, 9);
+  });
+  it("places an absolute limit without a stated background against the ambient salinity", () => {
+    const absolute = resultWithLimits([{ constituent: "salinity", maxConcentration: 41, unit: "g/kg" }]);
+    expect(salinityIncreaseLimit(absolute), "41 g/kg in 38 g/kg water allows 3 g/kg").toBeCloseTo(3, 9);
+  });
+  it("is null when the undiluted discharge already meets the limit", () => {
+    const lax = resultWithLimits([{ constituent: "salinity", maxConcentration: 80, unit: "g/kg" }]);
+    expect(salinityIncreaseLimit(lax), "no line for a limit dilution never has to meet").toBeNull();
+  });
+});
+
+describe("csvWithCaution()", () => {
+  it("puts the result's caution, beginning \"Caution\", in the first row as one cell before the table", () => {
+    const text = csvWithCaution(seriesCsv(result, "si"), result.caution);
+    const rows = csvParseRows(text);
+    expect(rows[0], "one cell holding the whole caution").toEqual([result.caution]);
+    expect(rows[0][0].startsWith("Caution"), "the caution opens the file").toBe(true);
+    expect(rows[1][0], "the table's header follows").toBe("distance (m)");
+    expect(rows.length, "caution row, header and a row per point").toBe(result.mixingZone.series.distance.length + 2);
+  });
+  it("falls back to the contract's caution when the result carries none", () => {
+    expect(csvParseRows(csvWithCaution("a,b\n1,2\n", ""))[0], "contract caution").toEqual([CAUTION]);
   });
 });
