@@ -26,6 +26,11 @@ function FieldShell(props: { id: string; label: ReactNode; errors: readonly stri
   );
 }
 
+/** Marks an input invalid and ties it to its inline error, so a screen reader reads the error with it. */
+function invalidProps(id: string, errors: readonly string[]) {
+  return { "aria-invalid": errors.length > 0, "aria-describedby": errors.length ? `${id}-error` : undefined };
+}
+
 export interface QuantityFieldProps {
   readonly path: string;
   readonly label: string;
@@ -58,8 +63,7 @@ export function QuantityField({ path, label, kind, hint, placeholder, unitText }
           autoComplete="off"
           value={shown}
           placeholder={placeholder}
-          aria-invalid={errors.length > 0}
-          aria-describedby={errors.length ? `${id}-error` : undefined}
+          {...invalidProps(id, errors)}
           onFocus={() => setEditing(displayText(raw, kind, editor.unitSystem, 9))}
           onBlur={() => setEditing(null)}
           onChange={(event) => {
@@ -91,7 +95,7 @@ export function CountField({ path, label, hint }: { path: string; label: string;
           type="text"
           inputMode="numeric"
           value={editing ?? (raw === undefined ? "" : String(raw))}
-          aria-invalid={errors.length > 0}
+          {...invalidProps(id, errors)}
           onFocus={() => setEditing(raw === undefined ? "" : String(raw))}
           onBlur={() => setEditing(null)}
           onChange={(event) => {
@@ -120,6 +124,7 @@ export function TextField({ path, label, wide, placeholder }: { path: string; la
         type="text"
         value={typeof raw === "string" ? raw : raw === undefined ? "" : String(raw)}
         placeholder={placeholder}
+        {...invalidProps(id, errors)}
         onChange={(event) => editor.perform(setField, { path, value: event.target.value === "" ? undefined : event.target.value })}
       />
     </FieldShell>
@@ -144,6 +149,7 @@ export function ChoiceField<T extends string>(props: {
         id={id}
         data-path={props.path}
         value={value}
+        {...invalidProps(id, errors)}
         onChange={(event) => {
           const next = event.target.value as T;
           if (props.onChoose) props.onChoose(next);

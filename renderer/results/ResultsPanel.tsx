@@ -50,7 +50,7 @@ export function VerdictBanner({ result }: { result: BrinefieldResult }) {
       <div className="verdict-word">{c.pass ? "Meets limit" : "Exceeds limit"}</div>
       <div className="verdict-detail">
         edge dilution <b>{formatNumber(result.mixingZone.dilution, 3)}×</b> vs required <b>{formatNumber(c.requiredDilution, 3)}×</b>
-        {" · "}margin <b>{formatNumber(c.margin, 3)}</b>
+        {" · "}<span title="edge dilution ÷ required dilution; above 1 meets the limit">margin <b>{formatNumber(c.margin, 3)}×</b></span>
         {c.governingConstituent ? <> · governed by {c.governingConstituent}</> : null}
       </div>
     </div>
@@ -124,7 +124,7 @@ export function ResultsPanel({ result, unitSystem: s }: { result: BrinefieldResu
               <th scope="col">Limit</th>
               <th scope="col">Required</th>
               <th scope="col">At edge</th>
-              <th scope="col">Margin</th>
+              <th scope="col" title="edge dilution ÷ required dilution; above 1 meets the limit">Margin (edge ÷ req.)</th>
               <th scope="col" />
             </tr>
           </thead>
@@ -137,7 +137,7 @@ export function ResultsPanel({ result, unitSystem: s }: { result: BrinefieldResu
                 </th>
                 <td><D value={c.requiredDilution} /></td>
                 <td><D value={c.edgeDilution} /></td>
-                <td>{formatNumber(c.margin, 3)}</td>
+                <td><D value={c.margin} /></td>
                 <td className="badge">{c.pass ? "meets" : "exceeds"}</td>
               </tr>
             ))}

@@ -170,6 +170,8 @@ export function PlumeView(props: PlumeViewProps) {
       setFailure(`3D view could not draw this result: ${error instanceof Error ? error.message : String(error)}`);
       return;
     }
+    // A result that draws replaces the message a failed one left.
+    setFailure(null);
     if (previous) {
       stage.scene.remove(previous.group);
       previous.dispose();
