@@ -79,6 +79,19 @@ export function equilibriumRichardsonFromSlope(slope: number, drag = DEFAULT_BED
   return 0.5 * (lo + hi);
 }
 
+/** Constants of one integration, read by {@link layerStateInto}. */
+interface LayerParams {
+  /** g′₀·Q₀, the conserved buoyancy flux, m⁴/s³. */
+  buoyancyFlux: number;
+  /** Current speed u, m/s, and u². */
+  u: number;
+  uu: number;
+  cosb: number;
+  riSlope: number;
+  riRadial: number;
+  eSlope: number;
+}
+
 interface LayerState {
   h: number;
   v: number;
@@ -89,57 +102,55 @@ interface LayerState {
 // Module-scope scratch for the integration (the function is not re-entrant across threads' shared memory,
 // and JavaScript runs it to completion, so one set serves every call).
 const scratchState: LayerState = { h: 0, v: 0, ri: 0, e: 0 };
-const scratchK = [new Float64Array(2), new Float64Array(2), new Float64Array(2), new Float64Array(2)];
+const scratchParams: LayerParams = { buoyancyFlux: 0, u: 0, uu: 0, cosb: 1, riSlope: 0, riRadial: 0, eSlope: 0 };
+
+/** Layer state (thickness h, velocity v, Richardson number, entrainment) for flux q and width w, into `st`. */
+function layerStateInto(st: LayerState, p: LayerParams, advected: boolean, q: number, w: number): void {
+  const gp = p.buoyancyFlux / q; // buoyancy flux conserved
+  if (advected) {
+    st.h = q / (p.u * w);
+    st.v = p.u;
+    st.ri = gp > 0 ? (gp * st.h * p.cosb) / p.uu : 0;
+    st.e = entrainmentFromRichardson(st.ri);
+    return;
+  }
+  // A neutral layer (g′ = 0) has no gravity-driven thickness; keep a finite, non-entraining state.
+  if (!(gp > 0)) {
+    st.h = Infinity;
+    st.v = 0;
+    st.ri = Infinity;
+    st.e = 0;
+    return;
+  }
+  st.h = Math.cbrt((p.riRadial * q * q) / (gp * w * w * p.cosb));
+  st.v = q / (st.h * w);
+  st.ri = p.riSlope;
+  st.e = p.eSlope;
+}
 
 /** Integrates the spreading layer from `startDistance` to `endDistance`; never throws. */
 export function spreadingLayerFromNearFieldEnd(input: SpreadingLayerInput): SpreadingLayerSeries {
   const drag = input.dragCoefficient ?? DEFAULT_BED_DRAG;
   const steps = Math.max(1, Math.round(input.steps ?? 400));
   const u = Math.max(0, input.currentSpeed);
-  const cosb = 1 / Math.sqrt(1 + input.bedSlope * input.bedSlope);
   const q0 = input.dischargeFlow;
   const g0 = Math.max(input.reducedGravity, 0);
   const riSlope = equilibriumRichardsonFromSlope(input.bedSlope, drag);
-  const riRadial = Math.min(riSlope, 1);
+  const p = scratchParams;
+  p.buoyancyFlux = g0 * q0;
+  p.u = u;
+  p.uu = u * u;
+  p.cosb = 1 / Math.sqrt(1 + input.bedSlope * input.bedSlope);
+  p.riSlope = riSlope;
+  p.riRadial = Math.min(riSlope, 1);
+  p.eSlope = entrainmentFromRichardson(riSlope);
   const offset = input.perimeterOffset ?? 0;
+  const r0 = input.startDistance;
+  // The radial perimeter at r is w0 + 2π(r − r0); the advected width is integrated instead.
+  const w0 = input.initialWidth + offset;
+  const st = scratchState;
   let advected = false;
-
-  // Layer state for flux q and width w, written into module-scope scratch (no allocation per call).
-  const state = (q: number, w: number): LayerState => {
-    const gp = (g0 * q0) / q; // buoyancy flux conserved
-    const st = scratchState;
-    if (advected) {
-      st.h = q / (u * w);
-      st.v = u;
-      st.ri = gp > 0 ? (gp * st.h * cosb) / (u * u) : 0;
-      st.e = entrainmentFromRichardson(st.ri);
-      return st;
-    }
-    // A neutral layer (g′ = 0) has no gravity-driven thickness; keep a finite, non-entraining state.
-    if (!(gp > 0)) {
-      st.h = Infinity;
-      st.v = 0;
-      st.ri = Infinity;
-      st.e = 0;
-      return st;
-    }
-    st.h = Math.cbrt((riRadial * q * q) / (gp * w * w * cosb));
-    st.v = q / (st.h * w);
-    st.ri = riSlope;
-    st.e = eSlope;
-    return st;
-  };
-  const eSlope = entrainmentFromRichardson(riSlope);
   let wAdv = 0;
-  const width = (r: number, wa: number) =>
-    advected ? wa : input.initialWidth + offset + 2 * Math.PI * (r - input.startDistance);
-  // Derivatives of (Q, advected width) with respect to distance, into `k[0]`, `k[1]`.
-  const deriv = (r: number, q: number, wa: number, k: Float64Array): void => {
-    const w = width(r, wa);
-    const st = state(q, w);
-    k[0] = st.e * st.v * w;
-    k[1] = advected ? (2 * Math.sqrt(Math.max(0, ((g0 * q0) / q) * st.h))) / u : 0;
-  };
 
   const out = {
     geometry: (u > 0 ? "advected" : "radial") as "radial" | "advected",
@@ -153,11 +164,12 @@ export function spreadingLayerFromNearFieldEnd(input: SpreadingLayerInput): Spre
     richardson: [] as number[],
     entrainment: [] as number[],
   };
-  const maybeSwitch = (r: number, q: number) => {
-    if (advected || !(u > 0)) return;
-    const w = width(r, 0);
-    const st = state(q, w);
-    if (st.v <= u) {
+  // Records the layer at (r, q), switching it to advected first if the radial layer has slowed to the current.
+  // Returns the width there; `st` is left holding the recorded state.
+  const record = (r: number, q: number): number => {
+    let w = advected ? wAdv : w0 + 2 * Math.PI * (r - r0);
+    layerStateInto(st, p, advected, q, w);
+    if (!advected && u > 0 && st.v <= u) {
       // The radial layer has slowed to the current: it is carried off with its cross-current width, but not
       // narrower than keeps its thickness continuous (Q = u·h·w), so the layer does not jump in thickness
       // where it starts to drift (judgement: a sudden pile-up of several metres is not observed in the
@@ -167,11 +179,9 @@ export function spreadingLayerFromNearFieldEnd(input: SpreadingLayerInput): Spre
       out.switchDistance = r;
       const crossWidth = (w - offset) / Math.PI + (input.crossCurrentLength ?? 0);
       wAdv = Number.isFinite(hSwitch) && hSwitch > 0 ? Math.max(crossWidth, q / (u * hSwitch)) : crossWidth;
+      w = wAdv;
+      layerStateInto(st, p, advected, q, w);
     }
-  };
-  const push = (r: number, q: number, wa: number) => {
-    const w = width(r, wa);
-    const st = state(q, w);
     out.distance.push(r);
     out.dilution.push(q / q0);
     out.thickness.push(st.h);
@@ -180,30 +190,44 @@ export function spreadingLayerFromNearFieldEnd(input: SpreadingLayerInput): Spre
     out.velocity.push(st.v);
     out.richardson.push(st.ri);
     out.entrainment.push(st.e);
+    return w;
   };
-  let r = input.startDistance;
+  let r = r0;
   let q = q0 * input.startDilution;
-  maybeSwitch(r, q);
-  push(r, q, wAdv);
+  let w = record(r, q);
   const span = Math.max(0, input.endDistance - input.startDistance);
   if (span === 0 || !(q0 > 0)) return out;
   const dr = span / steps;
-  const k1 = scratchK[0];
-  const k2 = scratchK[1];
-  const k3 = scratchK[2];
-  const k4 = scratchK[3];
+  const half = dr / 2;
+  // dQ/dr = E·V·w; dw/dr = 2·√(g′h)/u once advected (0 while radial); both read the state last put in `st`.
+  const dq = (w: number) => st.e * st.v * w;
+  const dw = (q: number) => (advected ? (2 * Math.sqrt(Math.max(0, (p.buoyancyFlux / q) * st.h))) / u : 0);
   for (let i = 0; i < steps; i++) {
     const wa = wAdv;
-    // Classical fourth-order Runge–Kutta on (Q, w).
-    deriv(r, q, wa, k1);
-    deriv(r + dr / 2, q + (dr / 2) * k1[0], wa + (dr / 2) * k1[1], k2);
-    deriv(r + dr / 2, q + (dr / 2) * k2[0], wa + (dr / 2) * k2[1], k3);
-    deriv(r + dr, q + dr * k3[0], wa + dr * k3[1], k4);
-    q += (dr / 6) * (k1[0] + 2 * k2[0] + 2 * k3[0] + k4[0]);
-    wAdv = wa + (dr / 6) * (k1[1] + 2 * k2[1] + 2 * k3[1] + k4[1]);
-    r = input.startDistance + (i + 1) * dr;
-    maybeSwitch(r, q);
-    push(r, q, wAdv);
+    // Classical fourth-order Runge–Kutta on (Q, w); the first stage is the point just recorded.
+    const k1q = dq(w);
+    const k1w = dw(q);
+    const r2 = r + half;
+    const q2 = q + half * k1q;
+    const w2 = advected ? wa + half * k1w : w0 + 2 * Math.PI * (r2 - r0);
+    layerStateInto(st, p, advected, q2, w2);
+    const k2q = dq(w2);
+    const k2w = dw(q2);
+    const q3 = q + half * k2q;
+    const w3 = advected ? wa + half * k2w : w2;
+    layerStateInto(st, p, advected, q3, w3);
+    const k3q = dq(w3);
+    const k3w = dw(q3);
+    const r4 = r + dr;
+    const q4 = q + dr * k3q;
+    const w4 = advected ? wa + dr * k3w : w0 + 2 * Math.PI * (r4 - r0);
+    layerStateInto(st, p, advected, q4, w4);
+    const k4q = dq(w4);
+    const k4w = dw(q4);
+    q += (dr / 6) * (k1q + 2 * k2q + 2 * k3q + k4q);
+    wAdv = wa + (dr / 6) * (k1w + 2 * k2w + 2 * k3w + k4w);
+    r = r0 + (i + 1) * dr;
+    w = record(r, q);
   }
   return out;
 }
