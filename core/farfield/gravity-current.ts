@@ -46,6 +46,11 @@ export interface SpreadingLayerInput {
   readonly dragCoefficient?: number;
   /** Number of integration steps (default 400). */
   readonly steps?: number;
+  /**
+   * Stop after the first step that reaches this distance, m (default: integrate to `endDistance`). The steps
+   * are those of the whole range, so the points computed are exactly the leading points of the full series.
+   */
+  readonly stopDistance?: number;
 }
 
 export interface SpreadingLayerSeries {
@@ -202,7 +207,8 @@ export function spreadingLayerFromNearFieldEnd(input: SpreadingLayerInput): Spre
   // dQ/dr = E·V·w; dw/dr = 2·√(g′h)/u once advected (0 while radial); both read the state last put in `st`.
   const dq = (w: number) => st.e * st.v * w;
   const dw = (q: number) => (advected ? (2 * Math.sqrt(Math.max(0, (p.buoyancyFlux / q) * st.h))) / u : 0);
-  for (let i = 0; i < steps; i++) {
+  const stop = input.stopDistance ?? Infinity;
+  for (let i = 0; i < steps && !(r >= stop); i++) {
     const wa = wAdv;
     // Classical fourth-order Runge–Kutta on (Q, w); the first stage is the point just recorded.
     const k1q = dq(w);

@@ -80,6 +80,8 @@ interface Chain {
   end: { distance: number; dilution: number };
   impactDistance: number;
   layerRadius: number;
+  /** Far-field series of this chain, computed on first use (see `farSeries`). */
+  far: Partial<Record<FarMethod, FarSeries>>;
 }
 
 const degToRad = (d: number) => (d * Math.PI) / 180;
@@ -120,7 +122,7 @@ export function beyondNearField(input: BeyondInput): BeyondOutput {
     // least the jet's half-width at impact (judgement); 0.5 m floor keeps the geometry finite.
     const halfAtImpact = (jetWidthsFromNearField(nf, diffuser.portHeight)?.widthAtImpact ?? 0) / 2;
     const layerRadius = Math.max(end.distance - xi, halfAtImpact, 0.5);
-    chains.push({ nf, profile: jetProfileFromNearField(nf), end, impactDistance: Math.min(xi, end.distance), layerRadius });
+    chains.push({ nf, profile: jetProfileFromNearField(nf), end, impactDistance: Math.min(xi, end.distance), layerRadius, far: {} });
   }
 
   // Slope along the spreading direction: current direction if there is a current, else downslope.
@@ -134,7 +136,7 @@ export function beyondNearField(input: BeyondInput): BeyondOutput {
     u > 0 ? diffuserLength * Math.abs(Math.sin(degToRad(diffuser.diffuserAzimuth - column.currentDirection))) : diffuserLength;
   const crossWidth = (c: Chain) => 2 * c.layerRadius + crossLength();
 
-  const integrateFar = (c: Chain, method: FarMethod, xEnd: number, steps: number): FarSeries => {
+  const integrateFar = (c: Chain, method: FarMethod, xEnd: number, steps: number, xStop: number): FarSeries => {
     // Passive diffusion reuses the spreading layer's distances and start thickness (memoised below).
     if (method === "passive-diffusion" && u > 0) return passiveFromLayer(c, farSeries(c, "gravity-current"));
     const gc = spreadingLayerFromNearFieldEnd({
@@ -149,6 +151,7 @@ export function beyondNearField(input: BeyondInput): BeyondOutput {
       currentSpeed: u,
       bedSlope: slopeAlong(),
       steps,
+      stopDistance: xStop,
     });
     return { distance: gc.distance, dilution: gc.dilution, thickness: gc.thickness, width: gc.width };
   };
@@ -167,17 +170,17 @@ export function beyondNearField(input: BeyondInput): BeyondOutput {
   };
   // One integration per chain and method, over the whole range the edge, the series and the footprint need,
   // memoised: the edge value is interpolated from it (200 RK4 steps over ten radii: steps of radius/20).
+  // Edge-only runs stop each series at the first point at or past the edge: the same leading points, and all
+  // the edge reads (interpolation at the edge; a passive layer's thickness is constant along its series).
+  const full = input.detail !== "edge";
   const farRange = (c: Chain) => Math.max(10 * radius, 2 * c.end.distance);
-  const farCache = new Map<string, FarSeries>();
-  const farSeries = (c: Chain, method: FarMethod): FarSeries => {
-    const key = `${chains.indexOf(c)}|${method}`;
-    let f = farCache.get(key);
-    if (!f) {
-      f = integrateFar(c, method, farRange(c), FAR_STEPS);
-      farCache.set(key, f);
-    }
-    return f;
-  };
+  const farSeries = (c: Chain, method: FarMethod): FarSeries =>
+    (c.far[method] ??= integrateFar(c, method, farRange(c), FAR_STEPS, full ? Infinity : radius));
+  // The whole range of a series, for readers beyond the edge (the spreading layer's thickest point).
+  const wholeFarSeries = (c: Chain, method: FarMethod): FarSeries =>
+    full || (method === "passive-diffusion" && u > 0)
+      ? farSeries(c, method)
+      : integrateFar(c, method, farRange(c), FAR_STEPS, Infinity);
   const atRadius = (s: FarSeries) => interpolate(s.distance, s.dilution, radius);
 
   // Alternatives at the edge, for every near-field method and every applicable far-field method.
@@ -185,7 +188,6 @@ export function beyondNearField(input: BeyondInput): BeyondOutput {
   const alternatives: { method: string; dilution: number }[] = [];
   const edgeOf = (c: Chain, m: FarMethod): number =>
     radius <= c.end.distance ? dilutionFromProfile(c.profile, radius) : atRadius(farSeries(c, m));
-  const full = input.detail !== "edge";
   for (const c of full ? chains : []) {
     if (radius <= c.end.distance) alternatives.push({ method: `${c.nf.method} (jet crosses the edge)`, dilution: edgeOf(c, "gravity-current") });
     else for (const m of farMethods) alternatives.push({ method: `${c.nf.method} + ${m}`, dilution: edgeOf(c, m) });
@@ -251,7 +253,7 @@ export function beyondNearField(input: BeyondInput): BeyondOutput {
         }),
       );
     }
-    const far = farSeries(chain, farMethod);
+    const far = wholeFarSeries(chain, farMethod);
     if (!edgeInside) layerAtEdge = interpolate(far.distance, far.thickness, radius);
     const depth = scenario.ambient.depth;
     const thickest = far.thickness.reduce((m, h) => (Number.isFinite(h) && h > m ? h : m), 0);
