@@ -124,7 +124,7 @@ export function ResultsPanel({ result, unitSystem: s }: { result: BrinefieldResu
               <th scope="col">Limit</th>
               <th scope="col">Required</th>
               <th scope="col">At edge</th>
-              <th scope="col" title="edge dilution ÷ required dilution; above 1 meets the limit">Margin (edge ÷ req.)</th>
+              <th scope="col" title="edge dilution ÷ required dilution; above 1 meets the limit">Margin</th>
               <th scope="col" />
             </tr>
           </thead>

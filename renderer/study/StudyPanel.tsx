@@ -5,7 +5,6 @@
  * the core pipeline; this component only plans with core helpers, shows progress and draws results.
  */
 import { useCallback, useEffect, useMemo, useState } from "react";
-import { csvFormat } from "d3-dsv";
 import type { Scenario } from "../../core/scenario/types";
 import { formatNumber, siToDisplay, type UnitSystem } from "../../core/units";
 import { OVERRIDE_PATHS, type Overrides } from "../../core/study/overrides";
@@ -36,11 +35,11 @@ import {
 } from "../../core/study/montecarlo";
 import { describeCases, expandCases } from "../../core/study/cases";
 import type { PointEvaluation } from "../../core/study/evaluate-point";
-import { csvWithCaution } from "../exports";
 import { exportFile } from "../platform/host";
 import type { StudyTask } from "./messages";
 import { StudyCancelled, StudyWorkerPool, defaultWorkerCount } from "./workerPool";
 import { overridesFromText } from "./overridesText";
+import { isLengthColumn, variantsCsv } from "./variantsCsv";
 import { MonteCarloHistogram, SweepHeatmap, SweepLineChart, type AxisDisplay } from "./charts";
 import "./study.css";
 
@@ -90,8 +89,9 @@ export function StudyPanel({ scenarioFile, unitSystem }: Props) {
   // Read the document in a worker whenever it changes (debounced: typing should not queue work).
   useEffect(() => {
     let live = true;
+    let reader: StudyWorkerPool | null = null;
     const t = setTimeout(() => {
-      const reader = new StudyWorkerPool(1);
+      reader = new StudyWorkerPool(1);
       reader
         .run([{ kind: "prepare", file: scenarioFile }])
         .then(([r]) => {
@@ -104,11 +104,13 @@ export function StudyPanel({ scenarioFile, unitSystem }: Props) {
           setScenario(null);
           setScenarioError(e instanceof Error ? e.message : String(e));
         })
-        .finally(() => reader.dispose());
+        .finally(() => reader?.dispose());
     }, 300);
     return () => {
       live = false;
       clearTimeout(t);
+      // A newer document or leaving the tab: stop reading the old one rather than let it run on.
+      reader?.dispose();
     };
   }, [scenarioFile]);
 
@@ -261,7 +263,6 @@ function cellText(v: FlatRow[string] | undefined): string {
   return v === null || v === undefined ? "—" : String(v);
 }
 
-const isLengthColumn = (c: string) => /(MaxRise|ImpactDistance)$/.test(c);
 
 function VariantsSection({ scenarioFile, unitSystem, busy, runJob }: VariantsProps) {
   const lengthUnit = siToDisplay(1, "length", unitSystem).unit;
@@ -295,7 +296,7 @@ function VariantsSection({ scenarioFile, unitSystem, busy, runJob }: VariantsPro
   };
 
   const exportCsv = () => {
-    const text = csvWithCaution(csvFormat(sorted as never, columnsOf(sorted) as never));
+    const text = variantsCsv(sorted);
     void exportFile("brinefield-variants.csv", text, [{ name: "CSV", extensions: ["csv"] }]).catch((error: unknown) =>
       setProblem(`Could not export: ${error instanceof Error ? error.message : String(error)}`),
     );
@@ -358,12 +359,19 @@ function VariantsSection({ scenarioFile, unitSystem, busy, runJob }: VariantsPro
                 {columns.map((c) => (
                   <th
                     key={c}
+                    scope="col"
                     className={typeof rows[0]![c] === "number" ? "" : "text"}
-                    onClick={() => setSort(sort === c ? `-${c}` : c)}
                     aria-sort={sort === c ? "ascending" : sort === `-${c}` ? "descending" : "none"}
                   >
-                    {columnLabel(c, lengthUnit)}
-                    {sort === c ? " ▲" : sort === `-${c}` ? " ▼" : ""}
+                    <button
+                      type="button"
+                      className="sort-button"
+                      title="Sort by this column"
+                      onClick={() => setSort(sort === c ? `-${c}` : c)}
+                    >
+                      {columnLabel(c, lengthUnit)}
+                      {sort === c ? " ▲" : sort === `-${c}` ? " ▼" : ""}
+                    </button>
                   </th>
                 ))}
               </tr>
@@ -373,12 +381,12 @@ function VariantsSection({ scenarioFile, unitSystem, busy, runJob }: VariantsPro
                 <tr key={i} className={r.case === "worst case" ? "worst" : ""}>
                   {columns.map((c) => {
                     const raw = r[c];
-                  // Lengths are SI in the rows (and the CSV); the table shows the chosen unit system.
-                  const v = typeof raw === "number" && isLengthColumn(c) ? toLength(raw) : raw;
-                  const verdict = v === "pass" ? "pass" : "fail";
-                  const cls = c === "verdict" ? verdict : typeof v === "number" ? "" : "text";
-                  const shown = cellText(v);
-                  return (
+                    // Lengths are SI in the rows (and the CSV); the table shows the chosen unit system.
+                    const v = typeof raw === "number" && isLengthColumn(c) ? toLength(raw) : raw;
+                    const verdict = v === "pass" ? "pass" : "fail";
+                    const cls = c === "verdict" ? verdict : typeof v === "number" ? "" : "text";
+                    const shown = cellText(v);
+                    return (
                       <td key={c} className={cls}>
                         {shown}
                       </td>
