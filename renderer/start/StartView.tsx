@@ -1,5 +1,5 @@
 /** Start view: demo scenarios, recent files, a new blank scenario, open from disk. */
-import { useEffect } from "react";
+import { useModal } from "../ui/useModal";
 import type { DemoScenario } from "../demos";
 
 export interface StartViewProps {
@@ -17,16 +17,9 @@ function baseName(path: string): string {
 }
 
 export function StartView(props: StartViewProps) {
-  const { onClose } = props;
-  useEffect(() => {
-    const onKey = (e: KeyboardEvent) => {
-      if (e.key === "Escape") onClose();
-    };
-    window.addEventListener("keydown", onKey);
-    return () => window.removeEventListener("keydown", onKey);
-  }, [onClose]);
+  const dialogRef = useModal<HTMLDivElement>(props.onClose);
   return (
-    <div className="start-view" role="dialog" aria-modal="true" aria-labelledby="start-title" data-role="start-view">
+    <div className="start-view" role="dialog" aria-modal="true" aria-labelledby="start-title" data-role="start-view" tabIndex={-1} ref={dialogRef}>
       <div className="start-card">
         <header>
           <h1 id="start-title">Brinefield</h1>

@@ -1,5 +1,6 @@
 /** A small modal question with keyboard focus on the safe choice; Escape cancels. */
-import { useEffect, useRef } from "react";
+import { useRef } from "react";
+import { useModal } from "./useModal";
 
 export interface ConfirmRequest {
   readonly title: string;
@@ -13,17 +14,10 @@ export interface ConfirmRequest {
 
 export function ConfirmDialog({ request, onClose }: { request: ConfirmRequest; onClose: () => void }) {
   const cancelRef = useRef<HTMLButtonElement | null>(null);
-  useEffect(() => {
-    cancelRef.current?.focus();
-    const onKey = (e: KeyboardEvent) => {
-      if (e.key === "Escape") onClose();
-    };
-    window.addEventListener("keydown", onKey);
-    return () => window.removeEventListener("keydown", onKey);
-  }, [onClose]);
+  const dialogRef = useModal<HTMLDivElement>(onClose, cancelRef);
   return (
     <div className="modal-backdrop">
-      <div className="modal" role="dialog" aria-modal="true" aria-labelledby="confirm-title">
+      <div className="modal" role="dialog" aria-modal="true" aria-labelledby="confirm-title" tabIndex={-1} ref={dialogRef}>
         <h2 id="confirm-title">{request.title}</h2>
         <p>{request.message}</p>
         <div className="button-row end">

@@ -264,6 +264,35 @@ describe("the built app", () => {
     await expect.poll(() => page.locator("[data-role=start-view]").count(), { message: "Escape closes the start view" }).toBe(0);
   });
 
+  it("keeps keyboard focus inside the start view and its question, and Escape closes only the front one", async () => {
+    await page.click("[data-command=start]");
+    await page.locator("[data-role=start-view]").waitFor();
+    const insideStart = () => page.evaluate(() => document.querySelector("[data-role=start-view]")?.contains(document.activeElement) ?? false);
+    expect(await insideStart(), "focus moves into the start view when it opens").toBe(true);
+    for (let i = 0; i < 25; i++) await page.keyboard.press("Tab");
+    expect(await insideStart(), "Tab cycles within the start view, not the page behind it").toBe(true);
+    await page.keyboard.press("Shift+Tab");
+    expect(await insideStart(), "Shift+Tab too").toBe(true);
+    // An edit makes the document dirty, so "New blank scenario" asks first.
+    await page.keyboard.press("Escape");
+    await page.locator('input[data-path="description"]').fill("edited before the question");
+    await page.click("[data-command=start]");
+    await page.getByRole("button", { name: /New blank scenario/ }).click();
+    const question = page.locator('[role="dialog"][aria-labelledby="confirm-title"]');
+    await question.waitFor();
+    expect(await page.evaluate(() => document.activeElement?.textContent), "the safe choice has focus").toBe("Cancel");
+    for (let i = 0; i < 7; i++) await page.keyboard.press("Tab");
+    expect(await question.evaluate((el) => el.contains(document.activeElement)), "Tab stays in the question").toBe(true);
+    await page.keyboard.press("Escape");
+    expect(await question.count(), "Escape closes the question").toBe(0);
+    expect(await page.locator("[data-role=start-view]").count(), "the start view behind it stays open").toBe(1);
+    await page.keyboard.press("Escape");
+    await expect.poll(() => page.locator("[data-role=start-view]").count(), { message: "a second Escape closes the start view" }).toBe(0);
+    expect(await page.locator('input[data-path="description"]').inputValue(), "the edit is kept").toBe("edited before the question");
+    await page.keyboard.press("Control+z");
+    await expect.poll(() => page.locator(".doc-title .dirty-dot").count(), { message: "undone: the document is clean again" }).toBe(0);
+  });
+
   it("opens a scenario file dropped on the window", async () => {
     const text = readFileSync(join(root, "demo-scenarios", demoFiles()[0]), "utf8").replace(/"name":\s*"[^"]*"/, '"name": "Dropped scenario"');
     await page.evaluate((content: string) => {
