@@ -6,14 +6,45 @@
  */
 import type { Scenario } from "./types";
 
+// Study loops hash a new scenario every run, yet most of it (diffuser, limits, options) is the same frozen
+// objects run after run: the canonical text of an object frozen all the way down is remembered per object.
+const frozenText = new WeakMap<object, string>();
+// Set by each call of canonical(): whether the value just written is frozen all the way down.
+let deepFrozen = true;
+
 function canonical(v: unknown): string {
-  if (v === null || typeof v !== "object") return JSON.stringify(v) ?? "null";
-  if (Array.isArray(v)) return `[${v.map(canonical).join(",")}]`;
-  const keys = Object.keys(v as object).sort();
-  return `{${keys
-    .filter((k) => (v as Record<string, unknown>)[k] !== undefined)
-    .map((k) => `${JSON.stringify(k)}:${canonical((v as Record<string, unknown>)[k])}`)
-    .join(",")}}`;
+  if (v === null || typeof v !== "object") {
+    deepFrozen = true;
+    return JSON.stringify(v) ?? "null";
+  }
+  const known = frozenText.get(v);
+  if (known !== undefined) {
+    deepFrozen = true;
+    return known;
+  }
+  let frozen = Object.isFrozen(v);
+  let text: string;
+  if (Array.isArray(v)) {
+    text = `[${v
+      .map((e) => {
+        const t = canonical(e);
+        frozen &&= deepFrozen;
+        return t;
+      })
+      .join(",")}]`;
+  } else {
+    const o = v as Record<string, unknown>;
+    const parts: string[] = [];
+    for (const k of Object.keys(o).sort()) {
+      if (o[k] === undefined) continue;
+      parts.push(`${JSON.stringify(k)}:${canonical(o[k])}`);
+      frozen &&= deepFrozen;
+    }
+    text = `{${parts.join(",")}}`;
+  }
+  if (frozen) frozenText.set(v, text);
+  deepFrozen = frozen;
+  return text;
 }
 
 export function hashText(text: string): string {
