@@ -3,10 +3,10 @@
  * Study tab. The document is the raw scenario file; it changes only through actions.
  */
 import { Suspense, lazy, useCallback, useEffect, useMemo, useRef, useState } from "react";
-import { CAUTION } from "../core/result/contract";
+import { CAUTION, type BrinefieldResult } from "../core/result/contract";
 import type { UnitSystem } from "../core/units";
 import { DEMO_SCENARIOS, type DemoScenario } from "./demos";
-import { issuesByPath, useEngine } from "./engine/useEngine";
+import { exportBlocked, issuesByPath, useEngine } from "./engine/useEngine";
 import { AmbientSection } from "./inputs/AmbientSection";
 import { DiffuserSection } from "./inputs/DiffuserSection";
 import { DischargeSection } from "./inputs/DischargeSection";
@@ -194,6 +194,30 @@ export function App() {
     });
   }, [saveAs]);
 
+  // Exports pair the results with the inputs, so they wait for the latest edit's run to finish.
+  const engineRef = useRef(engine);
+  engineRef.current = engine;
+  const pendingExport = useRef<(() => void) | null>(null);
+  const whenResultsCurrent = useCallback((run: (result: BrinefieldResult) => Promise<string>) => {
+    const attempt = () => {
+      const current = engineRef.current;
+      if (current.running) {
+        pendingExport.current = attempt;
+        return;
+      }
+      const why = exportBlocked(current);
+      if (why !== null || !current.result) return flash(why ?? "No results to export yet.");
+      void run(current.result).then((message) => message && flash(message), (e: unknown) => flash(String(e)));
+    };
+    attempt();
+  }, [flash]);
+  useEffect(() => {
+    if (engine.running || !pendingExport.current) return;
+    const attempt = pendingExport.current;
+    pendingExport.current = null;
+    attempt();
+  }, [engine.running]);
+
   const commands = useMemo(() => ({
     newScenario: () => guardUnsaved("Start a new scenario", () => {
       loadDocument(documentFromFile(blankScenario(), null));
@@ -212,16 +236,10 @@ export function App() {
     }),
     save: () => void saveAs(false),
     saveAs: () => void saveAs(true),
-    exportReport: () => {
-      if (!engine.result) return flash("No results to report yet.");
-      void exportReport(engine.result, docRef.current.file).then(flash, (e: unknown) => flash(String(e)));
-    },
-    exportCsv: () => {
-      if (!engine.result) return flash("No results to export yet.");
-      void exportSeriesCsv(engine.result, docRef.current.file, unitSystem).then(flash, (e: unknown) => flash(String(e)));
-    },
-    print: () => void host.printPdf(suggestedFileName(docRef.current.file, "pdf")).catch((e: unknown) => flash(String(e))),
-  }), [guardUnsaved, loadText, loadDocument, saveAs, flash, engine.result, unitSystem]);
+    exportReport: () => whenResultsCurrent((r) => exportReport(r, docRef.current.file)),
+    exportCsv: () => whenResultsCurrent((r) => exportSeriesCsv(r, docRef.current.file, unitSystem)),
+    print: () => whenResultsCurrent(() => host.printPdf(suggestedFileName(docRef.current.file, "pdf")).then(() => "")),
+  }), [guardUnsaved, loadText, loadDocument, saveAs, flash, whenResultsCurrent, unitSystem]);
 
   /**
    * Brings back autosaved work as an unsaved document. Text that is no longer a scenario is dropped with
@@ -337,8 +355,8 @@ export function App() {
             <button type="button" onClick={commands.saveAs} title="Ctrl+Shift+S">Save as…</button>
             <button type="button" onClick={() => step("undo")} disabled={history.past.length === 0} title="Undo (Ctrl+Z)" aria-label="Undo" data-command="undo">↶</button>
             <button type="button" onClick={() => step("redo")} disabled={history.future.length === 0} title="Redo (Ctrl+Shift+Z)" aria-label="Redo" data-command="redo">↷</button>
-            <button type="button" onClick={commands.exportReport} disabled={!result}>Export report</button>
-            <button type="button" onClick={commands.exportCsv} disabled={!result}>Export CSV</button>
+            <button type="button" onClick={commands.exportReport} disabled={!result || engine.error !== null} data-command="export-report">Export report</button>
+            <button type="button" onClick={commands.exportCsv} disabled={!result || engine.error !== null} data-command="export-csv">Export CSV</button>
           </nav>
           <div className="doc-title" title={doc.path ?? "not saved yet"}>
             {doc.dirty ? <span className="dirty-dot" aria-label="unsaved changes">●</span> : null}

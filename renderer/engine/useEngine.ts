@@ -94,6 +94,19 @@ export function useEngine(file: unknown): EngineState {
   return state;
 }
 
+/**
+ * Why the results on screen may not be exported now, or null when they may. An export pairs the results
+ * with the document's inputs, so it waits until the results are those of the inputs as they stand.
+ */
+export function exportBlocked(engine: Pick<EngineState, "result" | "error" | "running">): string | null {
+  if (!engine.result) return "No results to export yet.";
+  if (engine.error !== null) {
+    return "The inputs have errors, so the results on screen belong to an earlier version of the scenario. Fix the inputs marked in red, then export.";
+  }
+  if (engine.running) return "Still calculating the latest edit: export again in a moment.";
+  return null;
+}
+
 /** Issues grouped by scenario path, for inline field errors. */
 export function issuesByPath(issues: readonly EngineIssue[]): ReadonlyMap<string, string[]> {
   const map = new Map<string, string[]>();

@@ -177,10 +177,13 @@ describe("the built app", () => {
     expect(await error.textContent(), "the message names the allowed range").toMatch(/0 to 90/);
     expect(await page.locator("[data-role=engine-status]").textContent(), "status says the results shown are the last good ones").toMatch(/last good results/);
     expect(await riseCell.textContent(), "results still shown").toBe(good);
+    expect(await page.locator("[data-command=export-report]").isDisabled(), "no report pairing old results with new inputs").toBe(true);
+    expect(await page.locator("[data-command=export-csv]").isDisabled(), "nor a CSV").toBe(true);
     await angle.scrollIntoViewIfNeeded();
     await page.screenshot({ path: join(artifacts, "app-inline-error.png") });
     await angle.fill("30");
     await expect.poll(() => page.locator(".field.has-error").count(), { message: "error clears", timeout: 15_000 }).toBe(0);
+    await expect.poll(() => page.locator("[data-command=export-report]").isDisabled(), { message: "export is offered again" }).toBe(false);
   });
 
   it("saves the scenario as a download and opens it again by upload", async () => {

@@ -5,7 +5,7 @@
 import { readFileSync, readdirSync } from "node:fs";
 import { join } from "node:path";
 import { describe, expect, it } from "vitest";
-import { applyResponse, issuesByPath, type EngineState } from "../../../renderer/engine/useEngine";
+import { applyResponse, exportBlocked, issuesByPath, type EngineState } from "../../../renderer/engine/useEngine";
 import { runFile, withoutPathPrefix } from "../../../renderer/engine/runFile";
 import { blankScenario } from "../../../renderer/state/scenarioState";
 
@@ -77,5 +77,25 @@ describe("withoutPathPrefix() and issuesByPath()", () => {
       { path: "y", message: "three" },
     ]);
     expect(map.get("x"), "two messages at x").toEqual(["one", "two"]);
+  });
+});
+
+describe("exportBlocked()", () => {
+  const good = runFile(1, blankScenario());
+  if (!good.ok) throw new Error(good.message);
+  const shown = applyResponse(empty, good);
+  it("allows an export when the results on screen are those of the inputs as they stand", () => {
+    expect(exportBlocked(shown), "fresh results").toBeNull();
+  });
+  it("refuses while the inputs have errors: the results belong to an earlier version", () => {
+    const failed = applyResponse(shown, runFile(2, { ...blankScenario(), diffuser: { portAngle: "abc" } }));
+    expect(failed.result, "the old results are still on screen").toBe(shown.result);
+    expect(exportBlocked(failed), "says why").toMatch(/inputs have errors/);
+  });
+  it("refuses while the latest edit is still being calculated", () => {
+    expect(exportBlocked({ ...shown, running: true }), "says to wait").toMatch(/Still calculating/);
+  });
+  it("refuses when there are no results at all", () => {
+    expect(exportBlocked(empty), "nothing to export").toMatch(/No results/);
   });
 });
