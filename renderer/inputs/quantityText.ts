@@ -4,7 +4,7 @@
  * a plain number means "in the unit shown beside the field", anything else is kept verbatim for core to
  * parse (so a bad unit becomes a parse issue at the field's path, shown inline).
  */
-import { QUANTITY_KINDS, displayToSI, formatNumber, quantityToSI, siToDisplay } from "../../core/units";
+import { QUANTITY_KINDS, formatNumber, quantityToSI, siToDisplay } from "../../core/units";
 import type { QuantityKind, UnitSystem } from "../../core/units";
 
 export type { QuantityKind, UnitSystem };
@@ -60,11 +60,6 @@ export function enteredNote(raw: unknown, kind: QuantityKind, system: UnitSystem
   const m = /^\s*([-+]?(?:\d+\.?\d*|\.\d+)(?:e[-+]?\d+)?)/i.exec(raw);
   if (m && Math.abs(Number(m[1]) - shown) <= 1e-9 * Math.max(1, Math.abs(shown))) return null;
   return raw.trim();
-}
-
-/** SI value of a display number (for sketches and tables that work in SI). */
-export function siFromDisplay(value: number, kind: QuantityKind, system: UnitSystem): number {
-  return displayToSI(value, kind, system);
 }
 
 /** Formats an SI result for display: value and unit in the chosen system. */

@@ -306,8 +306,9 @@ function VariantsSection({ scenarioFile, unitSystem, busy, runJob }: VariantsPro
     <section className="study-variants">
       <h3>Variants</h3>
       <p className="study-note">
-        Each variant changes the scenario by “path = value” entries (units allowed), e.g.
-        “ambient.depth = 12 m; diffuser.portCount = 6”.
+        Each variant changes the scenario by “path = value” entries, e.g.
+        “ambient.depth = 40 ft; diffuser.portCount = 6”. Give the unit: a plain number is read in SI
+        (m, m/s, m³/s, g/kg, °C) whichever units the app shows.
         Every variant runs under every ambient case; the worst case is the one with the lowest margin.
       </p>
       {variants.map((v, i) => (
@@ -454,7 +455,8 @@ function SweepSection({
     <section>
       <h3>Sweep</h3>
       <p className="study-note">
-        Bounds are SI numbers or values with units (e.g. “0.5 knot”, “8 in”). One input draws a line chart;
+        Bounds are values with units (e.g. “0.5 knot”, “8 in”); a plain number is read in SI whichever
+        units the app shows. One input draws a line chart;
         two draw a heat map of the margin with the limit contour.
       </p>
       {forms.map((f, i) => (
@@ -527,13 +529,20 @@ function SweepSection({
                 .map(
                   (c) =>
                     `Equation of state changes from ${c.from} to ${c.to} between ${c.path} = ` +
-                    `${formatNumber(c.between[0][c.path]!)} and ${formatNumber(c.between[1][c.path]!)} (SI).`,
+                    `${siText(c.path, c.between[0][c.path]!)} and ${siText(c.path, c.between[1][c.path]!)}.`,
                 )
                 .join(" ")}
         </p>
       ) : null}
     </section>
   );
+}
+
+/** An SI value of an override path with its SI unit ("0.25 m/s"). */
+function siText(path: string, value: number): string {
+  const kind = OVERRIDE_PATHS[path]?.kind;
+  const unit = kind ? siToDisplay(value, kind, "si").unit : "";
+  return unit ? `${formatNumber(value)} ${unit}` : formatNumber(value);
 }
 
 function heatAxis(a: SweepAxis, unitSystem: UnitSystem) {

@@ -22,9 +22,3 @@ export function overridesFromText(
   }
   return { ok: true, overrides };
 }
-
-export function overridesToText(overrides: Readonly<Record<string, unknown>>): string {
-  return Object.entries(overrides)
-    .map(([k, v]) => `${k} = ${String(v)}`)
-    .join("; ");
-}
