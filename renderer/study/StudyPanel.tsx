@@ -674,7 +674,7 @@ function DesignSection({
                 <td>{d.candidate.portCount > 1 ? len(d.candidate.portSpacing) : "—"}</td>
                 <td>{len(d.candidate.length)}</td>
                 <td>{vel(d.candidate.exitVelocity)}</td>
-                <td>{formatNumber(d.worstMargin)}</td>
+                <td>{formatNumber(d.worstMargin)}×</td>
                 <td className="text">{d.governingCase}</td>
                 <td className="text">{d.bestFor.join(", ") || "balanced"}</td>
               </tr>
@@ -688,7 +688,7 @@ function DesignSection({
 
 const DESIGN_HEADERS = [
   ...["#", "ports", "diameter", "angle", "spacing", "length"],
-  ...["exit velocity", "worst margin", "governing case", "best for"],
+  ...["exit velocity", "worst margin (edge ÷ required dilution)", "governing case", "best for"],
 ];
 
 // --- Monte Carlo -----------------------------------------------------------------------------------
@@ -763,8 +763,8 @@ function MonteCarloSection({ scenario, busy, runJob, poolSize }: MonteCarloProps
             </p>
           ))}
           <p data-role="study-exceedance">
-            Worst case: P5 {formatNumber(w.edgeDilution.p5)}, P50 {formatNumber(w.edgeDilution.p50)}, P95{" "}
-            {formatNumber(w.edgeDilution.p95)};
+            Worst case, dilution at the mixing-zone edge: P5 {formatNumber(w.edgeDilution.p5)}×, P50{" "}
+            {formatNumber(w.edgeDilution.p50)}×, P95 {formatNumber(w.edgeDilution.p95)}×;
             probability of not meeting the limit {formatNumber(100 * w.probabilityOfExceedance, 3)} %.
           </p>
           <MonteCarloHistogram
@@ -777,7 +777,7 @@ function MonteCarloSection({ scenario, busy, runJob, poolSize }: MonteCarloProps
           <table>
             <thead>
               <tr>
-                {["case", "P5", "P50", "P95", "P(not meeting limit)", "failed runs"].map((h) => (
+                {["case", "edge dilution P5", "P50", "P95", "P(not meeting limit)", "failed runs"].map((h) => (
                   <th key={h} className={h === "case" ? "text" : ""}>
                     {h}
                   </th>
@@ -788,9 +788,9 @@ function MonteCarloSection({ scenario, busy, runJob, poolSize }: MonteCarloProps
               {[...out.summary.cases, w].map((c) => (
                 <tr key={c.name} className={c === w ? "worst" : ""}>
                   <td className="text">{c.name}</td>
-                  <td>{formatNumber(c.edgeDilution.p5)}</td>
-                  <td>{formatNumber(c.edgeDilution.p50)}</td>
-                  <td>{formatNumber(c.edgeDilution.p95)}</td>
+                  <td>{formatNumber(c.edgeDilution.p5)}×</td>
+                  <td>{formatNumber(c.edgeDilution.p50)}×</td>
+                  <td>{formatNumber(c.edgeDilution.p95)}×</td>
                   <td>{formatNumber(100 * c.probabilityOfExceedance, 3)} %</td>
                   <td>{c.failedRuns}</td>
                 </tr>
