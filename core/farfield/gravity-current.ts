@@ -107,9 +107,17 @@ interface LayerState {
 // Module-scope scratch for the integration (the function is not re-entrant across threads' shared memory,
 // and JavaScript runs it to completion, so one set serves every call).
 const scratchState: LayerState = { h: 0, v: 0, ri: 0, e: 0 };
-const scratchParams: LayerParams = { buoyancyFlux: 0, u: 0, uu: 0, cosb: 1, riSlope: 0, riRadial: 0, eSlope: 0 };
+const scratchParams: LayerParams = {
+  buoyancyFlux: 0,
+  u: 0,
+  uu: 0,
+  cosb: 1,
+  riSlope: 0,
+  riRadial: 0,
+  eSlope: 0,
+};
 
-/** Layer state (thickness h, velocity v, Richardson number, entrainment) for flux q and width w, into `st`. */
+/** Layer state (thickness h, velocity v, Richardson number, entrainment) at flux q and width w, into `st`. */
 function layerStateInto(st: LayerState, p: LayerParams, advected: boolean, q: number, w: number): void {
   const gp = p.buoyancyFlux / q; // buoyancy flux conserved
   if (advected) {
@@ -169,8 +177,8 @@ export function spreadingLayerFromNearFieldEnd(input: SpreadingLayerInput): Spre
     richardson: [] as number[],
     entrainment: [] as number[],
   };
-  // Records the layer at (r, q), switching it to advected first if the radial layer has slowed to the current.
-  // Returns the width there; `st` is left holding the recorded state.
+  // Records the layer at (r, q), first switching it to advected if the radial layer has slowed to the
+  // current. Returns the width there; `st` is left holding the recorded state.
   const record = (r: number, q: number): number => {
     let w = advected ? wAdv : w0 + 2 * Math.PI * (r - r0);
     layerStateInto(st, p, advected, q, w);

@@ -122,7 +122,14 @@ export function beyondNearField(input: BeyondInput): BeyondOutput {
     // least the jet's half-width at impact (judgement); 0.5 m floor keeps the geometry finite.
     const halfAtImpact = (jetWidthsFromNearField(nf, diffuser.portHeight)?.widthAtImpact ?? 0) / 2;
     const layerRadius = Math.max(end.distance - xi, halfAtImpact, 0.5);
-    chains.push({ nf, profile: jetProfileFromNearField(nf), end, impactDistance: Math.min(xi, end.distance), layerRadius, far: {} });
+    chains.push({
+      nf,
+      profile: jetProfileFromNearField(nf),
+      end,
+      impactDistance: Math.min(xi, end.distance),
+      layerRadius,
+      far: {},
+    });
   }
 
   // Slope along the spreading direction: current direction if there is a current, else downslope.
@@ -136,7 +143,14 @@ export function beyondNearField(input: BeyondInput): BeyondOutput {
     u > 0 ? diffuserLength * Math.abs(Math.sin(degToRad(diffuser.diffuserAzimuth - column.currentDirection))) : diffuserLength;
   const crossWidth = (c: Chain) => 2 * c.layerRadius + crossLength();
 
-  const integrateFar = (c: Chain, method: FarMethod, xEnd: number, steps: number, xStop: number): FarSeries => {
+  // Integrates over [end of the near field, xEnd] in `steps` steps, stopping after the first step past xStop.
+  const integrateFar = (
+    c: Chain,
+    method: FarMethod,
+    xEnd: number,
+    steps: number,
+    xStop: number,
+  ): FarSeries => {
     // Passive diffusion reuses the spreading layer's distances and start thickness (memoised below).
     if (method === "passive-diffusion" && u > 0) return passiveFromLayer(c, farSeries(c, "gravity-current"));
     const gc = spreadingLayerFromNearFieldEnd({
