@@ -359,7 +359,7 @@ export function App() {
             <button type="button" onClick={commands.exportCsv} disabled={!result || engine.error !== null} data-command="export-csv">Export CSV</button>
           </nav>
           <div className="doc-title" title={doc.path ?? "not saved yet"}>
-            {doc.dirty ? <span className="dirty-dot" aria-label="unsaved changes">●</span> : null}
+            {doc.dirty ? <span className="dirty-dot" role="img" aria-label="unsaved changes" title="unsaved changes">●</span> : null}
             {title}
             {doc.path ? <span className="doc-path">{doc.path.replace(/^.*[\\/]/, "")}</span> : null}
           </div>

@@ -1,0 +1,152 @@
+/** Study tab, sweep: one input (line chart) or two (heat map of the margin with the limit contour). */
+import { useState } from "react";
+import type { Scenario } from "../../core/scenario/types";
+import { formatNumber, siToDisplay, type UnitSystem } from "../../core/units";
+import { OVERRIDE_PATHS } from "../../core/study/overrides";
+import { axisFromParts, eosCrossings, sweepGrid, sweepRows, type SweepAxis, type SweepRow } from "../../core/study/sweep";
+import { SweepHeatmap, SweepLineChart } from "./charts";
+import { PATHS, axisDisplay, patchAt, type RunPoints } from "./sections";
+
+interface AxisForm {
+  path: string;
+  from: string;
+  to: string;
+  steps: string;
+}
+
+export function SweepSection({
+  scenario,
+  unitSystem,
+  busy,
+  runPoints,
+}: {
+  scenario: Scenario | null;
+  unitSystem: UnitSystem;
+  busy: boolean;
+  runPoints: RunPoints;
+}) {
+  const [forms, setForms] = useState<AxisForm[]>([
+    { path: "ambient.currentSpeed", from: "0", to: "0.5", steps: "11" },
+  ]);
+  const [result, setResult] = useState<{ axes: SweepAxis[]; rows: SweepRow[] } | null>(null);
+  const [problem, setProblem] = useState<string | null>(null);
+
+  const run = async () => {
+    if (!scenario) return;
+    const axes: SweepAxis[] = [];
+    for (const f of forms) {
+      const a = axisFromParts(f.path, f.from, f.to, f.steps);
+      if (!a.ok) {
+        setProblem(a.message);
+        return;
+      }
+      axes.push(a.axis);
+    }
+    if (axes.length === 2 && axes[0]!.path === axes[1]!.path) {
+      setProblem(`${axes[0]!.path} is varied twice`);
+      return;
+    }
+    setProblem(null);
+    const grid = sweepGrid(axes);
+    const points = await runPoints("Sweep", scenario, grid.map((g) => g.overrides));
+    if (points) setResult({ axes, rows: sweepRows(grid, points) });
+  };
+
+  const crossings = result ? eosCrossings(result.axes, result.rows) : [];
+  return (
+    <section>
+      <h3>Sweep</h3>
+      <p className="study-note">
+        Bounds are values with units (e.g. “0.5 knot”, “8 in”); a plain number is read in SI whichever
+        units the app shows. One input draws a line chart;
+        two draw a heat map of the margin with the limit contour.
+      </p>
+      {forms.map((f, i) => (
+        <div className="study-form" key={i}>
+          <label>
+            input {i + 1}
+            <select value={f.path} onChange={(e) => setForms(patchAt(forms, i, { path: e.target.value }))}>
+              {PATHS.map((p) => (
+                <option key={p} value={p}>
+                  {p}
+                </option>
+              ))}
+            </select>
+          </label>
+          {(["from", "to", "steps"] as const).map((k) => (
+            <label key={k}>
+              {k}
+              <input
+                className="narrow"
+                value={f[k]}
+                onChange={(e) => setForms(patchAt(forms, i, { [k]: e.target.value }))}
+              />
+            </label>
+          ))}
+          {i === 1 ? (
+            <button type="button" onClick={() => setForms(forms.slice(0, 1))}>
+              Remove
+            </button>
+          ) : null}
+        </div>
+      ))}
+      <div className="button-row">
+        {forms.length === 1 ? (
+          <button
+            type="button"
+            onClick={() =>
+              setForms([...forms, { path: "diffuser.portDiameter", from: "0.1", to: "0.3", steps: "11" }])
+            }
+          >
+            Add second input
+          </button>
+        ) : null}
+        <button
+          type="button"
+          disabled={busy || !scenario}
+          onClick={() => void run()}
+          data-command="study-sweep"
+        >
+          Run sweep
+        </button>
+      </div>
+      {problem ? <div className="study-error">{problem}</div> : null}
+      {result && result.axes.length === 1 ? (
+        <SweepLineChart
+          rows={result.rows}
+          axis={{ ...axisDisplay(result.axes[0]!.path, unitSystem), path: result.axes[0]!.path }}
+        />
+      ) : null}
+      {result && result.axes.length === 2 ? (
+        <SweepHeatmap
+          rows={result.rows}
+          axes={[heatAxis(result.axes[0]!, unitSystem), heatAxis(result.axes[1]!, unitSystem)]}
+        />
+      ) : null}
+      {result ? (
+        <p className="study-note" data-role="study-eos">
+          {crossings.length === 0
+            ? `Equation of state at every point: ${result.rows[0]?.equationOfState ?? "—"}.`
+            : crossings
+                .map(
+                  (c) =>
+                    `Equation of state changes from ${c.from} to ${c.to} between ${c.path} = ` +
+                    `${siText(c.path, c.between[0][c.path]!)} and ${siText(c.path, c.between[1][c.path]!)}.`,
+                )
+                .join(" ")}
+        </p>
+      ) : null}
+    </section>
+  );
+}
+
+/** An SI value of an override path with its SI unit ("0.25 m/s"). */
+function siText(path: string, value: number): string {
+  const kind = OVERRIDE_PATHS[path]?.kind;
+  const unit = kind ? siToDisplay(value, kind, "si").unit : "";
+  return unit ? `${formatNumber(value)} ${unit}` : formatNumber(value);
+}
+
+function heatAxis(a: SweepAxis, unitSystem: UnitSystem) {
+  return { ...axisDisplay(a.path, unitSystem), path: a.path, steps: a.steps };
+}
