@@ -29,6 +29,7 @@ import {
 import { StartView } from "./start/StartView";
 import { historyPush, historyRedo, historyReplace, historyStart, historyUndo, type History } from "./state/history";
 import { ConfirmDialog, type ConfirmRequest } from "./ui/ConfirmDialog";
+import { useFileDrop } from "./ui/useFileDrop";
 import { PlumeView } from "./view3d/PlumeView";
 import { TrajectoryChart } from "./charts/TrajectoryChart";
 import { DistanceChart } from "./charts/DistanceCharts";
@@ -68,7 +69,6 @@ export function App() {
   const [notice, setNotice] = useState<string | null>(null);
   const [resetSignal, setResetSignal] = useState(0);
   const [documentKey, setDocumentKey] = useState(0);
-  const [dragging, setDragging] = useState(false);
   const [chart, setChart] = useState<"trajectory" | "dilution" | "increase">("trajectory");
   const engine = useEngine(doc.file);
   const docRef = useRef(doc);
@@ -301,42 +301,18 @@ export function App() {
     };
   }, [commands, step]);
 
-  // Drag and drop of a scenario file anywhere on the window.
-  useEffect(() => {
-    const over = (e: DragEvent) => {
-      if (e.dataTransfer?.types.includes("Files")) {
-        e.preventDefault();
-        setDragging(true);
-      }
-    };
-    const leave = (e: DragEvent) => {
-      if (e.relatedTarget === null) setDragging(false);
-    };
-    const drop = (e: DragEvent) => {
-      e.preventDefault();
-      setDragging(false);
-      const file = e.dataTransfer?.files[0];
-      if (!file) return;
-      // Read and check the file first: a picture or any other file must not cost the user their
-      // unsaved work, nor replace the document.
-      void host.readDroppedFile(file).then(
-        (opened) => {
-          const read = fileFromText(opened.text);
-          if (!read.ok) return flash(`${file.name}: ${read.message}`);
-          guardUnsaved("Open the dropped file", () => loadText(opened.text, opened.path));
-        },
-        (error: unknown) => flash(`Could not read ${file.name}: ${error instanceof Error ? error.message : String(error)}`),
-      );
-    };
-    window.addEventListener("dragover", over);
-    window.addEventListener("dragleave", leave);
-    window.addEventListener("drop", drop);
-    return () => {
-      window.removeEventListener("dragover", over);
-      window.removeEventListener("dragleave", leave);
-      window.removeEventListener("drop", drop);
-    };
-  }, [guardUnsaved, loadText, flash]);
+  // A scenario file dropped anywhere on the window. It is read and checked first: a picture or any
+  // other file must not cost the user their unsaved work, nor replace the document.
+  const dragging = useFileDrop((file) => {
+    void host.readDroppedFile(file).then(
+      (opened) => {
+        const read = fileFromText(opened.text);
+        if (!read.ok) return flash(`${file.name}: ${read.message}`);
+        guardUnsaved("Open the dropped file", () => loadText(opened.text, opened.path));
+      },
+      (error: unknown) => flash(`Could not read ${file.name}: ${error instanceof Error ? error.message : String(error)}`),
+    );
+  });
 
   const result = engine.result;
   const scenario = engine.scenario;

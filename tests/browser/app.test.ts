@@ -325,6 +325,14 @@ describe("the built app", () => {
     await dropNamed("study.json", JSON.stringify({ format: "brinefield-study", version: 1 }));
     await expect.poll(() => page.locator("[data-role=notice]").textContent(), { message: "another Brinefield format is named" }).toMatch(/study\.json: .*brinefield-study/);
     expect(await page.locator(".doc-title .dirty-dot").count(), "the edits are still unsaved").toBe(1);
+    const textDropCancelled = await page.evaluate(() => {
+      const transfer = new DataTransfer();
+      transfer.setData("text/plain", "38.5");
+      const drop = new DragEvent("drop", { dataTransfer: transfer, cancelable: true, bubbles: true });
+      document.querySelector('input[data-path="name"]')!.dispatchEvent(drop);
+      return drop.defaultPrevented;
+    });
+    expect(textDropCancelled, "text dragged into a field is left to the field").toBe(false);
   });
 
   it("autosaves unsaved work and offers to recover it on the next start", async () => {
