@@ -167,7 +167,8 @@ export function App() {
       const path = await host.saveScenario(forceDialog ? null : current.path, serialiseScenario(current.file), suggestedFileName(current.file));
       if (path === null) return false;
       savedFile.current = current.file;
-      setDoc((d) => (d.revision === current.revision ? { ...d, path, dirty: false } : { ...d, path }));
+      // Clean only if nothing changed while the dialog was open (the file object is replaced on every edit).
+      setDoc((d) => (d.file === current.file ? { ...d, path, dirty: false } : { ...d, path }));
       await host.autosaveClear().catch(() => {});
       void host.recentFiles().then(setRecent).catch(() => {});
       flash(`Saved ${path.replace(/^.*[\\/]/, "")}`);

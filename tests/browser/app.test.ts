@@ -345,6 +345,11 @@ describe("the built app", () => {
     await recover.click();
     await expect.poll(() => page.locator('input[data-path="name"]').inputValue(), { message: "recovered name" }).toBe("Autosaved edit");
     expect(await page.locator(".doc-title .dirty-dot").count(), "recovered work is still unsaved").toBe(1);
+    // Recovered work is unsaved work: it stays autosaved, so a crash right after recovering loses nothing.
+    await page.reload();
+    await page.getByRole("button", { name: "Recover it" }).waitFor({ timeout: 30_000 });
+    await page.getByRole("button", { name: "Discard" }).click();
+    expect(await page.getByRole("button", { name: "Recover it" }).count(), "discarded").toBe(0);
   });
 
   it("mounts the study panel in the Study tab", async () => {
