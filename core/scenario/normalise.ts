@@ -19,7 +19,13 @@ import { brineFromPlant } from "./plant";
 import { absoluteSalinityFromPractical, salinityFromTds } from "../properties";
 import { formatNumber } from "../units";
 
-const math = create({ unitDependencies, createUnitDependencies });
+// mathjs units, created on first use: study worker threads run scenarios that are already normalised.
+let mathUnits: ReturnType<typeof create> | null = null;
+
+function math(): ReturnType<typeof create> {
+  mathUnits ??= create({ unitDependencies, createUnitDependencies });
+  return mathUnits;
+}
 
 export interface ScenarioIssue {
   /** Dotted path in the scenario file, e.g. "diffuser.portDiameter" or "ambient.profile.2.depth". */
@@ -158,7 +164,7 @@ function parseLimitValue(
   }
   try {
     const target = key === "temperature" ? "degC" : unit;
-    const converted = math.unit(value, u).toNumber(target);
+    const converted = math().unit(value, u).toNumber(target);
     if (Number.isFinite(converted)) {
       ctx.conversions.push(`${path}: ${raw} → ${formatNumber(converted)} ${target}`);
       return converted;

@@ -5,22 +5,30 @@
  */
 import { create, createUnitDependencies, unitDependencies } from "mathjs";
 
-const math = create({ createUnitDependencies, unitDependencies });
+// mathjs with the trade units below, created on first use: study worker threads never parse a unit, and
+// creating the instance is most of their start-up time.
+let mathWithTradeUnits: ReturnType<typeof create> | null = null;
 
-// Trade units missing from mathjs. Definitions are exact by statute or convention.
-// MGD: million US gallons per day (US gallon = 3.785411784 L, exact).
-math.createUnit("MGD", "3785.411784 m^3/day");
-// Megalitres per day, common for Australian plant capacities.
-math.createUnit("MLD", "1000 m^3/day");
-// International knot: 1852 m per hour (exact).
-math.createUnit("knot", { definition: "1852 m/hour", aliases: ["knots", "kn", "kt"] });
-// Cubic metres per day and per hour are written as m^3/day, m^3/h; "cms" is the trade's m³/s shorthand.
-math.createUnit("cms", "1 m^3/s");
-// US cubic feet per second.
-math.createUnit("cfs", "1 ft^3/s");
-// Salinity: g/kg is a mass ratio; ppt and ‰ are treated as g/kg (a screening convention, said in notes).
-math.createUnit("ppt", "1 g/kg");
-// Density deficit or concentration units used in limits (mass per volume) are parsed natively (mg/L).
+function math(): ReturnType<typeof create> {
+  if (mathWithTradeUnits) return mathWithTradeUnits;
+  const m = create({ createUnitDependencies, unitDependencies });
+  // Trade units missing from mathjs. Definitions are exact by statute or convention.
+  // MGD: million US gallons per day (US gallon = 3.785411784 L, exact).
+  m.createUnit("MGD", "3785.411784 m^3/day");
+  // Megalitres per day, common for Australian plant capacities.
+  m.createUnit("MLD", "1000 m^3/day");
+  // International knot: 1852 m per hour (exact).
+  m.createUnit("knot", { definition: "1852 m/hour", aliases: ["knots", "kn", "kt"] });
+  // Cubic metres per day and per hour are written as m^3/day, m^3/h; "cms" is the trade's m³/s shorthand.
+  m.createUnit("cms", "1 m^3/s");
+  // US cubic feet per second.
+  m.createUnit("cfs", "1 ft^3/s");
+  // Salinity: g/kg is a mass ratio; ppt and ‰ are treated as g/kg (a screening convention, said in notes).
+  m.createUnit("ppt", "1 g/kg");
+  // Density deficit or concentration units used in limits (mass per volume) are parsed natively (mg/L).
+  mathWithTradeUnits = m;
+  return m;
+}
 
 /** Kinds of quantity the scenario format uses, with their SI unit and a US customary display unit. */
 export const QUANTITY_KINDS = {
@@ -83,7 +91,7 @@ export function quantityToSI(raw: unknown, kind: QuantityKind): QuantityParse {
   if (target === "") return { ok: false, message: "must be a plain number (no unit)" };
   let value: number;
   try {
-    const u = math.unit(normaliseUnitText(text));
+    const u = math().unit(normaliseUnitText(text));
     if (u.value === null || u.value === undefined) return { ok: false, message: "has a unit but no number" };
     value = u.toNumber(target);
   } catch (err) {
@@ -128,7 +136,7 @@ export function siToDisplay(value: number, kind: QuantityKind, system: UnitSyste
   const k = QUANTITY_KINDS[kind];
   const target = system === "si" ? k.si : k.us;
   if (target === k.si || target === "") return { value, unit: unitSymbol(target) };
-  return { value: math.unit(value, k.si).toNumber(target), unit: unitSymbol(target) };
+  return { value: math().unit(value, k.si).toNumber(target), unit: unitSymbol(target) };
 }
 
 /** Converts a display value back to SI. */
@@ -136,7 +144,7 @@ export function displayToSI(value: number, kind: QuantityKind, system: UnitSyste
   const k = QUANTITY_KINDS[kind];
   const from = system === "si" ? k.si : k.us;
   if (from === k.si || from === "") return value;
-  return math.unit(value, from).toNumber(k.si);
+  return math().unit(value, from).toNumber(k.si);
 }
 
 /** Compact engineering formatting: 4 significant figures, no exponent for ordinary magnitudes. */
