@@ -10,7 +10,11 @@
  * tol = INTEGRAL_DEFAULT_REL_TOL, which with state magnitudes of order 0.1–100 is no stricter than
  * our mixed rtol/atol control (the reference does no event location, so the comparison favours it).
  */
-import * as mathjs from "mathjs";
+import {
+  create,
+  // @ts-expect-error: mathjs ships solveODE and its dependency list, but its type declarations omit them.
+  solveODEDependencies,
+} from "mathjs";
 import {
   INTEGRAL_DEFAULT_REL_TOL,
   integralInitialState,
@@ -20,15 +24,26 @@ import {
 import { INTEGRAL_DIM, integralJetRhs } from "../../nearfield/integralRhs";
 import type { AmbientColumn, JetSource } from "../../nearfield/types";
 
-/** mathjs ships `solveODE` (Dormand–Prince RK45) but its type declarations omit it. */
-const solveODE = (mathjs as unknown as {
-  solveODE: (
-    f: (t: number, y: number[]) => number[],
-    tspan: [number, number],
-    y0: number[],
-    options: { tol: number; firstStep: number; maxIter: number },
-  ) => { t: number[]; y: number[][] };
-}).solveODE;
+type SolveODE = (
+  f: (t: number, y: number[]) => number[],
+  tspan: [number, number],
+  y0: number[],
+  options: { tol: number; firstStep: number; maxIter: number },
+) => { t: number[]; y: number[][] };
+
+/**
+ * mathjs `solveODE` (Dormand–Prince RK45), from an instance holding only it and its dependencies, made on
+ * first use: the whole default mathjs instance would be built at import time by every command and every
+ * study worker thread of the bundle.
+ */
+let solveODEInstance: SolveODE | null = null;
+function solveODE(...args: Parameters<SolveODE>): ReturnType<SolveODE> {
+  if (!solveODEInstance) {
+    const factories = solveODEDependencies as Parameters<typeof create>[0];
+    solveODEInstance = (create(factories) as unknown as { solveODE: SolveODE }).solveODE;
+  }
+  return solveODEInstance(...args);
+}
 
 const G = 9.80665;
 
