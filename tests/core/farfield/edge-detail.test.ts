@@ -1,0 +1,73 @@
+/**
+ * The lighter "edge" detail of beyondNearField() (used by study loops) stops far-field series just past
+ * the mixing-zone edge. These checks pin that it is the same computation, only shorter: the spreading
+ * layer's shortened series is the leading part of the full one, and the stage gives the same edge
+ * numbers and the same warnings as the full detail (the equality is exact: no tolerance).
+ */
+import { describe, expect, it } from "vitest";
+import { beyondNearField } from "../../../core/farfield/stage";
+import { spreadingLayerFromNearFieldEnd, type SpreadingLayerInput } from "../../../core/farfield/gravity-current";
+import { beyondInputFixture, scenarioFixture } from "./fixtures";
+
+const layer: SpreadingLayerInput = {
+  startDistance: 36,
+  endDistance: 1000,
+  startDilution: 52,
+  dischargeFlow: 0.5,
+  reducedGravity: 0.27,
+  initialWidth: 2 * Math.PI * 20,
+  currentSpeed: 0.1,
+  bedSlope: 0.01,
+  steps: 200,
+};
+
+describe("spreadingLayerFromNearFieldEnd() with stopDistance", () => {
+  it("returns exactly the leading points of the full series, up to the first point at or past the stop", () => {
+    const full = spreadingLayerFromNearFieldEnd(layer);
+    const part = spreadingLayerFromNearFieldEnd({ ...layer, stopDistance: 100 });
+    const n = part.distance.length;
+    expect(n < full.distance.length, "stopped early").toBe(true);
+    expect(part.distance[n - 1]! >= 100 && part.distance[n - 2]! < 100, "last point is the first past 100 m").toBe(true);
+    for (const key of ["distance", "dilution", "thickness", "width", "flux", "velocity"] as const) {
+      expect(part[key], `${key}: same leading values`).toEqual(full[key].slice(0, n));
+    }
+    expect(part.switchDistance, "same switch to the advected layer").toBe(full.switchDistance);
+  });
+
+  it("integrates the whole range when the stop lies beyond its end", () => {
+    const full = spreadingLayerFromNearFieldEnd(layer);
+    const part = spreadingLayerFromNearFieldEnd({ ...layer, stopDistance: 5000 });
+    expect(part.dilution, "identical series").toEqual(full.dilution);
+  });
+});
+
+describe("beyondNearField() in edge detail", () => {
+  const variants: [string, Parameters<typeof scenarioFixture>[0]][] = [
+    ["still water", {}],
+    ["current", { ambient: { currentSpeed: 0.2 } }],
+    ["current, passive diffusion requested", { ambient: { currentSpeed: 0.2 }, options: { farField: "passive-diffusion" } }],
+    ["current, spreading layer requested", { ambient: { currentSpeed: 0.05 }, options: { farField: "gravity-current" } }],
+    ["sloping bed", { ambient: { bedSlope: 0.05, bedSlopeAzimuth: 90 } }],
+    ["edge inside the near field", { mixingZone: { radius: 20, limits: [] } }],
+    ["far edge", { mixingZone: { radius: 2000, limits: [] }, ambient: { currentSpeed: 0.3 } }],
+    ["thick layer in shallow water", { ambient: { depth: 2.5, currentSpeed: 0.02 }, discharge: { flow: 2 } }],
+  ];
+
+  it.each(variants)("gives the full detail's edge numbers and warnings (%s)", (_name, over) => {
+    const input = beyondInputFixture(scenarioFixture(over));
+    const full = beyondNearField(input);
+    const edge = beyondNearField({ ...input, detail: "edge" });
+    const { alternatives: _a, series: _s, footprint: _f, ...fullEdge } = full.mixingZone;
+    const { alternatives: _b, series: _t, footprint: _g, ...edgeEdge } = edge.mixingZone;
+    expect(edgeEdge, "mixing-zone edge: dilution, method, layer thickness, constituents").toEqual(fullEdge);
+    expect(edge.compliance, "compliance").toEqual(full.compliance);
+    const notFootprint = (w: { code: string }) => w.code !== "footprint-beyond-range"; // footprint: full detail only
+    expect(edge.warnings, "warnings").toEqual(full.warnings.filter(notFootprint));
+  });
+
+  it("covers a layer that is thick for the depth (the check that reads the whole far-field range)", () => {
+    const input = beyondInputFixture(scenarioFixture(variants[7]![1]));
+    const codes = beyondNearField({ ...input, detail: "edge" }).warnings.map((w) => w.code);
+    expect(codes, "shallow water, large flow: the layer-thickness warning is raised").toContain("layer-thick-for-depth");
+  });
+});
