@@ -2,11 +2,14 @@
  * The lighter "edge" detail of beyondNearField() (used by study loops) stops far-field series just past
  * the mixing-zone edge. These checks pin that it is the same computation, only shorter: the spreading
  * layer's shortened series is the leading part of the full one, and the stage gives the same edge
- * numbers and the same warnings as the full detail (the equality is exact: no tolerance).
+ * numbers and the same warnings as the full detail (exact equality, no tolerance).
  */
 import { describe, expect, it } from "vitest";
 import { beyondNearField } from "../../../core/farfield/stage";
-import { spreadingLayerFromNearFieldEnd, type SpreadingLayerInput } from "../../../core/farfield/gravity-current";
+import {
+  spreadingLayerFromNearFieldEnd,
+  type SpreadingLayerInput,
+} from "../../../core/farfield/gravity-current";
 import { beyondInputFixture, scenarioFixture } from "./fixtures";
 
 const layer: SpreadingLayerInput = {
@@ -22,12 +25,13 @@ const layer: SpreadingLayerInput = {
 };
 
 describe("spreadingLayerFromNearFieldEnd() with stopDistance", () => {
-  it("returns exactly the leading points of the full series, up to the first point at or past the stop", () => {
+  it("returns exactly the full series' leading points, up to the first point at or past the stop", () => {
     const full = spreadingLayerFromNearFieldEnd(layer);
     const part = spreadingLayerFromNearFieldEnd({ ...layer, stopDistance: 100 });
     const n = part.distance.length;
     expect(n < full.distance.length, "stopped early").toBe(true);
-    expect(part.distance[n - 1]! >= 100 && part.distance[n - 2]! < 100, "last point is the first past 100 m").toBe(true);
+    const last = part.distance[n - 1]!;
+    expect(last >= 100 && part.distance[n - 2]! < 100, "last point is the first past 100 m").toBe(true);
     for (const key of ["distance", "dilution", "thickness", "width", "flux", "velocity"] as const) {
       expect(part[key], `${key}: same leading values`).toEqual(full[key].slice(0, n));
     }
@@ -45,8 +49,14 @@ describe("beyondNearField() in edge detail", () => {
   const variants: [string, Parameters<typeof scenarioFixture>[0]][] = [
     ["still water", {}],
     ["current", { ambient: { currentSpeed: 0.2 } }],
-    ["current, passive diffusion requested", { ambient: { currentSpeed: 0.2 }, options: { farField: "passive-diffusion" } }],
-    ["current, spreading layer requested", { ambient: { currentSpeed: 0.05 }, options: { farField: "gravity-current" } }],
+    [
+      "current, passive diffusion requested",
+      { ambient: { currentSpeed: 0.2 }, options: { farField: "passive-diffusion" } },
+    ],
+    [
+      "current, spreading layer requested",
+      { ambient: { currentSpeed: 0.05 }, options: { farField: "gravity-current" } },
+    ],
     ["sloping bed", { ambient: { bedSlope: 0.05, bedSlopeAzimuth: 90 } }],
     ["edge inside the near field", { mixingZone: { radius: 20, limits: [] } }],
     ["far edge", { mixingZone: { radius: 2000, limits: [] }, ambient: { currentSpeed: 0.3 } }],
@@ -61,13 +71,14 @@ describe("beyondNearField() in edge detail", () => {
     const { alternatives: _b, series: _t, footprint: _g, ...edgeEdge } = edge.mixingZone;
     expect(edgeEdge, "mixing-zone edge: dilution, method, layer thickness, constituents").toEqual(fullEdge);
     expect(edge.compliance, "compliance").toEqual(full.compliance);
-    const notFootprint = (w: { code: string }) => w.code !== "footprint-beyond-range"; // footprint: full detail only
+    // The footprint is computed in full detail only, and with it its warning.
+    const notFootprint = (w: { code: string }) => w.code !== "footprint-beyond-range";
     expect(edge.warnings, "warnings").toEqual(full.warnings.filter(notFootprint));
   });
 
   it("covers a layer that is thick for the depth (the check that reads the whole far-field range)", () => {
     const input = beyondInputFixture(scenarioFixture(variants[7]![1]));
     const codes = beyondNearField({ ...input, detail: "edge" }).warnings.map((w) => w.code);
-    expect(codes, "shallow water, large flow: the layer-thickness warning is raised").toContain("layer-thick-for-depth");
+    expect(codes, "shallow water, large flow: layer-thickness warning").toContain("layer-thick-for-depth");
   });
 });
