@@ -190,11 +190,6 @@ export function beyondNearField(input: BeyondInput): BeyondOutput {
   const farRange = (c: Chain) => Math.max(10 * radius, 2 * c.end.distance);
   const farSeries = (c: Chain, method: FarMethod): FarSeries =>
     (c.far[method] ??= integrateFar(c, method, farRange(c), FAR_STEPS, full ? Infinity : radius));
-  // The whole range of a series, for readers beyond the edge (the spreading layer's thickest point).
-  const wholeFarSeries = (c: Chain, method: FarMethod): FarSeries =>
-    full || (method === "passive-diffusion" && u > 0)
-      ? farSeries(c, method)
-      : integrateFar(c, method, farRange(c), FAR_STEPS, Infinity);
   const atRadius = (s: FarSeries) => interpolate(s.distance, s.dilution, radius);
 
   // Alternatives at the edge, for every near-field method and every applicable far-field method.
@@ -267,16 +262,21 @@ export function beyondNearField(input: BeyondInput): BeyondOutput {
         }),
       );
     }
-    const far = wholeFarSeries(chain, farMethod);
+    const far = farSeries(chain, farMethod);
     if (!edgeInside) layerAtEdge = interpolate(far.distance, far.thickness, radius);
+    // Thin-layer check over the layer inside the mixing zone, the part the edge dilution rests on.
     const depth = scenario.ambient.depth;
-    const thickest = far.thickness.reduce((m, h) => (Number.isFinite(h) && h > m ? h : m), 0);
-    if (thickest > 0.5 * depth) {
+    let thickest = 0;
+    for (let i = 0; i < far.distance.length && far.distance[i]! <= radius; i++) {
+      const h = far.thickness[i]!;
+      if (Number.isFinite(h) && h > thickest) thickest = h;
+    }
+    if (!edgeInside && thickest > 0.5 * depth) {
       warnings.push(
         warning(
           "layer-thick-for-depth",
           "warning",
-          `The spreading layer reaches ${thickest.toFixed(1)} m thick in ${depth.toFixed(1)} m of water: the thin-layer assumptions behind the far-field dilution do not hold; treat the edge dilution as rough.`,
+          `Inside the mixing zone the spreading layer reaches ${thickest.toFixed(1)} m thick in ${depth.toFixed(1)} m of water: the thin-layer assumptions behind the far-field dilution do not hold; treat the edge dilution as rough.`,
           { parameter: "ambient.depth", value: depth, stage: "far-field" },
         ),
       );

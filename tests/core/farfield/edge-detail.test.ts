@@ -76,7 +76,7 @@ describe("beyondNearField() in edge detail", () => {
     expect(edge.warnings, "warnings").toEqual(full.warnings.filter(notFootprint));
   });
 
-  it("covers a layer that is thick for the depth (the check that reads the whole far-field range)", () => {
+  it("covers a layer that is thick for the depth inside the mixing zone", () => {
     const input = beyondInputFixture(scenarioFixture(variants[7]![1]));
     const codes = beyondNearField({ ...input, detail: "edge" }).warnings.map((w) => w.code);
     expect(codes, "shallow water, large flow: layer-thickness warning").toContain("layer-thick-for-depth");
