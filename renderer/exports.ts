@@ -3,6 +3,9 @@ import { csvFormatRows } from "d3-dsv";
 import { CAUTION, type BrinefieldResult } from "../core/result/contract";
 import { formatNumber, siToDisplay, type UnitSystem } from "../core/units";
 import { exportFile } from "./platform/host";
+import { csvWithCaution } from "../core/report/csv";
+
+export { csvWithCaution };
 import { serialiseScenario, suggestedFileName, type ScenarioFile } from "./state/scenarioState";
 
 /** The 3D view as drawn now (the canvas keeps its drawing buffer), as a PNG data URI. */
@@ -51,9 +54,6 @@ export function seriesCsv(result: BrinefieldResult, unitSystem: UnitSystem): str
  * An exported CSV with the caution in its first row (one quoted cell, so a spreadsheet shows it whole in
  * the first cell and no reader splits it), then the table. Readers of the data skip one row.
  */
-export function csvWithCaution(csv: string, caution: string = CAUTION): string {
-  return csvFormatRows([[caution || CAUTION]]) + "\n" + csv;
-}
 
 export async function exportSeriesCsv(result: BrinefieldResult, file: ScenarioFile, unitSystem: UnitSystem): Promise<string> {
   const name = suggestedFileName(file, "series.csv");

@@ -3,8 +3,8 @@
  * mixing-zone edge) and the dilution-against-distance series. Numbers are written at full precision
  * (JavaScript's shortest round-trip form) so a CSV parses back to exactly the result's numbers.
  */
-import { csvFormat, csvParse } from "d3-dsv";
-import type { BrinefieldResult } from "../result/contract";
+import { csvFormat, csvFormatRows, csvParse } from "d3-dsv";
+import { CAUTION, type BrinefieldResult } from "../result/contract";
 
 /** Column order of `resultCsv`; units are in the column names. */
 export const RESULT_CSV_COLUMNS = [
@@ -120,4 +120,12 @@ export function studySeriesCsv(variants: readonly { readonly name: string; reado
 function withVariantColumn(parts: readonly { name: string; csv: string }[], columns: string[]): string {
   const rows: Record<string, string>[] = parts.flatMap((p) => csvParse(p.csv).map((row) => ({ variant: p.name, ...row }) as Record<string, string>));
   return csvFormat(rows, ["variant", ...columns]);
+}
+
+/**
+ * A CSV file as written for people: the permitting caution (beginning "Caution") as one quoted cell on
+ * the first row, then the table. Readers that want the table alone skip the first line.
+ */
+export function csvWithCaution(csv: string, caution: string = CAUTION): string {
+  return csvFormatRows([[caution || CAUTION]]) + "\n" + csv;
 }

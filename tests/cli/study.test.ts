@@ -122,7 +122,9 @@ describe("brinefield sweep", () => {
         p.governingCase,
       );
     }
-    const csv = csvParse(f.files.get("out.csv")!);
+    const text = f.files.get("out.csv")!;
+    expect(text.startsWith('"Caution:'), "the CSV opens with the caution").toBe(true);
+    const csv = csvParse(text.replace(/^.*\n/, "")); // the table follows the caution row
     expect(csv.length, "one CSV row per point").toBe(3);
     expect(csv.columns.slice(0, 3), "CSV columns").toEqual(
       ["ambient.depth", "governingCase", "edgeDilution"],
@@ -203,7 +205,7 @@ describe("brinefield compare", () => {
     expect(j.rows.length, "3 variants × (3 cases + worst case)").toBe(12);
     const margins = j.rows.map((r: { margin: number }) => r.margin);
     expect([...margins].sort((a, b) => b - a), "sorted by descending margin").toEqual(margins);
-    expect(csvParse(f.files.get("rows.csv")!).length, "CSV rows").toBe(12);
+    expect(csvParse(f.files.get("rows.csv")!.replace(/^.*\n/, "")).length, "CSV rows after the caution row").toBe(12);
   });
 
   it("names the path of a bad study", WORKERS, async () => {

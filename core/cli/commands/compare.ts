@@ -1,6 +1,7 @@
 /** `brinefield compare`: a study's variants side by side, per ambient case and worst case. */
 import { dirname, isAbsolute, join } from "node:path";
 import { csvFormat } from "d3-dsv";
+import { csvWithCaution } from "../../report/csv";
 import { CliError, type CliCommand, type CliIO } from "../command";
 import { readArgs } from "../args";
 import { loadJsonFile } from "../load";
@@ -74,7 +75,7 @@ async function run(argv: readonly string[], io: CliIO): Promise<number> {
     flat = sorted;
   }
   const columns = columnsOf(flat);
-  if (values.csv) io.writeFile(values.csv, csvFormat(flat as never, columns as never));
+  if (values.csv) io.writeFile(values.csv, csvWithCaution(csvFormat(flat as never, columns as never)));
   const notes = v.variants.map((x) => `${x.name}: ${describeCases(expandCases(x.scenario), x.scenario)}`);
   if (values.json) {
     const study = st.study.name;

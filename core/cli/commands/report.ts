@@ -14,6 +14,7 @@ import type { Scenario } from "../../scenario/types";
 import { runScenario } from "../../pipeline";
 import type { BrinefieldResult } from "../../result/contract";
 import { reportHtml, resultCsv, seriesCsv, studyReportHtml, studyResultCsv, studySeriesCsv } from "../../report";
+import { csvWithCaution } from "../../report/csv";
 import type { StudyReportVariant } from "../../report";
 import { parseStudy, withRawOverride, planMonteCarlo, runMonteCarloChunk, summariseMonteCarlo, evaluateScenario } from "../../study";
 
@@ -171,11 +172,11 @@ export const command: CliCommand = {
     io.writeFile(out, html);
     written.push({ path: out, what: "HTML report" });
     if (values.csv) {
-      io.writeFile(values.csv, csv);
+      io.writeFile(values.csv, csvWithCaution(csv));
       written.push({ path: values.csv, what: "key results CSV" });
     }
     if (values["series-csv"]) {
-      io.writeFile(values["series-csv"], series);
+      io.writeFile(values["series-csv"], csvWithCaution(series));
       written.push({ path: values["series-csv"], what: "dilution series CSV" });
     }
     if (values.json) {

@@ -1,6 +1,7 @@
 /** `brinefield sweep`: vary one or two inputs over a range and tabulate the verdict at each point. */
 import { dirname, isAbsolute, join } from "node:path";
 import { csvFormat } from "d3-dsv";
+import { csvWithCaution } from "../../report/csv";
 import { CliError, type CliCommand, type CliIO } from "../command";
 import { readArgs } from "../args";
 import { formatIssues, loadJsonFile } from "../load";
@@ -129,7 +130,7 @@ async function run(argv: readonly string[], io: CliIO): Promise<number> {
       ...axes.map((a) => a.path),
       ...["governingCase", "edgeDilution", "requiredDilution", "margin", "pass", "equationOfState", "error"],
     ];
-    io.writeFile(values.csv, csvFormat(flat as Record<string, unknown>[] as never, cols as never));
+    io.writeFile(values.csv, csvWithCaution(csvFormat(flat as Record<string, unknown>[] as never, cols as never)));
   }
   const crossingText = crossings.map((c) => {
     const [a, b] = c.between;

@@ -10,6 +10,7 @@ import { join } from "node:path";
 import { command } from "../../../core/cli/commands/report";
 import { CliError } from "../../../core/cli/command";
 import { resultCsv, seriesCsv, reportNumber } from "../../../core/report";
+import { csvWithCaution } from "../../../core/report/csv";
 import type { BrinefieldResult } from "../../../core/result/contract";
 import { at, DEMO_DIR, memoryIO, ROOT, runJson, tableById, tracedNumbers } from "./helpers";
 
@@ -23,8 +24,10 @@ describe("brinefield report <scenario>", () => {
     const expected = await runJson(demo);
     const json = JSON.parse(io.files.get(join(ROOT, "r.json")) as string) as BrinefieldResult;
     expect(json, "--json file is run --json's result").toEqual(expected);
-    expect(io.files.get(join(ROOT, "r.csv")), "results CSV").toBe(resultCsv(expected));
-    expect(io.files.get(join(ROOT, "s.csv")), "series CSV").toBe(seriesCsv(expected));
+    // Written CSV files open with the caution on their first row, then the table.
+    expect(io.files.get(join(ROOT, "r.csv")), "results CSV").toBe(csvWithCaution(resultCsv(expected)));
+    expect(io.files.get(join(ROOT, "s.csv")), "series CSV").toBe(csvWithCaution(seriesCsv(expected)));
+    expect((io.files.get(join(ROOT, "r.csv")) as string).startsWith('"Caution:'), "caution first").toBe(true);
     const html = io.files.get(join(ROOT, "r.html")) as string;
     const cells = tracedNumbers(html);
     expect(cells.length, "numbers traced").toBeGreaterThan(40);
@@ -97,7 +100,7 @@ describe("brinefield report <study>", () => {
     const results = JSON.parse(io.files.get(join(ROOT, "study.json")) as string) as { variant: string; result: BrinefieldResult }[];
     expect(results[0]!.result, "the base is the base scenario's run --json").toEqual(await runJson(demo));
     expect(results[1]!.result.port.count, "12 ports applied").toBe(12);
-    const rows = csvParse(io.files.get(join(ROOT, "study.csv")) as string);
+    const rows = csvParse((io.files.get(join(ROOT, "study.csv")) as string).replace(/^.*\n/, "")); // past the caution row
     expect(new Set(rows.map((r) => r.variant)), "CSV rows per variant").toEqual(new Set(["base", "12 ports", "deeper site"]));
   });
 });
