@@ -8,6 +8,7 @@
  * (reference sheet §0 "Required dilution for an increment limit", derived). A discharge already at or below
  * the limit needs S_req = 1; a limit at or below background can never be met by dilution.
  */
+import { formatNumber, unitSymbol } from "../units";
 import type { ConstituentInput, LimitInput, Scenario } from "../scenario/types";
 import type { ComplianceResult, ConstituentAtEdge, ConstituentCompliance } from "../result/contract";
 import { warning, type ResultWarning } from "../warnings";
@@ -60,8 +61,9 @@ function limitFor(source: ConstituentSource, limit: LimitInput): { absolute: num
   const fromAbsolute = limit.maxConcentration ?? Infinity;
   const absolute = Math.min(fromIncrease, fromAbsolute);
   const parts: string[] = [];
-  if (limit.maxIncrease !== undefined) parts.push(`at most ${limit.maxIncrease} ${limit.unit} above background ${background}`);
-  if (limit.maxConcentration !== undefined) parts.push(`at most ${limit.maxConcentration} ${limit.unit}`);
+  const unit = unitSymbol(limit.unit);
+  if (limit.maxIncrease !== undefined) parts.push(`at most ${formatNumber(limit.maxIncrease)} ${unit} above background ${formatNumber(background)} ${unit}`);
+  if (limit.maxConcentration !== undefined) parts.push(`at most ${formatNumber(limit.maxConcentration)} ${unit}`);
   const basis = limit.basis ? ` (${limit.basis})` : "";
   return { absolute, background, text: `${source.name} ${parts.join(" and ")}${basis}` };
 }

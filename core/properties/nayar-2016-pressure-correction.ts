@@ -10,6 +10,7 @@
  *
  * Convention at this module's edge: sea pressure in dbar (0 at the surface), converted to absolute MPa.
  */
+import { formatNumber } from "../units";
 import { warning, type ResultWarning } from "../warnings";
 import { densitySharqawy2010, densitySharqawy2010ValidityIssues } from "./sharqawy-2010-density";
 
@@ -112,7 +113,7 @@ export function densitySharqawyNayarValidityIssues(
       warning(
         "nayar-2016-salinity-out-of-range",
         "warning",
-        `${what}: salinity ${salinity} g/kg is above the 120 g/kg range of the Nayar (2016) seawater ` +
+        `${what}: salinity ${formatNumber(salinity)} g/kg is above the 120 g/kg range of the Nayar (2016) seawater ` +
           "correlations; " +
           "the pressure correction is extrapolated.",
         {
@@ -134,7 +135,7 @@ export function densitySharqawyNayarValidityIssues(
       warning(
         "nayar-2016-pressure-extrapolated",
         "info",
-        `${what}: salinity ${salinity} g/kg is above the 56 g/kg of the compressibility data; ` +
+        `${what}: salinity ${formatNumber(salinity)} g/kg is above the 56 g/kg of the compressibility data; ` +
           "the density's stated accuracy is ±0.21 % instead of ±0.14 %.",
         {
           parameter: `${what}.salinity`,
@@ -151,7 +152,7 @@ export function densitySharqawyNayarValidityIssues(
       warning(
         "nayar-2016-temperature-above-boiling",
         "serious",
-        `${what}: temperature ${temperature} °C is above 100 °C, where the correlation refers to the ` +
+        `${what}: temperature ${formatNumber(temperature)} °C is above 100 °C, where the correlation refers to the ` +
           "saturation pressure, which is not modelled here.",
         {
           parameter: `${what}.temperature`,
@@ -169,7 +170,7 @@ export function densitySharqawyNayarValidityIssues(
       warning(
         "nayar-2016-pressure-out-of-range",
         "warning",
-        `${what}: sea pressure ${pressureDbar} dbar is outside 0–${Math.round(maxSeaPressure)} dbar ` +
+        `${what}: sea pressure ${formatNumber(pressureDbar)} dbar is outside 0–${Math.round(maxSeaPressure)} dbar ` +
           "(12 MPa absolute).",
         {
           parameter: `${what}.pressure`,

@@ -5,6 +5,7 @@
  * standard seawater), temperature t in °C (ITS-90), density in kg/m³. The equation itself uses the mass
  * fraction s = S/1000 kg/kg.
  */
+import { formatNumber } from "../units";
 import { warning, type ResultWarning } from "../warnings";
 
 export const SHARQAWY_2010_SOURCE =
@@ -74,7 +75,7 @@ export function densitySharqawy2010ValidityIssues(
       warning(
         "sharqawy-2010-salinity-out-of-range",
         "serious",
-        `${what}: salinity ${salinity} g/kg is outside the 0–160 g/kg range of the Sharqawy (2010) ` +
+        `${what}: salinity ${formatNumber(salinity)} g/kg is outside the 0–160 g/kg range of the Sharqawy (2010) ` +
           "density fit.",
         {
           parameter: `${what}.salinity`,
@@ -95,7 +96,7 @@ export function densitySharqawy2010ValidityIssues(
       warning(
         "sharqawy-2010-temperature-out-of-range",
         "serious",
-        `${what}: temperature ${temperature} °C is outside the 0–180 °C range of the Sharqawy (2010) ` +
+        `${what}: temperature ${formatNumber(temperature)} °C is outside the 0–180 °C range of the Sharqawy (2010) ` +
           "density fit.",
         {
           parameter: `${what}.temperature`,

@@ -4,6 +4,7 @@
  * Conventions for this module: SA is Absolute Salinity in g/kg, t is in-situ temperature in °C (ITS-90),
  * p is sea pressure in dbar (absolute pressure minus 10.1325 dbar), density in kg/m³.
  */
+import { formatNumber } from "../units";
 import { warning, type ResultWarning } from "../warnings";
 import {
   TEOS10_GIBBS_SALINE_PRESSURE_TERMS,
@@ -127,7 +128,7 @@ export function densityTeos10ValidityIssues(
         warning(
           `teos10-${name}-out-of-range`,
           "warning",
-          `${what}: ${name} ${value} ${unit} is outside the TEOS-10 range ` +
+          `${what}: ${name} ${formatNumber(value)} ${unit} is outside the TEOS-10 range ` +
             `${range[0]}–${range[1]} ${unit}; ` +
             "the density is an extrapolation.",
           { parameter: `${what}.${name}`, value, range, source, stage: "properties" },
