@@ -87,7 +87,8 @@ export function brooksWidthFromDistance(input: BrooksInput): number {
 
 /** {@link brooksWidthFromDistance} at distance x (m) in a field from {@link brooksFieldFromInput}. */
 export function brooksWidthInField(f: BrooksField, x: number): number {
-  if (!(x > 0) || !(f.b > 0) || !(f.u > 0)) return Math.max(f.b, 0);
+  // No transport, no width or no diffusion: the field keeps its initial width.
+  if (!(x > 0) || !(f.b > 0) || !(f.u > 0) || !(f.alpha > 0)) return Math.max(f.b, 0);
   return f.b * Math.pow(1 + (f.widthRate * x) / f.b, 1.5);
 }
 
