@@ -20,28 +20,12 @@ import {
   INTEGRAL_SOURCE,
   centrelineDilution,
 } from "./integralSetup";
-import type { AmbientColumn, JetSource, NearFieldEvent, NearFieldMethodResult } from "./types";
+import { nullNearFieldResult, type AmbientColumn, type JetSource, type NearFieldEvent, type NearFieldMethodResult } from "./types";
 
 /** Result for inputs the model cannot run with: nulls and one serious warning. */
 export function invalidIntegralResult(message: string, value: number | undefined, parameter: string): NearFieldMethodResult {
-  return {
-    method: "integral",
-    source: INTEGRAL_SOURCE,
-    maxRiseHeight: null,
-    maxRiseDistance: null,
-    returnDistance: null,
-    impactDistance: null,
-    impactDilution: null,
-    nearFieldDistance: null,
-    nearFieldDilution: null,
-    maxRiseDilution: null,
-    dilutionRange: null,
-    entrainedFlow: null,
-    bias: INTEGRAL_BIAS,
-    warnings: [warning("integral-invalid-input", "serious", message, { parameter, value, stage: "integral" })],
-    path: [],
-    events: [],
-  };
+  const w = warning("integral-invalid-input", "serious", message, { parameter, value, stage: "integral" });
+  return { ...nullNearFieldResult("integral", INTEGRAL_SOURCE, INTEGRAL_BIAS, [w]), path: [], events: [] };
 }
 
 function planDistance(y: Float64Array): number {

@@ -18,7 +18,7 @@
  * warning.
  */
 import { warning, type ResultWarning } from "../warnings";
-import type { AmbientColumn, JetSource, NearFieldMethodResult, NearFieldVariant } from "./types";
+import { nullNearFieldResult, type AmbientColumn, type JetSource, type NearFieldMethodResult, type NearFieldVariant } from "./types";
 import type { DenseJetCoefficients, DenseJetDataset } from "../correlations/dense-jet-dataset";
 import { clampAngle } from "../correlations/dense-jet-dataset";
 import { ROBERTS_1997_DATASET } from "../correlations/roberts-1997-inclined-dense-jet";
@@ -120,24 +120,7 @@ function isDenseJet(jet: JetSource): boolean {
 }
 
 function emptyResult(warnings: ResultWarning[], why: string): NearFieldMethodResult {
-  return {
-    method: "length-scale",
-    source: "none: " + why,
-    maxRiseHeight: null,
-    maxRiseDistance: null,
-    returnDistance: null,
-    impactDistance: null,
-    impactDilution: null,
-    nearFieldDistance: null,
-    nearFieldDilution: null,
-    maxRiseDilution: null,
-    dilutionRange: null,
-    entrainedFlow: null,
-    bias: "No length-scale estimate: " + why,
-    warnings,
-    variants: [],
-    notes: [why],
-  };
+  return { ...nullNearFieldResult("length-scale", "none: " + why, "No length-scale estimate: " + why, warnings), variants: [], notes: [why] };
 }
 
 /** Length-scale (Method 1) near-field estimate for one round dense jet. */

@@ -119,3 +119,28 @@ export interface PathSink {
   sample(s: number, x: number, y: number, z: number, halfWidth: number, dilution: number): void;
   end(): void;
 }
+
+/** A method's result with every number null (inputs it cannot run with), to be completed by the caller. */
+export function nullNearFieldResult(
+  method: NearFieldMethodName,
+  source: string,
+  bias: string,
+  warnings: readonly ResultWarning[],
+): NearFieldMethodResult {
+  return {
+    method,
+    source,
+    maxRiseHeight: null,
+    maxRiseDistance: null,
+    returnDistance: null,
+    impactDistance: null,
+    impactDilution: null,
+    nearFieldDistance: null,
+    nearFieldDilution: null,
+    maxRiseDilution: null,
+    dilutionRange: null,
+    entrainedFlow: null,
+    bias,
+    warnings,
+  };
+}
