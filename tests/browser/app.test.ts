@@ -3,8 +3,9 @@
  * dist/renderer with the app's Content-Security-Policy, driven as a user would. Screenshots of the main
  * screens go to test-artifacts/ for review.
  */
+import { launchChromium } from "../../renderer/headless/chromium";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { chromium, type Browser, type Page } from "playwright-core";
+import type { Browser, Page } from "playwright-core";
 import { spawnSync } from "node:child_process";
 import { existsSync, mkdirSync, readFileSync, readdirSync, statSync } from "node:fs";
 import { dirname, join, resolve } from "node:path";
@@ -98,19 +99,7 @@ beforeAll(async () => {
   ensureBuilt();
   mkdirSync(artifacts, { recursive: true });
   server = await serveDirectory(dist);
-  browser = await chromium.launch({
-    executablePath: "/usr/bin/chromium",
-    args: [
-      "--headless",
-      "--no-sandbox",
-      "--disable-gpu",
-      "--enable-unsafe-swiftshader",
-      "--disable-background-networking",
-      "--disable-component-update",
-      "--no-first-run",
-      "--disable-sync",
-    ],
-  });
+  browser = await launchChromium(); // Debian's /usr/bin/chromium, software WebGL (renderer/headless)
   const context = await browser.newContext({ viewport: { width: 1600, height: 950 }, acceptDownloads: true });
   page = await context.newPage();
   page.on("console", (m) => {
