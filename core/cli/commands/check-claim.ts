@@ -53,7 +53,7 @@ export const command: CliCommand = {
     const result = runScenario(scenario, { includePath: true });
     const check = checkClaim(result, claimed, at);
     if (values.json) {
-      io.stdout(JSON.stringify({ scenarioName: result.scenarioName, inputsHash: result.inputsHash, ...check, caution: result.caution }, null, 2) + "\n");
+      io.stdout(JSON.stringify({ format: "brinefield-claim-check", version: 1, scenarioName: result.scenarioName, inputsHash: result.inputsHash, ...check, caution: result.caution }, null, 2) + "\n");
       return 0;
     }
     const lines = [
