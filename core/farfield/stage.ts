@@ -96,7 +96,10 @@ export function beyondNearField(input: BeyondInput): BeyondOutput {
   const hydraulics = portFlowsAndHydraulics({ scenario, dischargeDensity: densities.discharge, ambientDensity: densities.ambient });
   warnings.push(...hydraulics.warnings);
   const radius = scenario.mixingZone.radius;
-  const u = Math.max(0, column.currentSpeed);
+  // Currents below 1 mm/s are below what current meters resolve and cannot carry a layer anywhere within a
+  // mixing zone (common practice, no source): treated as stagnant, so the advected closures never divide by
+  // a vanishing speed.
+  const u = column.currentSpeed < STAGNANT_CURRENT ? 0 : column.currentSpeed;
   const last = column.salinities.length - 1;
   const seabedSalinity = column.salinities[last];
   const seabedTemperature = column.temperatures[last];
@@ -326,6 +329,9 @@ export function beyondNearField(input: BeyondInput): BeyondOutput {
   ];
   return { multiport: mp.multiport, nearField: mp.nearField, mixingZone, compliance: assessment.compliance, warnings, methods };
 }
+
+/** Current speed below which the far field is treated as stagnant, m/s (see beyondNearField). */
+export const STAGNANT_CURRENT = 1e-3;
 
 /** Steps of the far-field integration (fourth-order Runge–Kutta; see farSeries above). */
 const FAR_STEPS = 200;
