@@ -4,6 +4,7 @@
  * published laboratory bands live in tests/check-values/entrainment-lee-cheung-1990.json.
  */
 import { describe, expect, it } from "vitest";
+import { uniformColumn } from "../../helpers/jets";
 import * as mathjs from "mathjs";
 import checkValues from "../../check-values/entrainment-lee-cheung-1990.json";
 import {
@@ -61,18 +62,6 @@ function jetFor(over: Partial<JetSource> & { froude?: number } = {}): JetSource 
   };
 }
 
-function uniformColumn(depth: number, over: Partial<AmbientColumn> = {}): AmbientColumn {
-  return {
-    depth,
-    depths: [0, depth],
-    densities: [1025, 1025],
-    salinities: [35, 35],
-    temperatures: [20, 20],
-    currentSpeed: 0,
-    currentDirection: 0,
-    ...over,
-  };
-}
 
 /** Collects every sample the model emits. */
 function collectingSink() {

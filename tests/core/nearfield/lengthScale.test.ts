@@ -4,41 +4,14 @@
  * each check.
  */
 import { describe, expect, it } from "vitest";
+import { denseJet, type JetOptions } from "../../helpers/jets";
 import fc from "fast-check";
 import { nearFieldLengthScale } from "../../../core/nearfield/lengthScale";
 import type { AmbientColumn, JetSource } from "../../../core/nearfield/types";
 
-const G = 9.80665;
 
-/** A jet with the given d, F and angle; U = 4 m/s unless given, ambient 1025 kg/m³. */
-interface JetOptions {
-  d?: number;
-  F?: number;
-  angle?: number;
-  U?: number;
-  portHeight?: number;
-  azimuth?: number;
-}
-
-function makeJet(p: JetOptions = {}): JetSource {
-  const d = p.d ?? 0.2;
-  const F = p.F ?? 25;
-  const U = p.U ?? 4;
-  const gPrime = (U * U) / (F * F * d);
-  return {
-    diameter: d,
-    flow: (U * Math.PI * d * d) / 4,
-    velocity: U,
-    density: 1025 * (1 + gPrime / G),
-    salinity: 68,
-    temperature: 20,
-    angle: p.angle ?? 60,
-    azimuth: p.azimuth ?? 90,
-    portHeight: p.portHeight ?? 0,
-    reducedGravity: gPrime,
-    froude: F,
-  };
-}
+/** A jet with the given d, F and angle; U = 4 m/s unless given, ambient 1025 kg/m³, port at the bed. */
+const makeJet = (p: JetOptions = {}): JetSource => denseJet({ azimuth: 90, portHeight: 0, ...p });
 
 interface ColumnOptions {
   depth?: number;

@@ -2,51 +2,12 @@
  * jetSourceWarnings(): port-level checks before any near-field method runs.
  */
 import { describe, expect, it } from "vitest";
+import { denseJet, uniformColumn, type JetOptions } from "../../helpers/jets";
 import { jetSourceWarnings } from "../../../core/nearfield/sourceChecks";
 import type { AmbientColumn, JetSource } from "../../../core/nearfield/types";
 
-const G = 9.80665;
-
-interface JetOptions {
-  d: number;
-  F: number;
-  U: number;
-  angle: number;
-  portHeight: number;
-  temperature: number;
-}
-
-function makeJet(p: Partial<JetOptions> = {}): JetSource {
-  const d = p.d ?? 0.2;
-  const F = p.F ?? 25;
-  const U = p.U ?? 4;
-  const gPrime = (U * U) / (F * F * d);
-  return {
-    diameter: d,
-    flow: (U * Math.PI * d * d) / 4,
-    velocity: U,
-    density: 1025 * (1 + gPrime / G),
-    salinity: 68,
-    temperature: p.temperature ?? 20,
-    angle: p.angle ?? 60,
-    azimuth: 0,
-    portHeight: p.portHeight ?? 1,
-    reducedGravity: gPrime,
-    froude: F,
-  };
-}
-
-function makeColumn(depth: number): AmbientColumn {
-  return {
-    depth,
-    depths: [0, depth],
-    densities: [1025, 1025],
-    salinities: [35, 35],
-    temperatures: [20, 20],
-    currentSpeed: 0,
-    currentDirection: 0,
-  };
-}
+const makeJet = (p: JetOptions = {}): JetSource => denseJet({ azimuth: 0, portHeight: 1, ...p });
+const makeColumn = (depth: number): AmbientColumn => uniformColumn(depth);
 
 const codes = (jet: JetSource, depth: number) => jetSourceWarnings(jet, makeColumn(depth)).map((w) => w.code);
 
