@@ -14,7 +14,7 @@ import { nearFieldLengthScale } from "./nearfield/lengthScale";
 import { nearFieldIntegral } from "./nearfield/integral";
 import { jetSourceWarnings } from "./nearfield/sourceChecks";
 import { beyondNearField } from "./farfield/stage";
-import { portFlowsAndHydraulics } from "./multiport";
+import { portFlowsAndHydraulics, type PortHydraulics } from "./multiport";
 import { viscosityFromST, SHARQAWY_2010_VISCOSITY_SOURCE } from "./correlations/sharqawy-2010-viscosity";
 import { CAUTION, RESULT_FORMAT, RESULT_VERSION, type BrinefieldResult, type PortResult } from "./result/contract";
 import type { ResultWarning } from "./warnings";
@@ -33,15 +33,18 @@ export interface RunOptions {
   readonly detail?: "full" | "edge";
 }
 
-/** Port flows, velocity, Froude and Reynolds numbers (core/multiport) with the brine's own viscosity. */
-export function portFromScenario(scenario: Scenario, props: PropertiesStage): PortResult {
+/**
+ * Port flows, velocity, Froude and Reynolds numbers for every port under the flow split (core/multiport),
+ * with the brine's own viscosity; its warnings cover each port's exit velocity.
+ */
+export function portFromScenario(scenario: Scenario, props: PropertiesStage): PortHydraulics {
   const nu = viscosityFromST(scenario.discharge.salinity, scenario.discharge.temperature) / props.dischargeDensity;
   return portFlowsAndHydraulics({
     scenario,
     dischargeDensity: props.dischargeDensity,
     ambientDensity: props.ambientDensityAtPort,
     kinematicViscosity: nu,
-  }).port;
+  });
 }
 
 /** Builds the jet of the mean port. */
@@ -91,7 +94,8 @@ export function runScenario(scenario: Scenario, options: RunOptions = {}): Brine
       ),
     ]);
   }
-  const port = portFromScenario(scenario, props);
+  const hydraulics = portFromScenario(scenario, props);
+  const port = hydraulics.port;
   const jet = jetFromScenario(scenario, props, port);
   const lengthScale = nearFieldLengthScale(jet, props.column);
   // The path is always computed: the edge may lie inside the jet, where its dilution is read off the path.
@@ -101,6 +105,7 @@ export function runScenario(scenario: Scenario, options: RunOptions = {}): Brine
   const sourceWarnings = jetSourceWarnings(jet, props.column);
   const warnings = dedupe([
     ...props.warnings,
+    ...hydraulics.warnings,
     ...sourceWarnings,
     ...beyond.nearField.flatMap((m) => m.warnings),
     ...beyond.warnings,

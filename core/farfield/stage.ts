@@ -19,7 +19,7 @@ import type {
   SeriesResult,
 } from "../result/contract";
 import { warning, type ResultWarning } from "../warnings";
-import { GRAVITY, multiportFromNearField, MERGING_SOURCE, portCountFromDiffuser, portFlowsAndHydraulics } from "../multiport";
+import { GRAVITY, multiportFromNearField, MERGING_SOURCE, portCountFromDiffuser } from "../multiport";
 import { complianceFromEdgeDilution } from "../compliance/required-dilution";
 import { jetWidthsFromNearField } from "../multiport/merging";
 import { dilutionFromProfile, jetProfileFromNearField, nearFieldEndFromResult, type JetProfile } from "./jet-series";
@@ -92,9 +92,6 @@ export function beyondNearField(input: BeyondInput): BeyondOutput {
   const warnings: ResultWarning[] = [];
   const mp = multiportFromNearField({ scenario, jet, nearField: input.nearField });
   warnings.push(...mp.warnings);
-  // Per-port velocities under the flow split: warnings only (the mean port is in `input.port`).
-  const hydraulics = portFlowsAndHydraulics({ scenario, dischargeDensity: densities.discharge, ambientDensity: densities.ambient });
-  warnings.push(...hydraulics.warnings);
   const radius = scenario.mixingZone.radius;
   // Currents below 1 mm/s are below what current meters resolve and cannot carry a layer anywhere within a
   // mixing zone (common practice, no source): treated as stagnant, so the advected closures never divide by
