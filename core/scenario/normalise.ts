@@ -45,6 +45,11 @@ export function issue(path: string, value: unknown, expectation: string): Scenar
   return { path, value, message: `${path || "(file)"}: ${shown} ${expectation}` };
 }
 
+/** Ports usually point across the diffuser axis (common practice, no source): default axis ⟂ port azimuth. */
+export function defaultDiffuserAzimuth(portAzimuth: number): number {
+  return (portAzimuth + 90) % 360;
+}
+
 /** Highest port exit velocity accepted as input, m/s (see the check in normaliseScenario). */
 export const MAX_EXIT_VELOCITY = 30;
 
@@ -312,8 +317,7 @@ export function normaliseScenario(f: ScenarioFileParsed): { scenario: Scenario |
     ctx.issues.push(issue("diffuser.portSpacing", undefined, "expected the spacing between ports (m) for a diffuser with more than one port"));
   const portSpacing = g.portSpacing ?? 0;
   const portAzimuth = g.portAzimuth ?? 0;
-  // Ports usually point across the diffuser axis (common practice, no source): default axis ⟂ port azimuth.
-  const diffuserAzimuth = g.diffuserAzimuth ?? (portAzimuth + 90) % 360;
+  const diffuserAzimuth = g.diffuserAzimuth ?? defaultDiffuserAzimuth(portAzimuth);
   const riserSpacing = g.risers?.spacing ?? 0;
   const naturalLength =
     layout === "rosette" ? Math.max(0, ((g.risers?.count ?? 1) - 1) * riserSpacing) : Math.max(0, (portCount - 1) * portSpacing);

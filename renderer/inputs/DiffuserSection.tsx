@@ -1,4 +1,5 @@
 /** Diffuser: layout (single port, line, rosette), port geometry, and a plan sketch. */
+import { defaultDiffuserAzimuth } from "../../core/scenario/normalise";
 import type { DiffuserInput } from "../../core/scenario/types";
 import { setLayout } from "../state/actions";
 import { getAtPath, isPlainObject } from "../state/scenarioState";
@@ -42,8 +43,7 @@ export function sketchDiffuser(file: unknown): DiffuserInput {
     portHeight: siNumber(raw["portHeight"], "length", 1),
     portSpacing: spacing,
     portAzimuth: siNumber(raw["portAzimuth"], "angle", 0),
-    // Core's default axis is square to the ports (core/scenario/normalise.ts).
-    diffuserAzimuth: siNumber(raw["diffuserAzimuth"], "angle", (siNumber(raw["portAzimuth"], "angle", 0) + 90) % 360),
+    diffuserAzimuth: siNumber(raw["diffuserAzimuth"], "angle", defaultDiffuserAzimuth(siNumber(raw["portAzimuth"], "angle", 0))),
     length: siNumber(raw["length"], "length", length),
     flowSplit: [],
     ...(risers ? { risers } : {}),
