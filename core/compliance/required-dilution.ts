@@ -2,10 +2,10 @@
  * Compliance with concentration limits at the mixing-zone edge.
  *
  * Trade convention for dilution: S = (C_d − C_b)/(C − C_b), so the excess anywhere is the discharge
- * excess divided by S (reference sheet §0 and §4c step 4, derived). The dilution needed to meet a limit
+ * excess divided by S (follows from the definition). The dilution needed to meet a limit
  * C_limit (an absolute concentration, or background + allowed increase) is
  *   S_req = (C_d − C_b)/(C_limit − C_b)
- * (reference sheet §0 "Required dilution for an increment limit", derived). A discharge already at or below
+ * (follows from the definition). A discharge already at or below
  * the limit needs S_req = 1; a limit at or below background can never be met by dilution.
  */
 import { formatNumber, unitSymbol } from "../units";

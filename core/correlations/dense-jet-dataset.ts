@@ -2,9 +2,9 @@
  * Shared shape of the published length-scale datasets for an inclined dense jet from a round port in
  * stagnant, unstratified water, and the angle interpolation they all use.
  *
- * Scaling (DERIVED, reference sheet §0): the jet-to-plume length l_M = M^{3/4}/B^{1/2} = (π/4)^{1/4}·d·F, so
+ * Scaling (derived from the definitions of the fluxes): the jet-to-plume length l_M = M^{3/4}/B^{1/2} = (π/4)^{1/4}·d·F, so
  * every length scales with d·F and every dilution with F once the source is far enough from the plume
- * limit (F ≳ 20–25, Lai & Lee 2012, confirmed). Each dataset file gives dimensionless coefficients:
+ * limit (F ≳ 20–25, Lai & Lee 2012, abstract). Each dataset file gives dimensionless coefficients:
  *
  *   length = coefficient × d × F        dilution = coefficient × F
  *
@@ -15,7 +15,7 @@
  */
 import type { ResultWarning } from "../warnings";
 
-/** One published value: the number and where it comes from (CONFIRMED with where, or FROM MEMORY). */
+/** One published value: the number and the published place it comes from (authors, year, part of the paper). */
 export interface TracedValue {
   readonly value: number;
   readonly provenance: string;

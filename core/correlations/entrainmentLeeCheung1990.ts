@@ -33,16 +33,16 @@
  *   omitted: they need db/ds and the axis curvature inside the right-hand side. They are secondary
  *   for the bent-over phase; this under-states forced entrainment slightly while the jet turns.
  *
- * Provenance of the numbers: 0.057, 0.554, 5 and √2 — FROM MEMORY (Lee & Cheung 1990 / Lee &
- * Chu 2003); a secondary code source quotes 0.544 instead of 0.554 (disagreement recorded in the
- * project's reference sheet §3c). Sensitivity: 0.544 vs 0.554 changes the plume asymptote α by
+ * Provenance of the numbers: 0.057, 0.554, 5 and √2 — from memory (Lee & Cheung 1990 / Lee &
+ * Chu 2003), quoted in secondary literature and not checked against the original paper; one
+ * secondary quotation gives 0.544 instead of 0.554. Sensitivity: 0.544 vs 0.554 changes the plume asymptote α by
  * < 1 %. The pure-jet and pure-plume limits of this closure are checked in the tests against
  * Fischer et al. (1979) constants.
  *
  * Validity (checked by `entrainmentLeeCheung1990ValidityIssues`): laboratory validation of
- * inclined dense jets spans densimetric Froude numbers ≈ 10–40 (Lai & Lee 2012, CONFIRMED) and
+ * inclined dense jets spans densimetric Froude numbers ≈ 10–40 (Lai & Lee 2012, abstract) and
  * angles 15°–75° (Papakonstantis et al. 2011; Lai & Lee 2012); for crossflow Froude number
- * F_c = (u_a/U)·F < 0.8 the Lagrangian model under-predicts the rise (Lai & Lee 2013, CONFIRMED).
+ * F_c = (u_a/U)·F < 0.8 the Lagrangian model under-predicts the rise (Lai & Lee 2013, abstract).
  *
  * References:
  * - Lee, J.H.W., Cheung, V., "Generalized Lagrangian model for buoyant jets in current",

@@ -4,8 +4,7 @@
  *
  * Source: Lai, C.C.K., Lee, J.H.W., "Mixing of inclined dense jets in stationary ambient",
  * J. Hydro-environment Research 6:9–28 (2012). Angles 15, 30, 38, 45, 52 and 60°; F = 10–40; planar LIF
- * and PIV. All numbers below are CONFIRMED from the abstract (reference sheet §1a–1c:
- * lai-etal-lab.github.io publication page and the journal copy scribd "22-lai2012"):
+ * and PIV. All numbers below are stated in the paper's abstract (J. Hydro-environment Research 6, p. 9):
  *
  *   Z_max/(F·D) = 0.44 at θ = 15°, 2.08 at θ = 60°, independent of source conditions for F ≥ 25
  *   S_t/F = 0.45 (dilution at terminal rise), asymptotic, little difference over θ = 38°–60°
@@ -21,7 +20,7 @@
  * 60° value lying beside the edge-based 2.2 of Roberts et al. 1997). S_i is taken as the centreline dilution
  * where the centreline returns to port level, as in Roberts et al. (1997) (FROM MEMORY).
  *
- * Known bias, CONFIRMED (same abstract): a Lagrangian integral jet model under-predicts Z_max by 10–15 % and
+ * Known bias, stated in the same abstract: a Lagrangian integral jet model under-predicts Z_max by 10–15 % and
  * the dilution at Z_max by about 30 %; detrainment from the lower edge is observed for θ > 15°.
  */
 import { warning, type ResultWarning } from "../warnings";
@@ -35,11 +34,11 @@ import {
 
 export const LAI_LEE_2012_SOURCE =
   "Lai & Lee (2012), J. Hydro-environment Res. 6:9–28: Z_max/(FD) = 0.44 (15°) to 2.08 (60°), F ≥ 25; " +
-  "S_t/F = 0.45 and S_i/F = 1.06 (F ≥ 20) for 38°–60° — CONFIRMED from the abstract";
+  "S_t/F = 0.45 and S_i/F = 1.06 (F ≥ 20) for 38°–60° (abstract)";
 
-const ABSTRACT = "CONFIRMED, Lai & Lee (2012) abstract (reference sheet §1b–1c)";
+const ABSTRACT = "Lai & Lee (2012), J. Hydro-environment Res. 6:9–28, abstract";
 
-/** Upper-edge terminal rise Z_max/(F·D) by discharge angle (only the two traced angles). */
+/** Upper-edge terminal rise Z_max/(F·D) by discharge angle (only the two angles stated in the abstract). */
 export const LAI_LEE_2012_RISE: readonly AngleTablePoint[] = [
   { angle: 15, value: { value: 0.44, provenance: ABSTRACT } },
   { angle: 60, value: { value: 2.08, provenance: ABSTRACT } },
@@ -52,11 +51,11 @@ export const LAI_LEE_2012_IMPACT_DILUTION = { value: 1.06, provenance: ABSTRACT 
 
 /** Angles studied, degrees. */
 export const LAI_LEE_2012_ANGLE_RANGE: readonly [number, number] = [15, 60];
-/** Densimetric Froude numbers studied (CONFIRMED). */
+/** Densimetric Froude numbers studied (Lai & Lee 2012, abstract). */
 export const LAI_LEE_2012_FROUDE_RANGE: readonly [number, number] = [10, 40];
-/** F above which the rise coefficient is source-independent (CONFIRMED). */
+/** F above which the rise coefficient is source-independent (Lai & Lee 2012, abstract). */
 export const LAI_LEE_2012_RISE_ASYMPTOTIC_FROUDE = 25;
-/** F above which the impact-dilution coefficient holds (CONFIRMED). */
+/** F above which the impact-dilution coefficient holds (Lai & Lee 2012, abstract). */
 export const LAI_LEE_2012_DILUTION_ASYMPTOTIC_FROUDE = 20;
 
 /**
@@ -71,7 +70,7 @@ export function laiLee2012CoefficientsAtAngle(angle: number): DenseJetCoefficien
   if (rise.interpolated) {
     notes.push(
       `Lai & Lee (2012) rise interpolated linearly between ${rise.bracket[0]}° and ${rise.bracket[1]}° ` +
-        `(the paper's values at 30°, 38°, 45° and 52° were not traced).`,
+        `(the paper's values at 30°, 38°, 45° and 52° are not held).`,
     );
   }
   const [dLo, dHi] = LAI_LEE_2012_DILUTION_ANGLES;

@@ -3,8 +3,8 @@
  * current still behaves like the stagnant-water jet the length-scale laws describe.
  *
  * Source: Lai, C.C.K., Lee, J.H.W., "Initial mixing of inclined dense jet in perpendicular crossflow",
- * Environmental Fluid Mechanics (2013), doi 10.1007/s10652-013-9290-7 — CONFIRMED from the abstract
- * (reference sheet §2, scribd "21-lai2013"). The jet is "inclined (60° to vertical)" in the abstract's words,
+ * Environmental Fluid Mechanics (2013), doi 10.1007/s10652-013-9290-7 — all statements below are from the
+ * paper's abstract. The jet is "inclined (60° to vertical)" in the abstract's words,
  * the current perpendicular to it; U_r = u_a/U, F = U/√(g′d):
  *
  *   F_c < 0.8   jet-dominated: shear entrainment, strong detrainment, rise under-predicted by a Lagrangian
@@ -14,10 +14,10 @@
  *
  * Consequence used by the length-scale method: for F_c ≥ 0.8 the stagnant-water geometry and dilution laws
  * no longer describe the jet. The 0.8 and 2 thresholds are the paper's; applying them to co- and
- * counter-flowing currents is an extension (Abessi & Roberts 2017 used current-speed parameters for both,
- * CONFIRMED, but their fitted values are not traced).
+ * counter-flowing currents is an extension (Abessi & Roberts 2017, J. Hydraulic Eng. 143(6), used
+ * current-speed parameters for both; their fitted values are not used here).
  *
- * Length-scale form (DERIVED, reference sheet §0): with the momentum length in a current l_m = M^{1/2}/u_a
+ * Length-scale form (derived from the definitions of the fluxes): with the momentum length in a current l_m = M^{1/2}/u_a
  * (Roberts & Toms 1987 style scaling) and l_M = M^{3/4}/B^{1/2}, a round port gives
  *   l_m / l_M = (π/4)^{1/4} · √(g′d)/u_a = (π/4)^{1/4} / F_c ≈ 0.941 / F_c,
  * so F_c ≥ 0.8 means the current bends the jet within about 1.2 l_M — before the stagnant jet's rise
@@ -27,11 +27,11 @@ import { warning, type ResultWarning } from "../warnings";
 
 export const LAI_LEE_2013_SOURCE =
   "Lai & Lee (2013), Environ. Fluid Mech., doi 10.1007/s10652-013-9290-7: F_c = U_r·F; < 0.8 " +
-  "jet-dominated, ≥ 0.8 bent over on ascent, ≥ 2 detrainment irrelevant — CONFIRMED from the abstract";
+  "jet-dominated, ≥ 0.8 bent over on ascent, ≥ 2 detrainment irrelevant (abstract)";
 
-/** Below this F_c the jet is jet-dominated (Lai & Lee 2013, CONFIRMED). */
+/** Below this F_c the jet is jet-dominated (Lai & Lee 2013, abstract). */
 export const CROSSFLOW_BENT_OVER_FROUDE = 0.8;
-/** From this F_c on, detrainment no longer matters (Lai & Lee 2013, CONFIRMED). */
+/** From this F_c on, detrainment no longer matters (Lai & Lee 2013, abstract). */
 export const CROSSFLOW_DOMINATED_FROUDE = 2;
 
 export type CrossflowRegime = "stagnant" | "jet-dominated" | "bent-over" | "crossflow-dominated";

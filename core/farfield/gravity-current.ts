@@ -9,7 +9,7 @@
  *   the layer Richardson number is the normal-flow equilibrium of the Ellison & Turner (1959) layer
  *   momentum balance, g′h·sinβ = (C_D + E)·V², i.e. Ri = (C_D + E(Ri))/tanβ (balance from memory); on a
  *   flat bed, or where that Ri exceeds 1, the thickness is taken at critical flow Ri = 1 (the thinnest
- *   subcritical layer). Above Ri = 0.8 the layer entrains nothing (Ellison & Turner 1959, confirmed).
+ *   subcritical layer). Above Ri = 0.8 the layer entrains nothing (Ellison & Turner 1959, p. 423).
  *   Bed drag C_D = 0.0025 (common practice, no source).
  * - "advected" (current u): the layer first spreads radially as above; once its own velocity falls to the
  *   current speed it moves with the current, V = u, h = Q/(u·w), Ri = g′h·cosβ/u², starting from the

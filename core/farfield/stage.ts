@@ -4,7 +4,7 @@
  *
  * Chain: near-field dilution S_n (the lower method by default, `options.nearFieldForEdge`), then either
  * the spreading layer (gravity-current.ts) or, with a current, Brooks (1960) passive diffusion; total
- * dilution is multiplicative S(x) = S_n × S_ff (reference sheet §4c, Fischer et al. 1979, from memory).
+ * dilution is multiplicative S(x) = S_n × S_ff (Fischer et al. 1979 ch. 9, from memory).
  * The lower far-field dilution governs by default (`options.farField`). If the edge lies inside the
  * near field, the jet's own dilution where it crosses the edge is used.
  */
@@ -322,7 +322,7 @@ export function beyondNearField(input: BeyondInput): BeyondOutput {
     { stage: "far-field", name: "spreading dense layer", source: SPREADING_LAYER_SOURCE },
     { stage: "far-field", name: "entrainment law E(Ri)", source: TURNER_1986_SOURCE },
     ...(u > 0 ? [{ stage: "far-field", name: "passive lateral diffusion", source: BROOKS_1960_SOURCE }] : []),
-    { stage: "compliance", name: "required dilution", source: "S_req = (C_d − C_b)/(C_limit − C_b), derived (reference sheet §0)" },
+    { stage: "compliance", name: "required dilution", source: "S_req = (C_d − C_b)/(C_limit − C_b), from the definition of dilution" },
   ];
   return { multiport: mp.multiport, nearField: mp.nearField, mixingZone, compliance: assessment.compliance, warnings, methods };
 }

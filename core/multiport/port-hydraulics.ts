@@ -3,11 +3,11 @@
  *
  * Flow split: each port i carries q_i = Q·f_i with the scenario's flow fractions f_i (equal by default).
  * Exit velocity U_i = q_i / (π d²/4) on the effective (vena-contracta) diameter d; densimetric Froude
- * number F_i = U_i/√(g′d) with g′ = g(ρ₀ − ρa)/ρa (reference sheet §0, derived).
+ * number F_i = U_i/√(g′d) with g′ = g(ρ₀ − ρa)/ρa (the usual definition).
  * Exit head loss, where a discharge coefficient C_d is given: h = (q/(C_d·A))²/(2g) on the nominal port
  * area A — standard orifice hydraulics (e.g. any hydraulics handbook; common practice, no source).
- * Usual exit velocity range about 2–6 m/s (common practice, no source; the reference sheet §7c quotes
- * 3–6 m/s from Jirka 2008 / Bleninger & Jirka 2008, from memory).
+ * Usual exit velocity range about 2–6 m/s (common practice, no source; Jirka 2008 and Bleninger & Jirka
+ * 2008, Desalination 221:585–597, give about 3–6 m/s, from memory).
  */
 import type { Scenario } from "../scenario/types";
 import type { PortResult } from "../result/contract";

@@ -6,8 +6,8 @@
  * Datasets, in order of preference (the first one that covers the angle is the primary):
  *  1. Roberts, Ferrier & Daviero (1997), 60° ± 2° — the one study whose rise, return distance, impact
  *     dilution and near-field end all come from the same experiments at the design-standard angle; its five
- *     coefficients are FROM MEMORY but quoted identically by independent sources.
- *  2. Lai & Lee (2012), 15°–60° — CONFIRMED rise at 15° and 60° (interpolated between), and dilutions at
+ *     coefficients are from memory, quoted identically in secondary literature, not checked against the paper.
+ *  2. Lai & Lee (2012), 15°–60° — rise at 15° and 60° from the abstract (interpolated between), and dilutions at
  *     maximum rise and at impact for 38°–60°; the lower of the two 60° impact dilutions.
  * Not implemented, because no coefficient could be traced: Papakonstantis et al. (2011a,b), Shao & Law
  * (2010), Kikkert et al. (2007) analytical solution, Cipollina et al. (2005), Papakonstantis &
@@ -47,7 +47,7 @@ const PRIMARY_REASON: Record<string, string> = {
     "primary because it is the only dataset at this angle that gives rise, return distance, impact " +
     "dilution and near-field end from the same experiments, at the design-standard 60° it was measured for",
   "lai-lee-2012":
-    "primary because it is the only traced dataset covering this angle (confirmed from the paper's abstract)",
+    "primary because it is the only dataset held that covers this angle (values from the paper's abstract)",
 };
 
 const STANDARD_GRAVITY = 9.80665; // m/s², to turn g′ back into a density excess
@@ -217,7 +217,7 @@ export function nearFieldLengthScale(jet: JetSource, column: AmbientColumn): Nea
   if (dilutionRange === null) {
     notes.push(
       "No dilution range: fewer than two datasets give an impact dilution here and no published scatter " +
-        "was traced.",
+        "is known.",
     );
   }
 
@@ -253,7 +253,7 @@ const BIAS =
   "Laboratory length-scale laws for one round jet in stagnant, unstratified, deep water, asymptotic in " +
   "F (F ≳ 20–25). Impact dilution is the centreline (minimum) value where the centreline is back at port " +
   "level, conservative for a raised port. Published 60° impact dilutions differ by 50 %: 1.6·F (Roberts " +
-  "et al. 1997, from memory) against 1.06·F (Lai & Lee 2012, confirmed) — treat the spread as real " +
+  "et al. 1997) against 1.06·F (Lai & Lee 2012) — treat the spread as real " +
   "uncertainty and use the low end for compliance. Lai & Lee (2012) found a Lagrangian integral model " +
   "under-predicts rise by 10–15 % and dilution at maximum rise by about 30 % against these measurements " +
   `(S_t/F = ${LAI_LEE_2012_MAX_RISE_DILUTION.value}).`;
@@ -320,7 +320,7 @@ function stratificationIssues(jet: JetSource, column: AmbientColumn): ResultWarn
   const strat = rhoPort - densityAtDepth(column, topDepth); // > 0 for stable water across the rise
   const excess = (jet.reducedGravity * rhoPort) / STANDARD_GRAVITY;
   // Ambient density change across the rise compared with the jet's excess at maximum rise, Δρ0/S_t with
-  // S_t = 0.45·F (Lai & Lee 2012, confirmed). The ratio is DERIVED; thresholds 0.1 and 1 are common
+  // S_t = 0.45·F (Lai & Lee 2012, abstract). The ratio is derived; thresholds 0.1 and 1 are common
   // practice, no source.
   const ratio = (strat * LAI_LEE_2012_MAX_RISE_DILUTION.value * jet.froude) / excess;
   const out: ResultWarning[] = [

@@ -11,7 +11,7 @@ import { SHARQAWY_2010_VISCOSITY_SOURCE, viscosityFromST } from "../correlations
 export const MIN_PORT_REYNOLDS = 1e4;
 export const REYNOLDS_SOURCE =
   "Abdel-Rahman, Al-Fahed & Chakroun (1996), Mech. Res. Commun. 23(3):313–324: near-field centreline decay " +
-  "constant 6.11 at Re = 19 400 but 1.35 at Re = 1 430 (confirmed, reference sheet §3a); keep Re ≳ 10⁴";
+  "constant 6.11 at Re = 19 400 but 1.35 at Re = 1 430; keep Re ≳ 10⁴";
 
 /** Typical exit velocity band, m/s (common practice, no source). */
 export const EXIT_VELOCITY_RANGE: readonly [number, number] = [2, 6];

@@ -21,8 +21,8 @@ export const NAYAR_2016_SOURCE =
 
 /**
  * c1…c9 and d1…d4 of F_P.
- * Provenance: CONFIRMED — identical in several independent public transcriptions of the authors' library
- * (SeawaterLab v3.1.2, SW_Density, which cites Nayar et al. 2016 for this term) found in the code corpus.
+ * Provenance: as distributed in the authors' seawater property library accompanying Nayar et al. (2016)
+ * (SeawaterLab v3.1.2, function SW_Density, which cites Nayar et al. 2016 for this term).
  * Equation number in the paper: from memory not reliable, not given.
  */
 export const NAYAR_2016_PRESSURE_COEFFICIENTS = {
@@ -37,13 +37,13 @@ export const ATMOSPHERIC_PRESSURE_MPA = 0.101325;
 /** Upper pressure limit of the correlation, MPa absolute (library header: P_sat < P < 12 MPa). */
 export const NAYAR_2016_MAX_PRESSURE_MPA = 12;
 /**
- * Stated validity and accuracy (library header, CONFIRMED): 0–56 g/kg ±0.14 %; 56–180 g/kg ±0.21 %
+ * Stated validity and accuracy (header of the authors' library): 0–56 g/kg ±0.14 %; 56–180 g/kg ±0.21 %
  * (extrapolation).
  */
 export const NAYAR_2016_FITTED_SALINITY_MAX = 56;
 /**
  * Range of the authors' property tables and library: 0–120 °C, 0–120 g/kg, 0–12 MPa
- * (web.mit.edu/seawater, CONFIRMED).
+ * (as stated by the authors for their property tables accompanying Nayar et al. 2016).
  */
 export const NAYAR_2016_SALINITY_RANGE: readonly [number, number] = [0, 120];
 export const NAYAR_2016_TEMPERATURE_RANGE: readonly [number, number] = [0, 120];

@@ -45,7 +45,7 @@ export function absoluteSalinityFromPracticalValidityIssues(sp: number): ResultW
         parameter: "salinity",
         value: sp,
         range: [2, 42],
-        source: "PSS-78 range (UNESCO 1981; from memory)",
+        source: "PSS-78 range (UNESCO 1981)", // range from memory
         stage: "properties",
       },
     ),

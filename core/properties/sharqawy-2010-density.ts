@@ -18,15 +18,15 @@ export const SHARQAWY_2010_SOURCE =
  * significant figures (a1 = 9.999e2, a2 = 2.034e-2, a3 = −6.162e-3, a4 = 2.261e-5, a5 = −4.657e-8,
  * b1 = 8.020e2, b2 = −2.001, b3 = 1.677e-2, b4 = −3.060e-5, b5 = −1.613e-5); the rounded values change
  * ρ by at most about 0.03 kg/m³ over 0–40 °C.
- * Provenance: CONFIRMED — several independent public transcriptions of the library (code corpus) agree digit
- * for digit; the rounded set is confirmed in independent transcriptions of the paper's Eq. (8).
+ * Provenance: the full-precision set as distributed in the authors' library; the rounded set is the one
+ * printed with the paper's Eq. (8).
  */
 export const SHARQAWY_2010_DENSITY_COEFFICIENTS = {
   a: [9.9992293295e2, 2.0341179217e-2, -6.1624591598e-3, 2.2614664708e-5, -4.6570659168e-8],
   b: [8.0200240891e2, -2.0005183488, 1.6771024982e-2, -3.0600536746e-5, -1.6132224742e-5],
 } as const;
 
-/** Stated validity of Eq. (8): 0–180 °C, 0–160 g/kg (paper, Table 2; CONFIRMED via the library header). */
+/** Stated validity of Eq. (8): 0–180 °C, 0–160 g/kg (paper, Table 2; also stated in the header of the authors' library). */
 export const SHARQAWY_2010_TEMPERATURE_RANGE: readonly [number, number] = [0, 180];
 export const SHARQAWY_2010_SALINITY_RANGE: readonly [number, number] = [0, 160];
 /** Stated accuracy of Eq. (8): ±0.1 % (paper). */

@@ -12,7 +12,7 @@ import type { Scenario } from "../scenario/types";
 import { escapeHtml, html, join, raw, reportNumber, type RawHtml } from "./format";
 import { inputsHtml, rawInputsHtml, valueAtPath } from "./inputs";
 import { dilutionChartSvg, sideViewSvg } from "./figures";
-import { referencesFromSources } from "./references";
+import { referencesFromSources, secondaryQuotationsFor, type Reference } from "./references";
 import { REPORT_CSS } from "./style";
 import { uncertaintyHtml } from "./uncertainty";
 
@@ -279,13 +279,30 @@ export function resultSources(result: BrinefieldResult): string[] {
   ];
 }
 
+/**
+ * Says once, in plain words, which coefficients of the cited works come from secondary quotations rather
+ * than the original papers, and whose volume and page details were not checked.
+ */
+function provenanceHtml(references: readonly Reference[]): RawHtml {
+  const quoted = secondaryQuotationsFor(references);
+  const unchecked = references.filter((r) => !r.detailsChecked);
+  return join([
+    quoted.length > 0
+      ? html`<p id="secondary-quotations"><strong>Coefficients not checked against the original papers.</strong> Brinefield takes the following from secondary quotations (textbooks, reviews and later papers that quote them) rather than from the original papers: ${quoted.map((q) => q.what).join("; ")}. They are quoted consistently, but confirm them in the originals before relying on a result that depends on them.</p>`
+      : html``,
+    unchecked.length > 0
+      ? html`<p class="note">Volume and page details not checked against a published listing: ${unchecked.map((r) => r.key).join("; ")}.</p>`
+      : html``,
+  ]);
+}
+
 function methodsAndReferences(result: BrinefieldResult): { methods: RawHtml; references: RawHtml } {
   const methods = html`<table id="methods-table"><thead><tr><th>Stage</th><th>Method</th><th>Source</th></tr></thead><tbody>${join(
     result.methods.map((m) => html`<tr><td>${m.stage}</td><td>${m.name}</td><td>${m.source}</td></tr>`),
   )}</tbody></table>`;
   const { references, uncited } = referencesFromSources(resultSources(result));
   const list = html`<ol class="refs">${join(
-    references.map((r) => html`<li data-key="${r.key}">${r.citation} <span class="prov">[citation ${r.provenance}]</span></li>`),
+    references.map((r) => html`<li data-key="${r.key}">${r.citation}</li>`),
   )}</ol>`;
   const other =
     uncited.length > 0
@@ -296,7 +313,7 @@ function methodsAndReferences(result: BrinefieldResult): { methods: RawHtml; ref
     references: join([
       list,
       other,
-      html`<p class="note">"Citation confirmed" means the bibliographic details were checked against a published listing while Brinefield was written; "from memory" details should be verified against the original before they are relied on.</p>`,
+      provenanceHtml(references),
     ]),
   };
 }

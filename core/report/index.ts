@@ -2,8 +2,8 @@ export { reportHtml, reportBody, documentHtml, appendixHtml, questionAsked, resu
 export type { ReportInput, ReportOptions, DocumentHead } from "./html";
 export { resultCsv, seriesCsv, studyResultCsv, studySeriesCsv, RESULT_CSV_COLUMNS, SERIES_CSV_COLUMNS } from "./csv";
 export { reportNumber, reportPercent, escapeHtml, REPORT_SIGNIFICANT } from "./format";
-export { REFERENCES, referencesFromSources, sourceCites } from "./references";
-export type { Reference, CollectedReferences } from "./references";
+export { REFERENCES, SECONDARY_QUOTATIONS, referencesFromSources, secondaryQuotationsFor, sourceCites } from "./references";
+export type { Reference, CollectedReferences, SecondaryQuotation } from "./references";
 export { sideViewSvg, dilutionChartSvg, sideViewPath, sideViewKeyPoints, linearTicks, logTicks } from "./figures";
 export { valueAtPath, asEntered } from "./inputs";
 export { studyReportHtml, studyComparisonHtml } from "./study";

@@ -49,7 +49,6 @@ figcaption { font-size: 8.5pt; color: var(--muted); margin-top: 1mm; }
 .bias { font-size: 8.6pt; }
 ol.refs { padding-left: 6mm; font-size: 8.6pt; }
 ol.refs li { margin-bottom: 1mm; break-inside: avoid; }
-.prov { color: var(--muted); font-style: italic; }
 pre.scenario { font-size: 7.4pt; white-space: pre-wrap; word-break: break-word; border: 0.6px solid var(--rule); padding: 2mm; background: #f8fafc; }
 .page-break { break-before: page; }
 #comparison-table { font-size: 7.8pt; table-layout: fixed; }

@@ -36,7 +36,7 @@ Constraints come from the scenario's "design" block and these flags (flags win).
 numbers or values with units, e.g. "design": { "maxExitVelocity": "5 m/s", "maxLength": "60 m" }.
   --min-velocity V       Least port exit velocity (default 3 m/s).          design.minExitVelocity
   --max-velocity V       Greatest port exit velocity (default 6 m/s).       design.maxExitVelocity
-                         (3–6 m/s is the typical range, Bleninger & Jirka 2008, from memory)
+                         (3–6 m/s is the typical range, Bleninger & Jirka 2008)
   --max-length L         Longest diffuser (default: the scenario's diffuser length, or 50 m for a
                          single port).                                      design.maxLength
   --max-ports N          Try 1 … N ports (default 12).                      design.maxPorts

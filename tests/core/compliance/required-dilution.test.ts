@@ -6,8 +6,8 @@ import {
 } from "../../../core/compliance/required-dilution";
 import { scenarioFixture } from "../farfield/fixtures";
 
-describe("requiredDilutionFromLimit() — S_req = (C_d − C_b)/(C_limit − C_b) (reference sheet §0)", () => {
-  it("gives 18.25 for 70 g/kg brine, 33.5 g/kg sea and a 2 ppt limit (reference sheet §9 #15)", () => {
+describe("requiredDilutionFromLimit() — S_req = (C_d − C_b)/(C_limit − C_b) (definition of dilution)", () => {
+  it("gives 18.25 for 70 g/kg brine, 33.5 g/kg sea and a 2 ppt limit ((70 − 33.5)/2 = 18.25, arithmetic)", () => {
     expect(requiredDilutionFromLimit(70, 33.5, 35.5), "California-style arithmetic").toBeCloseTo(18.25, 12);
   });
 
@@ -67,7 +67,7 @@ describe("complianceFromEdgeDilution() — verdict per constituent and governing
   it("uses a limit's own background when given", () => {
     const own = scenarioFixture({ mixingZone: { radius: 100, limits: [{ constituent: "salinity", maxIncrease: 2, unit: "g/kg", background: 35 }] } });
     const a = complianceFromEdgeDilution(own, 20, 33.5, 20);
-    expect(a.compliance.requiredDilution, "(70 − 35)/2 = 17.5, reference sheet §0").toBeCloseTo(17.5, 12);
+    expect(a.compliance.requiredDilution, "(70 − 35)/2 = 17.5, from the definition").toBeCloseTo(17.5, 12);
   });
 
   it("passes trivially, with an info warning, when there are no limits", () => {

@@ -74,7 +74,7 @@ describe("interpolateAngleTable()", () => {
 describe("laiLee2012CoefficientsAtAngle()", () => {
   it("interpolates the rise between the two traced angles (15° and 60°) and says so", () => {
     const c = laiLee2012CoefficientsAtAngle(37.5)!;
-    // Midway between 0.44 and 2.08 (Lai & Lee 2012 abstract, CONFIRMED) is 1.26.
+    // Midway between 0.44 and 2.08 (Lai & Lee 2012, abstract) is 1.26.
     expect(c.riseEdge, "linear midpoint of 0.44 and 2.08").toBeCloseTo(1.26, 12);
     expect(c.interpolated, "37.5° is not tabulated").toBe(true);
     expect(c.notes.join(" "), "the note names the bracketing angles").toMatch(/between 15° and 60°/);
@@ -93,7 +93,7 @@ describe("laiLee2012CoefficientsAtAngle()", () => {
     expect(laiLee2012CoefficientsAtAngle(30)!.returnDilution, "no S_i below 38°").toBeNull();
     expect(laiLee2012CoefficientsAtAngle(30)!.maxRiseDilution, "no S_t below 38°").toBeNull();
     const at52 = laiLee2012CoefficientsAtAngle(52)!;
-    expect(at52.returnDilution, "S_i/F = 1.06 at 52° (CONFIRMED band)").toBe(1.06);
+    expect(at52.returnDilution, "S_i/F = 1.06 at 52° (Lai & Lee 2012, abstract: 38°–60°)").toBe(1.06);
   });
 
   it("returns null outside the studied 15°–60° rather than extrapolating", () => {
@@ -114,7 +114,7 @@ describe("laiLee2012CoefficientsAtAngle()", () => {
 
   it("tabulates only traced angles", () => {
     expect(LAI_LEE_2012_RISE.map((p) => p.angle), "only 15° and 60° were traced").toEqual([15, 60]);
-    for (const p of LAI_LEE_2012_RISE) expect(p.value.provenance, "provenance mark").toMatch(/CONFIRMED/);
+    for (const p of LAI_LEE_2012_RISE) expect(p.value.provenance, "cites the paper").toMatch(/Lai & Lee \(2012\).*abstract/);
   });
 });
 

@@ -7,7 +7,7 @@ import {
 } from "../../../core/farfield/brooks-1960-diffusion";
 import { erf } from "../../../core/farfield/erf";
 
-describe("brooksDilutionFromDistance() — Brooks (1960) 4/3-law centreline dilution (reference sheet §4b)", () => {
+describe("brooksDilutionFromDistance() — Brooks (1960) 4/3-law centreline dilution (as reproduced in Fischer et al. 1979 ch. 9, from memory)", () => {
   it("reduces to 1 at small distance (closed form: erf(∞) = 1)", () => {
     expect(brooksDilutionFromDistance({ distance: 0, initialWidth: 20, currentSpeed: 0.1 }), "x = 0").toBe(1);
     expect(brooksDilutionFromDistance({ distance: 1e-3, initialWidth: 20, currentSpeed: 0.1 }), "x → 0").toBeCloseTo(1, 9);
@@ -48,7 +48,7 @@ describe("brooksDilutionFromDistance() — Brooks (1960) 4/3-law centreline dilu
     expect(brooksWidthFromDistance({ distance: 300, initialWidth: 12, currentSpeed: 0.1 }), "wider downstream").toBeGreaterThan(12);
   });
 
-  it("uses α_ε = 0.01 cm^(2/3)/s by default (reference sheet §4b, from memory)", () => {
+  it("uses α_ε = 0.01 cm^(2/3)/s by default (Fischer et al. 1979 ch. 9, from memory)", () => {
     expect(FOUR_THIRDS_LAW_COEFFICIENT, "4.64e-4 m^(2/3)/s").toBeCloseTo(4.6416e-4, 7);
   });
 });

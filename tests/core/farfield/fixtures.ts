@@ -2,8 +2,8 @@
  * Hand-built inputs for the far-field, multiport and compliance tests. Near-field results are documented
  * published values so these tests do not depend on the near-field implementations:
  * - "length-scale": Roberts, Ferrier & Daviero (1997) 60° stagnant coefficients y_t = 2.2 dF,
- *   x_i = 2.4 dF, S_i = 1.6 F, x_n = 9.0 dF, S_n = 2.6 F (FROM MEMORY, reference sheet §1b).
- * - "integral": impact dilution S_i = 1.06 F (Lai & Lee 2012, CONFIRMED) at the same impact point, with
+ *   x_i = 2.4 dF, S_i = 1.6 F, x_n = 9.0 dF, S_n = 2.6 F (from memory; quoted in secondary literature, not checked against the paper).
+ * - "integral": impact dilution S_i = 1.06 F (Lai & Lee 2012, abstract) at the same impact point, with
  *   no separate near-field end (an integral model stops at impact).
  */
 import type { Scenario } from "../../../core/scenario/types";

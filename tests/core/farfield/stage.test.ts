@@ -50,7 +50,7 @@ describe("beyondNearField() — from the near field to the mixing-zone edge", ()
     expect(out.mixingZone.method, "the chain names Brooks").toContain("Brooks (1960)");
   });
 
-  it("multiplies near-field and far-field dilutions: S(x) = S_n × S_ff (reference sheet §4c)", () => {
+  it("multiplies near-field and far-field dilutions: S(x) = S_n × S_ff (Fischer et al. 1979 ch. 9, from memory)", () => {
     const out = beyondNearField(
       beyondInputFixture(scenarioFixture({ ambient: { currentSpeed: 0.2 }, options: { farField: "passive-diffusion", nearFieldForEdge: "length-scale" } })),
     );
@@ -71,7 +71,7 @@ describe("beyondNearField() — from the near field to the mixing-zone edge", ()
     expect(out.mixingZone.layerThickness, "layer thickness at the edge").toBeGreaterThan(0);
   });
 
-  it("checks salinity against 2 ppt over 33.5 g/kg: required dilution 18.25 (reference sheet §9 #15)", () => {
+  it("checks salinity against 2 ppt over 33.5 g/kg: required dilution 18.25 ((70 − 33.5)/2, arithmetic)", () => {
     const out = beyondNearField(beyondInputFixture(scenarioFixture()));
     expect(out.compliance.requiredDilution, "(70 − 33.5)/2").toBeCloseTo(18.25, 12);
     expect(out.compliance.pass, "1.06 F = 21.2 ≥ 18.25").toBe(true);

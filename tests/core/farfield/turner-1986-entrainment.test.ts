@@ -6,7 +6,7 @@ import {
 } from "../../../core/farfield/turner-1986-entrainment";
 
 describe("entrainmentFromRichardson() — Turner (1986) E(Ri) with the Ellison & Turner (1959) cut-off", () => {
-  it("starts at 0.08 for a neutral layer and falls to zero at Ri = 0.8 (reference sheet §9 #11)", () => {
+  it("starts at 0.08 for a neutral layer and falls to zero at Ri = 0.8 (Turner 1986, from memory; cut-off from Ellison & Turner 1959)", () => {
     expect(entrainmentFromRichardson(0), "E(0) = 0.08, Turner 1986 (from memory)").toBeCloseTo(0.08, 12);
     expect(entrainmentFromRichardson(0.8), "E(0.8) = 0, Ellison & Turner 1959 (confirmed)").toBe(0);
     expect(ENTRAINMENT_CUTOFF_RICHARDSON, "cut-off Ri = 0.8, Ellison & Turner 1959 (confirmed)").toBe(0.8);

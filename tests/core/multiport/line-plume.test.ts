@@ -13,7 +13,7 @@ describe("linePlumeDilutionFromFlux() — S_m = 0.27 b^{1/3} z/q (Fischer et al.
     expect(linePlumeDilutionFromFlux(0.4, 0.3, 10) / s0, "8 × q → S / 4").toBeCloseTo(0.25, 12);
   });
 
-  it("uses the minimum-dilution coefficient 0.27 (reference sheet §5, low confidence on 0.27 vs 0.38)", () => {
+  it("uses the minimum-dilution coefficient 0.27 (Fischer et al. 1979, from memory, low confidence on 0.27 vs 0.38)", () => {
     expect(LINE_PLUME_MIN_COEFFICIENT, "minimum, not average").toBe(0.27);
   });
 

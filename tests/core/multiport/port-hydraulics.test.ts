@@ -15,7 +15,7 @@ describe("portFlowsAndHydraulics() — flow split, exit velocity, Froude number,
     expect(h.port.count, "four ports").toBe(4);
     for (const p of h.ports) expect(p.velocity, `port ${p.index}`).toBeCloseTo(0.2 / area, 12);
     const gp = (GRAVITY * (1052 - 1023.5)) / 1023.5;
-    expect(h.port.froude, "F = U/√(g′d), reference sheet §0").toBeCloseTo(0.2 / area / Math.sqrt(gp * 0.2), 12);
+    expect(h.port.froude, "F = U/√(g′d), the usual definition").toBeCloseTo(0.2 / area / Math.sqrt(gp * 0.2), 12);
   });
 
   it("gives each port its share when the split is unequal, and warns outside the usual 2–6 m/s", () => {

@@ -36,7 +36,7 @@ describe("densitySharqawy2010()", () => {
   it("cross-check beyond 42 g/kg: within ±0.21 % of the TEOS-10 Gibbs function's high-salinity extension to 120 g/kg", () => {
     // Not an oracle: both are fits. ±0.21 % is the accuracy stated for the brine range (56–180 g/kg) in the
     // authors' library header (CONFIRMED); Feistel (2008) extends the saline Gibbs function to 120 g/kg at
-    // atmospheric pressure (title CONFIRMED, reference sheet 6a). Values: python3-gsw rho_t_exact.
+    // atmospheric pressure (Deep-Sea Research I 55:1639–1671). Values: python3-gsw rho_t_exact.
     for (const [sa, t, , rho] of grid.brine.rows as number[][]) {
       const rel = Math.abs(densitySharqawy2010(sa, t) / rho - 1);
       expect(rel, `S ${sa} g/kg, t ${t} °C`).toBeLessThan(0.0021);

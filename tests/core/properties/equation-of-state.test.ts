@@ -1,6 +1,6 @@
 /**
- * equationOfStateFor(): TEOS-10 when every salinity is within 0–42 g/kg (the GSW range, CONFIRMED in the
- * reference sheet 6a), otherwise Sharqawy (2010) + Nayar (2016) for both fluids.
+ * equationOfStateFor(): TEOS-10 when every salinity is within 0–42 g/kg (the range stated for most functions
+ * in the documentation of the TEOS-10 GSW library), otherwise Sharqawy (2010) + Nayar (2016) for both fluids.
  */
 import { describe, expect, it } from "vitest";
 import { densitySharqawyNayar, densityTeos10, equationOfStateFor } from "../../../core/properties";

@@ -22,12 +22,12 @@ describe("the citation table", () => {
     }
   });
 
-  it("carries the reference sheet's bibliographic details for the core dense-jet papers", () => {
-    // Reference sheet §1a (published-methods.md): Roberts, Ferrier & Daviero 1997, J. Hydraul. Eng. 123:693–699 (confirmed).
+  it("carries the published bibliographic details of the core dense-jet papers", () => {
+    // Roberts, Ferrier & Daviero (1997), J. Hydraulic Eng. 123(8):693–699.
     expect(byKey("Roberts, Ferrier & Daviero 1997").citation, "Roberts 1997 pages").toContain("123(8), 693–699");
-    // Reference sheet §1a: Lai & Lee 2012, J. Hydro-environment Research 6:9–28 (confirmed).
+    // Lai & Lee (2012), J. Hydro-environment Research 6:9–28.
     expect(byKey("Lai & Lee 2012").citation, "Lai & Lee 2012 pages").toContain("6, 9–28");
-    // Reference sheet §3b: Jirka 2004, Environmental Fluid Mechanics 4:1–56 (confirmed).
+    // Jirka (2004), Environmental Fluid Mechanics 4:1–56.
     expect(byKey("Jirka 2004").citation, "Jirka 2004 pages").toContain("Environmental Fluid Mechanics 4, 1–56");
   });
 });

@@ -6,7 +6,7 @@
 import { describe, expect, it, beforeAll } from "vitest";
 import { readFileSync } from "node:fs";
 import { basename } from "node:path";
-import { reportHtml, REPORT_SECTIONS, reportNumber, escapeHtml, referencesFromSources, resultSources } from "../../../core/report";
+import { reportHtml, REPORT_SECTIONS, reportNumber, escapeHtml, referencesFromSources, resultSources, secondaryQuotationsFor } from "../../../core/report";
 import { CAUTION, type BrinefieldResult } from "../../../core/result/contract";
 import { parseScenario } from "../../../core/scenario/parse";
 import { runScenario } from "../../../core/pipeline";
@@ -146,6 +146,26 @@ describe("reportHtml() on the demo scenarios", () => {
       const { references } = referencesFromSources(resultSources(r.json));
       expect(references.length, `${r.name}: the methods cite tabled works`).toBeGreaterThan(3);
       for (const ref of references) expect(r.html, `${r.name}: citation ${ref.key}`).toContain(escapeHtml(ref.citation));
+    }
+  });
+
+  it("says once, in plain words, which cited coefficients come from secondary quotations", () => {
+    for (const r of rendered) {
+      const { references } = referencesFromSources(resultSources(r.json));
+      const quoted = secondaryQuotationsFor(references);
+      expect(quoted.length, `${r.name}: a demo cites Roberts et al. (1997) or Turner (1986)`).toBeGreaterThan(0);
+      expect(r.html.split('id="secondary-quotations"').length - 1, `${r.name}: one statement`).toBe(1);
+      const statement = r.html.slice(r.html.indexOf('id="secondary-quotations"'));
+      for (const q of quoted) expect(statement, `${r.name}: names ${q.reference}`).toContain(escapeHtml(q.what));
+    }
+  });
+
+  it("carries no provenance tags in result strings or report text", () => {
+    const tag = /from memory|secondary source|\bSECONDARY\b|\bCONFIRMED\b|FROM MEMORY|reference\s+sheet|low confidence/i;
+    for (const r of rendered) {
+      const withoutStatement = r.html.replace(/<p id="secondary-quotations">[\s\S]*?<\/p>/, "");
+      expect(withoutStatement, `${r.name}: report text`).not.toMatch(tag);
+      expect(JSON.stringify(r.json), `${r.name}: run --json`).not.toMatch(tag);
     }
   });
 
