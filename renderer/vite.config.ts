@@ -1,13 +1,13 @@
 /**
- * Build of the renderer: root renderer/, output dist/renderer with relative paths (loaded from file://
+ * Build of the renderer: root renderer/, output dist/renderer with relative paths (loaded from brinefield://app/
  * in Electron and from the web server), ES-module workers, and the shared Content-Security-Policy
- * injected as a <meta http-equiv> tag into the built index.html.
+ * injected as a <meta http-equiv> tag, first in the head of the built index.html.
  */
 import { defineConfig, type Plugin } from "vite";
 import react from "@vitejs/plugin-react";
 import { fileURLToPath } from "node:url";
 import { dirname, resolve } from "node:path";
-import { CONTENT_SECURITY_POLICY } from "../electron/csp";
+import { withCspMetaFirst } from "../electron/csp";
 
 const here = dirname(fileURLToPath(import.meta.url));
 
@@ -16,11 +16,8 @@ function contentSecurityPolicy(): Plugin {
     name: "brinefield-csp-meta",
     // Only the built page: the dev server injects inline scripts the policy forbids.
     apply: "build",
-    transformIndexHtml() {
-      return [
-        { tag: "meta", attrs: { "http-equiv": "Content-Security-Policy", content: CONTENT_SECURITY_POLICY }, injectTo: "head" },
-      ];
-    },
+    // "post": after Vite has put the module script and preloads into the head, so the policy goes first.
+    transformIndexHtml: { order: "post", handler: (html) => withCspMetaFirst(html) },
   };
 }
 

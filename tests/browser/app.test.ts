@@ -120,6 +120,9 @@ describe("the built app", () => {
     const html = readFileSync(join(dist, "index.html"), "utf8");
     expect(html, "index.html has the CSP meta tag").toMatch(/<meta http-equiv="Content-Security-Policy" content="default-src &#39;self&#39;|<meta http-equiv="Content-Security-Policy" content="default-src 'self'/);
     expect(html, "no inline scripts").not.toMatch(/<script(?![^>]*\bsrc=)[^>]*>/);
+    const head = /<head[^>]*>\s*(<[^>]*>)/i.exec(html)?.[1] ?? "";
+    expect(head, "the policy is the first tag of the head, before any script").toMatch(/^<meta http-equiv="Content-Security-Policy"/);
+    expect(html.indexOf("Content-Security-Policy"), "policy before the first script").toBeLessThan(html.indexOf("<script"));
     expect(consoleProblems, "no console errors or CSP violations while loading").toEqual([]);
   });
 
