@@ -36,8 +36,9 @@ module.exports = {
     enableNodeCliInspectArguments: false,
     enableEmbeddedAsarIntegrityValidation: true,
     onlyLoadAppFromAsar: true,
-    // The renderer is loaded from file://, which needs the file-protocol privileges kept.
-    grantFileProtocolExtraPrivileges: true,
+    // The renderer is served from the app's own brinefield:// scheme (electron/appProtocol.ts), so
+    // file:// pages get no extra privileges.
+    grantFileProtocolExtraPrivileges: false,
   },
   linux: {
     target: ["AppImage", "deb"],

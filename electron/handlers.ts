@@ -19,6 +19,7 @@ import {
   writeFileAtomic,
 } from "./fileStore";
 import { parseHostRequest } from "./requestSchema";
+import { isAppUrl } from "./appProtocol";
 
 /** Who sent an IPC message, reduced to plain values by main.ts. */
 export interface IpcSender {
@@ -33,28 +34,22 @@ export interface IpcSender {
 export interface TrustedRenderer {
   /** The main window's `webContents.id`, or null before the window exists. */
   readonly webContentsId: number | null;
-  /** file:// URL of dist/renderer/index.html. */
+  /** URL of the page the window shows, `brinefield://app/index.html` (APP_INDEX_URL). */
   readonly indexUrl: string;
 }
 
-/** Accept only the main window's top frame showing our own index.html over file://. */
+/** Accept only the main window's top frame showing our own index.html on the app's scheme. */
 export function isTrustedSender(sender: IpcSender, trusted: TrustedRenderer): boolean {
   if (trusted.webContentsId === null || sender.webContentsId !== trusted.webContentsId) return false;
   if (!sender.isMainFrame) return false;
-  let actual: URL;
-  let expected: URL;
-  try {
-    actual = new URL(sender.frameUrl);
-    expected = new URL(trusted.indexUrl);
-  } catch {
-    return false;
-  }
-  // Query and hash are the renderer's own state; scheme, host and path must match exactly.
+  if (!isAppUrl(sender.frameUrl) || !isAppUrl(trusted.indexUrl)) return false;
+  const actual = new URL(sender.frameUrl);
+  const expected = new URL(trusted.indexUrl);
+  // Query and hash are the renderer's own state; scheme, host, port and path must match exactly.
   try {
     return (
-      actual.protocol === "file:" &&
-      expected.protocol === "file:" &&
-      actual.host === expected.host &&
+      actual.port === "" &&
+      expected.port === "" &&
       decodeURIComponent(actual.pathname) === decodeURIComponent(expected.pathname)
     );
   } catch {

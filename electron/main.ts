@@ -1,7 +1,9 @@
 /**
  * Electron main process (bundled to dist/electron/main.cjs). Thin wiring only: the logic lives in
  * handlers.ts, fileStore.ts, closeGuard.ts, menu.ts and security.ts, which are unit-tested without
- * Electron. One window, loading dist/renderer/index.html over file://, sandboxed and isolated.
+ * Electron. One window, sandboxed and isolated, loading brinefield://app/index.html: the app's own
+ * privileged scheme serves the packaged dist/renderer folder (appProtocol.ts), so nothing is loaded over
+ * file:// and the file-protocol fuse is off.
  */
 import {
   BrowserWindow,
@@ -9,26 +11,25 @@ import {
   app,
   dialog,
   ipcMain,
+  protocol,
   session,
   shell,
   type IpcMainInvokeEvent,
   type WebContents,
 } from "electron";
 import { join } from "node:path";
-import { pathToFileURL } from "node:url";
+import { APP_INDEX_URL, APP_SCHEME, appSchemeRegistration, createAppProtocolHandler } from "./appProtocol";
 import { createCloseGuard, type CloseChoice } from "./closeGuard";
 import { IPC_INVOKE, IPC_MENU, type MenuCommand } from "./contract";
 import { createAutosaveStore, createRecentFilesStore } from "./fileStore";
 import { createHostHandlers, type IpcSender } from "./handlers";
 import { buildMenuTemplate } from "./menu";
-import { isAllowedRequestUrl, secureWebPreferences, withSecurityHeaders } from "./security";
+import { isAllowedExternalUrl, isAllowedRequestUrl, secureWebPreferences, withSecurityHeaders } from "./security";
 
 const APP_NAME = "Brinefield";
 app.setName(APP_NAME);
 
 const rendererDir = join(__dirname, "..", "renderer");
-const indexPath = join(rendererDir, "index.html");
-const indexUrl = pathToFileURL(indexPath).href;
 const preloadPath = join(__dirname, "preload.cjs");
 const isDev = !app.isPackaged;
 const isMac = process.platform === "darwin";
@@ -36,6 +37,8 @@ const isMac = process.platform === "darwin";
 let mainWindow: BrowserWindow | null = null;
 
 app.enableSandbox();
+// Must happen before "ready": the scheme is standard and secure, never allowed to bypass the CSP.
+protocol.registerSchemesAsPrivileged(appSchemeRegistration());
 
 if (!app.requestSingleInstanceLock()) {
   app.quit();
@@ -107,7 +110,7 @@ function refreshMenu(recentPaths: readonly string[]): void {
 }
 
 const handlers = createHostHandlers({
-  trustedRenderer: () => ({ webContentsId: mainWindow?.webContents.id ?? null, indexUrl }),
+  trustedRenderer: () => ({ webContentsId: mainWindow?.webContents.id ?? null, indexUrl: APP_INDEX_URL }),
   async showOpenDialog(options) {
     if (!mainWindow) return null;
     const result = await dialog.showOpenDialog(mainWindow, {
@@ -158,14 +161,21 @@ function senderOf(event: IpcMainInvokeEvent): IpcSender {
   };
 }
 
+/** Web addresses on the allow-list open in the user's browser, never inside the app; others nowhere. */
+function openExternalIfAllowed(url: string): void {
+  if (isAllowedExternalUrl(url)) void shell.openExternal(url);
+}
+
 function hardenContents(contents: WebContents): void {
   // No navigation away from the renderer, no new windows, no <webview>.
-  contents.on("will-navigate", (event) => event.preventDefault());
+  contents.on("will-navigate", (event, url) => {
+    event.preventDefault();
+    openExternalIfAllowed(url);
+  });
   contents.on("will-redirect", (event) => event.preventDefault());
   contents.on("will-attach-webview", (event) => event.preventDefault());
   contents.setWindowOpenHandler(({ url }) => {
-    // Links to the web open in the user's browser, never inside the app.
-    if (/^https:\/\//i.test(url)) void shell.openExternal(url);
+    openExternalIfAllowed(url);
     return { action: "deny" };
   });
 }
@@ -176,7 +186,7 @@ function hardenSession(): void {
   ses.setPermissionCheckHandler(() => false);
   ses.setDevicePermissionHandler(() => false);
   ses.webRequest.onBeforeRequest((details, callback) => {
-    callback({ cancel: !isAllowedRequestUrl(details.url, rendererDir) });
+    callback({ cancel: !isAllowedRequestUrl(details.url) });
   });
   ses.webRequest.onHeadersReceived((details, callback) => {
     callback({ responseHeaders: withSecurityHeaders(details.responseHeaders) });
@@ -204,7 +214,7 @@ function createWindow(): void {
   win.on("closed", () => {
     if (mainWindow === win) mainWindow = null;
   });
-  void win.loadFile(indexPath);
+  void win.loadURL(APP_INDEX_URL);
 }
 
 app.on("web-contents-created", (_event, contents) => hardenContents(contents));
@@ -220,6 +230,7 @@ app.on("activate", () => {
 });
 
 void app.whenReady().then(async () => {
+  protocol.handle(APP_SCHEME, createAppProtocolHandler(rendererDir));
   hardenSession();
   refreshMenu(await recent.list().catch(() => []));
   createWindow();

@@ -1,22 +1,18 @@
 /**
  * Pure policy functions for the Electron window (wired up in main.ts, tested in
- * tests/electron/security.test.ts): which URLs the renderer may load, and the webPreferences every
- * window gets.
+ * tests/electron/security.test.ts): which URLs the renderer may load, which web addresses may open in
+ * the system browser, and the webPreferences every window gets.
  */
-import { pathToFileURL } from "node:url";
-import { sep } from "node:path";
+import { isAppUrl } from "./appProtocol";
 import { CONTENT_SECURITY_POLICY } from "./csp";
 
 /**
- * May the renderer fetch this URL? Only files inside the built renderer folder, plus data:/blob: URLs
- * the page made itself and the built-in devtools pages. Everything remote (http, https, ws, ftp, ...)
- * is cancelled: Brinefield shows no remote content.
+ * May the renderer fetch this URL? Only our own scheme (`brinefield://app/…`, whose handler serves
+ * files of the packaged renderer folder only), plus data:/blob: URLs the page made itself and the
+ * built-in devtools pages. Everything else — file://, http, https, ws, ftp, ... — is cancelled:
+ * Brinefield shows no remote content and reads no file through the page.
  */
-export function isAllowedRequestUrl(
-  url: string,
-  rendererDir: string,
-  platform: NodeJS.Platform = process.platform,
-): boolean {
+export function isAllowedRequestUrl(url: string): boolean {
   let parsed: URL;
   try {
     parsed = new URL(url);
@@ -28,16 +24,42 @@ export function isAllowedRequestUrl(
     case "blob:":
     case "devtools:":
       return true;
-    case "file:": {
-      const root = pathToFileURL(rendererDir.endsWith(sep) ? rendererDir : rendererDir + sep).href;
-      // The URL parser has already resolved "..", "%2e%2e" and friends, so a prefix test on the
-      // normalised href cannot be escaped. Windows paths compare case-insensitively.
-      const fold = (s: string) => (platform === "win32" ? s.toLowerCase() : s);
-      return parsed.host === "" && fold(parsed.href).startsWith(fold(root));
-    }
     default:
-      return false;
+      return isAppUrl(url);
   }
+}
+
+/**
+ * Web addresses the app may hand to the system browser (a `window.open` or a link the page tries to
+ * follow). Empty: Brinefield links to no web page, so every external address is refused. An entry is an
+ * https URL prefix, e.g. "https://docs.example.org/brinefield/".
+ */
+export const EXTERNAL_LINK_ALLOW_LIST: readonly string[] = [];
+
+/**
+ * True only for an https URL under one entry of `allowList`: same host and port, no user or password,
+ * and a path equal to the entry's or inside it (an entry ending in "/" is a folder). Anything that does
+ * not parse is refused.
+ */
+export function isAllowedExternalUrl(url: string, allowList: readonly string[] = EXTERNAL_LINK_ALLOW_LIST): boolean {
+  let target: URL;
+  try {
+    target = new URL(url);
+  } catch {
+    return false;
+  }
+  if (target.protocol !== "https:" || target.username !== "" || target.password !== "") return false;
+  return allowList.some((entry) => {
+    let allowed: URL;
+    try {
+      allowed = new URL(entry);
+    } catch {
+      return false;
+    }
+    if (allowed.protocol !== "https:" || allowed.host !== target.host) return false;
+    const base = allowed.pathname;
+    return target.pathname === base || (base.endsWith("/") && target.pathname.startsWith(base));
+  });
 }
 
 /** Response headers with our CSP (and nosniff) forced on, replacing whatever was there. */

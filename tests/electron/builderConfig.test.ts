@@ -44,4 +44,16 @@ describe("electron/builder.config.cjs", () => {
     expect(config.electronFuses.enableNodeCliInspectArguments, "--inspect ignored").toBe(false);
     expect(config.electronFuses.enableNodeOptionsEnvironmentVariable, "NODE_OPTIONS ignored").toBe(false);
   });
+
+  it("turns off the file-protocol privileges (the app is served from brinefield://) and keeps the other fuses", () => {
+    expect(config.electronFuses, "fuses").toEqual({
+      runAsNode: false,
+      enableCookieEncryption: true,
+      enableNodeOptionsEnvironmentVariable: false,
+      enableNodeCliInspectArguments: false,
+      enableEmbeddedAsarIntegrityValidation: true,
+      onlyLoadAppFromAsar: true,
+      grantFileProtocolExtraPrivileges: false,
+    });
+  });
 });

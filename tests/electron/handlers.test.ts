@@ -14,6 +14,7 @@ import {
   type SaveDialogOptions,
 } from "../../electron/handlers";
 import { parseHostRequest } from "../../electron/requestSchema";
+import { APP_INDEX_URL } from "../../electron/appProtocol";
 
 let dir: string;
 const WINDOW_ID = 7;
@@ -22,7 +23,7 @@ let good: IpcSender;
 
 beforeEach(async () => {
   dir = await mkdtemp(join(tmpdir(), "brinefield-handlers-"));
-  indexUrl = pathToFileURL(join(dir, "app", "dist", "renderer", "index.html")).href;
+  indexUrl = APP_INDEX_URL;
   good = { webContentsId: WINDOW_ID, frameUrl: indexUrl, isMainFrame: true };
 });
 afterEach(async () => {
@@ -73,7 +74,9 @@ describe("isTrustedSender()", () => {
   const trusted = () => ({ webContentsId: WINDOW_ID, indexUrl });
 
   it("accepts the main window's top frame on our index.html, whatever its hash or query", () => {
+    expect(indexUrl, "the page is served from the app's own scheme").toBe("brinefield://app/index.html");
     expect(isTrustedSender(good, trusted()), "exact URL").toBe(true);
+    expect(isTrustedSender({ ...good, frameUrl: `${indexUrl}?case=2` }, trusted()), "with query").toBe(true);
     expect(isTrustedSender({ ...good, frameUrl: `${indexUrl}#/results` }, trusted()), "with hash").toBe(true);
   });
 
@@ -85,7 +88,24 @@ describe("isTrustedSender()", () => {
       "https",
     ).toBe(false);
     const other = pathToFileURL(join(dir, "Downloads", "index.html")).href;
-    expect(isTrustedSender({ ...good, frameUrl: other }, trusted()), "other file").toBe(false);
+    expect(isTrustedSender({ ...good, frameUrl: other }, trusted()), "a local file").toBe(false);
+    const oldIndex = pathToFileURL(join(dir, "app", "dist", "renderer", "index.html")).href;
+    expect(isTrustedSender({ ...good, frameUrl: oldIndex }, trusted()), "the renderer over file://").toBe(false);
+    for (const url of [
+      "brinefield://app/other.html",
+      "brinefield://evil/index.html",
+      "brinefield://app.evil/index.html",
+      "brinefield://app:8080/index.html",
+      "brinefield://user@app/index.html",
+      "brinefield://app/assets/../index.html/x",
+      "https://app/index.html",
+    ]) {
+      expect(isTrustedSender({ ...good, frameUrl: url }, trusted()), url).toBe(false);
+    }
+    expect(
+      isTrustedSender(good, { webContentsId: WINDOW_ID, indexUrl: oldIndex }),
+      "a file:// index is never trusted",
+    ).toBe(false);
     expect(isTrustedSender({ ...good, frameUrl: "" }, trusted()), "destroyed frame").toBe(false);
     const malformed = indexUrl.replace("index.html", "%E0%A4%A/index.html");
     expect(isTrustedSender({ ...good, frameUrl: malformed }, trusted()), "bad escape, no throw").toBe(false);

@@ -1,6 +1,8 @@
 /**
- * main.ts wiring, run against a fake `electron` module (the real binary cannot start in CI): the window
- * gets the hardened webPreferences, navigation/new windows/permissions are refused, remote requests are
+ * main.ts wiring, run against a fake `electron` module (the real binary cannot start in CI): the app's
+ * scheme is registered before ready and serves the renderer, the window gets the hardened webPreferences
+ * and loads brinefield://app/index.html, navigation/new windows/permissions are refused (web addresses
+ * open in the system browser only from the allow-list, which is empty), remote and file:// requests are
  * cancelled, the CSP header is forced, and IPC goes through sender + payload validation.
  */
 import { mkdtemp, rm } from "node:fs/promises";
@@ -25,6 +27,11 @@ const fake = vi.hoisted(() => {
     headersReceived: null as Handler | null,
     menu: null as unknown,
     sandboxEnabled: false,
+    ready: false,
+    privilegedSchemes: null as unknown,
+    schemesRegisteredBeforeReady: false,
+    protocolHandlers: new Map<string, Handler>(),
+    opened: [] as string[],
     readyResolve: (() => undefined) as () => void,
   };
   const ready = new Promise<void>((r) => (state.readyResolve = r));
@@ -68,8 +75,12 @@ const fake = vi.hoisted(() => {
       this.on(event, cb);
     }
     async loadFile(path: string) {
-      this.loaded = path;
-      this.webContents.mainFrame.url = pathToFileURL(path).href;
+      this.loaded = pathToFileURL(path).href;
+      this.webContents.mainFrame.url = this.loaded;
+    }
+    async loadURL(url: string) {
+      this.loaded = url;
+      this.webContents.mainFrame.url = url;
     }
     setTitle(title: string) {
       this.title = title;
@@ -108,6 +119,16 @@ const fake = vi.hoisted(() => {
       showSaveDialog: async () => ({ canceled: true }),
     },
     ipcMain: { handle: (channel: string, cb: Handler) => state.ipcHandlers.set(channel, cb) },
+    protocol: {
+      registerSchemesAsPrivileged: (schemes: unknown) => {
+        state.privilegedSchemes = schemes;
+        state.schemesRegisteredBeforeReady = !state.ready;
+      },
+      handle: (scheme: string, cb: Handler) => {
+        if (!state.ready) throw new Error("protocol.handle before ready");
+        state.protocolHandlers.set(scheme, cb);
+      },
+    },
     session: {
       defaultSession: {
         setPermissionRequestHandler: (cb: Handler) => (state.permissionRequest = cb),
@@ -119,7 +140,11 @@ const fake = vi.hoisted(() => {
         },
       },
     },
-    shell: { openExternal: async () => undefined },
+    shell: {
+      openExternal: async (url: string) => {
+        state.opened.push(url);
+      },
+    },
   };
   return { state, electron, FakeWindow };
 });
@@ -133,6 +158,7 @@ beforeAll(async () => {
   userData = await mkdtemp(join(tmpdir(), "brinefield-main-"));
   fake.state.userData = userData;
   await import("../../electron/main");
+  fake.state.ready = true;
   fake.state.readyResolve();
   await vi.waitFor(() => {
     if (fake.state.windows.length === 0) throw new Error("no window yet");
@@ -146,6 +172,28 @@ afterAll(async () => {
 const win = () => fake.state.windows[0];
 
 describe("electron/main.ts", () => {
+  it("registers the brinefield:// scheme before ready as standard and secure, without CSP bypass", () => {
+    expect(fake.state.schemesRegisteredBeforeReady, "registered before ready").toBe(true);
+    expect(fake.state.privilegedSchemes, "one standard, secure scheme").toEqual([
+      { scheme: "brinefield", privileges: expect.objectContaining({ standard: true, secure: true }) },
+    ]);
+    const [entry] = fake.state.privilegedSchemes as { privileges: Record<string, boolean> }[];
+    expect(entry.privileges.bypassCSP, "never bypasses the CSP").toBeUndefined();
+  });
+
+  it("serves the renderer folder on the scheme with the CSP and nosniff, and refuses traversal", async () => {
+    const handler = fake.state.protocolHandlers.get("brinefield");
+    expect(handler, "protocol handler installed after ready").toBeTypeOf("function");
+    const index = (await handler!({ url: "brinefield://app/index.html", method: "GET" })) as Response;
+    expect(index.status, "index served").toBe(200);
+    expect(index.headers.get("content-type"), "as HTML").toBe("text/html; charset=utf-8");
+    expect(index.headers.get("content-security-policy"), "CSP header").toBe(CONTENT_SECURITY_POLICY);
+    expect(index.headers.get("x-content-type-options"), "nosniff").toBe("nosniff");
+    const out = (await handler!({ url: "brinefield://app/..%2Fpackage.json", method: "GET" })) as Response;
+    expect(out.status, "outside the renderer folder").toBe(403);
+    expect(out.headers.get("content-security-policy"), "CSP on errors too").toBe(CONTENT_SECURITY_POLICY);
+  });
+
   it("opens one sandboxed, isolated window on the built index.html with the preload bundle", () => {
     expect(fake.state.windows.length, "one window").toBe(1);
     expect(fake.state.sandboxEnabled, "app-wide sandbox").toBe(true);
@@ -157,21 +205,21 @@ describe("electron/main.ts", () => {
       webSecurity: true,
     });
     expect(String(prefs.preload).endsWith("preload.cjs"), "preload bundle").toBe(true);
-    expect(win().loaded.endsWith(join("renderer", "index.html")), "loads the renderer from disk").toBe(true);
+    expect(win().loaded, "loads the renderer from the app's scheme, not file://").toBe("brinefield://app/index.html");
     expect(Array.isArray(fake.state.menu), "application menu installed").toBe(true);
   });
 
-  it("blocks navigation, redirects, webviews and new windows", () => {
+  it("blocks navigation, redirects, webviews and new windows, and opens no web address (empty allow-list)", () => {
     const contents = win().webContents;
     for (const event of ["will-navigate", "will-redirect", "will-attach-webview"]) {
       const preventDefault = vi.fn();
       for (const cb of contents.handlers.get(event) ?? []) cb({ preventDefault }, "https://example.com/");
       expect(preventDefault, `${event} prevented`).toHaveBeenCalled();
     }
-    expect(
-      contents.openHandler?.({ url: "https://example.com/" }),
-      "window.open denied",
-    ).toEqual({ action: "deny" });
+    for (const url of ["https://example.com/", "http://example.com/", "file:///etc/passwd", "mailto:a@b.c"]) {
+      expect(contents.openHandler?.({ url }), `window.open ${url} denied`).toEqual({ action: "deny" });
+    }
+    expect(fake.state.opened, "nothing handed to the system browser").toEqual([]);
   });
 
   it("denies permission requests and checks", () => {
@@ -186,8 +234,11 @@ describe("electron/main.ts", () => {
     fake.state.beforeRequest?.({ url: "https://cdn.example.com/x.js" }, remote);
     expect(remote, "remote cancelled").toHaveBeenCalledWith({ cancel: true });
     const local = vi.fn();
-    fake.state.beforeRequest?.({ url: pathToFileURL(win().loaded).href }, local);
+    fake.state.beforeRequest?.({ url: win().loaded }, local);
     expect(local, "own index allowed").toHaveBeenCalledWith({ cancel: false });
+    const file = vi.fn();
+    fake.state.beforeRequest?.({ url: pathToFileURL(join(userData, "index.html")).href }, file);
+    expect(file, "file:// cancelled").toHaveBeenCalledWith({ cancel: true });
     const headers = vi.fn();
     fake.state.headersReceived?.({ responseHeaders: {} }, headers);
     expect(
@@ -204,7 +255,7 @@ describe("electron/main.ts", () => {
       sender: contents,
       senderFrame: url === "" ? null : contents.mainFrame,
     });
-    contents.mainFrame.url = pathToFileURL(win().loaded).href;
+    contents.mainFrame.url = win().loaded;
     const state = { kind: "set-document-state", dirty: true, title: "Outfall A" };
     const ok = await handler(event(contents.mainFrame.url), state);
     expect(ok, "accepted").toEqual({ kind: "ok" });
@@ -216,6 +267,10 @@ describe("electron/main.ts", () => {
       { kind: "recent-files" },
     );
     expect((stranger as { kind: string }).kind, "other webContents rejected").toBe("error");
+    contents.mainFrame.url = pathToFileURL(join(userData, "index.html")).href;
+    const asFile = await handler(event(contents.mainFrame.url), { kind: "recent-files" });
+    expect((asFile as { kind: string }).kind, "the top frame showing a file:// page rejected").toBe("error");
+    contents.mainFrame.url = win().loaded;
     const gone = await handler(event(""), { kind: "recent-files" });
     expect((gone as { kind: string }).kind, "destroyed frame rejected").toBe("error");
   });
