@@ -7,11 +7,11 @@
  * The handler serves GET and HEAD of regular files inside the packaged renderer folder only: the path is
  * resolved with the static web server's rules (`resolveRequestPath`: no "..", encoded or raw, no
  * backslash, NUL or drive letter), re-checked after symlinks, typed by extension, and every response —
- * errors included — carries the Content-Security-Policy and nosniff.
+ * errors included — carries the Content-Security-Policy and nosniff. The file lookup is the static web
+ * server's (`locateServedFile`), so both refuse the same paths.
  */
 import * as fsp from "node:fs/promises";
-import { sep } from "node:path";
-import { mimeTypeFor, resolveRequestPath, securityHeaders } from "./webServer";
+import { STATUS_TEXT, locateServedFile, mimeTypeFor, securityHeaders } from "./webServer";
 
 export const APP_SCHEME = "brinefield";
 export const APP_HOST = "app";
@@ -58,15 +58,6 @@ export interface AppProtocolRequest {
   readonly method: string;
 }
 
-const STATUS_TEXT: Readonly<Record<number, string>> = {
-  400: "Bad request",
-  403: "Forbidden",
-  404: "Not found",
-  405: "Method not allowed",
-  421: "Misdirected request",
-  500: "Internal error",
-};
-
 function plain(status: number, extra: Record<string, string> = {}): Response {
   return new Response(STATUS_TEXT[status] ?? "Error", {
     status,
@@ -87,23 +78,17 @@ export function createAppProtocolHandler(rendererDir: string) {
       if (!isAppUrl(request.url)) return plain(421);
       const url = new URL(request.url);
       if (url.port !== "") return plain(421);
-      const resolved = resolveRequestPath(rendererDir, url.pathname);
-      if (!resolved.ok) return plain(resolved.status);
       realRoot ??= await fsp.realpath(rendererDir);
-      let real: string;
-      try {
-        real = await fsp.realpath(resolved.file);
-      } catch {
-        return plain(404);
-      }
-      // A symlink inside the folder must not lead outside it.
-      if (!real.startsWith(realRoot.endsWith(sep) ? realRoot : realRoot + sep)) return plain(403);
-      const info = await fsp.stat(real);
-      if (!info.isFile()) return plain(404); // folders are never listed
-      const body = head ? null : await fsp.readFile(real);
+      const located = await locateServedFile(rendererDir, realRoot, url.pathname);
+      if (!located.ok) return plain(located.status);
+      const body = head ? null : await fsp.readFile(located.file);
       return new Response(body, {
         status: 200,
-        headers: { ...securityHeaders(), "Content-Type": mimeTypeFor(real), "Content-Length": String(info.size) },
+        headers: {
+          ...securityHeaders(),
+          "Content-Type": mimeTypeFor(located.file),
+          "Content-Length": String(located.size),
+        },
       });
     } catch {
       return plain(500);

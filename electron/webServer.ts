@@ -92,7 +92,7 @@ function send(res: ServerResponse, status: number, body: string, head: boolean):
   res.end(head ? undefined : body);
 }
 
-const STATUS_TEXT: Record<number, string> = {
+export const STATUS_TEXT: Readonly<Record<number, string>> = {
   400: "Bad request",
   403: "Forbidden",
   404: "Not found",
@@ -106,6 +106,33 @@ export function isAllowedHost(hostHeader: string | undefined, port: number): boo
   if (!hostHeader) return false;
   const allowed = [`127.0.0.1:${port}`, `localhost:${port}`, `[::1]:${port}`];
   return allowed.includes(hostHeader.toLowerCase());
+}
+
+export type LocatedFile =
+  | { readonly ok: true; readonly file: string; readonly size: number }
+  | { readonly ok: false; readonly status: 400 | 403 | 404 };
+
+/**
+ * The regular file a request path names inside `realRoot` (the real path of the served folder):
+ * `resolveRequestPath`'s rules, then the real path after symlinks must still be inside, and folders are
+ * never served. Shared by this server and the app's brinefield:// scheme.
+ */
+export async function locateServedFile(root: string, realRoot: string, target: string): Promise<LocatedFile> {
+  const resolved = resolveRequestPath(root, target);
+  if (!resolved.ok) return resolved;
+  let real: string;
+  try {
+    real = await fsp.realpath(resolved.file);
+  } catch {
+    return { ok: false, status: 404 };
+  }
+  // A symlink inside the root must not lead outside it.
+  if (real !== realRoot && !real.startsWith(realRoot.endsWith(sep) ? realRoot : realRoot + sep)) {
+    return { ok: false, status: 403 };
+  }
+  const info = await fsp.stat(real);
+  if (!info.isFile()) return { ok: false, status: 404 }; // folders are never listed
+  return { ok: true, file: real, size: info.size };
 }
 
 export interface StaticHandlerOptions {
@@ -131,34 +158,17 @@ export function createStaticHandler(options: StaticHandlerOptions) {
         send(res, 421, STATUS_TEXT[421], head);
         return;
       }
-      const resolved = resolveRequestPath(root, req.url ?? "/");
-      if (!resolved.ok) {
-        send(res, resolved.status, STATUS_TEXT[resolved.status], head);
-        return;
-      }
       realRoot ??= await fsp.realpath(root);
-      let real: string;
-      try {
-        real = await fsp.realpath(resolved.file);
-      } catch {
-        send(res, 404, STATUS_TEXT[404], head);
+      const located = await locateServedFile(root, realRoot, req.url ?? "/");
+      if (!located.ok) {
+        send(res, located.status, STATUS_TEXT[located.status], head);
         return;
       }
-      // A symlink inside the root must not lead outside it.
-      if (real !== realRoot && !real.startsWith(realRoot.endsWith(sep) ? realRoot : realRoot + sep)) {
-        send(res, 403, STATUS_TEXT[403], head);
-        return;
-      }
-      const info = await fsp.stat(real);
-      if (!info.isFile()) {
-        // Folders are never listed.
-        send(res, 404, STATUS_TEXT[404], head);
-        return;
-      }
+      const real = located.file;
       res.writeHead(200, {
         ...securityHeaders(),
         "Content-Type": mimeTypeFor(real),
-        "Content-Length": info.size,
+        "Content-Length": located.size,
       });
       if (head) {
         res.end();
