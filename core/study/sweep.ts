@@ -105,6 +105,8 @@ export interface SweepRow {
   readonly pass: boolean;
   /** The overall verdict over every ambient case (as `run`'s `overall`), or "refused". */
   readonly verdict: StudyVerdict;
+  /** Why the governing case is outside the methods' scope (empty otherwise). */
+  readonly scopeReasons: readonly string[];
   /** Equations of state used, one per ambient case, distinct names joined by " / ". */
   readonly equationOfState: string;
   readonly error?: string;
@@ -123,6 +125,7 @@ export function sweepRows(grid: readonly SweepGridPoint[], points: readonly Poin
         margin: Number.NaN,
         pass: false,
         verdict: "refused",
+        scopeReasons: [],
         equationOfState: "",
         error: p.error ?? "not run",
       };
@@ -138,6 +141,7 @@ export function sweepRows(grid: readonly SweepGridPoint[], points: readonly Poin
       margin: w.summary.margin,
       pass: p.verdict === "meets",
       verdict: p.verdict,
+      scopeReasons: w.summary.scopeReasons,
       equationOfState: eos,
     };
   });
