@@ -282,7 +282,7 @@ export function rawPathIssue(raw: unknown, path: string): string | null {
       node = shape[key]!;
       value = value !== null && typeof value === "object" && Object.prototype.hasOwnProperty.call(value, key) ? (value as Record<string, unknown>)[key] : undefined;
     } else if (type === "array") {
-      if (!/^\d{1,6}$/.test(key)) return `"${key}" must be an index into ${parts.slice(0, i).join(".")}`;
+      if (!/^\d+$/.test(key)) return `"${key}" must be an index into ${parts.slice(0, i).join(".")}`;
       const length = Array.isArray(value) ? value.length : 0;
       const index = Number(key);
       if (index >= length) return `index ${key} is beyond ${parts.slice(0, i).join(".")}, which has ${length} entr${length === 1 ? "y" : "ies"} (indices from 0)`;
