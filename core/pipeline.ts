@@ -16,7 +16,16 @@ import { jetSourceWarnings } from "./nearfield/sourceChecks";
 import { beyondNearField } from "./farfield/stage";
 import { portFlowsAndHydraulics, type PortHydraulics } from "./multiport";
 import { viscosityFromST, SHARQAWY_2010_VISCOSITY_SOURCE } from "./correlations/sharqawy-2010-viscosity";
-import { CAUTION, RESULT_FORMAT, RESULT_VERSION, type BrinefieldResult, type PortResult } from "./result/contract";
+import {
+  CAUTION,
+  RESULT_FORMAT,
+  RESULT_VERSION,
+  type BrinefieldResult,
+  type CaseResult,
+  type PortResult,
+} from "./result/contract";
+import { complianceWithScope, scopeReasons } from "./compliance/scope";
+import { expandCases, overallFromCases, runCases } from "./cases";
 import type { ResultWarning } from "./warnings";
 import { BRINEFIELD_VERSION } from "./version";
 import { formatNumber } from "./units";
@@ -78,12 +87,39 @@ function dedupe(ws: readonly ResultWarning[]): ResultWarning[] {
   return out;
 }
 
+/** The result of one ambient case: the result contract without `cases` and `overall`. */
+export type AmbientCaseResult = Omit<BrinefieldResult, "cases" | "overall">;
+
 /**
- * Runs the whole screening chain for one scenario and its stated ambient (ambient cases are the
- * studies' business). Throws ScenarioError only for inputs outside Brinefield's scope (a discharge
- * lighter than the sea); everything else comes back as warnings.
+ * Runs the whole screening chain for one scenario and every ambient case (core/cases): the stated
+ * conditions fill the top level (`mixingZone`, `compliance`, …) as before; `cases` lists each case's
+ * verdict and `overall` the verdict over them. Throws ScenarioError for inputs outside Brinefield's scope
+ * (a discharge lighter than the sea, in any case); everything else comes back as warnings.
  */
 export function runScenario(scenario: Scenario, options: RunOptions = {}): BrinefieldResult {
+  const specs = expandCases(scenario);
+  const results = runCases(specs, (c, i) =>
+    i === 0 ? runAmbientCase(scenario, options) : runAmbientCase(c.scenario, { includePath: false, detail: "edge" }),
+  );
+  const cases: CaseResult[] = specs.map((c, i) => {
+    const r = results[i]!;
+    return {
+      name: c.name,
+      kind: c.kind,
+      edgeDilution: r.mixingZone.dilution,
+      verdict: r.compliance.verdict,
+      margin: r.compliance.margin,
+      scopeReasons: r.compliance.scopeReasons,
+    };
+  });
+  return { ...results[0]!, cases, overall: overallFromCases(cases) };
+}
+
+/**
+ * Runs the screening chain for the scenario's stated ambient only (its `ambientCases` are not read): the
+ * case runner of every path (`runScenario`, studies, Monte Carlo) calls it once per case.
+ */
+export function runAmbientCase(scenario: Scenario, options: RunOptions = {}): AmbientCaseResult {
   const props = propertiesFromScenario(scenario);
   if (!(props.reducedGravity > 0)) {
     throw new ScenarioError([
@@ -129,7 +165,10 @@ export function runScenario(scenario: Scenario, options: RunOptions = {}): Brine
     nearField: options.includePath === false ? beyond.nearField.map(({ path: _path, ...m }) => m) : beyond.nearField,
     multiport: beyond.multiport,
     mixingZone: beyond.mixingZone,
-    compliance: beyond.compliance,
+    compliance: complianceWithScope(
+      beyond.compliance,
+      scopeReasons({ depth: scenario.ambient.depth, portHeight: scenario.diffuser.portHeight, nearField: beyond.nearField, warnings }),
+    ),
     warnings,
     methods: [
       { stage: "properties", name: props.eos.info.name, source: props.eos.info.source },

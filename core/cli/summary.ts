@@ -126,13 +126,33 @@ export function summaryText(s: Scenario, r: BrinefieldResult): string {
   }
   if (r.compliance) {
     const c = r.compliance;
-    out.push("", `Compliance at the mixing-zone edge — governing: ${c.governingConstituent}: ${c.pass ? "MEETS" : "DOES NOT MEET"} the limit (margin ${n(c.margin)})`);
+    out.push("", `Verdict under the stated conditions: ${c.verdict} — governing: ${c.governingConstituent} (margin ${n(c.margin)})`);
+    for (const reason of c.scopeReasons) out.push(wrap(`- outside scope: ${reason}`, 96, "  "));
     out.push(
       table([
         ["Constituent", "limit", "required dilution", "edge dilution", "margin", "verdict"],
-        ...c.constituents.map((x) => [x.constituent, x.limit.replace(/\s*\(.*$/s, ""), n(x.requiredDilution), n(x.edgeDilution), n(x.margin), x.pass ? "meets" : "does not meet"]),
+        ...c.constituents.map((x) => [
+          x.constituent,
+          x.limit.replace(/\s*\(.*$/s, ""),
+          n(x.requiredDilution),
+          n(x.edgeDilution),
+          n(x.margin),
+          c.verdict === "outside-scope" ? "outside-scope" : x.pass ? "meets" : "exceeds",
+        ]),
       ]),
     );
+  }
+  if (r.cases?.length) {
+    const o = r.overall;
+    out.push("", `Ambient cases (the verdict over all of them is the overall verdict)`);
+    out.push(
+      table([
+        ["Case", "edge dilution", "margin", "verdict"],
+        ...r.cases.map((k) => [k.name, n(k.edgeDilution), n(k.margin), k.verdict]),
+      ]),
+    );
+    for (const k of r.cases.slice(1)) for (const reason of k.scopeReasons) out.push(wrap(`- ${k.name}: outside scope: ${reason}`, 96, "  "));
+    out.push("", `OVERALL VERDICT: ${o.verdict} — governing case: ${o.governingCase} (edge dilution ${n(o.edgeDilution)}, margin ${n(o.margin)})`);
   }
   if (r.warnings.length) {
     out.push("", `Warnings (${r.warnings.length})`);

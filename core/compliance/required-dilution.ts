@@ -130,7 +130,7 @@ export function complianceFromEdgeDilution(
   if (!verdicts.length) {
     warnings.push(warning("no-limits", "info", "No concentration limits given; compliance was not assessed.", { stage: "compliance" }));
     return {
-      compliance: { governingConstituent: "none", requiredDilution: 1, pass: true, margin: edgeDilution, constituents: [] },
+      compliance: { governingConstituent: "none", requiredDilution: 1, pass: true, verdict: "meets", scopeReasons: [], margin: edgeDilution, constituents: [] },
       constituents,
       warnings,
     };
@@ -141,6 +141,8 @@ export function complianceFromEdgeDilution(
       governingConstituent: governing.constituent,
       requiredDilution: governing.requiredDilution,
       pass: verdicts.every((v) => v.pass),
+      verdict: verdicts.every((v) => v.pass) ? "meets" : "exceeds",
+      scopeReasons: [],
       margin: governing.margin,
       constituents: verdicts,
     },

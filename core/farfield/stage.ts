@@ -271,7 +271,17 @@ export function beyondNearField(input: BeyondInput): BeyondOutput {
       const h = far.thickness[i]!;
       if (Number.isFinite(h) && h > thickest) thickest = h;
     }
-    if (!edgeInside && thickest > 0.5 * depth) {
+    if (!edgeInside && thickest >= depth) {
+      // A layer as thick as the water is deep is no longer a thin bottom layer: outside the screening methods.
+      warnings.push(
+        warning(
+          "layer-reaches-surface",
+          "serious",
+          `Inside the mixing zone the dense layer reaches ${thickest.toFixed(1)} m thick in ${depth.toFixed(1)} m of water: it fills the water column up to the surface, where the spreading-layer and diffusion methods do not apply.`,
+          { parameter: "ambient.depth", value: depth, stage: "far-field" },
+        ),
+      );
+    } else if (!edgeInside && thickest > 0.5 * depth) {
       warnings.push(
         warning(
           "layer-thick-for-depth",

@@ -25,7 +25,7 @@ import { nullNearFieldResult, type AmbientColumn, type JetSource, type NearField
 /** Result for inputs the model cannot run with: nulls and one serious warning. */
 export function invalidIntegralResult(message: string, value: number | undefined, parameter: string): NearFieldMethodResult {
   const w = warning("integral-invalid-input", "serious", message, { parameter, value, stage: "integral" });
-  return { ...nullNearFieldResult("integral", INTEGRAL_SOURCE, INTEGRAL_BIAS, [w]), path: [], events: [] };
+  return { ...nullNearFieldResult("integral", INTEGRAL_SOURCE, INTEGRAL_BIAS, [w], message), path: [], events: [] };
 }
 
 function planDistance(y: Float64Array): number {
@@ -235,6 +235,8 @@ export function assembleIntegralResult(
   return {
     method: "integral",
     source: INTEGRAL_SOURCE,
+    available: true,
+    notAvailableReason: null,
     maxRiseHeight: maxRise ? maxRise.edge : null,
     maxRiseDistance: maxRise ? planDistance(maxRise.y) : null,
     returnDistance: returnHit ? planDistance(returnHit) : null,

@@ -120,7 +120,7 @@ function isDenseJet(jet: JetSource): boolean {
 }
 
 function emptyResult(warnings: ResultWarning[], why: string): NearFieldMethodResult {
-  return { ...nullNearFieldResult("length-scale", "none: " + why, "No length-scale estimate: " + why, warnings), variants: [], notes: [why] };
+  return { ...nullNearFieldResult("length-scale", "none: " + why, "No length-scale estimate: " + why, warnings, why), variants: [], notes: [why] };
 }
 
 /** Length-scale (Method 1) near-field estimate for one round dense jet. */
@@ -228,6 +228,8 @@ export function nearFieldLengthScale(jet: JetSource, column: AmbientColumn): Nea
   return {
     method: "length-scale",
     source,
+    available: true,
+    notAvailableReason: null,
     maxRiseHeight: top.maxRiseHeight,
     maxRiseDistance: top.maxRiseDistance,
     returnDistance: top.returnDistance,

@@ -83,6 +83,10 @@ export interface NearFieldEvent {
 export interface NearFieldMethodResult {
   readonly method: NearFieldMethodName;
   readonly source: string;
+  /** False when the method does not cover the case (its numbers are then null). */
+  readonly available: boolean;
+  /** Why the method does not cover the case; null when available. */
+  readonly notAvailableReason: string | null;
   /** Upper edge of the jet above the port, m. */
   readonly maxRiseHeight: number | null;
   /** Plan distance from the port to the point of maximum rise, m. */
@@ -120,16 +124,22 @@ export interface PathSink {
   end(): void;
 }
 
-/** A method's result with every number null (inputs it cannot run with), to be completed by the caller. */
+/**
+ * A method's result with every number null (inputs it cannot run with, so "not available"), to be
+ * completed by the caller. `reason` says why (default: the bias text).
+ */
 export function nullNearFieldResult(
   method: NearFieldMethodName,
   source: string,
   bias: string,
   warnings: readonly ResultWarning[],
+  reason?: string,
 ): NearFieldMethodResult {
   return {
     method,
     source,
+    available: false,
+    notAvailableReason: reason ?? bias,
     maxRiseHeight: null,
     maxRiseDistance: null,
     returnDistance: null,

@@ -33,6 +33,8 @@ export const RESULT_CSV_COLUMNS = [
   "required_dilution",
   "margin",
   "pass",
+  "verdict",
+  "scope_reasons",
 ] as const;
 
 export const SERIES_CSV_COLUMNS = [
@@ -88,7 +90,35 @@ export function resultCsv(result: BrinefieldResult): string {
       edge_increase: num(c.increase),
       required_dilution: num(check?.requiredDilution),
       margin: num(check?.margin),
-      pass: check ? String(check.pass) : "",
+      pass: check ? String(check.pass && result.compliance.verdict === "meets") : "",
+      verdict: check ? (result.compliance.verdict === "outside-scope" ? "outside-scope" : check.pass ? "meets" : "exceeds") : "",
+      scope_reasons: result.compliance.scopeReasons.join(" "),
+    });
+  }
+  // One row per ambient case and the overall verdict over them (as `run --json` reports `cases`, `overall`).
+  for (const k of result.cases ?? []) {
+    rows.push({
+      ...common,
+      section: "ambient-case",
+      name: k.name,
+      edge_radius_m: num(mz.radius),
+      edge_dilution: num(k.edgeDilution),
+      margin: num(k.margin),
+      pass: String(k.verdict === "meets"),
+      verdict: k.verdict,
+      scope_reasons: k.scopeReasons.join(" "),
+    });
+  }
+  if (result.overall) {
+    rows.push({
+      ...common,
+      section: "overall",
+      name: result.overall.governingCase,
+      edge_radius_m: num(mz.radius),
+      edge_dilution: num(result.overall.edgeDilution),
+      margin: num(result.overall.margin),
+      pass: String(result.overall.verdict === "meets"),
+      verdict: result.overall.verdict,
     });
   }
   return csvFormat(rows, [...RESULT_CSV_COLUMNS]);

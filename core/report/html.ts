@@ -4,7 +4,7 @@
  * `reportNumber`. Result cells carry `data-path` naming the result field they print, so tests and
  * reviewers can trace each figure back to `brinefield run --json`.
  */
-import type { BrinefieldResult } from "../result/contract";
+import type { BrinefieldResult, Verdict } from "../result/contract";
 import { CAUTION } from "../result/contract";
 import type { NearFieldMethodResult } from "../nearfield/types";
 import { parseScenario } from "../scenario/parse";
@@ -79,16 +79,38 @@ export function questionAsked(result: BrinefieldResult): string {
   return `Does the discharge meet ${limits.join("; ")} at the mixing-zone edge, ${edge}?`;
 }
 
+/** CSS class and badge words of a verdict: outside-scope is never shown in the colour of a pass. */
+export function verdictStyle(v: Verdict | "refused"): { cls: string; badge: string } {
+  if (v === "meets") return { cls: "pass", badge: "MEETS LIMIT" };
+  if (v === "exceeds") return { cls: "fail", badge: "EXCEEDS LIMIT" };
+  if (v === "outside-scope") return { cls: "scope", badge: "OUTSIDE SCOPE" };
+  return { cls: "refused", badge: "REFUSED" };
+}
+
+function casesHtml(result: BrinefieldResult): RawHtml {
+  const cases = result.cases ?? [];
+  if (cases.length === 0) return html``;
+  const rows = cases.map(
+    (k) =>
+      html`<tr><td>${k.name}${k.name === result.overall.governingCase ? " (governing)" : ""}</td><td class="num">${reportNumber(k.edgeDilution)}</td><td class="num">${reportNumber(k.margin)}</td><td class="${verdictStyle(k.verdict).cls}">${k.verdict}</td></tr>`,
+  );
+  return html`<table id="cases-table"><caption>Verdict per ambient case (the stated conditions, each listed case, slack water); the overall verdict is "exceeds" if any case exceeds, else "outside-scope" if any case is, else "meets"</caption><thead><tr><th>Case</th><th class="num">Edge dilution</th><th class="num">Margin</th><th>Verdict</th></tr></thead><tbody>${join(rows)}</tbody></table>`;
+}
+
 function verdictHtml(result: BrinefieldResult): RawHtml {
   const c = result.compliance;
-  const pass = c.pass;
-  return html`<div class="verdict ${pass ? "pass" : "fail"}" id="verdict">
-<div class="badge">${pass ? "MEETS LIMIT" : "EXCEEDS LIMIT"}</div>
-<div>Governing constituent: <strong>${c.governingConstituent}</strong></div>
+  const o = result.overall ?? { verdict: c.verdict, governingCase: "stated", margin: c.margin, edgeDilution: result.mixingZone.dilution };
+  const style = verdictStyle(o.verdict);
+  const reasons = [...new Set((result.cases ?? []).flatMap((k) => k.scopeReasons.map((r) => (k.name === "stated" ? r : `${k.name}: ${r}`))))];
+  return html`<div class="verdict ${style.cls}" id="verdict" data-verdict="${o.verdict}">
+<div class="badge">${style.badge}</div>
+<div>Overall verdict over every ambient case: <strong>${o.verdict}</strong>; governing case: <strong>${o.governingCase}</strong>, margin <strong data-path="overall.margin">${reportNumber(o.margin)}</strong></div>
+${o.verdict === "outside-scope" ? html`<div class="scope-reasons">Outside the screening methods' scope: ${reasons.join(" ")} The numbers below are kept for reading; they support no verdict.</div>` : html``}
+<div>Under the stated conditions — governing constituent: <strong>${c.governingConstituent}</strong>; verdict <strong>${c.verdict}</strong></div>
 <div>Dilution at the mixing-zone edge (${raw(`<span data-path="mixingZone.radius">${escapeHtml(reportNumber(result.mixingZone.radius))}</span>`)} m): <strong data-path="mixingZone.dilution">${reportNumber(result.mixingZone.dilution)}</strong>; required: <strong data-path="compliance.requiredDilution">${reportNumber(c.requiredDilution)}</strong></div>
 <div>Margin (edge dilution ÷ required dilution): <strong data-path="compliance.margin">${reportNumber(c.margin)}</strong> ${c.margin >= 1 ? "(≥ 1 meets the limit)" : "(< 1 does not meet the limit)"}</div>
 <div class="note">Screening verdict under the methods listed in this report; see the caution above.</div>
-</div>`;
+</div>${casesHtml(result)}`;
 }
 
 function jobHtml(result: BrinefieldResult, scenario: Scenario | null): RawHtml {
@@ -238,10 +260,10 @@ function complianceHtml(result: BrinefieldResult): RawHtml {
   const c = result.compliance;
   const rows = c.constituents.map(
     (k, i) =>
-      html`<tr><td>${k.constituent}</td><td>${k.limit}</td>${resultCell(result, `compliance.constituents.${i}.requiredDilution`)}${resultCell(result, `compliance.constituents.${i}.edgeDilution`)}${resultCell(result, `compliance.constituents.${i}.margin`)}<td class="${k.pass ? "pass" : "fail"}">${k.pass ? "meets" : "exceeds"}</td></tr>`,
+      html`<tr><td>${k.constituent}</td><td>${k.limit}</td>${resultCell(result, `compliance.constituents.${i}.requiredDilution`)}${resultCell(result, `compliance.constituents.${i}.edgeDilution`)}${resultCell(result, `compliance.constituents.${i}.margin`)}<td class="${c.verdict === "outside-scope" ? "scope" : k.pass ? "pass" : "fail"}">${c.verdict === "outside-scope" ? "outside-scope" : k.pass ? "meets" : "exceeds"}</td></tr>`,
   );
   return join([
-    html`<p>Overall: <strong>${c.pass ? "the discharge meets every limit at the mixing-zone edge" : "the discharge does not meet every limit at the mixing-zone edge"}</strong>; governing constituent ${c.governingConstituent}, margin ${raw(`<span data-path="compliance.margin">${escapeHtml(reportNumber(c.margin))}</span>`)}.</p>`,
+    html`<p>Under the stated conditions: <strong>${c.verdict === "outside-scope" ? "outside the screening methods' scope (see the reasons above)" : c.pass ? "the discharge meets every limit at the mixing-zone edge" : "the discharge does not meet every limit at the mixing-zone edge"}</strong>; governing constituent ${c.governingConstituent}, margin ${raw(`<span data-path="compliance.margin">${escapeHtml(reportNumber(c.margin))}</span>`)}.</p>`,
     html`<table id="compliance-table"><caption>Verdict and margin per limit (margin = edge dilution ÷ required dilution)</caption><thead><tr><th>Constituent</th><th>Limit</th><th class="num">Required dilution</th><th class="num">Edge dilution</th><th class="num">Margin</th><th>Verdict</th></tr></thead><tbody>${join(rows)}</tbody></table>`,
   ]);
 }

@@ -8,7 +8,7 @@ import type { BrinefieldResult } from "../result/contract";
 import { CAUTION } from "../result/contract";
 import { hashText } from "../scenario/hash";
 import { valueAtPath } from "./inputs";
-import { appendixHtml, documentHtml, reportBody, type ReportOptions } from "./html";
+import { appendixHtml, documentHtml, reportBody, verdictStyle, type ReportOptions } from "./html";
 import { html, join, reportNumber, type RawHtml } from "./format";
 
 export interface StudyReportVariant {
@@ -48,10 +48,10 @@ export function studyComparisonHtml(variants: readonly StudyReportVariant[]): Ra
       const j = v.result.nearField.findIndex((x) => x.method === m);
       return j < 0 ? html`<td class="num">—</td><td class="num">—</td>` : join([cell(v, i, `nearField.${j}.impactDilution`), cell(v, i, `nearField.${j}.maxRiseHeight`)]);
     });
-    const pass = v.result.compliance.pass;
-    return html`<tr><td><a href="#v${String(i)}-summary">${v.name}</a></td><td class="path">${changes || "—"}</td>${join(perMethod)}${cell(v, i, "mixingZone.dilution")}${cell(v, i, "compliance.requiredDilution")}${cell(v, i, "compliance.margin")}<td class="${pass ? "pass" : "fail"}">${pass ? "meets" : "exceeds"}</td></tr>`;
+    const o = v.result.overall;
+    return html`<tr><td><a href="#v${String(i)}-summary">${v.name}</a></td><td class="path">${changes || "—"}</td>${join(perMethod)}${cell(v, i, "mixingZone.dilution")}${cell(v, i, "compliance.requiredDilution")}${cell(v, i, "compliance.margin")}<td class="${verdictStyle(o.verdict).cls}">${o.verdict} (${o.governingCase}, margin ${reportNumber(o.margin)})</td></tr>`;
   });
-  return html`<table id="comparison-table"><caption>Comparison of the variants (each for its stated ambient)</caption><thead>${head}</thead><tbody>${join(rows)}</tbody></table>`;
+  return html`<table id="comparison-table"><caption>Comparison of the variants: numbers for the stated conditions; verdict over every ambient case (governing case, margin)</caption><thead>${head}</thead><tbody>${join(rows)}</tbody></table>`;
 }
 
 /** Complete printable report for a study: comparison, then one section per variant. */

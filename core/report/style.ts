@@ -9,7 +9,7 @@ export const REPORT_CSS = `
   margin: 14mm 15mm 12mm 15mm;
   @top-right { content: "Page " counter(page) " of " counter(pages); font: 8pt Helvetica, Arial, sans-serif; color: #475569; }
 }
-:root { --ink: #0f172a; --muted: #475569; --rule: #cbd5e1; --pass: #166534; --fail: #b91c1c; --accent: #0c4a6e; }
+:root { --ink: #0f172a; --muted: #475569; --rule: #cbd5e1; --pass: #166534; --fail: #b91c1c; --scope: #6d28d9; --accent: #0c4a6e; }
 * { box-sizing: border-box; }
 html { -webkit-print-color-adjust: exact; print-color-adjust: exact; }
 body { margin: 0; color: var(--ink); font: 9.5pt/1.38 Helvetica, Arial, sans-serif; }
@@ -28,6 +28,10 @@ code, .path, .hash { font-family: "DejaVu Sans Mono", Menlo, Consolas, monospace
 .verdict .badge { grid-row: span 4; font-size: 15pt; font-weight: 700; padding: 2mm 4mm; border-radius: 2mm; color: #fff; align-self: center; }
 .verdict.pass .badge { background: var(--pass); }
 .verdict.fail .badge { background: var(--fail); }
+.verdict.scope { border: 2px dashed var(--scope); }
+.verdict.scope .badge { background: var(--scope); }
+.verdict.refused .badge { background: var(--muted); }
+.scope-reasons { grid-column: 2; color: var(--scope); font-weight: 600; }
 table { border-collapse: collapse; width: 100%; margin: 2mm 0 3mm; font-size: 8.6pt; }
 table:not(.inputs):not(.layout):not(#warnings-table):not(#methods-table) { break-inside: avoid; }
 caption { text-align: left; font-weight: 700; padding: 1mm 0; caption-side: top; }
@@ -39,6 +43,8 @@ tr.default td { color: var(--muted); }
 td.entered { white-space: nowrap; }
 td.pass { color: var(--pass); font-weight: 700; }
 td.fail { color: var(--fail); font-weight: 700; }
+td.scope { color: var(--scope); font-weight: 700; font-style: italic; }
+td.refused { color: var(--muted); font-weight: 700; }
 .sev-serious { color: var(--fail); font-weight: 700; }
 .sev-warning { color: #b45309; font-weight: 700; }
 .sev-info { color: var(--muted); }

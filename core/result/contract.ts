@@ -95,12 +95,52 @@ export interface ConstituentCompliance {
   readonly limit: string; // readable statement of the limit
 }
 
+/**
+ * The screening verdict at the mixing-zone edge:
+ * - "meets": every limit is met and the screening methods apply to the case;
+ * - "exceeds": at least one limit is not met (the computed numbers stand);
+ * - "outside-scope": the methods do not apply (a dense jet or layer reaches the surface, no near-field
+ *   method covers the case, …); the numbers are kept for reading but support no verdict.
+ */
+export type Verdict = "meets" | "exceeds" | "outside-scope";
+/** A study point's state: a verdict, or "refused" when its inputs break a scenario rule. */
+export type StudyVerdict = Verdict | "refused";
+export const VERDICTS: readonly Verdict[] = ["meets", "exceeds", "outside-scope"];
+export const STUDY_VERDICTS: readonly StudyVerdict[] = [...VERDICTS, "refused"];
+
 export interface ComplianceResult {
   readonly governingConstituent: string;
   readonly requiredDilution: number;
+  /** True only when `verdict` is "meets". */
   readonly pass: boolean;
+  readonly verdict: Verdict;
+  /** Why the methods do not apply: non-empty exactly when `verdict` is "outside-scope". */
+  readonly scopeReasons: readonly string[];
   readonly margin: number;
   readonly constituents: readonly ConstituentCompliance[];
+}
+
+/** Where an ambient case comes from. */
+export type CaseKind = "stated" | "listed" | "slack-water";
+
+/** One ambient case's verdict at the mixing-zone edge (the stated conditions are the case "stated"). */
+export interface CaseResult {
+  readonly name: string;
+  readonly kind: CaseKind;
+  readonly edgeDilution: number;
+  readonly verdict: Verdict;
+  /** Edge dilution ÷ required dilution of the governing limit (≥ 1 meets when in scope). */
+  readonly margin: number;
+  readonly scopeReasons: readonly string[];
+}
+
+/** The verdict over every case: "exceeds" if any case exceeds, else "outside-scope" if any is, else "meets". */
+export interface OverallResult {
+  /** The case that decides the verdict (the lowest margin among the cases with the deciding verdict). */
+  readonly governingCase: string;
+  readonly verdict: Verdict;
+  readonly margin: number;
+  readonly edgeDilution: number;
 }
 
 export interface BrinefieldResult {
@@ -123,7 +163,12 @@ export interface BrinefieldResult {
   readonly nearField: readonly NearFieldMethodResult[];
   readonly multiport: MultiportResult;
   readonly mixingZone: MixingZoneResult;
+  /** The stated conditions' verdict (the case "stated"). */
   readonly compliance: ComplianceResult;
+  /** Every ambient case: "stated", each listed case, and "slack water" unless options.addSlackWater is false. */
+  readonly cases: readonly CaseResult[];
+  /** The verdict over `cases`; the headline verdict of the report and of study rows. */
+  readonly overall: OverallResult;
   readonly warnings: readonly ResultWarning[];
   readonly methods: readonly { readonly stage: string; readonly name: string; readonly source: string }[];
 }

@@ -5,6 +5,7 @@
  */
 import { z } from "zod";
 import { quantityToSI, siLabel, QUANTITY_KINDS, type QuantityKind } from "../units";
+import type { FieldBounds } from "./bounds";
 
 export interface Bounds {
   readonly min: number;
@@ -61,9 +62,38 @@ export function quantity(kind: QuantityKind, bounds: Bounds, what: string = QUAN
     });
 }
 
+function countExpectation(min: number, max: number, what: string): string {
+  return `must be a whole number of ${what} from ${min} to ${max}`;
+}
+
+function fractionExpectation(min: number, max: number, what: string, exclusiveMin: boolean): string {
+  return `must be a ${what} (a fraction) ${exclusiveMin ? "greater than" : "from"} ${min} ${exclusiveMin ? "and at most" : "to"} ${max}, e.g. 0.45`;
+}
+
+export function salinityExpectation(min: number, max: number, what: string): string {
+  return `must be ${article(what)} from ${min} to ${max} g/kg Absolute Salinity (e.g. 68, "68 g/kg", "36 psu" or "40000 mg/L")`;
+}
+
+/**
+ * What a bounded field expects, word for word as the file reader says it: the scenario rules use it
+ * so that a value out of bounds from any path (sweep, study, Monte Carlo, design) reads like `run`.
+ */
+export function expectationFor(b: FieldBounds): string {
+  switch (b.form) {
+    case "quantity":
+      return describeRange(b.kind, b, b.what);
+    case "salinity":
+      return salinityExpectation(b.min, b.max, b.what);
+    case "count":
+      return countExpectation(b.min, b.max, b.what);
+    case "fraction":
+      return fractionExpectation(b.min, b.max, b.what, b.exclusiveMin ?? false);
+  }
+}
+
 /** A whole number within bounds (port counts and the like). */
 export function count(min: number, max: number, what: string) {
-  const expectation = `must be a whole number of ${what} from ${min} to ${max}`;
+  const expectation = countExpectation(min, max, what);
   return z
     .number({ error: () => expectation })
     .int({ error: () => expectation })
@@ -73,7 +103,7 @@ export function count(min: number, max: number, what: string) {
 
 /** A plain dimensionless fraction. */
 export function fraction(min: number, max: number, what: string, exclusiveMin = false) {
-  const expectation = `must be a ${what} (a fraction) ${exclusiveMin ? "greater than" : "from"} ${min} ${exclusiveMin ? "and at most" : "to"} ${max}, e.g. 0.45`;
+  const expectation = fractionExpectation(min, max, what, exclusiveMin);
   return z.number({ error: () => expectation }).refine((v) => Number.isFinite(v) && (exclusiveMin ? v > min : v >= min) && v <= max, {
     error: () => expectation,
   });

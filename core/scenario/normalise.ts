@@ -6,6 +6,7 @@
 import { create, unitDependencies, createUnitDependencies } from "mathjs";
 import type {
   AmbientCase,
+  AmbientCaseField,
   AmbientInput,
   ConstituentInput,
   DiffuserInput,
@@ -18,6 +19,8 @@ import type { SalinityValue, ScenarioFileParsed } from "./schema";
 import { brineFromPlant } from "./plant";
 import { absoluteSalinityFromPractical, salinityFromTds } from "../properties";
 import { formatNumber } from "../units";
+import { issue, type ScenarioIssue } from "./issue";
+import { scenarioRuleIssues } from "./rules";
 
 // mathjs units, created on first use: study worker threads run scenarios that are already normalised.
 let mathUnits: ReturnType<typeof create> | null = null;
@@ -27,31 +30,13 @@ function math(): ReturnType<typeof create> {
   return mathUnits;
 }
 
-export interface ScenarioIssue {
-  /** Dotted path in the scenario file, e.g. "diffuser.portDiameter" or "ambient.profile.2.depth". */
-  readonly path: string;
-  /** Full readable message: `path: "value" what is expected`. */
-  readonly message: string;
-  readonly value?: unknown;
-}
-
-export function issue(path: string, value: unknown, expectation: string): ScenarioIssue {
-  const shown =
-    value === undefined
-      ? "is missing;"
-      : typeof value === "number" && !Number.isFinite(value)
-        ? String(value)
-        : `${(JSON.stringify(value) ?? String(value)).slice(0, 80)}`;
-  return { path, value, message: `${path || "(file)"}: ${shown} ${expectation}` };
-}
+export { issue, type ScenarioIssue } from "./issue";
+export { MAX_EXIT_VELOCITY } from "./rules";
 
 /** Ports usually point across the diffuser axis (common practice, no source): default axis ⟂ port azimuth. */
 export function defaultDiffuserAzimuth(portAzimuth: number): number {
   return (portAzimuth + 90) % 360;
 }
-
-/** Highest port exit velocity accepted as input, m/s (see the check in normaliseScenario). */
-export const MAX_EXIT_VELOCITY = 30;
 
 /** Default salt rejection of seawater RO membranes when not given (common practice, no source). */
 export const DEFAULT_SALT_REJECTION = 0.997;
@@ -130,25 +115,65 @@ function buildProfile(a: RawAmbientLike, depth: number, path: string, ctx: Ctx):
   };
 }
 
+/** Which value of a limit is read: the allowed increase, the allowed concentration or the background. */
+type LimitField = "maxIncrease" | "maxConcentration" | "background";
+
+/** Number-like text that is not a plain decimal (hex, octal, binary): refused rather than guessed. */
+const NON_DECIMAL = /^\s*[-+]?0[xob]/i;
+
+/**
+ * A limit value, written as a number or as a string with a unit, converted to the constituent's unit and
+ * then put through the same finite, sign and range checks whichever way it was written.
+ */
 function parseLimitValue(
   raw: number | string | undefined,
+  constituent: string,
+  unit: string,
+  field: LimitField,
+  path: string,
+  ctx: Ctx,
+): number | undefined {
+  if (raw === undefined) return undefined;
+  const value = limitValueInUnit(raw, constituent, unit, field === "maxIncrease", path, ctx);
+  if (value === undefined) return undefined;
+  const problem = limitValueProblem(value, constituent, unit, field);
+  if (problem) {
+    ctx.issues.push(issue(path, raw, problem));
+    return undefined;
+  }
+  return value;
+}
+
+/** Null when the value is acceptable for the field, else what is expected. */
+function limitValueProblem(value: number, constituent: string, unit: string, field: LimitField): string | null {
+  if (!Number.isFinite(value) || Math.abs(value) > 1e9) return `must be a finite number (in ${unit}) of at most 1e9 in size`;
+  if (field === "maxIncrease") {
+    if (value === 0) return "must be a positive increase (a zero increase can never be met)";
+    if (value < 0) return `must be a positive increase (in ${unit})`;
+    return null;
+  }
+  if (constituent === "temperature") {
+    // Seawater and brine temperatures: the scenario's own bounds (-2 to 60 °C); a limit may sit up to 100 °C.
+    const hi = field === "background" ? 60 : 100;
+    return value < -2 || value > hi ? `must be a temperature from -2 to ${hi} °C` : null;
+  }
+  if (field === "background") return value < 0 ? `must not be negative (a background concentration, in ${unit})` : null;
+  // An absolute limit of zero or below can never be met by dilution.
+  return value <= 0 ? `must be a positive concentration (in ${unit}); a limit of zero or less can never be met` : null;
+}
+
+function limitValueInUnit(
+  raw: number | string,
   constituent: string,
   unit: string,
   isIncrease: boolean,
   path: string,
   ctx: Ctx,
 ): number | undefined {
-  if (raw === undefined) return undefined;
-  if (typeof raw === "number") {
-    if (!Number.isFinite(raw) || raw < (isIncrease ? 0 : -1e9) || Math.abs(raw) > 1e9) {
-      ctx.issues.push(issue(path, raw, isIncrease ? "must be a non-negative increase" : "must be a finite concentration"));
-      return undefined;
-    }
-    if (isIncrease && raw === 0) {
-      ctx.issues.push(issue(path, raw, "must be a positive increase (a zero increase can never be met)"));
-      return undefined;
-    }
-    return raw;
+  if (typeof raw === "number") return raw;
+  if (NON_DECIMAL.test(raw)) {
+    ctx.issues.push(issue(path, raw, `must be a decimal number with an optional unit (in ${unit}); hex, octal and binary forms are not accepted`));
+    return undefined;
   }
   const m = /^\s*([-+]?(?:\d+\.?\d*|\.\d+)(?:e[-+]?\d+)?)\s*(.*)$/i.exec(raw);
   if (!m) {
@@ -284,10 +309,17 @@ export function normaliseScenario(f: ScenarioFileParsed): { scenario: Scenario |
       const last = profile[profile.length - 1]!;
       if (last.depth < cd) profile.push({ ...last, depth: cd });
     }
+    const sets: AmbientCaseField[] = [];
+    if (c.depth !== undefined) sets.push("depth");
+    if (c.salinity !== undefined || c.profile !== undefined) sets.push("salinity");
+    if (c.temperature !== undefined || c.profile !== undefined) sets.push("temperature");
+    if (c.currentSpeed !== undefined) sets.push("currentSpeed");
+    if (c.currentDirection !== undefined) sets.push("currentDirection");
     ambientCases.push({
       ...ambient,
       name: c.name,
       weight: c.weight ?? 1,
+      sets,
       depth: cd,
       profile,
       uniform,
@@ -322,8 +354,6 @@ export function normaliseScenario(f: ScenarioFileParsed): { scenario: Scenario |
   const naturalLength =
     layout === "rosette" ? Math.max(0, ((g.risers?.count ?? 1) - 1) * riserSpacing) : Math.max(0, (portCount - 1) * portSpacing);
   const length = g.length ?? naturalLength;
-  if (g.length !== undefined && g.length + 1e-9 < naturalLength)
-    ctx.issues.push(issue("diffuser.length", g.length, `must be at least the port layout's length ${formatNumber(naturalLength)} m`));
   let flowSplit: number[];
   if (g.flowSplit) {
     const sum = g.flowSplit.reduce((s, v) => s + v, 0);
@@ -341,22 +371,6 @@ export function normaliseScenario(f: ScenarioFileParsed): { scenario: Scenario |
     ctx.conversions.push(
       `diffuser.portDiameter: vena-contracta contraction ${formatNumber(contraction)} applied to the area → effective diameter ${formatNumber(effectiveDiameter)} m`,
     );
-  // Port exit velocity bounds: the trade designs for about 2–6 m/s (common practice, no source); anything
-  // above 30 m/s (over 45 m of velocity head) is taken as an input mistake, not a design to screen.
-  if (Number.isFinite(flow) && flowSplit.length === portCount) {
-    const area = (Math.PI * effectiveDiameter * effectiveDiameter) / 4;
-    const fastest = (Math.max(...flowSplit) * flow) / area;
-    if (fastest > MAX_EXIT_VELOCITY)
-      ctx.issues.push(
-        issue(
-          "diffuser.portDiameter",
-          g.portDiameter,
-          `gives a port exit velocity of ${formatNumber(fastest)} m/s for the flow per port; Brinefield screens exit velocities up to ${MAX_EXIT_VELOCITY} m/s (usual designs: about 2–6 m/s) — check the flow, the port count and the diameter`,
-        ),
-      );
-  }
-  if (g.portHeight + g.portDiameter / 2 >= depth)
-    ctx.issues.push(issue("diffuser.portHeight", g.portHeight, `must leave the port below the surface: water depth is ${formatNumber(depth)} m`));
   const riserAzimuths =
     g.risers && (g.risers.portAzimuths ?? Array.from({ length: g.risers.portsPerRiser }, (_, k) => (portAzimuth + (360 * k) / g.risers!.portsPerRiser) % 360));
 
@@ -397,9 +411,9 @@ export function normaliseScenario(f: ScenarioFileParsed): { scenario: Scenario |
       ctx.issues.push(issue(path, l.constituent, "must give exactly one of maxIncrease or maxConcentration"));
       return;
     }
-    const inc = parseLimitValue(l.maxIncrease, key, unit, true, `${path}.maxIncrease`, ctx);
-    const abs = parseLimitValue(l.maxConcentration, key, unit, false, `${path}.maxConcentration`, ctx);
-    const bg = parseLimitValue(l.background, key, unit, false, `${path}.background`, ctx);
+    const inc = parseLimitValue(l.maxIncrease, key, unit, "maxIncrease", `${path}.maxIncrease`, ctx);
+    const abs = parseLimitValue(l.maxConcentration, key, unit, "maxConcentration", `${path}.maxConcentration`, ctx);
+    const bg = parseLimitValue(l.background, key, unit, "background", `${path}.background`, ctx);
     limits.push({
       constituent: key === "salinity" || key === "temperature" ? key : c!.name,
       unit,
@@ -441,6 +455,8 @@ export function normaliseScenario(f: ScenarioFileParsed): { scenario: Scenario |
     ...(uncertainty ? { uncertainty } : {}),
     conversions: ctx.conversions,
   };
+  const broken = scenarioRuleIssues(scenario);
+  if (broken.length > 0) return { scenario: null, issues: broken };
   return { scenario: deepFreeze(scenario), issues: [] };
 }
 

@@ -5,7 +5,8 @@
  * core/scenario/scenario.schema.json by `brinefield schema` and checked in tests.
  */
 import { z } from "zod";
-import { quantity, count, fraction, text, article } from "./fields";
+import { quantity, count, fraction, text, salinityExpectation } from "./fields";
+import { FIELD_BOUNDS, type BoundedPath } from "./bounds";
 import { matchPracticalSalinity, matchTds, quantityToSI } from "../units";
 
 export const SCENARIO_FORMAT = "brinefield-scenario";
@@ -15,7 +16,7 @@ export const SCENARIO_VERSION = 1;
 export type SalinityValue = { readonly basis: "absolute" | "practical" | "tds"; readonly value: number; readonly raw: unknown };
 
 export function salinity(min: number, max: number, what = "salinity") {
-  const expectation = `must be ${article(what)} from ${min} to ${max} g/kg Absolute Salinity (e.g. 68, "68 g/kg", "36 psu" or "40000 mg/L")`;
+  const expectation = salinityExpectation(min, max, what);
   return z
     .union([z.number(), z.string()], { error: () => expectation })
     .meta({ description: `${what}: number in g/kg (Absolute Salinity), or a string in g/kg, psu (practical) or mg/L (TDS)` })
@@ -38,6 +39,12 @@ export function salinity(min: number, max: number, what = "salinity") {
       if (!(q.value >= min && q.value <= max)) ctx.addIssue({ code: "custom", message: expectation });
       return { basis: "absolute", value: q.value, raw };
     });
+}
+
+/** A field built from its one declaration in bounds.ts. */
+function bounded<P extends BoundedPath>(path: P) {
+  const b = FIELD_BOUNDS[path];
+  return quantity(b.kind, b, b.what);
 }
 
 const temperature = (what = "temperature") => quantity("temperature", { min: -2, max: 60 }, what);
@@ -73,25 +80,25 @@ const constituent = z.strictObject({
 });
 
 const discharge = z.strictObject({
-  flow: quantity("flow", { min: 0, max: 100, exclusiveMin: true }, "total brine flow").optional(),
-  salinity: salinity(0, 160, "discharge salinity").optional(),
-  temperature: temperature("discharge temperature").optional(),
+  flow: bounded("discharge.flow").optional(),
+  salinity: salinity(FIELD_BOUNDS["discharge.salinity"].min, FIELD_BOUNDS["discharge.salinity"].max, FIELD_BOUNDS["discharge.salinity"].what).optional(),
+  temperature: bounded("discharge.temperature").optional(),
   constituents: z.array(constituent).max(50, { error: () => "must list at most 50 constituents" }).optional(),
 });
 
 const ambientFields = {
-  depth: quantity("length", { min: 0, max: 1000, exclusiveMin: true }, "water depth"),
-  salinity: salinity(0, 80, "ambient salinity").optional(),
-  temperature: temperature("ambient temperature").optional(),
+  depth: bounded("ambient.depth"),
+  salinity: salinity(FIELD_BOUNDS["ambient.salinity"].min, FIELD_BOUNDS["ambient.salinity"].max, FIELD_BOUNDS["ambient.salinity"].what).optional(),
+  temperature: bounded("ambient.temperature").optional(),
   profile: z
     .array(profilePoint)
     .min(1, { error: () => "must have at least one point" })
     .max(500, { error: () => "must have at most 500 points" })
     .optional(),
-  currentSpeed: quantity("speed", { min: 0, max: 5 }, "current speed").optional(),
-  currentDirection: azimuth("current direction").optional(),
-  bedSlope: fraction(0, 0.5, "bed slope (rise over run)").optional(),
-  bedSlopeAzimuth: azimuth("downslope direction").optional(),
+  currentSpeed: bounded("ambient.currentSpeed").optional(),
+  currentDirection: bounded("ambient.currentDirection").optional(),
+  bedSlope: fraction(FIELD_BOUNDS["ambient.bedSlope"].min, FIELD_BOUNDS["ambient.bedSlope"].max, FIELD_BOUNDS["ambient.bedSlope"].what).optional(),
+  bedSlopeAzimuth: bounded("ambient.bedSlopeAzimuth").optional(),
 };
 
 const ambient = z.strictObject(ambientFields);
@@ -116,15 +123,15 @@ const risers = z.strictObject({
 
 const diffuser = z.strictObject({
   layout: z.enum(["single", "line", "rosette"], { error: () => 'must be "single", "line" or "rosette"' }).optional(),
-  portCount: count(1, 1000, "ports").optional(),
-  portDiameter: quantity("smallLength", { min: 0.005, max: 3 }, "port diameter"),
+  portCount: count(FIELD_BOUNDS["diffuser.portCount"].min, FIELD_BOUNDS["diffuser.portCount"].max, FIELD_BOUNDS["diffuser.portCount"].what).optional(),
+  portDiameter: bounded("diffuser.portDiameter"),
   contraction: fraction(0.5, 1, "contraction coefficient (effective/nominal area)").optional(),
-  portAngle: quantity("angle", { min: 0, max: 90 }, "port angle above horizontal"),
-  portHeight: quantity("length", { min: 0, max: 100 }, "port height above the seabed"),
-  portSpacing: quantity("length", { min: 0, max: 1000, exclusiveMin: true }, "port spacing").optional(),
-  portAzimuth: azimuth("port azimuth").optional(),
-  diffuserAzimuth: azimuth("diffuser axis azimuth").optional(),
-  length: quantity("length", { min: 0, max: 10000 }, "diffuser length").optional(),
+  portAngle: bounded("diffuser.portAngle"),
+  portHeight: bounded("diffuser.portHeight"),
+  portSpacing: bounded("diffuser.portSpacing").optional(),
+  portAzimuth: bounded("diffuser.portAzimuth").optional(),
+  diffuserAzimuth: bounded("diffuser.diffuserAzimuth").optional(),
+  length: bounded("diffuser.length").optional(),
   flowSplit: z
     .array(z.number({ error: () => "must be a number" }).min(0, { error: () => "must not be negative" }).max(1e6))
     .max(1000)
@@ -143,7 +150,7 @@ const limit = z.strictObject({
 });
 
 const mixingZone = z.strictObject({
-  radius: quantity("length", { min: 0, max: 20000, exclusiveMin: true }, "mixing-zone radius"),
+  radius: bounded("mixingZone.radius"),
   limits: z.array(limit).min(1, { error: () => "must list at least one limit (salinity at least)" }).max(50),
 });
 

@@ -72,9 +72,18 @@ export interface AmbientInput {
   readonly bedSlopeAzimuth: number;
 }
 
+/** The ambient fields an ambient case may set itself (a profile sets salinity and temperature). */
+export type AmbientCaseField = "depth" | "salinity" | "temperature" | "currentSpeed" | "currentDirection";
+export const AMBIENT_CASE_FIELDS: readonly AmbientCaseField[] = ["depth", "salinity", "temperature", "currentSpeed", "currentDirection"];
+
 export interface AmbientCase extends AmbientInput {
   readonly name: string;
   readonly weight: number;
+  /**
+   * The fields the case sets itself; every other field follows the stated ambient (also when a study,
+   * sweep or Monte Carlo draw changes it).
+   */
+  readonly sets: readonly AmbientCaseField[];
 }
 
 export type DiffuserLayout = "single" | "line" | "rosette";

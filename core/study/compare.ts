@@ -1,12 +1,15 @@
 /**
- * Comparing options and sites: one row per variant and ambient case, plus each variant's worst case,
+ * Comparing options and sites: one row per variant and ambient case (the stated conditions, each listed
+ * case, slack water), plus each variant's overall row — the same cases and overall verdict as `run` —
  * with each near-field method's key numbers side by side. Rows flatten to columns for tables and CSV.
+ * A variant whose scenario breaks a rule is one "refused" row carrying the rule's message.
  */
+import type { StudyVerdict } from "../result/contract";
 import type { Scenario } from "../scenario/types";
-import { expandCases } from "./cases";
+import { keptValueNotes } from "../cases";
 import { withRawOverride } from "./overrides";
 import type { StudyFile, StudyIssue } from "./study-file";
-import { worstIndex, type CaseSummary, type Evaluator } from "./summary";
+import { evaluateCases, type CaseSummary, type Evaluator } from "./summary";
 
 /** The scenario reader the study uses (core/scenario/parse `parseScenario`). */
 export type ScenarioReader = (
@@ -15,12 +18,19 @@ export type ScenarioReader = (
 
 export interface StudyVariant {
   readonly name: string;
-  readonly scenario: Scenario;
+  /** Null when the variant's scenario breaks a rule (see `refused`). */
+  readonly scenario: Scenario | null;
+  /** The scenario reader's messages for a variant that breaks a rule (the same as `run` gives). */
+  readonly refused?: readonly string[];
+  /** The override paths the variant changes. */
+  readonly paths: readonly string[];
 }
 
 /**
- * The base scenario and every variant, each re-read from the patched raw scenario. Problems name the
- * variant and the path ("variants.1 (deep water): ambient.depth: …").
+ * The base scenario and every variant, each re-read from the patched raw scenario. A variant that breaks a
+ * scenario rule is kept as refused, with the reader's messages; an override path that is not a field of the
+ * scenario format is a problem of the study file (named "variants.1 (deep water): …"), as is a base
+ * scenario that cannot be read.
  */
 export function studyVariants(
   study: StudyFile,
@@ -40,61 +50,68 @@ export function studyVariants(
       return;
     }
     const r = read(raw);
+    const paths = Object.keys(v.overrides);
     if (!r.ok) {
-      for (const is of r.issues) {
-        issues.push({ path: `${where}.${is.path}`, message: `${where}: ${is.message}` });
-      }
+      if (i === 0) {
+        for (const is of r.issues) issues.push({ path: `${where}.${is.path}`, message: `${where}: ${is.message}` });
+      } else out.push({ name: v.name, scenario: null, refused: r.issues.map((x) => x.message), paths });
       return;
     }
-    out.push({ name: v.name, scenario: r.scenario });
+    out.push({ name: v.name, scenario: r.scenario, paths });
   });
   return issues.length > 0 ? { ok: false, issues } : { ok: true, variants: out };
 }
 
 export interface CompareRow {
   readonly variant: string;
-  /** Ambient case name, or "worst case" for the variant's governing case. */
+  /** Ambient case name, or "overall" for the variant's verdict over every case. */
   readonly case: string;
+  /** True for the overall row. */
   readonly worstCase: boolean;
-  /** For the worst-case row: the case that governs. */
+  /** For the overall row: the case that governs. */
   readonly governingCase: string | null;
+  readonly verdict: StudyVerdict;
   readonly summary: CaseSummary | null;
+  /** The rule's message for a refused variant. */
   readonly error?: string;
+  /** Where a case keeps its own value against the variant's ambient changes. */
+  readonly notes?: readonly string[];
 }
 
-export const WORST_CASE_ROW = "worst case";
+/** The name of each variant's overall row (the verdict over every case, as `run`'s `overall`). */
+export const OVERALL_ROW = "overall";
+/** @deprecated the overall row is named "overall"; kept for callers of the old name. */
+export const WORST_CASE_ROW = OVERALL_ROW;
 
 export function compareVariant(v: StudyVariant, evaluate: Evaluator): CompareRow[] {
-  const rows: CompareRow[] = [];
-  const summaries: { name: string; summary: CaseSummary }[] = [];
-  for (const c of expandCases(v.scenario)) {
-    try {
-      const summary = evaluate(c.scenario);
-      summaries.push({ name: c.name, summary });
-      rows.push({ variant: v.name, case: c.name, worstCase: false, governingCase: null, summary });
-    } catch (err) {
-      const error = err instanceof Error ? err.message : String(err);
-      rows.push({
-        variant: v.name,
-        case: c.name,
-        worstCase: false,
-        governingCase: null,
-        summary: null,
-        error,
-      });
-    }
+  const refusedRow = (error: string): CompareRow[] => [
+    { variant: v.name, case: OVERALL_ROW, worstCase: true, governingCase: null, verdict: "refused", summary: null, error },
+  ];
+  if (!v.scenario) return refusedRow((v.refused ?? ["refused"]).join("; "));
+  let e: ReturnType<typeof evaluateCases>;
+  try {
+    e = evaluateCases(v.scenario, evaluate);
+  } catch (err) {
+    return refusedRow(err instanceof Error ? err.message : String(err));
   }
-  if (summaries.length > 0) {
-    const w = summaries[worstIndex(summaries.map((s) => s.summary))]!;
-    const anyError = rows.some((r) => r.error !== undefined);
-    rows.push({
-      variant: v.name,
-      case: WORST_CASE_ROW,
-      worstCase: true,
-      governingCase: w.name,
-      summary: { ...w.summary, pass: w.summary.pass && !anyError && summaries.every((s) => s.summary.pass) },
-    });
-  }
+  const notes = keptValueNotes(v.scenario, v.paths);
+  const rows: CompareRow[] = e.cases.map((c) => ({
+    variant: v.name,
+    case: c.name,
+    worstCase: false,
+    governingCase: null,
+    verdict: c.summary.verdict,
+    summary: c.summary,
+  }));
+  rows.push({
+    variant: v.name,
+    case: OVERALL_ROW,
+    worstCase: true,
+    governingCase: e.overall.governingCase,
+    verdict: e.overall.verdict,
+    summary: e.cases[e.governing]!.summary,
+    ...(notes.length ? { notes } : {}),
+  });
   return rows;
 }
 
@@ -119,7 +136,8 @@ export function flattenRow(r: CompareRow): FlatRow {
     edgeDilution: s?.edgeDilution ?? null,
     requiredDilution: s?.requiredDilution ?? null,
     margin: s?.margin ?? null,
-    verdict: s ? (s.pass ? "pass" : "fail") : "error",
+    verdict: r.verdict,
+    scopeReasons: s && s.scopeReasons.length > 0 ? s.scopeReasons.join(" ") : null,
     warnings: s?.warningCount ?? null,
     equationOfState: s?.equationOfState ?? null,
   };
@@ -130,23 +148,25 @@ export function flattenRow(r: CompareRow): FlatRow {
     row[`${k}ImpactDilution`] = m.impactDilution;
   }
   if (r.error) row.error = r.error;
+  if (r.notes) row.notes = r.notes.join(" ");
   return row;
 }
 
 /**
  * Sorts flat rows by a column; "-column" sorts descending. Numbers numerically, text alphabetically,
- * nulls last. Stable. Returns null when the column does not exist.
+ * nulls last. Stable. Returns null when the column is not one of the rows' own columns (names such as
+ * "constructor" or "__proto__" are never columns).
  */
 export function sortRows(rows: readonly FlatRow[], spec: string): FlatRow[] | null {
   const desc = spec.startsWith("-");
   const col = desc ? spec.slice(1) : spec;
-  if (!rows.some((r) => col in r)) return null;
+  if (!columnsOf(rows).includes(col)) return null;
   const sign = desc ? -1 : 1;
   return rows
     .map((r, i) => ({ r, i }))
     .sort((a, b) => {
-      const x = a.r[col] ?? null;
-      const y = b.r[col] ?? null;
+      const x = Object.prototype.hasOwnProperty.call(a.r, col) ? (a.r[col] ?? null) : null;
+      const y = Object.prototype.hasOwnProperty.call(b.r, col) ? (b.r[col] ?? null) : null;
       if (x === null || y === null) return x === y ? a.i - b.i : x === null ? 1 : -1;
       const c = typeof x === "number" && typeof y === "number" ? x - y : String(x).localeCompare(String(y));
       return c !== 0 ? sign * c : a.i - b.i;

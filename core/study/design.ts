@@ -241,8 +241,10 @@ export function judgeDesign(
   }
   let clearance: number | null = null;
   for (const k of p.cases) {
-    if (!k.summary.pass) {
+    if (k.summary.verdict === "exceeds") {
       reasons.push(`does not meet the limit in case "${k.name}" (margin ${k.summary.margin.toFixed(2)})`);
+    } else if (k.summary.verdict === "outside-scope") {
+      reasons.push(`outside the screening methods' scope in case "${k.name}": ${k.summary.scopeReasons.join(" ")}`);
     }
     if (k.summary.reachesSurface) reasons.push(`jet reaches the surface in case "${k.name}"`);
     const sc = k.summary.surfaceClearance;

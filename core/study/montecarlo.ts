@@ -4,15 +4,17 @@
  * Reproducibility: run i draws all of its inputs from its own stream `streamFor(seed, i)`, so a run's
  * inputs do not depend on how runs are split into chunks or workers; chunks are merged by run index.
  *
- * Ambient cases: a distribution on an `ambient.*` path describes the base ambient. In each ambient case
- * the sample is applied as a deviation from the base value (added; multiplied for lognormal), so cases
- * keep their differences; the slack-water case keeps zero current. Samples outside the physical bounds
- * of a path (e.g. negative current) are clamped and counted; azimuths wrap around. Each run uses the
- * same samples in every case (common random numbers), so the worst case of a run is the lowest-margin
- * case under one draw.
+ * Ambient cases: a distribution on an `ambient.*` path describes the stated ambient. Each draw applies to
+ * the stated conditions and to every ambient case that does not set that field itself (a case that sets
+ * it keeps its own value; the slack-water case keeps zero current) — the same rule as studies and
+ * sweeps. Samples outside the physical bounds of a path (e.g. negative current) are clamped and counted;
+ * azimuths wrap around. A draw whose scenario breaks a scenario rule (a depth below the port, …) is
+ * "refused" with the rule's message — never a pass. Each run is judged like `run`'s `overall`: the
+ * verdict over every case, governed by the deciding case.
  */
 import type { Scenario } from "../scenario/types";
 import { expandCases } from "./cases";
+import type { StudyVerdict } from "../result/contract";
 import {
   DEFAULT_SPREADS_NOTE,
   defaultUncertainInputs,
@@ -22,10 +24,14 @@ import {
   type DistributionIssue,
   type ResolvedDistribution,
 } from "./distributions";
-import { OVERRIDE_PATHS, readPath, withOverrides } from "./overrides";
+import { overridePathInfo, withOverrides } from "./overrides";
 import { percentileSummary, type PercentileSummary } from "./percentiles";
 import { streamFor } from "./random";
-import type { CaseSummary, Evaluator } from "./summary";
+import { evaluateCases, type CasesEvaluation, type Evaluator } from "./summary";
+
+/** Verdict codes in the typed arrays of a chunk. */
+export const VERDICT_CODE: Readonly<Record<StudyVerdict, number>> = { exceeds: 0, meets: 1, refused: 2, "outside-scope": 3 };
+export const VERDICT_OF_CODE: readonly StudyVerdict[] = ["exceeds", "meets", "refused", "outside-scope"];
 
 export interface MonteCarloPlan {
   readonly seed: number;
@@ -54,7 +60,7 @@ export function planMonteCarlo(scenario: Scenario, runs: number, seed: number): 
   const distributions: ResolvedDistribution[] = [];
   inputs.forEach((input, i) => {
     const variable = input.path.startsWith("ambient.") || input.path.startsWith("discharge.");
-    if (!OVERRIDE_PATHS[input.path] || !variable) {
+    if (!overridePathInfo(input.path) || !variable) {
       issues.push({
         path: `uncertainty.inputs.${i}.path`,
         message: `"${input.path}" cannot be varied in a Monte Carlo study`,
@@ -84,7 +90,7 @@ export interface MonteCarloChunk {
   /** edgeDilution[caseIndex][run − start]; NaN for a run the pipeline rejected. */
   readonly edgeDilution: Float64Array[];
   readonly margin: Float64Array[];
-  /** 1 pass, 0 fail, 2 run failed (counted as not meeting the limit). */
+  /** Verdict codes (VERDICT_CODE): 1 meets, 0 exceeds, 3 outside-scope, 2 refused (never a pass). */
   readonly pass: Uint8Array[];
   readonly clampedSamples: number;
   readonly firstError: string | null;
@@ -107,14 +113,11 @@ export function runMonteCarloChunk(
   onProgress?: (runsDone: number) => void,
   shouldStop?: () => boolean,
 ): MonteCarloChunk {
-  const cases = expandCases(scenario);
+  const nc = plan.caseNames.length;
   const n = Math.max(0, end - start);
-  const edge = cases.map(() => new Float64Array(n));
-  const margin = cases.map(() => new Float64Array(n));
-  const pass = cases.map(() => new Uint8Array(n));
-  // Base values the ambient deviations are measured from, and each case's own values.
-  const baseValues = plan.distributions.map((d) => readPath(scenario, d.path));
-  const caseValues = cases.map((c) => plan.distributions.map((d) => readPath(c.scenario, d.path)));
+  const edge = Array.from({ length: nc }, () => new Float64Array(n));
+  const margin = Array.from({ length: nc }, () => new Float64Array(n));
+  const pass = Array.from({ length: nc }, () => new Uint8Array(n));
   let clamped = 0;
   let firstError: string | null = null;
   const eos: Record<string, number> = {};
@@ -133,39 +136,34 @@ export function runMonteCarloChunk(
       };
     }
     const samples = samplesForRun(plan, start + k);
-    for (let c = 0; c < cases.length; c++) {
-      const overrides: Record<string, number> = {};
-      plan.distributions.forEach((d, i) => {
-        let v = samples[i]!;
-        if (d.path.startsWith("ambient.")) {
-          if (d.path === "ambient.currentSpeed" && cases[c]!.addedSlackWater) return;
-          const own = caseValues[c]![i]!;
-          const ref = baseValues[i]!;
-          v = d.distribution === "lognormal" && ref > 0 ? own * (v / ref) : own + (v - ref);
-        }
-        const info = OVERRIDE_PATHS[d.path]!;
-        if (info.kind === "angle" && info.max === 360) {
-          overrides[d.path] = ((v % 360) + 360) % 360; // azimuths wrap around instead of clamping
-          return;
-        }
-        const low = info.exclusiveMin ? info.min + Number.EPSILON : info.min;
-        if (v < low || v > info.max) {
-          clamped++;
-          v = Math.min(info.max, Math.max(low, v));
-        }
-        overrides[d.path] = v;
-      });
-      let s: CaseSummary | null = null;
-      try {
-        s = evaluate(withOverrides(cases[c]!.scenario, overrides));
-      } catch (err) {
-        const why = err instanceof Error ? err.message : String(err);
-        firstError ??= `run ${start + k}, case ${cases[c]!.name}: ${why}`;
+    const overrides: Record<string, number> = {};
+    plan.distributions.forEach((d, i) => {
+      let v = samples[i]!;
+      const info = overridePathInfo(d.path)!;
+      if (info.kind === "angle" && info.max === 360) {
+        overrides[d.path] = ((v % 360) + 360) % 360; // azimuths wrap around instead of clamping
+        return;
       }
+      const low = info.exclusiveMin ? info.min + Number.EPSILON : info.min;
+      if (v < low || v > info.max) {
+        clamped++;
+        v = Math.min(info.max, Math.max(low, v));
+      }
+      overrides[d.path] = v;
+    });
+    let e: CasesEvaluation | null = null;
+    try {
+      e = evaluateCases(withOverrides(scenario, overrides), evaluate);
+    } catch (err) {
+      const why = err instanceof Error ? err.message : String(err);
+      firstError ??= `run ${start + k}: ${why}`;
+    }
+    for (let c = 0; c < nc; c++) {
+      const s = e?.cases[c]?.summary;
       if (s) eos[s.equationOfState] = (eos[s.equationOfState] ?? 0) + 1;
       edge[c]![k] = s ? s.edgeDilution : Number.NaN;
       margin[c]![k] = s ? s.margin : Number.NaN;
-      pass[c]![k] = s ? (s.pass ? 1 : 0) : 2;
+      pass[c]![k] = s ? VERDICT_CODE[s.verdict] : VERDICT_CODE.refused;
     }
     onProgress?.(k + 1);
   }
@@ -189,8 +187,14 @@ export interface MonteCarloStats {
   readonly name: string;
   readonly edgeDilution: PercentileSummary;
   readonly margin: PercentileSummary;
-  /** Fraction of runs that do not meet every limit at the mixing-zone edge (failed runs count). */
+  /**
+   * Fraction of runs without a "meets" verdict (exceeds, outside-scope and refused runs all count: none
+   * of them shows that the limit is met).
+   */
   readonly probabilityOfExceedance: number;
+  /** Runs per verdict. */
+  readonly verdicts: Readonly<Record<StudyVerdict, number>>;
+  /** Refused runs (the draw broke a scenario rule); the same as `verdicts.refused`. */
   readonly failedRuns: number;
 }
 
@@ -200,7 +204,7 @@ export interface MonteCarloSummary {
   readonly usedDefaultSpreads: boolean;
   readonly notes: readonly string[];
   readonly cases: readonly MonteCarloStats[];
-  /** Per run, the lowest-margin case: its edge dilution and whether any case failed. */
+  /** Per run, the verdict over every case (as `run`'s `overall`) and the governing case's numbers. */
   readonly worstCase: MonteCarloStats;
   readonly clampedSamples: number;
   readonly firstError: string | null;
@@ -245,19 +249,28 @@ export function mergeMonteCarloChunks(
   const we = new Float64Array(total);
   const wm = new Float64Array(total);
   const wp = new Uint8Array(total);
+  // Per run, the verdict over every case as `run`'s `overall`: refused if the draw was refused, else
+  // exceeds if any case exceeds, else outside-scope if any case is, else meets; the governing case is the
+  // lowest-margin case among those with the deciding verdict.
+  const priority = [VERDICT_CODE.refused, VERDICT_CODE.exceeds, VERDICT_CODE["outside-scope"], VERDICT_CODE.meets];
   for (let i = 0; i < total; i++) {
-    let w = 0;
-    for (let c = 1; c < nc; c++) if (marginKey(margin[c]![i]!) < marginKey(margin[w]![i]!)) w = c;
-    we[i] = edge[w]![i]!;
-    wm[i] = margin[w]![i]!;
-    // 1 only when every case passes; 2 when any case's run failed; otherwise 0.
-    let p = 1;
-    for (let c = 0; c < nc; c++) {
-      const q = pass[c]![i]!;
-      if (q === 2) p = 2;
-      else if (q === 0 && p === 1) p = 0;
+    let verdict: number = VERDICT_CODE.meets;
+    for (const code of priority) {
+      let found = false;
+      for (let c = 0; c < nc; c++) if (pass[c]![i] === code) found = true;
+      if (found) {
+        verdict = code;
+        break;
+      }
     }
-    wp[i] = p;
+    let w = -1;
+    for (let c = 0; c < nc; c++) {
+      if (pass[c]![i] !== verdict) continue;
+      if (w < 0 || marginKey(margin[c]![i]!) < marginKey(margin[w]![i]!)) w = c;
+    }
+    we[i] = w >= 0 ? edge[w]![i]! : Number.NaN;
+    wm[i] = w >= 0 ? margin[w]![i]! : Number.NaN;
+    wp[i] = verdict;
   }
   return {
     caseNames: plan.caseNames,
@@ -293,18 +306,16 @@ function marginKey(m: number): number {
 }
 
 function stats(name: string, e: Float64Array, m: Float64Array, p: Uint8Array): MonteCarloStats {
-  let notMet = 0;
-  let failed = 0;
-  for (let i = 0; i < p.length; i++) {
-    if (p[i] !== 1) notMet++;
-    if (p[i] === 2) failed++;
-  }
+  const counts = [0, 0, 0, 0];
+  for (let i = 0; i < p.length; i++) counts[p[i]!] = (counts[p[i]!] ?? 0) + 1;
+  const verdicts = Object.fromEntries(VERDICT_OF_CODE.map((v, code) => [v, counts[code] ?? 0])) as Record<StudyVerdict, number>;
   return {
     name,
     edgeDilution: percentileSummary(e),
     margin: percentileSummary(m),
-    probabilityOfExceedance: p.length > 0 ? notMet / p.length : Number.NaN,
-    failedRuns: failed,
+    probabilityOfExceedance: p.length > 0 ? (p.length - verdicts.meets) / p.length : Number.NaN,
+    verdicts,
+    failedRuns: verdicts.refused,
   };
 }
 
@@ -321,7 +332,7 @@ export function summariseMonteCarlo(
     notes: [...plan.notes, ...[equationOfStateNote(m.equationsOfState)].filter((x): x is string => x !== null)],
     equationsOfState: m.equationsOfState,
     cases: plan.caseNames.map((name, c) => stats(name, m.edgeDilution[c]!, m.margin[c]!, m.pass[c]!)),
-    worstCase: stats("worst case", m.worstEdgeDilution, m.worstMargin, m.worstPass),
+    worstCase: stats("overall", m.worstEdgeDilution, m.worstMargin, m.worstPass),
     clampedSamples: m.clampedSamples,
     firstError: m.firstError,
   };

@@ -10,8 +10,14 @@
  * A profile (non-uniform ambient) is shifted as a whole by `ambient.salinity` / `ambient.temperature`
  * so that its value at the seabed becomes the given one; stratification is kept.
  */
-import type { AmbientInput, DiffuserInput, ProfilePoint, Scenario } from "../scenario/types";
+import type { AmbientCase, AmbientCaseField, AmbientInput, DiffuserInput, ProfilePoint, Scenario } from "../scenario/types";
 import type { QuantityKind } from "../units";
+import { FIELD_BOUNDS, fieldBounds, withinBounds } from "../scenario/bounds";
+import { expectationFor } from "../scenario/fields";
+import { issue } from "../scenario/issue";
+import { scenarioRuleIssues } from "../scenario/rules";
+import { ScenarioError } from "../scenario/parse";
+import { scenarioFileSchema } from "../scenario/schema";
 
 export interface OverridePathInfo {
   readonly kind: QuantityKind;
@@ -22,33 +28,30 @@ export interface OverridePathInfo {
   readonly exclusiveMin?: boolean;
 }
 
-/** Every path that can be overridden on a normalised scenario, with its quantity kind and SI bounds. */
-export const OVERRIDE_PATHS: Readonly<Record<string, OverridePathInfo>> = {
-  "ambient.depth": { kind: "length", label: "water depth", min: 0, max: 1000, exclusiveMin: true },
-  "ambient.salinity": { kind: "salinity", label: "ambient salinity", min: 0, max: 80 },
-  "ambient.temperature": { kind: "temperature", label: "ambient temperature", min: -2, max: 60 },
-  "ambient.currentSpeed": { kind: "speed", label: "current speed", min: 0, max: 5 },
-  "ambient.currentDirection": { kind: "angle", label: "current direction", min: 0, max: 360 },
-  "ambient.bedSlope": { kind: "ratio", label: "bed slope", min: 0, max: 0.5 },
-  "discharge.flow": { kind: "flow", label: "brine flow", min: 0, max: 100, exclusiveMin: true },
-  "discharge.salinity": { kind: "salinity", label: "brine salinity", min: 0, max: 160 },
-  "discharge.temperature": { kind: "temperature", label: "brine temperature", min: -2, max: 60 },
-  "diffuser.portCount": { kind: "ratio", label: "port count", min: 1, max: 1000, integer: true },
-  "diffuser.portDiameter": { kind: "smallLength", label: "port diameter", min: 0.005, max: 3 },
-  "diffuser.portAngle": { kind: "angle", label: "port angle", min: 0, max: 90 },
-  "diffuser.portHeight": { kind: "length", label: "port height", min: 0, max: 100 },
-  "diffuser.portSpacing": { kind: "length", label: "port spacing", min: 0, max: 1000, exclusiveMin: true },
-  "diffuser.portAzimuth": { kind: "angle", label: "port azimuth", min: 0, max: 360 },
-  "diffuser.diffuserAzimuth": { kind: "angle", label: "diffuser azimuth", min: 0, max: 360 },
-  "diffuser.length": { kind: "length", label: "diffuser length", min: 0, max: 10000 },
-  "mixingZone.radius": {
-    kind: "length",
-    label: "mixing-zone radius",
-    min: 0,
-    max: 20000,
-    exclusiveMin: true,
-  },
-};
+/**
+ * Every path that can be overridden on a normalised scenario, with its quantity kind and SI bounds:
+ * derived from the one declaration of field bounds (core/scenario/bounds.ts) the file schema is built from.
+ */
+export const OVERRIDE_PATHS: Readonly<Record<string, OverridePathInfo>> = Object.freeze(
+  Object.fromEntries(
+    Object.entries(FIELD_BOUNDS).map(([path, b]) => [
+      path,
+      Object.freeze({
+        kind: b.kind,
+        label: b.what,
+        min: b.min,
+        max: b.max,
+        ...("integer" in b && b.integer ? { integer: true } : {}),
+        ...("exclusiveMin" in b && b.exclusiveMin ? { exclusiveMin: true } : {}),
+      }),
+    ]),
+  ),
+);
+
+/** The override table's entry for a path, looked up as an own key only ("constructor", "__proto__" are not paths). */
+export function overridePathInfo(path: string): OverridePathInfo | undefined {
+  return Object.prototype.hasOwnProperty.call(OVERRIDE_PATHS, path) ? OVERRIDE_PATHS[path] : undefined;
+}
 
 export class OverrideError extends Error {
   constructor(
@@ -62,16 +65,14 @@ export class OverrideError extends Error {
 
 export type Overrides = Readonly<Record<string, number>>;
 
-/** Checks a path and value against `OVERRIDE_PATHS`; returns a message or null. */
+/**
+ * Checks a path and value against the override table; returns what is wrong (the path's own message, as
+ * the file reader words it: "<value> must be …") or null.
+ */
 export function overrideIssue(path: string, value: number): string | null {
-  const info = OVERRIDE_PATHS[path];
-  if (!info) return `is not a path that can be varied; use one of ${Object.keys(OVERRIDE_PATHS).join(", ")}`;
-  if (!Number.isFinite(value)) return "must be a finite number";
-  if (info.integer && !Number.isInteger(value)) return `must be a whole number (${info.label})`;
-  const low = info.exclusiveMin ? value <= info.min : value < info.min;
-  if (low || value > info.max) {
-    return `${info.label} ${value} is outside ${info.exclusiveMin ? "(" : "["}${info.min}, ${info.max}] (SI)`;
-  }
+  const b = fieldBounds(path);
+  if (!b) return `is not a path that can be varied; use one of ${Object.keys(OVERRIDE_PATHS).join(", ")}`;
+  if (!withinBounds(b, value)) return issue(path, value, expectationFor(b)).message.slice(path.length + 2);
   return null;
 }
 
@@ -82,7 +83,7 @@ function bottom(profile: readonly ProfilePoint[], key: "salinity" | "temperature
 
 /** Reads the SI value at a path of a normalised scenario (ambient salinity/temperature: at the seabed). */
 export function readPath(s: Scenario, path: string): number {
-  if (!OVERRIDE_PATHS[path]) throw new OverrideError(path, overrideIssue(path, 0) ?? "unknown path");
+  if (!overridePathInfo(path)) throw new OverrideError(path, overrideIssue(path, 0) ?? "unknown path");
   const [group, field] = path.split(".") as [string, string];
   if (group === "ambient" && (field === "salinity" || field === "temperature")) {
     return bottom(s.ambient.profile, field);
@@ -94,12 +95,18 @@ export function readPath(s: Scenario, path: string): number {
   return v;
 }
 
-/** Returns a new, frozen scenario with the overrides applied (SI values). Throws OverrideError. */
+/**
+ * Returns a new, frozen scenario with the overrides applied (SI values). An `ambient.*` override applies to
+ * the stated ambient and to every ambient case that does not set that field itself. The result is checked
+ * against the scenario rules (core/scenario/rules.ts), the same ones the file reader applies: a broken
+ * result throws ScenarioError with the same message as `run`; an unknown path throws OverrideError.
+ */
 export function withOverrides(s: Scenario, overrides: Overrides): Scenario {
   const entries = Object.entries(overrides);
   for (const [path, value] of entries) {
-    const issue = overrideIssue(path, value);
-    if (issue) throw new OverrideError(path, issue);
+    const b = fieldBounds(path);
+    if (!b) throw new OverrideError(path, overrideIssue(path, value) ?? "unknown path");
+    if (!withinBounds(b, value)) throw new ScenarioError([issue(path, value, expectationFor(b))]);
   }
   const ambientPatch: Record<string, number> = {};
   const dischargePatch: Record<string, number> = {};
@@ -117,11 +124,7 @@ export function withOverrides(s: Scenario, overrides: Overrides): Scenario {
     out = {
       ...out,
       ambient: patchAmbient(out.ambient, ambientPatch),
-      ambientCases: out.ambientCases.map((c) => ({
-        ...patchAmbient(c, ambientPatch),
-        name: c.name,
-        weight: c.weight,
-      })),
+      ambientCases: out.ambientCases.map((c) => patchCase(c, ambientPatch)),
     };
   }
   if (Object.keys(dischargePatch).length > 0) {
@@ -134,7 +137,17 @@ export function withOverrides(s: Scenario, overrides: Overrides): Scenario {
     out = { ...out, diffuser: patchDiffuser(out.diffuser, diffuserPatch) };
   }
   if (radius !== undefined) out = { ...out, mixingZone: { ...out.mixingZone, radius } };
+  const broken = scenarioRuleIssues(out);
+  if (broken.length > 0) throw new ScenarioError(broken);
   return deepFreeze(out);
+}
+
+/** An ambient case under an ambient patch: the fields the case sets itself are kept. */
+function patchCase(c: AmbientCase, p: Record<string, number>): AmbientCase {
+  const own: Record<string, number> = {};
+  for (const [k, v] of Object.entries(p)) if (!c.sets.includes(k as AmbientCaseField)) own[k] = v;
+  if (Object.keys(own).length === 0) return c;
+  return { ...patchAmbient(c, own), name: c.name, weight: c.weight, sets: c.sets };
 }
 
 function patchAmbient<T extends AmbientInput>(a: T, p: Record<string, number>): T {
@@ -238,23 +251,74 @@ function deepFreeze<T>(value: T): T {
   return value;
 }
 
+/** Keys no path may use whatever the schema says: they reach an object's prototype. */
+const PROTOTYPE_KEYS = new Set(Object.getOwnPropertyNames(Object.prototype).concat(["__proto__", "prototype"]));
+
+interface ZodNode {
+  readonly _zod: { readonly def: { readonly type: string; readonly shape?: Record<string, ZodNode>; readonly innerType?: ZodNode; readonly element?: ZodNode } };
+}
+
 /**
- * Sets a dotted path in a RAW scenario object (as read from JSON), returning a deep copy. Numeric
- * segments index arrays ("ambientCases.0.currentSpeed"). Used by studies, where override values may be
- * unit strings ("12 m") and the scenario is re-read by the scenario parser afterwards.
+ * Why a dotted path cannot be set in a raw scenario, or null. Each segment must be an own field of the
+ * scenario format's fixed table at that level (the zod schema), and each index must lie within the
+ * array the raw scenario already has ("ambientCases.0.currentSpeed" needs at least one case).
+ */
+export function rawPathIssue(raw: unknown, path: string): string | null {
+  const parts = path.split(".");
+  let node: ZodNode | null = scenarioFileSchema as unknown as ZodNode;
+  let value: unknown = raw;
+  for (let i = 0; i < parts.length; i++) {
+    const key = parts[i]!;
+    const here = parts.slice(0, i + 1).join(".");
+    if (key === "" || PROTOTYPE_KEYS.has(key)) return `"${key}" is not a field of the scenario format (in ${JSON.stringify(here.slice(0, 80))})`;
+    while (node && node._zod.def.type === "optional" && node._zod.def.innerType) node = node._zod.def.innerType;
+    const type = node?._zod.def.type;
+    if (type === "object") {
+      const shape: Record<string, ZodNode> = node!._zod.def.shape!;
+      if (!Object.prototype.hasOwnProperty.call(shape, key)) {
+        const where = i === 0 ? "the scenario" : parts.slice(0, i).join(".");
+        return `"${key}" is not a field of ${where}; fields: ${Object.keys(shape).join(", ")}`;
+      }
+      node = shape[key]!;
+      value = value !== null && typeof value === "object" && Object.prototype.hasOwnProperty.call(value, key) ? (value as Record<string, unknown>)[key] : undefined;
+    } else if (type === "array") {
+      if (!/^\d+$/.test(key)) return `"${key}" must be an index into ${parts.slice(0, i).join(".")}`;
+      const length = Array.isArray(value) ? value.length : 0;
+      const index = Number(key);
+      if (index >= length) return `index ${key} is beyond ${parts.slice(0, i).join(".")}, which has ${length} entr${length === 1 ? "y" : "ies"} (indices from 0)`;
+      node = node!._zod.def.element!;
+      value = (value as unknown[])[index];
+    } else if (type === "record") {
+      // Free-form blocks (the design constraints) are validated by their own reader.
+      if (!/^[A-Za-z][A-Za-z0-9]*$/.test(key)) return `"${key}" is not a valid field name`;
+      node = null;
+      value = undefined;
+    } else if (node === null) {
+      if (!/^[A-Za-z][A-Za-z0-9]*$/.test(key)) return `"${key}" is not a valid field name`;
+    } else {
+      return `${parts.slice(0, i).join(".")} is a value, not a section: it has no field "${key}"`;
+    }
+  }
+  return null;
+}
+
+/**
+ * Sets a dotted path in a RAW scenario object (as read from JSON), returning a deep copy. The path is
+ * checked first (`rawPathIssue`): own fields of the scenario format only, indices within the arrays.
+ * Used by studies, where override values may be unit strings ("12 m") and the scenario is re-read by the
+ * scenario parser afterwards.
  */
 export function withRawOverride(raw: unknown, path: string, value: unknown): unknown {
+  const problem = rawPathIssue(raw, path);
+  if (problem) throw new OverrideError(path, problem);
   const copy: unknown = JSON.parse(JSON.stringify(raw)); // raw scenarios are JSON data
   const parts = path.split(".");
-  if (parts.some((p) => p === "" || p === "__proto__" || p === "constructor" || p === "prototype")) {
-    throw new OverrideError(path, "is not a valid path");
-  }
   let node = copy as Record<string, unknown>;
   for (let i = 0; i < parts.length - 1; i++) {
     const key = parts[i]!;
-    let next = node[key];
+    let next = Object.prototype.hasOwnProperty.call(node, key) ? node[key] : undefined;
     if (next === undefined) {
-      next = /^\d+$/.test(parts[i + 1]!) ? [] : {};
+      next = {};
       node[key] = next;
     }
     if (typeof next !== "object" || next === null) {

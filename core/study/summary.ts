@@ -2,8 +2,9 @@
  * The few numbers a study keeps from each pipeline run, and the evaluator protocol the study loops
  * call. Studies only need a summary; the full result stays available to whoever runs one scenario.
  */
-import type { BrinefieldResult } from "../result/contract";
+import type { BrinefieldResult, CaseKind, OverallResult, Verdict } from "../result/contract";
 import type { Scenario } from "../scenario/types";
+import { expandCases, overallFromCases, runCases } from "../cases";
 
 export interface MethodSummary {
   readonly method: string;
@@ -16,9 +17,13 @@ export interface MethodSummary {
 export interface CaseSummary {
   readonly edgeDilution: number;
   readonly requiredDilution: number;
-  /** Edge dilution ÷ required dilution (≥ 1 passes). */
+  /** Edge dilution ÷ required dilution (≥ 1 meets when in scope). */
   readonly margin: number;
+  /** True only when `verdict` is "meets". */
   readonly pass: boolean;
+  readonly verdict: Verdict;
+  /** Why the methods do not apply (non-empty exactly when outside-scope). */
+  readonly scopeReasons: readonly string[];
   readonly governingConstituent: string;
   readonly equationOfState: string;
   readonly warningCount: number;
@@ -37,7 +42,7 @@ export type Evaluator = (scenario: Scenario) => CaseSummary;
 
 const SURFACE_CODES = new Set(["jet-reaches-surface", "surface-contact"]);
 
-export function summariseResult(result: BrinefieldResult, scenario: Scenario): CaseSummary {
+export function summariseResult(result: Omit<BrinefieldResult, "cases" | "overall">, scenario: Scenario): CaseSummary {
   const methods = result.nearField.map((m) => ({
     method: m.method,
     maxRiseHeight: m.maxRiseHeight,
@@ -58,6 +63,8 @@ export function summariseResult(result: BrinefieldResult, scenario: Scenario): C
     requiredDilution: result.compliance.requiredDilution,
     margin: result.compliance.margin,
     pass: result.compliance.pass,
+    verdict: result.compliance.verdict,
+    scopeReasons: result.compliance.scopeReasons,
     governingConstituent: result.compliance.governingConstituent,
     equationOfState: result.densities.equationOfState.name,
     warningCount: result.warnings.length,
@@ -82,4 +89,32 @@ export function worstIndex(summaries: readonly CaseSummary[]): number {
 /** NaN margins (failed runs) sort as worst. */
 function marginKey(s: CaseSummary): number {
   return Number.isNaN(s.margin) ? Number.NEGATIVE_INFINITY : s.margin;
+}
+
+export interface CaseEvaluation {
+  readonly name: string;
+  readonly kind: CaseKind;
+  readonly summary: CaseSummary;
+}
+
+export interface CasesEvaluation {
+  readonly cases: readonly CaseEvaluation[];
+  readonly overall: OverallResult;
+  /** Index into `cases` of the governing case. */
+  readonly governing: number;
+}
+
+/**
+ * Every ambient case of a scenario (stated, listed, slack water: core/cases) through one evaluator, and
+ * the overall verdict over them — what `run` reports as `cases` and `overall`. Throws ScenarioError when
+ * a case breaks a rule.
+ */
+export function evaluateCases(scenario: Scenario, evaluate: Evaluator): CasesEvaluation {
+  const specs = expandCases(scenario);
+  const summaries = runCases(specs, (c) => evaluate(c.scenario));
+  const cases = specs.map((c, i) => ({ name: c.name, kind: c.kind, summary: summaries[i]! }));
+  const overall = overallFromCases(
+    cases.map((c) => ({ name: c.name, verdict: c.summary.verdict, margin: c.summary.margin, edgeDilution: c.summary.edgeDilution })),
+  );
+  return { cases, overall, governing: cases.findIndex((c) => c.name === overall.governingCase) };
 }

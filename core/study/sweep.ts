@@ -5,7 +5,8 @@
  */
 import { quantityToSI } from "../units";
 import type { PointEvaluation } from "./evaluate-point";
-import { OVERRIDE_PATHS, overrideIssue, type Overrides } from "./overrides";
+import type { StudyVerdict } from "../result/contract";
+import { overrideIssue, overridePathInfo, type Overrides } from "./overrides";
 
 export interface SweepAxis {
   readonly path: string;
@@ -40,8 +41,8 @@ export function axisFromParts(
   toRaw: unknown,
   stepsRaw: unknown,
 ): { ok: true; axis: SweepAxis } | { ok: false; message: string } {
-  const info = OVERRIDE_PATHS[path];
-  if (!info) return { ok: false, message: `${path}: ${overrideIssue(path, 0)}` };
+  const info = overridePathInfo(path);
+  if (!info) return { ok: false, message: `${path.slice(0, 80)}: ${overrideIssue(path, 0)}` };
   const steps = typeof stepsRaw === "number" ? stepsRaw : Number(String(stepsRaw).trim());
   if (!Number.isInteger(steps) || steps < 1 || steps > MAX_SWEEP_STEPS) {
     return { ok: false, message: `${path}: steps must be a whole number from 1 to ${MAX_SWEEP_STEPS}` };
@@ -59,7 +60,7 @@ export function axisFromParts(
 
 /** Evenly spaced values from `from` to `to` inclusive; whole numbers for integer paths. */
 export function axisValues(axis: SweepAxis): number[] {
-  const info = OVERRIDE_PATHS[axis.path];
+  const info = overridePathInfo(axis.path);
   const out: number[] = [];
   for (let i = 0; i < axis.steps; i++) {
     const v = axis.steps === 1 ? axis.from : axis.from + ((axis.to - axis.from) * i) / (axis.steps - 1);
@@ -100,7 +101,12 @@ export interface SweepRow {
   readonly edgeDilution: number;
   readonly requiredDilution: number;
   readonly margin: number;
+  /** True only when `verdict` is "meets". */
   readonly pass: boolean;
+  /** The overall verdict over every ambient case (as `run`'s `overall`), or "refused". */
+  readonly verdict: StudyVerdict;
+  /** Why the governing case is outside the methods' scope (empty otherwise). */
+  readonly scopeReasons: readonly string[];
   /** Equations of state used, one per ambient case, distinct names joined by " / ". */
   readonly equationOfState: string;
   readonly error?: string;
@@ -118,6 +124,8 @@ export function sweepRows(grid: readonly SweepGridPoint[], points: readonly Poin
         requiredDilution: Number.NaN,
         margin: Number.NaN,
         pass: false,
+        verdict: "refused",
+        scopeReasons: [],
         equationOfState: "",
         error: p.error ?? "not run",
       };
@@ -131,7 +139,9 @@ export function sweepRows(grid: readonly SweepGridPoint[], points: readonly Poin
       edgeDilution: w.summary.edgeDilution,
       requiredDilution: w.summary.requiredDilution,
       margin: w.summary.margin,
-      pass: p.cases.every((c) => c.summary.pass),
+      pass: p.verdict === "meets",
+      verdict: p.verdict,
+      scopeReasons: w.summary.scopeReasons,
       equationOfState: eos,
     };
   });

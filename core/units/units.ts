@@ -84,6 +84,8 @@ export function quantityToSI(raw: unknown, kind: QuantityKind): QuantityParse {
   if (typeof raw !== "string") return { ok: false, message: `must be a number in ${siLabel(kind)} or a string with a unit` };
   const text = raw.trim();
   if (text === "") return { ok: false, message: "is empty" };
+  // Number() and mathjs read hex, octal and binary ("0x1E"): a typo or a trick, never a quantity.
+  if (/^[-+]?0[xob]/i.test(text)) return { ok: false, message: "must be a decimal number (hex, octal and binary forms are not accepted)" };
   const plain = Number(text);
   if (Number.isFinite(plain)) return { ok: true, value: plain, converted: false };
   if (!Number.isNaN(plain)) return { ok: false, message: "is not a finite number" };

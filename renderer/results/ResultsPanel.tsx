@@ -2,7 +2,7 @@
  * Results: the verdict with its margin, headline numbers per near-field method side by side, the
  * mixing-zone edge, multiport regime, discharge properties, warnings and the sources of every method.
  */
-import type { BrinefieldResult } from "../../core/result/contract";
+import type { BrinefieldResult, Verdict } from "../../core/result/contract";
 import type { NearFieldMethodResult } from "../../core/nearfield/types";
 import { formatNumber, type QuantityKind, type UnitSystem } from "../../core/units";
 import { formatQuantity } from "../inputs/quantityText";
@@ -43,16 +43,53 @@ const ROWS: { label: string; cell: (m: NearFieldMethodResult, s: UnitSystem) => 
   { label: "Near-field dilution", cell: (m) => <D value={m.nearFieldDilution} /> },
 ];
 
+/** Class and words of a verdict: outside-scope has its own look, never the colour of a pass. */
+const VERDICT_LOOK: Record<Verdict, { cls: string; word: string }> = {
+  meets: { cls: "pass", word: "Meets limit" },
+  exceeds: { cls: "fail", word: "Exceeds limit" },
+  "outside-scope": { cls: "scope", word: "Outside scope" },
+};
+
 export function VerdictBanner({ result }: { result: BrinefieldResult }) {
   const c = result.compliance;
+  const o = result.overall ?? { verdict: c.verdict, governingCase: "stated", margin: c.margin, edgeDilution: result.mixingZone.dilution };
+  const look = VERDICT_LOOK[o.verdict];
+  const cases = result.cases ?? [];
+  const reasons = [...new Set(cases.flatMap((k) => k.scopeReasons.map((r) => (k.name === "stated" ? r : `${k.name}: ${r}`))))];
   return (
-    <div className={`verdict ${c.pass ? "pass" : "fail"}`} data-role="verdict">
-      <div className="verdict-word">{c.pass ? "Meets limit" : "Exceeds limit"}</div>
-      <div className="verdict-detail">
-        edge dilution <b>{formatNumber(result.mixingZone.dilution, 3)}×</b> vs required <b>{formatNumber(c.requiredDilution, 3)}×</b>
-        {" · "}<span title="edge dilution ÷ required dilution; above 1 meets the limit">margin <b>{formatNumber(c.margin, 3)}×</b></span>
-        {c.governingConstituent ? <> · governed by {c.governingConstituent}</> : null}
+    <div className={`verdict ${look.cls}`} data-role="verdict" data-verdict={o.verdict}>
+      <div className="verdict-word">
+        {look.word} <span className="verdict-state">({o.verdict}, over {cases.length || 1} ambient case{cases.length === 1 ? "" : "s"})</span>
       </div>
+      <div className="verdict-detail">
+        governing case <b>{o.governingCase}</b>: edge dilution <b>{formatNumber(o.edgeDilution, 3)}×</b>
+        {" · "}<span title="edge dilution ÷ required dilution; above 1 meets the limit">margin <b>{formatNumber(o.margin, 3)}×</b></span>
+      </div>
+      <div className="verdict-detail">
+        stated conditions: <b>{c.verdict}</b>, edge dilution {formatNumber(result.mixingZone.dilution, 3)}× vs required {formatNumber(c.requiredDilution, 3)}×, margin{" "}
+        {formatNumber(c.margin, 3)}×{c.governingConstituent ? <> · governed by {c.governingConstituent}</> : null}
+      </div>
+      {o.verdict === "outside-scope" ? (
+        <ul className="scope-reasons" data-role="scope-reasons">
+          {reasons.map((r) => (
+            <li key={r}>{r}</li>
+          ))}
+        </ul>
+      ) : null}
+      {cases.length > 1 ? (
+        <table className="verdict-cases" data-role="verdict-cases">
+          <tbody>
+            {cases.map((k) => (
+              <tr key={k.name} className={VERDICT_LOOK[k.verdict].cls}>
+                <th scope="row">{k.name}</th>
+                <td>{formatNumber(k.edgeDilution, 3)}×</td>
+                <td>margin {formatNumber(k.margin, 3)}×</td>
+                <td>{k.verdict}</td>
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      ) : null}
     </div>
   );
 }
@@ -130,7 +167,7 @@ export function ResultsPanel({ result, unitSystem: s }: { result: BrinefieldResu
           </thead>
           <tbody>
             {result.compliance.constituents.map((c) => (
-              <tr key={c.constituent} className={c.pass ? "pass" : "fail"}>
+              <tr key={c.constituent} className={result.compliance.verdict === "outside-scope" ? "scope" : c.pass ? "pass" : "fail"}>
                 <th scope="row" title={c.limit}>
                   <b>{c.constituent}</b>
                   <span className="limit-text">{c.limit}</span>
@@ -138,7 +175,7 @@ export function ResultsPanel({ result, unitSystem: s }: { result: BrinefieldResu
                 <td><D value={c.requiredDilution} /></td>
                 <td><D value={c.edgeDilution} /></td>
                 <td><D value={c.margin} /></td>
-                <td className="badge">{c.pass ? "meets" : "exceeds"}</td>
+                <td className="badge">{result.compliance.verdict === "outside-scope" ? "outside-scope" : c.pass ? "meets" : "exceeds"}</td>
               </tr>
             ))}
           </tbody>

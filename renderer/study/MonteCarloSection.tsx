@@ -99,7 +99,7 @@ export function MonteCarloSection({ scenario, busy, runJob, poolSize }: MonteCar
           <table>
             <thead>
               <tr>
-                {["case", "edge dilution P5", "P50", "P95", "P(not meeting limit)", "failed runs"].map((h) => (
+                {["case", "edge dilution P5", "P50", "P95", "P(not meeting limit)", "meets", "exceeds", "outside-scope", "refused"].map((h) => (
                   <th key={h} className={h === "case" ? "text" : ""}>
                     {h}
                   </th>
@@ -114,7 +114,10 @@ export function MonteCarloSection({ scenario, busy, runJob, poolSize }: MonteCar
                   <td>{formatNumber(c.edgeDilution.p50)}×</td>
                   <td>{formatNumber(c.edgeDilution.p95)}×</td>
                   <td>{formatNumber(100 * c.probabilityOfExceedance, 3)} %</td>
-                  <td>{c.failedRuns}</td>
+                  <td>{c.verdicts.meets}</td>
+                  <td>{c.verdicts.exceeds}</td>
+                  <td>{c.verdicts["outside-scope"]}</td>
+                  <td>{c.verdicts.refused}</td>
                 </tr>
               ))}
             </tbody>

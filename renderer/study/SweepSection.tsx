@@ -124,6 +124,20 @@ export function SweepSection({
         />
       ) : null}
       {result ? (
+        <p className="study-note" data-role="study-tally">
+          {`Points: ${result.rows.length} — ` +
+            (["meets", "exceeds", "outside-scope", "refused"] as const)
+              .map((v) => `${v} ${result.rows.filter((r) => r.verdict === v).length}`)
+              .join(", ") +
+            ". "}
+          {result.rows
+            .filter((r) => r.verdict === "refused")
+            .slice(0, 3)
+            .map((r) => `Refused: ${r.error ?? ""}`)
+            .join(" ")}
+        </p>
+      ) : null}
+      {result ? (
         <p className="study-note" data-role="study-eos">
           {crossings.length === 0
             ? `Equation of state at every point: ${result.rows[0]?.equationOfState ?? "—"}.`

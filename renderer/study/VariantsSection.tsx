@@ -84,7 +84,10 @@ export function VariantsSection({ scenarioFile, unitSystem, busy, runJob }: Vari
         Each variant changes the scenario by “path = value” entries, e.g.
         “ambient.depth = 40 ft; diffuser.portCount = 6”. Give the unit: a plain number is read in SI
         (m, m/s, m³/s, g/kg, °C) whichever units the app shows.
-        Every variant runs under every ambient case; the worst case is the one with the lowest margin.
+        Every variant runs under every ambient case — the stated conditions, each listed case and slack
+        water — and its “overall” row gives the verdict over them, as a single run does (meets, exceeds,
+        outside-scope; refused when the variant breaks a scenario rule). An ambient change applies to the
+        stated conditions and to every case that does not set that field itself.
       </p>
       {variants.map((v, i) => (
         <div className="study-form" key={i}>
@@ -154,12 +157,12 @@ export function VariantsSection({ scenarioFile, unitSystem, busy, runJob }: Vari
             </thead>
             <tbody>
               {sorted.map((r, i) => (
-                <tr key={i} className={r.case === "worst case" ? "worst" : ""}>
+                <tr key={i} className={r.case === "overall" ? "worst" : ""}>
                   {columns.map((c) => {
                     const raw = r[c];
                     // Lengths are SI in the rows (and the CSV); the table shows the chosen unit system.
                     const v = typeof raw === "number" && isLengthColumn(c) ? toLength(raw) : raw;
-                    const verdict = v === "pass" ? "pass" : "fail";
+                    const verdict = v === "meets" ? "pass" : v === "exceeds" ? "fail" : v === "outside-scope" ? "scope" : "refused";
                     const cls = c === "verdict" ? verdict : typeof v === "number" ? "" : "text";
                     const shown = cellText(v);
                     return (

@@ -57,6 +57,7 @@ export function SweepLineChart({ rows, axis }: { rows: readonly SweepRow[]; axis
       y: r.edgeDilution,
       req: r.requiredDilution,
       pass: r.pass,
+      verdict: r.verdict,
     }));
   const xs = extent(pts, (p) => p.x) as [number, number] | [undefined, undefined];
   const ys = [...pts.map((p) => p.y), ...pts.map((p) => p.req)].filter((v) => v > 0);
@@ -90,7 +91,9 @@ export function SweepLineChart({ rows, axis }: { rows: readonly SweepRow[]; axis
         <path d={req(pts) ?? ""} className="study-limit" />
         <path d={edge(pts) ?? ""} className="study-line" />
         {pts.map((p, i) => (
-          <circle key={i} cx={x(p.x)} cy={y(p.y)} r={3} className={p.pass ? "study-pass" : "study-fail"} />
+          <circle key={i} cx={x(p.x)} cy={y(p.y)} r={3} className={p.verdict === "meets" ? "study-pass" : p.verdict === "outside-scope" ? "study-scope" : "study-fail"}>
+            <title>{p.verdict}</title>
+          </circle>
         ))}
         <XLabel w={w} h={h} text={axis.label} />
         <YLabel h={h} text="edge dilution, governing case (×) — dashed: required" />

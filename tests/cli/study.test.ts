@@ -82,7 +82,8 @@ describe("brinefield uncertainty", () => {
       expect(typeof one.worstCase.edgeDilution[k], `worstCase.edgeDilution.${k}`).toBe("number");
     }
     expect(typeof one.worstCase.probabilityOfExceedance, "probabilityOfExceedance").toBe("number");
-    expect(one.cases.map((c: { name: string }) => c.name), "per ambient case plus slack water").toEqual([
+    expect(one.cases.map((c: { name: string }) => c.name), "the stated conditions, each ambient case, slack water").toEqual([
+      "stated",
       "spring tide",
       "neap tide",
       "slack water",
@@ -202,10 +203,11 @@ describe("brinefield compare", () => {
     expect(new Set(j.rows.map((r: { variant: string }) => r.variant)), "base and both variants").toEqual(
       new Set(["base", "deeper", "eight ports"]),
     );
-    expect(j.rows.length, "3 variants × (3 cases + worst case)").toBe(12);
+    expect(j.caution, "the caution in the JSON").toMatch(/^Caution: screening estimate only/);
+    expect(j.rows.length, "3 variants × (stated + 2 cases + slack water + overall)").toBe(15);
     const margins = j.rows.map((r: { margin: number }) => r.margin);
     expect([...margins].sort((a, b) => b - a), "sorted by descending margin").toEqual(margins);
-    expect(csvParse(f.files.get("rows.csv")!.replace(/^.*\n/, "")).length, "CSV rows after the caution row").toBe(12);
+    expect(csvParse(f.files.get("rows.csv")!.replace(/^.*\n/, "")).length, "CSV rows after the caution row").toBe(15);
   });
 
   it("names the path of a bad study", WORKERS, async () => {

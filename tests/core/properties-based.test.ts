@@ -11,7 +11,9 @@ import { validScenarioFile, corruption } from "../helpers/arbitraries";
 const RUNS = Number(process.env.BRINEFIELD_PROPERTY_RUNS ?? 1000);
 
 describe("any valid scenario", () => {
-  it(`gives finite, physically ordered results and never throws (${RUNS} random scenarios)`, () => {
+  // checkValidScenario also checks the verdicts: pass === (verdict === "meets"), scope reasons exactly
+  // for outside-scope, and no "meets" with a dense jet rising to or above the water surface.
+  it(`gives finite, physically ordered results, consistent verdicts and never throws (${RUNS} random scenarios)`, () => {
     fc.assert(fc.property(validScenarioFile, (raw) => checkValidScenario(raw)), { numRuns: RUNS, seed: 20261202 });
   });
 });

@@ -2,6 +2,8 @@
 import { expect } from "vitest";
 import { parseScenario, ScenarioError } from "../../core/scenario/parse";
 import { runScenario } from "../../core/pipeline";
+import type { BrinefieldResult } from "../../core/result/contract";
+import type { Scenario } from "../../core/scenario/types";
 
 const finite = (v: number | null | undefined) => v === null || v === undefined || Number.isFinite(v);
 
@@ -47,6 +49,43 @@ export function checkValidScenario(raw: unknown): void {
     expect(c.concentration >= lo && c.concentration <= hi, `${c.constituent} ${c.concentration} between background and discharge`).toBe(true);
   }
   expect(Number.isFinite(r.compliance.margin) || r.compliance.margin === Number.POSITIVE_INFINITY, "margin is a number").toBe(true);
+  checkVerdicts(r, parsed.scenario);
+}
+
+/**
+ * The verdict contract (common practice of a screening tool, no source): three states; `pass` exactly
+ * for "meets"; scope reasons exactly for "outside-scope"; no "meets" when a dense jet rises to or above
+ * the water surface; outside-scope results keep their numbers; `overall` is the deciding case.
+ */
+export function checkVerdicts(r: BrinefieldResult, s: Scenario): void {
+  const c = r.compliance;
+  expect(["meets", "exceeds", "outside-scope"], "verdict is one of the three words").toContain(c.verdict);
+  expect(c.pass, `pass (${c.pass}) equals verdict === "meets" (${c.verdict})`).toBe(c.verdict === "meets");
+  expect(c.scopeReasons.length > 0, `scope reasons exactly when outside-scope (${c.verdict}: ${c.scopeReasons.join(" | ")})`).toBe(c.verdict === "outside-scope");
+  if (c.verdict === "meets") {
+    for (const m of r.nearField) {
+      if (!m.available || m.maxRiseHeight === null) continue;
+      const top = s.diffuser.portHeight + m.maxRiseHeight;
+      expect(top < s.ambient.depth, `"meets" with the ${m.method} jet's upper edge at ${top} m in ${s.ambient.depth} m of water`).toBe(true);
+    }
+    expect(r.nearField.some((m) => m.available), "a meets needs at least one available method").toBe(true);
+    expect(c.margin >= 1, `"meets" with margin ${c.margin} < 1`).toBe(true);
+  }
+  if (c.verdict === "exceeds") expect(c.margin < 1, `"exceeds" with margin ${c.margin} ≥ 1`).toBe(true);
+  if (c.verdict === "outside-scope") expect(Number.isFinite(r.mixingZone.dilution), "outside-scope keeps its edge dilution").toBe(true);
+  for (const m of r.nearField) expect(m.available === (m.notAvailableReason === null), `${m.method}: a reason exactly when not available`).toBe(true);
+  expect(r.cases[0]!.name, "the stated conditions are the first case").toBe("stated");
+  expect(r.cases[0]!.verdict, "the stated case is the top-level verdict").toBe(c.verdict);
+  expect(r.cases.length, "stated + listed + slack water").toBe(1 + s.ambientCases.length + (s.options.addSlackWater ? 1 : 0));
+  for (const k of r.cases) {
+    expect(k.scopeReasons.length > 0, `${k.name}: scope reasons exactly when outside-scope`).toBe(k.verdict === "outside-scope");
+  }
+  const o = r.overall;
+  const deciding = r.cases.some((k) => k.verdict === "exceeds") ? "exceeds" : r.cases.some((k) => k.verdict === "outside-scope") ? "outside-scope" : "meets";
+  expect(o.verdict, "overall: exceeds if any case exceeds, else outside-scope if any is, else meets").toBe(deciding);
+  const g = r.cases.find((k) => k.name === o.governingCase)!;
+  expect(g.verdict, "the governing case has the overall verdict").toBe(o.verdict);
+  expect(o.margin, "overall margin is the governing case's").toBe(g.margin);
 }
 
 export function checkInvalidScenario(raw: unknown, c: { what: string; apply: (o: any) => void }): void {

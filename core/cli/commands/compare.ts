@@ -16,6 +16,8 @@ import {
   type FlatRow,
 } from "../../study/compare";
 import { describeCases, expandCases } from "../../study/cases";
+import { CAUTION } from "../../result/contract";
+import { withCaution } from "../../result/caution";
 import { evaluateScenario } from "../../study/evaluate";
 import { textTable } from "../../study/table";
 
@@ -23,11 +25,15 @@ const NAME = "compare";
 
 const HELP = `Usage: brinefield compare <study.json> [--json] [--csv out.csv] [--sort column]
 
-Runs the base scenario of a study and each of its variants under every ambient case (plus slack water
-unless options.addSlackWater is false) and tabulates one row per variant and case, plus each variant's
-worst case (the case with the lowest margin): dilution at the mixing-zone edge, required dilution,
-margin (edge ÷ required), verdict, number of warnings, equation of state, and for each near-field method
-the maximum rise of the jet's upper edge (m), the impact distance (m) and the impact dilution.
+Runs the base scenario of a study and each of its variants under every ambient case — the stated
+conditions ("stated"), each listed case and slack water unless options.addSlackWater is false, exactly
+as \`run\` does — and tabulates one row per variant and case, plus each variant's "overall" row (the
+verdict over every case, as \`run\`'s "overall"): dilution at the mixing-zone edge, required dilution,
+margin (edge ÷ required), verdict (meets, exceeds, outside-scope; refused for a variant that breaks a
+scenario rule, with the rule's message), number of warnings, equation of state, and for each near-field
+method the maximum rise of the jet's upper edge (m), the impact distance (m) and the impact dilution.
+An ambient.* override applies to the stated conditions and to every case that does not set that field
+itself; the notes say where a case keeps its own value.
 
 A study file (format "brinefield-study", version 1; JSON Schema in core/study/study.schema.json):
   { "format": "brinefield-study", "version": 1, "name": "…",
@@ -76,10 +82,16 @@ async function run(argv: readonly string[], io: CliIO): Promise<number> {
   }
   const columns = columnsOf(flat);
   if (values.csv) io.writeFile(values.csv, csvWithCaution(csvFormat(flat as never, columns as never)));
-  const notes = v.variants.map((x) => `${x.name}: ${describeCases(expandCases(x.scenario), x.scenario)}`);
+  const notes = v.variants.map((x) =>
+    x.scenario ? `${x.name}: ${describeCases(expandCases(x.scenario), x.scenario)}` : `${x.name}: refused — ${(x.refused ?? []).join("; ")}`,
+  );
+  for (const r of rows) if (r.notes) notes.push(...r.notes.map((n) => `${r.variant}: ${n}`));
+  const overallRows = rows.filter((r) => r.worstCase);
+  const count = (w: string) => overallRows.filter((r) => r.verdict === w).length;
+  const tally = `Variants: ${overallRows.length} — meets ${count("meets")}, exceeds ${count("exceeds")}, outside-scope ${count("outside-scope")}, refused ${count("refused")}.`;
   if (values.json) {
     const study = st.study.name;
-    const json = { format: "brinefield-compare", version: 1, study, columns, rows: flat, notes };
+    const json = { format: "brinefield-compare", version: 1, caution: CAUTION, study, columns, rows: flat, notes, tally };
     io.stdout(JSON.stringify(json, null, 2) + "\n");
     return 0;
   }
@@ -90,7 +102,7 @@ async function run(argv: readonly string[], io: CliIO): Promise<number> {
   ];
   const body = flat.map((r) => [
     r.variant as string,
-    r.case === "worst case" ? `worst case (${r.governingCase})` : (r.case as string),
+    r.case === "overall" ? (r.governingCase ? `overall (${r.governingCase})` : "overall") : (r.case as string),
     r.edgeDilution as number | null,
     r.requiredDilution as number | null,
     r.margin as number | null,
@@ -98,7 +110,11 @@ async function run(argv: readonly string[], io: CliIO): Promise<number> {
     r.warnings as number | null,
     ...methodCols.map((c) => (r[c] ?? null) as number | null),
   ]);
-  io.stdout(`Study: ${st.study.name}\n\n${textTable(headers, body)}\n${notes.join("\n")}\n`);
+  const refusals = flat.filter((r) => r.verdict === "refused").map((r) => `Refused: ${String(r.variant)}: ${String(r.error)}`);
+  const scope = flat
+    .filter((r) => r.verdict === "outside-scope" && r.case === "overall")
+    .map((r) => `Outside scope: ${String(r.variant)} (${String(r.governingCase)}): ${String(r.scopeReasons)}`);
+  io.stdout(withCaution(`Study: ${st.study.name}\n${tally}\n\n${textTable(headers, body)}\n${[...notes, ...scope, ...refusals].join("\n")}\n`));
   return 0;
 }
 
@@ -121,7 +137,7 @@ function bullets(issues: readonly { message: string }[]): string {
 
 export const command: CliCommand = {
   name: NAME,
-  summary: "Compare a study's variants (options, sites) per ambient case and worst case; CSV export",
+  summary: "Compare a study's variants (options, sites) per ambient case and overall; CSV export",
   help: HELP,
   run,
 };

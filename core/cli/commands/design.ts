@@ -1,4 +1,6 @@
 /** `brinefield design`: search port count, diameter, angle and spacing for designs that meet every limit. */
+import { CAUTION } from "../../result/contract";
+import { withCaution } from "../../result/caution";
 import { CliError, type CliCommand, type CliIO } from "../command";
 import { readArgs } from "../args";
 import { loadJsonFile, formatIssues } from "../load";
@@ -142,6 +144,7 @@ async function run(argv: readonly string[], io: CliIO): Promise<number> {
         {
           format: "brinefield-design",
           version: 1,
+          caution: CAUTION,
           scenarioName: scenario.name,
           constraints: c,
           ambientCases: cases.map((k) => k.name),
@@ -174,7 +177,7 @@ async function run(argv: readonly string[], io: CliIO): Promise<number> {
       "No design meets every limit under every case. " +
         "Try more ports, a longer diffuser or a wider velocity range.",
     );
-    io.stdout(out.join("\n") + "\n");
+    io.stdout(withCaution(out.join("\n") + "\n"));
     return 1;
   }
   out.push(
@@ -199,7 +202,7 @@ async function run(argv: readonly string[], io: CliIO): Promise<number> {
     ),
   );
   out.push("Screening only: check the chosen design with the full `brinefield run` output and its warnings.");
-  io.stdout(out.join("\n") + "\n");
+  io.stdout(withCaution(out.join("\n") + "\n"));
   return 0;
 }
 

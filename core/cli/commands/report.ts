@@ -4,6 +4,7 @@
  * renderer when possible; when not, the report says why. Browser-driving code lives in
  * renderer/headless/ and is imported only when a PDF or the 3D image is asked for.
  */
+import { withCaution } from "../../result/caution";
 import { basename, dirname, extname, resolve } from "node:path";
 import type { CliCommand, CliIO } from "../command";
 import { CliError } from "../command";
@@ -194,7 +195,7 @@ export const command: CliCommand = {
         code = 3;
       }
     }
-    io.stdout(written.map((w) => `wrote ${w.what}: ${w.path}`).join("\n") + "\n");
+    io.stdout(withCaution(written.map((w) => `wrote ${w.what}: ${w.path}`).join("\n") + "\n"));
     return code;
   },
 };

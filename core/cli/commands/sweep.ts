@@ -7,7 +7,9 @@ import { readArgs } from "../args";
 import { formatIssues, loadJsonFile } from "../load";
 import { parseScenario } from "../../scenario/parse";
 import type { Scenario } from "../../scenario/types";
-import { describeCases, expandCases } from "../../study/cases";
+import { describeCases, expandCases, keptValueNotes } from "../../study/cases";
+import { CAUTION } from "../../result/contract";
+import { withCaution } from "../../result/caution";
 import { parseStudy } from "../../study/study-file";
 import {
   axisFromParts,
@@ -34,8 +36,11 @@ const HELP = `Usage: brinefield sweep <scenario.json | study.json> --vary path=f
 Runs the screening pipeline over a grid of one or two inputs and reports, per point, the dilution at the
 mixing-zone edge, the margin (edge ÷ required dilution), the verdict, the governing ambient case and the
 equation of state used; it says where neighbouring points cross from one equation of state to the other.
-Every point is run under all ambient cases (plus slack water unless options.addSlackWater is false); an
-ambient.* input is set in every case.
+Every point is run under every ambient case — the stated conditions ("stated"), each listed case and
+slack water unless options.addSlackWater is false, as \`run\` does — and judged by the verdict over them
+(\`run\`'s "overall"): meets, exceeds or outside-scope; a point whose inputs break a scenario rule is
+refused with the same message \`run\` gives. An ambient.* input applies to the stated conditions and to
+every case that does not set that field itself (the notes name the cases that keep their own value).
 
   --vary path=from:to:steps   Input and range, e.g. ambient.currentSpeed=0:0.5:11 or
                               diffuser.portDiameter=4 in:10 in:7. Bounds are SI numbers or values with
@@ -115,20 +120,25 @@ async function run(argv: readonly string[], io: CliIO): Promise<number> {
   const rows = sweepRows(grid, points);
   const crossings = eosCrossings(axes, rows);
   const casesNote = describeCases(expandCases(scenario), scenario);
+  const keptNotes = keptValueNotes(scenario, axes.map((a) => a.path));
+  const count = (v: string) => rows.filter((r) => r.verdict === v).length;
+  const tally = `Points: ${rows.length} — meets ${count("meets")}, exceeds ${count("exceeds")}, outside-scope ${count("outside-scope")}, refused ${count("refused")}.`;
   const flat = rows.map((r) => ({
     ...r.values,
     governingCase: r.governingCase,
     edgeDilution: r.edgeDilution,
     requiredDilution: r.requiredDilution,
     margin: r.margin,
+    verdict: r.verdict,
     pass: r.pass,
+    scopeReasons: r.scopeReasons.join(" "),
     equationOfState: r.equationOfState,
     ...(r.error ? { error: r.error } : {}),
   }));
   if (values.csv) {
     const cols = [
       ...axes.map((a) => a.path),
-      ...["governingCase", "edgeDilution", "requiredDilution", "margin", "pass", "equationOfState", "error"],
+      ...["governingCase", "edgeDilution", "requiredDilution", "margin", "verdict", "pass", "scopeReasons", "equationOfState", "error"],
     ];
     io.writeFile(values.csv, csvWithCaution(csvFormat(flat as Record<string, unknown>[] as never, cols as never)));
   }
@@ -147,11 +157,13 @@ async function run(argv: readonly string[], io: CliIO): Promise<number> {
         {
           format: "brinefield-sweep",
           version: 1,
+          caution: CAUTION,
           scenarioName: scenario.name,
+          tally,
           axes,
           points: flat,
           equationOfStateCrossings: crossings,
-          notes: [casesNote, ...crossingText],
+          notes: [casesNote, ...keptNotes, ...crossingText],
           elapsedSeconds,
         },
         null,
@@ -161,7 +173,7 @@ async function run(argv: readonly string[], io: CliIO): Promise<number> {
     return 0;
   }
   const out = [`Sweep: ${scenario.name} — ${grid.length} points, ${formatNumber(elapsedSeconds)} s`];
-  out.push(casesNote, "");
+  out.push(tally, casesNote, ...keptNotes, "");
   out.push(
     textTable(
       [
@@ -170,11 +182,11 @@ async function run(argv: readonly string[], io: CliIO): Promise<number> {
       ],
       rows.map((r) => [
         ...axes.map((a) => r.values[a.path]!),
-        r.governingCase ?? "(not run, see below)",
+        r.governingCase ?? "(refused, see below)",
         r.edgeDilution,
         r.requiredDilution,
         r.margin,
-        r.error ? "error" : r.pass ? "pass" : "FAIL",
+        r.verdict,
         r.equationOfState,
       ]),
     ),
@@ -182,12 +194,18 @@ async function run(argv: readonly string[], io: CliIO): Promise<number> {
   const failed = rows.filter((r) => r.error !== undefined);
   for (const r of failed.slice(0, 5)) {
     const at = axes.map((a) => `${a.path} = ${formatNumber(r.values[a.path]!)}`).join(", ");
-    out.push(`Not run at ${at}: ${r.error}`);
+    out.push(`Refused at ${at}: ${r.error}`);
   }
-  if (failed.length > 5) out.push(`… and ${failed.length - 5} more points not run.`);
+  if (failed.length > 5) out.push(`… and ${failed.length - 5} more points refused.`);
+  const outside = rows.filter((r) => r.verdict === "outside-scope");
+  for (const r of outside.slice(0, 5)) {
+    const at = axes.map((a) => `${a.path} = ${formatNumber(r.values[a.path]!)}`).join(", ");
+    out.push(`Outside scope at ${at} (${r.governingCase}): ${r.scopeReasons.join(" ")}`);
+  }
+  if (outside.length > 5) out.push(`… and ${outside.length - 5} more points outside the methods' scope.`);
   if (crossingText.length > 0) out.push(...crossingText);
   else out.push("The equation of state is the same at every point.");
-  io.stdout(out.join("\n") + "\n");
+  io.stdout(withCaution(out.join("\n") + "\n"));
   return 0;
 }
 

@@ -3,7 +3,9 @@ import { CliError, type CliCommand, type CliIO } from "../command";
 import { readArgs } from "../args";
 import { loadScenarioFile } from "../load";
 import { planMonteCarlo, summariseMonteCarlo, type MonteCarloStats } from "../../study/montecarlo";
-import { describeCases, expandCases } from "../../study/cases";
+import { describeCases, expandCases, keptValueNotes } from "../../study/cases";
+import { CAUTION } from "../../result/contract";
+import { withCaution } from "../../result/caution";
 import { seedFromText } from "../../study/random";
 import { textTable } from "../../study/table";
 import { formatNumber } from "../../units";
@@ -21,10 +23,12 @@ const DEFAULT_SEED = 1;
 const HELP = `Usage: brinefield uncertainty <scenario.json> [--runs N] [--seed S] [--workers K] [--json]
 
 Monte Carlo over uncertain inputs: each run draws the inputs, runs the same screening pipeline under
-every ambient case (plus a slack-water case unless options.addSlackWater is false), and records the
-dilution at the mixing-zone edge and whether every limit is met. Reports P5, P50 and P95 of the edge
-dilution and the probability of not meeting the limit, per ambient case and for the worst case (per
-run, the case with the lowest margin; a run fails if any case fails).
+every ambient case — the stated conditions, each listed case and slack water unless
+options.addSlackWater is false, as \`run\` does — and records the dilution at the mixing-zone edge and
+the verdict (meets, exceeds, outside-scope; refused for a draw that breaks a scenario rule, with the
+rule's message). Reports P5, P50 and P95 of the edge dilution, the probability of not meeting the limit
+(every run without "meets") and the runs per verdict, per ambient case and overall (per run, the
+verdict over every case, as \`run\`'s "overall").
 
 Inputs come from the scenario's "uncertainty.inputs" (normal, uniform, lognormal, triangular; SI
 values; a missing mean/median/mode is the scenario's own value). When the scenario states none, these
@@ -32,8 +36,8 @@ default spreads are used and the output says so (screening judgement, no source)
   current speed   lognormal, geometric sd 1.5 about the stated speed (fixed when it is zero)
   ambient salinity normal, sd 0.5 g/kg      ambient temperature normal, sd 1.5 °C
   brine salinity   normal, sd 2 %            brine flow          normal, sd 5 %
-A distribution on an ambient.* input describes the base ambient; each ambient case gets the same
-deviation from the base value (a ratio for lognormal), and slack water keeps zero current.
+A distribution on an ambient.* input describes the stated ambient; each draw applies to the stated
+conditions and to every case that does not set that field itself (slack water keeps zero current).
 
 Options:
   --runs N       Number of runs (default ${DEFAULT_RUNS}).
@@ -52,6 +56,7 @@ function statsJson(s: MonteCarloStats) {
     edgeDilution: s.edgeDilution,
     margin: s.margin,
     probabilityOfExceedance: s.probabilityOfExceedance,
+    verdicts: s.verdicts,
     failedRuns: s.failedRuns,
   };
 }
@@ -91,13 +96,17 @@ async function run(argv: readonly string[], io: CliIO): Promise<number> {
   if (!done) return EXIT_CANCELLED;
   const { value: chunks, elapsedSeconds } = done;
   const summary = summariseMonteCarlo(plan, chunks);
-  const casesNote = describeCases(expandCases(scenario), scenario);
+  const casesNote = [
+    describeCases(expandCases(scenario), scenario),
+    ...keptValueNotes(scenario, plan.distributions.map((d) => d.path)),
+  ].join(" ");
   if (values.json) {
     io.stdout(
       JSON.stringify(
         {
           format: "brinefield-uncertainty",
           version: 1,
+          caution: CAUTION,
           scenarioName: scenario.name,
           runs: summary.runs,
           seed: summary.seed,
@@ -135,15 +144,18 @@ async function run(argv: readonly string[], io: CliIO): Promise<number> {
     s.edgeDilution.p95,
     s.margin.p5,
     s.probabilityOfExceedance,
-    s.failedRuns,
+    s.verdicts.meets,
+    s.verdicts.exceeds,
+    s.verdicts["outside-scope"],
+    s.verdicts.refused,
   ]);
   out.push("Dilution at the mixing-zone edge:");
-  out.push(textTable(["case", "P5", "P50", "P95", "margin P5", "P(not meeting limit)", "failed runs"], rows));
+  out.push(textTable(["case", "P5", "P50", "P95", "margin P5", "P(not meeting limit)", "meets", "exceeds", "outside-scope", "refused"], rows));
   if (summary.clampedSamples > 0) {
     out.push(`${summary.clampedSamples} samples fell outside their physical bounds and were clamped.`);
   }
-  if (summary.firstError) out.push(`Some runs failed; first: ${summary.firstError}`);
-  io.stdout(out.join("\n") + "\n");
+  if (summary.firstError) out.push(`Some draws were refused (they break a scenario rule); first: ${summary.firstError}`);
+  io.stdout(withCaution(out.join("\n") + "\n"));
   return 0;
 }
 

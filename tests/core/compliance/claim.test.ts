@@ -23,6 +23,8 @@ function resultFixture(current = 0): BrinefieldResult {
     multiport: b.multiport,
     mixingZone: b.mixingZone,
     compliance: b.compliance,
+    cases: [{ name: "stated", kind: "stated", edgeDilution: b.mixingZone.dilution, verdict: b.compliance.verdict, margin: b.compliance.margin, scopeReasons: [] }],
+    overall: { governingCase: "stated", verdict: b.compliance.verdict, margin: b.compliance.margin, edgeDilution: b.mixingZone.dilution },
     warnings: b.warnings,
     methods: b.methods,
   };

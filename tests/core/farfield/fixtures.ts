@@ -91,6 +91,8 @@ export function lengthScaleFixture(): NearFieldMethodResult {
   return {
     method: "length-scale",
     source: "Roberts, Ferrier & Daviero (1997), from memory",
+    available: true,
+    notAvailableReason: null,
     maxRiseHeight: 2.2 * DF,
     maxRiseDistance: null,
     returnDistance: 2.4 * DF,

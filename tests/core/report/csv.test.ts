@@ -21,11 +21,18 @@ function back(cell: string | undefined): number | null {
 }
 
 describe("resultCsv()", () => {
-  it("has the documented columns, one row per near-field method and per constituent", () => {
+  it("has the documented columns, one row per near-field method, per constituent, per ambient case and the overall verdict", () => {
     for (const { name, json } of results) {
       const rows = csvParse(resultCsv(json));
       expect(rows.columns, `${name}: columns`).toEqual([...RESULT_CSV_COLUMNS]);
-      expect(rows.length, `${name}: row count`).toBe(json.nearField.length + json.mixingZone.constituents.length);
+      expect(rows.length, `${name}: row count`).toBe(json.nearField.length + json.mixingZone.constituents.length + json.cases.length + 1);
+      const overall = rows.find((r) => r.section === "overall")!;
+      expect(overall.verdict, `${name}: overall verdict as run --json`).toBe(json.overall.verdict);
+      expect(back(overall.margin), `${name}: overall margin as run --json`).toBe(json.overall.margin);
+      for (const r of rows.filter((x) => x.verdict)) {
+        expect(["meets", "exceeds", "outside-scope"], `${name}: verdict word`).toContain(r.verdict);
+        expect(r.pass, `${name}: pass only for meets`).toBe(String(r.verdict === "meets"));
+      }
     }
   });
 

@@ -11,6 +11,8 @@ import type { MixingZoneResult } from "../../../core/result/contract";
 const lengthScale: NearFieldMethodResult = {
   method: "length-scale",
   source: "test",
+  available: true,
+  notAvailableReason: null,
   maxRiseHeight: 4,
   maxRiseDistance: null,
   returnDistance: 5,

@@ -78,8 +78,8 @@ describe("design search (against the pipeline)", () => {
     for (const d of list) {
       const patched = withOverrides(s, candidateOverrides(d.candidate));
       const cases = expandCases(patched);
-      expect(cases.map((k) => k.name), "spring, neap and slack water").toEqual(
-        ["spring tide", "neap tide", "slack water"],
+      expect(cases.map((k) => k.name), "the stated conditions, spring, neap and slack water").toEqual(
+        ["stated", "spring tide", "neap tide", "slack water"],
       );
       for (const k of cases) {
         const r = runScenario(k.scenario);

@@ -43,6 +43,8 @@ export function identityEvaluator(required: number, read: (s: Scenario) => numbe
       requiredDilution: required,
       margin: d / required,
       pass: d >= required,
+      verdict: d >= required ? "meets" : "exceeds",
+      scopeReasons: [],
       governingConstituent: "salinity",
       equationOfState: "test",
       warningCount: 0,

@@ -124,7 +124,7 @@ describe("Monte Carlo — reproducibility", () => {
       seen.push(x.ambient.currentSpeed);
       return fake(x);
     });
-    expect(pl.caseNames, "base and the added slack-water case").toEqual(["base", "slack water"]);
+    expect(pl.caseNames, "the stated conditions and the added slack-water case").toEqual(["stated", "slack water"]);
     expect(seen.filter((v) => v === 0).length, "one zero-current evaluation per run (slack water)").toBe(200);
   });
 });

@@ -69,13 +69,15 @@ describe("withOverrides()", () => {
     });
   });
 
-  it("applies an ambient override to every ambient case and leaves the input untouched", () => {
+  it("applies an ambient override to the stated ambient and every case that does not set the field, leaving the input untouched", () => {
     const raw = fourPortRaw();
-    raw.ambientCases = [{ name: "spring", currentSpeed: 0.3 }, { name: "neap", currentSpeed: 0.05 }];
+    raw.ambientCases = [{ name: "spring", currentSpeed: 0.3 }, { name: "neap", currentSpeed: 0.05 }, { name: "deep", depth: 30 }];
     const s = scenarioFrom(raw);
-    const p = withOverrides(s, { "ambient.currentSpeed": 0.2 });
-    expect(p.ambientCases.map((c) => c.currentSpeed), "every case gets the override").toEqual([0.2, 0.2]);
-    expect(s.ambientCases.map((c) => c.currentSpeed), "the original is unchanged").toEqual([0.3, 0.05]);
+    const p = withOverrides(s, { "ambient.currentSpeed": 0.2, "ambient.depth": 12 });
+    expect(p.ambient.currentSpeed, "the stated conditions take the override").toBe(0.2);
+    expect(p.ambientCases.map((c) => c.currentSpeed), "cases that set their current keep it; the others follow").toEqual([0.3, 0.05, 0.2]);
+    expect(p.ambientCases.map((c) => c.depth), "only the case that sets its depth keeps it").toEqual([12, 12, 30]);
+    expect(s.ambientCases.map((c) => c.currentSpeed), "the original is unchanged").toEqual([0.3, 0.05, s.ambient.currentSpeed]);
     expect(Object.isFrozen(p.diffuser), "the result is frozen like a parsed scenario").toBe(true);
   });
 
@@ -100,9 +102,13 @@ describe("withOverrides()", () => {
 
   it("rejects unknown paths and out-of-range or fractional values, naming the path", () => {
     expect(() => withOverrides(base, { "ambient.colour": 1 }), "unknown path").toThrow(/ambient\.colour/);
-    expect(() => withOverrides(base, { "diffuser.portCount": 2.5 }), "fractional count").toThrow(
-      OverrideError,
+    expect(() => withOverrides(base, { "diffuser.portCount": 2.5 }), "fractional count, in the file reader's words").toThrow(
+      "diffuser.portCount: 2.5 must be a whole number of ports from 1 to 1000",
     );
+    for (const key of ["constructor", "__proto__", "toString", "hasOwnProperty"]) {
+      expect(() => withOverrides(base, { [key]: -100 }), `${key} is not a path`).toThrow(OverrideError);
+      expect(() => withOverrides(base, { [key]: -100 }), `${key} is named`).toThrow(`${key}: is not a path that can be varied`);
+    }
     expect(() => withOverrides(base, { "ambient.currentSpeed": -1 }), "negative current").toThrow(
       /ambient\.currentSpeed/,
     );

@@ -67,21 +67,35 @@ describe("studyVariants() and compareVariant()", () => {
     expect(v.variants.map((x) => x.name), "base first, then the variants").toEqual(
       ["base", "deeper", "six ports"],
     );
-    expect(v.variants[1]!.scenario.ambient.depth, "25 m").toBe(25);
-    expect(v.variants[1]!.scenario.ambientCases[0]!.depth, "the case inherits the variant's depth").toBe(25);
-    expect(v.variants[2]!.scenario.diffuser.length, "6 ports × 5 m spacing → 25 m").toBe(25);
+    expect(v.variants[1]!.scenario!.ambient.depth, "25 m").toBe(25);
+    expect(v.variants[1]!.scenario!.ambientCases[0]!.depth, "the case inherits the variant's depth").toBe(25);
+    expect(v.variants[2]!.scenario!.diffuser.length, "6 ports × 5 m spacing → 25 m").toBe(25);
   });
 
-  it("names the variant and the scenario path of a bad override", () => {
+  it("keeps a variant that breaks a scenario rule as refused, with the reader's message", () => {
     const study = good();
     study.variants[1]!.overrides = { "diffuser.portCount": 0 } as never;
     const parsed = parseStudy(study);
     if (!parsed.ok) throw new Error("study should parse");
     const v = studyVariants(parsed.study, study.base, parseScenario);
-    expect(v.ok, "zero ports rejected").toBe(false);
-    expect(v.ok ? "" : v.issues[0]!.message, "variant and path named").toMatch(
-      /^variants\.1 \(six ports\): diffuser\.portCount/,
-    );
+    if (!v.ok) throw new Error("a rule break is a refused variant, not a study-file problem");
+    const bad = v.variants[2]!;
+    expect(bad.scenario, "no scenario to compute").toBeNull();
+    expect(bad.refused!.join(" "), "the path named").toMatch(/^diffuser\.portCount: 0 must be a whole number of ports/);
+    const rows = compareVariant(bad, evaluateScenario);
+    expect(rows.map((r) => r.verdict), "one refused row, never a pass").toEqual(["refused"]);
+  });
+
+  it("refuses override paths that are not own fields of the scenario format, or indices beyond the array", () => {
+    for (const path of ["constructor", "__proto__.x", "ambient.toString", "ambient.hasOwnProperty", "mixingZone.limits.99999999.maxIncrease", "ambient.colour"]) {
+      const study = good();
+      study.variants[1]!.overrides = { [path]: 1 } as never;
+      const parsed = parseStudy(study);
+      if (!parsed.ok) continue; // the study schema itself refuses some of these
+      const v = studyVariants(parsed.study, study.base, parseScenario);
+      expect(v.ok, `${path} refused`).toBe(false);
+      expect(v.ok ? "" : v.issues[0]!.message, `${path}: variant and path named`).toContain(`variants.1 (six ports): ${path}:`);
+    }
   });
 
   it("gives one row per ambient case plus a worst-case row, sortable by any column", () => {
@@ -90,16 +104,16 @@ describe("studyVariants() and compareVariant()", () => {
     const v = studyVariants(parsed.study, good().base, parseScenario);
     if (!v.ok) throw new Error("variants should parse");
     const rows = v.variants.flatMap((x) => compareVariant(x, evaluateScenario));
-    expect(rows.map((r) => `${r.variant}/${r.case}`), "base, slack water, worst case per variant").toEqual([
-      "base/base",
+    expect(rows.map((r) => `${r.variant}/${r.case}`), "stated, slack water, overall per variant").toEqual([
+      "base/stated",
       "base/slack water",
-      "base/worst case",
-      "deeper/base",
+      "base/overall",
+      "deeper/stated",
       "deeper/slack water",
-      "deeper/worst case",
-      "six ports/base",
+      "deeper/overall",
+      "six ports/stated",
       "six ports/slack water",
-      "six ports/worst case",
+      "six ports/overall",
     ]);
     const worst = rows[2]!;
     expect(worst.summary!.margin, "worst case has the lowest margin").toBe(

@@ -22,7 +22,10 @@ describe("parseSweepAxis()", () => {
     expect(msg("ambient.colour=0:1:3"), "unknown path").toMatch(/^ambient\.colour: is not a path/);
     expect(msg("ambient.depth=5:20:0"), "zero steps").toMatch(/steps must be/);
     expect(msg("ambient.depth=5 m/s:20:3"), "wrong unit").toMatch(/"from"/);
-    expect(msg("ambient.currentSpeed=0:9:3"), "above the 5 m/s bound").toMatch(/outside/);
+    expect(msg("ambient.currentSpeed=0:9:3"), "above the 5 m/s bound, in the file reader's words").toMatch(/9 must be a current speed from 0 to 5 m\/s/);
+    for (const key of ["constructor", "__proto__", "toString", "hasOwnProperty"]) {
+      expect(msg(`${key}=-100:-1:2`), `${key} is refused, named`).toMatch(new RegExp(`^${key}: is not a path that can be varied`));
+    }
     expect(msg("ambient.depth"), "no values").toMatch(/path=from:to:steps/);
   });
 });
