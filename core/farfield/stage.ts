@@ -36,6 +36,7 @@ import {
 import { TURNER_1986_SOURCE } from "./turner-1986-entrainment";
 import { KATO_PHILLIPS_1969_SOURCE } from "./kato-phillips-1969-entrainment";
 import { footprintFromLayer } from "./footprint";
+import { FLUX_AVERAGING_FACTOR } from "../nearfield/fluxAveraging";
 
 export interface BeyondInput {
   readonly scenario: Scenario;
@@ -87,6 +88,8 @@ interface Chain {
   end: { distance: number; dilution: number };
   impactDistance: number;
   layerRadius: number;
+  /** Flux-averaged ÷ centreline dilution of this near-field method (the factor at the hand-over). */
+  fluxFactor: number;
   /** Far-field series of this chain, computed on first use (see `farSeries`). */
   far: Partial<Record<FarMethod, FarSeries>>;
 }
@@ -135,6 +138,7 @@ export function beyondNearField(input: BeyondInput): BeyondOutput {
       end,
       impactDistance: Math.min(xi, end.distance),
       layerRadius,
+      fluxFactor: nf.fluxAveragingFactor ?? FLUX_AVERAGING_FACTOR,
       far: {},
     });
   }
@@ -155,10 +159,14 @@ export function beyondNearField(input: BeyondInput): BeyondOutput {
   ): FarSeries => {
     // Passive diffusion reuses the spreading layer's distances and start thickness (memoised below).
     if (method === "passive-diffusion" && u > 0) return passiveFromLayer(c, farSeries(c, "gravity-current"));
+    // Like with like: the layer is handed the volume flux (flux-averaged dilution) and its dilution is
+    // reported back on the centreline (minimum) basis with the same factor, so the series is continuous at
+    // the hand-over and the edge value keeps the near-bed meaning the verdict needs.
+    const k = c.fluxFactor;
     const gc = spreadingLayerFromNearFieldEnd({
       startDistance: c.end.distance,
       endDistance: Math.max(xEnd, c.end.distance),
-      startDilution: c.end.dilution,
+      startDilution: c.end.dilution * k,
       dischargeFlow: scenario.discharge.flow,
       reducedGravity: gBottom,
       initialWidth: 2 * Math.PI * c.layerRadius,
@@ -169,7 +177,13 @@ export function beyondNearField(input: BeyondInput): BeyondOutput {
       steps,
       stopDistance: xStop,
     });
-    return { distance: gc.distance, dilution: gc.dilution, thickness: gc.thickness, width: gc.width, switchDistance: gc.switchDistance };
+    return {
+      distance: gc.distance,
+      dilution: gc.dilution.map((sd) => sd / k),
+      thickness: gc.thickness,
+      width: gc.width,
+      switchDistance: gc.switchDistance,
+    };
   };
   // Passive diffusion takes over from the drifting layer where the layer's buoyant sideways spreading,
   // dw/dx = 2·√(g′h)/u, has slowed to the spreading Brooks (1960) diffusion gives a field of the same width,
@@ -178,7 +192,7 @@ export function beyondNearField(input: BeyondInput): BeyondOutput {
   // hand-over the passive chain is the layer itself; a layer that never drifts (vanishing current) never
   // hands over, so the passive chain tends to the layer as the current goes to zero.
   const passiveFromLayer = (c: Chain, gc: FarSeries): FarSeries => {
-    const k = passiveHandOverIndex(gc, gBottom);
+    const k = passiveHandOverIndex(gc, gBottom / c.fluxFactor);
     if (k < 0) return { ...gc, handOverDistance: null };
     const field = brooksFieldFromInput({ initialWidth: gc.width[k], currentSpeed: u });
     const out: FarSeries = { distance: [], dilution: [], thickness: [], width: [], switchDistance: gc.switchDistance, handOverDistance: gc.distance[k] };

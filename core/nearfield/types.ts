@@ -82,6 +82,10 @@ export interface NearFieldEvent {
 /** One method's result, the shape promised under `nearField` in the result contract. */
 export interface NearFieldMethodResult {
   readonly method: NearFieldMethodName;
+  /** False when the method does not cover the case; its numbers are then null and the reason is given. */
+  readonly available: boolean;
+  /** Why the method is not available (null when it is). */
+  readonly notAvailableReason: string | null;
   readonly source: string;
   /** Upper edge of the jet above the port, m. */
   readonly maxRiseHeight: number | null;
@@ -98,9 +102,16 @@ export interface NearFieldMethodResult {
   readonly nearFieldDilution: number | null;
   /** Dilution at maximum rise (centreline), where the method gives it. */
   readonly maxRiseDilution?: number | null;
+  /**
+   * Flux-averaged (volume-flux) dilutions beside the centreline ones: the spreading layer is handed the
+   * volume flux. `fluxAveragingFactor` = flux-averaged ÷ centreline dilution used (one basis for both methods).
+   */
+  readonly impactDilutionFluxAveraged?: number | null;
+  readonly nearFieldDilutionFluxAveraged?: number | null;
+  readonly fluxAveragingFactor?: number | null;
   /** [low, high] centreline impact dilution from the method's published scatter or documented bias. */
   readonly dilutionRange: readonly [number, number] | null;
-  /** Entrained seawater flow at impact, m³/s (per port or group as stated in `scope`). */
+  /** Entrained seawater flow at impact, Q₀ × (flux-averaged impact dilution − 1), m³/s (per port or group). */
   readonly entrainedFlow: number | null;
   /** Plain statement of the method's known bias, shown in results and the report. */
   readonly bias: string;
@@ -129,6 +140,8 @@ export function nullNearFieldResult(
 ): NearFieldMethodResult {
   return {
     method,
+    available: true,
+    notAvailableReason: null,
     source,
     maxRiseHeight: null,
     maxRiseDistance: null,
@@ -139,6 +152,9 @@ export function nullNearFieldResult(
     nearFieldDilution: null,
     maxRiseDilution: null,
     dilutionRange: null,
+    impactDilutionFluxAveraged: null,
+    nearFieldDilutionFluxAveraged: null,
+    fluxAveragingFactor: null,
     entrainedFlow: null,
     bias,
     warnings,

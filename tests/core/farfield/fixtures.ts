@@ -90,6 +90,8 @@ export function jetFixture(): JetSource {
 export function lengthScaleFixture(): NearFieldMethodResult {
   return {
     method: "length-scale",
+    available: true,
+    notAvailableReason: null,
     source: "Roberts, Ferrier & Daviero (1997), from memory",
     maxRiseHeight: 2.2 * DF,
     maxRiseDistance: null,

@@ -10,6 +10,8 @@ import type { MixingZoneResult } from "../../../core/result/contract";
 
 const lengthScale: NearFieldMethodResult = {
   method: "length-scale",
+  available: true,
+  notAvailableReason: null,
   source: "test",
   maxRiseHeight: 4,
   maxRiseDistance: null,
