@@ -22,7 +22,7 @@
 import { warning, type ResultWarning } from "../warnings";
 
 export const KATO_PHILLIPS_1969_SOURCE =
-  "Kato & Phillips (1969) J. Fluid Mech. 37:643–655, u_e/u* = 2.5/Ri* (from memory), stirred by the " +
+  "Kato & Phillips (1969) J. Fluid Mech. 37:643–655, u_e/u* = 2.5/Ri*, stirred by the " +
   "current's bed friction velocity u* = √C_D·u";
 
 /** Coefficient K of u_e/u* = K/Ri* (Kato & Phillips 1969, from memory). */
