@@ -50,6 +50,18 @@ export const ROBERTS_1997_COEFFICIENTS = {
   nearFieldDilution: { value: 2.6, provenance: MEMORY } as TracedValue,
 } as const;
 
+/**
+ * Growth from impact to the end of the near field in the same experiments: S_n/S_i = 2.6/1.6 over a
+ * further x_n − x_i = (9.0 − 2.4)·d·F (Roberts et al. 1997, secondary quotation). Used to carry an impact
+ * dilution to the end of the near field on a published basis when a method gives only the impact point.
+ */
+export const ROBERTS_1997_NEAR_FIELD_GROWTH = {
+  /** S_n/S_i. */
+  dilution: ROBERTS_1997_COEFFICIENTS.nearFieldDilution.value / ROBERTS_1997_COEFFICIENTS.returnDilution.value,
+  /** (x_n − x_i)/(d·F). */
+  spreadLength: ROBERTS_1997_COEFFICIENTS.nearFieldDistance.value - ROBERTS_1997_COEFFICIENTS.returnDistance.value,
+} as const;
+
 /** Angles within this many degrees of 60° count as 60° (build tolerance; common practice, no source). */
 export const ROBERTS_1997_ANGLE_TOLERANCE = 2;
 

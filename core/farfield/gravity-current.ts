@@ -1,26 +1,45 @@
 /**
- * Dense bottom layer spreading beyond the near field, with entrainment E(Ri) (see
- * turner-1986-entrainment.ts). Conservation of volume and buoyancy in a uniform ambient:
- *   dQ/dr = E(Ri)·V·w,   g′(r)·Q(r) = g′₀·Q₀   (so dilution S = Q/Q₀ and g′ = g′₀/S)
- * with layer velocity V, thickness h and width w (Q = V·h·w).
+ * Dense bottom layer spreading beyond the near field. Conservation of volume and buoyancy in a uniform
+ * ambient:
+ *   dQ/dr = w_e·w,   g′(r)·Q(r) = g′₀·Q₀   (so dilution S = Q/Q₀ and g′ = g′₀/S)
+ * with layer thickness h, width w (Q = V·h·w for a layer moving at V) and entrainment velocity w_e across
+ * its top. Q is the layer's VOLUME flux: the near field hands over its flux-averaged dilution.
  *
- * Two geometries (closures are engineering judgement unless cited):
- * - "radial" (no current): the layer spreads over a widening perimeter w(r) = w₀ + 2π(r − r₀). On a slope
- *   the layer Richardson number is the normal-flow equilibrium of the Ellison & Turner (1959) layer
- *   momentum balance, g′h·sinβ = (C_D + E)·V², i.e. Ri = (C_D + E(Ri))/tanβ (balance from memory); on a
- *   flat bed, or where that Ri exceeds 1, the thickness is taken at critical flow Ri = 1 (the thinnest
- *   subcritical layer). Above Ri = 0.8 the layer entrains nothing (Ellison & Turner 1959, p. 423).
- *   Bed drag C_D = 0.0025 (common practice, no source).
- * - "advected" (current u): the layer first spreads radially as above; once its own velocity falls to the
- *   current speed it moves with the current, V = u, h = Q/(u·w), Ri = g′h·cosβ/u², starting from the
- *   cross-current width of the radial layer (perimeter/π plus the diffuser's cross-current length, or
- *   wider where needed to keep the layer's thickness continuous at the switch), and widens sideways as a gravity current, dw/dx = 2·√(g′h)/u (front Froude number 1, judgement).
+ * Entrainment w_e has two parts, each with its source:
+ * - shear across the layer's top, w_e = E(Ri)·V_own, where V_own is the layer's OWN gravity-driven speed
+ *   relative to the water above it and Ri = g′h·cosβ/V_own² (Ellison & Turner 1959; E(Ri) of Turner 1986,
+ *   see turner-1986-entrainment.ts). A layer carried by the current moves with the water above it, so the
+ *   current itself is not a velocity difference across the top and does not enter Ri.
+ * - turbulence generated at the bed by the ambient current, w_e = u*·K/Ri* with u* = √C_D·u and
+ *   Ri* = g′h·cosβ/u*² (Kato & Phillips 1969, see kato-phillips-1969-entrainment.ts). It vanishes as the
+ *   current goes to zero, so the result is continuous there.
+ *
+ * The layer's own speed and thickness (closures are engineering judgement unless cited): on a slope the layer
+ * Richardson number is the normal-flow equilibrium of the Ellison & Turner (1959) layer momentum balance,
+ * g′h·sinβ = (C_D + E)·V², i.e. Ri = (C_D + E(Ri))/tanβ (balance from memory); on a flat bed, or where
+ * that Ri exceeds 1, the thickness is taken at critical flow Ri = 1 (the thinnest subcritical layer). Above
+ * Ri = 0.8 shear entrains nothing (Ellison & Turner 1959). Bed drag C_D = 0.0025 (common practice, no
+ * source). The slope used is the full bed slope: gravity drives the layer downslope relative to the water
+ * above whatever the current's direction.
+ *
+ * Two phases:
+ * - "radial": the layer spreads over a widening perimeter w(r) = w₀ + 2π(r − r₀) at its own speed
+ *   V = Q/(h·w).
+ * - "drifting" (a current u > 0): once the radial layer's own speed has fallen to the current speed it is
+ *   carried off with the current: h = Q/(u·w), its own speed V_own = √(g′h·cosβ/Ri) (same Ri as above, so
+ *   speed and thickness are continuous at the switch), starting from the cross-current
+ *   width of the radial layer (perimeter/π plus the diffuser's cross-current length, or wider where needed
+ *   to keep the layer's thickness continuous at the switch), widening sideways as a gravity current,
+ *   dw/dx = 2·√(g′h)/u (front Froude number 1, judgement). Because the switch needs the layer's own speed to
+ *   fall to u, a vanishing current never switches within reach and the result tends to the stagnant one.
  */
 import { entrainmentFromRichardson, TURNER_1986_SOURCE } from "./turner-1986-entrainment";
+import { bedEntrainmentFromRichardson, KATO_PHILLIPS_1969_SOURCE } from "./kato-phillips-1969-entrainment";
 
 export const DEFAULT_BED_DRAG = 0.0025; // common practice, no source
 export const SPREADING_LAYER_SOURCE =
-  `Dense spreading layer with entrainment law ${TURNER_1986_SOURCE}; geometry closures are engineering judgement`;
+  `Dense spreading layer: shear entrainment from the layer's own speed: ${TURNER_1986_SOURCE}; ` +
+  `bed-stirred entrainment in a current: ${KATO_PHILLIPS_1969_SOURCE}; geometry closures are engineering judgement`;
 
 export interface SpreadingLayerInput {
   /** Plan distance from the diffuser where the layer starts (end of the near field), m. */
@@ -41,7 +60,7 @@ export interface SpreadingLayerInput {
   readonly crossCurrentLength?: number;
   /** Current speed, m/s (0 = stagnant, radial spreading). */
   readonly currentSpeed: number;
-  /** Bed slope tanβ along the spreading direction, downslope positive. */
+  /** Bed slope tanβ (magnitude: the layer's own flow runs downslope). */
   readonly bedSlope: number;
   readonly dragCoefficient?: number;
   /** Number of integration steps (default 400). */
@@ -66,7 +85,10 @@ export interface SpreadingLayerSeries {
   readonly flux: number[];
   readonly velocity: number[];
   readonly richardson: number[];
+  /** Shear entrainment coefficient E(Ri) of the layer's own flow. */
   readonly entrainment: number[];
+  /** Total entrainment velocity across the layer's top (shear + bed-stirred), m/s. */
+  readonly entrainmentVelocity: number[];
 }
 
 /** Normal-flow Richardson number of a layer on a slope: root of Ri = (C_D + E(Ri))/tanβ (Infinity if flat). */
@@ -88,57 +110,69 @@ export function equilibriumRichardsonFromSlope(slope: number, drag = DEFAULT_BED
 interface LayerParams {
   /** g′₀·Q₀, the conserved buoyancy flux, m⁴/s³. */
   buoyancyFlux: number;
-  /** Current speed u, m/s, and u². */
+  /** Current speed u, m/s. */
   u: number;
-  uu: number;
+  /** Friction velocity of the current over the bed, √C_D·u, m/s, and its square. */
+  ustar: number;
+  ustar2: number;
   cosb: number;
-  riSlope: number;
-  riRadial: number;
-  eSlope: number;
+  /** Richardson number of the layer's own flow (slope equilibrium, at most 1) and its E(Ri). */
+  riOwn: number;
+  eOwn: number;
 }
 
 interface LayerState {
   h: number;
+  /** Speed the layer travels over the bed along the integration coordinate, m/s. */
   v: number;
+  /** The layer's own speed relative to the water above it, m/s. */
+  vOwn: number;
   ri: number;
   e: number;
+  /** Total entrainment velocity across the top (shear + bed-stirred), m/s. */
+  we: number;
 }
 
 // Module-scope scratch for the integration (the function is not re-entrant across threads' shared memory,
 // and JavaScript runs it to completion, so one set serves every call).
-const scratchState: LayerState = { h: 0, v: 0, ri: 0, e: 0 };
+const scratchState: LayerState = { h: 0, v: 0, vOwn: 0, ri: 0, e: 0, we: 0 };
 const scratchParams: LayerParams = {
   buoyancyFlux: 0,
   u: 0,
-  uu: 0,
+  ustar: 0,
+  ustar2: 0,
   cosb: 1,
-  riSlope: 0,
-  riRadial: 0,
-  eSlope: 0,
+  riOwn: 1,
+  eOwn: 0,
 };
 
-/** Layer state (thickness h, velocity v, Richardson number, entrainment) at flux q and width w, into `st`. */
+/** Layer state (thickness h, speeds, Richardson number, entrainment) at flux q and width w, into `st`. */
 function layerStateInto(st: LayerState, p: LayerParams, advected: boolean, q: number, w: number): void {
   const gp = p.buoyancyFlux / q; // buoyancy flux conserved
+  // A neutral layer (g′ = 0) has no gravity-driven thickness; keep a finite, non-entraining state.
+  if (!(gp > 0)) {
+    st.h = advected ? q / (p.u * w) : Infinity;
+    st.v = advected ? p.u : 0;
+    st.vOwn = 0;
+    st.ri = Infinity;
+    st.e = 0;
+    st.we = 0;
+    return;
+  }
   if (advected) {
     st.h = q / (p.u * w);
     st.v = p.u;
-    st.ri = gp > 0 ? (gp * st.h * p.cosb) / p.uu : 0;
-    st.e = entrainmentFromRichardson(st.ri);
-    return;
+    st.vOwn = Math.sqrt((gp * st.h * p.cosb) / p.riOwn);
+  } else {
+    st.h = Math.cbrt((p.riOwn * q * q) / (gp * w * w * p.cosb));
+    st.v = q / (st.h * w);
+    st.vOwn = st.v;
   }
-  // A neutral layer (g′ = 0) has no gravity-driven thickness; keep a finite, non-entraining state.
-  if (!(gp > 0)) {
-    st.h = Infinity;
-    st.v = 0;
-    st.ri = Infinity;
-    st.e = 0;
-    return;
-  }
-  st.h = Math.cbrt((p.riRadial * q * q) / (gp * w * w * p.cosb));
-  st.v = q / (st.h * w);
-  st.ri = p.riSlope;
-  st.e = p.eSlope;
+  st.ri = p.riOwn;
+  st.e = p.eOwn;
+  // Bed-stirred part: zero without a current (u* = 0), so the stagnant limit is continuous.
+  const bed = p.ustar > 0 ? p.ustar * bedEntrainmentFromRichardson((gp * st.h * p.cosb) / p.ustar2) : 0;
+  st.we = st.e * st.vOwn + bed;
 }
 
 /** Integrates the spreading layer from `startDistance` to `endDistance`; never throws. */
@@ -148,15 +182,16 @@ export function spreadingLayerFromNearFieldEnd(input: SpreadingLayerInput): Spre
   const u = Math.max(0, input.currentSpeed);
   const q0 = input.dischargeFlow;
   const g0 = Math.max(input.reducedGravity, 0);
-  const riSlope = equilibriumRichardsonFromSlope(input.bedSlope, drag);
+  const slope = Math.abs(input.bedSlope);
+  const riSlope = equilibriumRichardsonFromSlope(slope, drag);
   const p = scratchParams;
   p.buoyancyFlux = g0 * q0;
   p.u = u;
-  p.uu = u * u;
-  p.cosb = 1 / Math.sqrt(1 + input.bedSlope * input.bedSlope);
-  p.riSlope = riSlope;
-  p.riRadial = Math.min(riSlope, 1);
-  p.eSlope = entrainmentFromRichardson(riSlope);
+  p.ustar = Math.sqrt(drag) * u;
+  p.ustar2 = p.ustar * p.ustar;
+  p.cosb = 1 / Math.sqrt(1 + slope * slope);
+  p.riOwn = Math.min(riSlope, 1);
+  p.eOwn = entrainmentFromRichardson(p.riOwn);
   const offset = input.perimeterOffset ?? 0;
   const r0 = input.startDistance;
   // The radial perimeter at r is w0 + 2π(r − r0); the advected width is integrated instead.
@@ -176,6 +211,7 @@ export function spreadingLayerFromNearFieldEnd(input: SpreadingLayerInput): Spre
     velocity: [] as number[],
     richardson: [] as number[],
     entrainment: [] as number[],
+    entrainmentVelocity: [] as number[],
   };
   // Records the layer at (r, q), first switching it to advected if the radial layer has slowed to the
   // current. Returns the width there; `st` is left holding the recorded state.
@@ -203,6 +239,7 @@ export function spreadingLayerFromNearFieldEnd(input: SpreadingLayerInput): Spre
     out.velocity.push(st.v);
     out.richardson.push(st.ri);
     out.entrainment.push(st.e);
+    out.entrainmentVelocity.push(st.we);
     return w;
   };
   let r = r0;
@@ -212,8 +249,9 @@ export function spreadingLayerFromNearFieldEnd(input: SpreadingLayerInput): Spre
   if (span === 0 || !(q0 > 0)) return out;
   const dr = span / steps;
   const half = dr / 2;
-  // dQ/dr = E·V·w; dw/dr = 2·√(g′h)/u once advected (0 while radial); both read the state last put in `st`.
-  const dq = (w: number) => st.e * st.v * w;
+  // dQ/dr = w_e·w (entrainment over the bed area w·dr); dw/dr = 2·√(g′h)/u once advected (0 while radial);
+  // both read the state last put in `st`.
+  const dq = (w: number) => st.we * w;
   const dw = (q: number) => (advected ? (2 * Math.sqrt(Math.max(0, (p.buoyancyFlux / q) * st.h))) / u : 0);
   const stop = input.stopDistance ?? Infinity;
   for (let i = 0; i < steps && !(r >= stop); i++) {

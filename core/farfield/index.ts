@@ -7,6 +7,11 @@ export {
   TURNER_1986_SOURCE,
 } from "./turner-1986-entrainment";
 export {
+  bedEntrainmentFromRichardson,
+  bedEntrainmentFromRichardsonValidityIssues,
+  KATO_PHILLIPS_1969_SOURCE,
+} from "./kato-phillips-1969-entrainment";
+export {
   brooksDilutionFromDistance,
   brooksDilutionFromDistanceValidityIssues,
   brooksWidthFromDistance,

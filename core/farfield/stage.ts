@@ -2,9 +2,10 @@
  * Stage "beyond the near field": multiport merging, the spreading dense layer and passive diffusion
  * from the end of the near field to the mixing-zone edge, and compliance there.
  *
- * Chain: near-field dilution S_n (the lower method by default, `options.nearFieldForEdge`), then either
- * the spreading layer (gravity-current.ts) or, with a current, Brooks (1960) passive diffusion; total
- * dilution is multiplicative S(x) = S_n × S_ff (Fischer et al. 1979 ch. 9, from memory).
+ * Chain: near-field dilution S_n (the lower method by default, `options.nearFieldForEdge`), then the
+ * spreading layer (gravity-current.ts: radial, then drifting with the current) or, with a current, the same
+ * layer handed over to Brooks (1960) passive diffusion once its buoyant sideways spreading has slowed to the
+ * diffusive spreading; total dilution is multiplicative S(x) = S_n × S_ff (Fischer et al. 1979, from memory).
  * The lower far-field dilution governs by default (`options.farField`). If the edge lies inside the
  * near field, the jet's own dilution where it crosses the edge is used.
  */
@@ -30,9 +31,12 @@ import {
   brooksDilutionInField,
   brooksFieldFromInput,
   brooksWidthInField,
+  FOUR_THIRDS_LAW_COEFFICIENT,
 } from "./brooks-1960-diffusion";
 import { TURNER_1986_SOURCE } from "./turner-1986-entrainment";
+import { KATO_PHILLIPS_1969_SOURCE } from "./kato-phillips-1969-entrainment";
 import { footprintFromLayer } from "./footprint";
+import { FLUX_AVERAGING_FACTOR } from "../nearfield/fluxAveraging";
 
 export interface BeyondInput {
   readonly scenario: Scenario;
@@ -72,6 +76,10 @@ interface FarSeries {
   dilution: number[];
   thickness: number[];
   width: number[];
+  /** Where the layer started drifting with the current (null if it never did). */
+  switchDistance: number | null;
+  /** Passive chain only: where passive diffusion took over from the drifting layer (null if it never did). */
+  handOverDistance?: number | null;
 }
 
 interface Chain {
@@ -80,6 +88,8 @@ interface Chain {
   end: { distance: number; dilution: number };
   impactDistance: number;
   layerRadius: number;
+  /** Flux-averaged ÷ centreline dilution of this near-field method (the factor at the hand-over). */
+  fluxFactor: number;
   /** Far-field series of this chain, computed on first use (see `farSeries`). */
   far: Partial<Record<FarMethod, FarSeries>>;
 }
@@ -128,17 +138,13 @@ export function beyondNearField(input: BeyondInput): BeyondOutput {
       end,
       impactDistance: Math.min(xi, end.distance),
       layerRadius,
+      fluxFactor: nf.fluxAveragingFactor ?? FLUX_AVERAGING_FACTOR,
       far: {},
     });
   }
 
-  // Slope along the spreading direction: current direction if there is a current, else downslope.
-  const slopeAlong = (): number => {
-    if (!(scenario.ambient.bedSlope > 0)) return 0;
-    if (u === 0) return scenario.ambient.bedSlope;
-    const along = Math.cos(degToRad(column.currentDirection - scenario.ambient.bedSlopeAzimuth));
-    return Math.max(0, scenario.ambient.bedSlope * along);
-  };
+  // Bed slope magnitude: gravity drives the layer downslope relative to the water above whatever the current.
+  const bedSlope = (): number => (scenario.ambient.bedSlope > 0 ? scenario.ambient.bedSlope : 0);
   const crossLength = (): number =>
     u > 0 ? diffuserLength * Math.abs(Math.sin(degToRad(diffuser.diffuserAzimuth - column.currentDirection))) : diffuserLength;
   const crossWidth = (c: Chain) => 2 * c.layerRadius + crossLength();
@@ -153,31 +159,55 @@ export function beyondNearField(input: BeyondInput): BeyondOutput {
   ): FarSeries => {
     // Passive diffusion reuses the spreading layer's distances and start thickness (memoised below).
     if (method === "passive-diffusion" && u > 0) return passiveFromLayer(c, farSeries(c, "gravity-current"));
+    // Like with like: the layer is handed the volume flux (flux-averaged dilution) and its dilution is
+    // reported back on the centreline (minimum) basis with the same factor, so the series is continuous at
+    // the hand-over and the edge value keeps the near-bed meaning the verdict needs.
+    const k = c.fluxFactor;
     const gc = spreadingLayerFromNearFieldEnd({
       startDistance: c.end.distance,
       endDistance: Math.max(xEnd, c.end.distance),
-      startDilution: c.end.dilution,
+      startDilution: c.end.dilution * k,
       dischargeFlow: scenario.discharge.flow,
       reducedGravity: gBottom,
       initialWidth: 2 * Math.PI * c.layerRadius,
       perimeterOffset: 2 * diffuserLength,
       crossCurrentLength: crossLength(),
       currentSpeed: u,
-      bedSlope: slopeAlong(),
+      bedSlope: bedSlope(),
       steps,
       stopDistance: xStop,
     });
-    return { distance: gc.distance, dilution: gc.dilution, thickness: gc.thickness, width: gc.width };
+    return {
+      distance: gc.distance,
+      dilution: gc.dilution.map((sd) => sd / k),
+      thickness: gc.thickness,
+      width: gc.width,
+      switchDistance: gc.switchDistance,
+    };
   };
+  // Passive diffusion takes over from the drifting layer where the layer's buoyant sideways spreading,
+  // dw/dx = 2·√(g′h)/u, has slowed to the spreading Brooks (1960) diffusion gives a field of the same width,
+  // db/dx = 12·α_ε·b^{1/3}/u (both divided by u, so the rule compares 2·√(g′h) with 12·α_ε·b^{1/3}) —
+  // the usual hand-over from buoyant spreading to passive diffusion (common practice, no source). Up to the
+  // hand-over the passive chain is the layer itself; a layer that never drifts (vanishing current) never
+  // hands over, so the passive chain tends to the layer as the current goes to zero.
   const passiveFromLayer = (c: Chain, gc: FarSeries): FarSeries => {
-    const field = brooksFieldFromInput({ initialWidth: crossWidth(c), currentSpeed: u });
-    const h0 = gc.thickness[0];
-    const out: FarSeries = { distance: [], dilution: [], thickness: [], width: [] };
-    for (const r of gc.distance) {
-      const x = r - c.end.distance;
+    const k = passiveHandOverIndex(gc, gBottom / c.fluxFactor);
+    if (k < 0) return { ...gc, handOverDistance: null };
+    const field = brooksFieldFromInput({ initialWidth: gc.width[k], currentSpeed: u });
+    const out: FarSeries = { distance: [], dilution: [], thickness: [], width: [], switchDistance: gc.switchDistance, handOverDistance: gc.distance[k] };
+    for (let i = 0; i < gc.distance.length; i++) {
+      const r = gc.distance[i];
       out.distance.push(r);
-      out.dilution.push(c.end.dilution * brooksDilutionInField(field, x));
-      out.thickness.push(h0); // Brooks (1960) assumes no vertical mixing: thickness stays at its start value
+      if (i <= k) {
+        out.dilution.push(gc.dilution[i]);
+        out.thickness.push(gc.thickness[i]);
+        out.width.push(gc.width[i]);
+        continue;
+      }
+      const x = r - gc.distance[k];
+      out.dilution.push(gc.dilution[k] * brooksDilutionInField(field, x));
+      out.thickness.push(gc.thickness[k]); // Brooks (1960) assumes no vertical mixing: thickness stays at its start value
       out.width.push(brooksWidthInField(field, x));
     }
     return out;
@@ -331,7 +361,8 @@ export function beyondNearField(input: BeyondInput): BeyondOutput {
     { stage: "multiport", name: "jet merging and line-plume limit", source: MERGING_SOURCE },
     { stage: "far-field", name: "spreading dense layer", source: SPREADING_LAYER_SOURCE },
     { stage: "far-field", name: "entrainment law E(Ri)", source: TURNER_1986_SOURCE },
-    ...(u > 0 ? [{ stage: "far-field", name: "passive lateral diffusion", source: BROOKS_1960_SOURCE }] : []),
+    ...(u > 0 ? [{ stage: "far-field", name: "bed-stirred entrainment", source: KATO_PHILLIPS_1969_SOURCE }] : []),
+    ...(u > 0 ? [{ stage: "far-field", name: "passive lateral diffusion", source: `${BROOKS_1960_SOURCE}; takes over from the drifting layer where its buoyant sideways spreading has slowed to the diffusive spreading (common practice, no source)` }] : []),
     { stage: "compliance", name: "required dilution", source: "S_req = (C_d − C_b)/(C_limit − C_b), from the definition of dilution" },
   ];
   return { multiport: mp.multiport, nearField: mp.nearField, mixingZone, compliance: assessment.compliance, warnings, methods };
@@ -343,9 +374,26 @@ export const STAGNANT_CURRENT = 1e-3;
 /** Steps of the far-field integration (fourth-order Runge–Kutta; see farSeries above). */
 const FAR_STEPS = 200;
 
+/**
+ * Index of the first point of a layer series where passive diffusion takes over (see passiveFromLayer in
+ * beyondNearField): the layer drifts with the current and 2·√(g′h) ≤ 12·α_ε·b^{1/3}; −1 if none.
+ */
+function passiveHandOverIndex(gc: FarSeries, gBottom: number): number {
+  if (gc.switchDistance === null) return -1;
+  for (let i = 0; i < gc.distance.length; i++) {
+    if (gc.distance[i] < gc.switchDistance) continue;
+    const gp = gBottom / gc.dilution[i];
+    const h = gc.thickness[i];
+    const b = gc.width[i];
+    if (!(b > 0) || !Number.isFinite(h)) continue;
+    if (2 * Math.sqrt(Math.max(0, gp * h)) <= 12 * FOUR_THIRDS_LAW_COEFFICIENT * Math.cbrt(b)) return i;
+  }
+  return -1;
+}
+
 /** The part of a far-field series up to `xEnd` (the displayed range), ending exactly at `xEnd`. */
 function truncateSeries(f: FarSeries, xEnd: number): FarSeries {
-  const out: FarSeries = { distance: [], dilution: [], thickness: [], width: [] };
+  const out: FarSeries = { distance: [], dilution: [], thickness: [], width: [], switchDistance: f.switchDistance, handOverDistance: f.handOverDistance };
   for (let i = 0; i < f.distance.length; i++) {
     if (f.distance[i] > xEnd) {
       if (i > 0) {

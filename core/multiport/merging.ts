@@ -50,6 +50,16 @@ export interface MethodMerging {
   readonly spacingAtMaxRise: number;
   readonly spacingAtImpact: number;
   readonly lineDilution: number | null;
+  /** The decision with other jet-width definitions (see MERGING_WIDTH_DEFINITIONS). */
+  readonly sensitivity?: readonly MergingSensitivity[];
+}
+
+export interface MergingSensitivity {
+  readonly method: string;
+  readonly definition: string;
+  readonly widthFactor: number;
+  readonly regime: string;
+  readonly factor: number;
 }
 
 export interface MultiportAssessment {
@@ -138,33 +148,73 @@ function mergedLineLength(scenario: Scenario, maxRiseDistance: number): number {
   return n * d.portSpacing; // each port serves one spacing of diffuser (common practice, no source)
 }
 
-function scaleMethod(nf: NearFieldMethodResult, factor: number, note: string): NearFieldMethodResult {
+/**
+ * Applies a merging factor to one method's dilutions after maximum rise. Every dilution goes through the
+ * same monotone map g(v) = max(dilution where the jets merge, v·factor), so the order low ≤ value ≤ high of
+ * the range, and impact ≤ near-field end, survive the scaling; flux-averaged values and the entrained flow
+ * are recomputed from the scaled centreline values with the method's own factor.
+ */
+function scaleMethod(nf: NearFieldMethodResult, factor: number, note: string, portFlow: number): NearFieldMethodResult {
   if (factor >= 1) return nf;
-  const s = (v: number | null | undefined) => (v === null || v === undefined ? (v ?? null) : Math.max(1, v * factor));
   const path = nf.path;
   let iTop = 0;
   if (path) for (let i = 1; i < path.length; i++) if (path[i].z > path[iTop].z) iTop = i;
   // Merging lowers dilution from the top of the jets on, but dilution never falls along the path: the
   // reduced curve is held at the dilution reached where the jets merge until it climbs above it.
   const atMerge = path && path.length ? path[iTop].dilution : 1;
+  const g = (v: number) => Math.max(1, atMerge, v * factor);
+  const gn = (v: number | null | undefined) => (v === null || v === undefined ? null : g(v));
   let running = atMerge;
   const scaledPath = path?.map((p, i) => {
     if (i <= iTop) return p;
     running = Math.max(running, p.dilution * factor);
     return { ...p, dilution: running };
   });
-  const impact = nf.impactDilution === null ? null : Math.max(atMerge, s(nf.impactDilution)!);
+  const impact = gn(nf.impactDilution);
+  const k = nf.fluxAveragingFactor ?? null;
+  const flux = (v: number | null) => (v === null || k === null ? null : v * k);
+  const impactFlux = flux(impact);
   return {
     ...nf,
     impactDilution: impact,
-    nearFieldDilution: s(nf.nearFieldDilution),
-    dilutionRange: nf.dilutionRange
-      ? [Math.max(1, nf.dilutionRange[0] * factor), Math.max(1, nf.dilutionRange[1] * factor)]
-      : null,
-    entrainedFlow: nf.entrainedFlow === null ? null : nf.entrainedFlow * factor,
+    nearFieldDilution: gn(nf.nearFieldDilution),
+    dilutionRange: nf.dilutionRange ? [g(nf.dilutionRange[0]), g(nf.dilutionRange[1])] : null,
+    impactDilutionFluxAveraged: impactFlux,
+    nearFieldDilutionFluxAveraged: flux(gn(nf.nearFieldDilution)),
+    entrainedFlow:
+      impactFlux !== null && portFlow > 0
+        ? portFlow * (impactFlux - 1)
+        : nf.entrainedFlow === null
+          ? null
+          : nf.entrainedFlow * factor,
     path: scaledPath,
     notes: [...(nf.notes ?? []), note],
   };
+}
+
+/** Jet-width definitions the merging decision is tried with, as multiples of the width used. */
+export const MERGING_WIDTH_DEFINITIONS: readonly { readonly definition: string; readonly widthFactor: number }[] = [
+  // The integral path's top-hat width is √2 × the Gaussian 1/e velocity width (DERIVED for equal fluxes):
+  // the common width definitions differ by about that factor either way.
+  { definition: "narrower: width used ÷ √2 (e.g. Gaussian 1/e velocity width instead of top-hat)", widthFactor: Math.SQRT1_2 },
+  { definition: "width used (see basis)", widthFactor: 1 },
+  { definition: "wider: width used × √2 (e.g. top-hat instead of Gaussian, or the visible edge)", widthFactor: Math.SQRT2 },
+];
+
+/** Regime and dilution factor of one method for jet widths multiplied by `widthFactor`. */
+function regimeFor(
+  widths: JetWidths,
+  widthFactor: number,
+  sTop: number,
+  sImp: number,
+  mergedFactor: number,
+): { regime: string; factor: number } {
+  const rTop = (widthFactor * widths.widthAtMaxRise) / sTop;
+  const rImp = (widthFactor * widths.widthAtImpact) / sImp;
+  if (rImp <= 1) return { regime: "independent", factor: 1 };
+  if (rTop >= 1) return { regime: "merged-line-source", factor: mergedFactor };
+  const after = Math.min(1, Math.max(0, (rImp - 1) / (rImp - rTop)));
+  return { regime: "partially-merged", factor: 1 - after * (1 - mergedFactor) };
 }
 
 /**
@@ -209,26 +259,18 @@ export function multiportFromNearField(input: MultiportInput): MultiportAssessme
     const lineDilution = linePlumeDilutionFromFlux(q, jet.reducedGravity, widths.fallHeight);
     warnings.push(...linePlumeDilutionFromFluxValidityIssues(q, jet.reducedGravity, widths.fallHeight));
     const mergedFactor = Math.min(1, lineDilution / nf.impactDilution);
-    const rTop = widths.widthAtMaxRise / sTop;
-    const rImp = widths.widthAtImpact / sImp;
-    let regime: string;
-    let factor: number;
-    if (rImp <= 1) {
-      regime = "independent";
-      factor = 1;
-    } else if (rTop >= 1) {
-      regime = "merged-line-source";
-      factor = mergedFactor;
-    } else {
-      regime = "partially-merged";
-      const after = Math.min(1, Math.max(0, (rImp - 1) / (rImp - rTop)));
-      factor = 1 - after * (1 - mergedFactor);
-    }
-    perMethod.push({ method: nf.method, regime, factor, widths, spacingAtMaxRise: sTop, spacingAtImpact: sImp, lineDilution });
+    const { regime, factor } = regimeFor(widths, 1, sTop, sImp, mergedFactor);
+    const sensitivity = MERGING_WIDTH_DEFINITIONS.map((d) => ({
+      method: nf.method,
+      definition: d.definition,
+      widthFactor: d.widthFactor,
+      ...regimeFor(widths, d.widthFactor, sTop, sImp, mergedFactor),
+    }));
+    perMethod.push({ method: nf.method, regime, factor, widths, spacingAtMaxRise: sTop, spacingAtImpact: sImp, lineDilution, sensitivity });
     const note =
       `Multiport ${regime}: dilutions after maximum rise multiplied by ${factor.toFixed(3)} ` +
       `(line-plume dilution ${lineDilution.toFixed(1)} vs single-jet impact dilution ${nf.impactDilution.toFixed(1)}).`;
-    adjusted.push(scaleMethod(nf, factor, note));
+    adjusted.push(scaleMethod(nf, factor, note, jet.flow));
   }
   const known = perMethod.filter((m) => m.regime !== "unknown");
   const worst = known.reduce<MethodMerging | null>((w, m) => (w === null || m.factor < w.factor ? m : w), null);
@@ -252,10 +294,21 @@ export function multiportFromNearField(input: MultiportInput): MultiportAssessme
       }),
     );
   }
+  const sensitivity = known.flatMap((m) => m.sensitivity ?? []);
+  const changes = sensitivity.filter((x) => x.widthFactor !== 1 && x.regime !== known.find((m) => m.method === x.method)?.regime);
+  const sensitivityText = known.length
+    ? changes.length
+      ? ` Sensitivity to the jet-width definition: ${changes
+          .map((x) => `${x.method} with widths ×${x.widthFactor.toFixed(2)} → ${x.regime} (factor ${x.factor.toFixed(3)})`)
+          .join("; ")}.`
+      : " The decision is the same with jet widths ÷√2 or ×√2 (other common width definitions)."
+    : "";
   const reason =
-    (parts.length ? parts.join("; ") + ". " : "Merging not assessed. ") +
-    `s/(dF) = ${dF > 0 && Number.isFinite(dF) ? (spacing / dF).toFixed(2) : "n/a"} reported for comparison only: the ` +
-    "published dense-jet threshold (Abessi & Roberts 2014) is not on file, so the geometric criterion was used.";
+    (parts.length ? parts.join("; ") + "." : "Merging not assessed.") +
+    sensitivityText +
+    ` s/(dF) = ${dF > 0 && Number.isFinite(dF) ? (spacing / dF).toFixed(2) : "n/a"} reported for comparison only: ` +
+    "no published dense-jet threshold in s/(dF) (Abessi & Roberts 2014) could be cited, so the geometric " +
+    "criterion was used.";
   return {
     multiport: {
       regime,
@@ -264,6 +317,13 @@ export function multiportFromNearField(input: MultiportInput): MultiportAssessme
       reason,
       spacingRatio: dF > 0 && Number.isFinite(dF) ? spacing / dF : null,
       dilutionFactor: worst ? worst.factor : 1,
+      mergingSensitivity: sensitivity.map(({ method, definition, widthFactor, regime, factor }) => ({
+        method,
+        definition,
+        widthFactor,
+        regime,
+        dilutionFactor: factor,
+      })),
       source: `${MERGING_SOURCE}; ${LINE_PLUME_SOURCE}`,
     },
     nearField: adjusted,

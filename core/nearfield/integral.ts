@@ -46,6 +46,7 @@ import {
   integralParamsFrom,
 } from "./integralSetup";
 import type { AmbientColumn, JetSource, NearFieldMethodResult, PathSink } from "./types";
+import { integralBiasByAngle, integralBiasRatioAtAngle, integralBiasStatement, type IntegralBiasPoint } from "./integralBias";
 
 export {
   CENTRELINE_PROFILE_FACTOR,
@@ -229,5 +230,34 @@ export function nearFieldIntegral(
     sink?.end();
   }
 
-  return assembleIntegralResult(jet, column, params, run, stopKind, q0, u0, includePath, path, maxSteps, maxLength);
+  const result = assembleIntegralResult(jet, column, params, run, stopKind, q0, u0, includePath, path, maxSteps, maxLength);
+  return withAngleBias(result, jet);
+}
+
+let computingBias = false;
+/** Adds the angle-dependent bias statement and dilution range (see integralBias.ts); never recurses twice. */
+function withAngleBias(result: NearFieldMethodResult, jet: JetSource): NearFieldMethodResult {
+  if (computingBias) return result;
+  let points: readonly IntegralBiasPoint[];
+  computingBias = true;
+  try {
+    points = integralBiasByAngle(nearFieldIntegral);
+  } finally {
+    computingBias = false;
+  }
+  const at = integralBiasRatioAtAngle(points, jet.angle);
+  const si = result.impactDilution;
+  const notes = [...(result.notes ?? [])];
+  let dilutionRange = result.dilutionRange;
+  if (si !== null && at) {
+    const high = si / Math.min(at.ratio, 1);
+    dilutionRange = [si, Math.max(si, high)];
+    notes.push(
+      `dilutionRange: low = the computed centreline impact dilution; high = computed ÷ ${Math.min(at.ratio, 1).toFixed(2)}, ` +
+        (at.covered
+          ? "the model ÷ published ratio at this angle against Lai & Lee's (2012) 1.06·F."
+          : "the lowest model ÷ published ratio over 38°–60° (no published impact dilution at this angle is held)."),
+    );
+  }
+  return { ...result, bias: integralBiasStatement(points, jet.angle), dilutionRange, notes };
 }

@@ -20,6 +20,8 @@ import {
   INTEGRAL_SOURCE,
   centrelineDilution,
 } from "./integralSetup";
+import { ROBERTS_1997_NEAR_FIELD_GROWTH } from "../correlations/roberts-1997-inclined-dense-jet";
+import { FLUX_AVERAGING_FACTOR } from "./fluxAveraging";
 import { nullNearFieldResult, type AmbientColumn, type JetSource, type NearFieldEvent, type NearFieldMethodResult } from "./types";
 
 /** Result for inputs the model cannot run with: nulls and one serious warning. */
@@ -218,15 +220,27 @@ export function assembleIntegralResult(
   );
 
   const impactDilution = impactHit ? centrelineDilution(impactHit[IQ], q0) : null;
+  const impactFlux = impactHit ? impactHit[IQ] / q0 : null;
+  // Mixing between impact and the end of the near field, on the growth Roberts et al. (1997) measured in
+  // the same experiments (S_n/S_i = 2.6/1.6 over x_n − x_i = (9.0 − 2.4)·d·F, a secondary quotation): the
+  // model stops at impact, and without it the integral chain would reach the edge with the impact dilution
+  // alone. The impingement region's length scales with the source (d·F), not with a current-swept impact point.
+  const impactDistance = impactHit ? planDistance(impactHit) : null;
+  const nearFieldDilution = impactDilution === null ? null : impactDilution * ROBERTS_1997_NEAR_FIELD_GROWTH.dilution;
+  const spreadLength = ROBERTS_1997_NEAR_FIELD_GROWTH.spreadLength * jet.diameter * Math.abs(jet.froude);
+  const nearFieldDistance =
+    impactDistance === null ? null : impactDistance + (Number.isFinite(spreadLength) ? spreadLength : 0);
   if (impactDilution !== null) {
     notes.push(
-      `dilutionRange: low = the computed centreline impact dilution; high = computed ÷ ${DILUTION_BIAS_FACTOR}, ` +
-        "the ~30 % under-prediction Lai & Lee (2012) found for integral-model dilution at maximum rise, " +
-        "extrapolated to the impact point (an estimate, not a published impact correction).",
+      `End of the near field: impact dilution × ${ROBERTS_1997_NEAR_FIELD_GROWTH.dilution.toFixed(3)}, ` +
+        `${ROBERTS_1997_NEAR_FIELD_GROWTH.spreadLength.toFixed(1)}·d·F beyond impact — the growth from impact to the end ` +
+        "of the near field in Roberts et al. (1997) (S_n/S_i = 2.6/1.6, x_n − x_i = (9.0 − 2.4)·d·F; measured at " +
+        "60° in stagnant water).",
     );
   }
   notes.push(
     "Dilutions are centreline (minimum) values: flux-average (top-hat) dilution × λ²/(1+λ²) with λ = 1.2; " +
+      "the …FluxAveraged values are the top-hat dilution Q/Q0, entrainedFlow = Q(impact) − Q0; " +
       "halfWidth is the top-hat radius (≈ √2 × the Gaussian 1/e velocity half-width).",
   );
   notes.push(`Integration: Dormand–Prince 5(4), ${run.steps} steps, ${run.rejected} rejected, ${run.evaluations} evaluations, stop: ${run.reason}.`);
@@ -240,12 +254,15 @@ export function assembleIntegralResult(
     maxRiseHeight: maxRise ? maxRise.edge : null,
     maxRiseDistance: maxRise ? planDistance(maxRise.y) : null,
     returnDistance: returnHit ? planDistance(returnHit) : null,
-    impactDistance: impactHit ? planDistance(impactHit) : null,
+    impactDistance,
     impactDilution,
-    nearFieldDistance: null,
-    nearFieldDilution: null,
+    nearFieldDistance,
+    nearFieldDilution,
     maxRiseDilution: maxRise ? centrelineDilution(maxRise.y[IQ], q0) : null,
     dilutionRange: impactDilution !== null ? [impactDilution, impactDilution / DILUTION_BIAS_FACTOR] : null,
+    impactDilutionFluxAveraged: impactFlux,
+    nearFieldDilutionFluxAveraged: nearFieldDilution === null ? null : nearFieldDilution * FLUX_AVERAGING_FACTOR,
+    fluxAveragingFactor: FLUX_AVERAGING_FACTOR,
     entrainedFlow: impactHit ? impactHit[IQ] - q0 : null,
     bias: INTEGRAL_BIAS,
     warnings,

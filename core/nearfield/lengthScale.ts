@@ -3,25 +3,32 @@
  * in stagnant, unstratified water, scaled by port diameter d and densimetric Froude number F
  * (length = c·d·F, dilution = c·F; see core/correlations/dense-jet-dataset.ts).
  *
- * Datasets, in order of preference (the first one that covers the angle is the primary):
- *  1. Roberts, Ferrier & Daviero (1997), 60° ± 2° — the one study whose rise, return distance, impact
- *     dilution and near-field end all come from the same experiments at the design-standard angle; its five
- *     coefficients are from memory, quoted identically in secondary literature, not checked against the paper.
- *  2. Lai & Lee (2012), 15°–60° — rise at 15° and 60° from the abstract (interpolated between), and dilutions at
- *     maximum rise and at impact for 38°–60°; the lower of the two 60° impact dilutions.
- * Not implemented, because no coefficient could be traced: Papakonstantis et al. (2011a,b), Shao & Law
+ * Datasets held:
+ *  1. Lai & Lee (2012), J. Hydro-environment Research 6:9–28, 15°–60° — rise at 15° and 60° (interpolated
+ *     between), dilutions at maximum rise and at impact for 38°–60°; read in the paper.
+ *  2. Roberts, Ferrier & Daviero (1997), J. Hydraulic Eng. 123(8):693–699, 60° ± 2° — rise, return
+ *     distance, impact dilution and near-field end from the same experiments; a secondary quotation.
+ * Not implemented, because no coefficient could be cited: Papakonstantis et al. (2011a,b), Shao & Law
  * (2010), Kikkert et al. (2007) analytical solution, Cipollina et al. (2005), Papakonstantis &
  * Christodoulou (2020) polynomial, Abessi & Roberts (2014, 2017) fits.
  *
- * Fields the primary dataset does not give are filled from the first variant that does, and `notes` says so.
- * Outside the studied angles (15°–60°) every dataset is evaluated at the nearest studied angle, with a
- * warning.
+ * Headline (conservative): where datasets disagree, each quantity takes the value less favourable to the
+ * verdict — lower dilution, higher rise, longer distance — and `dilutionRange` shows both impact dilutions
+ * (60°: 1.06 F headline, up to 1.6 F). A dataset that gives the impact dilution but not the end of the near
+ * field is carried there with the growth Roberts et al. (1997) measured from impact to the near-field end.
+ * Every dataset's own values stay in `variants`; `notes` names where each headline came from.
+ *
+ * Angle coverage: values at an angle come only from data that can be cited for that angle (the rise between
+ * 15° and 60° is interpolated between the two cited end points, and the notes say so). Outside 15°–60° the
+ * method is not available (`available: false`, every quantity null, the reason given) instead of returning
+ * another angle's numbers.
  */
 import { warning, type ResultWarning } from "../warnings";
 import { nullNearFieldResult, type AmbientColumn, type JetSource, type NearFieldMethodResult, type NearFieldVariant } from "./types";
 import type { DenseJetCoefficients, DenseJetDataset } from "../correlations/dense-jet-dataset";
 import { clampAngle } from "../correlations/dense-jet-dataset";
-import { ROBERTS_1997_DATASET } from "../correlations/roberts-1997-inclined-dense-jet";
+import { ROBERTS_1997_DATASET, ROBERTS_1997_NEAR_FIELD_GROWTH } from "../correlations/roberts-1997-inclined-dense-jet";
+import { FLUX_AVERAGING_FACTOR, fluxAveragedFromCentreline } from "./fluxAveraging";
 import {
   LAI_LEE_2012_DATASET,
   LAI_LEE_2012_MAX_RISE_DILUTION,
@@ -33,22 +40,14 @@ import {
 } from "../correlations/lai-lee-2013-crossflow-regime";
 import { weakCurrentValidityIssues } from "../correlations/abessi-roberts-2016-weak-current";
 
-/** Datasets in order of preference for the primary result. */
-export const LENGTH_SCALE_DATASETS: readonly DenseJetDataset[] = [ROBERTS_1997_DATASET, LAI_LEE_2012_DATASET];
+/** Datasets held; the headline takes, quantity by quantity, the less favourable of those covering the angle. */
+export const LENGTH_SCALE_DATASETS: readonly DenseJetDataset[] = [LAI_LEE_2012_DATASET, ROBERTS_1997_DATASET];
 
 /** Union of the studied angles, degrees. */
 export const LENGTH_SCALE_ANGLE_RANGE: readonly [number, number] = [
   Math.min(...LENGTH_SCALE_DATASETS.map((d) => d.angleRange[0])),
   Math.max(...LENGTH_SCALE_DATASETS.map((d) => d.angleRange[1])),
 ];
-
-const PRIMARY_REASON: Record<string, string> = {
-  "roberts-1997":
-    "primary because it is the only dataset at this angle that gives rise, return distance, impact " +
-    "dilution and near-field end from the same experiments, at the design-standard 60° it was measured for",
-  "lai-lee-2012":
-    "primary because it is the only dataset held that covers this angle (values from the paper's abstract)",
-};
 
 const STANDARD_GRAVITY = 9.80665; // m/s², to turn g′ back into a density excess
 
@@ -57,7 +56,10 @@ export interface EvaluatedDataset {
   readonly coefficients: DenseJetCoefficients;
 }
 
-/** Datasets usable at `angle` (clamped to the studied range), in order of preference. */
+/**
+ * Datasets usable at `angle` clamped to the studied range. Only the surface check uses the clamped values,
+ * as a lower bound on the rise of a steeper port; the method itself never returns another angle's numbers.
+ */
 export function denseJetDatasetsAtAngle(angle: number): {
   readonly angleUsed: number;
   readonly entries: readonly EvaluatedDataset[];
@@ -120,7 +122,13 @@ function isDenseJet(jet: JetSource): boolean {
 }
 
 function emptyResult(warnings: ResultWarning[], why: string): NearFieldMethodResult {
-  return { ...nullNearFieldResult("length-scale", "none: " + why, "No length-scale estimate: " + why, warnings, why), variants: [], notes: [why] };
+  return {
+    ...nullNearFieldResult("length-scale", "none: " + why, "No length-scale estimate: " + why, warnings, why),
+    available: false,
+    notAvailableReason: why,
+    variants: [],
+    notes: [`Not available: ${why}.`],
+  };
 }
 
 /** Length-scale (Method 1) near-field estimate for one round dense jet. */
@@ -145,73 +153,101 @@ export function nearFieldLengthScale(jet: JetSource, column: AmbientColumn): Nea
     return emptyResult([w], why);
   }
 
+  const [aLo, aHi] = LENGTH_SCALE_ANGLE_RANGE;
+  const entries = LENGTH_SCALE_DATASETS.flatMap((dataset) => {
+    const coefficients = dataset.coefficientsAtAngle(jet.angle);
+    return coefficients ? [{ dataset, coefficients }] : [];
+  });
+  if (entries.length === 0) {
+    // Values at an angle come only from data that can be cited for that angle: another angle's numbers
+    // are not returned in their place.
+    const why =
+      `no published laboratory dataset held covers a ${jet.angle.toFixed(1)}° port (the cited datasets ` +
+      `cover ${aLo}°–${aHi}°); another angle's numbers are not used in their place`;
+    const w = warning(
+      "angle-outside-studied-range",
+      "warning",
+      `No length-scale estimate: discharge angle ${jet.angle.toFixed(1)}° is outside the ${aLo}°–${aHi}° ` +
+        `covered by the published datasets held. ${jet.angle > aHi ? "Steeper" : "Flatter"} jets behave ` +
+        `differently, so no other angle's values are used.`,
+      { parameter: "angle", value: jet.angle, range: [aLo, aHi], stage },
+    );
+    return emptyResult([w], why);
+  }
+
   const warnings: ResultWarning[] = [];
   const notes: string[] = [];
-  const { angleUsed, entries } = denseJetDatasetsAtAngle(jet.angle);
-  const [aLo, aHi] = LENGTH_SCALE_ANGLE_RANGE;
-  if (angleUsed !== jet.angle) {
-    const off = Math.abs(jet.angle - angleUsed);
-    const effect =
-      jet.angle > aHi
-        ? "steeper jets rise higher: the rise is likely under-estimated"
-        : "flatter jets rise less: the rise is likely over-estimated";
-    warnings.push(
-      warning(
-        "angle-outside-studied-range",
-        off > 2 ? "serious" : "warning",
-        `Discharge angle ${jet.angle.toFixed(1)}° is outside the ${aLo}°–${aHi}° covered by the published ` +
-          `datasets; values are those at the nearest studied angle, ${angleUsed}°, not an extrapolation ` +
-          `(${effect}).`,
-        { parameter: "angle", value: jet.angle, range: [aLo, aHi], stage },
-      ),
-    );
-    notes.push(`Evaluated at ${angleUsed}° (nearest studied angle) for a ${jet.angle.toFixed(1)}° port.`);
-  }
-  if (entries.length === 0) return emptyResult(warnings, `no dataset covers ${angleUsed}°`);
-
   for (const e of entries) {
-    warnings.push(...e.dataset.validityIssues({ angle: angleUsed, froude: jet.froude }));
+    warnings.push(...e.dataset.validityIssues({ angle: jet.angle, froude: jet.froude }));
   }
   warnings.push(...currentIssues(jet, column, notes));
   warnings.push(...stratificationIssues(jet, column));
 
-  const [primaryEntry, ...variantEntries] = entries;
-  const primary = toDimensional(primaryEntry, jet);
-  const variants = variantEntries.map((e) => ({ label: e.dataset.label, values: toDimensional(e, jet) }));
+  const own = entries.map((e) => ({ label: e.dataset.label, values: toDimensional(e, jet) }));
   for (const e of entries) notes.push(...e.coefficients.notes);
 
-  // Fill what the primary lacks from the first variant that has it, and say so.
-  const fields = [
-    "maxRiseHeight",
-    "maxRiseDistance",
-    "returnDistance",
-    "impactDistance",
-    "impactDilution",
-    "nearFieldDistance",
-    "nearFieldDilution",
-    "maxRiseDilution",
-  ] as const;
-  const top: Record<(typeof fields)[number], number | null> = { ...primary };
-  const filledFrom = new Set<string>();
-  for (const f of fields) {
-    if (top[f] !== null) continue;
-    const donor = variants.find((v) => v.values[f] !== null);
-    if (donor) {
-      top[f] = donor.values[f];
-      filledFrom.add(donor.label);
-      notes.push(`${f} taken from ${donor.label}; the primary dataset gives none.`);
+  // Headline: where datasets disagree, the value less favourable to the verdict (lower dilution, higher
+  // rise, longer reach); every dataset's own values stay in `variants` and the range shows the spread.
+  const top: Record<HeadlineField, number | null> = {
+    maxRiseHeight: null,
+    maxRiseDistance: null,
+    returnDistance: null,
+    impactDistance: null,
+    impactDilution: null,
+    nearFieldDistance: null,
+    nearFieldDilution: null,
+    maxRiseDilution: null,
+  };
+  const from: Partial<Record<HeadlineField, string>> = {};
+  for (const f of HEADLINE_FIELDS) {
+    const lower = DILUTION_FIELDS.has(f);
+    for (const o of own) {
+      const v = o.values[f];
+      if (v === null) continue;
+      const cur = top[f];
+      if (cur === null || (lower ? v < cur : v > cur)) {
+        top[f] = v;
+        from[f] = o.label;
+      }
     }
+  }
+  // Mixing between impact and the end of the near field: a dataset that gives the impact dilution but no
+  // near-field end is carried there with the growth Roberts et al. (1997) measured from impact to the
+  // near-field end; the conservative headline takes the lower of that and any measured value.
+  if (top.impactDilution !== null) {
+    const grown = top.impactDilution * ROBERTS_1997_NEAR_FIELD_GROWTH.dilution;
+    if (top.nearFieldDilution === null || grown < top.nearFieldDilution) {
+      notes.push(
+        `nearFieldDilution = impact dilution ${top.impactDilution.toFixed(1)} × ` +
+          `${ROBERTS_1997_NEAR_FIELD_GROWTH.dilution.toFixed(3)}, the growth from impact to the end of the ` +
+          `near field in Roberts et al. (1997) (S_n/S_i = 2.6/1.6)` +
+          (top.nearFieldDilution === null ? "." : `, lower than the measured ${top.nearFieldDilution.toFixed(1)}.`),
+      );
+      top.nearFieldDilution = grown;
+      from.nearFieldDilution = `${from.impactDilution} impact dilution with the Roberts et al. (1997) growth`;
+    }
+    if (top.nearFieldDistance === null && top.impactDistance !== null) {
+      top.nearFieldDistance = top.impactDistance + ROBERTS_1997_NEAR_FIELD_GROWTH.spreadLength * jet.diameter * jet.froude;
+      from.nearFieldDistance = `impact distance + ${ROBERTS_1997_NEAR_FIELD_GROWTH.spreadLength.toFixed(1)}·d·F (Roberts et al. 1997)`;
+    }
+  }
+  const used = [...new Set(Object.values(from))];
+  if (own.length > 1) {
+    notes.push(
+      "Headline values are the less favourable of the datasets for each quantity (lower dilution, higher " +
+        "rise, longer distance): " +
+        HEADLINE_FIELDS.filter((f) => from[f]).map((f) => `${f} from ${from[f]}`).join("; ") +
+        ".",
+    );
   }
   if (top.impactDistance !== null && jet.portHeight > 0) {
     notes.push(
-      `Impact distance = return distance + portHeight/tan(${angleUsed}°): the descent below port level is ` +
-        `continued as a straight line at the discharge angle (an upper bound on the added distance).`,
+      `Impact distance = return distance + portHeight/tan(${jet.angle.toFixed(1)}°): the descent below port ` +
+        `level is continued as a straight line at the discharge angle (an upper bound on the added distance).`,
     );
   }
 
-  const dilutions = [primary, ...variants.map((v) => v.values)]
-    .map((v) => v.impactDilution)
-    .filter((v): v is number => v !== null);
+  const dilutions = own.map((v) => v.values.impactDilution).filter((v): v is number => v !== null);
   const dilutionRange: readonly [number, number] | null =
     dilutions.length >= 2 ? [Math.min(...dilutions), Math.max(...dilutions)] : null;
   if (dilutionRange === null) {
@@ -222,14 +258,17 @@ export function nearFieldLengthScale(jet: JetSource, column: AmbientColumn): Nea
   }
 
   const source =
-    `${primaryEntry.dataset.source} — ${PRIMARY_REASON[primaryEntry.dataset.id] ?? "primary"}` +
-    (filledFrom.size ? `; fields it lacks are filled from ${[...filledFrom].join(", ")}` : "");
+    own.length === 1
+      ? `${entries[0].dataset.source} — the only dataset held that covers this angle`
+      : `${entries.map((e) => e.dataset.source).join("; ")} — headline is the less favourable value of each ` +
+        `quantity (${used.join("; ")})`;
 
+  const flux = fluxAveragedFromCentreline(top.impactDilution);
   return {
     method: "length-scale",
-    source,
     available: true,
     notAvailableReason: null,
+    source,
     maxRiseHeight: top.maxRiseHeight,
     maxRiseDistance: top.maxRiseDistance,
     returnDistance: top.returnDistance,
@@ -239,26 +278,51 @@ export function nearFieldLengthScale(jet: JetSource, column: AmbientColumn): Nea
     nearFieldDilution: top.nearFieldDilution,
     maxRiseDilution: top.maxRiseDilution,
     dilutionRange,
-    entrainedFlow: top.impactDilution === null ? null : jet.flow * (top.impactDilution - 1),
+    impactDilutionFluxAveraged: flux,
+    nearFieldDilutionFluxAveraged: fluxAveragedFromCentreline(top.nearFieldDilution),
+    fluxAveragingFactor: FLUX_AVERAGING_FACTOR,
+    entrainedFlow: flux === null ? null : jet.flow * (flux - 1),
     bias: BIAS,
     warnings,
-    variants: variants.map((v) => toVariant(v.values)),
+    variants: own.map((v) => toVariant(v.values)),
     notes: [
       ...notes,
-      "entrainedFlow = Q0 × (impact dilution − 1), from the centreline (minimum) dilution, so it is a " +
-        "lower bound on the flux-averaged entrainment.",
+      `Dilutions are centreline (minimum) values; the …FluxAveraged values are × ${FLUX_AVERAGING_FACTOR.toFixed(3)} ` +
+        "= (1 + λ²)/λ² for Gaussian velocity and tracer profiles with λ = 1.2 (Fischer et al. 1979), the same " +
+        "basis as the integral model. entrainedFlow = Q0 × (flux-averaged impact dilution − 1).",
     ],
   };
 }
 
+type HeadlineField =
+  | "maxRiseHeight"
+  | "maxRiseDistance"
+  | "returnDistance"
+  | "impactDistance"
+  | "impactDilution"
+  | "nearFieldDistance"
+  | "nearFieldDilution"
+  | "maxRiseDilution";
+const HEADLINE_FIELDS: readonly HeadlineField[] = [
+  "maxRiseHeight",
+  "maxRiseDistance",
+  "returnDistance",
+  "impactDistance",
+  "impactDilution",
+  "nearFieldDistance",
+  "nearFieldDilution",
+  "maxRiseDilution",
+];
+const DILUTION_FIELDS: ReadonlySet<HeadlineField> = new Set(["impactDilution", "nearFieldDilution", "maxRiseDilution"]);
+
 const BIAS =
   "Laboratory length-scale laws for one round jet in stagnant, unstratified, deep water, asymptotic in " +
-  "F (F ≳ 20–25). Impact dilution is the centreline (minimum) value where the centreline is back at port " +
-  "level, conservative for a raised port. Published 60° impact dilutions differ by 50 %: 1.6·F (Roberts " +
-  "et al. 1997) against 1.06·F (Lai & Lee 2012) — treat the spread as real " +
-  "uncertainty and use the low end for compliance. Lai & Lee (2012) found a Lagrangian integral model " +
-  "under-predicts rise by 10–15 % and dilution at maximum rise by about 30 % against these measurements " +
-  `(S_t/F = ${LAI_LEE_2012_MAX_RISE_DILUTION.value}).`;
+  "F (F ≳ 20–25), given only at the angles the cited datasets cover. Impact dilution is the centreline " +
+  "(minimum) value where the centreline is back at port level, conservative for a raised port. Published " +
+  "60° impact dilutions differ by 50 %: 1.06·F (Lai & Lee 2012) is the headline and " +
+  "1.6·F (Roberts et al. 1997) the top of the range. Lai & Lee (2012) found a " +
+  "Lagrangian integral model under-predicts rise by 10–15 % and dilution at maximum rise by about 30 % " +
+  `against these measurements (S_t/F = ${LAI_LEE_2012_MAX_RISE_DILUTION.value}).`;
 
 /** The contract's variant shape (it has no dilution at maximum rise). */
 function toVariant(v: Dimensional): NearFieldVariant {

@@ -102,9 +102,16 @@ export interface NearFieldMethodResult {
   readonly nearFieldDilution: number | null;
   /** Dilution at maximum rise (centreline), where the method gives it. */
   readonly maxRiseDilution?: number | null;
+  /**
+   * Flux-averaged (volume-flux) dilutions beside the centreline ones: the spreading layer is handed the
+   * volume flux. `fluxAveragingFactor` = flux-averaged ÷ centreline dilution used (one basis for both methods).
+   */
+  readonly impactDilutionFluxAveraged?: number | null;
+  readonly nearFieldDilutionFluxAveraged?: number | null;
+  readonly fluxAveragingFactor?: number | null;
   /** [low, high] centreline impact dilution from the method's published scatter or documented bias. */
   readonly dilutionRange: readonly [number, number] | null;
-  /** Entrained seawater flow at impact, m³/s (per port or group as stated in `scope`). */
+  /** Entrained seawater flow at impact, Q₀ × (flux-averaged impact dilution − 1), m³/s (per port or group). */
   readonly entrainedFlow: number | null;
   /** Plain statement of the method's known bias, shown in results and the report. */
   readonly bias: string;
@@ -149,6 +156,9 @@ export function nullNearFieldResult(
     nearFieldDilution: null,
     maxRiseDilution: null,
     dilutionRange: null,
+    impactDilutionFluxAveraged: null,
+    nearFieldDilutionFluxAveraged: null,
+    fluxAveragingFactor: null,
     entrainedFlow: null,
     bias,
     warnings,

@@ -15,6 +15,7 @@ import { dilutionChartSvg, sideViewSvg } from "./figures";
 import { referencesFromSources, secondaryQuotationsFor, type Reference } from "./references";
 import { REPORT_CSS } from "./style";
 import { uncertaintyHtml } from "./uncertainty";
+import { validationAppendixHtml } from "./validation";
 
 export interface ReportInput {
   /** The scenario file as parsed JSON (raw: units as the user wrote them). */
@@ -50,6 +51,7 @@ export const REPORT_SECTIONS = [
   "methods",
   "references",
   "scenario-file",
+  "validation",
 ] as const;
 
 /** A result number, printed through `reportNumber`, tagged with the result path it came from. */
@@ -472,7 +474,7 @@ export function reportHtml(result: BrinefieldResult, input: ReportInput, options
       caution: result.caution || CAUTION,
     },
     reportBody(result, input, options),
-    appendixHtml(result, input),
+    join([appendixHtml(result, input), validationAppendixHtml()]),
   );
 }
 

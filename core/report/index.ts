@@ -8,3 +8,4 @@ export { sideViewSvg, dilutionChartSvg, sideViewPath, sideViewKeyPoints, linearT
 export { valueAtPath, asEntered } from "./inputs";
 export { studyReportHtml, studyComparisonHtml } from "./study";
 export type { StudyReportInput, StudyReportVariant } from "./study";
+export { validationAppendixHtml, VALIDATION_SECTION_ID } from "./validation";

@@ -75,6 +75,7 @@ export const REFERENCES: readonly Reference[] = [
   // Beyond the near field
   ref("Ellison & Turner 1959", "Ellison", "1959", "Ellison, T.H., Turner, J.S. (1959). Turbulent entrainment in stratified flows. Journal of Fluid Mechanics 6, 423–448.", true),
   ref("Turner 1986", "Turner", "1986", "Turner, J.S. (1986). Turbulent entrainment: the development of the entrainment assumption, and its application to geophysical flows. Journal of Fluid Mechanics 173, 431–471.", true),
+  ref("Kato & Phillips 1969", "Kato", "1969", "Kato, H., Phillips, O.M. (1969). On the penetration of a turbulent layer into stratified fluid. Journal of Fluid Mechanics 37(4), 643–655.", false),
   ref("Brooks 1960", "Brooks", "1960", "Brooks, N.H. (1960). Diffusion of sewage effluent in an ocean current. Proceedings of the 1st International Conference on Waste Disposal in the Marine Environment, Pergamon, 246–267.", false),
   ref("Richardson 1926", "Richardson", "1926", "Richardson, L.F. (1926). Atmospheric diffusion shown on a distance-neighbour graph. Proceedings of the Royal Society of London A 110, 709–737.", false, [/4\/3[- ]law/i]),
   ref("Okubo 1971", "Okubo", "1971", "Okubo, A. (1971). Oceanic diffusion diagrams. Deep-Sea Research 18, 789–802.", false),

@@ -9,6 +9,7 @@ import { CAUTION } from "../result/contract";
 import { hashText } from "../scenario/hash";
 import { valueAtPath } from "./inputs";
 import { appendixHtml, documentHtml, reportBody, verdictStyle, type ReportOptions } from "./html";
+import { validationAppendixHtml } from "./validation";
 import { html, join, reportNumber, type RawHtml } from "./format";
 
 export interface StudyReportVariant {
@@ -77,7 +78,8 @@ export function studyReportHtml(study: StudyReportInput, options: Omit<ReportOpt
       html`<section class="variant page-break" id="variant-${String(i)}"><h2 class="variant-title">Variant ${String(i + 1)} of ${String(study.variants.length)}: ${v.name}</h2>${v.description ? html`<p>${v.description}</p>` : html``}${body}</section>`,
     );
   });
-  const appendix = appendixHtml(base.result, { scenarioFile: base.scenarioFile, scenarioText: study.studyText ?? JSON.stringify(base.scenarioFile, null, 2) }, "", "Appendix: the study file as read");
+  const scenarioAppendix = appendixHtml(base.result, { scenarioFile: base.scenarioFile, scenarioText: study.studyText ?? JSON.stringify(base.scenarioFile, null, 2) }, "", "Appendix: the study file as read");
+  const appendix = join([scenarioAppendix, validationAppendixHtml()]);
   return documentHtml(
     {
       title: "Brine outfall screening report — study",

@@ -43,6 +43,17 @@ export interface MultiportResult {
   readonly reason: string;
   readonly spacingRatio: number | null; // s/(dF)
   readonly dilutionFactor: number; // applied to single-jet dilutions (≤ 1)
+  /**
+   * The merging decision per near-field method with jet widths ÷√2, as used, and ×√2 (the common width
+   * definitions differ by about √2): regime and dilution factor for each. Absent for a single port.
+   */
+  readonly mergingSensitivity?: readonly {
+    readonly method: string;
+    readonly definition: string;
+    readonly widthFactor: number;
+    readonly regime: string;
+    readonly dilutionFactor: number;
+  }[];
   readonly source: string;
 }
 

@@ -59,3 +59,25 @@ describe("brinefield command line", () => {
     expect(variants.size, "base and three variants").toBe(4);
   });
 });
+
+describe("brinefield validate", () => {
+  it("prints the validation table as JSON with at least 8 sourced points", () => {
+    const r = cli("validate", "--json");
+    expect(r.status, r.stderr).toBe(0);
+    const j = JSON.parse(r.stdout);
+    expect(j.format, "format").toBe("brinefield-validation");
+    expect(j.version, "version").toBe(1);
+    expect(j.points.length, "points").toBeGreaterThanOrEqual(8);
+    for (const p of j.points)
+      for (const k of ["quantity", "angle", "froude", "published", "model", "ratio", "method", "source", "mark"])
+        expect(p[k], `point field ${k}`).toBeDefined();
+  });
+
+  it("prints a readable table with the ratio and the band under the caution", () => {
+    const r = cli("validate");
+    expect(r.status, r.stderr).toBe(0);
+    expect(r.stdout, "caution first").toMatch(/^Caution/);
+    expect(r.stdout, "names a source").toContain("Lai & Lee (2012)");
+    expect(r.stdout, "band column").toMatch(/0\.55–1\.00/);
+  });
+});

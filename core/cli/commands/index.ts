@@ -9,5 +9,6 @@ import { command as uncertainty } from "./uncertainty";
 import { command as report } from "./report";
 import { command as schema } from "./schema";
 import { command as bench } from "./bench";
+import { command as validate } from "./validate";
 
-export const COMMANDS: readonly CliCommand[] = [run, checkClaim, compare, sweep, design, uncertainty, report, schema, bench];
+export const COMMANDS: readonly CliCommand[] = [run, checkClaim, compare, sweep, design, uncertainty, report, validate, schema, bench];

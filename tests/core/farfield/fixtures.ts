@@ -90,7 +90,7 @@ export function jetFixture(): JetSource {
 export function lengthScaleFixture(): NearFieldMethodResult {
   return {
     method: "length-scale",
-    source: "Roberts, Ferrier & Daviero (1997), from memory",
+    source: "Roberts, Ferrier & Daviero (1997)",
     available: true,
     notAvailableReason: null,
     maxRiseHeight: 2.2 * DF,

@@ -83,3 +83,45 @@ describe("equilibriumRichardsonFromSlope() — normal flow g′h sinβ = (C_D + 
     expect(equilibriumRichardsonFromSlope(0), "flat bed: no normal flow").toBe(Infinity);
   });
 });
+
+describe("spreadingLayerFromNearFieldEnd() — entrainment from the layer's own speed and the bed, not the carrying current", () => {
+  const last = (a: number[]) => a[a.length - 1];
+  const near = (a: number[], d: number[], x: number) => a[d.findIndex((r) => r >= x)];
+
+  it("does not entrain by shear on a flat bed when drifting: the water above moves with the layer (Ellison & Turner 1959)", () => {
+    const s = spreadingLayerFromNearFieldEnd({ ...base, currentSpeed: 0.3 });
+    const i = s.distance.findIndex((d) => d > (s.switchDistance ?? Infinity));
+    expect(i, "the layer drifts").toBeGreaterThan(0);
+    expect(s.entrainment[i], "E(Ri) of the layer's own flow is zero at critical flow Ri = 1").toBe(0);
+    expect(s.entrainmentVelocity[i], "only bed-stirred entrainment is left").toBeGreaterThan(0);
+  });
+
+  it("bed-stirred entrainment is u*·2.5/Ri* with u* = √C_D·u (Kato & Phillips 1969, from memory)", () => {
+    const s = spreadingLayerFromNearFieldEnd({ ...base, currentSpeed: 0.3 });
+    const i = s.distance.findIndex((d) => d > (s.switchDistance ?? Infinity)) + 10;
+    const ustar = Math.sqrt(DEFAULT_BED_DRAG) * 0.3;
+    const gp = (0.27 * 0.5) / s.flux[i];
+    const riStar = (gp * s.thickness[i]) / (ustar * ustar);
+    expect(riStar, "strongly stratified stirring: the law, not its guard, applies").toBeGreaterThan(10);
+    expect(s.entrainmentVelocity[i], "u_e = u*·2.5/Ri*").toBeCloseTo((ustar * 2.5) / riStar, 12);
+  });
+
+  it("in a 0.3 m/s current the layer's dilution does not grow tenfold within 100 m of the near-field end", () => {
+    for (const bedSlope of [0, 0.02, 0.1]) {
+      const s = spreadingLayerFromNearFieldEnd({ ...base, currentSpeed: 0.3, bedSlope });
+      const growth = near(s.dilution, s.distance, base.startDistance + 100) / s.dilution[0];
+      expect(growth, `growth over 100 m, slope ${bedSlope}`).toBeLessThan(10);
+      expect(growth, `but some entrainment, slope ${bedSlope}`).toBeGreaterThan(1);
+    }
+  });
+
+  it("is continuous as the current goes to zero: 0 and 2 mm/s differ by less than 1 % anywhere, flat or sloping", () => {
+    for (const bedSlope of [0, 0.02, 0.1]) {
+      const still = spreadingLayerFromNearFieldEnd({ ...base, bedSlope });
+      const slow = spreadingLayerFromNearFieldEnd({ ...base, bedSlope, currentSpeed: 0.002 });
+      expect(slow.switchDistance, `a 2 mm/s current cannot carry the layer off within range (slope ${bedSlope})`).toBeNull();
+      const rel = Math.abs(last(slow.dilution) / last(still.dilution) - 1);
+      expect(rel, `edge of the range, slope ${bedSlope}`).toBeLessThan(0.01);
+    }
+  });
+});

@@ -89,3 +89,49 @@ describe("neighbourSpacingAtDistance() — geometry of straight and rosette diff
     expect(neighbourSpacingAtDistance(s, 50), "riser spacing governs far out").toBe(30);
   });
 });
+
+describe("multiportFromNearField() — consistency after scaling and sensitivity to the jet-width definition", () => {
+  const widths = jetWidthsFromNearField(lengthScaleFixture(), 1)!;
+  const k = 2.44 / 1.44; // flux-averaged ÷ centreline, (1 + λ²)/λ², λ = 1.2 (Fischer et al. 1979)
+  const withRange = (nf: NearFieldMethodResult): NearFieldMethodResult => ({
+    ...nf,
+    dilutionRange: [nf.impactDilution! * 0.8, nf.impactDilution! * 1.5],
+    fluxAveragingFactor: k,
+    impactDilutionFluxAveraged: nf.impactDilution! * k,
+    entrainedFlow: jetFixture().flow * (nf.impactDilution! * k - 1),
+  });
+  const path: NearFieldMethodResult["path"] = [
+    { s: 0, x: 0, y: 0, z: 0, halfWidth: 0.1, dilution: 1 },
+    { s: 5, x: 3, y: 0, z: 4, halfWidth: 0.8, dilution: 12 },
+    { s: 10, x: 7, y: 0, z: 6, halfWidth: 1.2, dilution: 18 },
+    { s: 16, x: 10, y: 0, z: -1, halfWidth: 2.0, dilution: 21.2 },
+  ];
+
+  it("keeps low ≤ value ≤ high and impact ≤ near-field end for every spacing, with and without a path", () => {
+    for (let spacing = 0.2; spacing < 40; spacing *= 1.3) {
+      const nf = [withRange(lengthScaleFixture()), withRange({ ...integralFixture(), path, nearFieldDilution: 21.2 * 1.625 })];
+      const out = multiportFromNearField({ scenario: line(spacing), jet: jetFixture(), nearField: nf });
+      for (const m of out.nearField) {
+        const [lo, hi] = m.dilutionRange!;
+        const at = `${m.method}, spacing ${spacing.toFixed(2)} m (${out.multiport.regime})`;
+        expect(lo, `low ≤ impact: ${at}`).toBeLessThanOrEqual(m.impactDilution! * (1 + 1e-12));
+        expect(m.impactDilution!, `impact ≤ high: ${at}`).toBeLessThanOrEqual(hi * (1 + 1e-12));
+        if (m.nearFieldDilution !== null) expect(m.nearFieldDilution, `impact ≤ near-field end: ${at}`).toBeGreaterThanOrEqual(m.impactDilution!);
+        expect(m.impactDilutionFluxAveraged, `flux-averaged = centreline × factor: ${at}`).toBeCloseTo(m.impactDilution! * k, 9);
+        expect(m.entrainedFlow, `entrained flow on the flux-averaged basis: ${at}`).toBeCloseTo(jetFixture().flow * (m.impactDilution! * k - 1), 9);
+      }
+    }
+  });
+
+  it("reports the decision with jet widths ÷√2, as used and ×√2, and says when the regime changes", () => {
+    // Spacing just above the width at impact: independent as used, merging once widths grow by √2.
+    const out = multiportFromNearField({ scenario: line(widths.widthAtImpact * 1.1), jet: jetFixture(), nearField: [lengthScaleFixture()] });
+    const s = out.multiport.mergingSensitivity!;
+    expect(s.map((x) => x.widthFactor), "three definitions").toEqual([Math.SQRT1_2, 1, Math.SQRT2]);
+    expect(s[1].regime, "as used").toBe(out.multiport.regime);
+    expect(s[1].regime, "independent as used").toBe("independent");
+    expect(s[2].regime, "wider jets merge").not.toBe("independent");
+    expect(s[2].dilutionFactor, "and lose dilution").toBeLessThan(1);
+    expect(out.multiport.reason, "the reason states the sensitivity").toMatch(/Sensitivity to the jet-width definition: length-scale with widths ×1\.41 → /);
+  });
+});

@@ -259,11 +259,31 @@ describe("nearFieldIntegral(): inclined dense jets in stagnant water vs laborato
   it("states the documented bias and gives a dilution range without altering the main number", () => {
     const r = nearFieldIntegral(jetFor(), uniformColumn(20));
     expect(r.bias, "bias names the source of the under-prediction").toMatch(/Lai & Lee.*2012/);
+    expect(r.available, "available").toBe(true);
     expect(r.dilutionRange![0], "low end is the computed value, uncorrected").toBe(r.impactDilution);
-    expect(r.dilutionRange![1], "high end divides by 0.7 (~30 % bias)").toBeCloseTo(r.impactDilution! / 0.7, 10);
-    expect(r.nearFieldDistance, "near field end is modelled elsewhere").toBeNull();
+    expect(r.dilutionRange![1], "high end at or above the computed value").toBeGreaterThanOrEqual(r.impactDilution!);
     expect(r.entrainedFlow!, "entrained flow = Q_impact − Q0 > 0").toBeGreaterThan(0);
     expect(r.method, "method name").toBe("integral");
+  });
+
+  it("states its impact-dilution bias by angle against Lai & Lee's (2012) 1.06 F over 38°–60°, and widens the range by it", () => {
+    const r = nearFieldIntegral(jetFor({ angle: 45, froude: 30 }), uniformColumn(200));
+    for (const a of [38, 45, 52, 60]) expect(r.bias, `bias quotes ${a}°`).toMatch(new RegExp(`${a}°: \\d\\.\\d\\d·F \\(ratio \\d\\.\\d\\d\\)`));
+    const ratios = [...r.bias.matchAll(/ratio (\d\.\d\d)\)/g)].map((m) => Number(m[1]));
+    expect(ratios.length, "four laboratory angles").toBe(4);
+    expect(ratios[0], "the model under-predicts more at 38° than at 60° (confirmed comparison)").toBeLessThan(ratios[3]);
+    const high = r.dilutionRange![1] / r.impactDilution!;
+    expect(high, "high end = computed ÷ the ratio at 45°").toBeCloseTo(1 / ratios[1], 1);
+  });
+
+  it("carries the impact dilution to the end of the near field with the Roberts et al. (1997) growth, 2.6/1.6 over 6.6 dF", () => {
+    const jet = jetFor({ angle: 60, froude: 25 });
+    const r = nearFieldIntegral(jet, uniformColumn(20));
+    expect(r.nearFieldDilution, "S_n = S_i × 2.6/1.6").toBeCloseTo(r.impactDilution! * (2.6 / 1.6), 10);
+    expect(r.nearFieldDistance, "x_n = x_i + (9.0 − 2.4)·d·F").toBeCloseTo(r.impactDistance! + 6.6 * jet.diameter * jet.froude, 10);
+    expect(r.impactDilutionFluxAveraged! / r.impactDilution!, "flux-averaged ÷ centreline = (1 + λ²)/λ²").toBeCloseTo(2.44 / 1.44, 6);
+    expect(r.fluxAveragingFactor, "the factor is stated").toBeCloseTo(2.44 / 1.44, 12);
+    expect(r.entrainedFlow, "entrained flow on the flux-averaged basis").toBeCloseTo(jet.flow * (r.impactDilutionFluxAveraged! - 1), 9);
   });
 });
 

@@ -39,49 +39,55 @@ describe("nearFieldLengthScale() at 60° in stagnant water", () => {
   const r = nearFieldLengthScale(jet, makeColumn());
   const dF = 0.2 * 25;
 
-  it("uses Roberts, Ferrier & Daviero (1997) as the primary dataset and says why", () => {
+  it("uses both datasets that cover 60° and says the headline is the less favourable value of each", () => {
     expect(r.method, "method name").toBe("length-scale");
-    expect(r.source, "primary named").toMatch(/Roberts, Ferrier & Daviero \(1997\)/);
-    expect(r.source, "reason given").toMatch(/primary because/);
+    expect(r.available, "available at 60°").toBe(true);
+    expect(r.notAvailableReason, "no reason when available").toBeNull();
+    expect(r.source, "Lai & Lee named").toMatch(/Lai & Lee \(2012\)/);
+    expect(r.source, "Roberts et al. named").toMatch(/Roberts, Ferrier & Daviero \(1997\)/);
+    expect(r.source, "rule stated").toMatch(/less favourable/);
     expect(r.source, "no provenance tag in a result string").not.toMatch(/from memory|secondary|confirmed/i);
   });
 
-  it("gives the Roberts et al. (1997) lengths and dilutions (2.2, 2.4, 1.6, 9.0, 2.6; from memory)", () => {
-    expect(r.maxRiseHeight, "y_t = 2.2 dF").toBeCloseTo(2.2 * dF, 10);
-    expect(r.returnDistance, "x_i = 2.4 dF").toBeCloseTo(2.4 * dF, 10);
+  it("headlines the conservative 60° values: S_i = 1.06 F (Lai & Lee 2012), rise 2.2 dF (Roberts et al. 1997, higher)", () => {
+    expect(r.impactDilution, "S_i = 1.06 F, the lower of 1.06 F and 1.6 F").toBeCloseTo(1.06 * 25, 10);
+    expect(r.maxRiseHeight, "y_t = 2.2 dF, the higher of 2.08 and 2.2").toBeCloseTo(2.2 * dF, 10);
+    expect(r.returnDistance, "x_i = 2.4 dF, the only traced return distance (Roberts et al. 1997)").toBeCloseTo(2.4 * dF, 10);
     expect(r.impactDistance, "port on the bed: impact = return").toBeCloseTo(2.4 * dF, 10);
-    expect(r.impactDilution, "S_i = 1.6 F").toBeCloseTo(1.6 * 25, 10);
-    expect(r.nearFieldDistance, "x_n = 9.0 dF").toBeCloseTo(9.0 * dF, 10);
-    expect(r.nearFieldDilution, "S_n = 2.6 F").toBeCloseTo(2.6 * 25, 10);
+    expect(r.nearFieldDistance, "x_n = 9.0 dF (Roberts et al. 1997)").toBeCloseTo(9.0 * dF, 10);
+    expect(r.nearFieldDilution, "S_n = 1.06 F × 2.6/1.6, below Roberts' own 2.6 F").toBeCloseTo(1.06 * 25 * (2.6 / 1.6), 10);
   });
 
-  // Bands: rise 2.08 dF (Lai & Lee 2012, abstract) to 2.2 dF (Roberts et al. 1997, from memory) ±10 %;
-  // impact dilution 1.06 F (Lai & Lee 2012, abstract) to 1.6 F (Roberts et al. 1997, from memory).
-  it("lies inside the published 60° bands for rise and impact dilution", () => {
+  it("lies inside the 60° oracle bands (rise 1.9–2.4 dF: Lai & Lee 2012, Roberts et al. 1997; S_i/F 1.0–1.7)", () => {
     expect(r.maxRiseHeight! / dF, "rise 1.9–2.4 dF").toBeGreaterThanOrEqual(1.9);
     expect(r.maxRiseHeight! / dF, "rise 1.9–2.4 dF").toBeLessThanOrEqual(2.4);
     expect(r.impactDilution! / 25, "S_i/F 1.0–1.7").toBeGreaterThanOrEqual(1.0);
     expect(r.impactDilution! / 25, "S_i/F 1.0–1.7").toBeLessThanOrEqual(1.7);
   });
 
-  it("shows Lai & Lee (2012) as a variant and spans both in the dilution range", () => {
-    expect(r.variants?.length, "one variant").toBe(1);
-    const v = r.variants![0];
-    expect(v.source, "variant named").toMatch(/Lai & Lee \(2012\)/);
-    expect(v.maxRiseHeight, "Z_max = 2.08 dF (Lai & Lee 2012, abstract)").toBeCloseTo(2.08 * dF, 10);
-    expect(v.impactDilution, "S_i = 1.06 F (Lai & Lee 2012, abstract)").toBeCloseTo(1.06 * 25, 10);
+  it("keeps each dataset's own values as variants and spans both in the dilution range, up to 1.6 F", () => {
+    expect(r.variants?.length, "two datasets").toBe(2);
+    const lai = r.variants!.find((v) => /Lai & Lee \(2012\)/.test(v.source))!;
+    const rob = r.variants!.find((v) => /Roberts, Ferrier & Daviero \(1997\)/.test(v.source))!;
+    expect(lai.maxRiseHeight, "Z_max = 2.08 dF (Lai & Lee 2012)").toBeCloseTo(2.08 * dF, 10);
+    expect(lai.impactDilution, "S_i = 1.06 F (Lai & Lee 2012)").toBeCloseTo(1.06 * 25, 10);
+    expect(rob.impactDilution, "S_i = 1.6 F (Roberts et al. 1997)").toBeCloseTo(1.6 * 25, 10);
+    expect(rob.nearFieldDilution, "S_n = 2.6 F (Roberts et al. 1997)").toBeCloseTo(2.6 * 25, 10);
     expect(r.dilutionRange, "[1.06 F, 1.6 F]").toEqual([1.06 * 25, 1.6 * 25]);
   });
 
-  it("fills the dilution at maximum rise from Lai & Lee (S_t = 0.45 F, abstract) and notes it", () => {
+  it("gives the dilution at maximum rise from Lai & Lee (S_t = 0.45 F) and names where each headline came from", () => {
     expect(r.maxRiseDilution, "S_t = 0.45 F").toBeCloseTo(0.45 * 25, 10);
-    expect(r.notes?.join(" "), "fill is declared").toMatch(/maxRiseDilution taken from Lai & Lee \(2012\)/);
+    expect(r.notes?.join(" "), "origin of each headline declared").toMatch(/maxRiseDilution from Lai & Lee \(2012\)/);
     expect(r.maxRiseDistance, "no dataset gives x_m").toBeNull();
   });
 
-  it("reports entrained flow Q0·(S_i − 1), centreline-based", () => {
-    expect(r.entrainedFlow, "Q0 × (40 − 1)").toBeCloseTo(jet.flow * (1.6 * 25 - 1), 12);
-    expect(r.notes?.join(" "), "says it is centreline-based").toMatch(/centreline/);
+  it("reports flux-averaged dilutions beside the centreline ones, with the factor, and entrained flow on that basis", () => {
+    const k = 1.44 / (1 + 1.44); // λ²/(1 + λ²), λ = 1.2 (Fischer et al. 1979)
+    expect(r.fluxAveragingFactor, "factor (1 + λ²)/λ²").toBeCloseTo(1 / k, 12);
+    expect(r.impactDilutionFluxAveraged, "1.06 F × factor").toBeCloseTo((1.06 * 25) / k, 10);
+    expect(r.nearFieldDilutionFluxAveraged, "S_n × factor").toBeCloseTo((r.nearFieldDilution as number) / k, 10);
+    expect(r.entrainedFlow, "Q0 × (flux-averaged S_i − 1)").toBeCloseTo(jet.flow * ((1.06 * 25) / k - 1), 12);
   });
 
   it("raises no warnings for an in-range, stagnant, unstratified case", () => {
@@ -93,8 +99,8 @@ describe("nearFieldLengthScale() at 60° in stagnant water", () => {
 describe("nearFieldLengthScale() between and outside tabulated angles", () => {
   it("at 45° uses Lai & Lee (2012), interpolated between 15° and 60°, and says so", () => {
     const r = nearFieldLengthScale(makeJet({ angle: 45, d: 0.1, F: 30 }), makeColumn());
-    const expected = 0.44 + ((45 - 15) / 45) * (2.08 - 0.44); // linear between the end points of the abstract
-    expect(r.source, "primary").toMatch(/^Lai & Lee \(2012\)/);
+    const expected = 0.44 + ((45 - 15) / 45) * (2.08 - 0.44); // linear between the end points of Lai & Lee (2012)
+    expect(r.source, "the only dataset").toMatch(/^Lai & Lee \(2012\).*only dataset/);
     expect(r.maxRiseHeight, "interpolated rise").toBeCloseTo(expected * 0.1 * 30, 10);
     expect(r.impactDilution, "S_i = 1.06 F over 38–60° (Lai & Lee 2012, abstract)").toBeCloseTo(1.06 * 30, 10);
     expect(r.returnDistance, "no traced return distance at 45°").toBeNull();
@@ -116,21 +122,36 @@ describe("nearFieldLengthScale() between and outside tabulated angles", () => {
     );
   });
 
-  it("warns, with numbers, for a 75° port and uses the 60° values (no silent extrapolation)", () => {
-    const r = nearFieldLengthScale(makeJet({ angle: 75 }), makeColumn());
-    const w = r.warnings.find((x) => x.code === "angle-outside-studied-range");
-    expect(w?.severity, "15° outside the range is serious").toBe("serious");
-    expect(w?.message, "quotes the angle and the range").toMatch(/75\.0°.*15°–60°/);
-    expect(r.maxRiseHeight, "60° rise used").toBeCloseTo(2.2 * 5, 10);
-    expect(r.notes?.join(" "), "notes say so").toMatch(/nearest studied angle/);
+  for (const angle of [75, 90]) {
+    it(`is not available at ${angle}° (no cited dataset), with the reason, and returns no 60° number`, () => {
+      const jet = makeJet({ angle });
+      const r = nearFieldLengthScale(jet, makeColumn());
+      const at60 = nearFieldLengthScale(makeJet({ angle: 60 }), makeColumn());
+      expect(r.available, "not available").toBe(false);
+      expect(r.notAvailableReason, "reason names the covered angles").toMatch(/15°–60°/);
+      const w = r.warnings.find((x) => x.code === "angle-outside-studied-range");
+      expect(w?.message, "quotes the angle and the range").toMatch(new RegExp(`${angle}\\.0°.*15°–60°`));
+      for (const f of ["maxRiseHeight", "maxRiseDistance", "returnDistance", "impactDistance", "impactDilution", "nearFieldDistance", "nearFieldDilution", "maxRiseDilution", "entrainedFlow", "dilutionRange", "impactDilutionFluxAveraged"] as const) {
+        expect(r[f] ?? null, `${f} is null at ${angle}°`).toBeNull();
+        if (at60[f] !== null && at60[f] !== undefined) expect(r[f], `${f} differs from its 60° value`).not.toEqual(at60[f]);
+      }
+      expect(r.notes?.join(" "), "notes say why").toMatch(/Not available/);
+    });
+  }
+
+  it("is not available below 15° either (Lai & Lee 2012 studied 15°–60°)", () => {
+    const r = nearFieldLengthScale(makeJet({ angle: 10 }), makeColumn());
+    expect(r.available, "not available").toBe(false);
+    expect(r.maxRiseHeight, "no rise taken from 15°").toBeNull();
+    expect(r.impactDilution, "no dilution").toBeNull();
+    expect(r.entrainedFlow, "no entrainment without a dilution").toBeNull();
   });
 
-  it("warns for a 10° port and gives no dilution (Lai & Lee give none below 38°)", () => {
-    const r = nearFieldLengthScale(makeJet({ angle: 10 }), makeColumn());
-    expect(r.warnings.map((w) => w.code), "angle warning").toContain("angle-outside-studied-range");
-    expect(r.maxRiseHeight, "15° rise, 0.44 dF (Lai & Lee 2012, abstract)").toBeCloseTo(0.44 * 5, 10);
+  it("gives the 15° rise, 0.44 dF (Lai & Lee 2012), and no dilution there (none stated below 38°)", () => {
+    const r = nearFieldLengthScale(makeJet({ angle: 15 }), makeColumn());
+    expect(r.available, "available").toBe(true);
+    expect(r.maxRiseHeight, "0.44 dF").toBeCloseTo(0.44 * 5, 10);
     expect(r.impactDilution, "no dilution below 38°").toBeNull();
-    expect(r.entrainedFlow, "no entrainment without a dilution").toBeNull();
   });
 
   it("returns nothing, with a serious warning, for a downward or buoyant discharge", () => {
@@ -226,7 +247,11 @@ describe("nearFieldLengthScale() provenance", () => {
   it("names a source for the primary and every variant at every angle", () => {
     for (let angle = 5; angle <= 90; angle += 5) {
       const r = nearFieldLengthScale(makeJet({ angle }), makeColumn());
-      expect(r.source, `primary source at ${angle}°`).toMatch(/\(\d{4}\)/);
+      if (!r.available) {
+        expect(r.notAvailableReason, `reason at ${angle}°`).toMatch(/no published laboratory dataset/);
+        continue;
+      }
+      expect(r.source, `source at ${angle}°`).toMatch(/\(\d{4}\)/);
       for (const v of r.variants ?? []) expect(v.source, `variant source at ${angle}°`).toMatch(/\(\d{4}\)/);
     }
   });

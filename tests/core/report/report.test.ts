@@ -270,3 +270,16 @@ describe("the inputs hash in the report", () => {
     expect(hashOf(deeper).html, "the report prints the new hash").toContain(`id="inputs-hash">${hashes[1]}<`);
   });
 });
+
+describe("report appendix: how the methods compare with published experiments", () => {
+  it("prints the validation table with sources, ratios and bands, the same numbers as brinefield validate", async () => {
+    const { validationTable } = await import("../../../core/validation");
+    const html = reportHtml(runScenario((parseScenario(JSON.parse(readFileSync(demos[0]!, "utf8"))) as any).scenario), { scenarioFile: JSON.parse(readFileSync(demos[0]!, "utf8")) }, { generatedAt: GENERATED_AT });
+    expect(html, "appendix title").toContain("Appendix: How the methods compare with published experiments");
+    const table = validationTable();
+    const rows = html.split('<table id="validation-table">')[1]!.split("</table>")[0]!.match(/<tr>/g)!.length - 1;
+    expect(rows, "one row per comparison").toBe(table.points.length);
+    expect(html, "names Lai & Lee (2012)").toContain("Lai &amp; Lee (2012)");
+    expect(html, "prints a ratio of the table").toContain(`<td class="num">${table.points[0]!.ratio.toFixed(2)}</td>`);
+  });
+});
