@@ -15,6 +15,8 @@ import { dilutionChartSvg, sideViewSvg } from "./figures";
 import { referencesFromSources } from "./references";
 import { REPORT_CSS } from "./style";
 import { uncertaintyHtml } from "./uncertainty";
+import { claimHtml } from "./claim";
+import type { ClaimCheck } from "../compliance/claim";
 
 export interface ReportInput {
   /** The scenario file as parsed JSON (raw: units as the user wrote them). */
@@ -30,6 +32,8 @@ export interface ReportOptions {
   readonly view3dNote?: string;
   /** Monte Carlo results (shape owned by the study code; read structurally). */
   readonly uncertainty?: unknown;
+  /** A claimed dilution checked at a distance (`report --claimed-dilution N --at D`). */
+  readonly claim?: ClaimCheck;
   /** ISO date-time of generation; defaults to now. Fix it for reproducible output. */
   readonly generatedAt?: string;
 }
@@ -45,6 +49,7 @@ export const REPORT_SECTIONS = [
   "mixing-zone",
   "compliance",
   "warnings",
+  "claim",
   "uncertainty",
   "view-3d",
   "methods",
@@ -342,6 +347,9 @@ export function reportBody(result: BrinefieldResult, input: ReportInput, options
     section(id("mixing-zone"), "Mixing-zone edge", mixingZoneHtml(result, chart)),
     section(id("compliance"), "Compliance: verdict and margin", complianceHtml(result)),
     section(id("warnings"), "Warnings", warningsHtml(result)),
+    options.claim !== undefined
+      ? section(id("claim"), "Claimed dilution check", claimHtml(options.claim))
+      : section(id("claim"), "Claimed dilution check", html`<p class="note">No claimed dilution was checked for this report (report --claimed-dilution N --at D adds the check).</p>`),
     options.uncertainty !== undefined
       ? section(id("uncertainty"), "Uncertainty", uncertaintyHtml(options.uncertainty))
       : section(id("uncertainty"), "Uncertainty", html`<p class="note">No uncertainty analysis was run for this report.</p>`),
