@@ -15,6 +15,7 @@ import { MixingZoneSection } from "./inputs/MixingZoneSection";
 import { TextField } from "./inputs/fields";
 import * as host from "./platform/host";
 import { ResultsPanel } from "./results/ResultsPanel";
+import { ClaimPanel } from "./results/ClaimPanel";
 import { applyDesign, type Action } from "./state/actions";
 import {
   blankScenario,
@@ -413,6 +414,7 @@ export function App() {
               </div>
               <div className={engine.stale ? "stale" : undefined}>
                 {result ? <ResultsPanel result={result} unitSystem={unitSystem} /> : null}
+                <ClaimPanel scenario={normalised} />
               </div>
             </aside>
           </main>
