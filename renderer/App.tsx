@@ -15,7 +15,8 @@ import { MixingZoneSection } from "./inputs/MixingZoneSection";
 import { TextField } from "./inputs/fields";
 import * as host from "./platform/host";
 import { ResultsPanel } from "./results/ResultsPanel";
-import type { Action } from "./state/actions";
+import { ClaimPanel } from "./results/ClaimPanel";
+import { applyDesign, type Action } from "./state/actions";
 import {
   blankScenario,
   documentFromFile,
@@ -413,6 +414,7 @@ export function App() {
               </div>
               <div className={engine.stale ? "stale" : undefined}>
                 {result ? <ResultsPanel result={result} unitSystem={unitSystem} /> : null}
+                <ClaimPanel scenario={normalised} />
               </div>
             </aside>
           </main>
@@ -420,7 +422,7 @@ export function App() {
           <main className="study-workspace">
             <p className="caution" data-role="caution">{CAUTION}</p>
             <Suspense fallback={<div className="placeholder">Loading study tools…</div>}>
-              <StudyPanel scenarioFile={doc.file} unitSystem={unitSystem} />
+              <StudyPanel scenarioFile={doc.file} unitSystem={unitSystem} onApplyDesign={(diffuser) => perform(applyDesign, { diffuser })} />
             </Suspense>
           </main>
         )}

@@ -5,5 +5,5 @@ export {
   complianceFromEdgeDilution,
 } from "./required-dilution";
 export type { ComplianceAssessment, ConstituentSource } from "./required-dilution";
-export { checkClaim } from "./claim";
-export type { ClaimCheck, ClaimVerdict, ClaimMethodValue } from "./claim";
+export { checkClaimFromCases, CLAIM_TOLERANCE } from "./claim";
+export type { ClaimCheck, ClaimVerdict, ClaimChain, ClaimCase, ClaimCaseResult } from "./claim";

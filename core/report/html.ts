@@ -16,6 +16,8 @@ import { referencesFromSources, secondaryQuotationsFor, type Reference } from ".
 import { REPORT_CSS } from "./style";
 import { uncertaintyHtml } from "./uncertainty";
 import { validationAppendixHtml } from "./validation";
+import { claimHtml } from "./claim";
+import type { ClaimCheck } from "../compliance/claim";
 
 export interface ReportInput {
   /** The scenario file as parsed JSON (raw: units as the user wrote them). */
@@ -31,6 +33,8 @@ export interface ReportOptions {
   readonly view3dNote?: string;
   /** Monte Carlo results (shape owned by the study code; read structurally). */
   readonly uncertainty?: unknown;
+  /** A claimed dilution checked at a distance (`report --claimed-dilution N --at D`). */
+  readonly claim?: ClaimCheck;
   /** ISO date-time of generation; defaults to now. Fix it for reproducible output. */
   readonly generatedAt?: string;
 }
@@ -46,6 +50,7 @@ export const REPORT_SECTIONS = [
   "mixing-zone",
   "compliance",
   "warnings",
+  "claim",
   "uncertainty",
   "view-3d",
   "methods",
@@ -383,6 +388,9 @@ export function reportBody(result: BrinefieldResult, input: ReportInput, options
     section(id("mixing-zone"), "Mixing-zone edge", mixingZoneHtml(result, chart)),
     section(id("compliance"), "Compliance: verdict and margin", complianceHtml(result)),
     section(id("warnings"), "Warnings", warningsHtml(result)),
+    options.claim !== undefined
+      ? section(id("claim"), "Claimed dilution check", claimHtml(options.claim))
+      : section(id("claim"), "Claimed dilution check", html`<p class="note">No claimed dilution was checked for this report (report --claimed-dilution N --at D adds the check).</p>`),
     options.uncertainty !== undefined
       ? section(id("uncertainty"), "Uncertainty", uncertaintyHtml(options.uncertainty))
       : section(id("uncertainty"), "Uncertainty", html`<p class="note">No uncertainty analysis was run for this report.</p>`),

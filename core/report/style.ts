@@ -32,6 +32,7 @@ code, .path, .hash { font-family: "DejaVu Sans Mono", Menlo, Consolas, monospace
 .verdict.scope .badge { background: var(--scope); }
 .verdict.refused .badge { background: var(--muted); }
 .scope-reasons { grid-column: 2; color: var(--scope); font-weight: 600; }
+.claim-verdict { border: 1.5px solid var(--rule); border-left: 5px solid var(--accent); padding: 2mm 4mm; margin: 3mm 0; break-inside: avoid; }
 table { border-collapse: collapse; width: 100%; margin: 2mm 0 3mm; font-size: 8.6pt; }
 table:not(.inputs):not(.layout):not(#warnings-table):not(#methods-table) { break-inside: avoid; }
 caption { text-align: left; font-weight: 700; padding: 1mm 0; caption-side: top; }

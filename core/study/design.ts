@@ -1,19 +1,30 @@
 /**
- * Design search: a grid over port count, port diameter, port angle and port spacing (within a maximum
- * diffuser length), each candidate run under every ambient case (plus slack water unless the scenario
- * removes it). A candidate is kept when every case meets every limit at the mixing-zone edge and the
- * user's constraints hold: exit velocity within a range, diffuser length at most a maximum, the jet's
- * upper edge below the water surface by a clearance. The result is a short list with trade-offs,
- * not one answer.
+ * Design search, part 1: the constraints and the candidate grid. A grid over port count, port diameter,
+ * port angle, port height and port spacing (within a maximum diffuser length); each candidate is run
+ * under every ambient case (design-rank.ts judges and ranks them).
  *
- * Diameters are chosen from the velocity range: for each port count, `diameterSteps` nominal diameters
- * (rounded to the millimetre) whose exit velocities are spread geometrically over the allowed range.
+ * Diameters: for each port count, the diameters that keep the exit velocity within the allowed range
+ * AND lie within [minPortDiameter, maxPortDiameter] — either `diameterSteps` diameters spread
+ * geometrically over that interval (rounded to the millimetre) or, with `nominalSizes`, every nominal
+ * pipe size in it (nominal-sizes.ts). Spacings: `spacingSteps` fractions of the longest spacing that
+ * fits the maximum length (rounded down to 0.1 m), plus the scenario's own spacing when it fits; ports
+ * never closer than one diameter. The grid is counted before it is built and refused over
+ * `DESIGN_MAX_CANDIDATES` candidates or `DESIGN_MAX_RUNS` pipeline runs, naming the fields to narrow.
  */
 import { z } from "zod";
 import type { Scenario } from "../scenario/types";
 import { quantityToSI, type QuantityKind } from "../units";
-import type { PointEvaluation } from "./evaluate-point";
 import type { Overrides } from "./overrides";
+import { nominalDiametersBetween } from "./nominal-sizes";
+
+/** Most candidates one search may try (each runs under every ambient case). */
+export const DESIGN_MAX_CANDIDATES = 10_000;
+/**
+ * Most pipeline runs (candidates × ambient cases) one search may make. An edge-only run of the sandy-shelf
+ * demo took 3–6 ms (1 to 200 ports) on our two-core build machine while it was heavily loaded, well under
+ * that when idle: 30,000 runs over two workers stay within about a minute.
+ */
+export const DESIGN_MAX_RUNS = 30_000;
 
 export interface DesignConstraints {
   readonly minExitVelocity: number; // m/s
@@ -24,6 +35,15 @@ export interface DesignConstraints {
   readonly portAngles: readonly number[]; // degrees above horizontal
   readonly portHeights: readonly number[]; // m above seabed
   readonly diameterSteps: number;
+  /** Smallest and largest port diameter, m (nominal, as entered in a scenario). */
+  readonly minPortDiameter: number;
+  readonly maxPortDiameter: number;
+  /** Keep diameters to nominal pipe sizes (nominal-sizes.ts) instead of `diameterSteps` diameters. */
+  readonly nominalSizes: boolean;
+  /** Spacings tried per port count: this many fractions of the longest spacing that fits. */
+  readonly spacingSteps: number;
+  /** Least margin (edge dilution ÷ required dilution) in every case for a design to be listed. */
+  readonly minMargin: number;
   /** Least distance between the jet's upper edge and the water surface, m (0: must not reach it). */
   readonly surfaceClearance: number;
   /** How many designs the short list holds at most. */
@@ -35,9 +55,11 @@ export interface DesignConstraints {
  * exit velocity 3–6 m/s, the typical range for brine diffusers (Bleninger & Jirka 2008, Desalination
  * 221:585–597, from memory); port angles 30°, 45° and 60°, the angles of the published laboratory series
  * (Cipollina et al. 2005; Lai & Lee 2012); 1 to 12 ports (a line diffuser needs 2 or more); the
- * scenario's port height; 5 diameters per port count; zero surface clearance (the jet must not reach
- * the surface); maximum length the scenario's diffuser length, or 50 m for a single port (screening
- * judgement, no source); a short list of at most 8.
+ * scenario's port height; 5 diameters per port count; port diameters from 0.05 to 0.5 m (common practice
+ * for seabed brine and outfall diffuser ports, no source); 4 spacings per port count; a least margin of 1
+ * (the limit is met); zero surface clearance (the jet must not reach the surface); maximum length the
+ * scenario's diffuser length, or 50 m for a single port (screening judgement, no source); a short list of
+ * at most 8.
  */
 export function defaultConstraints(s: Scenario): DesignConstraints {
   return {
@@ -48,6 +70,11 @@ export function defaultConstraints(s: Scenario): DesignConstraints {
     portAngles: [30, 45, 60],
     portHeights: [s.diffuser.portHeight],
     diameterSteps: 5,
+    minPortDiameter: 0.05,
+    maxPortDiameter: 0.5,
+    nominalSizes: false,
+    spacingSteps: 4,
+    minMargin: 1,
     surfaceClearance: 0,
     maxDesigns: 8,
   };
@@ -77,6 +104,11 @@ export const designBlockSchema = z.strictObject({
   portAngles: z.array(qty("angle", 0, 90, "port angle")).min(1).max(20).optional(),
   portHeights: z.array(qty("length", 0, 100, "port height")).min(1).max(20).optional(),
   diameterSteps: z.number().int().min(1).max(50).optional(),
+  minPortDiameter: qty("smallLength", 0.005, 3, "smallest port diameter").optional(),
+  maxPortDiameter: qty("smallLength", 0.005, 3, "largest port diameter").optional(),
+  nominalSizes: z.boolean().optional(),
+  spacingSteps: z.number().int().min(1).max(20).optional(),
+  minMargin: z.number().min(1).max(100).optional(),
   surfaceClearance: qty("length", 0, 100, "surface clearance").optional(),
   maxDesigns: z.number().int().min(1).max(100).optional(),
 });
@@ -107,15 +139,23 @@ export function designConstraintsFrom(
       ...(b.maxLength !== undefined && { maxLength: b.maxLength }),
       ...(b.maxPorts !== undefined && { portCounts: Array.from({ length: b.maxPorts }, (_, i) => i + 1) }),
       ...(b.portCounts !== undefined && { portCounts: [...new Set(b.portCounts)].sort((x, y) => x - y) }),
-      ...(b.portAngles !== undefined && { portAngles: b.portAngles }),
-      ...(b.portHeights !== undefined && { portHeights: b.portHeights }),
+      ...(b.portAngles !== undefined && { portAngles: [...new Set(b.portAngles)] }),
+      ...(b.portHeights !== undefined && { portHeights: [...new Set(b.portHeights)] }),
       ...(b.diameterSteps !== undefined && { diameterSteps: b.diameterSteps }),
+      ...(b.minPortDiameter !== undefined && { minPortDiameter: b.minPortDiameter }),
+      ...(b.maxPortDiameter !== undefined && { maxPortDiameter: b.maxPortDiameter }),
+      ...(b.nominalSizes !== undefined && { nominalSizes: b.nominalSizes }),
+      ...(b.spacingSteps !== undefined && { spacingSteps: b.spacingSteps }),
+      ...(b.minMargin !== undefined && { minMargin: b.minMargin }),
       ...(b.surfaceClearance !== undefined && { surfaceClearance: b.surfaceClearance }),
       ...(b.maxDesigns !== undefined && { maxDesigns: b.maxDesigns }),
     };
   }
   if (c.minExitVelocity > c.maxExitVelocity) {
     issues.push({ path: "design.minExitVelocity", message: "must not exceed the maximum exit velocity" });
+  }
+  if (c.minPortDiameter > c.maxPortDiameter) {
+    issues.push({ path: "design.minPortDiameter", message: "must not exceed the largest port diameter (design.maxPortDiameter)" });
   }
   if (s.diffuser.layout === "rosette") {
     issues.push({
@@ -148,29 +188,98 @@ export function exitVelocity(
   return flow / portCount / ((Math.PI * nominalDiameter * nominalDiameter * contraction) / 4);
 }
 
-/** Every candidate meeting the geometric and velocity constraints (no pipeline runs yet). */
-export function designCandidates(s: Scenario, c: DesignConstraints): DesignCandidate[] {
-  const out: DesignCandidate[] = [];
+/** The diameters tried for `n` ports: within the velocity range and the diameter limits (m, nominal). */
+export function diametersForPortCount(s: Scenario, c: DesignConstraints, n: number): number[] {
   const q = s.discharge.flow;
   const cc = s.diffuser.contraction;
+  const dAt = (v: number) => Math.sqrt((4 * q) / (n * Math.PI * v * cc));
+  const lo = Math.max(dAt(c.maxExitVelocity), c.minPortDiameter);
+  const hi = Math.min(dAt(c.minExitVelocity), c.maxPortDiameter);
+  if (!(lo <= hi * (1 + 1e-9))) return [];
+  const raw = c.nominalSizes
+    ? nominalDiametersBetween(lo, hi)
+    : Array.from({ length: c.diameterSteps }, (_, k) => {
+        const f = c.diameterSteps === 1 ? 0.5 : k / (c.diameterSteps - 1);
+        return Math.round(lo * Math.pow(hi / lo, f) * 1000) / 1000;
+      });
+  const out = new Set<number>();
+  for (const d of raw) {
+    if (d < 0.005 || d > 3) continue; // outside the scenario format's port-diameter bounds
+    if (d < c.minPortDiameter - 1e-12 || d > c.maxPortDiameter + 1e-12) continue;
+    const v = exitVelocity(q, n, d, cc);
+    if (v < c.minExitVelocity * (1 - 1e-9) || v > c.maxExitVelocity * (1 + 1e-9)) continue;
+    out.add(d);
+  }
+  return [...out].sort((a, b) => a - b);
+}
+
+/** Spacings tried for `n` ports (m; none for a single port). */
+export function spacingsForPortCount(s: Scenario, c: DesignConstraints, n: number): number[] {
+  if (n === 1 || c.maxLength <= 0) return [];
+  const longest = c.maxLength / (n - 1);
+  const out: number[] = [];
+  for (let k = 1; k <= c.spacingSteps; k++) {
+    const sp = Math.floor(((longest * k) / c.spacingSteps) * 10 + 1e-9) / 10; // 0.1 m, never over the length
+    if (sp > 0 && !out.some((x) => Math.abs(x - sp) < 0.01)) out.push(sp);
+  }
+  const own = s.diffuser.portSpacing;
+  if (own > 0 && (n - 1) * own <= c.maxLength + 1e-9 && !out.some((x) => Math.abs(x - own) < 0.01)) out.push(own);
+  return out.sort((a, b) => a - b);
+}
+
+export type DesignPlan =
+  | { readonly ok: true; readonly candidates: DesignCandidate[] }
+  | { readonly ok: false; readonly count: number; readonly message: string };
+
+/**
+ * Counts the grid before building it; refuses one over `DESIGN_MAX_CANDIDATES` candidates or
+ * `DESIGN_MAX_RUNS` runs (candidates × `caseCount`), naming the fields that set its size.
+ */
+export function planDesignSearch(s: Scenario, c: DesignConstraints, caseCount: number): DesignPlan {
+  let count = 0;
+  let maxD = 0;
+  let maxS = 1;
   for (const n of c.portCounts) {
-    // Diameters whose velocities are spread geometrically over [vmin, vmax].
-    const diameters = new Set<number>();
-    for (let k = 0; k < c.diameterSteps; k++) {
-      const f = c.diameterSteps === 1 ? 0.5 : k / (c.diameterSteps - 1);
-      const v = c.minExitVelocity * Math.pow(c.maxExitVelocity / c.minExitVelocity, f);
-      const d = Math.sqrt((4 * q) / (n * Math.PI * v * cc));
-      diameters.add(Math.round(d * 1000) / 1000);
-    }
-    const spacings = n === 1 ? [0] : spacingOptions(s, n, c.maxLength);
-    for (const d of diameters) {
-      if (d < 0.005 || d > 3) continue; // outside the scenario format's port-diameter bounds
+    const nd = diametersForPortCount(s, c, n).length;
+    const ns = n === 1 ? 1 : spacingsForPortCount(s, c, n).length;
+    maxD = Math.max(maxD, nd);
+    maxS = Math.max(maxS, ns);
+    count += nd * ns * c.portAngles.length * c.portHeights.length;
+  }
+  const runs = count * Math.max(1, caseCount);
+  if (count > DESIGN_MAX_CANDIDATES || runs > DESIGN_MAX_RUNS) {
+    const what =
+      `${c.portCounts.length} port counts (design.maxPorts or design.portCounts) × up to ${maxD} diameters (design.diameterSteps` +
+      `${c.nominalSizes ? ", design.nominalSizes" : ""}, design.minPortDiameter–design.maxPortDiameter) × up to ${maxS} spacings (design.spacingSteps) × ` +
+      `${c.portAngles.length} angles (design.portAngles) × ${c.portHeights.length} port heights (design.portHeights)`;
+    return {
+      ok: false,
+      count,
+      message:
+        `the design search would try ${count} candidates (${what}) under ${caseCount} ambient cases = ${runs} runs, more than the ` +
+        `cap of ${DESIGN_MAX_CANDIDATES} candidates and ${DESIGN_MAX_RUNS} runs that keeps a search within about a minute; narrow those fields.`,
+    };
+  }
+  return { ok: true, candidates: designCandidates(s, c) };
+}
+
+/** Every candidate meeting the geometric and velocity constraints (no pipeline runs yet), without duplicates. */
+export function designCandidates(s: Scenario, c: DesignConstraints): DesignCandidate[] {
+  const out: DesignCandidate[] = [];
+  const seen = new Set<string>();
+  const q = s.discharge.flow;
+  const cc = s.diffuser.contraction;
+  for (const n of [...new Set(c.portCounts)]) {
+    const spacings = n === 1 ? [0] : spacingsForPortCount(s, c, n);
+    for (const d of diametersForPortCount(s, c, n)) {
       const v = exitVelocity(q, n, d, cc);
-      if (v < c.minExitVelocity * (1 - 1e-9) || v > c.maxExitVelocity * (1 + 1e-9)) continue;
       for (const spacing of spacings) {
         if (n > 1 && spacing <= d) continue; // ports may not overlap
         for (const angle of c.portAngles) {
           for (const h of c.portHeights) {
+            const key = designKey(n, d, angle, spacing, h);
+            if (seen.has(key)) continue;
+            seen.add(key);
             out.push({
               portCount: n,
               portDiameter: d,
@@ -188,14 +297,10 @@ export function designCandidates(s: Scenario, c: DesignConstraints): DesignCandi
   return out;
 }
 
-/** Ports spread over the full allowed length (least merging), and the scenario's spacing if it fits. */
-function spacingOptions(s: Scenario, n: number, maxLength: number): number[] {
-  if (maxLength <= 0) return [];
-  const full = Math.floor((maxLength / (n - 1)) * 100) / 100; // centimetre-rounded, never over the length
-  const out = [full];
-  const own = s.diffuser.portSpacing;
-  if (own > 0 && (n - 1) * own <= maxLength && Math.abs(own - full) > 0.01) out.push(own);
-  return out.filter((x) => x > 0);
+/** Identity of a geometry (millimetre, 0.01° and centimetre resolution): equal keys are the same design. */
+export function designKey(n: number, d: number, angle: number, spacing: number, height: number): string {
+  const r = (x: number, k: number) => Math.round(x * k);
+  return `${n}|${r(d, 1000)}|${r(angle, 100)}|${n > 1 ? r(spacing, 100) : 0}|${r(height, 100)}`;
 }
 
 export function candidateOverrides(d: DesignCandidate): Overrides {
@@ -210,131 +315,3 @@ export function candidateOverrides(d: DesignCandidate): Overrides {
   return o;
 }
 
-export interface DesignVerdict {
-  readonly candidate: DesignCandidate;
-  readonly ok: boolean;
-  /** Lowest margin over the ambient cases (edge dilution ÷ required dilution). */
-  readonly worstMargin: number;
-  readonly governingCase: string | null;
-  readonly worstEdgeDilution: number;
-  /** Least water-surface clearance over cases and methods, m. */
-  readonly surfaceClearance: number | null;
-  readonly reasons: readonly string[];
-}
-
-export function judgeDesign(
-  candidate: DesignCandidate,
-  p: PointEvaluation,
-  c: DesignConstraints,
-): DesignVerdict {
-  const reasons: string[] = [];
-  if (p.worst < 0) {
-    return {
-      candidate,
-      ok: false,
-      worstMargin: Number.NaN,
-      governingCase: null,
-      worstEdgeDilution: Number.NaN,
-      surfaceClearance: null,
-      reasons: [p.error ?? "not run"],
-    };
-  }
-  let clearance: number | null = null;
-  for (const k of p.cases) {
-    if (k.summary.verdict === "exceeds") {
-      reasons.push(`does not meet the limit in case "${k.name}" (margin ${k.summary.margin.toFixed(2)})`);
-    } else if (k.summary.verdict === "outside-scope") {
-      reasons.push(`outside the screening methods' scope in case "${k.name}": ${k.summary.scopeReasons.join(" ")}`);
-    }
-    if (k.summary.reachesSurface) reasons.push(`jet reaches the surface in case "${k.name}"`);
-    const sc = k.summary.surfaceClearance;
-    if (sc !== null) clearance = clearance === null ? sc : Math.min(clearance, sc);
-  }
-  const surfaced = reasons.some((r) => r.startsWith("jet reaches"));
-  if (clearance !== null && clearance < c.surfaceClearance && !surfaced) {
-    reasons.push(
-      `jet's upper edge only ${clearance.toFixed(2)} m below the surface (${c.surfaceClearance} m required)`,
-    );
-  }
-  const w = p.cases[p.worst]!;
-  return {
-    candidate,
-    ok: reasons.length === 0,
-    worstMargin: w.summary.margin,
-    governingCase: w.name,
-    worstEdgeDilution: w.summary.edgeDilution,
-    surfaceClearance: clearance,
-    reasons,
-  };
-}
-
-export type DesignCriterion =
-  | "fewest ports"
-  | "lowest exit velocity"
-  | "largest margin"
-  | "shortest diffuser";
-
-export interface RankedDesign extends DesignVerdict {
-  readonly rank: number;
-  /** The trade-offs this design is best at within the passing set. */
-  readonly bestFor: readonly DesignCriterion[];
-}
-
-/**
- * The short list: the best passing design for each criterion (fewest ports, lowest exit velocity,
- * largest margin, shortest diffuser), then the rest of the Pareto front on (ports ↓, velocity ↓,
- * margin ↑, length ↓) ordered by margin, up to `max` designs.
- */
-export function shortList(verdicts: readonly DesignVerdict[], max: number): RankedDesign[] {
-  const ok = verdicts.filter((v) => v.ok);
-  if (ok.length === 0) return [];
-  type Order = (a: DesignVerdict, b: DesignVerdict) => number;
-  const byMargin: Order = (a, b) => b.worstMargin - a.worstMargin;
-  const crit: Record<DesignCriterion, Order> = {
-    "fewest ports": (a, b) => a.candidate.portCount - b.candidate.portCount || byMargin(a, b),
-    "lowest exit velocity": (a, b) => a.candidate.exitVelocity - b.candidate.exitVelocity || byMargin(a, b),
-    "largest margin": (a, b) => byMargin(a, b) || a.candidate.portCount - b.candidate.portCount,
-    "shortest diffuser": (a, b) => a.candidate.length - b.candidate.length || byMargin(a, b),
-  };
-  const best = new Map<DesignVerdict, DesignCriterion[]>();
-  for (const [name, cmp] of Object.entries(crit) as [DesignCriterion, Order][]) {
-    const top = [...ok].sort(cmp)[0]!;
-    best.set(top, [...(best.get(top) ?? []), name]);
-  }
-  const dominated = (a: DesignVerdict) =>
-    ok.some(
-      (b) =>
-        b !== a &&
-        b.candidate.portCount <= a.candidate.portCount &&
-        b.candidate.exitVelocity <= a.candidate.exitVelocity &&
-        b.worstMargin >= a.worstMargin &&
-        b.candidate.length <= a.candidate.length &&
-        (b.candidate.portCount < a.candidate.portCount ||
-          b.candidate.exitVelocity < a.candidate.exitVelocity ||
-          b.worstMargin > a.worstMargin ||
-          b.candidate.length < a.candidate.length),
-    );
-  const front = ok.filter((v) => !best.has(v) && !dominated(v)).sort(crit["largest margin"]);
-  const list = [...best.keys(), ...front].slice(0, Math.max(1, max));
-  return list.map((v, i) => ({ ...v, rank: i + 1, bestFor: best.get(v) ?? [] }));
-}
-
-/** A design as the scenario's own diffuser fields plus its trade-off numbers (the `--json` entry). */
-export function designJson(d: RankedDesign) {
-  return {
-    rank: d.rank,
-    bestFor: d.bestFor,
-    portCount: d.candidate.portCount,
-    portDiameter: d.candidate.portDiameter,
-    portAngle: d.candidate.portAngle,
-    portSpacing: d.candidate.portSpacing,
-    portHeight: d.candidate.portHeight,
-    length: d.candidate.length,
-    layout: d.candidate.portCount === 1 ? "single" : "line",
-    exitVelocity: d.candidate.exitVelocity,
-    worstMargin: d.worstMargin,
-    worstEdgeDilution: d.worstEdgeDilution,
-    governingCase: d.governingCase,
-    surfaceClearance: d.surfaceClearance,
-  };
-}

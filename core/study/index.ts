@@ -49,13 +49,16 @@ export {
   defaultConstraints,
   designConstraintsFrom,
   designCandidates,
+  planDesignSearch,
   candidateOverrides,
-  judgeDesign,
-  shortList,
-  designJson,
   exitVelocity,
+  DESIGN_MAX_CANDIDATES,
+  DESIGN_MAX_RUNS,
 } from "./design";
-export type { DesignConstraints, DesignCandidate, DesignVerdict, RankedDesign } from "./design";
+export type { DesignConstraints, DesignCandidate, DesignPlan } from "./design";
+export { judgeDesign, shortList, designJson, designOutcome, designDiffuserBlock, nearestMiss, DESIGN_RANKING_RULE } from "./design-rank";
+export type { DesignVerdict, RankedDesign, DesignOutcome, NearestMiss } from "./design-rank";
+export { NOMINAL_SIZES_DN, NOMINAL_SIZES_SOURCE } from "./nominal-sizes";
 export { parseStudy, studyFileSchema, studyJsonSchema, STUDY_FORMAT, STUDY_VERSION } from "./study-file";
 export type { StudyFile, StudyIssue } from "./study-file";
 export { studyVariants, compareVariant, flattenRow, sortRows, columnsOf, WORST_CASE_ROW } from "./compare";

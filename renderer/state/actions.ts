@@ -127,6 +127,20 @@ export const setLayout: Action<{ layout: "single" | "line" | "rosette" }> = {
   },
 };
 
+/**
+ * Replaces the diffuser block with a design's block (from the design search, computed in core): keys the
+ * design does not set are removed, so nothing of the old layout (spacing, length, flow split) lingers.
+ * One undo step.
+ */
+export const applyDesign: Action<{ diffuser: { readonly [key: string]: unknown } }> = {
+  name: "apply-design",
+  perform: (state, { diffuser }) => {
+    const old = isPlainObject(state.file["diffuser"]) ? state.file["diffuser"] : {};
+    const cleared = Object.fromEntries(Object.keys(old).map((k) => [k, undefined]));
+    return updateScenario(state, { diffuser: { ...cleared, ...diffuser } });
+  },
+};
+
 export const ACTIONS = {
   setField,
   renameScenario,
@@ -137,4 +151,5 @@ export const ACTIONS = {
   removeArrayItem,
   appendArrayItem,
   setLayout,
+  applyDesign,
 } as const;

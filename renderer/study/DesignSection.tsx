@@ -1,15 +1,13 @@
-/** Study tab, design search: candidate port layouts ranked by their worst margin over the ambient cases. */
+/**
+ * Study tab, design search: candidate port layouts ranked by the stated rule (computed in core), the
+ * nearest miss when none passes, and a button that applies a listed design to the document (undoable).
+ */
 import { useState } from "react";
 import type { Scenario } from "../../core/scenario/types";
 import { formatNumber, siToDisplay, type UnitSystem } from "../../core/units";
-import {
-  candidateOverrides,
-  designCandidates,
-  designConstraintsFrom,
-  judgeDesign,
-  shortList,
-  type RankedDesign,
-} from "../../core/study/design";
+import { candidateOverrides, designConstraintsFrom, planDesignSearch } from "../../core/study/design";
+import { designOutcome, type DesignOutcome } from "../../core/study/design-rank";
+import { expandCases } from "../../core/study/cases";
 import type { RunPoints } from "./sections";
 
 export function DesignSection({
@@ -18,22 +16,27 @@ export function DesignSection({
   unitSystem,
   busy,
   runPoints,
+  onApply,
 }: {
   scenario: Scenario | null;
   scenarioFile: unknown;
   unitSystem: UnitSystem;
   busy: boolean;
   runPoints: RunPoints;
+  onApply?: (diffuser: Record<string, unknown>) => void;
 }) {
   const [form, setForm] = useState({
     minExitVelocity: "3 m/s",
     maxExitVelocity: "6 m/s",
     maxLength: "",
     maxPorts: "12",
+    minPortDiameter: "0.05 m",
+    maxPortDiameter: "0.5 m",
+    nominalSizes: false,
   });
-  const [designs, setDesigns] = useState<RankedDesign[] | null>(null);
-  const [summary, setSummary] = useState<string>("");
+  const [outcome, setOutcome] = useState<DesignOutcome | null>(null);
   const [problem, setProblem] = useState<string | null>(null);
+  const [applied, setApplied] = useState<number | null>(null);
 
   const run = async () => {
     if (!scenario) return;
@@ -42,6 +45,9 @@ export function DesignSection({
       maxExitVelocity: form.maxExitVelocity,
       ...(form.maxLength.trim() ? { maxLength: form.maxLength } : {}),
       maxPorts: Number(form.maxPorts),
+      minPortDiameter: form.minPortDiameter,
+      maxPortDiameter: form.maxPortDiameter,
+      nominalSizes: form.nominalSizes,
     };
     const block = (scenarioFile as { design?: unknown } | null)?.design;
     const c = designConstraintsFrom(scenario, block, flags);
@@ -49,99 +55,144 @@ export function DesignSection({
       setProblem(c.issues.map((i) => `${i.path}: ${i.message}`).join("\n"));
       return;
     }
-    setProblem(null);
-    const candidates = designCandidates(scenario, c.constraints);
-    if (candidates.length === 0) {
-      setProblem("No geometry fits the constraints; widen the velocity range or the length.");
+    const plan = planDesignSearch(scenario, c.constraints, expandCases(scenario).length);
+    if (!plan.ok) {
+      setProblem(plan.message);
       return;
     }
-    const points = await runPoints("Design search", scenario, candidates.map(candidateOverrides));
+    setProblem(null);
+    setApplied(null);
+    if (plan.candidates.length === 0) {
+      setProblem("No design: no port diameter gives an exit velocity within the range inside the diameter limits; widen them.");
+      return;
+    }
+    const points = await runPoints("Design search", scenario, plan.candidates.map(candidateOverrides));
     if (!points) return;
-    const verdicts = candidates.map((d, i) => judgeDesign(d, points[i]!, c.constraints));
-    setDesigns(shortList(verdicts, c.constraints.maxDesigns));
-    const passing = verdicts.filter((v) => v.ok).length;
-    setSummary(`${candidates.length} candidates tried, ${passing} meet every limit under every case.`);
+    const rawDiffuser = (scenarioFile as { diffuser?: unknown } | null)?.diffuser;
+    setOutcome(designOutcome(scenario, c.constraints, plan.candidates, points, rawDiffuser));
   };
 
-  const len = (v: number) => {
-    const d = siToDisplay(v, "length", unitSystem);
+  const show = (v: number, kind: "length" | "smallLength" | "speed") => {
+    const d = siToDisplay(v, kind, unitSystem);
     return `${formatNumber(d.value)} ${d.unit}`;
   };
-  const dia = (v: number) => {
-    const d = siToDisplay(v, "smallLength", unitSystem);
-    return `${formatNumber(d.value)} ${d.unit}`;
-  };
-  const vel = (v: number) => {
-    const d = siToDisplay(v, "speed", unitSystem);
-    return `${formatNumber(d.value)} ${d.unit}`;
-  };
+  const texts = [
+    ["minExitVelocity", "min exit velocity"],
+    ["maxExitVelocity", "max exit velocity"],
+    ["maxLength", "max diffuser length (blank: scenario's)"],
+    ["maxPorts", "max ports"],
+    ["minPortDiameter", "smallest port diameter"],
+    ["maxPortDiameter", "largest port diameter"],
+  ] as const;
 
   return (
-    <section>
+    <section data-role="study-design">
       <h3>Design search</h3>
       <p className="study-note">
         Port count, diameter, angle (30°, 45°, 60°) and spacing within the maximum length; every design must
         meet every limit at the mixing-zone edge under all ambient cases, keep the jet below the surface and
-        stay within the velocity range. The scenario's “design” block supplies further constraints.
+        stay within the velocity and diameter ranges (0.05–0.5 m by default, common practice). The
+        scenario's “design” block supplies further constraints.
       </p>
       <div className="study-form">
-        {(
-          [
-            ["minExitVelocity", "min exit velocity"],
-            ["maxExitVelocity", "max exit velocity"],
-            ["maxLength", "max diffuser length (blank: scenario's)"],
-            ["maxPorts", "max ports"],
-          ] as const
-        ).map(([k, label]) => (
+        {texts.map(([k, label]) => (
           <label key={k}>
             {label}
-            <input
-              className="narrow"
-              value={form[k]}
-              onChange={(e) => setForm({ ...form, [k]: e.target.value })}
-            />
+            <input className="narrow" value={form[k]} onChange={(e) => setForm({ ...form, [k]: e.target.value })} />
           </label>
         ))}
-        <button
-          type="button"
-          disabled={busy || !scenario}
-          onClick={() => void run()}
-          data-command="study-design"
-        >
+        <label>
+          nominal pipe sizes (ISO 6708 DN)
+          <input type="checkbox" checked={form.nominalSizes} onChange={(e) => setForm({ ...form, nominalSizes: e.target.checked })} />
+        </label>
+        <button type="button" disabled={busy || !scenario} onClick={() => void run()} data-command="study-design">
           Search
         </button>
       </div>
       {problem ? <div className="study-error">{problem}</div> : null}
-      {designs ? <p className="study-note">{summary}</p> : null}
-      {designs && designs.length === 0 ? <p>No design meets every limit under every case.</p> : null}
-      {designs && designs.length > 0 ? (
+      {outcome ? (
+        <>
+          <p data-role="design-headline">
+            <b>{outcome.headline}</b>
+          </p>
+          <p className="study-note" data-role="design-rule">{outcome.rankingRule}</p>
+          {outcome.notes.slice(1).map((n) => (
+            <p key={n} className="study-note">{n}</p>
+          ))}
+        </>
+      ) : null}
+      {outcome?.nearestMiss ? (
+        <div data-role="design-nearest-miss">
+          <h4>Nearest miss</h4>
+          <p>
+            {outcome.nearestMiss.design.portCount} port(s) of {show(outcome.nearestMiss.design.portDiameter, "smallLength")} at{" "}
+            {outcome.nearestMiss.design.portAngle}°, length {show(outcome.nearestMiss.design.length, "length")}, exit velocity{" "}
+            {show(outcome.nearestMiss.design.exitVelocity, "speed")}: worst margin {formatNumber(outcome.nearestMiss.design.worstMargin)}× in “
+            {outcome.nearestMiss.design.governingCase}”.
+          </p>
+          <ul>
+            {outcome.nearestMiss.reasons.map((r) => (
+              <li key={r}>{r}</li>
+            ))}
+          </ul>
+          <p>What would close the gap:</p>
+          <ul>
+            {outcome.nearestMiss.toClose.map((t) => (
+              <li key={t.field + t.message}>
+                {t.field ? <code>{t.field}</code> : null} {t.message}
+              </li>
+            ))}
+          </ul>
+        </div>
+      ) : null}
+      {outcome && outcome.designs.length > 0 ? (
         <table data-role="study-design-table">
           <thead>
             <tr>
               {DESIGN_HEADERS.map((h) => (
-                <th key={h} className={h === "governing case" || h === "best for" ? "text" : ""}>
+                <th key={h} className={h === "governing case" || h === "best for" || h === "" ? "text" : ""}>
                   {h}
                 </th>
               ))}
             </tr>
           </thead>
           <tbody>
-            {designs.map((d) => (
+            {outcome.designs.map((d) => (
               <tr key={d.rank}>
                 <td>{d.rank}</td>
-                <td>{d.candidate.portCount}</td>
-                <td>{dia(d.candidate.portDiameter)}</td>
-                <td>{d.candidate.portAngle}°</td>
-                <td>{d.candidate.portCount > 1 ? len(d.candidate.portSpacing) : "—"}</td>
-                <td>{len(d.candidate.length)}</td>
-                <td>{vel(d.candidate.exitVelocity)}</td>
+                <td>{d.portCount}</td>
+                <td>{show(d.portDiameter, "smallLength")}</td>
+                <td>{d.portAngle}°</td>
+                <td>{d.portSpacing !== null ? show(d.portSpacing, "length") : "—"}</td>
+                <td>{show(d.length, "length")}</td>
+                <td>{show(d.exitVelocity, "speed")}</td>
                 <td>{formatNumber(d.worstMargin)}×</td>
                 <td className="text">{d.governingCase}</td>
-                <td className="text">{d.bestFor.join(", ") || "balanced"}</td>
+                <td className="text">{d.bestFor.join(", ")}</td>
+                <td className="text">
+                  {onApply ? (
+                    <button
+                      type="button"
+                      data-command="apply-design"
+                      title="Put this design's diffuser block into the scenario (Undo restores the previous one)"
+                      onClick={() => {
+                        onApply(d.diffuser);
+                        setApplied(d.rank);
+                      }}
+                    >
+                      {applied === d.rank ? "Applied" : "Apply"}
+                    </button>
+                  ) : null}
+                </td>
               </tr>
             ))}
           </tbody>
         </table>
+      ) : null}
+      {applied !== null ? (
+        <p className="study-note" role="status">
+          Design #{applied} is now the scenario's diffuser; Undo (Ctrl+Z) restores the previous one. Check it with the full results and warnings.
+        </p>
       ) : null}
     </section>
   );
@@ -149,5 +200,5 @@ export function DesignSection({
 
 const DESIGN_HEADERS = [
   ...["#", "ports", "diameter", "angle", "spacing", "length"],
-  ...["exit velocity", "worst margin (edge ÷ required dilution)", "governing case", "best for"],
+  ...["exit velocity", "worst margin (edge ÷ required dilution)", "governing case", "best for", ""],
 ];

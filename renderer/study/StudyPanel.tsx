@@ -34,9 +34,11 @@ interface Props {
   /** The raw scenario file being edited (the document). */
   readonly scenarioFile: unknown;
   readonly unitSystem: UnitSystem;
+  /** Puts a listed design's diffuser block into the document (one undo step). */
+  readonly onApplyDesign?: (diffuser: Record<string, unknown>) => void;
 }
 
-export function StudyPanel({ scenarioFile, unitSystem }: Props) {
+export function StudyPanel({ scenarioFile, unitSystem, onApplyDesign }: Props) {
   const pool = useMemo(() => new StudyWorkerPool(defaultWorkerCount()), []);
   useEffect(() => () => pool.dispose(), [pool]);
   const [section, setSection] = useState<Section>("variants");
@@ -169,6 +171,7 @@ export function StudyPanel({ scenarioFile, unitSystem }: Props) {
             unitSystem={unitSystem}
             busy={busy}
             runPoints={runPoints}
+            onApply={onApplyDesign}
           />
         ) : (
           <MonteCarloSection scenario={scenario} busy={busy} runJob={runJob} poolSize={pool.size} />

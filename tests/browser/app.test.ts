@@ -356,6 +356,42 @@ describe("the built app", () => {
     await page.locator("[data-role=headline-table]").waitFor();
   });
 
+  it("checks a claimed dilution beside the results and refuses a dilution below 1", async () => {
+    await page.click("[data-command=design]");
+    await page.locator("[data-role=headline-table]").waitFor();
+    const panel = page.locator("[data-role=claim-panel]");
+    await panel.locator("summary").click();
+    await page.fill("[data-field=claim-dilution]", "1.5");
+    await page.click("[data-command=check-claim]");
+    await panel.locator("[data-claim-verdict]").waitFor({ timeout: 30_000 });
+    expect(await panel.locator("[data-claim-verdict]").getAttribute("data-claim-verdict"), "1.5 is below every case's edge dilution").toBe("supported");
+    expect(await panel.locator("svg[data-figure=claim-range-bar]").count(), "the range bar").toBe(1);
+    expect(await panel.textContent(), "the caution").toContain("screening estimate");
+    await panel.screenshot({ path: join(artifacts, "app-claim-panel.png") });
+    await page.fill("[data-field=claim-dilution]", "0.5");
+    await page.click("[data-command=check-claim]");
+    expect(await panel.locator("[role=alert]").textContent(), "refused with a plain message").toMatch(/at least 1/);
+  });
+
+  it("applies a design from the design search to the document as one undoable step", async () => {
+    const diameter = () => page.locator('input[data-path="diffuser.portDiameter"]').inputValue();
+    const before = await diameter();
+    await page.click("[data-command=study]");
+    await page.click("[data-study=design]", { timeout: 20_000 });
+    await expect.poll(() => page.locator("[data-command=study-design]").isDisabled(), { message: "scenario read", timeout: 30_000 }).toBe(false);
+    await page.locator(".study-form label", { hasText: "max ports" }).locator("input").fill("2");
+    await page.click("[data-command=study-design]");
+    await page.locator("[data-role=design-headline]").waitFor({ timeout: 120_000 });
+    expect(await page.locator("[data-role=design-rule]").textContent(), "the ranking rule is shown").toMatch(/fewest ports/);
+    expect(await page.locator("[data-command=apply-design]").count(), "the island-cove demo has passing designs with two ports").toBeGreaterThan(0);
+    await page.locator("[data-command=apply-design]").first().click();
+    await page.click("[data-command=design]");
+    await page.locator("[data-role=headline-table]").waitFor();
+    await expect.poll(diameter, { message: "the design's diameter is in the document" }).not.toBe(before);
+    await page.click("[data-command=undo]");
+    await expect.poll(diameter, { message: "undo restores the previous diffuser" }).toBe(before);
+  });
+
   it("renders only the 3D view on the capture route and reports ready", async () => {
     const text = readFileSync(join(root, "demo-scenarios", demoFiles()[1]), "utf8");
     const context = await browser.newContext({ viewport: { width: 1000, height: 600 } });

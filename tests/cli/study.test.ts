@@ -14,7 +14,6 @@ import { command as design } from "../../core/cli/commands/design";
 import { command as uncertainty } from "../../core/cli/commands/uncertainty";
 import { parseScenario } from "../../core/scenario/parse";
 import { runScenario } from "../../core/pipeline";
-import { withOverrides } from "../../core/study/overrides";
 import { expandCases } from "../../core/study/cases";
 import { fourPortRaw } from "../core/study/fixtures";
 
@@ -172,25 +171,51 @@ describe("brinefield design", () => {
     const j = JSON.parse(f.out());
     expect(j.slackWaterAdded, "slack water added and said so").toBe(true);
     expect(j.designs.length, "a list, not one answer").toBeGreaterThan(1);
-    const parsed = parseScenario(JSON.parse(readFileSync(join(dir, "site.json"), "utf8")));
-    if (!parsed.ok) throw new Error("site must parse");
+    expect(j.rankingRule, "the ranking rule is stated").toMatch(/fewest ports/);
+    expect(j.caution, "caution in the JSON").toContain("screening estimate");
+    expect(j.nearestMiss, "no nearest miss when designs pass").toBeNull();
+    const siteRaw = JSON.parse(readFileSync(join(dir, "site.json"), "utf8"));
     for (const d of j.designs) {
-      for (const k of ["portCount", "portDiameter", "portAngle", "portSpacing"]) {
+      for (const k of ["portCount", "portDiameter", "portAngle", "exitVelocity", "worstMargin"]) {
         expect(typeof d[k], `design field ${k}`).toBe("number");
       }
-      const s = withOverrides(parsed.scenario, {
-        "diffuser.portCount": d.portCount,
-        "diffuser.portDiameter": d.portDiameter,
-        "diffuser.portAngle": d.portAngle,
-        "diffuser.portHeight": d.portHeight,
-        ...(d.portCount > 1 ? { "diffuser.portSpacing": d.portSpacing } : { "diffuser.length": 0 }),
-      });
-      for (const c of expandCases(s)) {
+      // The diffuser block pasted into the scenario as it is reads and passes in every case.
+      const parsed = parseScenario({ ...siteRaw, diffuser: d.diffuser });
+      if (!parsed.ok) throw new Error(`design #${d.rank} block refused: ${parsed.issues.map((i) => i.message).join("; ")}`);
+      for (const c of expandCases(parsed.scenario)) {
         const r = runScenario(c.scenario, { includePath: false });
         expect(r.compliance.pass, `design #${d.rank} passes in ${c.name}`).toBe(true);
         expect(d.length, `design #${d.rank} within 30 m`).toBeLessThanOrEqual(30);
       }
     }
+  });
+
+  it("answers 'no design' with exit 0, says so on its first line after the caution and gives the nearest miss", WORKERS, async () => {
+    const strict = { ...JSON.parse(readFileSync(join(dir, "site.json"), "utf8")), mixingZone: { radius: 5, limits: [{ constituent: "salinity", maxIncrease: 0.05 }] } };
+    writeFileSync(join(dir, "strict.json"), JSON.stringify(strict));
+    const f = fakeIO();
+    const code = await design.run(["strict.json", "--max-ports", "3", "--diameter-steps", "2", "--angles", "60", "--workers", "1"], f.io);
+    expect(code, "an answer, not an error").toBe(0);
+    const body = f.out().split("\n").filter((l) => l.trim() !== "");
+    const afterCaution = body[body.findIndex((l, i) => i > 0 && /^─+$/.test(l)) + 1];
+    expect(body[0], "the caution opens the output").toMatch(/^─+$/);
+    expect(afterCaution, "first line after the caution says so").toMatch(/^No design meets every limit/);
+    expect(f.out(), "nearest miss shown").toContain("Nearest miss");
+    expect(f.out(), "caution").toContain("screening estimate");
+    const g = fakeIO();
+    expect(await design.run(["strict.json", "--max-ports", "3", "--diameter-steps", "2", "--angles", "60", "--json", "--workers", "1"], g.io), "JSON: exit 0").toBe(0);
+    const j = JSON.parse(g.out());
+    expect(j.designs, "empty list").toEqual([]);
+    expect(j.nearestMiss.toClose.length, "what would close it").toBeGreaterThan(0);
+    expect(j.nearestMiss.requiredMargin, "the required margin").toBe(1);
+  });
+
+  it("refuses a search over the candidate cap with exit 2, naming the fields", async () => {
+    const big = { ...JSON.parse(readFileSync(join(dir, "site.json"), "utf8")), design: { portCounts: Array.from({ length: 200 }, (_, i) => i + 1), diameterSteps: 50, portAngles: [10, 20, 30, 40, 50, 60, 70, 80], spacingSteps: 20, minPortDiameter: 0.005, maxPortDiameter: 3, minExitVelocity: 0.1, maxExitVelocity: 30, maxLength: 5000 } };
+    writeFileSync(join(dir, "big.json"), JSON.stringify(big));
+    const run = design.run(["big.json", "--workers", "1"], fakeIO().io);
+    await expect(run, "over the cap").rejects.toThrow(/design\.diameterSteps.*design\.spacingSteps.*design\.portAngles/);
+    await run.catch((e: CliError) => expect(e.exitCode, "exit 2").toBe(2));
   });
 });
 

@@ -2,25 +2,38 @@
 import { CliError, type CliCommand, type CliIO } from "../command";
 import { readArgs, numberOption } from "../args";
 import { loadScenarioFile } from "../load";
-import { runScenario } from "../../pipeline";
-import { checkClaim } from "../../compliance/claim";
+import { checkClaimOnScenario } from "../../compliance/claim-run";
+import { CAUTION } from "../../result/contract";
+import { inputsHash } from "../../scenario/hash";
+import { textTable } from "../../study/table";
 
 const NAME = "check-claim";
 
 const HELP = `Usage: brinefield check-claim <scenario.json> --claimed-dilution D [--at L] [--json]
 
-Compares a claimed dilution with Brinefield's independent range at a distance. The range runs from the
-lowest to the highest dilution over the method chains (near field × spreading layer or passive diffusion)
-and over each near-field method's stated uncertainty.
+Checks a claimed dilution at a plan distance against Brinefield's method chains (each near-field
+method carried on by the spreading dense layer or, with a current, by passive diffusion), evaluated at
+that distance in every ambient case the overall verdict covers: the stated conditions, every listed
+case and slack water (unless options.addSlackWater is false).
+
+Verdicts:
+  supported       the claim is at or below the conservative value (the lowest edge dilution at that
+                  distance over the cases), within 0.1 %
+  plausible       above the conservative value, but at or below what at least one chain gives (its
+                  central value or the top of its method's stated scatter); those chains are named,
+                  with the assumptions they rest on
+  not-supported   above every chain, scatter included
 
 Options:
-  --claimed-dilution D   the claimed dilution (a number greater than 0), required
-  --at L                 plan distance from the diffuser in metres (default: the mixing-zone radius)
-  --json                 print the check as JSON (verdict, range, distance, methods, assumptions)
+  --claimed-dilution D   the claimed dilution (a number of at least 1), required
+  --at L                 plan distance from the diffuser in metres (default: the mixing-zone radius);
+                         at most the end of the computed dilution series (no extrapolation)
+  --json                 print the check as JSON (verdict, conservativeDilution, ratioToConservative,
+                         chains, cases, caution)
   -h, --help             show this help
 
-Verdicts: "above" (the claim is higher than any method gives), "within", "below" (more conservative
-than every method). The exit code is 0 whatever the verdict; 2 for usage or scenario errors.`;
+Exit codes: 0 whatever the verdict; 2 for usage or scenario errors, a claimed dilution below 1 or a
+distance beyond the computed series.`;
 
 function fmt(v: number): string {
   return Number.isFinite(v) ? (Math.abs(v) >= 100 ? v.toFixed(0) : String(Number(v.toPrecision(3)))) : String(v);
@@ -28,7 +41,7 @@ function fmt(v: number): string {
 
 export const command: CliCommand = {
   name: NAME,
-  summary: "Check a claimed dilution against Brinefield's independent range",
+  summary: "Check a claimed dilution against Brinefield's method chains: supported, plausible or not supported",
   help: HELP,
   async run(argv: readonly string[], io: CliIO): Promise<number> {
     const { values, positionals } = readArgs(
@@ -46,26 +59,41 @@ export const command: CliCommand = {
       return 0;
     }
     if (positionals.length !== 1) throw new CliError(`brinefield ${NAME}: give exactly one scenario file.\n${HELP}`);
-    const claimed = numberOption(values["claimed-dilution"], "claimed-dilution", NAME, (v) => (v > 0 ? null : "must be greater than 0"));
+    const claimed = numberOption(values["claimed-dilution"], "claimed-dilution", NAME, (v) =>
+      v >= 1 ? null : "is not possible: a dilution is at least 1 (1 is the undiluted brine at the port)",
+    );
     if (claimed === undefined) throw new CliError(`brinefield ${NAME}: --claimed-dilution is required.`);
-    const at = numberOption(values.at, "at", NAME, (v) => (v >= 0 ? null : "must be 0 or more metres"));
+    const at = numberOption(values.at, "at", NAME, (v) => (v > 0 ? null : "must be a distance in metres greater than 0"));
     const scenario = loadScenarioFile(positionals[0], io);
-    const result = runScenario(scenario, { includePath: true });
-    const check = checkClaim(result, claimed, at);
+    const outcome = checkClaimOnScenario(scenario, claimed, at);
+    if (!outcome.ok) {
+      const flag = outcome.field === "at" ? "--at" : "--claimed-dilution";
+      throw new CliError(`brinefield ${NAME}: ${flag}: ${outcome.message}`);
+    }
+    const check = outcome.check;
     if (values.json) {
-      io.stdout(JSON.stringify({ format: "brinefield-claim-check", version: 1, scenarioName: result.scenarioName, inputsHash: result.inputsHash, ...check, caution: result.caution }, null, 2) + "\n");
+      io.stdout(
+        JSON.stringify(
+          { format: "brinefield-claim-check", version: 1, scenarioName: scenario.name, inputsHash: inputsHash(scenario), ...check, seriesEnd: outcome.seriesEnd, caution: CAUTION },
+          null,
+          2,
+        ) + "\n",
+      );
       return 0;
     }
     const lines = [
-      `Scenario: ${result.scenarioName}`,
-      `Claimed dilution ${fmt(check.claimedDilution)} at ${fmt(check.distance)} m: ${check.verdict.toUpperCase()} Brinefield's range ${fmt(check.range[0])}–${fmt(check.range[1])}` +
-        (check.verdict === "within" ? "." : ` (×${check.byHowMuch.toFixed(2)} the nearest end).`),
+      `Claim check: ${check.verdict}. ${check.summary}`,
+      `Scenario: ${scenario.name}`,
+      `Conservative value ${fmt(check.conservativeDilution)} (case "${check.conservativeCase}"); claim ÷ conservative = ${check.ratioToConservative.toFixed(3)}.`,
       "",
-      "Methods at that distance (dilution, low–high with stated uncertainty):",
-      ...check.methods.map((m) => `  ${m.method}: ${fmt(m.dilution)} (${fmt(m.low)}–${fmt(m.high)})`),
+      `Method chains at ${fmt(check.distance)} m (dilution; low–high with the near-field method's stated scatter):`,
+      textTable(
+        ["case", "chain", "dilution", "low", "high", "gives the claim"],
+        check.chains.map((c) => [c.case, c.method, c.dilution, c.low, c.high, c.reproducesClaim ? (c.onlyWithinScatter ? "within scatter" : "yes") : "no"]),
+      ),
     ];
-    if (check.assumptionsNeeded.length) lines.push("", "Assumptions:", ...check.assumptionsNeeded.map((a) => `  - ${a}`));
-    lines.push("", result.caution);
+    if (check.assumptionsNeeded.length) lines.push("What the claim rests on:", ...check.assumptionsNeeded.map((a) => `  - ${a}`));
+    lines.push("", CAUTION);
     io.stdout(lines.join("\n") + "\n");
     return 0;
   },

@@ -6,14 +6,8 @@ import { readArgs } from "../args";
 import { loadJsonFile, formatIssues } from "../load";
 import { parseScenario } from "../../scenario/parse";
 import { describeCases, expandCases } from "../../study/cases";
-import {
-  candidateOverrides,
-  designCandidates,
-  designConstraintsFrom,
-  designJson,
-  judgeDesign,
-  shortList,
-} from "../../study/design";
+import { candidateOverrides, designConstraintsFrom, planDesignSearch, DESIGN_MAX_CANDIDATES, DESIGN_MAX_RUNS } from "../../study/design";
+import { designOutcome } from "../../study/design-rank";
 import { textTable } from "../../study/table";
 import { formatNumber } from "../../units";
 import {
@@ -30,9 +24,12 @@ const HELP = `Usage: brinefield design <scenario.json> [constraints] [--json] [-
 Searches port count, port diameter, port angle and port spacing (within a maximum diffuser length) for
 line or single-port diffusers that meet every limit at the mixing-zone edge under ALL ambient cases —
 plus a slack-water case (zero current) unless the scenario sets options.addSlackWater to false or
---no-slack-water is given. Returns a ranked short list with trade-offs (fewest ports, lowest exit
-velocity, largest margin, shortest diffuser, then other designs no other design beats on all four),
-not one answer. Diameters are chosen so that exit velocities spread over the allowed range.
+--no-slack-water is given. Returns a ranked short list, not one answer. Ranking: fewest ports, then
+the shortest diffuser, then the exit velocity nearest the middle of the allowed band, then the larger
+worst-case margin, then the smaller diameter. Each design carries a "diffuser" block that can be pasted
+into the scenario as it is. When no design passes, the nearest miss is shown with what would close the
+gap; that is an answer, exit code 0. Searches over ${DESIGN_MAX_CANDIDATES} candidates or
+${DESIGN_MAX_RUNS} runs (candidates × ambient cases) are refused (exit 2) naming the fields to narrow.
 
 Constraints come from the scenario's "design" block and these flags (flags win). Quantities are SI
 numbers or values with units, e.g. "design": { "maxExitVelocity": "5 m/s", "maxLength": "60 m" }.
@@ -46,15 +43,27 @@ numbers or values with units, e.g. "design": { "maxExitVelocity": "5 m/s", "maxL
   --angles A,B,…         Port angles above horizontal (default 30,45,60).   design.portAngles
   --port-heights H,…     Port heights above the seabed (default: the scenario's). design.portHeights
   --diameter-steps N     Diameters tried per port count (default 5).        design.diameterSteps
+  --min-diameter D       Smallest port diameter (default 0.05 m).           design.minPortDiameter
+  --max-diameter D       Largest port diameter (default 0.5 m).             design.maxPortDiameter
+                         (0.05–0.5 m is common practice for such ports, no source)
+  --nominal-sizes        Keep diameters to nominal pipe sizes (ISO 6708 DN series, from memory; DN
+                         taken as the bore in mm).                          design.nominalSizes
+  --spacing-steps N      Spacings tried per port count (default 4).         design.spacingSteps
+  --min-margin M         Least margin (edge ÷ required dilution) in every case (default 1).
+                                                                            design.minMargin
   --surface-clearance C  Least gap between the jet's upper edge and the surface (default 0: the jet
                          must not reach the surface).                       design.surfaceClearance
   --max-designs N        Length of the short list (default 8).              design.maxDesigns
   --no-slack-water       Leave out the added slack-water case.
-  --json                 Print JSON: a "designs" list whose entries use the scenario's diffuser field
-                         names (portCount, portDiameter as entered, portAngle, portSpacing, portHeight,
-                         length, layout) plus exitVelocity, worstMargin, governingCase, bestFor.
+  --json                 Print JSON: "designs" (each with a pasteable "diffuser" block and portCount,
+                         portDiameter, portAngle, portSpacing, portHeight, length, layout,
+                         exitVelocity, worstMargin, governingCase, bestFor), "rankingRule",
+                         "nearestMiss" (null unless nothing passes) and "caution".
   --workers K            Worker threads (default: all cores).
-  -h, --help             Show this help.`;
+  -h, --help             Show this help.
+
+Exit codes: 0 an answer (designs, or none with the nearest miss); 2 bad input or constraints, or a
+search over the cap; 130 cancelled.`;
 
 function list(v: string | undefined): string[] | undefined {
   return v === undefined ? undefined : v.split(",").map((x) => x.trim()).filter((x) => x !== "");
@@ -78,6 +87,11 @@ async function run(argv: readonly string[], io: CliIO): Promise<number> {
       angles: { type: "string" },
       "port-heights": { type: "string" },
       "diameter-steps": { type: "string" },
+      "min-diameter": { type: "string" },
+      "max-diameter": { type: "string" },
+      "nominal-sizes": { type: "boolean" },
+      "spacing-steps": { type: "string" },
+      "min-margin": { type: "string" },
       "surface-clearance": { type: "string" },
       "max-designs": { type: "string" },
       "no-slack-water": { type: "boolean" },
@@ -108,6 +122,11 @@ async function run(argv: readonly string[], io: CliIO): Promise<number> {
       portAngles: list(values.angles)?.map(num),
       portHeights: list(values["port-heights"])?.map(num),
       diameterSteps: int(values["diameter-steps"], "diameter-steps"),
+      minPortDiameter: num(values["min-diameter"]),
+      maxPortDiameter: num(values["max-diameter"]),
+      nominalSizes: values["nominal-sizes"] ? true : undefined,
+      spacingSteps: int(values["spacing-steps"], "spacing-steps"),
+      minMargin: values["min-margin"] === undefined ? undefined : Number(values["min-margin"]),
       surfaceClearance: num(values["surface-clearance"]),
       maxDesigns: int(values["max-designs"], "max-designs"),
     }).filter(([, v]) => v !== undefined),
@@ -119,13 +138,30 @@ async function run(argv: readonly string[], io: CliIO): Promise<number> {
     throw new CliError(`${path}: design constraints:\n${list}`);
   }
   const c = cons.constraints;
-  const candidates = designCandidates(scenario, c);
+  const cases = expandCases(scenario);
+  const casesNote = describeCases(cases, scenario);
+  const plan = planDesignSearch(scenario, c, cases.length);
+  if (!plan.ok) throw new CliError(`brinefield ${NAME}: ${plan.message}`);
+  const candidates = plan.candidates;
+  const rawDiffuser = (raw as { diffuser?: unknown }).diffuser;
+  const constraintsLine =
+    `Constraints: exit velocity ${c.minExitVelocity}–${c.maxExitVelocity} m/s, port diameter ` +
+    `${formatNumber(c.minPortDiameter)}–${formatNumber(c.maxPortDiameter)} m${c.nominalSizes ? " (nominal sizes)" : ""}, ` +
+    `diffuser length ≤ ${formatNumber(c.maxLength)} m, ports ${Math.min(...c.portCounts)}–${Math.max(...c.portCounts)}, ` +
+    `angles ${c.portAngles.join(", ")}°, port height ${c.portHeights.map((h) => formatNumber(h)).join(", ")} m, ` +
+    `margin ≥ ${c.minMargin}, jet's upper edge ≥ ${c.surfaceClearance} m below the surface.`;
   if (candidates.length === 0) {
-    throw new CliError(
-      `brinefield ${NAME}: no candidate geometry fits the constraints (exit velocity ` +
-        `${c.minExitVelocity}–${c.maxExitVelocity} m/s, length ≤ ${c.maxLength} m); widen them.`,
-      1,
-    );
+    const headline =
+      `No design meets every limit in every ambient case: no candidate geometry fits the constraints ` +
+      `(no diameter gives an exit velocity of ${c.minExitVelocity}–${c.maxExitVelocity} m/s within ` +
+      `${formatNumber(c.minPortDiameter)}–${formatNumber(c.maxPortDiameter)} m for ${Math.min(...c.portCounts)}–${Math.max(...c.portCounts)} ports); ` +
+      "widen design.minPortDiameter/maxPortDiameter, the velocity range or the port counts.";
+    if (values.json) {
+      io.stdout(JSON.stringify({ format: "brinefield-design", version: 1, scenarioName: scenario.name, headline, constraints: c, candidatesTried: 0, candidatesPassing: 0, designs: [], nearestMiss: null, caution: CAUTION }, null, 2) + "\n");
+    } else {
+      io.stdout(withCaution([headline, constraintsLine].join("\n") + "\n"));
+    }
+    return 0;
   }
   const overrides = candidates.map(candidateOverrides);
   const done = await withProgress(io, "Design search", candidates.length, (onProgress) =>
@@ -133,75 +169,83 @@ async function run(argv: readonly string[], io: CliIO): Promise<number> {
   );
   if (!done) return EXIT_CANCELLED;
   const { value: points, elapsedSeconds } = done;
-  const verdicts = candidates.map((d, i) => judgeDesign(d, points[i]!, c));
-  const designs = shortList(verdicts, c.maxDesigns);
-  const cases = expandCases(scenario);
-  const casesNote = describeCases(cases, scenario);
-  const passing = verdicts.filter((v) => v.ok).length;
+  const outcome = designOutcome(scenario, c, candidates, points, rawDiffuser);
   if (values.json) {
     io.stdout(
       JSON.stringify(
         {
           format: "brinefield-design",
           version: 1,
-          caution: CAUTION,
           scenarioName: scenario.name,
+          headline: outcome.headline,
+          rankingRule: outcome.rankingRule,
           constraints: c,
           ambientCases: cases.map((k) => k.name),
           slackWaterAdded: cases.some((k) => k.addedSlackWater),
-          candidatesTried: candidates.length,
-          candidatesPassing: passing,
-          designs: designs.map(designJson),
-          notes: [casesNote],
+          candidatesTried: outcome.candidatesTried,
+          candidatesPassing: outcome.candidatesPassing,
+          candidatesRefused: outcome.candidatesRefused,
+          designs: outcome.designs,
+          nearestMiss: outcome.nearestMiss,
+          notes: [casesNote, ...outcome.notes],
           elapsedSeconds,
+          caution: outcome.caution,
         },
         null,
         2,
       ) + "\n",
     );
-    return designs.length > 0 ? 0 : 1;
+    return 0;
   }
   const out = [
-    `Design search: ${scenario.name}`,
-    `${candidates.length} candidates tried, ${passing} meet every limit under every case ` +
-      `(${formatNumber(elapsedSeconds)} s).`,
+    outcome.headline,
+    `Design search: ${scenario.name} (${formatNumber(elapsedSeconds)} s).`,
     casesNote,
-    `Constraints: exit velocity ${c.minExitVelocity}–${c.maxExitVelocity} m/s, ` +
-      `diffuser length ≤ ${formatNumber(c.maxLength)} m, angles ${c.portAngles.join(", ")}°, ` +
-      `port height ${c.portHeights.map((h) => formatNumber(h)).join(", ")} m, ` +
-      `jet's upper edge ≥ ${c.surfaceClearance} m below the surface.`,
+    constraintsLine,
+    `Ranking: ${outcome.rankingRule}`,
+    ...outcome.notes.slice(1),
     "",
   ];
-  if (designs.length === 0) {
+  if (outcome.nearestMiss) {
+    const m = outcome.nearestMiss;
     out.push(
-      "No design meets every limit under every case. " +
-        "Try more ports, a longer diffuser or a wider velocity range.",
+      `Nearest miss: ${m.design.portCount} port(s), diameter ${m.design.portDiameter} m, angle ${m.design.portAngle}°` +
+        (m.design.portCount > 1 ? `, spacing ${m.design.portSpacing} m (length ${formatNumber(m.design.length)} m)` : "") +
+        `, exit velocity ${formatNumber(m.design.exitVelocity)} m/s; worst margin ${m.design.worstMargin.toFixed(2)} in case "${m.design.governingCase}".`,
+      "Why it fails:",
+      ...m.reasons.map((r) => `  - ${r}`),
+      "What would close the gap:",
+      ...m.toClose.map((t) => `  - ${t.field ? `${t.field}: ` : ""}${t.message}`),
+      "",
+      "Its diffuser block:",
+      JSON.stringify(m.design.diffuser),
     );
-    io.stdout(withCaution(out.join("\n") + "\n"));
-    return 1;
+  } else if (outcome.designs.length > 0) {
+    out.push(
+      textTable(
+        [
+          ...["#", "ports", "diameter (m)", "angle (°)", "spacing (m)", "length (m)", "height (m)"],
+          ...["exit vel. (m/s)", "worst margin", "governing case", "best for"],
+        ],
+        outcome.ranked.map((d) => [
+          d.rank,
+          d.candidate.portCount,
+          d.candidate.portDiameter,
+          d.candidate.portAngle,
+          d.candidate.portCount > 1 ? d.candidate.portSpacing : null,
+          d.candidate.length,
+          d.candidate.portHeight,
+          d.candidate.exitVelocity,
+          d.worstMargin,
+          d.governingCase,
+          d.bestFor.join(", "),
+        ]),
+      ),
+      "Diffuser block of #1 (paste into the scenario's \"diffuser\"; --json lists every design's block):",
+      JSON.stringify(outcome.designs[0]!.diffuser),
+      "Screening only: check the chosen design with the full `brinefield run` output and its warnings.",
+    );
   }
-  out.push(
-    textTable(
-      [
-        ...["#", "ports", "diameter (m)", "angle (°)", "spacing (m)", "length (m)", "height (m)"],
-        ...["exit vel. (m/s)", "worst margin", "governing case", "best for"],
-      ],
-      designs.map((d) => [
-        d.rank,
-        d.candidate.portCount,
-        d.candidate.portDiameter,
-        d.candidate.portAngle,
-        d.candidate.portCount > 1 ? d.candidate.portSpacing : null,
-        d.candidate.length,
-        d.candidate.portHeight,
-        d.candidate.exitVelocity,
-        d.worstMargin,
-        d.governingCase,
-        d.bestFor.join(", ") || "balanced (no other design beats it on all four)",
-      ]),
-    ),
-  );
-  out.push("Screening only: check the chosen design with the full `brinefield run` output and its warnings.");
   io.stdout(withCaution(out.join("\n") + "\n"));
   return 0;
 }

@@ -17,11 +17,14 @@ import type { BrinefieldResult } from "../../result/contract";
 import { reportHtml, resultCsv, seriesCsv, studyReportHtml, studyResultCsv, studySeriesCsv } from "../../report";
 import { csvWithCaution } from "../../report/csv";
 import type { StudyReportVariant } from "../../report";
+import { checkClaimOnScenario } from "../../compliance/claim-run";
+import type { ClaimCheck } from "../../compliance/claim";
 import { parseStudy, withRawOverride, planMonteCarlo, runMonteCarloChunk, summariseMonteCarlo, evaluateScenario } from "../../study";
 
 const HELP = `Usage: brinefield report <scenario-or-study.json> [--out report.html] [--pdf report.pdf]
                          [--csv results.csv] [--series-csv series.csv] [--json result.json]
                          [--no-3d] [--uncertainty <runs>] [--seed <n>]
+                         [--claimed-dilution <N> [--at <D>]]
 
 Writes the screening report: a self-contained, printable HTML document with the permitting caution,
 the job and question, every input (as entered and in SI), derived quantities, each near-field method's
@@ -41,6 +44,10 @@ Options:
   --uncertainty <runs>  Run a Monte Carlo of that many runs on the scenario's uncertain inputs (or
                         default spreads) and add the percentiles to the report (scenarios only).
   --seed <n>            Seed of the Monte Carlo (default 1), for repeatable numbers.
+  --claimed-dilution <N>  Check a claimed dilution and add a claim section (verdict supported,
+                        plausible or not-supported, each method chain's value, a range bar), as
+                        \`brinefield check-claim\` does (scenarios only).
+  --at <D>              Distance of the claim in metres (default: the mixing-zone radius).
   -h, --help            Show this help.
 
 Exit codes: 0 report written; 2 the input or the options are invalid; 3 the PDF could not be printed
@@ -97,6 +104,8 @@ export const command: CliCommand = {
         "no-3d": { type: "boolean" },
         uncertainty: { type: "string" },
         seed: { type: "string" },
+        "claimed-dilution": { type: "string" },
+        at: { type: "string" },
       },
       "report",
     );
@@ -106,6 +115,11 @@ export const command: CliCommand = {
     const inputPath = positionals[0]!;
     const runs = numberOption(values.uncertainty, "uncertainty", "report", (v) => (Number.isInteger(v) && v >= 1 && v <= 100_000 ? null : "must be a whole number from 1 to 100000"));
     const seed = numberOption(values.seed, "seed", "report", (v) => (Number.isInteger(v) && v >= 0 && v <= 0xffffffff ? null : "must be a whole number from 0 to 4294967295")) ?? 1;
+    const claimed = numberOption(values["claimed-dilution"], "claimed-dilution", "report", (v) =>
+      v >= 1 ? null : "is not possible: a dilution is at least 1 (1 is the undiluted brine at the port)",
+    );
+    const at = numberOption(values.at, "at", "report", (v) => (v > 0 ? null : "must be a distance in metres greater than 0"));
+    if (at !== undefined && claimed === undefined) throw new CliError("brinefield report: --at needs --claimed-dilution N.");
     const text = io.readFile(inputPath);
     let file: unknown;
     try {
@@ -139,6 +153,7 @@ export const command: CliCommand = {
         return { name: v.name, description: v.description, overrides: v.overrides, scenarioFile: raw, result: runScenario(scenario) };
       });
       if (runs !== undefined) io.stderr("brinefield report: --uncertainty applies to scenarios only; run it per scenario for a study's variants.\n");
+      if (claimed !== undefined) throw new CliError("brinefield report: --claimed-dilution applies to scenarios only; report the variant's scenario to check a claim.");
       let pngs: (string | undefined)[] | undefined;
       let note: string | undefined = want3d ? undefined : "it was turned off (--no-3d)";
       if (want3d) {
@@ -161,8 +176,14 @@ export const command: CliCommand = {
       const scenario = readScenarioRaw(file, inputPath);
       const result: BrinefieldResult = runScenario(scenario);
       const uncertainty = runs !== undefined ? monteCarlo(scenario, runs, seed, io) : undefined;
+      let claim: ClaimCheck | undefined;
+      if (claimed !== undefined) {
+        const outcome = checkClaimOnScenario(scenario, claimed, at);
+        if (!outcome.ok) throw new CliError(`brinefield report: ${outcome.field === "at" ? "--at" : "--claimed-dilution"}: ${outcome.message}`);
+        claim = outcome.check;
+      }
       const shot = want3d ? await tryCapture3d(text, io) : { note: "it was turned off (--no-3d)" };
-      html = reportHtml(result, { scenarioFile: file, scenarioText: text }, { view3dPng: shot.png, view3dNote: shot.note, uncertainty, generatedAt });
+      html = reportHtml(result, { scenarioFile: file, scenarioText: text }, { view3dPng: shot.png, view3dNote: shot.note, uncertainty, claim, generatedAt });
       csv = resultCsv(result);
       series = seriesCsv(result);
       json = JSON.stringify(result, null, 2) + "\n";

@@ -7,6 +7,9 @@
 import { describe, expect, it } from "vitest";
 import { csvParse } from "d3-dsv";
 import { join } from "node:path";
+import { readFileSync } from "node:fs";
+import { parseScenario } from "../../../core/scenario/parse";
+import { checkClaimOnScenario } from "../../../core/compliance/claim-run";
 import { command } from "../../../core/cli/commands/report";
 import { CliError } from "../../../core/cli/command";
 import { resultCsv, seriesCsv, reportNumber } from "../../../core/report";
@@ -49,6 +52,35 @@ describe("brinefield report <scenario>", () => {
     await expect(command.run([], memoryIO()), "no file").rejects.toBeInstanceOf(CliError);
     await expect(command.run([demo, "--uncertainty", "many"], memoryIO()), "bad runs").rejects.toThrow(/--uncertainty "many" must be a number/);
     await expect(command.run([join(ROOT, "tests/cli/fixtures/bad-diameter.json"), "--no-3d"], memoryIO()), "invalid scenario").rejects.toBeInstanceOf(CliError);
+  });
+});
+
+describe("brinefield report --claimed-dilution N --at D", () => {
+  it("adds a claim section with the same verdict and numbers as check-claim, and a range bar", async () => {
+    const io = memoryIO();
+    expect(await command.run([demo, "--no-3d", "--out", "c.html", "--claimed-dilution", "60", "--at", "150"], io), "exit 0").toBe(0);
+    const html = io.files.get(join(ROOT, "c.html")) as string;
+    const section = html.slice(html.indexOf('<section id="claim"'), html.indexOf("</section>", html.indexOf('<section id="claim"')));
+    const parsed = parseScenario(JSON.parse(readFileSync(demo, "utf8")));
+    if (!parsed.ok) throw new Error("demo must parse");
+    const outcome = checkClaimOnScenario(parsed.scenario, 60, 150);
+    if (!outcome.ok) throw new Error(outcome.message);
+    expect(section, "verdict word").toContain(`data-claim-verdict="${outcome.check.verdict}"`);
+    expect(section, "conservative value").toContain(`data-claim="conservativeDilution">${reportNumber(outcome.check.conservativeDilution)}<`);
+    expect(section, "range bar figure").toContain('data-figure="claim-range-bar"');
+    expect((section.match(/<circle /g) ?? []).length, "one dot per chain").toBe(outcome.check.chains.length);
+    for (const c of outcome.check.chains) expect(section, `chain ${c.method}`).toContain(c.method);
+  });
+
+  it("says no claim was checked when none was given, and refuses what check-claim refuses", async () => {
+    const io = memoryIO();
+    await command.run([demo, "--no-3d", "--out", "n.html"], io);
+    expect(io.files.get(join(ROOT, "n.html")) as string, "a note in the claim section").toContain("No claimed dilution was checked");
+    for (const args of [["--claimed-dilution", "0.5"], ["--claimed-dilution", "60", "--at", "20000"], ["--at", "100"]]) {
+      const run = command.run([demo, "--no-3d", ...args], memoryIO());
+      await expect(run, args.join(" ")).rejects.toBeInstanceOf(CliError);
+      await run.catch((e: CliError) => expect(e.exitCode, `${args.join(" ")}: exit 2`).toBe(2));
+    }
   });
 });
 
