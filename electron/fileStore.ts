@@ -3,18 +3,18 @@
  * list and the autosave slot. Plain Node (fs/promises); no Electron import, so every function here is
  * unit-tested without an Electron binary (tests/electron/fileStore.test.ts).
  *
- * Atomic write: the new bytes go to a temporary file in the same folder, are flushed with fsync, and
- * then renamed over the target. A rename within one folder replaces the directory entry in one step
- * on POSIX and on NTFS, so a crash at any point leaves either the old file or the new one, never half
- * of each (common practice, no source).
+ * The reader and the atomic writer are the shared ones of nodeio/ (also used by the command line), so
+ * the app and the command line accept, refuse and write files by the same rules.
  */
-import { randomBytes } from "node:crypto";
-import { constants as fsConstants } from "node:fs";
 import * as fsp from "node:fs/promises";
-import { basename, dirname, isAbsolute, join, resolve } from "node:path";
+import { basename, dirname, isAbsolute, resolve } from "node:path";
+import { formatByteSize, MAX_INPUT_BYTES, parseJsonText, readInputFile, writeFileAtomic } from "../nodeio";
 
-/** Largest scenario file Brinefield opens, saves or autosaves. A scenario is a few kB of JSON. */
-export const MAX_SCENARIO_BYTES = 5 * 1024 * 1024;
+export { writeFileAtomic, tempPathFor, OutputRefusedError } from "../nodeio";
+export type { AtomicWriteOptions } from "../nodeio";
+
+/** Largest scenario file Brinefield opens, saves or autosaves: the one input cap of every reader. */
+export const MAX_SCENARIO_BYTES = MAX_INPUT_BYTES;
 /** Largest export (report HTML, CSV, PDF) written through the host. */
 export const MAX_EXPORT_BYTES = 25 * 1024 * 1024;
 /** Length of the recent-files list. */
@@ -25,12 +25,7 @@ export type ReadTextResult =
   | { readonly ok: false; readonly message: string };
 
 /** "812 kB", "5 MB", "7.3 MB" — decimal-free when whole, for messages. */
-export function formatBytes(bytes: number): string {
-  if (bytes < 1024) return `${bytes} bytes`;
-  if (bytes < 1024 * 1024) return `${Math.round(bytes / 1024)} kB`;
-  const mb = bytes / (1024 * 1024);
-  return `${Number.isInteger(mb) ? mb.toFixed(0) : mb.toFixed(1)} MB`;
-}
+export const formatBytes = formatByteSize;
 
 function errorCode(error: unknown): string | undefined {
   return typeof error === "object" && error !== null && "code" in error
@@ -62,72 +57,6 @@ export function describeFileError(error: unknown, path: string, action: string):
   }
 }
 
-export interface AtomicWriteOptions {
-  /**
-   * Called after the temporary file is written and flushed, just before the rename. Tests use it to
-   * simulate a crash at the most dangerous moment; production code leaves it unset.
-   */
-  readonly beforeRename?: (tempPath: string) => void | Promise<void>;
-  /** Platform whose rules apply (directory fsync is skipped on Windows). Defaults to the host's. */
-  readonly platform?: NodeJS.Platform;
-}
-
-/** Temporary sibling used by `writeFileAtomic`: hidden, unique, same folder as the target. */
-export function tempPathFor(targetPath: string): string {
-  return join(dirname(targetPath), `.${basename(targetPath)}.${randomBytes(6).toString("hex")}.tmp`);
-}
-
-/**
- * Write `data` to `targetPath` atomically (temp file in the same folder → fsync → rename → fsync of
- * the folder). Keeps the permission bits of an existing target. Throws the underlying fs error; the
- * temporary file is removed when the write fails in this process.
- */
-export async function writeFileAtomic(
-  targetPath: string,
-  data: string | Uint8Array,
-  options: AtomicWriteOptions = {},
-): Promise<void> {
-  const platform = options.platform ?? process.platform;
-  // Saving through a symlink updates the file it points to rather than replacing the link.
-  const target = await fsp.realpath(resolve(targetPath)).catch(() => resolve(targetPath));
-  let mode = 0o644;
-  try {
-    mode = (await fsp.stat(target)).mode & 0o777;
-  } catch {
-    // No previous file: the default mode applies.
-  }
-  const temp = tempPathFor(target);
-  let handle: fsp.FileHandle | undefined;
-  let renamed = false;
-  try {
-    handle = await fsp.open(temp, fsConstants.O_CREAT | fsConstants.O_EXCL | fsConstants.O_WRONLY, mode);
-    await handle.writeFile(data);
-    await handle.sync();
-    await handle.close();
-    handle = undefined;
-    if (options.beforeRename) await options.beforeRename(temp);
-    await fsp.rename(temp, target);
-    renamed = true;
-  } finally {
-    if (handle) await handle.close().catch(() => undefined);
-    if (!renamed) await fsp.rm(temp, { force: true }).catch(() => undefined);
-  }
-  if (platform !== "win32") {
-    // Flush the directory entry too, so the rename itself survives a power cut (POSIX only; Windows
-    // cannot open a folder for fsync).
-    try {
-      const dir = await fsp.open(dirname(target), "r");
-      try {
-        await dir.sync();
-      } finally {
-        await dir.close();
-      }
-    } catch {
-      // Some file systems refuse fsync on directories; the data itself is already flushed.
-    }
-  }
-}
-
 export interface ReadJsonOptions {
   readonly maxBytes?: number;
   /** Word used in messages, e.g. "scenario". */
@@ -142,48 +71,17 @@ export async function readJsonTextFile(path: string, options: ReadJsonOptions = 
   const maxBytes = options.maxBytes ?? MAX_SCENARIO_BYTES;
   const label = options.label ?? "scenario";
   const name = basename(path);
-  let handle: fsp.FileHandle | undefined;
-  try {
-    handle = await fsp.open(path, "r");
-    const info = await handle.stat();
-    if (!info.isFile()) return { ok: false, message: `“${name}” is not a regular file.` };
-    if (info.size > maxBytes) {
-      const limit = formatBytes(maxBytes);
-      const message = `“${name}” is ${formatBytes(info.size)}; a ${label} file may be at most ${limit}.`;
-      return { ok: false, message };
+  const read = await readInputFile(path, { maxBytes });
+  if (!read.ok) {
+    if (/^cannot be read \(no such file\)/.test(read.message)) {
+      return { ok: false, message: `Could not open “${name}”: the file or its folder does not exist.` };
     }
-    // Read at most one byte past the limit, in case the file grows between stat and read.
-    const buffer = Buffer.alloc(Math.min(info.size, maxBytes) + 1);
-    let length = 0;
-    while (length < buffer.length) {
-      const { bytesRead } = await handle.read(buffer, length, buffer.length - length, length);
-      if (bytesRead === 0) break;
-      length += bytesRead;
-    }
-    if (length > maxBytes) {
-      const message = `“${name}” is larger than ${formatBytes(maxBytes)}; it cannot be opened.`;
-      return { ok: false, message };
-    }
-    let text: string;
-    try {
-      text = new TextDecoder("utf-8", { fatal: true }).decode(buffer.subarray(0, length));
-    } catch {
-      return { ok: false, message: `“${name}” is not UTF-8 text, so it cannot be a ${label} file.` };
-    }
-    if (text.charCodeAt(0) === 0xfeff) text = text.slice(1);
-    if (text.trim() === "") return { ok: false, message: `“${name}” is empty.` };
-    try {
-      JSON.parse(text);
-    } catch (error) {
-      const detail = error instanceof Error ? error.message.split("\n")[0] : "syntax error";
-      return { ok: false, message: `“${name}” is not valid JSON (${detail}).` };
-    }
-    return { ok: true, text };
-  } catch (error) {
-    return { ok: false, message: describeFileError(error, path, "open") };
-  } finally {
-    if (handle) await handle.close().catch(() => undefined);
+    return { ok: false, message: `“${name}” ${read.message} (a ${label} file is UTF-8 JSON of at most ${formatBytes(maxBytes)}).` };
   }
+  if (read.text.trim() === "") return { ok: false, message: `“${name}” is empty.` };
+  const json = parseJsonText(read.text, maxBytes);
+  if (!json.ok) return { ok: false, message: `“${name}” ${json.message}.` };
+  return { ok: true, text: read.text };
 }
 
 async function pathIsFile(path: string): Promise<boolean> {

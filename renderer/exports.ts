@@ -1,9 +1,8 @@
 /** Export commands: the HTML report (core/report/html.ts) and the distance series as CSV. */
-import { csvFormatRows } from "d3-dsv";
 import { CAUTION, type BrinefieldResult } from "../core/result/contract";
 import { formatNumber, siToDisplay, type UnitSystem } from "../core/units";
 import { exportFile } from "./platform/host";
-import { csvWithCaution } from "../core/report/csv";
+import { csvFormatRowsSafe, csvWithCaution } from "../core/report/csv";
 
 export { csvWithCaution };
 import { serialiseScenario, suggestedFileName, type ScenarioFile } from "./state/scenarioState";
@@ -47,7 +46,7 @@ export function seriesCsv(result: BrinefieldResult, unitSystem: UnitSystem): str
       s.stage[i] ?? "",
     ]);
   }
-  return csvFormatRows(rows) + "\n";
+  return csvFormatRowsSafe(rows) + "\n";
 }
 
 /**

@@ -7,10 +7,14 @@ export interface CliIO {
   readonly cwd: string;
   stdout(text: string): void;
   stderr(text: string): void;
-  /** Reads a UTF-8 file; throws CliError with a readable message on failure. */
+  /**
+   * Reads an input file as text (regular files only, size-capped, UTF-8 with the byte-order mark
+   * removed); throws CliError with a readable message on failure. Remembers the file as an input, so
+   * `writeFile` refuses to overwrite it.
+   */
   readFile(path: string): string;
-  /** Writes atomically (temporary file + rename). */
-  writeFile(path: string, data: string | Uint8Array): void;
+  /** Writes atomically (see nodeio/atomicWrite.ts); throws CliError when the output is refused or fails. */
+  writeFile(path: string, data: string | Uint8Array): Promise<void> | void;
   /** True when stdout is an interactive terminal (progress bars only then). */
   readonly isTTY: boolean;
   /** Number of logical cores available for worker threads. */

@@ -1,5 +1,10 @@
-/** Reading a scenario file for the command line: file errors and scenario issues become CliErrors. */
-import { parseScenarioText } from "../scenario/parse";
+/**
+ * Reading input files for the command line: every command reads through here, so every file gets the
+ * same checks (io.readFile: regular file, size cap, UTF-8; parseJsonText: nesting depth, syntax,
+ * duplicate keys). File errors and scenario issues become CliErrors (exit code 2).
+ */
+import { parseScenario } from "../scenario/parse";
+import { parseJsonText } from "../scenario/jsonText";
 import type { Scenario } from "../scenario/types";
 import { CliError, type CliIO } from "./command";
 
@@ -8,19 +13,21 @@ export function formatIssues(path: string, issues: readonly { message: string }[
   return `${path}: ${n} problem${n === 1 ? "" : "s"} in the scenario:\n${issues.map((i) => `  - ${i.message}`).join("\n")}`;
 }
 
-export function loadScenarioFile(path: string, io: CliIO): Scenario {
+/** Reads a JSON file of any kind (scenario, study) and returns its text and value. */
+export function loadJsonTextFile(path: string, io: CliIO): { text: string; value: unknown } {
   const text = io.readFile(path);
-  const parsed = parseScenarioText(text);
-  if (!parsed.ok) throw new CliError(formatIssues(path, parsed.issues));
-  return parsed.scenario;
+  const json = parseJsonText(text);
+  if (!json.ok) throw new CliError(`${path}: ${json.message}`);
+  return { text, value: json.value };
 }
 
 /** Reads a JSON file of any kind (studies), with a readable error. */
 export function loadJsonFile(path: string, io: CliIO): unknown {
-  const text = io.readFile(path);
-  try {
-    return JSON.parse(text);
-  } catch (err) {
-    throw new CliError(`${path}: is not valid JSON: ${err instanceof Error ? err.message : String(err)}`);
-  }
+  return loadJsonTextFile(path, io).value;
+}
+
+export function loadScenarioFile(path: string, io: CliIO): Scenario {
+  const parsed = parseScenario(loadJsonFile(path, io));
+  if (!parsed.ok) throw new CliError(formatIssues(path, parsed.issues));
+  return parsed.scenario;
 }

@@ -2,8 +2,7 @@
  * The command-line adapter: `brinefield <command> [options]`. This is the one part of core/ that
  * touches Node (process, fs, worker_threads); nothing else in core/ imports it.
  */
-import { readFileSync, writeFileSync, renameSync, statSync, openSync, fsyncSync, closeSync } from "node:fs";
-import { resolve, dirname, basename, join } from "node:path";
+import { resolve } from "node:path";
 import { availableParallelism } from "node:os";
 import { isMainThread } from "node:worker_threads";
 import { COMMANDS } from "./commands/index";
@@ -12,11 +11,13 @@ import { CliError, type CliIO } from "./command";
 import { ScenarioError } from "../scenario/parse";
 import { BRINEFIELD_VERSION } from "../version";
 import { CAUTION } from "../result/contract";
+import { readInputFileSync, writeFileAtomic, fsErrorReason, OutputRefusedError, type FileIdentity } from "../../nodeio";
+import { terminalSafeChunk } from "./terminal";
 
-const MAX_INPUT_BYTES = 20_000_000;
-
+/** The process's file system and terminal. Every file read is remembered so no output overwrites it. */
 export function nodeIO(): CliIO {
   const cwd = process.cwd();
+  const inputs: FileIdentity[] = [];
   return {
     cwd,
     isTTY: Boolean(process.stderr.isTTY),
@@ -24,30 +25,17 @@ export function nodeIO(): CliIO {
     stdout: (t) => void process.stdout.write(t),
     stderr: (t) => void process.stderr.write(t),
     readFile(path) {
-      const p = resolve(cwd, path);
-      let size: number;
-      try {
-        const st = statSync(p);
-        if (st.isDirectory()) throw new CliError(`${path}: is a folder, not a file`);
-        size = st.size;
-      } catch (err) {
-        if (err instanceof CliError) throw err;
-        throw new CliError(`${path}: cannot be read (${(err as NodeJS.ErrnoException).code === "ENOENT" ? "no such file" : (err as Error).message})`);
-      }
-      if (size > MAX_INPUT_BYTES) throw new CliError(`${path}: is ${Math.round(size / 1e6)} MB, over the ${MAX_INPUT_BYTES / 1e6} MB Brinefield reads; refused unread`);
-      return readFileSync(p, "utf8");
+      const read = readInputFileSync(resolve(cwd, path));
+      if (!read.ok) throw new CliError(`${path}: ${read.message}`);
+      inputs.push(read.identity);
+      return read.text;
     },
-    writeFile(path, data) {
-      const p = resolve(cwd, path);
-      const tmp = join(dirname(p), `.${basename(p)}.${process.pid}.tmp`);
+    async writeFile(path, data) {
       try {
-        writeFileSync(tmp, data);
-        const fd = openSync(tmp, "r");
-        fsyncSync(fd);
-        closeSync(fd);
-        renameSync(tmp, p);
+        await writeFileAtomic(resolve(cwd, path), data, { notOneOf: inputs });
       } catch (err) {
-        throw new CliError(`${path}: cannot be written (${(err as Error).message})`);
+        const why = err instanceof OutputRefusedError ? err.message : `cannot be written (${fsErrorReason(err)})`;
+        throw new CliError(`${path}: ${why}`);
       }
     },
   };
@@ -70,7 +58,10 @@ ${CAUTION}
 `;
 }
 
-export async function cliMain(argv: readonly string[], io: CliIO = nodeIO()): Promise<number> {
+export async function cliMain(argv: readonly string[], rawIo: CliIO = nodeIO()): Promise<number> {
+  // Everything printed passes through terminalSafe: user text (names, quoted values) may hold
+  // control characters or escape sequences that would drive the terminal.
+  const io: CliIO = { ...rawIo, readFile: (p) => rawIo.readFile(p), writeFile: (p, d) => rawIo.writeFile(p, d), stdout: (t) => rawIo.stdout(terminalSafeChunk(t)), stderr: (t) => rawIo.stderr(terminalSafeChunk(t)) };
   let code: number;
   try {
     code = await dispatch(argv, io);

@@ -45,6 +45,34 @@ export const SERIES_CSV_COLUMNS = [
   "stage",
 ] as const;
 
+/** A decimal number as text ("-2.5", "1e-3", "+4"): a spreadsheet reads it as the number it is. */
+const DECIMAL_NUMBER = /^[-+]?(?:\d+\.?\d*|\.\d+)(?:[eE][-+]?\d+)?$/;
+/** First characters that make a spreadsheet read a cell as a formula (or a hidden control). */
+const FORMULA_START = /^[=+\-@\t\r]/;
+
+/**
+ * A CSV cell that no spreadsheet runs as a formula: text beginning with =, +, -, @, tab or carriage
+ * return gets a single quote in front (the usual neutralising, common practice, no source). Numbers,
+ * including negative ones and numbers already written as text, stay as they are.
+ */
+export function csvSafeCell(value: unknown): string {
+  if (value === null || value === undefined) return "";
+  if (typeof value === "number") return Number.isFinite(value) ? String(value) : "";
+  const text = String(value);
+  return FORMULA_START.test(text) && !DECIMAL_NUMBER.test(text) ? `'${text}` : text;
+}
+
+/** d3's csvFormat with every cell through `csvSafeCell`: the one way Brinefield writes CSV tables. */
+export function csvFormatSafe(rows: readonly Readonly<Record<string, unknown>>[], columns: readonly string[]): string {
+  const safe = rows.map((r) => Object.fromEntries(columns.map((c) => [c, csvSafeCell(r[c])])));
+  return csvFormat(safe, [...columns]);
+}
+
+/** d3's csvFormatRows with every cell through `csvSafeCell` (header row included). */
+export function csvFormatRowsSafe(rows: readonly (readonly unknown[])[]): string {
+  return csvFormatRows(rows.map((r) => r.map(csvSafeCell)));
+}
+
 type Row = Partial<Record<(typeof RESULT_CSV_COLUMNS)[number], string>>;
 
 function num(value: number | null | undefined): string {
@@ -121,7 +149,7 @@ export function resultCsv(result: BrinefieldResult): string {
       verdict: result.overall.verdict,
     });
   }
-  return csvFormat(rows, [...RESULT_CSV_COLUMNS]);
+  return csvFormatSafe(rows, RESULT_CSV_COLUMNS);
 }
 
 /** Dilution, salinity increase and layer thickness against plan distance from the diffuser. */
@@ -134,7 +162,7 @@ export function seriesCsv(result: BrinefieldResult): string {
     layer_thickness_m: num(s.layerThickness[i]),
     stage: s.stage[i] ?? "",
   }));
-  return csvFormat(rows, [...SERIES_CSV_COLUMNS]);
+  return csvFormatSafe(rows, SERIES_CSV_COLUMNS);
 }
 
 /** A study's key results: every variant's `resultCsv` rows with the variant name in front. */
@@ -149,7 +177,7 @@ export function studySeriesCsv(variants: readonly { readonly name: string; reado
 
 function withVariantColumn(parts: readonly { name: string; csv: string }[], columns: string[]): string {
   const rows: Record<string, string>[] = parts.flatMap((p) => csvParse(p.csv).map((row) => ({ variant: p.name, ...row }) as Record<string, string>));
-  return csvFormat(rows, ["variant", ...columns]);
+  return csvFormatSafe(rows, ["variant", ...columns]);
 }
 
 /**
@@ -157,5 +185,5 @@ function withVariantColumn(parts: readonly { name: string; csv: string }[], colu
  * the first row, then the table. Readers that want the table alone skip the first line.
  */
 export function csvWithCaution(csv: string, caution: string = CAUTION): string {
-  return csvFormatRows([[caution || CAUTION]]) + "\n" + csv;
+  return csvFormatRowsSafe([[caution || CAUTION]]) + "\n" + csv;
 }

@@ -5,3 +5,4 @@ export type { ScenarioFile } from "./schema";
 export { brineFromPlant } from "./plant";
 export { inputsHash } from "./hash";
 export type * from "./types";
+export { MAX_INPUT_BYTES, MAX_JSON_DEPTH, parseJsonText, decodeInputBytes, stripBom, formatByteSize, tooLargeMessage } from "./jsonText";

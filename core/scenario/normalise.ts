@@ -79,6 +79,11 @@ function buildProfile(a: RawAmbientLike, depth: number, path: string, ctx: Ctx):
       temperature: p.temperature,
       salinity: resolveSalinity(p.salinity, p.temperature, `${path}.profile.${i}.salinity`, ctx),
     }));
+    const below = pts.findIndex((p) => p.depth > depth);
+    if (below >= 0) {
+      ctx.issues.push(issue(`${path}.profile.${below}.depth`, pts[below]!.depth, `is below the seabed (the water is ${formatNumber(depth)} m deep)`));
+      return null;
+    }
     pts.sort((p, q) => p.depth - q.depth);
     for (let i = 1; i < pts.length; i++) {
       if (pts[i]!.depth === pts[i - 1]!.depth) {
@@ -348,6 +353,9 @@ export function normaliseScenario(f: ScenarioFileParsed): { scenario: Scenario |
   if (layout === "line" && portCount > 1 && g.portSpacing === undefined)
     ctx.issues.push(issue("diffuser.portSpacing", undefined, "expected the spacing between ports (m) for a diffuser with more than one port"));
   const portSpacing = g.portSpacing ?? 0;
+  // Neighbouring ports closer than a port diameter would overlap on the pipe (geometry, no source).
+  if (layout === "line" && portCount > 1 && g.portSpacing !== undefined && g.portSpacing < g.portDiameter * (1 - 1e-9))
+    ctx.issues.push(issue("diffuser.portSpacing", g.portSpacing, `must be at least the port diameter (${formatNumber(g.portDiameter)} m): closer ports would overlap`));
   const portAzimuth = g.portAzimuth ?? 0;
   const diffuserAzimuth = g.diffuserAzimuth ?? defaultDiffuserAzimuth(portAzimuth);
   const riserSpacing = g.risers?.spacing ?? 0;
@@ -425,6 +433,9 @@ export function normaliseScenario(f: ScenarioFileParsed): { scenario: Scenario |
   });
 
   // --- uncertainty --------------------------------------------------------------------------------------
+  f.uncertainty?.inputs.forEach((u, i, all) => {
+    if (all.findIndex((v) => v.path === u.path) !== i) ctx.issues.push(issue(`uncertainty.inputs.${i}.path`, u.path, "is listed twice; give each uncertain input once"));
+  });
   const uncertainty = f.uncertainty && {
     inputs: f.uncertainty.inputs.map((u): UncertainInput => {
       const { path, distribution, ...rest } = u;

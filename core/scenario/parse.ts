@@ -7,6 +7,7 @@ import type { z } from "zod";
 import { scenarioFileSchema, SCENARIO_FORMAT, SCENARIO_VERSION } from "./schema";
 import { normaliseScenario, issue, type ScenarioIssue } from "./normalise";
 import type { Scenario } from "./types";
+import { MAX_INPUT_BYTES, parseJsonText } from "./jsonText";
 
 export type { ScenarioIssue } from "./normalise";
 
@@ -14,8 +15,8 @@ export type ParseOutcome =
   | { readonly ok: true; readonly scenario: Scenario; readonly notes: readonly string[] }
   | { readonly ok: false; readonly issues: readonly ScenarioIssue[] };
 
-/** Largest scenario file Brinefield reads, in characters (a profile of 500 points is ~40 kB). */
-export const MAX_SCENARIO_TEXT = 5_000_000;
+/** Largest scenario file Brinefield reads (a profile of 500 points is ~40 kB): the one input cap. */
+export const MAX_SCENARIO_TEXT = MAX_INPUT_BYTES;
 const MAX_ISSUES = 40;
 
 /**
@@ -100,23 +101,12 @@ export function parseScenario(raw: unknown): ParseOutcome {
   return { ok: true, scenario, notes };
 }
 
-/** Reads scenario JSON text: size limit, JSON syntax, then `parseScenario`. */
+/** Reads scenario JSON text: size limit, nesting depth, JSON syntax, duplicate keys, then `parseScenario`. */
 export function parseScenarioText(text: string): ParseOutcome {
   if (typeof text !== "string") return { ok: false, issues: [issue("", typeof text, "must be text")] };
-  if (text.length > MAX_SCENARIO_TEXT) {
-    return {
-      ok: false,
-      issues: [issue("", `${Math.round(text.length / 1e6)} MB`, `is larger than the ${MAX_SCENARIO_TEXT / 1e6} MB a scenario file may be; it is refused unread`)],
-    };
-  }
-  let raw: unknown;
-  try {
-    raw = JSON.parse(text.charCodeAt(0) === 0xfeff ? text.slice(1) : text);
-  } catch (err) {
-    const msg = err instanceof Error ? err.message : String(err);
-    return { ok: false, issues: [issue("", "(file)", `is not valid JSON: ${msg}`)] };
-  }
-  return parseScenario(raw);
+  const json = parseJsonText(text);
+  if (!json.ok) return { ok: false, issues: [{ path: "", value: undefined, message: `(file): ${json.message}` }] };
+  return parseScenario(json.value);
 }
 
 /** Like parseScenario but throws ScenarioError; for callers inside loops that already validated. */

@@ -64,3 +64,4 @@ export type { StudyFile, StudyIssue } from "./study-file";
 export { studyVariants, compareVariant, flattenRow, sortRows, columnsOf, WORST_CASE_ROW } from "./compare";
 export type { CompareRow, FlatRow, StudyVariant, ScenarioReader } from "./compare";
 export { evaluateScenario } from "./evaluate";
+export * from "./budget";

@@ -12,6 +12,7 @@
  * "refused" with the rule's message — never a pass. Each run is judged like `run`'s `overall`: the
  * verdict over every case, governed by the deciding case.
  */
+import { MAX_MONTE_CARLO_RUNS } from "./budget";
 import type { Scenario } from "../scenario/types";
 import { expandCases } from "./cases";
 import type { StudyVerdict } from "../result/contract";
@@ -44,7 +45,7 @@ export interface MonteCarloPlan {
 
 export type PlanResult = { ok: true; plan: MonteCarloPlan } | { ok: false; issues: DistributionIssue[] };
 
-export const MAX_RUNS = 10_000_000;
+export const MAX_RUNS = MAX_MONTE_CARLO_RUNS;
 
 export function planMonteCarlo(scenario: Scenario, runs: number, seed: number): PlanResult {
   const issues: DistributionIssue[] = [];
@@ -188,12 +189,17 @@ export interface MonteCarloStats {
   readonly edgeDilution: PercentileSummary;
   readonly margin: PercentileSummary;
   /**
-   * Fraction of runs without a "meets" verdict (exceeds, outside-scope and refused runs all count: none
-   * of them shows that the limit is met).
+   * Share of the computed runs without a "meets" verdict (exceeds and outside-scope runs count: neither
+   * shows that the limit is met). Refused runs — draws that break a scenario rule — are not outcomes of
+   * the discharge and are counted apart, in `verdicts.refused` and `failedRuns`.
    */
   readonly probabilityOfExceedance: number;
   /** Runs per verdict. */
   readonly verdicts: Readonly<Record<StudyVerdict, number>>;
+  /** Runs that meet every limit (`verdicts.meets`). */
+  readonly meetingRuns: number;
+  /** Computed runs that do not meet every limit (exceeds + outside-scope). */
+  readonly exceedingRuns: number;
   /** Refused runs (the draw broke a scenario rule); the same as `verdicts.refused`. */
   readonly failedRuns: number;
 }
@@ -309,12 +315,15 @@ function stats(name: string, e: Float64Array, m: Float64Array, p: Uint8Array): M
   const counts = [0, 0, 0, 0];
   for (let i = 0; i < p.length; i++) counts[p[i]!] = (counts[p[i]!] ?? 0) + 1;
   const verdicts = Object.fromEntries(VERDICT_OF_CODE.map((v, code) => [v, counts[code] ?? 0])) as Record<StudyVerdict, number>;
+  const computed = p.length - verdicts.refused;
   return {
     name,
     edgeDilution: percentileSummary(e),
     margin: percentileSummary(m),
-    probabilityOfExceedance: p.length > 0 ? (p.length - verdicts.meets) / p.length : Number.NaN,
+    probabilityOfExceedance: computed > 0 ? (computed - verdicts.meets) / computed : Number.NaN,
     verdicts,
+    meetingRuns: verdicts.meets,
+    exceedingRuns: computed - verdicts.meets,
     failedRuns: verdicts.refused,
   };
 }

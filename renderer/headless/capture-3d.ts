@@ -107,29 +107,59 @@ export function buildRenderer(root: string, timeoutMs = 120_000): Promise<void> 
   });
 }
 
-/** Serves `dir` read-only on 127.0.0.1 at a free port. */
+/**
+ * Serves `dir` read-only on 127.0.0.1 at a free port, for the headless browser only: GET and HEAD,
+ * the Host header must name this server (so a page elsewhere cannot reach it by DNS rebinding), a
+ * malformed path ("/%zz"), NUL, backslash or anything outside the folder is refused, and no request can
+ * throw inside the handler (a throw there would end the whole process).
+ */
 export function serveStatic(dir: string): Promise<{ server: Server; url: string }> {
   const base = resolve(dir);
+  let allowedHosts: readonly string[] = [];
   const server = createServer((req, res) => {
-    const pathname = decodeURIComponent(new URL(req.url ?? "/", "http://127.0.0.1").pathname);
-    let file = normalize(join(base, pathname));
-    // Refuse anything outside the served folder (path traversal).
-    if (file !== base && !file.startsWith(base + sep)) {
-      res.writeHead(403).end();
-      return;
+    try {
+      if (req.method !== "GET" && req.method !== "HEAD") {
+        res.writeHead(405, { Allow: "GET, HEAD" }).end();
+        return;
+      }
+      if (!allowedHosts.includes(String(req.headers.host ?? "").toLowerCase())) {
+        res.writeHead(421).end();
+        return;
+      }
+      let pathname: string;
+      try {
+        pathname = decodeURIComponent(new URL(req.url ?? "/", "http://127.0.0.1").pathname);
+      } catch {
+        res.writeHead(400).end();
+        return;
+      }
+      if (pathname.includes("\0") || pathname.includes("\\")) {
+        res.writeHead(400).end();
+        return;
+      }
+      let file = normalize(join(base, pathname));
+      // Refuse anything outside the served folder (path traversal).
+      if (file !== base && !file.startsWith(base + sep)) {
+        res.writeHead(403).end();
+        return;
+      }
+      if (existsSync(file) && statSync(file).isDirectory()) file = join(file, "index.html");
+      if (!existsSync(file) || !statSync(file).isFile()) {
+        res.writeHead(404).end();
+        return;
+      }
+      res.writeHead(200, { "Content-Type": CONTENT_TYPES[extname(file)] ?? "application/octet-stream", "Cache-Control": "no-store", "X-Content-Type-Options": "nosniff" });
+      res.end(req.method === "HEAD" ? undefined : readFileSync(file));
+    } catch {
+      if (!res.headersSent) res.writeHead(500);
+      res.end();
     }
-    if (existsSync(file) && statSync(file).isDirectory()) file = join(file, "index.html");
-    if (!existsSync(file)) {
-      res.writeHead(404).end();
-      return;
-    }
-    res.writeHead(200, { "Content-Type": CONTENT_TYPES[extname(file)] ?? "application/octet-stream", "Cache-Control": "no-store" });
-    res.end(readFileSync(file));
   });
   return new Promise((resolvePromise, reject) => {
     server.once("error", reject);
     server.listen(0, "127.0.0.1", () => {
       const { port } = server.address() as AddressInfo;
+      allowedHosts = [`127.0.0.1:${port}`, `localhost:${port}`];
       resolvePromise({ server, url: `http://127.0.0.1:${port}/` });
     });
   });

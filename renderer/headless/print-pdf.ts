@@ -3,8 +3,7 @@
  * SVG and data-URI images), so it is loaded with setContent and no network is involved. Page size and
  * margins come from the report's own @page rule.
  */
-import { writeFileSync, renameSync } from "node:fs";
-import { dirname, basename, join } from "node:path";
+import { writeFileAtomic } from "../../nodeio";
 import { withChromium } from "./chromium";
 
 /** Renders `html` to PDF bytes (A4 from the document's @page rule, backgrounds printed). */
@@ -18,11 +17,13 @@ export async function pdfFromHtml(html: string): Promise<Uint8Array> {
   });
 }
 
-/** Renders `html` to a PDF file at `outPath` (written atomically); returns the bytes written. */
+/**
+ * Renders `html` to a PDF file at `outPath` with Brinefield's one atomic writer (nodeio/atomicWrite.ts:
+ * random exclusive temporary file, fsync, rename; a folder, device or link to nothing is refused);
+ * returns the bytes written.
+ */
 export async function printPdf(html: string, outPath: string): Promise<Uint8Array> {
   const bytes = await pdfFromHtml(html);
-  const tmp = join(dirname(outPath), `.${basename(outPath)}.${process.pid}.tmp`);
-  writeFileSync(tmp, bytes);
-  renameSync(tmp, outPath);
+  await writeFileAtomic(outPath, bytes);
   return bytes;
 }

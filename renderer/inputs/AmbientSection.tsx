@@ -5,6 +5,7 @@ import { getAtPath } from "../state/scenarioState";
 import { useEditor } from "./EditorContext";
 import { QuantityField, SectionIssues } from "./fields";
 import { parseProfileText } from "./profileText";
+import { readDroppedFile } from "../platform/host";
 
 export function AmbientSection() {
   const editor = useEditor();
@@ -92,7 +93,12 @@ export function AmbientSection() {
               data-role="profile-csv-input"
               onChange={(event) => {
                 const file = event.target.files?.[0];
-                if (file) void file.text().then(importText);
+                if (file) {
+                  readDroppedFile(file).then(
+                    (opened) => importText(opened.text),
+                    (error: unknown) => setPasteErrors([`${file.name}: ${error instanceof Error ? error.message : String(error)}`]),
+                  );
+                }
                 event.target.value = "";
               }}
             />

@@ -3,6 +3,7 @@
  * contract in electron/contract.ts); in a plain browser it falls back to a file-input upload, download
  * links and localStorage. Components call these functions and never look at `window.brinefieldHost`.
  */
+import { decodeInputBytes, MAX_INPUT_BYTES, tooLargeMessage } from "../../core/scenario/jsonText";
 import type { BrinefieldHost, FileFilter, HostRequest, HostResponse, MenuCommand } from "../../electron/contract";
 
 export type { MenuCommand };
@@ -79,19 +80,20 @@ function rememberWebRecent(name: string, text: string): void {
   }
 }
 
-/** Largest file read from a drop or the browser's file picker, in bytes (main's cap for scenario files). */
-export const MAX_DROPPED_FILE_BYTES = 5 * 1024 * 1024;
+/** Largest file read from a drop or the browser's file picker, in bytes: core's one input cap. */
+export const MAX_DROPPED_FILE_BYTES = MAX_INPUT_BYTES;
 
 /**
- * Reads a File chosen by the user or dropped on the window. Refuses files too large to be a scenario
- * without reading them. Nothing is remembered here: the caller calls `rememberOpened` once the text
- * proved to be a scenario, so a stray picture never joins the recent list.
+ * Reads a File chosen by the user or dropped on the window by the same rules as the desktop host and
+ * the command line: the size cap checked before reading, UTF-8 only (byte-order mark accepted, UTF-16
+ * refused with "save as UTF-8"). Nothing is remembered here: the caller calls `rememberOpened` once the
+ * text proved to be a scenario, so a stray picture never joins the recent list.
  */
-export function readDroppedFile(file: File): Promise<OpenedFile> {
-  if (file.size > MAX_DROPPED_FILE_BYTES) {
-    return Promise.reject(new Error(`the file is larger than ${MAX_DROPPED_FILE_BYTES / 1024 / 1024} MB, too large for a scenario`));
-  }
-  return file.text().then((text) => ({ path: file.name, text }));
+export async function readDroppedFile(file: File): Promise<OpenedFile> {
+  if (file.size > MAX_DROPPED_FILE_BYTES) throw new Error(`the file ${tooLargeMessage(file.size)}`);
+  const decoded = decodeInputBytes(new Uint8Array(await file.arrayBuffer()));
+  if (!decoded.ok) throw new Error(`the file ${decoded.message}`);
+  return { path: file.name, text: decoded.value };
 }
 
 /**

@@ -5,6 +5,7 @@
  */
 
 import { MAX_SCENARIO_TEXT } from "../../core/scenario/parse";
+import { parseJsonText } from "../../core/scenario/jsonText";
 import { SCENARIO_FORMAT } from "../../core/scenario/schema";
 
 /** The raw scenario file: plain, serialisable JSON. Parsing and validation belong to core. */
@@ -128,15 +129,10 @@ export function suggestedFileName(file: ScenarioFile, extension = "brinefield.js
  * open document.
  */
 export function fileFromText(text: string): { ok: true; file: ScenarioFile } | { ok: false; message: string } {
-  if (text.length > MAX_SCENARIO_TEXT) {
-    return { ok: false, message: `The file is larger than the ${MAX_SCENARIO_TEXT / 1e6} MB a scenario file may be.` };
-  }
-  let parsed: unknown;
-  try {
-    parsed = JSON.parse(text.charCodeAt(0) === 0xfeff ? text.slice(1) : text);
-  } catch (error) {
-    return { ok: false, message: `The file is not valid JSON: ${error instanceof Error ? error.message : String(error)}` };
-  }
+  // The same checks as every other reader: size, nesting depth, JSON syntax, duplicate keys (core).
+  const json = parseJsonText(text, MAX_SCENARIO_TEXT);
+  if (!json.ok) return { ok: false, message: `The file ${json.message}.` };
+  const parsed = json.value;
   if (!isPlainObject(parsed)) return { ok: false, message: "The file is JSON but not a scenario object." };
   const format = parsed["format"];
   if (format !== SCENARIO_FORMAT) {

@@ -1,4 +1,6 @@
 /** Study tab, Monte Carlo: edge dilution percentiles and the probability of not meeting the limit. */
+import { workIssue } from "../../core/study/budget";
+import { expandCases } from "../../core/study/cases";
 import { useState } from "react";
 import type { Scenario } from "../../core/scenario/types";
 import { formatNumber } from "../../core/units";
@@ -35,6 +37,12 @@ export function MonteCarloSection({ scenario, busy, runJob, poolSize }: MonteCar
     const planned = planMonteCarlo(scenario, n, s);
     if (!planned.ok) {
       setProblem(planned.issues.map((i) => `${i.path}: ${i.message}`).join("\n"));
+      return;
+    }
+    const caseCount = expandCases(scenario).length;
+    const tooMuch = workIssue(`${n} runs × ${caseCount} ambient cases`, n * caseCount, scenario);
+    if (tooMuch) {
+      setProblem(tooMuch);
       return;
     }
     setProblem(null);

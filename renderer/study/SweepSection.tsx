@@ -1,4 +1,6 @@
 /** Study tab, sweep: one input (line chart) or two (heat map of the margin with the limit contour). */
+import { sweepPointsIssue, workIssue } from "../../core/study/budget";
+import { expandCases } from "../../core/study/cases";
 import { useState } from "react";
 import type { Scenario } from "../../core/scenario/types";
 import { formatNumber, siToDisplay, type UnitSystem } from "../../core/units";
@@ -44,6 +46,14 @@ export function SweepSection({
     }
     if (axes.length === 2 && axes[0]!.path === axes[1]!.path) {
       setProblem(`${axes[0]!.path} is varied twice`);
+      return;
+    }
+    // The same caps as the command line (core/study/budget.ts).
+    const pointCount = axes.reduce((n, a) => n * a.steps, 1);
+    const caseCount = expandCases(scenario).length;
+    const tooMuch = sweepPointsIssue(pointCount) ?? workIssue(`A sweep of ${pointCount} points × ${caseCount} ambient cases`, pointCount * caseCount, scenario);
+    if (tooMuch) {
+      setProblem(tooMuch);
       return;
     }
     setProblem(null);

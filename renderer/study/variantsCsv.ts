@@ -3,7 +3,7 @@
  * by the caution. The on-screen table shows the chosen unit system; the file keeps SI so it reads back
  * the same whatever the display was.
  */
-import { csvFormat } from "d3-dsv";
+import { csvFormatSafe } from "../../core/report/csv";
 import { columnsOf, type FlatRow } from "../../core/study/compare";
 import { csvWithCaution } from "../exports";
 
@@ -19,5 +19,5 @@ export function variantsCsv(rows: readonly FlatRow[], caution?: string): string 
   const columns = columnsOf(rows);
   const cell = (v: FlatRow[string] | undefined) => (v === null || v === undefined ? "" : String(v));
   const named = rows.map((r) => Object.fromEntries(columns.map((c) => [csvColumnName(c), cell(r[c])])));
-  return csvWithCaution(csvFormat(named, columns.map(csvColumnName)), caution);
+  return csvWithCaution(csvFormatSafe(named, columns.map(csvColumnName)), caution);
 }

@@ -19,7 +19,7 @@ export const validScenarioFile = fc
     portCount: fc.integer({ min: 1, max: 60 }),
     diameter: num(0.02, 0.6),
     angle: num(0, 90),
-    spacingFactor: num(1, 40), // ports may not overlap: spacing ≥ diameter
+    spacingFactor: num(1, 40), // ports at least one diameter apart (closer ports overlap and are refused)
     azimuth: num(0, 360),
     current: fc.oneof(fc.constant(0), num(0, 1.2)),
     currentDir: num(0, 360),

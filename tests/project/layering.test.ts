@@ -1,6 +1,8 @@
 /**
  * Layering rules of the project (see DEVELOPERS.md): core/ imports only core/ (and packages);
- * nothing imports renderer/ except renderer/; electron/ imports the contract, the CSP and core types only.
+ * nothing imports renderer/ except renderer/; electron/ imports the contract, the CSP and core types only;
+ * nodeio/ (the shared Node-side reader and writer) uses only Node and core's pure text rules, and only the
+ * Node-side parts (core/cli, electron, renderer/headless) import it.
  * Checked as a test so CI fails on a violation, not as a wish.
  */
 import { describe, it, expect } from "vitest";
@@ -47,7 +49,7 @@ describe("layering", () => {
 
   it("nothing outside renderer/ imports renderer/ (except the command line's headless printer)", () => {
     const bad: string[] = [];
-    for (const dir of ["core", "electron"]) {
+    for (const dir of ["core", "electron", "nodeio"]) {
       for (const f of files(join(root, dir))) {
         for (const i of imports(f)) {
           if (i.target?.startsWith("renderer/") && !(relative(root, f).startsWith("core/cli/") && i.target.startsWith("renderer/headless"))) {
@@ -65,6 +67,29 @@ describe("layering", () => {
       for (const i of imports(f)) if (i.target?.startsWith("core/") && !i.typeOnly) bad.push(`${relative(root, f)} → ${i.spec}`);
     }
     expect(bad, "electron main stays thin").toEqual([]);
+  });
+
+  it("nodeio/ imports only Node built-ins and core's pure text rules (core/scenario/jsonText.ts)", () => {
+    const bad: string[] = [];
+    for (const f of files(join(root, "nodeio"))) {
+      for (const i of imports(f)) {
+        if (i.target && !i.target.startsWith("nodeio/") && i.target !== "core/scenario/jsonText") bad.push(`${relative(root, f)} → ${i.spec}`);
+        if (!i.target && !NODE_BUILTINS.test(i.spec)) bad.push(`${relative(root, f)} → ${i.spec}`);
+      }
+    }
+    expect(bad, "nodeio stays a thin Node layer").toEqual([]);
+  });
+
+  it("only the Node-side parts (core/cli, electron, renderer/headless) import nodeio/", () => {
+    const bad: string[] = [];
+    for (const dir of ["core", "renderer", "electron"]) {
+      for (const f of files(join(root, dir))) {
+        const rel = relative(root, f);
+        const nodeSide = rel.startsWith("core/cli/") || rel.startsWith("electron/") || rel.startsWith("renderer/headless/");
+        for (const i of imports(f)) if (i.target?.startsWith("nodeio") && !nodeSide) bad.push(`${rel} → ${i.spec}`);
+      }
+    }
+    expect(bad, "the browser side and pure core never reach Node I/O").toEqual([]);
   });
 
   it("keeps core/version.ts equal to package.json's version", async () => {

@@ -1,7 +1,7 @@
 /** `brinefield compare`: a study's variants side by side, per ambient case and worst case. */
 import { dirname, isAbsolute, join } from "node:path";
-import { csvFormat } from "d3-dsv";
-import { csvWithCaution } from "../../report/csv";
+import { caseWorkUnits, workIssue } from "../../study/budget";
+import { csvFormatSafe, csvWithCaution } from "../../report/csv";
 import { CliError, type CliCommand, type CliIO } from "../command";
 import { readArgs } from "../args";
 import { loadJsonFile } from "../load";
@@ -70,6 +70,13 @@ async function run(argv: readonly string[], io: CliIO): Promise<number> {
     const where = basePath ?? path;
     throw new CliError(`${where}: ${n} problem(s) in the study's scenarios:\n${bullets(v.issues)}`);
   }
+  const runnable = v.variants.flatMap((x) => (x.scenario ? [x.scenario] : []));
+  if (runnable.length > 0) {
+    const evaluations = runnable.reduce((n, sc) => n + expandCases(sc).length, 0);
+    const heaviest = runnable.reduce((a, b) => (caseWorkUnits(b) > caseWorkUnits(a) ? b : a));
+    const tooMuch = workIssue(`a study of ${v.variants.length} variants with ${evaluations} ambient cases in all`, evaluations, heaviest);
+    if (tooMuch) throw new CliError(`${path}: ${tooMuch}`);
+  }
   const rows = v.variants.flatMap((x) => compareVariant(x, evaluateScenario));
   let flat: FlatRow[] = rows.map(flattenRow);
   if (values.sort) {
@@ -81,7 +88,7 @@ async function run(argv: readonly string[], io: CliIO): Promise<number> {
     flat = sorted;
   }
   const columns = columnsOf(flat);
-  if (values.csv) io.writeFile(values.csv, csvWithCaution(csvFormat(flat as never, columns as never)));
+  if (values.csv) await io.writeFile(values.csv, csvWithCaution(csvFormatSafe(flat, columns)));
   const notes = v.variants.map((x) =>
     x.scenario ? `${x.name}: ${describeCases(expandCases(x.scenario), x.scenario)}` : `${x.name}: refused — ${(x.refused ?? []).join("; ")}`,
   );

@@ -9,7 +9,7 @@ import { basename, dirname, extname, resolve } from "node:path";
 import type { CliCommand, CliIO } from "../command";
 import { CliError } from "../command";
 import { readArgs, numberOption } from "../args";
-import { formatIssues, loadJsonFile } from "../load";
+import { formatIssues, loadJsonFile, loadJsonTextFile } from "../load";
 import { parseScenario } from "../../scenario/parse";
 import type { Scenario } from "../../scenario/types";
 import { runScenario } from "../../pipeline";
@@ -19,6 +19,8 @@ import { csvWithCaution } from "../../report/csv";
 import type { StudyReportVariant } from "../../report";
 import { checkClaimOnScenario } from "../../compliance/claim-run";
 import type { ClaimCheck } from "../../compliance/claim";
+import { workIssue } from "../../study/budget";
+import { expandCases } from "../../study/cases";
 import { parseStudy, withRawOverride, planMonteCarlo, runMonteCarloChunk, summariseMonteCarlo, evaluateScenario } from "../../study";
 
 const HELP = `Usage: brinefield report <scenario-or-study.json> [--out report.html] [--pdf report.pdf]
@@ -81,6 +83,9 @@ function readScenarioRaw(raw: unknown, where: string): Scenario {
 }
 
 function monteCarlo(scenario: Scenario, runs: number, seed: number, io: CliIO): unknown {
+  const caseCount = expandCases(scenario).length;
+  const tooMuch = workIssue(`--uncertainty ${runs} × ${caseCount} ambient case${caseCount === 1 ? "" : "s"}`, runs * caseCount, scenario);
+  if (tooMuch) throw new CliError(`brinefield report: ${tooMuch}`);
   const planned = planMonteCarlo(scenario, runs, seed);
   if (!planned.ok) throw new CliError(`brinefield report: the uncertainty run cannot start:\n${planned.issues.map((i) => `  - ${i.path}: ${i.message}`).join("\n")}`);
   io.stderr(`brinefield report: running ${runs} Monte Carlo runs (seed ${seed})…\n`);
@@ -113,6 +118,9 @@ export const command: CliCommand = {
       throw new CliError("brinefield report: give exactly one scenario or study file, e.g. `brinefield report demo-scenarios/island-cove.json --pdf report.pdf`");
     }
     const inputPath = positionals[0]!;
+    const outputs = [values.out ?? defaultOut(inputPath), values.pdf, values.csv, values["series-csv"], values.json].filter((p): p is string => p !== undefined);
+    const clash = outputs.find((p, i) => outputs.findIndex((q) => resolve(io.cwd, q) === resolve(io.cwd, p)) !== i);
+    if (clash !== undefined) throw new CliError(`brinefield report: ${clash} is named for two outputs; give each output its own file`);
     const runs = numberOption(values.uncertainty, "uncertainty", "report", (v) => (Number.isInteger(v) && v >= 1 && v <= 100_000 ? null : "must be a whole number from 1 to 100000"));
     const seed = numberOption(values.seed, "seed", "report", (v) => (Number.isInteger(v) && v >= 0 && v <= 0xffffffff ? null : "must be a whole number from 0 to 4294967295")) ?? 1;
     const claimed = numberOption(values["claimed-dilution"], "claimed-dilution", "report", (v) =>
@@ -120,13 +128,7 @@ export const command: CliCommand = {
     );
     const at = numberOption(values.at, "at", "report", (v) => (v > 0 ? null : "must be a distance in metres greater than 0"));
     if (at !== undefined && claimed === undefined) throw new CliError("brinefield report: --at needs --claimed-dilution N.");
-    const text = io.readFile(inputPath);
-    let file: unknown;
-    try {
-      file = JSON.parse(text);
-    } catch (err) {
-      throw new CliError(`${inputPath}: is not valid JSON: ${err instanceof Error ? err.message : String(err)}`);
-    }
+    const { text, value: file } = loadJsonTextFile(inputPath, io);
     const format = file !== null && typeof file === "object" ? (file as { format?: unknown }).format : undefined;
     const want3d = !values["no-3d"];
     const generatedAt = new Date().toISOString();
@@ -191,29 +193,34 @@ export const command: CliCommand = {
 
     const written: Written[] = [];
     const out = values.out ?? defaultOut(inputPath);
-    io.writeFile(out, html);
+    await io.writeFile(out, html);
     written.push({ path: out, what: "HTML report" });
     if (values.csv) {
-      io.writeFile(values.csv, csvWithCaution(csv));
+      await io.writeFile(values.csv, csvWithCaution(csv));
       written.push({ path: values.csv, what: "key results CSV" });
     }
     if (values["series-csv"]) {
-      io.writeFile(values["series-csv"], csvWithCaution(series));
+      await io.writeFile(values["series-csv"], csvWithCaution(series));
       written.push({ path: values["series-csv"], what: "dilution series CSV" });
     }
     if (values.json) {
-      io.writeFile(values.json, json);
+      await io.writeFile(values.json, json);
       written.push({ path: values.json, what: "result JSON" });
     }
     let code = 0;
     if (values.pdf) {
+      let pdf: Uint8Array | undefined;
       try {
         const { pdfFromHtml } = await import("../../../renderer/headless/print-pdf");
-        io.writeFile(values.pdf, await pdfFromHtml(html));
-        written.push({ path: values.pdf, what: "PDF report" });
+        pdf = await pdfFromHtml(html);
       } catch (err) {
         io.stderr(`brinefield report: the PDF was not written: ${err instanceof Error ? err.message : String(err)}\n`);
         code = 3;
+      }
+      // A refused or failed write of the PDF file is a file error (exit 2), not a printing failure.
+      if (pdf) {
+        await io.writeFile(values.pdf, pdf);
+        written.push({ path: values.pdf, what: "PDF report" });
       }
     }
     io.stdout(withCaution(written.map((w) => `wrote ${w.what}: ${w.path}`).join("\n") + "\n"));

@@ -17,7 +17,7 @@ Options:
   async run(argv, io) {
     const { values } = readArgs(argv, { out: { type: "string" } }, "schema");
     const text = JSON.stringify(scenarioJsonSchema(), null, 2) + "\n";
-    if (values.out) io.writeFile(values.out, text);
+    if (values.out) await io.writeFile(values.out, text);
     else io.stdout(text);
     return 0;
   },

@@ -1,7 +1,7 @@
 /** `brinefield sweep`: vary one or two inputs over a range and tabulate the verdict at each point. */
 import { dirname, isAbsolute, join } from "node:path";
-import { csvFormat } from "d3-dsv";
-import { csvWithCaution } from "../../report/csv";
+import { sweepPointsIssue, workIssue } from "../../study/budget";
+import { csvFormatSafe, csvWithCaution } from "../../report/csv";
 import { CliError, type CliCommand, type CliIO } from "../command";
 import { readArgs } from "../args";
 import { formatIssues, loadJsonFile } from "../load";
@@ -111,6 +111,12 @@ async function run(argv: readonly string[], io: CliIO): Promise<number> {
   if (axes.length === 2 && axes[0]!.path === axes[1]!.path) {
     throw new CliError(`brinefield ${NAME}: ${axes[0]!.path} is varied twice`);
   }
+  const pointCount = axes.reduce((n, a) => n * a.steps, 1);
+  const caseCount = expandCases(scenario).length;
+  const tooMuch =
+    sweepPointsIssue(pointCount) ??
+    workIssue(`a sweep of ${pointCount} points × ${caseCount} ambient case${caseCount === 1 ? "" : "s"}`, pointCount * caseCount, scenario);
+  if (tooMuch) throw new CliError(`brinefield ${NAME}: ${tooMuch}`);
   const grid = sweepGrid(axes);
   const done = await withProgress(io, "Sweep", grid.length, (onProgress) =>
     pointsOnWorkers(scenario, grid.map((g) => g.overrides), workers, onProgress),
@@ -119,10 +125,10 @@ async function run(argv: readonly string[], io: CliIO): Promise<number> {
   const { value: points, elapsedSeconds } = done;
   const rows = sweepRows(grid, points);
   const crossings = eosCrossings(axes, rows);
+  const counts = sweepCounts(rows);
   const casesNote = describeCases(expandCases(scenario), scenario);
   const keptNotes = keptValueNotes(scenario, axes.map((a) => a.path));
-  const count = (v: string) => rows.filter((r) => r.verdict === v).length;
-  const tally = `Points: ${rows.length} — meets ${count("meets")}, exceeds ${count("exceeds")}, outside-scope ${count("outside-scope")}, refused ${count("refused")}.`;
+  const tally = `Points: ${rows.length} — meets ${counts.meets}, exceeds ${counts.exceeds}, outside-scope ${counts["outside-scope"]}, refused ${counts.refused}.`;
   const flat = rows.map((r) => ({
     ...r.values,
     governingCase: r.governingCase,
@@ -140,7 +146,7 @@ async function run(argv: readonly string[], io: CliIO): Promise<number> {
       ...axes.map((a) => a.path),
       ...["governingCase", "edgeDilution", "requiredDilution", "margin", "verdict", "pass", "scopeReasons", "equationOfState", "error"],
     ];
-    io.writeFile(values.csv, csvWithCaution(csvFormat(flat as Record<string, unknown>[] as never, cols as never)));
+    await io.writeFile(values.csv, csvWithCaution(csvFormatSafe(flat as Record<string, unknown>[], cols)));
   }
   const crossingText = crossings.map((c) => {
     const [a, b] = c.between;
@@ -163,6 +169,8 @@ async function run(argv: readonly string[], io: CliIO): Promise<number> {
           axes,
           points: flat,
           equationOfStateCrossings: crossings,
+          counts,
+          noPointMeets: counts.meets === 0,
           notes: [casesNote, ...keptNotes, ...crossingText],
           elapsedSeconds,
         },
@@ -172,7 +180,9 @@ async function run(argv: readonly string[], io: CliIO): Promise<number> {
     );
     return 0;
   }
-  const out = [`Sweep: ${scenario.name} — ${grid.length} points, ${formatNumber(elapsedSeconds)} s`];
+  const out: string[] = [];
+  if (counts.meets === 0) out.push(`NO POINT MEETS EVERY LIMIT. ${tally}`);
+  out.push(`Sweep: ${scenario.name} — ${grid.length} points, ${formatNumber(elapsedSeconds)} s`);
   out.push(tally, casesNote, ...keptNotes, "");
   out.push(
     textTable(
@@ -207,6 +217,13 @@ async function run(argv: readonly string[], io: CliIO): Promise<number> {
   else out.push("The equation of state is the same at every point.");
   io.stdout(withCaution(out.join("\n") + "\n"));
   return 0;
+}
+
+/** Points that meet every limit, that do not, and that could not be computed (counted apart). */
+/** Points per verdict; "refused" points broke a scenario rule and were not computed. */
+function sweepCounts(rows: readonly { verdict: string }[]): Record<"meets" | "exceeds" | "outside-scope" | "refused", number> {
+  const count = (v: string) => rows.filter((r) => r.verdict === v).length;
+  return { meets: count("meets"), exceeds: count("exceeds"), "outside-scope": count("outside-scope"), refused: count("refused") };
 }
 
 export const command: CliCommand = {

@@ -2,7 +2,8 @@
 import { CliError, type CliCommand, type CliIO } from "../command";
 import { readArgs } from "../args";
 import { loadScenarioFile } from "../load";
-import { planMonteCarlo, summariseMonteCarlo, type MonteCarloStats } from "../../study/montecarlo";
+import { MAX_RUNS, planMonteCarlo, summariseMonteCarlo, type MonteCarloStats } from "../../study/montecarlo";
+import { workIssue } from "../../study/budget";
 import { describeCases, expandCases, keptValueNotes } from "../../study/cases";
 import { CAUTION } from "../../result/contract";
 import { withCaution } from "../../result/caution";
@@ -57,6 +58,8 @@ function statsJson(s: MonteCarloStats) {
     margin: s.margin,
     probabilityOfExceedance: s.probabilityOfExceedance,
     verdicts: s.verdicts,
+    meetingRuns: s.meetingRuns,
+    exceedingRuns: s.exceedingRuns,
     failedRuns: s.failedRuns,
   };
 }
@@ -74,8 +77,8 @@ async function run(argv: readonly string[], io: CliIO): Promise<number> {
   );
   if (positionals.length !== 1) throw new CliError(`brinefield ${NAME}: give one scenario file.\n\n${HELP}`);
   const runs = values.runs === undefined ? DEFAULT_RUNS : Number(values.runs);
-  if (!Number.isInteger(runs) || runs < 1 || runs > 10_000_000) {
-    throw new CliError(`brinefield ${NAME}: --runs ${values.runs} must be a whole number from 1 to 10000000`);
+  if (!Number.isInteger(runs) || runs < 1 || runs > MAX_RUNS) {
+    throw new CliError(`brinefield ${NAME}: --runs ${values.runs} must be a whole number from 1 to ${MAX_RUNS}`);
   }
   const seed = values.seed === undefined ? DEFAULT_SEED : seedFromText(values.seed);
   if (seed === null) {
@@ -84,6 +87,9 @@ async function run(argv: readonly string[], io: CliIO): Promise<number> {
   }
   const workers = Math.min(workersOption(values.workers, io, NAME), runs);
   const scenario = loadScenarioFile(positionals[0]!, io);
+  const caseCount = expandCases(scenario).length;
+  const tooMuch = workIssue(`--runs ${runs} × ${caseCount} ambient case${caseCount === 1 ? "" : "s"}`, runs * caseCount, scenario);
+  if (tooMuch) throw new CliError(`brinefield ${NAME}: ${tooMuch}`);
   const planned = planMonteCarlo(scenario, runs, seed);
   if (!planned.ok) {
     const list = planned.issues.map((i) => `  - ${i.path}: ${i.message}`).join("\n");
@@ -115,6 +121,7 @@ async function run(argv: readonly string[], io: CliIO): Promise<number> {
           notes: [...summary.notes, casesNote],
           cases: summary.cases.map(statsJson),
           worstCase: statsJson(summary.worstCase),
+          noRunMeets: summary.worstCase.meetingRuns === 0,
           clampedSamples: summary.clampedSamples,
           firstError: summary.firstError,
           workers,
@@ -127,7 +134,13 @@ async function run(argv: readonly string[], io: CliIO): Promise<number> {
     return 0;
   }
   const out: string[] = [];
+  const w = summary.worstCase;
+  const counts =
+    `${w.verdicts.meets} of ${summary.runs} runs meet every limit, ${w.verdicts.exceeds} exceed a limit, ` +
+    `${w.verdicts["outside-scope"]} are outside the screening methods' scope, ${w.verdicts.refused} were refused (the draw broke a scenario rule)`;
+  if (w.meetingRuns === 0) out.push(`NO RUN MEETS EVERY LIMIT: ${counts}.`);
   out.push(`Monte Carlo: ${scenario.name}`);
+  if (w.meetingRuns > 0) out.push(`${counts[0]!.toUpperCase()}${counts.slice(1)}.`);
   const plural = workers === 1 ? "" : "s";
   const took = formatNumber(elapsedSeconds);
   out.push(`${summary.runs} runs, seed ${summary.seed}, ${workers} worker${plural}, ${took} s`);
@@ -151,6 +164,7 @@ async function run(argv: readonly string[], io: CliIO): Promise<number> {
   ]);
   out.push("Dilution at the mixing-zone edge:");
   out.push(textTable(["case", "P5", "P50", "P95", "margin P5", "P(not meeting limit)", "meets", "exceeds", "outside-scope", "refused"], rows));
+  out.push("P(not meeting limit) is over the computed runs (exceeds and outside-scope count as not meeting); refused runs broke a scenario rule and are counted apart.");
   if (summary.clampedSamples > 0) {
     out.push(`${summary.clampedSamples} samples fell outside their physical bounds and were clamped.`);
   }

@@ -110,3 +110,28 @@ describe("studyResultCsv()", () => {
     }
   });
 });
+
+describe("CSV cells are never run as spreadsheet formulas", () => {
+  // Neutralising with a leading single quote: common practice for CSV meant for spreadsheets, no source.
+  it("puts a quote before text starting with =, +, -, @, tab or carriage return", async () => {
+    const { csvSafeCell } = await import("../../../core/report/csv");
+    for (const text of ["=1+2", "+SUM(A1)", "-2+3", "@cmd", "\tx", "\rx", "=HYPERLINK(\"http://x\")"]) {
+      expect(csvSafeCell(text), `neutralised: ${JSON.stringify(text)}`).toBe(`'${text}`);
+    }
+  });
+  it("leaves numbers, negative numbers and ordinary text as they are", async () => {
+    const { csvSafeCell } = await import("../../../core/report/csv");
+    expect(csvSafeCell(-2.5), "negative number").toBe("-2.5");
+    expect(csvSafeCell("-2.5"), "negative number as text").toBe("-2.5");
+    expect(csvSafeCell("-1e-3"), "exponent form").toBe("-1e-3");
+    expect(csvSafeCell("+4"), "signed number").toBe("+4");
+    expect(csvSafeCell("Outfall A"), "text").toBe("Outfall A");
+    expect(csvSafeCell(null), "missing").toBe("");
+  });
+  it("neutralises a hostile scenario name in the key-results CSV while numbers stay numeric", async () => {
+    const { csvSafeCell, csvFormatSafe } = await import("../../../core/report/csv");
+    const csv = csvFormatSafe([{ name: "=cmd|' /C calc'!A0", margin: -0.25 }], ["name", "margin"]);
+    expect(csv.split("\n")[1], "row").toBe("'=cmd|' /C calc'!A0,-0.25");
+    expect(csvSafeCell(csvSafeCell("=x")), "neutralising twice changes nothing more").toBe("'=x");
+  });
+});

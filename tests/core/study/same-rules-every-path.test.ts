@@ -87,7 +87,10 @@ describe("the same broken input gets the same message from every path, never a p
     const summary = summariseMonteCarlo(planned.plan, [chunk]);
     expect(summary.worstCase.verdicts.refused, "every draw refused").toBe(20);
     expect(summary.worstCase.verdicts.meets, "never a pass").toBe(0);
-    expect(summary.worstCase.probabilityOfExceedance, "no run shows the limit met").toBe(1);
+    // Refused draws are not outcomes of the discharge: with every draw refused there is no probability
+    // to give, rather than a certain exceedance or a certain pass.
+    expect(summary.worstCase.probabilityOfExceedance, "no computed run, no probability").toBeNaN();
+    expect(summary.worstCase.failedRuns, "refused runs counted apart").toBe(20);
   });
 
   it("a design candidate with a 5 mm port or a port at the surface: refused with run's message", () => {
