@@ -101,7 +101,8 @@ export function runCases<R>(cases: readonly CaseSpec[], runOne: (c: CaseSpec, in
 
 /** A sentence saying which cases were run and whether slack water was added. */
 export function describeCases(cases: readonly CaseSpec[], s: Scenario): string {
-  const names = cases.map((c) => c.name).join(", ");
+  // Quoted: a case name may itself contain a comma ("Slack water, summer").
+  const names = cases.map((c) => `“${c.name}”`).join(", ");
   const slack = cases.find((c) => c.addedSlackWater);
   if (slack) {
     const same = slack.sameAs !== null ? " (the stated water is already stagnant, so it is the same case)" : "";
