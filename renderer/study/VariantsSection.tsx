@@ -343,6 +343,9 @@ function VariantEditor({ active, base, study, index, variant, unitSystem, onChan
 /** Marks the fields a variant changes (a CSS rule per changed path; the inputs carry data-path). */
 function ChangedMarker({ paths }: { paths: ReadonlySet<string> }) {
   if (paths.size === 0) return null;
-  const selectors = [...paths].map((p) => `.variant-fields .field:has([data-path="${p.replace(/["\\]/g, "")}"])`).join(",\n");
-  return <style>{`${selectors} { background: #fff7e0; box-shadow: inset 3px 0 0 #b7791f; }`}</style>;
+  const fields = [...paths].map((p) => `.variant-fields .field:has([data-path="${p.replace(/["\\]/g, "")}"])`);
+  const css =
+    `${fields.map((f) => `${f} input`).join(",\n")} { background: #fff4d6; border-color: #b7791f; }\n` +
+    `${fields.map((f) => `${f} > label::after`).join(",\n")} { content: " · changed"; color: #7a4b00; font-weight: 600; }`;
+  return <style>{css}</style>;
 }
