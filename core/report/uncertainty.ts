@@ -138,8 +138,15 @@ export function uncertaintyHistogramSvg(
   const pw = width - left - right;
   const ph = height - top - bottom;
   const req = worst.requiredDilution;
-  const xs = [...bins.flatMap((b) => [b.x0, b.x1]), req?.p5, req?.p95].filter((v): v is number => typeof v === "number" && Number.isFinite(v));
-  if (bins.length === 0 || xs.length === 0) return "";
+  if (bins.length === 0) return "";
+  const runLo = bins[0]!.x0;
+  const runHi = bins[bins.length - 1]!.x1;
+  const runSpan = runHi - runLo > 0 ? runHi - runLo : Math.max(1, Math.abs(runLo) * 0.1);
+  // The required dilution joins the axis when it lies near the runs; far off, it is marked at the edge of
+  // the plot with an arrow, so the runs' spread stays readable.
+  const reqValue = req && Number.isFinite(req.p50) ? req.p50 : null;
+  const reqNear = reqValue !== null && reqValue >= runLo - 1.5 * runSpan && reqValue <= runHi + 1.5 * runSpan;
+  const xs = [runLo, runHi, ...(reqNear && req ? [req.p5, req.p95].filter((v) => Number.isFinite(v)) : [])];
   let lo = Math.min(...xs);
   let hi = Math.max(...xs);
   if (!(hi > lo)) {
@@ -149,8 +156,9 @@ export function uncertaintyHistogramSvg(
   const pad = (hi - lo) * 0.04;
   lo = Math.max(0, lo - pad);
   hi += pad;
+  const offScale: "left" | "right" | null = reqValue === null || reqNear ? null : reqValue < lo ? "left" : "right";
   const maxCount = Math.max(1, ...bins.map((b) => b.count));
-  const sx = (v: number) => left + (pw * (v - lo)) / (hi - lo);
+  const sx = (v: number) => left + (pw * (Math.min(hi, Math.max(lo, v)) - lo)) / (hi - lo);
   const sy = (c: number) => top + ph - (ph * c) / maxCount;
   const parts: string[] = [];
   const yTicks = linearTicks(0, maxCount, 5).filter((t) => Number.isInteger(t));
@@ -158,10 +166,12 @@ export function uncertaintyHistogramSvg(
     parts.push(`<line x1="${left}" y1="${r1(sy(t))}" x2="${left + pw}" y2="${r1(sy(t))}" stroke="#e2e8f0"/>`);
     parts.push(`<text x="${left - 6}" y="${r1(sy(t) + 3.5)}" text-anchor="end" font-size="10" ${FONT}>${t}</text>`);
   }
-  for (const t of linearTicks(lo, hi, 7)) {
+  const xTicks: number[] = [];
+  for (const t of linearTicks(lo, hi, 7)) if (xTicks.length === 0 || sx(t) - sx(xTicks[xTicks.length - 1]!) >= 40) xTicks.push(t);
+  for (const t of xTicks) {
     parts.push(`<text x="${r1(sx(t))}" y="${top + ph + 14}" text-anchor="middle" font-size="10" ${FONT}>${escapeHtml(reportNumber(t))}</text>`);
   }
-  if (req && Number.isFinite(req.p5) && Number.isFinite(req.p95) && req.p95 > req.p5) {
+  if (!offScale && req && Number.isFinite(req.p5) && Number.isFinite(req.p95) && req.p95 > req.p5) {
     parts.push(`<rect x="${r1(sx(req.p5))}" y="${top}" width="${r1(sx(req.p95) - sx(req.p5))}" height="${ph}" fill="#b91c1c" fill-opacity="0.12"/>`);
   }
   for (const b of bins) {
@@ -177,11 +187,18 @@ export function uncertaintyHistogramSvg(
     parts.push(`<line x1="${r1(sx(v))}" y1="${top}" x2="${r1(sx(v))}" y2="${top + ph}" stroke="#0f172a" stroke-dasharray="3 3"/>`);
     parts.push(`<text x="${r1(sx(v))}" y="${top - 4 - (i % 2) * 11}" text-anchor="middle" font-size="10" ${FONT}>${label}</text>`);
   });
-  if (req && Number.isFinite(req.p50)) {
-    const x = sx(req.p50);
+  if (reqValue !== null && !offScale) {
+    const x = sx(reqValue);
     const anchor = x > left + pw * 0.7 ? "end" : "start";
     parts.push(`<line x1="${r1(x)}" y1="${top}" x2="${r1(x)}" y2="${top + ph}" stroke="#b91c1c" stroke-width="2"/>`);
-    parts.push(`<text x="${r1(x + (anchor === "start" ? 4 : -4))}" y="${top + 12}" text-anchor="${anchor}" font-size="10" font-weight="700" fill="#b91c1c" ${FONT}>required ${escapeHtml(reportNumber(req.p50))}×</text>`);
+    parts.push(`<text x="${r1(x + (anchor === "start" ? 4 : -4))}" y="${top + 12}" text-anchor="${anchor}" font-size="10" font-weight="700" fill="#b91c1c" paint-order="stroke" stroke="#fff" stroke-width="3" ${FONT}>required ${escapeHtml(reportNumber(reqValue))}×</text>`);
+  } else if (reqValue !== null && offScale) {
+    const x = offScale === "left" ? left + 2 : left + pw - 2;
+    const arrow = offScale === "left" ? `M${x + 10},${top + 8} L${x},${top + 14} L${x + 10},${top + 20} Z` : `M${x - 10},${top + 8} L${x},${top + 14} L${x - 10},${top + 20} Z`;
+    parts.push(`<line x1="${r1(x)}" y1="${top}" x2="${r1(x)}" y2="${top + ph}" stroke="#b91c1c" stroke-width="2" stroke-dasharray="6 3"/>`);
+    parts.push(`<path d="${arrow}" fill="#b91c1c"/>`);
+    const words = offScale === "left" ? `required ${reportNumber(reqValue)}× — off the scale to the left` : `required ${reportNumber(reqValue)}× — off the scale to the right`;
+    parts.push(`<text x="${r1(offScale === "left" ? x + 14 : x - 14)}" y="${top + 18}" text-anchor="${offScale === "left" ? "start" : "end"}" font-size="10" font-weight="700" fill="#b91c1c" paint-order="stroke" stroke="#fff" stroke-width="3" ${FONT}>${escapeHtml(words)}</text>`);
   }
   parts.push(`<text x="${r1(left + pw / 2)}" y="${height - 8}" text-anchor="middle" font-size="11" ${FONT}>dilution at the mixing-zone edge, per-run worst case (×)</text>`);
   parts.push(`<text transform="translate(14 ${r1(top + ph / 2)}) rotate(-90)" text-anchor="middle" font-size="11" ${FONT}>number of runs</text>`);
