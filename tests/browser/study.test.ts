@@ -17,6 +17,7 @@ import { parseStudy } from "../../core/study/study-file";
 import { compareVariant, studyVariants } from "../../core/study/compare";
 import { parseScenario } from "../../core/scenario/parse";
 import { evaluateScenario } from "../../core/study/evaluate";
+import { PERCENTILE_MEANING, REFUSED_MEANING } from "../../core/study/uncertainty-words";
 
 const root = resolve(dirname(fileURLToPath(import.meta.url)), "../..");
 const dist = join(root, "dist/renderer");
@@ -210,6 +211,77 @@ describe("a study as a document in the app", () => {
     const [chooser] = await Promise.all([page.waitForEvent("filechooser"), page.getByRole("button", { name: "Discard changes" }).click()]);
     await chooser.setFiles(path);
     await expect.poll(() => page.locator("[data-role=notice]").textContent(), { message: "the notice" }).toMatch(/base scenario by file \("site\.json"\).*brinefield compare/);
+  });
+
+  it("draws a sweep with axis titles in words and units, readable ticks, a legend, a table and a CSV", async () => {
+    await page.click("[data-command=study]");
+    await page.click("[data-study=sweep]");
+    await expect.poll(() => page.locator("[data-command=study-sweep]").isDisabled(), { message: "scenario read", timeout: 30_000 }).toBe(false);
+    const steps = page.locator(".study-form").first().locator("label", { hasText: "steps" }).locator("input");
+    await steps.fill("6");
+    await page.click("[data-command=study-sweep]");
+    const chart = page.locator("[data-role=sweep-line-chart]");
+    await chart.waitFor({ timeout: 120_000 });
+    const words = await chart.textContent();
+    expect(words, "x axis title in words with its unit").toContain("Current speed (m/s)");
+    expect(words, "no raw paths on the chart").not.toMatch(/ambient\.currentSpeed/);
+    // No two tick labels overprint.
+    const boxes = await chart.locator("text.tick").evaluateAll((els) => els.map((e) => e.getBoundingClientRect()).map((r) => ({ x: r.x, y: r.y, w: r.width, h: r.height })));
+    for (let i = 0; i < boxes.length; i++) {
+      for (let k = i + 1; k < boxes.length; k++) {
+        const a = boxes[i]!;
+        const b = boxes[k]!;
+        const overlap = a.x < b.x + b.w && b.x < a.x + a.w && a.y < b.y + b.h && b.y < a.y + a.h;
+        expect(overlap, `tick labels ${i} and ${k} overprint`).toBe(false);
+      }
+    }
+    expect(await page.locator(".chart-legend").textContent(), "legend").toMatch(/required dilution.*meets.*exceeds.*outside scope/);
+    await page.screenshot({ path: join(artifacts, "study-sweep-1440x900.png") });
+    await page.click("[data-command=sweep-table]");
+    expect(await page.locator("[data-role=sweep-table] tbody tr").count(), "one row per point").toBe(6);
+    expect(await page.locator("[data-role=sweep-table] th").first().textContent()).toBe("Current speed (m/s)");
+    const [download] = await Promise.all([page.waitForEvent("download"), page.click("[data-command=sweep-csv]")]);
+    const csvPath = join(artifacts, "study-sweep.csv");
+    await download.saveAs(csvPath);
+    const lines = readFileSync(csvPath, "utf8").split(/\r?\n/);
+    expect(lines[0], "the caution first").toMatch(/^"?Caution:/);
+    expect(lines.find((l) => l.startsWith("ambient.currentSpeed")), "the columns of sweep --csv").toMatch(/^ambient\.currentSpeed,governingCase,edgeDilution,requiredDilution,margin,verdict/);
+    await page.click("[data-command=sweep-chart]");
+    await page.getByRole("button", { name: "Add second input" }).click();
+    await page.locator(".study-form").nth(1).locator("label", { hasText: "steps" }).locator("input").fill("4");
+    await steps.fill("4");
+    await page.click("[data-command=study-sweep]");
+    await page.locator("[data-role=sweep-heatmap]").waitFor({ timeout: 120_000 });
+    const legend = await page.locator("[data-role=heatmap-legend]").textContent();
+    expect(legend, "colour legend with the limit line").toMatch(/margin[\s\S]*margin = 1 \(limit\)/);
+    await page.setViewportSize({ width: 1280, height: 720 });
+    await page.locator("[data-role=sweep-heatmap]").scrollIntoViewIfNeeded();
+    await page.waitForTimeout(300);
+    await page.screenshot({ path: join(artifacts, "study-sweep-1280x720.png") });
+    await page.setViewportSize({ width: 1440, height: 900 });
+  });
+
+  it("explains a Monte Carlo run in words, with percentages and the histogram's required line and axes", async () => {
+    await page.click("[data-study=monte-carlo]");
+    await page.locator(".study-form label", { hasText: "runs" }).locator("input").fill("120");
+    await expect.poll(() => page.locator("[data-command=study-monte-carlo]").isDisabled(), { timeout: 30_000 }).toBe(false);
+    await page.click("[data-command=study-monte-carlo]");
+    const figure = page.locator("[data-role=monte-carlo-histogram] svg[data-figure=uncertainty-histogram]");
+    await figure.waitFor({ timeout: 180_000 });
+    const text = await figure.textContent();
+    expect(text, "y axis").toContain("number of runs");
+    expect(text, "x axis").toContain("dilution at the mixing-zone edge, per-run worst case (×)");
+    expect(text, "the required dilution is marked").toMatch(/required [\d.]+×/);
+    const explained = await page.locator("[data-role=monte-carlo-explanations]").textContent();
+    expect(explained).toContain(PERCENTILE_MEANING);
+    expect(explained).toContain(REFUSED_MEANING);
+    expect(await page.locator("[data-role=study-exceedance]").textContent(), "chance as a percentage").toMatch(/chance of not meeting the limit (\d+(\.\d+)?|< 0\.1|> 99\.9) %/);
+    await figure.scrollIntoViewIfNeeded();
+    await page.screenshot({ path: join(artifacts, "study-monte-carlo-1440x900.png") });
+    await page.setViewportSize({ width: 1280, height: 720 });
+    await page.waitForTimeout(300);
+    await page.screenshot({ path: join(artifacts, "study-monte-carlo-1280x720.png") });
+    await page.setViewportSize({ width: 1440, height: 900 });
   });
 
   it("logged no console errors or Content-Security-Policy violations", () => {
