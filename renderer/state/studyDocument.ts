@@ -91,7 +91,7 @@ export function documentFromText(text: string): ReadDocument {
     const parsed = parseStudy(json.value);
     if (!parsed.ok) {
       const list = parsed.issues.slice(0, 5).map((i) => i.message).join("; ");
-      return { ok: false, message: `The study file has ${parsed.issues.length} problem(s): ${list}` };
+      return { ok: false, message: `The file is a Brinefield study ("${STUDY_FORMAT}") with ${parsed.issues.length} problem(s): ${list}` };
     }
     const s = parsed.study;
     if (typeof s.base === "string") {
