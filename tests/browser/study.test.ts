@@ -284,6 +284,24 @@ describe("a study as a document in the app", () => {
     await page.setViewportSize({ width: 1440, height: 900 });
   });
 
+  it("opens a design-search row as a scenario", async () => {
+    await page.click("[data-study=design]");
+    await expect.poll(() => page.locator("[data-command=study-design]").isDisabled(), { message: "scenario read", timeout: 30_000 }).toBe(false);
+    await page.locator(".study-form label", { hasText: "max ports" }).locator("input").fill("2");
+    await page.click("[data-command=study-design]");
+    await page.locator("[data-role=design-headline]").waitFor({ timeout: 120_000 });
+    expect(await page.locator("[data-command=design-open-as-scenario]").count(), "every listed design can be opened").toBeGreaterThan(0);
+    await page.locator("[data-command=design-open-as-scenario]").first().click();
+    // The open document (the variant opened earlier) has unsaved changes: asked first.
+    await page.getByRole("button", { name: "Discard changes" }).click();
+    await page.locator("[data-role=headline-table]").waitFor({ timeout: 30_000 });
+    expect(await page.locator(".doc-title").textContent(), "named after the design").toMatch(/design #1/);
+    const ports = page.locator('input[data-path="diffuser.portCount"]');
+    // A single-port design has no port-count field; a line of ports shows its count.
+    if ((await ports.count()) > 0) expect(await ports.inputValue(), "at most two ports").toMatch(/^[12]$/);
+    expect(await page.locator(".doc-title .dirty-dot").count(), "a new, unsaved scenario").toBe(1);
+  });
+
   it("logged no console errors or Content-Security-Policy violations", () => {
     expect(problems).toEqual([]);
   });
