@@ -20,13 +20,17 @@ import { applyDesign, type Action } from "./state/actions";
 import {
   blankScenario,
   documentFromFile,
-  fileFromText,
-  scenarioName,
-  serialiseScenario,
   suggestedFileName,
   type DocumentState,
   type ScenarioFile,
 } from "./state/scenarioState";
+import {
+  documentFromText,
+  documentName,
+  serialiseDocument,
+  suggestedDocumentName,
+  type StudyPart,
+} from "./state/studyDocument";
 import { StartView } from "./start/StartView";
 import { historyPush, historyRedo, historyReplace, historyStart, historyUndo, type History } from "./state/history";
 import { ConfirmDialog, type ConfirmRequest } from "./ui/ConfirmDialog";
@@ -58,11 +62,17 @@ function initialDocument(): DocumentState {
 export function App() {
   const [history, setHistory] = useState<History>(() => historyStart(initialDocument()));
   const doc = history.present;
-  /** The file as last opened or saved: undoing back to it makes the document clean again. */
-  const savedFile = useRef<ScenarioFile | null>(doc.file);
+  /** The file (and study part) as last opened or saved: undoing back to it makes the document clean again. */
+  const savedFile = useRef<{ file: ScenarioFile; study: StudyPart | null } | null>({ file: doc.file, study: null });
+  const isSaved = (d: DocumentState) => savedFile.current !== null && d.file === savedFile.current.file && (d.study ?? null) === savedFile.current.study;
   const setDoc = useCallback((update: (d: DocumentState) => DocumentState) => setHistory((h) => historyReplace(h, update(h.present))), []);
   const [unitSystem, setUnitSystem] = useState<UnitSystem>(initialUnits);
   const [tab, setTab] = useState<"design" | "study">("design");
+  // The Study tab stays mounted once opened, so its results and choices survive a tab switch.
+  const [studyMounted, setStudyMounted] = useState(false);
+  useEffect(() => {
+    if (tab === "study") setStudyMounted(true);
+  }, [tab]);
   const [showStart, setShowStart] = useState(false);
   const [recent, setRecent] = useState<readonly string[]>([]);
   const [confirm, setConfirm] = useState<ConfirmRequest | null>(null);
@@ -77,11 +87,11 @@ export function App() {
 
   /** Replaces the document (open, new, demo) and gives the 3D view a fresh camera. */
   const loadDocument = useCallback((next: DocumentState) => {
-    savedFile.current = next.file;
+    savedFile.current = { file: next.file, study: next.study ?? null };
     setHistory(historyStart(next));
     // The user opened something else (after agreeing to drop unsaved work): the autosave is obsolete.
     // Recovered work is the exception: it is unsaved, so it is written back at once (below).
-    if (next.dirty) void host.autosaveWrite(serialiseScenario(next.file)).catch(() => {});
+    if (next.dirty) void host.autosaveWrite(serialiseDocument(next)).catch(() => {});
     else void host.autosaveClear().catch(() => {});
     setDocumentKey((n) => n + 1);
   }, []);
@@ -95,7 +105,25 @@ export function App() {
     if (active instanceof HTMLInputElement || active instanceof HTMLTextAreaElement) active.blur();
     setHistory((h) => {
       const moved = direction === "undo" ? historyUndo(h) : historyRedo(h);
-      return moved === h ? h : historyReplace(moved, { ...moved.present, dirty: moved.present.file !== savedFile.current });
+      return moved === h ? h : historyReplace(moved, { ...moved.present, dirty: !isSaved(moved.present) });
+    });
+  }, []);
+  /**
+   * Changes the study part (variants, names) as one undo step. Turning a scenario document into a study
+   * forgets its path: the scenario file on disk stays a scenario, the study is saved as its own file.
+   */
+  const changeStudy = useCallback((next: StudyPart | null, key: string) => {
+    setHistory((h) => {
+      const present = h.present;
+      const becomesStudy = !present.study && next !== null;
+      const changed: DocumentState = {
+        ...present,
+        study: next,
+        path: becomesStudy ? null : present.path,
+        dirty: true,
+        revision: present.revision + 1,
+      };
+      return historyPush(h, changed, `study:${key}`, Date.now());
     });
   }, []);
   const issues = useMemo(() => issuesByPath(engine.issues), [engine.issues]);
@@ -106,7 +134,7 @@ export function App() {
   );
 
   // Title and dirty flag to the host (only when they change, not on every keystroke); units remembered.
-  const documentTitle = scenarioName(doc.file);
+  const documentTitle = documentName(doc);
   useEffect(() => {
     void host.setDocumentState(doc.dirty, documentTitle).catch(() => {});
   }, [doc.dirty, documentTitle]);
@@ -126,13 +154,13 @@ export function App() {
     void host.recentFiles().then(setRecent).catch(() => {});
   }, []);
   useEffect(() => {
-    let written: ScenarioFile | null = null;
+    let written: DocumentState | null = null;
     const timer = setInterval(() => {
       const current = docRef.current;
       // Only unsaved work, and only when it changed since the last autosave.
-      if (!current.dirty || current.file === written) return;
-      written = current.file;
-      void host.autosaveWrite(serialiseScenario(current.file)).catch(() => {});
+      if (!current.dirty || (written !== null && current.file === written.file && current.study === written.study)) return;
+      written = current;
+      void host.autosaveWrite(serialiseDocument(current)).catch(() => {});
     }, AUTOSAVE_INTERVAL_MS);
     return () => clearInterval(timer);
   }, []);
@@ -150,14 +178,14 @@ export function App() {
   }, []);
 
   const loadText = useCallback((text: string, path: string | null) => {
-    const read = fileFromText(text);
+    const read = documentFromText(text);
     if (!read.ok) {
       flash(read.message);
       return;
     }
-    loadDocument(documentFromFile(read.file, path));
+    loadDocument({ ...documentFromFile(read.file, path), study: read.study });
     setShowStart(false);
-    setTab("design");
+    setTab(read.study ? "study" : "design");
     if (path !== null) host.rememberOpened({ path, text });
     void host.recentFiles().then(setRecent).catch(() => {});
   }, [flash, loadDocument]);
@@ -165,11 +193,11 @@ export function App() {
   const saveAs = useCallback(async (forceDialog: boolean): Promise<boolean> => {
     const current = docRef.current;
     try {
-      const path = await host.saveScenario(forceDialog ? null : current.path, serialiseScenario(current.file), suggestedFileName(current.file));
+      const path = await host.saveScenario(forceDialog ? null : current.path, serialiseDocument(current), suggestedDocumentName(current));
       if (path === null) return false;
-      savedFile.current = current.file;
+      savedFile.current = { file: current.file, study: current.study ?? null };
       // Clean only if nothing changed while the dialog was open (the file object is replaced on every edit).
-      setDoc((d) => (d.file === current.file ? { ...d, path, dirty: false } : { ...d, path }));
+      setDoc((d) => (d.file === current.file && d.study === current.study ? { ...d, path, dirty: false } : { ...d, path }));
       await host.autosaveClear().catch(() => {});
       void host.recentFiles().then(setRecent).catch(() => {});
       flash(`Saved ${path.replace(/^.*[\\/]/, "")}`);
@@ -188,7 +216,7 @@ export function App() {
     }
     setConfirm({
       title: "Unsaved changes",
-      message: `“${scenarioName(docRef.current.file)}” has changes that are not saved. ${what} anyway?`,
+      message: `“${documentName(docRef.current)}” has changes that are not saved. ${what} anyway?`,
       confirmLabel: "Discard changes",
       extraLabel: "Save first",
       onExtra: () => void saveAs(false).then((saved) => saved && proceed()),
@@ -249,19 +277,30 @@ export function App() {
    */
   const recover = useCallback((record: host.AutosaveRecord) => {
     setRecovery(null);
-    const read = fileFromText(record.text);
+    const read = documentFromText(record.text);
     if (!read.ok) {
       flash(`The unsaved work could not be recovered. ${read.message}`);
       void host.autosaveClear().catch(() => {});
       return;
     }
     guardUnsaved("Recover the earlier unsaved work", () => {
-      loadDocument({ ...documentFromFile(read.file, null), dirty: true });
+      loadDocument({ ...documentFromFile(read.file, null), study: read.study, dirty: true });
       savedFile.current = null; // nothing of it is on disk: undoing back to it stays dirty
       setShowStart(false);
       setTab("design");
     });
   }, [flash, guardUnsaved, loadDocument]);
+
+  /** Opens a variant's or a design's full scenario as a new, unsaved scenario document. */
+  const openAsScenario = useCallback((file: ScenarioFile) => {
+    guardUnsaved("Open it as a scenario", () => {
+      loadDocument({ ...documentFromFile(file, null), dirty: true });
+      savedFile.current = null; // nothing of it is on disk yet
+      setShowStart(false);
+      setTab("design");
+      flash(`Opened “${typeof file["name"] === "string" ? file["name"] : "the scenario"}” as a new scenario (not saved yet).`);
+    });
+  }, [guardUnsaved, loadDocument, flash]);
 
   // Keyboard shortcuts and host menu commands.
   useEffect(() => {
@@ -308,7 +347,7 @@ export function App() {
   const dragging = useFileDrop((file) => {
     void host.readDroppedFile(file).then(
       (opened) => {
-        const read = fileFromText(opened.text);
+        const read = documentFromText(opened.text);
         if (!read.ok) return flash(`${file.name}: ${read.message}`);
         guardUnsaved("Open the dropped file", () => loadText(opened.text, opened.path));
       },
@@ -338,6 +377,7 @@ export function App() {
           </nav>
           <div className="doc-title" title={doc.path ?? "not saved yet"}>
             {doc.dirty ? <span className="dirty-dot" role="img" aria-label="unsaved changes" title="unsaved changes">●</span> : null}
+            {doc.study ? <span className="doc-kind" data-role="doc-kind">Study</span> : null}
             {title}
             {doc.path ? <span className="doc-path">{doc.path.replace(/^.*[\\/]/, "")}</span> : null}
           </div>
@@ -418,14 +458,24 @@ export function App() {
               </div>
             </aside>
           </main>
-        ) : (
-          <main className="study-workspace">
-            <p className="caution" data-role="caution">{CAUTION}</p>
+        ) : null}
+        {studyMounted || tab === "study" ? (
+          <main className="study-workspace" hidden={tab !== "study"}>
+            {tab === "study" ? <p className="caution" data-role="caution">{CAUTION}</p> : null}
             <Suspense fallback={<div className="placeholder">Loading study tools…</div>}>
-              <StudyPanel scenarioFile={doc.file} unitSystem={unitSystem} onApplyDesign={(diffuser) => perform(applyDesign, { diffuser })} />
+              <StudyPanel
+                active={tab === "study"}
+                scenarioFile={doc.file}
+                study={doc.study ?? null}
+                unitSystem={unitSystem}
+                onStudyChange={changeStudy}
+                onOpenAsScenario={openAsScenario}
+                onApplyDesign={(diffuser) => perform(applyDesign, { diffuser })}
+                onNotice={flash}
+              />
             </Suspense>
           </main>
-        )}
+        ) : null}
 
         {showStart ? (
           <StartView

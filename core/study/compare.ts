@@ -124,7 +124,8 @@ export type FlatRow = Record<string, string | number | boolean | null>;
 
 /**
  * Flat columns: variant, case, governingCase, edgeDilution, requiredDilution, margin, verdict,
- * warnings, equationOfState, then per method `<method>MaxRise` (m), `<method>ImpactDistance` (m),
+ * scopeReasons, warnings, equationOfState, chain (the method chain that reached the edge; on the overall
+ * row, the governing case's chain), then per method `<method>MaxRise` (m), `<method>ImpactDistance` (m),
  * `<method>ImpactDilution`.
  */
 export function flattenRow(r: CompareRow): FlatRow {
@@ -140,6 +141,7 @@ export function flattenRow(r: CompareRow): FlatRow {
     scopeReasons: s && s.scopeReasons.length > 0 ? s.scopeReasons.join(" ") : null,
     warnings: s?.warningCount ?? null,
     equationOfState: s?.equationOfState ?? null,
+    chain: s?.chain ?? null,
   };
   for (const m of s?.methods ?? []) {
     const k = camel(m.method);

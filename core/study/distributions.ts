@@ -5,7 +5,8 @@
  */
 import type { Scenario, UncertainInput } from "../scenario/types";
 import { standardNormal, type RandomSource } from "./random";
-import { readPath } from "./overrides";
+import { overridePathInfo, readPath } from "./overrides";
+import { siToDisplay } from "../units";
 
 export type DistributionName = UncertainInput["distribution"];
 
@@ -126,15 +127,19 @@ export function distributionCentre(d: ResolvedDistribution): number {
 
 /** Readable one-line statement of a distribution, SI units. */
 export function describeDistribution(d: ResolvedDistribution): string {
+  const info = overridePathInfo(d.path);
+  const unit = info ? siToDisplay(1, info.kind, "si").unit : "";
+  const u = (v: number) => (unit ? `${fmt(v)} ${unit}` : fmt(v));
+  const what = info ? `${info.label} (${d.path})` : d.path;
   switch (d.distribution) {
     case "normal":
-      return `${d.path}: normal, mean ${fmt(d.mean)}, sd ${fmt(d.sd)}`;
+      return `${what}: normal, mean ${u(d.mean)}, standard deviation ${u(d.sd)}`;
     case "lognormal":
-      return `${d.path}: lognormal, median ${fmt(d.median)}, geometric sd ${fmt(d.gsd)}`;
+      return `${what}: lognormal, median ${u(d.median)}, geometric standard deviation ${fmt(d.gsd)} (about two runs in three lie between the median ÷ ${fmt(d.gsd)} and × ${fmt(d.gsd)})`;
     case "uniform":
-      return `${d.path}: uniform from ${fmt(d.min)} to ${fmt(d.max)}`;
+      return `${what}: uniform from ${u(d.min)} to ${u(d.max)}`;
     case "triangular":
-      return `${d.path}: triangular, min ${fmt(d.min)}, mode ${fmt(d.mode)}, max ${fmt(d.max)}`;
+      return `${what}: triangular, min ${u(d.min)}, most likely ${u(d.mode)}, max ${u(d.max)}`;
   }
 }
 

@@ -91,9 +91,13 @@ export interface MonteCarloChunk {
   /** edgeDilution[caseIndex][run − start]; NaN for a run the pipeline rejected. */
   readonly edgeDilution: Float64Array[];
   readonly margin: Float64Array[];
+  /** Required dilution per case and run (it follows the drawn salinities); NaN for a refused run. */
+  readonly requiredDilution?: Float64Array[];
   /** Verdict codes (VERDICT_CODE): 1 meets, 0 exceeds, 3 outside-scope, 2 refused (never a pass). */
   readonly pass: Uint8Array[];
   readonly clampedSamples: number;
+  /** Clamped samples per input path (only paths with at least one). */
+  readonly clampedByInput: Readonly<Record<string, number>>;
   readonly firstError: string | null;
   /** Evaluations per equation of state (a run can cross from TEOS-10 to the brine correlation). */
   readonly equationsOfState: Readonly<Record<string, number>>;
@@ -118,8 +122,10 @@ export function runMonteCarloChunk(
   const n = Math.max(0, end - start);
   const edge = Array.from({ length: nc }, () => new Float64Array(n));
   const margin = Array.from({ length: nc }, () => new Float64Array(n));
+  const required = Array.from({ length: nc }, () => new Float64Array(n));
   const pass = Array.from({ length: nc }, () => new Uint8Array(n));
   let clamped = 0;
+  const clampedBy: Record<string, number> = {};
   let firstError: string | null = null;
   const eos: Record<string, number> = {};
   for (let k = 0; k < n; k++) {
@@ -130,8 +136,10 @@ export function runMonteCarloChunk(
         end: start + k,
         edgeDilution: edge.map(cut),
         margin: margin.map(cut),
+        requiredDilution: required.map(cut),
         pass: pass.map(cut),
         clampedSamples: clamped,
+        clampedByInput: clampedBy,
         firstError,
         equationsOfState: eos,
       };
@@ -148,6 +156,7 @@ export function runMonteCarloChunk(
       const low = info.exclusiveMin ? info.min + Number.EPSILON : info.min;
       if (v < low || v > info.max) {
         clamped++;
+        clampedBy[d.path] = (clampedBy[d.path] ?? 0) + 1;
         v = Math.min(info.max, Math.max(low, v));
       }
       overrides[d.path] = v;
@@ -164,11 +173,12 @@ export function runMonteCarloChunk(
       if (s) eos[s.equationOfState] = (eos[s.equationOfState] ?? 0) + 1;
       edge[c]![k] = s ? s.edgeDilution : Number.NaN;
       margin[c]![k] = s ? s.margin : Number.NaN;
+      required[c]![k] = s ? s.requiredDilution : Number.NaN;
       pass[c]![k] = s ? VERDICT_CODE[s.verdict] : VERDICT_CODE.refused;
     }
     onProgress?.(k + 1);
   }
-  return { start, end, edgeDilution: edge, margin, pass, clampedSamples: clamped, firstError, equationsOfState: eos };
+  return { start, end, edgeDilution: edge, margin, requiredDilution: required, pass, clampedSamples: clamped, clampedByInput: clampedBy, firstError, equationsOfState: eos };
 }
 
 /**
@@ -188,6 +198,8 @@ export interface MonteCarloStats {
   readonly name: string;
   readonly edgeDilution: PercentileSummary;
   readonly margin: PercentileSummary;
+  /** Required dilution of the same runs (it follows the drawn salinities). */
+  readonly requiredDilution: PercentileSummary;
   /**
    * Share of the computed runs without a "meets" verdict (exceeds and outside-scope runs count: neither
    * shows that the limit is met). Refused runs — draws that break a scenario rule — are not outcomes of
@@ -213,6 +225,8 @@ export interface MonteCarloSummary {
   /** Per run, the verdict over every case (as `run`'s `overall`) and the governing case's numbers. */
   readonly worstCase: MonteCarloStats;
   readonly clampedSamples: number;
+  /** Clamped samples per input path (only paths with at least one). */
+  readonly clampedByInput: Readonly<Record<string, number>>;
   readonly firstError: string | null;
   /** Evaluations per equation of state over all runs and cases. */
   readonly equationsOfState: Readonly<Record<string, number>>;
@@ -227,7 +241,10 @@ export interface MonteCarloSamples {
   readonly worstEdgeDilution: Float64Array;
   readonly worstMargin: Float64Array;
   readonly worstPass: Uint8Array;
+  readonly requiredDilution: readonly Float64Array[];
+  readonly worstRequiredDilution: Float64Array;
   readonly clampedSamples: number;
+  readonly clampedByInput: Readonly<Record<string, number>>;
   readonly firstError: string | null;
   readonly equationsOfState: Readonly<Record<string, number>>;
 }
@@ -243,18 +260,21 @@ export function mergeMonteCarloChunks(
   const edge = Array.from({ length: nc }, () => new Float64Array(total));
   const margin = Array.from({ length: nc }, () => new Float64Array(total));
   const pass = Array.from({ length: nc }, () => new Uint8Array(total));
+  const req = Array.from({ length: nc }, () => new Float64Array(total).fill(Number.NaN));
   let at = 0;
   for (const ch of ordered) {
     for (let c = 0; c < nc; c++) {
       edge[c]!.set(ch.edgeDilution[c]!, at);
       margin[c]!.set(ch.margin[c]!, at);
       pass[c]!.set(ch.pass[c]!, at);
+      if (ch.requiredDilution) req[c]!.set(ch.requiredDilution[c]!, at);
     }
     at += ch.end - ch.start;
   }
   const we = new Float64Array(total);
   const wm = new Float64Array(total);
   const wp = new Uint8Array(total);
+  const wr = new Float64Array(total);
   // Per run, the verdict over every case as `run`'s `overall`: refused if the draw was refused, else
   // exceeds if any case exceeds, else outside-scope if any case is, else meets; the governing case is the
   // lowest-margin case among those with the deciding verdict.
@@ -276,6 +296,7 @@ export function mergeMonteCarloChunks(
     }
     we[i] = w >= 0 ? edge[w]![i]! : Number.NaN;
     wm[i] = w >= 0 ? margin[w]![i]! : Number.NaN;
+    wr[i] = w >= 0 ? req[w]![i]! : Number.NaN;
     wp[i] = verdict;
   }
   return {
@@ -286,7 +307,10 @@ export function mergeMonteCarloChunks(
     worstEdgeDilution: we,
     worstMargin: wm,
     worstPass: wp,
+    requiredDilution: req,
+    worstRequiredDilution: wr,
     clampedSamples: ordered.reduce((n, c) => n + c.clampedSamples, 0),
+    clampedByInput: sumCounts(ordered.map((c) => c.clampedByInput ?? {})),
     firstError: ordered.find((c) => c.firstError !== null)?.firstError ?? null,
     equationsOfState: sumCounts(ordered.map((c) => c.equationsOfState)),
   };
@@ -311,7 +335,7 @@ function marginKey(m: number): number {
   return Number.isNaN(m) ? Number.NEGATIVE_INFINITY : m;
 }
 
-function stats(name: string, e: Float64Array, m: Float64Array, p: Uint8Array): MonteCarloStats {
+function stats(name: string, e: Float64Array, m: Float64Array, p: Uint8Array, r: Float64Array): MonteCarloStats {
   const counts = [0, 0, 0, 0];
   for (let i = 0; i < p.length; i++) counts[p[i]!] = (counts[p[i]!] ?? 0) + 1;
   const verdicts = Object.fromEntries(VERDICT_OF_CODE.map((v, code) => [v, counts[code] ?? 0])) as Record<StudyVerdict, number>;
@@ -320,6 +344,7 @@ function stats(name: string, e: Float64Array, m: Float64Array, p: Uint8Array): M
     name,
     edgeDilution: percentileSummary(e),
     margin: percentileSummary(m),
+    requiredDilution: percentileSummary(r),
     probabilityOfExceedance: computed > 0 ? (computed - verdicts.meets) / computed : Number.NaN,
     verdicts,
     meetingRuns: verdicts.meets,
@@ -340,9 +365,10 @@ export function summariseMonteCarlo(
     usedDefaultSpreads: plan.usedDefaultSpreads,
     notes: [...plan.notes, ...[equationOfStateNote(m.equationsOfState)].filter((x): x is string => x !== null)],
     equationsOfState: m.equationsOfState,
-    cases: plan.caseNames.map((name, c) => stats(name, m.edgeDilution[c]!, m.margin[c]!, m.pass[c]!)),
-    worstCase: stats("overall", m.worstEdgeDilution, m.worstMargin, m.worstPass),
+    cases: plan.caseNames.map((name, c) => stats(name, m.edgeDilution[c]!, m.margin[c]!, m.pass[c]!, m.requiredDilution[c]!)),
+    worstCase: stats("overall", m.worstEdgeDilution, m.worstMargin, m.worstPass, m.worstRequiredDilution),
     clampedSamples: m.clampedSamples,
+    clampedByInput: m.clampedByInput,
     firstError: m.firstError,
   };
 }

@@ -35,6 +35,8 @@ export interface CaseSummary {
   /** Water depth minus (port height + max rise), m: the smallest over methods (negative = surfaces). */
   readonly surfaceClearance: number | null;
   readonly methods: readonly MethodSummary[];
+  /** The method chain that reached the mixing-zone edge (near field, then far field), as `run` names it. */
+  readonly chain: string;
 }
 
 /** Runs one scenario (one ambient, no cases) and returns its summary. */
@@ -74,6 +76,7 @@ export function summariseResult(result: Omit<BrinefieldResult, "cases" | "overal
     reachesSurface: surfaceWarning || (clearance !== null && clearance <= 0),
     surfaceClearance: clearance,
     methods,
+    chain: result.mixingZone.method,
   };
 }
 

@@ -176,3 +176,37 @@ export function eosCrossings(axes: readonly SweepAxis[], rows: readonly SweepRow
   }
   return out;
 }
+
+/** Columns of a sweep's table and CSV: the varied paths (SI), then the results of each point. */
+export const SWEEP_RESULT_COLUMNS = [
+  "governingCase",
+  "edgeDilution",
+  "requiredDilution",
+  "margin",
+  "verdict",
+  "pass",
+  "scopeReasons",
+  "equationOfState",
+  "error",
+] as const;
+
+/**
+ * A sweep as flat records for CSV (command line and app alike): the varied paths with SI values, then
+ * governing case, edge and required dilution, margin, verdict, pass, scope reasons, equation of state and
+ * the refusal message.
+ */
+export function sweepRecords(axes: readonly SweepAxis[], rows: readonly SweepRow[]): { columns: string[]; records: Record<string, unknown>[] } {
+  const records = rows.map((r) => ({
+    ...r.values,
+    governingCase: r.governingCase,
+    edgeDilution: r.edgeDilution,
+    requiredDilution: r.requiredDilution,
+    margin: r.margin,
+    verdict: r.verdict,
+    pass: r.pass,
+    scopeReasons: r.scopeReasons.join(" "),
+    equationOfState: r.equationOfState,
+    ...(r.error ? { error: r.error } : {}),
+  }));
+  return { columns: [...axes.map((a) => a.path), ...SWEEP_RESULT_COLUMNS], records };
+}

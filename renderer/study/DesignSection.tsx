@@ -9,6 +9,7 @@ import { candidateOverrides, designConstraintsFrom, planDesignSearch } from "../
 import { designOutcome, type DesignOutcome } from "../../core/study/design-rank";
 import { expandCases } from "../../core/study/cases";
 import type { RunPoints } from "./sections";
+import { isPlainObject, scenarioName, type ScenarioFile } from "../state/scenarioState";
 
 export function DesignSection({
   scenario,
@@ -17,6 +18,7 @@ export function DesignSection({
   busy,
   runPoints,
   onApply,
+  onOpenAsScenario,
 }: {
   scenario: Scenario | null;
   scenarioFile: unknown;
@@ -24,6 +26,8 @@ export function DesignSection({
   busy: boolean;
   runPoints: RunPoints;
   onApply?: (diffuser: Record<string, unknown>) => void;
+  /** Opens the base scenario with this design's diffuser as a new scenario document. */
+  onOpenAsScenario?: (file: ScenarioFile) => void;
 }) {
   const [form, setForm] = useState({
     minExitVelocity: "3 m/s",
@@ -181,6 +185,22 @@ export function DesignSection({
                       }}
                     >
                       {applied === d.rank ? "Applied" : "Apply"}
+                    </button>
+                  ) : null}
+                  {onOpenAsScenario && isPlainObject(scenarioFile) ? (
+                    <button
+                      type="button"
+                      data-command="design-open-as-scenario"
+                      title="Open the scenario with this design's diffuser as a new, unsaved scenario"
+                      onClick={() =>
+                        onOpenAsScenario({
+                          ...scenarioFile,
+                          name: `${scenarioName(scenarioFile)} — design #${d.rank}`,
+                          diffuser: { ...d.diffuser },
+                        })
+                      }
+                    >
+                      Open as scenario
                     </button>
                   ) : null}
                 </td>

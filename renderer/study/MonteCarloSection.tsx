@@ -13,6 +13,14 @@ import {
   type MonteCarloSummary,
 } from "../../core/study/montecarlo";
 import { MonteCarloHistogram } from "./charts";
+import {
+  MARGIN_MEANING,
+  UNCERTAINTY_EXPLANATIONS,
+  clampedSentences,
+  headlineSentence,
+  percentText,
+  verdictCountsSentence,
+} from "../../core/study/uncertainty-words";
 import type { RunJob } from "./sections";
 
 type Histogram = { x0: number; x1: number; count: number }[];
@@ -86,29 +94,17 @@ export function MonteCarloSection({ scenario, busy, runJob, poolSize }: MonteCar
       </p>
       {problem ? <div className="study-error">{problem}</div> : null}
       {out && w ? (
-        <>
-          {out.summary.notes.map((n, i) => (
-            <p key={i} className="study-note">
-              {n}
-            </p>
-          ))}
-          <p data-role="study-exceedance">
-            Worst case, dilution at the mixing-zone edge: P5 {formatNumber(w.edgeDilution.p5)}×, P50{" "}
-            {formatNumber(w.edgeDilution.p50)}×, P95 {formatNumber(w.edgeDilution.p95)}×;
-            probability of not meeting the limit {formatNumber(100 * w.probabilityOfExceedance, 3)} %.
+        <div className="mc-result">
+          <p data-role="study-exceedance" className="mc-headline">
+            <b>{headlineSentence(w, w.requiredDilution.p50)}</b> {verdictCountsSentence(w, out.summary.runs)}
           </p>
-          <MonteCarloHistogram
-            bins={out.bins}
-            p5={w.edgeDilution.p5}
-            p50={w.edgeDilution.p50}
-            p95={w.edgeDilution.p95}
-            required={null}
-          />
-          <table>
+          <MonteCarloHistogram bins={out.bins} worst={w} />
+          <table data-role="monte-carlo-table">
+            <caption className="visually-hidden">Dilution at the mixing-zone edge per ambient case (×)</caption>
             <thead>
               <tr>
-                {["case", "edge dilution P5", "P50", "P95", "P(not meeting limit)", "meets", "exceeds", "outside-scope", "refused"].map((h) => (
-                  <th key={h} className={h === "case" ? "text" : ""}>
+                {["ambient case", "edge dilution P5 (×)", "P50 (×)", "P95 (×)", "margin P5", "chance not meeting limit", "meets", "exceeds", "outside scope", "refused"].map((h) => (
+                  <th key={h} className={h === "ambient case" ? "text" : ""} scope="col">
                     {h}
                   </th>
                 ))}
@@ -117,11 +113,12 @@ export function MonteCarloSection({ scenario, busy, runJob, poolSize }: MonteCar
             <tbody>
               {[...out.summary.cases, w].map((c) => (
                 <tr key={c.name} className={c === w ? "worst" : ""}>
-                  <td className="text">{c.name}</td>
-                  <td>{formatNumber(c.edgeDilution.p5)}×</td>
-                  <td>{formatNumber(c.edgeDilution.p50)}×</td>
-                  <td>{formatNumber(c.edgeDilution.p95)}×</td>
-                  <td>{formatNumber(100 * c.probabilityOfExceedance, 3)} %</td>
+                  <td className="text">{c === w ? "overall (per-run worst case)" : c.name}</td>
+                  <td>{formatNumber(c.edgeDilution.p5)}</td>
+                  <td>{formatNumber(c.edgeDilution.p50)}</td>
+                  <td>{formatNumber(c.edgeDilution.p95)}</td>
+                  <td>{formatNumber(c.margin.p5)}</td>
+                  <td>{percentText(c.probabilityOfExceedance)}</td>
                   <td>{c.verdicts.meets}</td>
                   <td>{c.verdicts.exceeds}</td>
                   <td>{c.verdicts["outside-scope"]}</td>
@@ -130,7 +127,34 @@ export function MonteCarloSection({ scenario, busy, runJob, poolSize }: MonteCar
               ))}
             </tbody>
           </table>
-        </>
+          <details className="mc-explain" open data-role="monte-carlo-explanations">
+            <summary>What these numbers mean</summary>
+            <ul>
+              {[...UNCERTAINTY_EXPLANATIONS, MARGIN_MEANING].map((e) => (
+                <li key={e}>{e}</li>
+              ))}
+            </ul>
+          </details>
+          <details className="mc-explain">
+            <summary>Uncertain inputs (spreads in SI units)</summary>
+            <ul>
+              {out.summary.notes.map((n, i) => (
+                <li key={i}>{n}</li>
+              ))}
+            </ul>
+          </details>
+          {clampedSentences(out.summary).length > 0 ? (
+            <div className="mc-clamped" data-role="monte-carlo-clamped">
+              <b>Clamped inputs</b> — a drawn value outside a field&apos;s physical bounds is set to the nearest bound:
+              <ul>
+                {clampedSentences(out.summary).map((c) => (
+                  <li key={c}>{c}</li>
+                ))}
+              </ul>
+            </div>
+          ) : null}
+          {out.summary.firstError ? <p className="study-note">First refused draw: {out.summary.firstError}</p> : null}
+        </div>
       ) : null}
     </section>
   );

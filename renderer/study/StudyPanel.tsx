@@ -19,6 +19,8 @@ import { VariantsSection } from "./VariantsSection";
 import { SweepSection } from "./SweepSection";
 import { DesignSection } from "./DesignSection";
 import { MonteCarloSection } from "./MonteCarloSection";
+import type { ScenarioFile } from "../state/scenarioState";
+import type { StudyPart } from "../state/studyDocument";
 import "./study.css";
 
 type Section = "variants" | "sweep" | "design" | "monte-carlo";
@@ -31,17 +33,40 @@ interface Job {
 }
 
 interface Props {
-  /** The raw scenario file being edited (the document). */
-  readonly scenarioFile: unknown;
+  /** False while the Study tab is hidden (the panel stays mounted so nothing is lost on a tab switch). */
+  readonly active?: boolean;
+  /** The raw scenario file being edited (the document; a study's base scenario). */
+  readonly scenarioFile: ScenarioFile;
+  /** The document's study part (variants), or null for a scenario document. */
+  readonly study?: StudyPart | null;
   readonly unitSystem: UnitSystem;
+  /** Changes the document's study part (one undo step per change; `key` merges keystrokes). */
+  readonly onStudyChange?: (next: StudyPart | null, key: string) => void;
+  /** Opens a full scenario (a variant's or a design's) as a new scenario document. */
+  readonly onOpenAsScenario?: (file: ScenarioFile) => void;
   /** Puts a listed design's diffuser block into the document (one undo step). */
   readonly onApplyDesign?: (diffuser: Record<string, unknown>) => void;
+  readonly onNotice?: (message: string) => void;
 }
 
-export function StudyPanel({ scenarioFile, unitSystem, onApplyDesign }: Props) {
+export function StudyPanel({
+  active = true,
+  scenarioFile,
+  study = null,
+  unitSystem,
+  onStudyChange,
+  onOpenAsScenario,
+  onApplyDesign,
+  onNotice,
+}: Props) {
   const pool = useMemo(() => new StudyWorkerPool(defaultWorkerCount()), []);
   useEffect(() => () => pool.dispose(), [pool]);
   const [section, setSection] = useState<Section>("variants");
+  // Sections stay mounted once opened (hidden when not shown), so results survive switching between them.
+  const [opened, setOpened] = useState<ReadonlySet<Section>>(() => new Set<Section>(["variants"]));
+  useEffect(() => {
+    setOpened((o) => (o.has(section) ? o : new Set([...o, section])));
+  }, [section]);
   const [scenario, setScenario] = useState<Scenario | null>(null);
   const [scenarioError, setScenarioError] = useState<string | null>(null);
   const [job, setJob] = useState<Job | null>(null);
@@ -50,6 +75,7 @@ export function StudyPanel({ scenarioFile, unitSystem, onApplyDesign }: Props) {
 
   // Read the document in a worker whenever it changes (debounced: typing should not queue work).
   useEffect(() => {
+    if (!active) return; // read again when the tab is shown
     let live = true;
     let reader: StudyWorkerPool | null = null;
     const t = setTimeout(() => {
@@ -74,7 +100,7 @@ export function StudyPanel({ scenarioFile, unitSystem, onApplyDesign }: Props) {
       // A newer document or leaving the tab: stop reading the old one rather than let it run on.
       reader?.dispose();
     };
-  }, [scenarioFile]);
+  }, [scenarioFile, active]);
 
   /** Runs tasks on the pool with a progress bar; returns null when cancelled or failed. */
   const runJob = useCallback(
@@ -154,17 +180,26 @@ export function StudyPanel({ scenarioFile, unitSystem, onApplyDesign }: Props) {
         )}
         {error ? <span className="study-error" role="alert">{error}</span> : null}
       </div>
-      <div>
-        {section === "variants" ? (
-          <VariantsSection
-            scenarioFile={scenarioFile}
-            unitSystem={unitSystem}
-            busy={busy || !scenario}
-            runJob={runJob}
-          />
-        ) : section === "sweep" ? (
+      <div hidden={section !== "variants"} role="tabpanel" aria-label="Variants">
+        <VariantsSection
+          active={active && section === "variants"}
+          scenarioFile={scenarioFile}
+          study={study}
+          unitSystem={unitSystem}
+          busy={busy || !scenario}
+          runJob={runJob}
+          onStudyChange={onStudyChange}
+          onOpenAsScenario={onOpenAsScenario}
+          onNotice={onNotice}
+        />
+      </div>
+      {opened.has("sweep") ? (
+        <div hidden={section !== "sweep"} role="tabpanel" aria-label="Sweep">
           <SweepSection scenario={scenario} unitSystem={unitSystem} busy={busy} runPoints={runPoints} />
-        ) : section === "design" ? (
+        </div>
+      ) : null}
+      {opened.has("design") ? (
+        <div hidden={section !== "design"} role="tabpanel" aria-label="Design search">
           <DesignSection
             scenario={scenario}
             scenarioFile={scenarioFile}
@@ -172,11 +207,15 @@ export function StudyPanel({ scenarioFile, unitSystem, onApplyDesign }: Props) {
             busy={busy}
             runPoints={runPoints}
             onApply={onApplyDesign}
+            onOpenAsScenario={onOpenAsScenario}
           />
-        ) : (
+        </div>
+      ) : null}
+      {opened.has("monte-carlo") ? (
+        <div hidden={section !== "monte-carlo"} role="tabpanel" aria-label="Monte Carlo">
           <MonteCarloSection scenario={scenario} busy={busy} runJob={runJob} poolSize={pool.size} />
-        )}
-      </div>
+        </div>
+      ) : null}
     </div>
   );
 }

@@ -5,9 +5,12 @@ import { useState } from "react";
 import type { Scenario } from "../../core/scenario/types";
 import { formatNumber, siToDisplay, type UnitSystem } from "../../core/units";
 import { OVERRIDE_PATHS } from "../../core/study/overrides";
-import { axisFromParts, eosCrossings, sweepGrid, sweepRows, type SweepAxis, type SweepRow } from "../../core/study/sweep";
+import { axisFromParts, eosCrossings, sweepGrid, sweepRecords, sweepRows, type SweepAxis, type SweepRow } from "../../core/study/sweep";
+import { csvFormatSafe } from "../../core/report/csv";
+import { exportFile } from "../platform/host";
+import { csvWithCaution } from "../exports";
 import { SweepHeatmap, SweepLineChart } from "./charts";
-import { PATHS, axisDisplay, patchAt, type RunPoints } from "./sections";
+import { PATHS, axisDisplay, patchAt, pathTitle, type RunPoints } from "./sections";
 
 interface AxisForm {
   path: string;
@@ -32,6 +35,7 @@ export function SweepSection({
   ]);
   const [result, setResult] = useState<{ axes: SweepAxis[]; rows: SweepRow[] } | null>(null);
   const [problem, setProblem] = useState<string | null>(null);
+  const [view, setView] = useState<"chart" | "table">("chart");
 
   const run = async () => {
     if (!scenario) return;
@@ -78,7 +82,7 @@ export function SweepSection({
             <select value={f.path} onChange={(e) => setForms(patchAt(forms, i, { path: e.target.value }))}>
               {PATHS.map((p) => (
                 <option key={p} value={p}>
-                  {p}
+                  {pathTitle(p)}
                 </option>
               ))}
             </select>
@@ -121,13 +125,27 @@ export function SweepSection({
         </button>
       </div>
       {problem ? <div className="study-error">{problem}</div> : null}
-      {result && result.axes.length === 1 ? (
+      {result ? (
+        <div className="button-row sweep-view" role="group" aria-label="Show the sweep as">
+          <button type="button" aria-pressed={view === "chart"} onClick={() => setView("chart")} data-command="sweep-chart">
+            Chart
+          </button>
+          <button type="button" aria-pressed={view === "table"} onClick={() => setView("table")} data-command="sweep-table">
+            Table
+          </button>
+          <button type="button" onClick={() => exportSweepCsv(result, setProblem)} data-command="sweep-csv">
+            Export CSV
+          </button>
+        </div>
+      ) : null}
+      {result && view === "table" ? <SweepTable result={result} unitSystem={unitSystem} /> : null}
+      {result && view === "chart" && result.axes.length === 1 ? (
         <SweepLineChart
           rows={result.rows}
           axis={{ ...axisDisplay(result.axes[0]!.path, unitSystem), path: result.axes[0]!.path }}
         />
       ) : null}
-      {result && result.axes.length === 2 ? (
+      {result && view === "chart" && result.axes.length === 2 ? (
         <SweepHeatmap
           rows={result.rows}
           axes={[heatAxis(result.axes[0]!, unitSystem), heatAxis(result.axes[1]!, unitSystem)]}
@@ -173,4 +191,52 @@ function siText(path: string, value: number): string {
 
 function heatAxis(a: SweepAxis, unitSystem: UnitSystem) {
   return { ...axisDisplay(a.path, unitSystem), path: a.path, steps: a.steps };
+}
+
+/** The sweep as CSV, the same columns as `brinefield sweep --csv` (varied inputs in SI), opened by the caution. */
+function exportSweepCsv(result: { axes: SweepAxis[]; rows: SweepRow[] }, onProblem: (m: string | null) => void) {
+  const { columns, records } = sweepRecords(result.axes, result.rows);
+  void exportFile("brinefield-sweep.csv", csvWithCaution(csvFormatSafe(records, columns)), [{ name: "CSV", extensions: ["csv"] }]).catch(
+    (error: unknown) => onProblem(`Could not export: ${error instanceof Error ? error.message : String(error)}`),
+  );
+}
+
+/** Every point of the sweep as a table: the varied inputs in the display units, then the results. */
+function SweepTable({ result, unitSystem }: { result: { axes: SweepAxis[]; rows: SweepRow[] }; unitSystem: UnitSystem }) {
+  const axes = result.axes.map((a) => ({ path: a.path, ...axisDisplay(a.path, unitSystem) }));
+  return (
+    <div className="study-table-wrap sweep-table" data-role="sweep-table">
+      <table>
+        <caption className="visually-hidden">Sweep points and their results</caption>
+        <thead>
+          <tr>
+            {axes.map((a) => (
+              <th key={a.path} scope="col">{a.label}</th>
+            ))}
+            <th scope="col" className="text">governing case</th>
+            <th scope="col">edge dilution (×)</th>
+            <th scope="col">required dilution (×)</th>
+            <th scope="col">margin</th>
+            <th scope="col" className="text">verdict</th>
+          </tr>
+        </thead>
+        <tbody>
+          {result.rows.map((r, i) => (
+            <tr key={i}>
+              {axes.map((a) => (
+                <td key={a.path}>{formatNumber(a.toDisplay(r.values[a.path]!))}</td>
+              ))}
+              <td className="text">{r.governingCase ?? "—"}</td>
+              <td>{formatNumber(r.edgeDilution)}</td>
+              <td>{formatNumber(r.requiredDilution)}</td>
+              <td>{formatNumber(r.margin)}</td>
+              <td className={`text ${r.verdict === "meets" ? "pass" : r.verdict === "exceeds" ? "fail" : r.verdict === "outside-scope" ? "scope" : "refused"}`} title={r.error ?? undefined}>
+                {r.verdict}
+              </td>
+            </tr>
+          ))}
+        </tbody>
+      </table>
+    </div>
+  );
 }

@@ -15,9 +15,35 @@ import {
 } from "d3";
 import type { SweepRow } from "../../core/study/sweep";
 import { formatNumber } from "../../core/units";
+import { logTicks } from "../../core/report/figures";
+import { uncertaintyHistogramSvg } from "../../core/report/uncertainty";
+import type { MonteCarloStats } from "../../core/study/montecarlo";
 import { useSize } from "../ui/useSize";
 
-const M = { top: 20, right: 16, bottom: 38, left: 56 };
+const M = { top: 20, right: 16, bottom: 40, left: 60 };
+
+/**
+ * Ticks for a log axis whose labels never overprint: 1, 2, 5 × 10ⁿ when there is room, else powers of
+ * ten, else the two ends; kept at least `minGap` pixels apart.
+ */
+export function readableLogTicks(lo: number, hi: number, toPixel: (v: number) => number, minGap: number): number[] {
+  const thin = (list: number[]) => {
+    const out: number[] = [];
+    for (const t of list) if (out.length === 0 || Math.abs(toPixel(t) - toPixel(out[out.length - 1]!)) >= minGap) out.push(t);
+    return out;
+  };
+  const all = logTicks(lo, hi);
+  const decades = all.filter((t) => Math.abs(Math.log10(t) - Math.round(Math.log10(t))) < 1e-9);
+  const fine = thin(all);
+  if (fine.length === all.length) return fine;
+  const coarse = thin(decades);
+  return coarse.length >= 2 ? coarse : thin([lo, hi]);
+}
+
+/** Linear ticks spaced for labels about `labelWidth` pixels wide. */
+function linearTickCount(widthPx: number, labelWidth = 70): number {
+  return Math.max(2, Math.min(8, Math.floor(widthPx / labelWidth)));
+}
 
 export interface AxisDisplay {
   readonly label: string;
@@ -74,15 +100,16 @@ export function SweepLineChart({ rows, axis }: { rows: readonly SweepRow[]; axis
     .x((p) => x(p.x))
     .y((p) => y(Math.max(y.domain()[0]!, p.req)));
   return (
+    <div className="sweep-chart-block">
     <div className="chart study-chart" ref={ref} data-role="sweep-line-chart">
       <svg width={w} height={h} role="img" aria-label={`Edge dilution against ${axis.label}`}>
-        {x.ticks(6).map((t) => (
+        {x.ticks(linearTickCount(w - M.left - M.right)).map((t) => (
           <g key={`x${t}`} transform={`translate(${x(t)},0)`}>
             <line className="gridline" y1={M.top} y2={h - M.bottom} />
             <text className="tick" y={h - M.bottom + 14} textAnchor="middle">{formatNumber(t)}</text>
           </g>
         ))}
-        {y.ticks(4).map((t, i) => (
+        {readableLogTicks(y.domain()[0]!, y.domain()[1]!, (v) => y(v), 18).map((t, i) => (
           <g key={`y${i}`} transform={`translate(0,${y(t)})`}>
             <line className="gridline" x1={M.left} x2={w - M.right} />
             <text className="tick" x={M.left - 6} dy="0.32em" textAnchor="end">{formatNumber(t)}</text>
@@ -91,15 +118,28 @@ export function SweepLineChart({ rows, axis }: { rows: readonly SweepRow[]; axis
         <path d={req(pts) ?? ""} className="study-limit" />
         <path d={edge(pts) ?? ""} className="study-line" />
         {pts.map((p, i) => (
-          <circle key={i} cx={x(p.x)} cy={y(p.y)} r={3} className={p.verdict === "meets" ? "study-pass" : p.verdict === "outside-scope" ? "study-scope" : "study-fail"}>
-            <title>{p.verdict}</title>
-          </circle>
+          <VerdictMark key={i} x={x(p.x)} y={y(p.y)} verdict={p.verdict} />
         ))}
         <XLabel w={w} h={h} text={axis.label} />
-        <YLabel h={h} text="edge dilution, governing case (×) — dashed: required" />
+        <YLabel h={h} text="Dilution at the edge (×, log scale)" />
       </svg>
     </div>
+      <ul className="chart-legend" aria-label="Legend">
+        <li><svg width="26" height="10" aria-hidden="true"><line x1="0" y1="5" x2="26" y2="5" className="study-line" /></svg> dilution at the mixing-zone edge, governing case</li>
+        <li><svg width="26" height="10" aria-hidden="true"><line x1="0" y1="5" x2="26" y2="5" className="study-limit" /></svg> required dilution</li>
+        <li><svg width="10" height="10" aria-hidden="true"><VerdictMark x={5} y={5} verdict="meets" /></svg> meets</li>
+        <li><svg width="10" height="10" aria-hidden="true"><VerdictMark x={5} y={5} verdict="exceeds" /></svg> exceeds</li>
+        <li><svg width="10" height="10" aria-hidden="true"><VerdictMark x={5} y={5} verdict="outside-scope" /></svg> outside scope</li>
+      </ul>
+    </div>
   );
+}
+
+/** A point's verdict as a shape as well as a colour: disc meets, square exceeds, ring outside scope. */
+function VerdictMark({ x, y, verdict }: { x: number; y: number; verdict: string }) {
+  if (verdict === "meets") return <circle cx={x} cy={y} r={3.5} className="study-pass"><title>meets</title></circle>;
+  if (verdict === "outside-scope") return <circle cx={x} cy={y} r={3.5} className="study-scope"><title>outside-scope</title></circle>;
+  return <rect x={x - 3.5} y={y - 3.5} width={7} height={7} className="study-fail"><title>{verdict}</title></rect>;
 }
 
 export function SweepHeatmap({
@@ -125,7 +165,8 @@ export function SweepHeatmap({
     .filter((r) => r.index[0] === 0)
     .sort((p, q) => p.index[1]! - q.index[1]!)
     .map((r) => b.toDisplay(r.values[b.path]!));
-  const cw = (w - M.left - M.right) / nx;
+  const legendW = 116; // colour legend on the right
+  const cw = (w - M.left - M.right - legendW) / nx;
   const ch = (h - M.top - M.bottom) / ny;
   const finite = grid.filter((v) => Number.isFinite(v) && v > 0);
   const lo = Math.log10(Math.min(...finite, 0.5));
@@ -164,8 +205,16 @@ export function SweepHeatmap({
         <defs>
           <clipPath id={clipId}>
             {/* In the heat map's own (translated, y-up) coordinates. */}
-            <rect x={0} y={0} width={w - M.left - M.right} height={h - M.top - M.bottom} />
+            <rect x={0} y={0} width={w - M.left - M.right - legendW} height={h - M.top - M.bottom} />
           </clipPath>
+          <pattern id={`${clipId}-hatch`} width="6" height="6" patternUnits="userSpaceOnUse" patternTransform="rotate(45)">
+            <line x1="0" y1="0" x2="0" y2="6" stroke="#1d2833" strokeOpacity="0.35" strokeWidth="1.2" />
+          </pattern>
+          <linearGradient id={`${clipId}-legend`} x1="0" y1="1" x2="0" y2="0">
+            {[0, 0.25, 0.5, 0.75, 1].map((f) => (
+              <stop key={f} offset={f} stopColor={colour(-span + 2 * span * f)} />
+            ))}
+          </linearGradient>
         </defs>
         <g transform={`translate(${M.left},${h - M.bottom}) scale(1,-1)`} clipPath={`url(#${clipId})`}>
           {grid.map((v, k) => (
@@ -176,6 +225,7 @@ export function SweepHeatmap({
               width={cw + 0.5}
               height={ch + 0.5}
               fill={Number.isFinite(v) && v > 0 ? colour(Math.log10(v)) : "#ccc"}
+              data-margin={Number.isFinite(v) ? v : undefined}
             >
               <title>
                 {`${a.label} ${formatNumber(xv[k % nx] ?? Number.NaN)}, ` +
@@ -184,13 +234,26 @@ export function SweepHeatmap({
               </title>
             </rect>
           ))}
+          {grid.map((v, k) =>
+            !(Number.isFinite(v) && v >= 1) ? (
+              <rect
+                key={`h${k}`}
+                x={(k % nx) * cw}
+                y={Math.floor(k / nx) * ch}
+                width={cw + 0.5}
+                height={ch + 0.5}
+                fill={`url(#${clipId}-hatch)`}
+                pointerEvents="none"
+              />
+            ) : null,
+          )}
           {limit ? (
             <g transform={`scale(${cw},${ch}) translate(-1,-1)`}>
               <path d={project(limit) ?? ""} className="study-contour" vectorEffect="non-scaling-stroke" />
             </g>
           ) : null}
         </g>
-        {xv.map((t, i) => (i % Math.ceil(nx / 6) === 0 ? (
+        {xv.map((t, i) => (i % Math.ceil(nx / Math.max(2, Math.floor((nx * cw) / 64))) === 0 ? (
           <text
             key={`x${i}`}
             className="tick"
@@ -201,7 +264,7 @@ export function SweepHeatmap({
             {formatNumber(t)}
           </text>
         ) : null))}
-        {yv.map((t, j) => (j % Math.ceil(ny / 6) === 0 ? (
+        {yv.map((t, j) => (j % Math.ceil(ny / Math.max(2, Math.floor((ny * ch) / 20))) === 0 ? (
           <text
             key={`y${j}`}
             className="tick"
@@ -213,85 +276,61 @@ export function SweepHeatmap({
             {formatNumber(t)}
           </text>
         ) : null))}
-        <XLabel w={w} h={h} text={a.label} />
+        <XLabel w={w - legendW} h={h} text={a.label} />
         <YLabel h={h} text={b.label} />
-        <text className="annotation" x={w - M.right} y={M.top - 6} textAnchor="end">
-          colour: margin (log); black line: limit (margin = 1)
-        </text>
+        <HeatLegend
+          x={w - M.right - legendW + 12}
+          top={M.top}
+          height={h - M.top - M.bottom}
+          span={span}
+          gradient={`${clipId}-legend`}
+          hatch={`${clipId}-hatch`}
+        />
       </svg>
     </div>
   );
 }
 
+/**
+ * Histogram of the per-run worst-case edge dilution with the required dilution (its P5–P95 band when the
+ * drawn salinities move it), P5/P50/P95 and labelled axes: the same figure as the report's (core draws it).
+ */
 export function MonteCarloHistogram({
   bins,
-  p5,
-  p50,
-  p95,
-  required,
+  worst,
 }: {
   bins: readonly { x0: number; x1: number; count: number }[];
-  p5: number;
-  p50: number;
-  p95: number;
-  required: number | null;
+  worst: Pick<MonteCarloStats, "edgeDilution" | "requiredDilution">;
 }) {
   const [ref, size] = useSize<HTMLDivElement>();
-  const w = Math.max(260, size.width);
-  const h = Math.max(200, size.height);
   if (bins.length === 0) return <div className="placeholder">No runs.</div>;
-  const lo = Math.min(bins[0]!.x0, required ?? Infinity);
-  const hi = Math.max(bins[bins.length - 1]!.x1, required ?? -Infinity);
-  const x = scaleLinear().domain([lo, hi]).range([M.left, w - M.right]).nice();
-  const y = scaleLinear()
-    .domain([0, Math.max(...bins.map((b) => b.count))])
-    .range([h - M.bottom, M.top])
-    .nice();
-  const marks = [
-    { v: p5, label: "P5" },
-    { v: p50, label: "P50" },
-    { v: p95, label: "P95" },
-  ];
+  const svg = uncertaintyHistogramSvg(bins, worst, Math.max(420, Math.min(900, size.width || 680)));
+  return <div className="study-histogram" ref={ref} data-role="monte-carlo-histogram" dangerouslySetInnerHTML={{ __html: svg }} />;
+}
+
+/** The heat map's colour legend: margin on a log scale, margin = 1 marked as the black limit line, hatching for not meeting. */
+function HeatLegend({ x, top, height, span, gradient, hatch }: { x: number; top: number; height: number; span: number; gradient: string; hatch: string }) {
+  const barH = Math.max(60, height - 54);
+  const sy = (logMargin: number) => top + 14 + barH * (1 - (logMargin + span) / (2 * span));
+  const lo = Math.pow(10, -span);
+  const hi = Math.pow(10, span);
+  const ticks = readableLogTicks(lo, hi, (v) => sy(Math.log10(v)), 16);
+  if (!ticks.some((t) => Math.abs(t - 1) < 1e-9)) ticks.push(1);
   return (
-    <div className="chart study-chart" ref={ref} data-role="monte-carlo-histogram">
-      <svg width={w} height={h} role="img" aria-label="Histogram of the worst-case edge dilution">
-        {x.ticks(6).map((t) => (
-          <text key={`x${t}`} className="tick" x={x(t)} y={h - M.bottom + 14} textAnchor="middle">
-            {formatNumber(t)}
-          </text>
-        ))}
-        {y.ticks(4).map((t) => (
-          <g key={`y${t}`} transform={`translate(0,${y(t)})`}>
-            <line className="gridline" x1={M.left} x2={w - M.right} />
-            <text className="tick" x={M.left - 6} dy="0.32em" textAnchor="end">{t}</text>
-          </g>
-        ))}
-        {bins.map((b, i) => (
-          <rect
-            key={i}
-            className={required !== null && b.x1 <= required ? "study-bar fail" : "study-bar"}
-            x={x(b.x0)}
-            y={y(b.count)}
-            width={Math.max(0.5, x(b.x1) - x(b.x0) - 1)}
-            height={y(0) - y(b.count)}
-          />
-        ))}
-        {marks.map((m) => (
-          <g key={m.label} transform={`translate(${x(m.v)},0)`}>
-            <line className="study-percentile" y1={M.top} y2={h - M.bottom} />
-            <text className="annotation" y={M.top - 4} textAnchor="middle">{m.label}</text>
-          </g>
-        ))}
-        {required !== null ? (
-          <g transform={`translate(${x(required)},0)`}>
-            <line className="study-limit" y1={M.top} y2={h - M.bottom} />
-            <text className="annotation" y={h - M.bottom - 4} x={4}>required</text>
-          </g>
-        ) : null}
-        <text className="axis-label" x={(M.left + w - M.right) / 2} y={h - 6} textAnchor="middle">
-          edge dilution, worst case per run (×)
-        </text>
-      </svg>
-    </div>
+    <g data-role="heatmap-legend" fontSize={10.5}>
+      <text x={x - 4} y={top + 4} className="axis-label">margin</text>
+      <rect x={x} y={top + 14} width={14} height={barH} fill={`url(#${gradient})`} stroke="#94a3b8" />
+      <rect x={x} y={sy(0)} width={14} height={top + 14 + barH - sy(0)} fill={`url(#${hatch})`} />
+      {ticks.map((t) => (
+        <g key={t}>
+          <line x1={x + 14} x2={x + 18} y1={sy(Math.log10(t))} y2={sy(Math.log10(t))} stroke="#334155" />
+          <text x={x + 21} y={sy(Math.log10(t))} dy="0.32em" className="tick" textAnchor="start">{formatNumber(t, 2)}</text>
+        </g>
+      ))}
+      <line x1={x - 4} x2={x + 18} y1={sy(0)} y2={sy(0)} className="study-contour" />
+      <text x={x - 4} y={top + 14 + barH + 14} className="tick">black line:</text>
+      <text x={x - 4} y={top + 14 + barH + 26} className="tick">margin = 1 (limit)</text>
+      <text x={x - 4} y={top + 14 + barH + 38} className="tick">hatched: not met</text>
+    </g>
   );
 }

@@ -17,11 +17,18 @@ export function patchAt<T>(list: readonly T[], i: number, patch: Partial<T>): T[
 /** Paths a sweep may vary. */
 export const PATHS = Object.keys(OVERRIDE_PATHS);
 
+/** The words for a path that can be varied, capitalised: "Current speed" for ambient.currentSpeed. */
+export function pathTitle(path: string): string {
+  const words = OVERRIDE_PATHS[path]?.label ?? path;
+  return words.charAt(0).toUpperCase() + words.slice(1);
+}
+
+/** Axis title in words with the display unit ("Current speed (m/s)") and the SI → display conversion. */
 export function axisDisplay(path: string, unitSystem: UnitSystem): AxisDisplay {
   const info = OVERRIDE_PATHS[path]!;
   const unit = siToDisplay(1, info.kind, unitSystem).unit;
   return {
-    label: unit ? `${path} (${unit})` : path,
+    label: unit ? `${pathTitle(path)} (${unit})` : pathTitle(path),
     toDisplay: (v) => siToDisplay(v, info.kind, unitSystem).value,
   };
 }

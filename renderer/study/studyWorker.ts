@@ -61,7 +61,7 @@ function handle(req: StudyRequest): void {
     case "monte-carlo": {
       const { scenario, plan, start, end } = req;
       const chunk = runMonteCarloChunk(scenario, plan, start, end, evaluateScenario, progress);
-      const arrays = [...chunk.edgeDilution, ...chunk.margin, ...chunk.pass];
+      const arrays = [...chunk.edgeDilution, ...chunk.margin, ...(chunk.requiredDilution ?? []), ...chunk.pass];
       post({ id: req.id, kind: "monte-carlo", chunk }, arrays.map((a) => a.buffer));
       return;
     }

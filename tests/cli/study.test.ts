@@ -12,6 +12,7 @@ import { command as compare } from "../../core/cli/commands/compare";
 import { command as sweep } from "../../core/cli/commands/sweep";
 import { command as design } from "../../core/cli/commands/design";
 import { command as uncertainty } from "../../core/cli/commands/uncertainty";
+import { OUTSIDE_SCOPE_MEANING, PERCENTILE_MEANING, REFUSED_MEANING, WORST_CASE_MEANING } from "../../core/study/uncertainty-words";
 import { parseScenario } from "../../core/scenario/parse";
 import { runScenario } from "../../core/pipeline";
 import { expandCases } from "../../core/study/cases";
@@ -90,6 +91,24 @@ describe("brinefield uncertainty", () => {
     expect(one.usedDefaultSpreads, "no uncertainty block → default spreads").toBe(true);
     expect(one.notes.join(" "), "the output says default spreads were used").toMatch(/default spreads/);
     expect(typeof one.elapsedSeconds, "timing key ends in Seconds").toBe("number");
+  });
+
+  it("explains the numbers in words and shows chances as percentages in text (JSON keeps fractions)", WORKERS, async () => {
+    const f = fakeIO();
+    expect(await uncertainty.run(["site.json", "--runs", "24", "--seed", "5", "--workers", "1"], f.io), f.err()).toBe(0);
+    const text = f.out();
+    expect(text, "what the percentiles mean").toContain(PERCENTILE_MEANING);
+    expect(text, "the per-run worst case").toContain(WORST_CASE_MEANING);
+    expect(text, "outside scope").toContain(OUTSIDE_SCOPE_MEANING);
+    expect(text, "refused").toContain(REFUSED_MEANING);
+    expect(text, "a percentage column").toMatch(/chance not meeting limit/);
+    expect(text, "the overall row as a percentage").toMatch(/overall \(per-run worst case\)[^\n]*\d+(\.\d+)? %/);
+    expect(text, "spreads with units").toMatch(/ambient salinity \(ambient\.salinity\): normal, mean [\d.]+ g\/kg, standard deviation 0\.5 g\/kg/);
+    const j = fakeIO();
+    await uncertainty.run(["site.json", "--runs", "24", "--seed", "5", "--workers", "1", "--json"], j.io);
+    const json = JSON.parse(j.out());
+    expect(json.worstCase.probabilityOfExceedance, "a fraction from 0 to 1 in JSON").toBeLessThanOrEqual(1);
+    expect(typeof json.clampedByInput, "clamped draws per input").toBe("object");
   });
 
   it("rejects a bad seed or run count, naming the option", WORKERS, async () => {

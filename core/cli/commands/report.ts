@@ -21,7 +21,8 @@ import { checkClaimOnScenario } from "../../compliance/claim-run";
 import type { ClaimCheck } from "../../compliance/claim";
 import { workIssue } from "../../study/budget";
 import { expandCases } from "../../study/cases";
-import { parseStudy, withRawOverride, planMonteCarlo, runMonteCarloChunk, summariseMonteCarlo, evaluateScenario } from "../../study";
+import { parseStudy, withRawOverride, planMonteCarlo, runMonteCarloChunk, summariseMonteCarlo, evaluateScenario, mergeMonteCarloChunks, histogram } from "../../study";
+import type { ReportUncertainty } from "../../report/uncertainty";
 
 const HELP = `Usage: brinefield report <scenario-or-study.json> [--out report.html] [--pdf report.pdf]
                          [--csv results.csv] [--series-csv series.csv] [--json result.json]
@@ -44,7 +45,9 @@ Options:
                         {variant, result}).
   --no-3d               Leave out the rendered 3D view (it needs the renderer built and Chromium).
   --uncertainty <runs>  Run a Monte Carlo of that many runs on the scenario's uncertain inputs (or
-                        default spreads) and add the percentiles to the report (scenarios only).
+                        default spreads) and add the uncertainty section to the report: percentiles
+                        in words, a histogram with the required dilution, chances as percentages
+                        (scenarios only).
   --seed <n>            Seed of the Monte Carlo (default 1), for repeatable numbers.
   --claimed-dilution <N>  Check a claimed dilution and add a claim section (verdict supported,
                         plausible or not-supported, each method chain's value, a range bar), as
@@ -90,7 +93,9 @@ function monteCarlo(scenario: Scenario, runs: number, seed: number, io: CliIO): 
   if (!planned.ok) throw new CliError(`brinefield report: the uncertainty run cannot start:\n${planned.issues.map((i) => `  - ${i.path}: ${i.message}`).join("\n")}`);
   io.stderr(`brinefield report: running ${runs} Monte Carlo runs (seed ${seed})…\n`);
   const chunk = runMonteCarloChunk(scenario, planned.plan, 0, runs, evaluateScenario);
-  return summariseMonteCarlo(planned.plan, [chunk]);
+  const merged = mergeMonteCarloChunks(planned.plan, [chunk]);
+  const uncertainty: ReportUncertainty = { summary: summariseMonteCarlo(planned.plan, [chunk]), histogram: histogram(merged.worstEdgeDilution, 30) };
+  return uncertainty;
 }
 
 export const command: CliCommand = {

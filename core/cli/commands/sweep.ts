@@ -17,6 +17,7 @@ import {
   parseSweepAxis,
   sweepGrid,
   sweepRows,
+  sweepRecords,
   type SweepAxis,
 } from "../../study/sweep";
 import { textTable } from "../../study/table";
@@ -129,24 +130,9 @@ async function run(argv: readonly string[], io: CliIO): Promise<number> {
   const casesNote = describeCases(expandCases(scenario), scenario);
   const keptNotes = keptValueNotes(scenario, axes.map((a) => a.path));
   const tally = `Points: ${rows.length} — meets ${counts.meets}, exceeds ${counts.exceeds}, outside-scope ${counts["outside-scope"]}, refused ${counts.refused}.`;
-  const flat = rows.map((r) => ({
-    ...r.values,
-    governingCase: r.governingCase,
-    edgeDilution: r.edgeDilution,
-    requiredDilution: r.requiredDilution,
-    margin: r.margin,
-    verdict: r.verdict,
-    pass: r.pass,
-    scopeReasons: r.scopeReasons.join(" "),
-    equationOfState: r.equationOfState,
-    ...(r.error ? { error: r.error } : {}),
-  }));
+  const { columns: cols, records: flat } = sweepRecords(axes, rows);
   if (values.csv) {
-    const cols = [
-      ...axes.map((a) => a.path),
-      ...["governingCase", "edgeDilution", "requiredDilution", "margin", "verdict", "pass", "scopeReasons", "equationOfState", "error"],
-    ];
-    await io.writeFile(values.csv, csvWithCaution(csvFormatSafe(flat as Record<string, unknown>[], cols)));
+    await io.writeFile(values.csv, csvWithCaution(csvFormatSafe(flat, cols)));
   }
   const crossingText = crossings.map((c) => {
     const [a, b] = c.between;

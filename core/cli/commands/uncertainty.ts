@@ -11,6 +11,13 @@ import { seedFromText } from "../../study/random";
 import { textTable } from "../../study/table";
 import { formatNumber } from "../../units";
 import {
+  UNCERTAINTY_EXPLANATIONS,
+  clampedSentences,
+  headlineSentence,
+  percentText,
+  verdictCountsSentence,
+} from "../../study/uncertainty-words";
+import {
   EXIT_CANCELLED,
   monteCarloOnWorkers,
   workersOption,
@@ -46,7 +53,9 @@ Options:
                  results whatever the number of workers: run i always draws from stream i of the seed.
   --workers K    Worker threads (default: all cores).
   --json         Print the results as JSON (keys p5, p50, p95, probabilityOfExceedance;
-                 timings end in Seconds).
+                 timings end in Seconds). Probabilities in JSON are fractions from 0 to 1
+                 (0.05 = 5 %); the text output shows them as percentages.
+                 clampedByInput counts the clamped draws per input path.
   -h, --help     Show this help.
 
 A progress bar is drawn on stderr when it is a terminal. Ctrl-C cancels cleanly (exit code 130).`;
@@ -56,6 +65,7 @@ function statsJson(s: MonteCarloStats) {
     name: s.name,
     edgeDilution: s.edgeDilution,
     margin: s.margin,
+    requiredDilution: s.requiredDilution,
     probabilityOfExceedance: s.probabilityOfExceedance,
     verdicts: s.verdicts,
     meetingRuns: s.meetingRuns,
@@ -123,6 +133,7 @@ async function run(argv: readonly string[], io: CliIO): Promise<number> {
           worstCase: statsJson(summary.worstCase),
           noRunMeets: summary.worstCase.meetingRuns === 0,
           clampedSamples: summary.clampedSamples,
+          clampedByInput: summary.clampedByInput,
           firstError: summary.firstError,
           workers,
           elapsedSeconds,
@@ -135,38 +146,40 @@ async function run(argv: readonly string[], io: CliIO): Promise<number> {
   }
   const out: string[] = [];
   const w = summary.worstCase;
-  const counts =
-    `${w.verdicts.meets} of ${summary.runs} runs meet every limit, ${w.verdicts.exceeds} exceed a limit, ` +
-    `${w.verdicts["outside-scope"]} are outside the screening methods' scope, ${w.verdicts.refused} were refused (the draw broke a scenario rule)`;
-  if (w.meetingRuns === 0) out.push(`NO RUN MEETS EVERY LIMIT: ${counts}.`);
+  const counts = verdictCountsSentence(w, summary.runs);
+  if (w.meetingRuns === 0) out.push(`NO RUN MEETS EVERY LIMIT: ${counts}`);
   out.push(`Monte Carlo: ${scenario.name}`);
-  if (w.meetingRuns > 0) out.push(`${counts[0]!.toUpperCase()}${counts.slice(1)}.`);
+  out.push(headlineSentence(w, w.requiredDilution.p50));
+  if (w.meetingRuns > 0) out.push(counts);
   const plural = workers === 1 ? "" : "s";
   const took = formatNumber(elapsedSeconds);
   out.push(`${summary.runs} runs, seed ${summary.seed}, ${workers} worker${plural}, ${took} s`);
   if (summary.usedDefaultSpreads) {
     out.push("NOTE: the scenario states no uncertain inputs; default spreads were used (see below).");
   }
-  out.push("Inputs:");
+  out.push("Inputs (spreads in SI units):");
   for (const n of summary.notes) out.push(`  ${n}`);
   out.push(casesNote, "");
   const rows = [...summary.cases, summary.worstCase].map((s) => [
-    s.name,
+    s.name === "overall" ? "overall (per-run worst case)" : s.name,
     s.edgeDilution.p5,
     s.edgeDilution.p50,
     s.edgeDilution.p95,
     s.margin.p5,
-    s.probabilityOfExceedance,
+    percentText(s.probabilityOfExceedance),
     s.verdicts.meets,
     s.verdicts.exceeds,
     s.verdicts["outside-scope"],
     s.verdicts.refused,
   ]);
-  out.push("Dilution at the mixing-zone edge:");
-  out.push(textTable(["case", "P5", "P50", "P95", "margin P5", "P(not meeting limit)", "meets", "exceeds", "outside-scope", "refused"], rows));
-  out.push("P(not meeting limit) is over the computed runs (exceeds and outside-scope count as not meeting); refused runs broke a scenario rule and are counted apart.");
-  if (summary.clampedSamples > 0) {
-    out.push(`${summary.clampedSamples} samples fell outside their physical bounds and were clamped.`);
+  out.push("Dilution at the mixing-zone edge (× — parts of mixed water per part of brine):");
+  out.push(textTable(["case", "P5", "P50", "P95", "margin P5", "chance not meeting limit", "meets", "exceeds", "outside-scope", "refused"], rows));
+  out.push("", "What these mean:");
+  for (const e of UNCERTAINTY_EXPLANATIONS) out.push(`  ${e}`);
+  const clamped = clampedSentences(summary);
+  if (clamped.length > 0) {
+    out.push("", "Clamped inputs (a drawn value outside the field's physical bounds is set to the nearest bound):");
+    for (const c of clamped) out.push(`  ${c}`);
   }
   if (summary.firstError) out.push(`Some draws were refused (they break a scenario rule); first: ${summary.firstError}`);
   io.stdout(withCaution(out.join("\n") + "\n"));

@@ -29,7 +29,7 @@ export function runWorkerThread(): boolean {
         };
         const { scenario, plan, start, end } = task;
         const chunk = runMonteCarloChunk(scenario, plan, start, end, evaluateScenario, progress);
-        const arrays = [...chunk.edgeDilution, ...chunk.margin, ...chunk.pass];
+        const arrays = [...chunk.edgeDilution, ...chunk.margin, ...(chunk.requiredDilution ?? []), ...chunk.pass];
         const buffers = arrays.map((a) => a.buffer as ArrayBuffer);
         post({ kind: "monte-carlo-done", id: task.id, chunk }, buffers);
       } else {

@@ -214,7 +214,7 @@ describe("reportHtml() options", () => {
     const summary = summariseMonteCarlo(planned.plan, [runMonteCarloChunk(parsed.scenario, planned.plan, 0, 12, evaluateScenario)]);
     const html = reportHtml(runScenario(parsed.scenario), { scenarioFile: raw }, { uncertainty: summary, generatedAt: GENERATED_AT });
     const section = /<section id="uncertainty">[\s\S]*?<\/section>/.exec(html)![0];
-    expect(section, "worst-case row").toContain("worst case · edge dilution");
+    expect(section, "the per-run worst-case row").toContain("overall (per-run worst case)");
     for (const k of ["p5", "p50", "p95"] as const) {
       expect(section, `worst-case ${k}`).toContain(`<td class="num">${reportNumber(summary.worstCase.edgeDilution[k])}</td>`);
     }

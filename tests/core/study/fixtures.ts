@@ -54,6 +54,7 @@ export function identityEvaluator(required: number, read: (s: Scenario) => numbe
       reachesSurface: false,
       surfaceClearance: null,
       methods: [],
+      chain: "test",
     };
   };
 }
