@@ -85,8 +85,11 @@ export function App() {
     else void host.autosaveClear().catch(() => {});
     setDocumentKey((n) => n + 1);
   }, []);
+  /** The field changed last: a cross-field problem is shown there (see issuesByPath). */
+  const [lastEdited, setLastEdited] = useState<string | null>(null);
   const perform = useCallback(<I,>(action: Action<I>, input: I) => {
     const path = typeof input === "object" && input !== null && "path" in input ? String((input as { path: unknown }).path) : "";
+    setLastEdited(path || null);
     setHistory((h) => historyPush(h, action.perform(h.present, input), `${action.name}:${path}`, Date.now()));
   }, []);
   const step = useCallback((direction: "undo" | "redo") => {
@@ -98,7 +101,7 @@ export function App() {
       return moved === h ? h : historyReplace(moved, { ...moved.present, dirty: moved.present.file !== savedFile.current });
     });
   }, []);
-  const issues = useMemo(() => issuesByPath(engine.issues), [engine.issues]);
+  const issues = useMemo(() => issuesByPath(engine.issues, lastEdited), [engine.issues, lastEdited]);
   const normalised = engine.error === null ? engine.scenario : null;
   const editor: Editor = useMemo(
     () => ({ file: doc.file, unitSystem, issues, perform, normalised }),
