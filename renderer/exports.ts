@@ -1,8 +1,8 @@
 /** Export commands: the HTML report (core/report/html.ts) and the distance series as CSV. */
 import { CAUTION, type BrinefieldResult } from "../core/result/contract";
-import { formatNumber, siToDisplay, type UnitSystem } from "../core/units";
+import { siToDisplay, type UnitSystem } from "../core/units";
 import { exportFile } from "./platform/host";
-import { csvFormatRowsSafe, csvWithCaution } from "../core/report/csv";
+import { aboutResult, csvTable, csvWithCaution } from "../core/report/csv";
 
 export { csvWithCaution };
 import { serialiseScenario, suggestedFileName, type ScenarioFile } from "./state/scenarioState";
@@ -31,22 +31,33 @@ export async function exportReport(result: BrinefieldResult, file: ScenarioFile)
   return done ? `Report exported: ${name}` : "Export cancelled.";
 }
 
-/** The mixing-zone series as CSV, in the chosen units, with a header naming every unit. */
+/**
+ * The mixing-zone series as CSV in the chosen units, in the one CSV convention (core/report/csv.ts): the
+ * same column keys as `brinefield report --series-csv`, with the unit written in each header.
+ */
 export function seriesCsv(result: BrinefieldResult, unitSystem: UnitSystem): string {
   const s = result.mixingZone.series;
-  const lengthUnit = siToDisplay(1, "length", unitSystem).unit;
-  const rows: string[][] = [[`distance (${lengthUnit})`, "dilution", "salinity increase (g/kg)", `layer thickness (${lengthUnit})`, "stage"]];
-  for (let i = 0; i < s.distance.length; i++) {
+  const lengthUnit = unitSystem === "us" ? "ft" : "m";
+  const length = (v: number) => siToDisplay(v, "length", unitSystem).value;
+  const rows = s.distance.map((d, i) => {
     const thickness = s.layerThickness[i];
-    rows.push([
-      formatNumber(siToDisplay(s.distance[i], "length", unitSystem).value, 6),
-      formatNumber(s.dilution[i], 6),
-      formatNumber(s.salinityIncrease[i], 6),
-      thickness === null ? "" : formatNumber(siToDisplay(thickness, "length", unitSystem).value, 6),
-      s.stage[i] ?? "",
-    ]);
-  }
-  return csvFormatRowsSafe(rows) + "\n";
+    return {
+      distance: length(d),
+      dilution: s.dilution[i],
+      salinityIncrease: s.salinityIncrease[i],
+      layerThickness: thickness === null || thickness === undefined ? null : length(thickness),
+      stage: s.stage[i] ?? "",
+    };
+  });
+  return (
+    csvTable(rows, [
+      { key: "distance", unit: lengthUnit },
+      { key: "dilution", unit: "-" },
+      { key: "salinityIncrease", unit: "g/kg" },
+      { key: "layerThickness", unit: lengthUnit },
+      { key: "stage" },
+    ]) + "\n"
+  );
 }
 
 /**
@@ -56,6 +67,6 @@ export function seriesCsv(result: BrinefieldResult, unitSystem: UnitSystem): str
 
 export async function exportSeriesCsv(result: BrinefieldResult, file: ScenarioFile, unitSystem: UnitSystem): Promise<string> {
   const name = suggestedFileName(file, "series.csv");
-  const done = await exportFile(name, csvWithCaution(seriesCsv(result, unitSystem), result.caution), [{ name: "CSV", extensions: ["csv"] }]);
+  const done = await exportFile(name, csvWithCaution(seriesCsv(result, unitSystem), result.caution, aboutResult(result)), [{ name: "CSV", extensions: ["csv"] }]);
   return done ? `Series exported: ${name}` : "Export cancelled.";
 }

@@ -1,7 +1,8 @@
 /** `brinefield sweep`: vary one or two inputs over a range and tabulate the verdict at each point. */
 import { dirname, isAbsolute, join } from "node:path";
 import { sweepPointsIssue, workIssue } from "../../study/budget";
-import { csvFormatSafe, csvWithCaution } from "../../report/csv";
+import { csvWithCaution, flatRowsCsv } from "../../report/csv";
+import { inputsHash } from "../../scenario/hash";
 import { CliError, type CliCommand, type CliIO } from "../command";
 import { readArgs } from "../args";
 import { formatIssues, loadJsonFile } from "../load";
@@ -146,7 +147,7 @@ async function run(argv: readonly string[], io: CliIO): Promise<number> {
       ...axes.map((a) => a.path),
       ...["governingCase", "edgeDilution", "requiredDilution", "margin", "verdict", "pass", "scopeReasons", "equationOfState", "error"],
     ];
-    await io.writeFile(values.csv, csvWithCaution(csvFormatSafe(flat as Record<string, unknown>[], cols)));
+    await io.writeFile(values.csv, csvWithCaution(flatRowsCsv(flat as Record<string, unknown>[], cols), undefined, { scenario: scenario.name, inputsHash: inputsHash(scenario) }));
   }
   const crossingText = crossings.map((c) => {
     const [a, b] = c.between;

@@ -13,7 +13,7 @@ import { checkClaimOnScenario } from "../../../core/compliance/claim-run";
 import { command } from "../../../core/cli/commands/report";
 import { CliError } from "../../../core/cli/command";
 import { resultCsv, seriesCsv, reportNumber } from "../../../core/report";
-import { csvWithCaution } from "../../../core/report/csv";
+import { aboutResult, csvWithCaution } from "../../../core/report/csv";
 import type { BrinefieldResult } from "../../../core/result/contract";
 import { at, DEMO_DIR, memoryIO, ROOT, runJson, tableById, tracedNumbers } from "./helpers";
 
@@ -28,8 +28,9 @@ describe("brinefield report <scenario>", () => {
     const json = JSON.parse(io.files.get(join(ROOT, "r.json")) as string) as BrinefieldResult;
     expect(json, "--json file is run --json's result").toEqual(expected);
     // Written CSV files open with the caution on their first row, then the table.
-    expect(io.files.get(join(ROOT, "r.csv")), "results CSV").toBe(csvWithCaution(resultCsv(expected)));
-    expect(io.files.get(join(ROOT, "s.csv")), "series CSV").toBe(csvWithCaution(seriesCsv(expected)));
+    // The first row also says what the numbers were computed from: scenario name and inputs hash.
+    expect(io.files.get(join(ROOT, "r.csv")), "results CSV").toBe(csvWithCaution(resultCsv(expected), undefined, aboutResult(expected)));
+    expect(io.files.get(join(ROOT, "s.csv")), "series CSV").toBe(csvWithCaution(seriesCsv(expected), undefined, aboutResult(expected)));
     expect((io.files.get(join(ROOT, "r.csv")) as string).startsWith('"Caution:'), "caution first").toBe(true);
     const html = io.files.get(join(ROOT, "r.html")) as string;
     const cells = tracedNumbers(html);
