@@ -34,9 +34,13 @@ import { useFileDrop } from "./ui/useFileDrop";
 import { PlumeView } from "./view3d/PlumeView";
 import { TrajectoryChart } from "./charts/TrajectoryChart";
 import { DistanceChart } from "./charts/DistanceCharts";
+import { DistanceTable, TrajectoryTable } from "./charts/ChartTables";
+import { useTabs } from "./ui/Tabs";
 import { exportSeriesCsv, exportReport } from "./exports";
 
 export const AUTOSAVE_INTERVAL_MS = 5000;
+const VIEW_TABS = ["design", "study"] as const;
+const CHART_TABS = ["trajectory", "dilution", "increase"] as const;
 const UNITS_KEY = "brinefield.units";
 
 // The Study tab loads on first use (its own workers and charts stay out of the first screen).
@@ -71,6 +75,9 @@ export function App() {
   const [resetSignal, setResetSignal] = useState(0);
   const [documentKey, setDocumentKey] = useState(0);
   const [chart, setChart] = useState<"trajectory" | "dilution" | "increase">("trajectory");
+  const [chartAsTable, setChartAsTable] = useState(false);
+  const mainTabs = useTabs("view", VIEW_TABS, tab, setTab);
+  const chartTabs = useTabs("chart", CHART_TABS, chart, setChart);
   const engine = useEngine(doc.file);
   const docRef = useRef(doc);
   docRef.current = doc;
@@ -344,9 +351,9 @@ export function App() {
             {title}
             {doc.path ? <span className="doc-path">{doc.path.replace(/^.*[\\/]/, "")}</span> : null}
           </div>
-          <div className="tabs" role="tablist" aria-label="View">
-            <button type="button" role="tab" aria-selected={tab === "design"} onClick={() => setTab("design")} data-command="design">Design</button>
-            <button type="button" role="tab" aria-selected={tab === "study"} onClick={() => setTab("study")} data-command="study">Study</button>
+          <div className="tabs" {...mainTabs.list} aria-label="View">
+            <button {...mainTabs.tab("design")} data-command="design">Design</button>
+            <button {...mainTabs.tab("study")} data-command="study">Study</button>
           </div>
           <div className="segmented units" role="radiogroup" aria-label="Units">
             <button type="button" role="radio" aria-checked={unitSystem === "si"} onClick={() => setUnitSystem("si")} data-units="si">SI</button>
@@ -364,7 +371,7 @@ export function App() {
         {notice ? <div className="banner notice" role="status" data-role="notice">{notice}</div> : null}
 
         {tab === "design" ? (
-          <main className="workspace">
+          <main className="workspace" {...mainTabs.panel}>
             <aside className="inputs" aria-label="Scenario inputs">
               <section className="input-section">
                 <div className="field-grid">
@@ -387,18 +394,27 @@ export function App() {
                 )}
               </div>
               <div className="chart-panel">
-                <div className="tabs small" role="tablist" aria-label="Chart">
-                  <button type="button" role="tab" aria-selected={chart === "trajectory"} onClick={() => setChart("trajectory")}>Side view</button>
-                  <button type="button" role="tab" aria-selected={chart === "dilution"} onClick={() => setChart("dilution")}>Dilution vs distance</button>
-                  <button type="button" role="tab" aria-selected={chart === "increase"} onClick={() => setChart("increase")}>Salinity increase vs distance</button>
+                <div className="chart-tabs">
+                  <div className="tabs small" {...chartTabs.list} aria-label="Chart">
+                    <button {...chartTabs.tab("trajectory")}>Side view</button>
+                    <button {...chartTabs.tab("dilution")}>Dilution vs distance</button>
+                    <button {...chartTabs.tab("increase")}>Salinity increase vs distance</button>
+                  </div>
+                  <button type="button" className="view-as" aria-pressed={chartAsTable} onClick={() => setChartAsTable((t) => !t)} data-command="chart-as-table" title="Show the numbers of the chart as a table">
+                    Table
+                  </button>
                 </div>
-                {result && scenario ? (
-                  chart === "trajectory" ? (
-                    <TrajectoryChart result={result} scenario={scenario} unitSystem={unitSystem} />
-                  ) : (
-                    <DistanceChart result={result} unitSystem={unitSystem} quantity={chart} />
-                  )
-                ) : null}
+                <div className="chart-body" {...chartTabs.panel}>
+                  {result && scenario ? (
+                    chart === "trajectory" ? (
+                      chartAsTable ? <TrajectoryTable result={result} scenario={scenario} unitSystem={unitSystem} /> : <TrajectoryChart result={result} scenario={scenario} unitSystem={unitSystem} />
+                    ) : chartAsTable ? (
+                      <DistanceTable result={result} unitSystem={unitSystem} quantity={chart} />
+                    ) : (
+                      <DistanceChart result={result} unitSystem={unitSystem} quantity={chart} />
+                    )
+                  ) : null}
+                </div>
               </div>
             </section>
 
@@ -422,7 +438,7 @@ export function App() {
             </aside>
           </main>
         ) : (
-          <main className="study-workspace">
+          <main className="study-workspace" {...mainTabs.panel}>
             <p className="caution" data-role="caution">{CAUTION}</p>
             <Suspense fallback={<div className="placeholder">Loading study tools…</div>}>
               <StudyPanel scenarioFile={doc.file} unitSystem={unitSystem} onApplyDesign={(diffuser) => perform(applyDesign, { diffuser })} />

@@ -7,12 +7,48 @@ import { aboutResult, csvTable, csvWithCaution } from "../core/report/csv";
 export { csvWithCaution };
 import { serialiseScenario, suggestedFileName, type ScenarioFile } from "./state/scenarioState";
 
+/**
+ * The view's compass lives over the canvas, not in it: the exported picture gets a north arrow drawn in
+ * its lower-left corner, turned as the compass was (the view writes the bearing on the canvas).
+ */
+function withNorthArrow(source: HTMLCanvasElement): HTMLCanvasElement {
+  const bearing = Number(source.dataset.northBearing);
+  if (!Number.isFinite(bearing)) return source;
+  const copy = document.createElement("canvas");
+  copy.width = source.width;
+  copy.height = source.height;
+  const ctx = copy.getContext("2d");
+  if (!ctx) return source;
+  ctx.drawImage(source, 0, 0);
+  const size = Math.max(24, Math.round(Math.min(copy.width, copy.height) * 0.06));
+  ctx.save();
+  ctx.translate(size * 1.4, copy.height - size * 1.4);
+  ctx.fillStyle = "rgba(255,255,255,0.9)";
+  ctx.beginPath();
+  ctx.arc(0, 0, size * 1.15, 0, 2 * Math.PI);
+  ctx.fill();
+  ctx.rotate((bearing * Math.PI) / 180);
+  ctx.fillStyle = "#1d2833";
+  ctx.beginPath();
+  ctx.moveTo(0, -size * 0.8);
+  ctx.lineTo(size * 0.25, size * 0.1);
+  ctx.lineTo(0, -size * 0.1);
+  ctx.lineTo(-size * 0.25, size * 0.1);
+  ctx.closePath();
+  ctx.fill();
+  ctx.font = `700 ${Math.round(size * 0.45)}px sans-serif`;
+  ctx.textAlign = "center";
+  ctx.fillText("N", 0, size * 0.6);
+  ctx.restore();
+  return copy;
+}
+
 /** The 3D view as drawn now (the canvas keeps its drawing buffer), as a PNG data URI. */
 function currentViewPng(): string | undefined {
   const canvas = document.querySelector<HTMLCanvasElement>("canvas[data-role=plume-canvas]");
   if (!canvas || canvas.width === 0) return undefined;
   try {
-    return canvas.toDataURL("image/png");
+    return withNorthArrow(canvas).toDataURL("image/png");
   } catch {
     return undefined; // a lost WebGL context cannot be read; the report says so instead
   }
