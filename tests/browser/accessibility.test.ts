@@ -172,10 +172,13 @@ async function overlaps(page: Page, scope: string): Promise<string[]> {
         const a = items[i]!;
         const b = items[j]!;
         if (a.el.contains(b.el) || b.el.contains(a.el)) continue;
-        // A label and its own control may touch; a 1 px tolerance for borders that meet.
+        // A label and its own control may touch (1.5 px for borders that meet); two bare numbers or words
+        // side by side on one line (axis ticks, scale labels) need a gap of 2 px or they read as one.
         const w = Math.min(a.r.right, b.r.right) - Math.max(a.r.left, b.r.left);
         const h = Math.min(a.r.bottom, b.r.bottom) - Math.max(a.r.top, b.r.top);
-        if (w > 1.5 && h > 1.5) out.push(`${a.name} × ${b.name}`);
+        const bare = (e: Element) => e.tagName.toLowerCase() === "text" || e.matches(".legend-ticks span");
+        const minGap = bare(a.el) && bare(b.el) ? -2 : 1.5;
+        if (w > minGap && h > 1.5) out.push(`${a.name} × ${b.name}`);
       }
     }
     return out;
