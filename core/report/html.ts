@@ -9,7 +9,7 @@ import { CAUTION } from "../result/contract";
 import type { NearFieldMethodResult } from "../nearfield/types";
 import { parseScenario } from "../scenario/parse";
 import type { Scenario } from "../scenario/types";
-import { escapeHtml, html, join, raw, reportNumber, type RawHtml } from "./format";
+import { escapeHtml, html, join, raw, reportNumber, reportValue, type RawHtml } from "./format";
 import { inputsHtml, rawInputsHtml, valueAtPath } from "./inputs";
 import { dilutionChartSvg, sideViewSvg } from "./figures";
 import { referencesFromSources, secondaryQuotationsFor, type Reference } from "./references";
@@ -62,7 +62,7 @@ export const REPORT_SECTIONS = [
 /** A result number, printed through `reportNumber`, tagged with the result path it came from. */
 export function resultCell(result: BrinefieldResult, path: string, extraClass = ""): RawHtml {
   const v = valueAtPath(result, path);
-  const text = typeof v === "number" ? reportNumber(v) : "—";
+  const text = typeof v === "number" ? reportValue(path, v) : "—";
   return html`<td class="num${raw(extraClass ? ` ${extraClass}` : "")}" data-path="${path}">${text}</td>`;
 }
 

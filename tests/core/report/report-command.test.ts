@@ -12,7 +12,7 @@ import { parseScenario } from "../../../core/scenario/parse";
 import { checkClaimOnScenario } from "../../../core/compliance/claim-run";
 import { command } from "../../../core/cli/commands/report";
 import { CliError } from "../../../core/cli/command";
-import { resultCsv, seriesCsv, reportNumber } from "../../../core/report";
+import { resultCsv, seriesCsv, reportNumber, reportValue } from "../../../core/report";
 import { aboutResult, csvWithCaution } from "../../../core/report/csv";
 import type { BrinefieldResult } from "../../../core/result/contract";
 import { at, DEMO_DIR, memoryIO, ROOT, runJson, tableById, tracedNumbers } from "./helpers";
@@ -37,7 +37,7 @@ describe("brinefield report <scenario>", () => {
     expect(cells.length, "numbers traced").toBeGreaterThan(40);
     for (const { path, text } of cells) {
       const v = at(expected, path);
-      expect(text, `report cell ${path} equals run --json formatted`).toBe(typeof v === "number" ? reportNumber(v) : "—");
+      expect(text, `report cell ${path} equals run --json formatted`).toBe(typeof v === "number" ? reportValue(path, v) : "—");
     }
     expect(html, "says why there is no 3D view").toContain("No 3D view is included: it was turned off (--no-3d).");
     expect(io.out.join(""), "lists what it wrote").toContain("wrote HTML report: r.html");
