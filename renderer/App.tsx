@@ -36,7 +36,7 @@ import { TrajectoryChart } from "./charts/TrajectoryChart";
 import { DistanceChart } from "./charts/DistanceCharts";
 import { DistanceTable, TrajectoryTable } from "./charts/ChartTables";
 import { useTabs } from "./ui/Tabs";
-import { exportSeriesCsv, exportReport } from "./exports";
+import { exportSeriesCsv, exportReport, printReportInBrowser } from "./exports";
 
 export const AUTOSAVE_INTERVAL_MS = 5000;
 const VIEW_TABS = ["design", "study"] as const;
@@ -250,7 +250,10 @@ export function App() {
     saveAs: () => void saveAs(true),
     exportReport: () => whenResultsCurrent((r) => exportReport(r, docRef.current.file)),
     exportCsv: () => whenResultsCurrent((r) => exportSeriesCsv(r, docRef.current.file, unitSystem)),
-    print: () => whenResultsCurrent(() => host.printPdf(suggestedFileName(docRef.current.file, "pdf")).then(() => "")),
+    print: () =>
+      whenResultsCurrent((r) =>
+        host.isDesktop() ? host.printPdf(suggestedFileName(docRef.current.file, "pdf")).then(() => "") : printReportInBrowser(r, docRef.current.file),
+      ),
   }), [guardUnsaved, loadText, loadDocument, saveAs, flash, whenResultsCurrent, unitSystem]);
 
   /**
@@ -287,6 +290,7 @@ export function App() {
       else if (key === "o") commands.open();
       else if (key === "s" && e.shiftKey) commands.saveAs();
       else if (key === "s") commands.save();
+      else if (key === "p" && !host.isDesktop()) commands.print();
       else return;
       e.preventDefault();
     };
@@ -345,6 +349,7 @@ export function App() {
             <button type="button" onClick={() => step("redo")} disabled={history.future.length === 0} title="Redo (Ctrl+Shift+Z)" aria-label="Redo" data-command="redo">↷</button>
             <button type="button" onClick={commands.exportReport} disabled={!result || engine.error !== null} data-command="export-report">Export report</button>
             <button type="button" onClick={commands.exportCsv} disabled={!result || engine.error !== null} data-command="export-csv">Export CSV</button>
+            <button type="button" onClick={commands.print} disabled={!result || engine.error !== null} data-command="print-pdf" title="Print the report, or save it as PDF (Ctrl+P)">Print / PDF…</button>
           </nav>
           <div className="doc-title" title={doc.path ?? "not saved yet"}>
             {doc.dirty ? <span className="dirty-dot" role="img" aria-label="unsaved changes" title="unsaved changes">●</span> : null}

@@ -54,14 +54,38 @@ function currentViewPng(): string | undefined {
   }
 }
 
-export async function exportReport(result: BrinefieldResult, file: ScenarioFile): Promise<string> {
+async function reportFor(result: BrinefieldResult, file: ScenarioFile): Promise<string> {
   const { reportHtml } = await import("../core/report/html");
   const png = currentViewPng();
-  const html = reportHtml(
+  return reportHtml(
     result,
     { scenarioFile: file, scenarioText: serialiseScenario(file) },
     png ? { view3dPng: png } : { view3dNote: "the 3D view was not open when the report was exported" },
   );
+}
+
+/**
+ * Print or save as PDF in a browser: the report opens in a tab of its own and the browser's print
+ * dialog comes up on it ("Save as PDF" is one of its printers). The desktop app prints through its host.
+ */
+export async function printReportInBrowser(result: BrinefieldResult, file: ScenarioFile): Promise<string> {
+  const html = await reportFor(result, file);
+  const url = URL.createObjectURL(new Blob([html], { type: "text/html" }));
+  const tab = window.open(url, "_blank");
+  if (!tab) {
+    URL.revokeObjectURL(url);
+    return "The browser blocked the report's tab: allow pop-ups for this page, or use Export report and print the HTML file.";
+  }
+  tab.addEventListener("load", () => {
+    tab.focus();
+    tab.print();
+  });
+  window.setTimeout(() => URL.revokeObjectURL(url), 60_000);
+  return "The report opened in a new tab with the print dialog: choose a printer or “Save as PDF”.";
+}
+
+export async function exportReport(result: BrinefieldResult, file: ScenarioFile): Promise<string> {
+  const html = await reportFor(result, file);
   const name = suggestedFileName(file, "report.html");
   const done = await exportFile(name, html, [{ name: "HTML report", extensions: ["html"] }]);
   return done ? `Report exported: ${name}` : "Export cancelled.";
