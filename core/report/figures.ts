@@ -323,3 +323,50 @@ export function dilutionChartSvg(input: DilutionChartInput): string {
   });
   return svgWrap(parts, "Centreline dilution against distance from the diffuser");
 }
+
+const REGIMES = [
+  { id: "independent", title: "independent", note: "jets stay apart" },
+  { id: "partially-merged", title: "partially merged", note: "jets touch before impact" },
+  { id: "merged-line-source", title: "merged line source", note: "jets join into one sheet" },
+] as const;
+
+/**
+ * A small sketch of the multiport regimes, looking along the diffuser at three neighbouring ports: jets
+ * apart, touching, joined. The regime of this result is drawn in colour with a heavy frame and the words
+ * "this design"; the others in grey. A picture of what the words mean, not a computed drawing.
+ */
+export function multiportSketchSvg(regime: string): string {
+  const panelW = 200;
+  const panelH = 118;
+  const width = panelW * REGIMES.length + 20;
+  const height = panelH + 10;
+  const parts: string[] = [];
+  REGIMES.forEach((r, i) => {
+    const x0 = 10 + i * panelW;
+    const active = r.id === regime;
+    const ink = active ? "#1d4ed8" : "#94a3b8";
+    const fill = active ? "rgba(29,78,216,0.22)" : "rgba(148,163,184,0.18)";
+    parts.push(`<rect x="${x0 + 4}" y="4" width="${panelW - 8}" height="${panelH - 4}" rx="4" fill="#ffffff" stroke="${active ? "#0f172a" : "#cbd5e1"}" stroke-width="${active ? 2 : 1}"/>`);
+    const bed = 84;
+    const top = 24;
+    const spacing = 46;
+    const spread = [14, 26, 40][i]!; // half-width at the top of the rise: apart, touching, overlapping
+    parts.push(`<line x1="${x0 + 14}" y1="${bed}" x2="${x0 + panelW - 14}" y2="${bed}" stroke="#7c6a3c" stroke-width="2"/>`);
+    if (i === 2) {
+      // One sheet over all three ports.
+      const cx = x0 + panelW / 2;
+      parts.push(`<path d="M${cx - spacing - 3},${bed - 6} L${cx - spacing - spread},${top} L${cx + spacing + spread},${top} L${cx + spacing + 3},${bed - 6} Z" fill="${fill}" stroke="${ink}" stroke-width="1.2"/>`);
+    }
+    for (let k = -1; k <= 1; k++) {
+      const cx = x0 + panelW / 2 + k * spacing;
+      if (i !== 2) parts.push(`<path d="M${cx - 3},${bed - 6} L${cx - spread},${top} L${cx + spread},${top} L${cx + 3},${bed - 6} Z" fill="${fill}" stroke="${ink}" stroke-width="1.2"/>`);
+      parts.push(`<rect x="${cx - 3}" y="${bed - 6}" width="6" height="6" fill="#334155"/>`);
+    }
+    parts.push(`<text x="${x0 + panelW / 2}" y="${bed + 16}" text-anchor="middle" font-size="11" font-weight="${active ? 700 : 400}" fill="${active ? "#0f172a" : "#475569"}" ${FONT}>${escapeHtml(r.title)}${active ? " — this design" : ""}</text>`);
+    parts.push(`<text x="${x0 + panelW / 2}" y="${bed + 29}" text-anchor="middle" font-size="9.5" fill="#475569" ${FONT}>${escapeHtml(r.note)}</text>`);
+  });
+  return (
+    `<svg xmlns="http://www.w3.org/2000/svg" viewBox="0 0 ${width} ${height}" width="100%" role="img" aria-label="${escapeHtml(`Multiport regimes: independent, partially merged, merged line source; this design: ${regime}`)}">` +
+    `<title>Multiport regimes seen along the diffuser</title>${parts.join("")}</svg>`
+  );
+}

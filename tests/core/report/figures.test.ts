@@ -138,3 +138,15 @@ describe("dilutionChartSvg()", () => {
     expect(empty, "no NaN coordinates").not.toContain("NaN");
   });
 });
+
+describe("multiportSketchSvg()", () => {
+  it("draws the three regimes and marks the result's own in words, not by colour alone", async () => {
+    const { multiportSketchSvg } = await import("../../../core/report/figures");
+    for (const regime of ["independent", "partially-merged", "merged-line-source"]) {
+      const svg = multiportSketchSvg(regime);
+      expect((svg.match(/— this design/g) ?? []).length, `${regime}: exactly one panel says "this design"`).toBe(1);
+      expect(svg, `${regime}: its panel is the one named`).toContain(`${regime.replace(/-/g, " ")} — this design`);
+      expect(svg, "no NaN coordinates").not.toContain("NaN");
+    }
+  });
+});
