@@ -270,7 +270,7 @@ describe.each([
     for (const view of ["Reset", "Side", "Plan", "Mixing zone"]) {
       await page.locator(".plume-toolbar button", { hasText: view }).click();
       await page.waitForTimeout(200);
-      found.push(...(await overlaps(page, ".workspace")).map((o) => `${view}: ${o}`));
+      found.push(...(await overlaps(page, ".app")).map((o) => `${view}: ${o}`));
     }
     for (const tab of ["Dilution vs distance", "Salinity increase vs distance", "Side view"]) {
       await page.getByRole("tab", { name: tab }).click();
