@@ -133,7 +133,8 @@ const handlers = createHostHandlers({
   },
   async printToPdf() {
     if (!mainWindow) throw new Error("the window is closed");
-    return mainWindow.webContents.printToPDF({ printBackground: true, pageSize: "A4" });
+    // Tagged (accessible) with a document outline, as the CLI's headless printing does.
+    return mainWindow.webContents.printToPDF({ printBackground: true, pageSize: "A4", generateTaggedPDF: true, generateDocumentOutline: true });
   },
   recent,
   autosave,

@@ -38,9 +38,13 @@ import { useFileDrop } from "./ui/useFileDrop";
 import { PlumeView } from "./view3d/PlumeView";
 import { TrajectoryChart } from "./charts/TrajectoryChart";
 import { DistanceChart } from "./charts/DistanceCharts";
-import { exportSeriesCsv, exportReport } from "./exports";
+import { DistanceTable, TrajectoryTable } from "./charts/ChartTables";
+import { useTabs } from "./ui/Tabs";
+import { exportSeriesCsv, exportReport, printReportInBrowser } from "./exports";
 
 export const AUTOSAVE_INTERVAL_MS = 5000;
+const VIEW_TABS = ["design", "study"] as const;
+const CHART_TABS = ["trajectory", "dilution", "increase"] as const;
 const UNITS_KEY = "brinefield.units";
 
 // The Study tab loads on first use (its own workers and charts stay out of the first screen).
@@ -81,6 +85,9 @@ export function App() {
   const [resetSignal, setResetSignal] = useState(0);
   const [documentKey, setDocumentKey] = useState(0);
   const [chart, setChart] = useState<"trajectory" | "dilution" | "increase">("trajectory");
+  const [chartAsTable, setChartAsTable] = useState(false);
+  const mainTabs = useTabs("view", VIEW_TABS, tab, setTab);
+  const chartTabs = useTabs("chart", CHART_TABS, chart, setChart);
   const engine = useEngine(doc.file);
   const docRef = useRef(doc);
   docRef.current = doc;
@@ -95,8 +102,11 @@ export function App() {
     else void host.autosaveClear().catch(() => {});
     setDocumentKey((n) => n + 1);
   }, []);
+  /** The field changed last: a cross-field problem is shown there (see issuesByPath). */
+  const [lastEdited, setLastEdited] = useState<string | null>(null);
   const perform = useCallback(<I,>(action: Action<I>, input: I) => {
     const path = typeof input === "object" && input !== null && "path" in input ? String((input as { path: unknown }).path) : "";
+    setLastEdited(path || null);
     setHistory((h) => historyPush(h, action.perform(h.present, input), `${action.name}:${path}`, Date.now()));
   }, []);
   const step = useCallback((direction: "undo" | "redo") => {
@@ -126,7 +136,7 @@ export function App() {
       return historyPush(h, changed, `study:${key}`, Date.now());
     });
   }, []);
-  const issues = useMemo(() => issuesByPath(engine.issues), [engine.issues]);
+  const issues = useMemo(() => issuesByPath(engine.issues, lastEdited), [engine.issues, lastEdited]);
   const normalised = engine.error === null ? engine.scenario : null;
   const editor: Editor = useMemo(
     () => ({ file: doc.file, unitSystem, issues, perform, normalised }),
@@ -268,7 +278,10 @@ export function App() {
     saveAs: () => void saveAs(true),
     exportReport: () => whenResultsCurrent((r) => exportReport(r, docRef.current.file)),
     exportCsv: () => whenResultsCurrent((r) => exportSeriesCsv(r, docRef.current.file, unitSystem)),
-    print: () => whenResultsCurrent(() => host.printPdf(suggestedFileName(docRef.current.file, "pdf")).then(() => "")),
+    print: () =>
+      whenResultsCurrent((r) =>
+        host.isDesktop() ? host.printPdf(suggestedFileName(docRef.current.file, "pdf")).then(() => "") : printReportInBrowser(r, docRef.current.file),
+      ),
   }), [guardUnsaved, loadText, loadDocument, saveAs, flash, whenResultsCurrent, unitSystem]);
 
   /**
@@ -316,6 +329,7 @@ export function App() {
       else if (key === "o") commands.open();
       else if (key === "s" && e.shiftKey) commands.saveAs();
       else if (key === "s") commands.save();
+      else if (key === "p" && !host.isDesktop()) commands.print();
       else return;
       e.preventDefault();
     };
@@ -374,6 +388,7 @@ export function App() {
             <button type="button" onClick={() => step("redo")} disabled={history.future.length === 0} title="Redo (Ctrl+Shift+Z)" aria-label="Redo" data-command="redo">↷</button>
             <button type="button" onClick={commands.exportReport} disabled={!result || engine.error !== null} data-command="export-report">Export report</button>
             <button type="button" onClick={commands.exportCsv} disabled={!result || engine.error !== null} data-command="export-csv">Export CSV</button>
+            <button type="button" onClick={commands.print} disabled={!result || engine.error !== null} data-command="print-pdf" title="Print the report, or save it as PDF (Ctrl+P)">Print / PDF…</button>
           </nav>
           <div className="doc-title" title={doc.path ?? "not saved yet"}>
             {doc.dirty ? <span className="dirty-dot" role="img" aria-label="unsaved changes" title="unsaved changes">●</span> : null}
@@ -381,9 +396,9 @@ export function App() {
             {title}
             {doc.path ? <span className="doc-path">{doc.path.replace(/^.*[\\/]/, "")}</span> : null}
           </div>
-          <div className="tabs" role="tablist" aria-label="View">
-            <button type="button" role="tab" aria-selected={tab === "design"} onClick={() => setTab("design")} data-command="design">Design</button>
-            <button type="button" role="tab" aria-selected={tab === "study"} onClick={() => setTab("study")} data-command="study">Study</button>
+          <div className="tabs" {...mainTabs.list} aria-label="View">
+            <button {...mainTabs.tab("design")} data-command="design">Design</button>
+            <button {...mainTabs.tab("study")} data-command="study">Study</button>
           </div>
           <div className="segmented units" role="radiogroup" aria-label="Units">
             <button type="button" role="radio" aria-checked={unitSystem === "si"} onClick={() => setUnitSystem("si")} data-units="si">SI</button>
@@ -401,7 +416,7 @@ export function App() {
         {notice ? <div className="banner notice" role="status" data-role="notice">{notice}</div> : null}
 
         {tab === "design" ? (
-          <main className="workspace">
+          <main className="workspace" {...mainTabs.panel}>
             <aside className="inputs" aria-label="Scenario inputs">
               <section className="input-section">
                 <div className="field-grid">
@@ -424,18 +439,27 @@ export function App() {
                 )}
               </div>
               <div className="chart-panel">
-                <div className="tabs small" role="tablist" aria-label="Chart">
-                  <button type="button" role="tab" aria-selected={chart === "trajectory"} onClick={() => setChart("trajectory")}>Side view</button>
-                  <button type="button" role="tab" aria-selected={chart === "dilution"} onClick={() => setChart("dilution")}>Dilution vs distance</button>
-                  <button type="button" role="tab" aria-selected={chart === "increase"} onClick={() => setChart("increase")}>Salinity increase vs distance</button>
+                <div className="chart-tabs">
+                  <div className="tabs small" {...chartTabs.list} aria-label="Chart">
+                    <button {...chartTabs.tab("trajectory")}>Side view</button>
+                    <button {...chartTabs.tab("dilution")}>Dilution vs distance</button>
+                    <button {...chartTabs.tab("increase")}>Salinity increase vs distance</button>
+                  </div>
+                  <button type="button" className="view-as" aria-pressed={chartAsTable} onClick={() => setChartAsTable((t) => !t)} data-command="chart-as-table" title="Show the numbers of the chart as a table">
+                    Table
+                  </button>
                 </div>
-                {result && scenario ? (
-                  chart === "trajectory" ? (
-                    <TrajectoryChart result={result} scenario={scenario} unitSystem={unitSystem} />
-                  ) : (
-                    <DistanceChart result={result} unitSystem={unitSystem} quantity={chart} />
-                  )
-                ) : null}
+                <div className="chart-body" {...chartTabs.panel}>
+                  {result && scenario ? (
+                    chart === "trajectory" ? (
+                      chartAsTable ? <TrajectoryTable result={result} scenario={scenario} unitSystem={unitSystem} /> : <TrajectoryChart result={result} scenario={scenario} unitSystem={unitSystem} />
+                    ) : chartAsTable ? (
+                      <DistanceTable result={result} unitSystem={unitSystem} quantity={chart} />
+                    ) : (
+                      <DistanceChart result={result} unitSystem={unitSystem} quantity={chart} />
+                    )
+                  ) : null}
+                </div>
               </div>
             </section>
 
@@ -460,7 +484,7 @@ export function App() {
           </main>
         ) : null}
         {studyMounted || tab === "study" ? (
-          <main className="study-workspace" hidden={tab !== "study"}>
+          <main className="study-workspace" hidden={tab !== "study"} {...(tab === "study" ? mainTabs.panel : {})}>
             {tab === "study" ? <p className="caution" data-role="caution">{CAUTION}</p> : null}
             <Suspense fallback={<div className="placeholder">Loading study tools…</div>}>
               <StudyPanel

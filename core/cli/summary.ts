@@ -3,6 +3,7 @@ import type { BrinefieldResult } from "../result/contract";
 import type { Scenario } from "../scenario/types";
 import type { NearFieldMethodResult } from "../nearfield/types";
 import { formatNumber as f } from "../units";
+import { densityNumber } from "../report/format";
 
 const n = (v: number | null | undefined, unit = "", digits = 3): string =>
   v === null || v === undefined || !Number.isFinite(v) ? "—" : `${f(v, digits)}${unit ? ` ${unit}` : ""}`;
@@ -66,8 +67,8 @@ export function summaryText(s: Scenario, r: BrinefieldResult): string {
   out.push("", "Densities and port (" + r.densities.equationOfState.name + ")");
   out.push(
     table([
-      ["Brine density at the port", n(r.densities.discharge, "kg/m³", 7)],
-      ["Ambient density at the port", n(r.densities.ambient, "kg/m³", 7)],
+      ["Brine density at the port", `${densityNumber(r.densities.discharge)} kg/m³`],
+      ["Ambient density at the port", `${densityNumber(r.densities.ambient)} kg/m³`],
       ["Reduced gravity g′", n(r.densities.reducedGravity, "m/s²", 4)],
       ["Flow per port", n(r.port.flow, "m³/s", 4)],
       ["Port exit velocity", n(r.port.velocity, "m/s")],

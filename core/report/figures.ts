@@ -114,9 +114,27 @@ export function sideViewKeyPoints(method: NearFieldMethodResult, portHeight: num
   return points;
 }
 
+/** Largest vertical exaggeration the side view uses: a jet's rise keeps its true proportions within ×2. */
+export const SIDE_VIEW_MAX_EXAGGERATION = 2;
+/** Narrowest plot of the side view, px: below it the figure would be a sliver. */
+const SIDE_VIEW_MIN_PLOT = { width: 220 } as const;
+const SIDE_VIEW_MAX_PLOT = { width: 604, height: 300 } as const;
+
+/**
+ * Scales of the side view, px per metre on each axis. True scale (×1) when it fits; a deep, short jet
+ * gets a narrower plot rather than a squashed one, and a long, shallow one is stretched vertically by at
+ * most SIDE_VIEW_MAX_EXAGGERATION, its plot made lower instead. Exaggeration = (px/m vertical)/(px/m horizontal).
+ */
+export function sideViewScales(xMax: number, yMax: number): { kx: number; ky: number; width: number; height: number; exaggeration: number } {
+  let kx = SIDE_VIEW_MAX_PLOT.width / xMax;
+  let ky = SIDE_VIEW_MAX_PLOT.height / yMax;
+  if (ky < kx) kx = Math.max(ky, SIDE_VIEW_MIN_PLOT.width / xMax); // deep water: narrow the plot toward true scale
+  if (ky > kx * SIDE_VIEW_MAX_EXAGGERATION) ky = kx * SIDE_VIEW_MAX_EXAGGERATION;
+  return { kx, ky, width: xMax * kx, height: yMax * ky, exaggeration: ky / kx };
+}
+
 /** Side view: seabed, surface, port, each method's centreline or key points, maximum rise and impact. */
 export function sideViewSvg(input: SideViewInput): string {
-  const f = FRAME;
   const hp = input.portHeight ?? 0;
   const lines = input.nearField.map((m) => ({ method: m, path: sideViewPath(m, hp), keys: sideViewKeyPoints(m, hp) }));
   let xMax = 1;
@@ -130,28 +148,41 @@ export function sideViewSvg(input: SideViewInput): string {
     if (method.maxRiseHeight !== null) yTop = Math.max(yTop, hp + method.maxRiseHeight);
   }
   xMax *= 1.08;
-  // Headroom above the surface holds the legend.
-  const yMax = yTop * 1.04 + 0.12 * yTop + 14 * lines.length * (yTop / plotHeight(f));
-  const sx = (x: number) => f.left + (x / xMax) * plotWidth(f);
-  const sy = (y: number) => f.top + plotHeight(f) - (y / yMax) * plotHeight(f);
+  // A little headroom above the surface for its label; the legend sits below the plot, never on it.
+  const yMax = yTop * 1.1;
+  const scale = sideViewScales(xMax, yMax);
+  const legendRows = lines.length + 1;
+  const f: Frame = {
+    width: FRAME.width,
+    left: FRAME.left,
+    right: FRAME.width - FRAME.left - scale.width,
+    top: 14,
+    bottom: 44 + legendRows * 14 + 6,
+    height: 14 + scale.height + 44 + legendRows * 14 + 6,
+  };
+  const sx = (x: number) => f.left + x * scale.kx;
+  const sy = (y: number) => f.top + scale.height - y * scale.ky;
   const parts: string[] = [];
   // Water, seabed and surface.
   if (input.depth !== null) {
     parts.push(`<rect x="${n(sx(0))}" y="${n(sy(input.depth))}" width="${n(plotWidth(f))}" height="${n(sy(0) - sy(input.depth))}" fill="#eef6fb"/>`);
     parts.push(`<line x1="${n(sx(0))}" y1="${n(sy(input.depth))}" x2="${n(sx(xMax))}" y2="${n(sy(input.depth))}" stroke="#0369a1" stroke-width="1.2"/>`);
-    parts.push(`<text x="${n(sx(xMax) - 4)}" y="${n(sy(input.depth) - 4)}" text-anchor="end" font-size="10" fill="#0369a1" ${FONT}>water surface (depth ${escapeHtml(reportNumber(input.depth))} m)</text>`);
+    parts.push(`<text x="${n(sx(xMax))}" y="${n(sy(input.depth) - 4)}" text-anchor="end" font-size="10" fill="#075985" ${FONT}>water surface (depth ${escapeHtml(reportNumber(input.depth))} m)</text>`);
   }
   parts.push(`<rect x="${n(sx(0))}" y="${n(sy(0))}" width="${n(plotWidth(f))}" height="6" fill="#d6c7a1"/>`);
   parts.push(`<line x1="${n(sx(0))}" y1="${n(sy(0))}" x2="${n(sx(xMax))}" y2="${n(sy(0))}" stroke="#7c6a3c" stroke-width="1.4"/>`);
-  // Axes and ticks.
-  parts.push(...axisTicks(linearTicks(0, xMax), (t) => sx(t), sy(0) + 6, "x"));
-  parts.push(...axisTicks(linearTicks(0, yTop, 5), (t) => sy(t), sx(0), "y"));
+  // Axes and ticks (fewer on a narrow plot so the labels never touch).
+  const xTickCount = Math.max(2, Math.min(6, Math.floor(scale.width / 70)));
+  parts.push(...axisTicks(linearTicks(0, xMax, xTickCount), (t) => sx(t), sy(0) + 6, "x"));
+  parts.push(...axisTicks(linearTicks(0, yTop, Math.max(2, Math.min(5, Math.floor(scale.height / 40)))), (t) => sy(t), sx(0), "y"));
   parts.push(`<line x1="${n(sx(0))}" y1="${n(sy(0))}" x2="${n(sx(0))}" y2="${n(sy(yTop))}" stroke="#334155"/>`);
-  parts.push(`<text x="${n(f.left + plotWidth(f) / 2)}" y="${f.height - 6}" text-anchor="middle" font-size="11" ${FONT}>plan distance from the port along the discharge (m)</text>`);
+  const axisY = f.top + scale.height + 6 + 30;
+  parts.push(`<text x="${n(f.left)}" y="${n(axisY)}" font-size="11" ${FONT}>plan distance from the port along the discharge (m)</text>`);
   parts.push(`<text transform="translate(14 ${n(sy(yTop / 2))}) rotate(-90)" text-anchor="middle" font-size="11" ${FONT}>height above seabed (m)</text>`);
   // Riser and port.
   parts.push(`<line x1="${n(sx(0))}" y1="${n(sy(0))}" x2="${n(sx(0))}" y2="${n(sy(hp))}" stroke="#334155" stroke-width="3"/>`);
   parts.push(`<circle cx="${n(sx(0))}" cy="${n(sy(hp))}" r="3" fill="#334155"/>`);
+  const legendTop = axisY + 8;
   lines.forEach(({ method, path, keys }, i) => {
     const colour = METHOD_COLOURS[method.method] ?? "#475569";
     if (path) {
@@ -182,15 +213,14 @@ export function sideViewSvg(input: SideViewInput): string {
       : method.maxRiseDistance !== null
         ? `${method.method}: reported points joined; bar = upper edge at maximum rise`
         : `${method.method}: reported points; dotted level = maximum rise of the upper edge`;
-    const ly = f.top + 10 + i * 14;
-    parts.push(`<line x1="${f.left + 10}" y1="${ly}" x2="${f.left + 34}" y2="${ly}" stroke="${colour}" stroke-width="2"${path ? "" : ` stroke-dasharray="6 3"`}/>`);
-    parts.push(`<text x="${f.left + 40}" y="${ly + 3.5}" font-size="10" ${FONT}>${escapeHtml(label)}</text>`);
+    const ly = legendTop + i * 14;
+    parts.push(`<line x1="${f.left}" y1="${n(ly)}" x2="${f.left + 24}" y2="${n(ly)}" stroke="${colour}" stroke-width="2"${path ? "" : ` stroke-dasharray="6 3"`}/>`);
+    parts.push(`<text x="${f.left + 30}" y="${n(ly + 3.5)}" font-size="10" ${FONT}>${escapeHtml(label)}</text>`);
   });
-  const ve = (plotHeight(f) / yMax) / (plotWidth(f) / xMax);
-  const veText = Math.abs(ve - 1) > 0.05 ? `vertical exaggeration ×${reportNumber(Number(ve.toPrecision(2)))}` : "true scale";
-  parts.push(`<text x="${f.width - f.right - 4}" y="${f.top + 10}" text-anchor="end" font-size="9" fill="#64748b" ${FONT}>● seabed impact  □ return to port level</text>`);
-  parts.push(`<text x="${f.width - f.right - 4}" y="${f.top + 22}" text-anchor="end" font-size="9" fill="#64748b" ${FONT}>${escapeHtml(veText)}</text>`);
-  return svgWrap(parts, "Side view of the jet centrelines above the seabed");
+  const ve = scale.exaggeration;
+  const veText = Math.abs(ve - 1) > 0.05 ? `vertical exaggeration ×${reportNumber(Number(ve.toPrecision(2)))}` : "true scale (no vertical exaggeration)";
+  parts.push(`<text x="${f.left}" y="${n(legendTop + lines.length * 14 + 3.5)}" font-size="10" fill="#475569" ${FONT}>● seabed impact · □ return to port level · ${escapeHtml(veText)}</text>`);
+  return svgWrap(parts, "Side view of the jet centrelines above the seabed", f);
 }
 
 function axisTicks(ticks: readonly number[], pos: (t: number) => number, base: number, axis: "x" | "y"): string[] {
@@ -211,8 +241,7 @@ function gridLines(ticks: readonly number[], pos: (t: number) => number, f: Fram
   );
 }
 
-function svgWrap(parts: readonly string[], title: string): string {
-  const f = FRAME;
+function svgWrap(parts: readonly string[], title: string, f: Frame = FRAME): string {
   return (
     `<svg xmlns="http://www.w3.org/2000/svg" viewBox="0 0 ${f.width} ${f.height}" width="100%" role="img" aria-label="${escapeHtml(title)}">` +
     `<title>${escapeHtml(title)}</title>${parts.join("")}</svg>`
@@ -293,4 +322,51 @@ export function dilutionChartSvg(input: DilutionChartInput): string {
     parts.push(`<text x="${f.left + plotWidth(f) - 120}" y="${y + 3.5}" font-size="10" ${FONT}>${escapeHtml(s)}</text>`);
   });
   return svgWrap(parts, "Centreline dilution against distance from the diffuser");
+}
+
+const REGIMES = [
+  { id: "independent", title: "independent", note: "jets stay apart" },
+  { id: "partially-merged", title: "partially merged", note: "jets touch before impact" },
+  { id: "merged-line-source", title: "merged line source", note: "jets join into one sheet" },
+] as const;
+
+/**
+ * A small sketch of the multiport regimes, looking along the diffuser at three neighbouring ports: jets
+ * apart, touching, joined. The regime of this result is drawn in colour with a heavy frame and the words
+ * "this design"; the others in grey. A picture of what the words mean, not a computed drawing.
+ */
+export function multiportSketchSvg(regime: string): string {
+  const panelW = 200;
+  const panelH = 118;
+  const width = panelW * REGIMES.length + 20;
+  const height = panelH + 10;
+  const parts: string[] = [];
+  REGIMES.forEach((r, i) => {
+    const x0 = 10 + i * panelW;
+    const active = r.id === regime;
+    const ink = active ? "#1d4ed8" : "#94a3b8";
+    const fill = active ? "rgba(29,78,216,0.22)" : "rgba(148,163,184,0.18)";
+    parts.push(`<rect x="${x0 + 4}" y="4" width="${panelW - 8}" height="${panelH - 4}" rx="4" fill="#ffffff" stroke="${active ? "#0f172a" : "#cbd5e1"}" stroke-width="${active ? 2 : 1}"/>`);
+    const bed = 84;
+    const top = 24;
+    const spacing = 46;
+    const spread = [14, 26, 40][i]!; // half-width at the top of the rise: apart, touching, overlapping
+    parts.push(`<line x1="${x0 + 14}" y1="${bed}" x2="${x0 + panelW - 14}" y2="${bed}" stroke="#7c6a3c" stroke-width="2"/>`);
+    if (i === 2) {
+      // One sheet over all three ports.
+      const cx = x0 + panelW / 2;
+      parts.push(`<path d="M${cx - spacing - 3},${bed - 6} L${cx - spacing - spread},${top} L${cx + spacing + spread},${top} L${cx + spacing + 3},${bed - 6} Z" fill="${fill}" stroke="${ink}" stroke-width="1.2"/>`);
+    }
+    for (let k = -1; k <= 1; k++) {
+      const cx = x0 + panelW / 2 + k * spacing;
+      if (i !== 2) parts.push(`<path d="M${cx - 3},${bed - 6} L${cx - spread},${top} L${cx + spread},${top} L${cx + 3},${bed - 6} Z" fill="${fill}" stroke="${ink}" stroke-width="1.2"/>`);
+      parts.push(`<rect x="${cx - 3}" y="${bed - 6}" width="6" height="6" fill="#334155"/>`);
+    }
+    parts.push(`<text x="${x0 + panelW / 2}" y="${bed + 16}" text-anchor="middle" font-size="11" font-weight="${active ? 700 : 400}" fill="${active ? "#0f172a" : "#475569"}" ${FONT}>${escapeHtml(r.title)}${active ? " — this design" : ""}</text>`);
+    parts.push(`<text x="${x0 + panelW / 2}" y="${bed + 29}" text-anchor="middle" font-size="9.5" fill="#475569" ${FONT}>${escapeHtml(r.note)}</text>`);
+  });
+  return (
+    `<svg xmlns="http://www.w3.org/2000/svg" viewBox="0 0 ${width} ${height}" width="100%" role="img" aria-label="${escapeHtml(`Multiport regimes: independent, partially merged, merged line source; this design: ${regime}`)}">` +
+    `<title>Multiport regimes seen along the diffuser</title>${parts.join("")}</svg>`
+  );
 }

@@ -15,6 +15,23 @@ export function reportNumber(value: number | null | undefined): string {
   return formatNumber(value, REPORT_SIGNIFICANT);
 }
 
+/**
+ * Densities are printed to 0.01 kg/m³ (six or seven significant figures) in the report and by `run`:
+ * the brine's buoyancy is a difference of two densities near 1025 kg/m³, so four significant figures
+ * ("1025") would hide it.
+ */
+export const DENSITY_DECIMALS = 2;
+
+export function densityNumber(value: number | null | undefined): string {
+  if (value === null || value === undefined || !Number.isFinite(value)) return "—";
+  return value.toFixed(DENSITY_DECIMALS);
+}
+
+/** A traced result value as the report prints it: densities (kg/m³) to 0.01, everything else by reportNumber. */
+export function reportValue(path: string, value: number | null | undefined): string {
+  return /^densities\.(discharge|ambient\w*)$/.test(path) ? densityNumber(value) : reportNumber(value);
+}
+
 /** A percentage from a fraction, e.g. 0.45 → "45 %". */
 export function reportPercent(fraction: number | null | undefined): string {
   if (fraction === null || fraction === undefined || !Number.isFinite(fraction)) return "—";

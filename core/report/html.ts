@@ -9,9 +9,9 @@ import { CAUTION } from "../result/contract";
 import type { NearFieldMethodResult } from "../nearfield/types";
 import { parseScenario } from "../scenario/parse";
 import type { Scenario } from "../scenario/types";
-import { escapeHtml, html, join, raw, reportNumber, type RawHtml } from "./format";
+import { escapeHtml, html, join, raw, reportNumber, reportValue, type RawHtml } from "./format";
 import { inputsHtml, rawInputsHtml, valueAtPath } from "./inputs";
-import { dilutionChartSvg, sideViewSvg } from "./figures";
+import { dilutionChartSvg, multiportSketchSvg, sideViewSvg } from "./figures";
 import { referencesFromSources, secondaryQuotationsFor, type Reference } from "./references";
 import { REPORT_CSS } from "./style";
 import { uncertaintyHtml } from "./uncertainty";
@@ -62,7 +62,7 @@ export const REPORT_SECTIONS = [
 /** A result number, printed through `reportNumber`, tagged with the result path it came from. */
 export function resultCell(result: BrinefieldResult, path: string, extraClass = ""): RawHtml {
   const v = valueAtPath(result, path);
-  const text = typeof v === "number" ? reportNumber(v) : "—";
+  const text = typeof v === "number" ? reportValue(path, v) : "—";
   return html`<td class="num${raw(extraClass ? ` ${extraClass}` : "")}" data-path="${path}">${text}</td>`;
 }
 
@@ -216,10 +216,16 @@ function methodDetail(result: BrinefieldResult, m: NearFieldMethodResult, i: num
   return join(parts);
 }
 
+/** Regimes the sketch draws (a single port has no neighbours to draw). */
+const REGIME_SKETCHED = new Set(["independent", "partially-merged", "merged-line-source"]);
+
 function multiportHtml(result: BrinefieldResult): RawHtml {
   const mp = result.multiport;
   return join([
     html`<p><strong>Regime:</strong> ${mp.regime}${mp.merged ? " (adjacent jets merge)" : ""}. ${mp.reason}</p>`,
+    REGIME_SKETCHED.has(mp.regime)
+      ? html`<figure class="regime-sketch">${raw(multiportSketchSvg(mp.regime))}<figcaption>Neighbouring jets seen along the diffuser in each regime; this design's regime is framed.</figcaption></figure>`
+      : raw(""),
     keyValueTable("Multiport interaction", [
       resultRow(result, "Ports used", "multiport.portsUsed", "–"),
       resultRow(result, "Spacing ratio s/(dF)", "multiport.spacingRatio", "–"),

@@ -25,7 +25,7 @@ const EXAMPLES: Record<QuantityKind, string> = {
   area: `e.g. 10 or "100 ft^2"`,
   density: `e.g. 1025`,
   acceleration: `e.g. 0.3`,
-  ratio: `e.g. 0.45`,
+  ratio: `e.g. 0.45 or "45 %"`,
 };
 
 /** "a" or "an" before a word, for readable messages. */
@@ -67,7 +67,7 @@ function countExpectation(min: number, max: number, what: string): string {
 }
 
 function fractionExpectation(min: number, max: number, what: string, exclusiveMin: boolean): string {
-  return `must be a ${what} (a fraction) ${exclusiveMin ? "greater than" : "from"} ${min} ${exclusiveMin ? "and at most" : "to"} ${max}, e.g. 0.45`;
+  return `must be a ${what} (a fraction) ${exclusiveMin ? "greater than" : "from"} ${min} ${exclusiveMin ? "and at most" : "to"} ${max}, e.g. 0.45 or "45 %"`;
 }
 
 export function salinityExpectation(min: number, max: number, what: string): string {
@@ -101,12 +101,25 @@ export function count(min: number, max: number, what: string) {
     .max(max, { error: () => expectation });
 }
 
-/** A plain dimensionless fraction. */
+/** A dimensionless fraction: a number (0.45) or a percentage string ("45 %"). */
 export function fraction(min: number, max: number, what: string, exclusiveMin = false) {
   const expectation = fractionExpectation(min, max, what, exclusiveMin);
-  return z.number({ error: () => expectation }).refine((v) => Number.isFinite(v) && (exclusiveMin ? v > min : v >= min) && v <= max, {
-    error: () => expectation,
-  });
+  return z
+    .union([z.number(), z.string()], { error: () => expectation })
+    .meta({ description: `${what}: a fraction (number) or a percentage string such as "45 %"` })
+    .transform((raw, ctx) => {
+      const parsed = quantityToSI(raw, "ratio");
+      if (!parsed.ok) {
+        ctx.addIssue({ code: "custom", message: typeof raw === "string" ? `${parsed.message}; ${expectation}` : expectation });
+        return z.NEVER;
+      }
+      const v = parsed.value;
+      if (!(Number.isFinite(v) && (exclusiveMin ? v > min : v >= min) && v <= max)) {
+        ctx.addIssue({ code: "custom", message: expectation });
+        return z.NEVER;
+      }
+      return v;
+    });
 }
 
 export function text(what: string, max = 200) {

@@ -81,7 +81,7 @@ function buildProfile(a: RawAmbientLike, depth: number, path: string, ctx: Ctx):
     }));
     const below = pts.findIndex((p) => p.depth > depth);
     if (below >= 0) {
-      ctx.issues.push(issue(`${path}.profile.${below}.depth`, pts[below]!.depth, `is below the seabed (the water is ${formatNumber(depth)} m deep)`));
+      ctx.issues.push(issue(`${path}.profile.${below}.depth`, pts[below]!.depth, `is below the seabed (the water is ${formatNumber(depth)} m deep)`, [`${path}.depth`]));
       return null;
     }
     pts.sort((p, q) => p.depth - q.depth);

@@ -38,6 +38,18 @@ function ambientBounds(out: ScenarioIssue[], a: AmbientInput, prefix: string, is
   });
 }
 
+/** Fields that set the port exit velocity: a too-fast jet is reported on whichever of them was changed. */
+const EXIT_VELOCITY_FIELDS = [
+  "discharge.flow",
+  "plant.productFlow",
+  "plant.recovery",
+  "diffuser.portCount",
+  "diffuser.flowSplit",
+  "diffuser.contraction",
+  "diffuser.risers.count",
+  "diffuser.risers.portsPerRiser",
+] as const;
+
 /** Every rule a normalised scenario breaks, as issues naming the path (empty when it may be computed). */
 export function scenarioRuleIssues(s: Scenario): ScenarioIssue[] {
   const out: ScenarioIssue[] = [];
@@ -78,6 +90,7 @@ export function scenarioRuleIssues(s: Scenario): ScenarioIssue[] {
           "diffuser.portSpacing",
           d.portSpacing,
           `must be more than the port diameter (${formatNumber(d.portDiameterNominal)} m): the ports would overlap`,
+          ["diffuser.portDiameter"],
         ),
       );
     }
@@ -87,7 +100,14 @@ export function scenarioRuleIssues(s: Scenario): ScenarioIssue[] {
   const naturalLength =
     d.layout === "rosette" ? Math.max(0, ((d.risers?.count ?? 1) - 1) * (d.risers?.spacing ?? 0)) : Math.max(0, (d.portCount - 1) * d.portSpacing);
   if (d.length + 1e-9 < naturalLength)
-    out.push(issue("diffuser.length", d.length, `must be at least the port layout's length ${formatNumber(naturalLength)} m`));
+    out.push(
+      issue("diffuser.length", d.length, `must be at least the port layout's length ${formatNumber(naturalLength)} m`, [
+        "diffuser.portCount",
+        "diffuser.portSpacing",
+        "diffuser.risers.count",
+        "diffuser.risers.spacing",
+      ]),
+    );
   if (d.flowSplit.length !== d.portCount) {
     out.push(issue("diffuser.flowSplit", `${d.flowSplit.length} values`, `must list one share per port (${d.portCount})`));
     return out;
@@ -105,7 +125,8 @@ export function scenarioRuleIssues(s: Scenario): ScenarioIssue[] {
         issue(
           "diffuser.portDiameter",
           d.portDiameterNominal,
-          `gives a port exit velocity of ${formatNumber(fastest)} m/s for the flow per port; Brinefield screens exit velocities up to ${MAX_EXIT_VELOCITY} m/s (usual designs: about 2–6 m/s) — check the flow, the port count and the diameter`,
+          `with a total flow of ${formatNumber(flow)} m³/s over ${d.portCount} port${d.portCount === 1 ? "" : "s"} gives a port exit velocity of ${formatNumber(fastest)} m/s; Brinefield screens exit velocities up to ${MAX_EXIT_VELOCITY} m/s (usual designs: about 2–6 m/s) — check the flow, the port count and the diameter`,
+          EXIT_VELOCITY_FIELDS,
         ),
       );
   }
@@ -113,7 +134,12 @@ export function scenarioRuleIssues(s: Scenario): ScenarioIssue[] {
   // --- the port below the surface, under the stated conditions and in every ambient case ----------------
   const top = d.portHeight + d.portDiameter / 2;
   if (top >= s.ambient.depth)
-    out.push(issue("diffuser.portHeight", d.portHeight, `must leave the port below the surface: water depth is ${formatNumber(s.ambient.depth)} m`));
+    out.push(
+      issue("diffuser.portHeight", d.portHeight, `must leave the port below the surface: water depth is ${formatNumber(s.ambient.depth)} m`, [
+        "ambient.depth",
+        "diffuser.portDiameter",
+      ]),
+    );
   s.ambientCases.forEach((c, i) => {
     if (top >= c.depth && c.depth !== s.ambient.depth)
       out.push(
@@ -121,6 +147,7 @@ export function scenarioRuleIssues(s: Scenario): ScenarioIssue[] {
           `ambientCases.${i}.depth`,
           c.depth,
           `must leave the port below the surface in ambient case "${c.name}": the port's top is ${formatNumber(top)} m above the seabed`,
+          ["diffuser.portHeight", "diffuser.portDiameter"],
         ),
       );
   });

@@ -68,6 +68,7 @@ export type QuantityParse =
   | { readonly ok: true; readonly value: number; readonly converted: boolean; readonly note?: string }
   | { readonly ok: false; readonly message: string };
 
+const PERCENT = /^([-+]?(?:\d+\.?\d*|\.\d+)(?:e[-+]?\d+)?)\s*%$/i;
 const SALINITY_PRACTICAL = /^\s*([-+]?(?:\d+\.?\d*|\.\d+)(?:e[-+]?\d+)?)\s*(psu|PSU|pss|PSS-78)\s*$/;
 const TDS = /^\s*([-+]?(?:\d+\.?\d*|\.\d+)(?:e[-+]?\d+)?)\s*(mg\/L|mg\/l|ppm)\s*$/;
 
@@ -90,7 +91,15 @@ export function quantityToSI(raw: unknown, kind: QuantityKind): QuantityParse {
   if (Number.isFinite(plain)) return { ok: true, value: plain, converted: false };
   if (!Number.isNaN(plain)) return { ok: false, message: "is not a finite number" };
   const target = QUANTITY_KINDS[kind].si;
-  if (target === "") return { ok: false, message: "must be a plain number (no unit)" };
+  if (target === "") {
+    // A fraction may be written as a percentage ("45 %", "45%"): the trade states recovery that way.
+    const percent = PERCENT.exec(text);
+    if (percent) {
+      const v = Number(percent[1]) / 100;
+      return Number.isFinite(v) ? { ok: true, value: v, converted: true, note: `${raw} → ${formatNumber(v)}` } : { ok: false, message: "is not a finite number" };
+    }
+    return { ok: false, message: 'must be a plain number or a percentage (e.g. 0.45 or "45 %")' };
+  }
   let value: number;
   try {
     const u = math().unit(normaliseUnitText(text));
@@ -106,15 +115,21 @@ export function quantityToSI(raw: unknown, kind: QuantityKind): QuantityParse {
   return { ok: true, value, converted: true, note: `${raw} → ${formatNumber(value)} ${unitSymbol(target)}` };
 }
 
-/** Accepts "°C", "°F", "‰" and a few typographic forms by mapping them to mathjs names. */
-function normaliseUnitText(text: string): string {
+/**
+ * Accepts "°C", "°F", "‰" and the trade's ways of writing volumes and days by mapping them to mathjs
+ * names: "m3/d", "m^3/d", "m³/d" → m^3/day; "ML/d" → megalitres per day; "ft3/s" → ft^3/s.
+ */
+export function normaliseUnitText(text: string): string {
   return text
     .replace(/°\s*C\b/g, "degC")
     .replace(/°\s*F\b/g, "degF")
     .replace(/°/g, "deg")
     .replace(/‰/g, "ppt")
-    .replace(/m³/g, "m^3")
-    .replace(/m²/g, "m^2");
+    .replace(/³/g, "^3")
+    .replace(/²/g, "^2")
+    .replace(/\b(m|ft|cm|mm|in|yd)([23])\b/g, "$1^$2")
+    .replace(/\/\s*d\b/g, "/day")
+    .replace(/\/\s*hr\b/g, "/hour");
 }
 
 export function siLabel(kind: QuantityKind): string {

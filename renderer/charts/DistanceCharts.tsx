@@ -43,7 +43,10 @@ export function DistanceChart({ result, unitSystem, quantity }: Props) {
   const label = quantity === "dilution" ? "centreline dilution (×)" : "salinity increase (g/kg)";
   const limitLabel =
     quantity === "dilution" ? `required dilution ${formatNumber(required, 3)}×` : limit !== null ? `allowed increase ${formatNumber(limit, 3)} g/kg` : "";
-  const stages = Array.from(new Set(shown.map((p) => p.stage)));
+  // A stage is drawn (and listed in the key) only when it has a line: two points with a value.
+  const stages = Array.from(new Set(shown.map((p) => p.stage))).filter(
+    (stage) => shown.filter((p) => p.stage === stage && value(p) > 0 && Number.isFinite(value(p))).length >= 2,
+  );
   return (
     <div className="chart" ref={ref} data-role={`${quantity}-chart`}>
       <svg width={width} height={height} role="img" aria-label={`${label} against distance from the diffuser`}>
@@ -90,7 +93,8 @@ export function DistanceChart({ result, unitSystem, quantity }: Props) {
         {stages.map((s) => (
           <span key={s}><i className={`key-line stage-${s}`} /> {s.replace(/-/g, " ")}</span>
         ))}
-        {markers.length ? <span><i className="dot integral" /> integral / <i className="diamond" /> length-scale</span> : null}
+        {markers.some((m) => m.method === "integral") ? <span><i className="dot integral" /> integral</span> : null}
+        {markers.some((m) => m.method !== "integral") ? <span><i className="diamond" /> length-scale</span> : null}
       </div>
     </div>
   );

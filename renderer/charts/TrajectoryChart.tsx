@@ -64,8 +64,8 @@ export function TrajectoryChart({ result, scenario, unitSystem }: { result: Brin
         <text className="axis-label" transform={`translate(12,${(y.range()[0] + y.range()[1]) / 2}) rotate(-90)`} textAnchor="middle">height above seabed ({unit})</text>
       </svg>
       <div className="chart-key">
-        <span><i className="dot integral" /> integral method</span>
-        <span><i className="diamond" /> length-scale method</span>
+        {markers.some((m) => m.method === "integral") ? <span><i className="dot integral" /> integral method</span> : null}
+        {markers.some((m) => m.method !== "integral") ? <span><i className="diamond" /> length-scale method</span> : null}
       </div>
     </div>
   );

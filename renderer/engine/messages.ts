@@ -6,6 +6,8 @@ export interface EngineIssue {
   readonly path: string;
   readonly message: string;
   readonly value?: unknown;
+  /** Other fields a cross-field rule involves; the app shows the message on the one just changed. */
+  readonly related?: readonly string[];
 }
 
 export interface EngineRequest {

@@ -19,14 +19,19 @@ function issuesOf(error: unknown): EngineIssue[] | null {
   if (typeof error !== "object" || error === null || !("issues" in error)) return null;
   const issues = (error as { issues: unknown }).issues;
   if (!Array.isArray(issues)) return null;
-  return issues.map((issue: { path?: unknown; message?: unknown; value?: unknown }) => {
+  return issues.map((issue: { path?: unknown; message?: unknown; value?: unknown; related?: unknown }) => {
     const path = typeof issue.path === "string" ? issue.path : "";
     return {
       path,
       message: withoutPathPrefix(path, typeof issue.message === "string" ? issue.message : String(issue.message)),
       ...(issue.value === undefined ? {} : { value: cloneable(issue.value) }),
+      ...relatedOf(issue.related),
     };
   });
+}
+
+function relatedOf(related: unknown): { related?: string[] } {
+  return Array.isArray(related) && related.length ? { related: related.filter((p): p is string => typeof p === "string") } : {};
 }
 
 /** Issue values go through postMessage; keep only plain data. */
@@ -47,6 +52,7 @@ export function runFile(id: number, file: unknown): EngineResponse {
         path: i.path,
         message: withoutPathPrefix(i.path, i.message),
         ...(i.value === undefined ? {} : { value: cloneable(i.value) }),
+        ...relatedOf(i.related),
       }));
       return { id, ok: false, issues, message: summary(issues) };
     }

@@ -2,6 +2,8 @@
  * Runs the current scenario file in the core worker, debounced, and keeps the last good result on screen
  * while the file has errors. Stale responses (an older edit finishing late) are dropped.
  */
+import { fieldBounds } from "../../core/scenario/bounds";
+import { formatNumber, siLabel } from "../../core/units";
 import { useEffect, useRef, useState } from "react";
 import type { BrinefieldResult } from "../../core/result/contract";
 import type { Scenario } from "../../core/scenario/types";
@@ -107,13 +109,36 @@ export function exportBlocked(engine: Pick<EngineState, "result" | "error" | "ru
   return null;
 }
 
-/** Issues grouped by scenario path, for inline field errors. */
-export function issuesByPath(issues: readonly EngineIssue[]): ReadonlyMap<string, string[]> {
+/**
+ * A cross-field message shown on another field than its own: it names its own field in words, with the
+ * value and unit ("port height above the seabed 1 m: must leave the port below the surface …").
+ */
+export function movedMessage(issue: EngineIssue): string {
+  const bounds = fieldBounds(issue.path);
+  const what = bounds?.what ?? issue.path;
+  const unit = bounds && bounds.form === "quantity" ? siLabel(bounds.kind) : "";
+  const valueText = typeof issue.value === "number" ? `${formatNumber(issue.value)}${unit ? ` ${unit}` : ""}` : "";
+  const shownValue = issue.value === undefined ? "" : (JSON.stringify(issue.value) ?? "");
+  const rest = shownValue && issue.message.startsWith(`${shownValue} `) ? issue.message.slice(shownValue.length + 1) : issue.message;
+  return `${what}${valueText ? ` ${valueText}` : ""}: ${rest}`;
+}
+
+/**
+ * Issues grouped by scenario path, for inline field errors. A cross-field rule (the port must stay below
+ * the surface; the port jet is too fast) is shown on the field the user just changed when that field is
+ * one it involves, so typing a shallow depth marks the depth, not the port height.
+ */
+export function issuesByPath(issues: readonly EngineIssue[], lastEdited: string | null = null): ReadonlyMap<string, string[]> {
   const map = new Map<string, string[]>();
   for (const issue of issues) {
-    const list = map.get(issue.path) ?? [];
-    list.push(issue.message);
-    map.set(issue.path, list);
+    const involvesEdit =
+      lastEdited !== null &&
+      lastEdited !== issue.path &&
+      (issue.related ?? []).some((p) => lastEdited === p || lastEdited.startsWith(`${p}.`));
+    const path = involvesEdit ? lastEdited : issue.path;
+    const list = map.get(path) ?? [];
+    list.push(involvesEdit ? movedMessage(issue) : issue.message);
+    map.set(path, list);
   }
   return map;
 }

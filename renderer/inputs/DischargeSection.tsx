@@ -30,9 +30,9 @@ export function DischargeSection() {
         {plant ? (
           <>
             <QuantityField path="plant.productFlow" label="Product water flow" kind="flow" />
-            <QuantityField path="plant.recovery" label="Recovery" kind="ratio" hint="fraction, e.g. 0.45" />
+            <QuantityField path="plant.recovery" label="Recovery" kind="ratio" hint="fraction or percent: 0.45 or 45 %" />
             <QuantityField path="plant.feedSalinity" label="Feed salinity" kind="salinity" />
-            <QuantityField path="plant.saltRejection" label="Salt rejection" kind="ratio" hint="fraction, e.g. 0.996" />
+            <QuantityField path="plant.saltRejection" label="Salt rejection" kind="ratio" hint="fraction or percent: 99.6 %" />
             <QuantityField path="plant.feedTemperature" label="Feed temperature" kind="temperature" />
           </>
         ) : (

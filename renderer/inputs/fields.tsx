@@ -7,7 +7,7 @@ import type { QuantityKind } from "../../core/units";
 import { setField } from "../state/actions";
 import { getAtPath } from "../state/scenarioState";
 import { issuesUnder, useEditor } from "./EditorContext";
-import { displayText, displayUnit, enteredNote, storedValueFromText } from "./quantityText";
+import { fieldView, storedValueInField } from "./quantityText";
 
 function FieldShell(props: { id: string; label: ReactNode; errors: readonly string[]; hint?: string; children: ReactNode; wide?: boolean }) {
   const errorId = `${props.id}-error`;
@@ -46,13 +46,19 @@ export function QuantityField({ path, label, kind, hint, placeholder, unitText }
   const editor = useEditor();
   const id = useId();
   const raw = getAtPath(editor.file, path);
-  const [editing, setEditing] = useState<string | null>(null);
-  const unit = unitText ?? displayUnit(kind, editor.unitSystem);
+  // While typing, the field keeps the unit it showed when the edit began (so clearing "5000 m³/day" and
+  // typing 6000 still means m³/day).
+  const [editing, setEditing] = useState<{ text: string; unitIn: string | null; unit: string } | null>(null);
+  const view = fieldView(raw, kind, editor.unitSystem);
+  const unit = unitText ?? (editing ? editing.unit : view.unit);
   const errors = issuesUnder(editor.issues, path, true);
-  const shown = editing ?? displayText(raw, kind, editor.unitSystem);
-  const note = editing === null ? enteredNote(raw, kind, editor.unitSystem) : null;
+  const shown = editing?.text ?? view.text;
+  const beside = editing === null ? view.beside : null;
+  const unitTitle = view.enteredIn
+    ? `Shown in the unit it was entered in; a plain number is taken in ${unit}. Type a value with another unit to change it.`
+    : `Type a number in ${unit || "plain numbers"}, or a value with its own unit`;
   return (
-    <FieldShell id={id} label={label} errors={errors} hint={note ? `entered as ${note}` : hint}>
+    <FieldShell id={id} label={label} errors={errors} hint={beside ?? hint}>
       <div className="quantity-input">
         <input
           id={id}
@@ -64,14 +70,19 @@ export function QuantityField({ path, label, kind, hint, placeholder, unitText }
           value={shown}
           placeholder={placeholder}
           {...invalidProps(id, errors)}
-          onFocus={() => setEditing(displayText(raw, kind, editor.unitSystem, 9))}
+          onFocus={() => {
+            const full = fieldView(raw, kind, editor.unitSystem, 9);
+            setEditing({ text: full.text, unitIn: full.enteredIn, unit: full.unit });
+          }}
           onBlur={() => setEditing(null)}
           onChange={(event) => {
-            setEditing(event.target.value);
-            editor.perform(setField, { path, value: storedValueFromText(event.target.value, kind, editor.unitSystem) });
+            const text = event.target.value;
+            const unitIn = editing?.unitIn ?? view.enteredIn;
+            setEditing({ text, unitIn, unit: editing?.unit ?? view.unit });
+            editor.perform(setField, { path, value: storedValueInField(text, kind, editor.unitSystem, unitIn) });
           }}
         />
-        <span className="unit" title={`Type a number in ${unit || "plain numbers"}, or a value with its own unit`}>
+        <span className="unit" title={unitTitle} data-role="field-unit">
           {unit || "–"}
         </span>
       </div>

@@ -81,3 +81,78 @@ export function siNumber(raw: unknown, kind: QuantityKind, fallback: number): nu
   const parsed = quantityToSI(raw, kind);
   return parsed.ok ? parsed.value : fallback;
 }
+
+const LEADING_NUMBER = /^\s*([-+]?(?:\d+\.?\d*|\.\d+)(?:e[-+]?\d+)?)\s*(.*?)\s*$/i;
+
+/** A unit as people write it, with superscripts: "m^3/day" and "m3/d" → "m³/day", "m³/d"; degC → °C. */
+export function prettyUnit(unit: string): string {
+  return unit
+    .replace(/\^3|(?<=\b(?:m|ft|cm|mm|in))3\b/g, "³")
+    .replace(/\^2|(?<=\b(?:m|ft|cm|mm|in))2\b/g, "²")
+    .replace(/\bdegC\b/g, "°C")
+    .replace(/\bdegF\b/g, "°F")
+    .replace(/\bdeg\b/g, "°");
+}
+
+/**
+ * The unit a stored value was entered in, when the field should keep showing it: "5000 m^3/day" stays in
+ * m³/day, "45 %" in %, "0.15 knot" in knots. Values in the SI unit itself ("18 m") or in the unit system's
+ * own unit ("40 ft" with US units on) follow the unit system as plain numbers do. Null otherwise.
+ */
+export function enteredUnit(raw: unknown, kind: QuantityKind, system: UnitSystem): { value: number; unit: string; text: string } | null {
+  if (typeof raw !== "string") return null;
+  const m = LEADING_NUMBER.exec(raw);
+  if (!m || m[2] === "") return null;
+  const value = Number(m[1]);
+  const unit = m[2];
+  if (!Number.isFinite(value) || !quantityToSI(raw, kind).ok) return null;
+  const one = quantityToSI(`1 ${unit}`, kind);
+  const zero = quantityToSI(`0 ${unit}`, kind);
+  if (one.ok && zero.ok && Math.abs(one.value - 1) < 1e-12 && Math.abs(zero.value) < 1e-12) return null; // the SI unit itself
+  if (system === "us") {
+    const us = QUANTITY_KINDS[kind].us;
+    const inUs = quantityToSI(`1 ${us}`, kind);
+    if (us !== "" && one.ok && inUs.ok && Math.abs(one.value - inUs.value) <= 1e-12 * Math.abs(inUs.value)) return null;
+  }
+  return { value, unit: prettyUnit(unit), text: unit };
+}
+
+/**
+ * What a quantity field shows: the number and unit it was entered in (or the unit system's unit), and
+ * beside it the value in SI (and in US units when those are chosen) when that differs from what is shown.
+ */
+export function fieldView(
+  raw: unknown,
+  kind: QuantityKind,
+  system: UnitSystem,
+  significant = 4,
+): { text: string; unit: string; beside: string | null; enteredIn: string | null } {
+  const entered = enteredUnit(raw, kind, system);
+  if (!entered) return { text: displayText(raw, kind, system, significant), unit: displayUnit(kind, system), beside: null, enteredIn: null };
+  const si = quantityToSI(raw, kind);
+  const parts: string[] = [];
+  if (si.ok) {
+    const siUnit = displayUnit(kind, "si");
+    parts.push(`${formatNumber(si.value, 4)}${siUnit ? ` ${siUnit}` : ""}`);
+    if (system === "us") {
+      const us = siToDisplay(si.value, kind, "us");
+      if (us.unit !== siUnit && us.unit !== entered.unit) parts.push(`${formatNumber(us.value, 4)} ${us.unit}`);
+    }
+  }
+  return {
+    text: formatNumber(entered.value, Math.max(significant, String(entered.value).replace(/[^0-9]/g, "").length)),
+    unit: entered.unit,
+    beside: parts.length ? `= ${parts.join(" = ")}` : null,
+    enteredIn: entered.text,
+  };
+}
+
+/**
+ * What to store for text typed into a field that shows `enteredIn` (a unit of the user's own): a plain
+ * number is taken in that unit. Otherwise as storedValueFromText.
+ */
+export function storedValueInField(text: string, kind: QuantityKind, system: UnitSystem, enteredIn: string | null): unknown {
+  const trimmed = text.trim();
+  if (enteredIn !== null && trimmed !== "" && Number.isFinite(Number(trimmed))) return `${trimmed} ${enteredIn}`;
+  return storedValueFromText(text, kind, system);
+}

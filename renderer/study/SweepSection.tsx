@@ -6,7 +6,8 @@ import type { Scenario } from "../../core/scenario/types";
 import { formatNumber, siToDisplay, type UnitSystem } from "../../core/units";
 import { OVERRIDE_PATHS } from "../../core/study/overrides";
 import { axisFromParts, eosCrossings, sweepGrid, sweepRecords, sweepRows, type SweepAxis, type SweepRow } from "../../core/study/sweep";
-import { csvFormatSafe } from "../../core/report/csv";
+import { flatRowsCsv } from "../../core/report/csv";
+import { inputsHash } from "../../core/scenario/hash";
 import { exportFile } from "../platform/host";
 import { csvWithCaution } from "../exports";
 import { SweepHeatmap, SweepLineChart } from "./charts";
@@ -133,7 +134,7 @@ export function SweepSection({
           <button type="button" aria-pressed={view === "table"} onClick={() => setView("table")} data-command="sweep-table">
             Table
           </button>
-          <button type="button" onClick={() => exportSweepCsv(result, setProblem)} data-command="sweep-csv">
+          <button type="button" onClick={() => exportSweepCsv(result, scenario, setProblem)} data-command="sweep-csv">
             Export CSV
           </button>
         </div>
@@ -194,9 +195,10 @@ function heatAxis(a: SweepAxis, unitSystem: UnitSystem) {
 }
 
 /** The sweep as CSV, the same columns as `brinefield sweep --csv` (varied inputs in SI), opened by the caution. */
-function exportSweepCsv(result: { axes: SweepAxis[]; rows: SweepRow[] }, onProblem: (m: string | null) => void) {
+function exportSweepCsv(result: { axes: SweepAxis[]; rows: SweepRow[] }, scenario: Scenario | null, onProblem: (m: string | null) => void) {
   const { columns, records } = sweepRecords(result.axes, result.rows);
-  void exportFile("brinefield-sweep.csv", csvWithCaution(csvFormatSafe(records, columns)), [{ name: "CSV", extensions: ["csv"] }]).catch(
+  const about = scenario ? { scenario: scenario.name, inputsHash: inputsHash(scenario) } : {};
+  void exportFile("brinefield-sweep.csv", csvWithCaution(flatRowsCsv(records, columns), undefined, about), [{ name: "CSV", extensions: ["csv"] }]).catch(
     (error: unknown) => onProblem(`Could not export: ${error instanceof Error ? error.message : String(error)}`),
   );
 }

@@ -10,7 +10,8 @@ import type { Scenario } from "../../core/scenario/types";
 import type { UnitSystem } from "../../core/units";
 import { buildPlumeScene, type PlumeSceneOutput } from "./plumeScene";
 import { azimuthToEastNorth } from "./plumeGeometry";
-import { DilutionLegend } from "./DilutionLegend";
+import { DilutionLegend, type LegendContent } from "./DilutionLegend";
+import { Compass, screenBearing } from "./Compass";
 
 export type ViewPreset = "perspective" | "side" | "plan" | "overview";
 
@@ -90,7 +91,9 @@ export function PlumeView(props: PlumeViewProps) {
   const presetRef = useRef<ViewPreset>("perspective");
   const placedForDocument = useRef<number | undefined>(documentKey);
   const [failure, setFailure] = useState<string | null>(null);
-  const [legend, setLegend] = useState<{ domain: PlumeSceneOutput["domain"]; notes: readonly string[] } | null>(null);
+  const [legend, setLegend] = useState<LegendContent | null>(null);
+  const [current, setCurrent] = useState<PlumeSceneOutput["current"]>(null);
+  const compassRef = useRef<SVGSVGElement | null>(null);
 
   const render = useCallback(() => {
     const stage = stageRef.current;
@@ -98,6 +101,19 @@ export function PlumeView(props: PlumeViewProps) {
     stage.frame = requestAnimationFrame(() => {
       stage.frame = 0;
       stage.renderer.render(stage.scene, stage.camera);
+      // The compass turns with the camera: north and the current as they point on screen.
+      const compass = compassRef.current;
+      if (compass && stage.content) {
+        const canvas = stage.renderer.domElement;
+        const north = screenBearing(stage.camera, stage.controls.target, 0, canvas.clientWidth, canvas.clientHeight);
+        if (north !== null) {
+          compass.style.setProperty("--north", `${north}deg`);
+          canvas.dataset.northBearing = north.toFixed(1);
+        }
+        const flow = stage.content.current;
+        const towards = flow ? screenBearing(stage.camera, stage.controls.target, flow.toward, canvas.clientWidth, canvas.clientHeight) : null;
+        if (towards !== null) compass.style.setProperty("--current", `${towards}deg`);
+      }
       if (stage.content && !firstFrameSent.current) {
         firstFrameSent.current = true;
         onFirstFrameRef.current?.();
@@ -184,7 +200,8 @@ export function PlumeView(props: PlumeViewProps) {
     if (newDocument) presetRef.current = "perspective";
     if (!previous || rescaled || newDocument) placeCamera(stage, presetRef.current);
     placedForDocument.current = documentKey;
-    setLegend({ domain: content.domain, notes: content.notes });
+    setLegend({ domain: content.domain, notes: content.notes, drawn: content.drawn, unitSystem });
+    setCurrent(content.current);
     render();
     // documentKey is read through placedForDocument; a new key alone (old result) must not re-place.
     // eslint-disable-next-line react-hooks/exhaustive-deps
@@ -223,17 +240,18 @@ export function PlumeView(props: PlumeViewProps) {
 
   return (
     <div className={compact ? "plume-view compact" : "plume-view"}>
-      <div className="plume-canvas-host" ref={hostRef} />
-      {failure ? <div className="plume-failure" role="alert">{failure}</div> : null}
       {!compact ? (
         <div className="plume-toolbar" role="toolbar" aria-label="3D view">
           <button type="button" onClick={() => choose("perspective")} title="Reset the view (R)">Reset</button>
-          <button type="button" onClick={() => choose("side")}>Side</button>
-          <button type="button" onClick={() => choose("plan")}>Plan</button>
-          <button type="button" onClick={() => choose("overview")}>Mixing zone</button>
+          <button type="button" onClick={() => choose("side")} title="Side view (S)">Side</button>
+          <button type="button" onClick={() => choose("plan")} title="Plan view (P)">Plan</button>
+          <button type="button" onClick={() => choose("overview")} title="The whole mixing zone and any area where the limit is exceeded (M)">Mixing zone</button>
         </div>
       ) : null}
-      {legend ? <DilutionLegend domain={legend.domain} notes={compact ? [] : legend.notes} /> : null}
+      <div className="plume-canvas-host" ref={hostRef} />
+      {failure ? <div className="plume-failure" role="alert">{failure}</div> : null}
+      <Compass ref={compassRef} current={current} unitSystem={unitSystem} />
+      {legend ? <DilutionLegend content={compact ? { ...legend, notes: [] } : legend} /> : null}
     </div>
   );
 }

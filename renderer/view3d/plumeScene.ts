@@ -10,7 +10,6 @@ import {
   CanvasTexture,
   CircleGeometry,
   Color,
-  ConeGeometry,
   CylinderGeometry,
   DoubleSide,
   Group,
@@ -67,6 +66,15 @@ export interface PlumeSceneOutput {
   readonly depth: number;
   /** Plain notes shown under the view (what is approximated in the drawing). */
   readonly notes: readonly string[];
+  /** What the scene draws, for a legend that lists only that (distances in m). */
+  readonly drawn: {
+    readonly spreadingLayer: boolean;
+    readonly mixingZoneRadius: number;
+    /** Distance out to which the governing limit is exceeded, when that ring is drawn. */
+    readonly exceedance: number | null;
+  };
+  /** Plan directions the view's compass shows: the current (toward, degrees from north) when there is one. */
+  readonly current: { readonly toward: number; readonly speed: number } | null;
   dispose(): void;
 }
 
@@ -77,8 +85,6 @@ const COLOURS = {
   diffuser: 0x3b3f45,
   mixingZone: 0xd9822b,
   exceedance: 0xc0392b,
-  current: 0x1f5f99,
-  north: 0x333333,
 };
 
 /** Round step (1, 2, 5 × 10ⁿ) so that `span` holds about `count` steps. */
@@ -92,7 +98,7 @@ export function niceStep(span: number, count: number): number {
 /** Label height as a fraction of the distance to the camera: labels keep one screen size at any zoom. */
 const LABEL_SCREEN_HEIGHT = 0.026;
 
-function textSprite(text: string, scale = 1, colour = "#1d2733"): Sprite {
+function textSprite(text: string, scale = 1, colour = "#1d2733", onTop = true): Sprite {
   const heightWorld = LABEL_SCREEN_HEIGHT * scale;
   const fontPx = 48;
   if (typeof document === "undefined") {
@@ -121,27 +127,13 @@ function textSprite(text: string, scale = 1, colour = "#1d2733"): Sprite {
   }
   const texture = new CanvasTexture(canvas);
   texture.colorSpace = SRGBColorSpace;
-  const material = new SpriteMaterial({ map: texture, depthTest: false, transparent: true, sizeAttenuation: false });
+  // Labels of the seabed grid are hidden behind the jets (depth-tested), so none floats over the plume.
+  const material = new SpriteMaterial({ map: texture, depthTest: !onTop, transparent: true, sizeAttenuation: false });
   const sprite = new Sprite(material);
   sprite.scale.set((heightWorld * canvas.width) / canvas.height, heightWorld, 1);
   sprite.renderOrder = 10;
   sprite.name = `label:${text}`;
   return sprite;
-}
-
-/** A solid arrow (shaft and head) that stays visible at any zoom, unlike a one-pixel line. */
-function solidArrow(from: Vector3, direction: Vector3, length: number, colour: number, track: <T extends { dispose(): void }>(item: T) => T): Group {
-  const arrow = new Group();
-  const material = track(new MeshLambertMaterial({ color: colour }));
-  const head = length * 0.28;
-  const shaft = new Mesh(track(new CylinderGeometry(length * 0.025, length * 0.025, length - head, 10)), material);
-  shaft.position.y = (length - head) / 2;
-  const cone = new Mesh(track(new ConeGeometry(length * 0.09, head, 16)), material);
-  cone.position.y = length - head / 2;
-  arrow.add(shaft, cone);
-  arrow.position.copy(from);
-  arrow.quaternion.setFromUnitVectors(new Vector3(0, 1, 0), direction.clone().normalize());
-  return arrow;
 }
 
 function lineFrom(points: Vector3[], material: LineBasicMaterial | LineDashedMaterial): Line {
@@ -204,7 +196,11 @@ export function buildPlumeScene(input: PlumeSceneInput): PlumeSceneOutput {
 
   const reach = path.reduce((m, p) => Math.max(m, Math.hypot(p.x, p.y)), 0);
   const diffuserHalf = diffuser.length / 2;
-  const extent = Math.max(mzRadius * 1.12 + (ports.length > 1 ? diffuserHalf : 0), reach * 1.6 + diffuserHalf, depth * 1.5, 10);
+  // The seabed patch holds everything drawn on it: the mixing zone and any area where the limit is exceeded.
+  const exceed = result.mixingZone.footprint.furthestExtent;
+  const drawnExceedance = exceed > 0 && Number.isFinite(exceed) ? exceed : null;
+  const outerRadius = Math.max(mzRadius, drawnExceedance ?? 0);
+  const extent = Math.max(outerRadius * 1.12 + (ports.length > 1 ? diffuserHalf : 0), reach * 1.6 + diffuserHalf, depth * 1.5, 10);
 
   // Seabed and grid.
   const seabed = new Mesh(
@@ -229,7 +225,7 @@ export function buildPlumeScene(input: PlumeSceneInput): PlumeSceneOutput {
     if (k === 0) continue;
     const east = k * step;
     const north = -step;
-    const label = textSprite(`${formatNumber(Math.abs(k) * stepDisplay)} ${unitLabel}`, 0.85, "#4a4236");
+    const label = textSprite(`${formatNumber(Math.abs(k) * stepDisplay)} ${unitLabel}`, 0.85, "#4a4236", false);
     label.position.copy(worldToScene({ x: east, y: north, z: seabedHeight(east, north, bed.depth, bed.slope, bed.slopeAzimuth) + labelHeight }));
     trackSprite(label);
     group.add(label);
@@ -328,7 +324,8 @@ export function buildPlumeScene(input: PlumeSceneInput): PlumeSceneOutput {
   const layer = series.distance
     .map((d, i) => ({ d, h: series.layerThickness[i], s: series.dilution[i] }))
     .filter((p): p is { d: number; h: number; s: number } => p.h !== null && Number.isFinite(p.h) && p.d <= mzRadius * 1.0001 && p.d > 0);
-  if (layer.length >= 2) {
+  const layerDrawn = layer.length >= 2;
+  if (layerDrawn) {
     const sheet = new Mesh(
       track(
         annulusGeometry({
@@ -354,45 +351,18 @@ export function buildPlumeScene(input: PlumeSceneInput): PlumeSceneOutput {
   const mzLine = lineFrom(outline(mzRadius), track(new LineBasicMaterial({ color: COLOURS.mixingZone, linewidth: 2 })));
   mzLine.name = "mixing-zone-edge";
   group.add(mzLine);
-  const mzDisplay = siToDisplay(mzRadius, "length", unitSystem);
-  const mzLabel = textSprite(`mixing-zone edge ${formatNumber(mzDisplay.value, 3)} ${mzDisplay.unit}`, 1, "#9a5410");
-  const mzLabelAt = azimuthToEastNorth(diffuser.diffuserAzimuth + 90);
-  mzLabel.position.copy(worldToScene({ x: mzLabelAt.east * mzRadius, y: mzLabelAt.north * mzRadius, z: -depth + labelHeight * 1.5 }));
-  trackSprite(mzLabel);
-  group.add(mzLabel);
-  const exceed = result.mixingZone.footprint.furthestExtent;
-  if (exceed > 0 && Number.isFinite(exceed)) {
-    const ring = lineFrom(outline(exceed), track(new LineDashedMaterial({ color: COLOURS.exceedance, dashSize: extent * 0.02, gapSize: extent * 0.012 })));
+  // The edge's radius and the exceedance distance are named in the legend, not on the drawing, where a
+  // label could run off the view or under its controls.
+  if (drawnExceedance !== null) {
+    const ring = lineFrom(outline(drawnExceedance), track(new LineDashedMaterial({ color: COLOURS.exceedance, dashSize: extent * 0.02, gapSize: extent * 0.012 })));
     ring.name = "limit-exceedance";
     group.add(ring);
   }
 
-  // Current arrow near the surface, north arrow in a corner of the seabed.
-  const arrowLength = extent * 0.22;
+  // North and the current are shown by the view's compass (an overlay that turns with the camera and is
+  // never cut off by the edge of the view); the scene draws neither.
   const speed = scenario.ambient.currentSpeed;
-  const currentText = siToDisplay(speed, "speed", unitSystem);
-  if (speed > 0) {
-    const dir = azimuthToEastNorth(scenario.ambient.currentDirection);
-    const from = worldToScene({ x: -dir.east * arrowLength * 0.5 - extent * 0.55, y: -dir.north * arrowLength * 0.5 + extent * 0.55, z: -depth * 0.15 });
-    const direction = worldToScene({ x: dir.east, y: dir.north, z: 0 }).normalize();
-    const arrow = solidArrow(from, direction, arrowLength, COLOURS.current, track);
-    arrow.name = "current-arrow";
-    group.add(arrow);
-    const label = textSprite(`current ${formatNumber(currentText.value, 3)} ${currentText.unit}`, 1, "#1f5f99");
-    label.position.copy(from).addScaledVector(direction, arrowLength * 0.5).add(new Vector3(0, labelHeight * 1.2, 0));
-    trackSprite(label);
-    group.add(label);
-  } else {
-    notes.push("Still water (no current).");
-  }
-  const northFrom = worldToScene({ x: -extent * 0.85, y: -extent * 0.85, z: seabedHeight(-extent * 0.85, -extent * 0.85, bed.depth, bed.slope, bed.slopeAzimuth) + lift * 10 });
-  const north = solidArrow(northFrom, new Vector3(0, 0, -1), extent * 0.14, COLOURS.north, track);
-  north.name = "north-arrow";
-  group.add(north);
-  const nLabel = textSprite("N", 1.2, "#111");
-  nLabel.position.copy(northFrom).add(new Vector3(0, labelHeight, -extent * 0.17));
-  trackSprite(nLabel);
-  group.add(nLabel);
+  if (!(speed > 0)) notes.push("Still water (no current).");
 
   // Camera focus: the jets and their impact spots.
   const focusPoints: Vector3[] = [];
@@ -425,6 +395,8 @@ export function buildPlumeScene(input: PlumeSceneInput): PlumeSceneOutput {
     heading: computedAzimuth,
     depth,
     notes,
+    drawn: { spreadingLayer: layerDrawn, mixingZoneRadius: mzRadius, exceedance: drawnExceedance },
+    current: speed > 0 ? { toward: scenario.ambient.currentDirection, speed } : null,
     dispose: () => {
       for (const d of disposables) d.dispose();
     },

@@ -97,6 +97,15 @@ describe("the report printed to PDF", () => {
     }
   });
 
+  it("is a tagged PDF with a document outline (structure for screen readers, bookmarks per section)", () => {
+    // pdfinfo (poppler-utils) reports "Tagged: yes" when the document has a structure tree (ISO 32000-1, 14.8).
+    const info = execFileSync("pdfinfo", [join(dir, "report.pdf")], { encoding: "utf8" });
+    expect(info, "tagged").toMatch(/^Tagged:\s+yes$/m);
+    const outline = execFileSync("pdfinfo", ["-dests", join(dir, "report.pdf")], { encoding: "utf8" });
+    expect(Buffer.from(pdf).toString("latin1"), "an outline dictionary").toMatch(/\/Outlines\s+\d+\s+0\s+R/);
+    expect(outline.length, "named destinations listed").toBeGreaterThan(0);
+  });
+
   it("has no blank page: every page carries text or figures, none is solid ink", () => {
     pages.forEach((p, i) => {
       const ink = inkFraction(p, 200);

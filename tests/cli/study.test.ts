@@ -143,10 +143,11 @@ describe("brinefield sweep", () => {
     }
     const text = f.files.get("out.csv")!;
     expect(text.startsWith('"Caution:'), "the CSV opens with the caution").toBe(true);
+    expect(text.split("\n")[0], "the first row names the scenario and its inputs hash").toMatch(/,scenario: .+,inputsHash: [0-9a-f]+/);
     const csv = csvParse(text.replace(/^.*\n/, "")); // the table follows the caution row
     expect(csv.length, "one CSV row per point").toBe(3);
-    expect(csv.columns.slice(0, 3), "CSV columns").toEqual(
-      ["ambient.depth", "governingCase", "edgeDilution"],
+    expect(csv.columns.slice(0, 3), "CSV columns: keys with units, as every Brinefield CSV").toEqual(
+      ["ambient.depth (m)", "governingCase", "edgeDilution (-)"],
     );
   });
 

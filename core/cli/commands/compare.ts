@@ -1,7 +1,7 @@
 /** `brinefield compare`: a study's variants side by side, per ambient case and worst case. */
 import { dirname, isAbsolute, join } from "node:path";
 import { caseWorkUnits, workIssue } from "../../study/budget";
-import { csvFormatSafe, csvWithCaution } from "../../report/csv";
+import { csvWithCaution, flatRowsCsv } from "../../report/csv";
 import { CliError, type CliCommand, type CliIO } from "../command";
 import { readArgs } from "../args";
 import { loadJsonFile } from "../load";
@@ -88,7 +88,7 @@ async function run(argv: readonly string[], io: CliIO): Promise<number> {
     flat = sorted;
   }
   const columns = columnsOf(flat);
-  if (values.csv) await io.writeFile(values.csv, csvWithCaution(csvFormatSafe(flat, columns)));
+  if (values.csv) await io.writeFile(values.csv, csvWithCaution(flatRowsCsv(flat, columns), undefined, { study: st.study.name }));
   const notes = v.variants.map((x) =>
     x.scenario ? `${x.name}: ${describeCases(expandCases(x.scenario), x.scenario)}` : `${x.name}: refused — ${(x.refused ?? []).join("; ")}`,
   );

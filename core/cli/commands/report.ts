@@ -15,7 +15,7 @@ import type { Scenario } from "../../scenario/types";
 import { runScenario } from "../../pipeline";
 import type { BrinefieldResult } from "../../result/contract";
 import { reportHtml, resultCsv, seriesCsv, studyReportHtml, studyResultCsv, studySeriesCsv } from "../../report";
-import { csvWithCaution } from "../../report/csv";
+import { aboutResult, csvWithCaution, type CsvAbout } from "../../report/csv";
 import type { StudyReportVariant } from "../../report";
 import { checkClaimOnScenario } from "../../compliance/claim-run";
 import type { ClaimCheck } from "../../compliance/claim";
@@ -141,6 +141,7 @@ export const command: CliCommand = {
     let csv: string;
     let series: string;
     let json: string;
+    let about: CsvAbout;
 
     if (format === "brinefield-study") {
       const parsed = parseStudy(file);
@@ -176,6 +177,7 @@ export const command: CliCommand = {
         { name: study.name, description: study.description, studyText: text, variants },
         { view3dPngs: pngs, view3dNote: note, generatedAt },
       );
+      about = { study: study.name };
       csv = studyResultCsv(variants);
       series = studySeriesCsv(variants);
       json = JSON.stringify(variants.map((v) => ({ variant: v.name, result: v.result })), null, 2) + "\n";
@@ -191,6 +193,7 @@ export const command: CliCommand = {
       }
       const shot = want3d ? await tryCapture3d(text, io) : { note: "it was turned off (--no-3d)" };
       html = reportHtml(result, { scenarioFile: file, scenarioText: text }, { view3dPng: shot.png, view3dNote: shot.note, uncertainty, claim, generatedAt });
+      about = aboutResult(result);
       csv = resultCsv(result);
       series = seriesCsv(result);
       json = JSON.stringify(result, null, 2) + "\n";
@@ -201,11 +204,11 @@ export const command: CliCommand = {
     await io.writeFile(out, html);
     written.push({ path: out, what: "HTML report" });
     if (values.csv) {
-      await io.writeFile(values.csv, csvWithCaution(csv));
+      await io.writeFile(values.csv, csvWithCaution(csv, undefined, about));
       written.push({ path: values.csv, what: "key results CSV" });
     }
     if (values["series-csv"]) {
-      await io.writeFile(values["series-csv"], csvWithCaution(series));
+      await io.writeFile(values["series-csv"], csvWithCaution(series, undefined, about));
       written.push({ path: values["series-csv"], what: "dilution series CSV" });
     }
     if (values.json) {

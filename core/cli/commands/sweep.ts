@@ -1,7 +1,8 @@
 /** `brinefield sweep`: vary one or two inputs over a range and tabulate the verdict at each point. */
 import { dirname, isAbsolute, join } from "node:path";
 import { sweepPointsIssue, workIssue } from "../../study/budget";
-import { csvFormatSafe, csvWithCaution } from "../../report/csv";
+import { csvWithCaution, flatRowsCsv } from "../../report/csv";
+import { inputsHash } from "../../scenario/hash";
 import { CliError, type CliCommand, type CliIO } from "../command";
 import { readArgs } from "../args";
 import { formatIssues, loadJsonFile } from "../load";
@@ -132,7 +133,7 @@ async function run(argv: readonly string[], io: CliIO): Promise<number> {
   const tally = `Points: ${rows.length} — meets ${counts.meets}, exceeds ${counts.exceeds}, outside-scope ${counts["outside-scope"]}, refused ${counts.refused}.`;
   const { columns: cols, records: flat } = sweepRecords(axes, rows);
   if (values.csv) {
-    await io.writeFile(values.csv, csvWithCaution(csvFormatSafe(flat, cols)));
+    await io.writeFile(values.csv, csvWithCaution(flatRowsCsv(flat as Record<string, unknown>[], cols), undefined, { scenario: scenario.name, inputsHash: inputsHash(scenario) }));
   }
   const crossingText = crossings.map((c) => {
     const [a, b] = c.between;

@@ -1,6 +1,7 @@
 /**
- * resultCsv() and seriesCsv() — CSV exports parse back (d3-dsv csvParse) to exactly the result's numbers:
- * one row per near-field method and per constituent at the edge, and one row per series point.
+ * resultCsv() and seriesCsv() — CSV exports parse back (d3-dsv csvParse) to the result's numbers at the
+ * CSV precision (6 significant figures): one row per near-field method and per constituent at the edge,
+ * and one row per series point. Column names carry their unit: "impactDistance (m)".
  */
 import { describe, expect, it, beforeAll } from "vitest";
 import { csvParse } from "d3-dsv";
@@ -20,6 +21,11 @@ function back(cell: string | undefined): number | null {
   return cell === undefined || cell === "" ? null : Number(cell);
 }
 
+/** The value as a CSV writes it: 6 significant figures (CSV_SIGNIFICANT). */
+function at6(value: number | null | undefined): number | null {
+  return value === null || value === undefined || !Number.isFinite(value) ? null : Number(value.toPrecision(6));
+}
+
 describe("resultCsv()", () => {
   it("has the documented columns, one row per near-field method, per constituent, per ambient case and the overall verdict", () => {
     for (const { name, json } of results) {
@@ -28,7 +34,7 @@ describe("resultCsv()", () => {
       expect(rows.length, `${name}: row count`).toBe(json.nearField.length + json.mixingZone.constituents.length + json.cases.length + 1);
       const overall = rows.find((r) => r.section === "overall")!;
       expect(overall.verdict, `${name}: overall verdict as run --json`).toBe(json.overall.verdict);
-      expect(back(overall.margin), `${name}: overall margin as run --json`).toBe(json.overall.margin);
+      expect(back(overall["margin (-)"]), `${name}: overall margin as run --json`).toBe(at6(json.overall.margin));
       for (const r of rows.filter((x) => x.verdict)) {
         expect(["meets", "exceeds", "outside-scope"], `${name}: verdict word`).toContain(r.verdict);
         expect(r.pass, `${name}: pass only for meets`).toBe(String(r.verdict === "meets"));
@@ -36,37 +42,37 @@ describe("resultCsv()", () => {
     }
   });
 
-  it("parses back to exactly the near-field numbers of run --json", () => {
+  it("parses back to the near-field numbers of run --json at 6 significant figures", () => {
     for (const { name, json } of results) {
       const rows = csvParse(resultCsv(json)).filter((r) => r.section === "near-field");
       json.nearField.forEach((m, i) => {
         const row = rows[i]!;
         expect(row.name, `${name}: method order`).toBe(m.method);
         expect(row.source, `${name}: source text kept`).toBe(m.source);
-        expect(back(row.max_rise_height_m), `${name} ${m.method}: max rise`).toBe(m.maxRiseHeight);
-        expect(back(row.return_distance_m), `${name} ${m.method}: return distance`).toBe(m.returnDistance);
-        expect(back(row.impact_distance_m), `${name} ${m.method}: impact distance`).toBe(m.impactDistance);
-        expect(back(row.impact_dilution), `${name} ${m.method}: impact dilution`).toBe(m.impactDilution);
-        expect(back(row.impact_dilution_low), `${name} ${m.method}: range low`).toBe(m.dilutionRange?.[0] ?? null);
-        expect(back(row.impact_dilution_high), `${name} ${m.method}: range high`).toBe(m.dilutionRange?.[1] ?? null);
-        expect(back(row.near_field_dilution), `${name} ${m.method}: near-field dilution`).toBe(m.nearFieldDilution);
-        expect(back(row.entrained_flow_m3_s), `${name} ${m.method}: entrained flow`).toBe(m.entrainedFlow);
+        expect(back(row["maxRiseHeight (m)"]), `${name} ${m.method}: max rise`).toBe(at6(m.maxRiseHeight));
+        expect(back(row["returnDistance (m)"]), `${name} ${m.method}: return distance`).toBe(at6(m.returnDistance));
+        expect(back(row["impactDistance (m)"]), `${name} ${m.method}: impact distance`).toBe(at6(m.impactDistance));
+        expect(back(row["impactDilution (-)"]), `${name} ${m.method}: impact dilution`).toBe(at6(m.impactDilution));
+        expect(back(row["impactDilutionLow (-)"]), `${name} ${m.method}: range low`).toBe(at6(m.dilutionRange?.[0] ?? null));
+        expect(back(row["impactDilutionHigh (-)"]), `${name} ${m.method}: range high`).toBe(at6(m.dilutionRange?.[1] ?? null));
+        expect(back(row["nearFieldDilution (-)"]), `${name} ${m.method}: near-field dilution`).toBe(at6(m.nearFieldDilution));
+        expect(back(row["entrainedFlow (m3/s)"]), `${name} ${m.method}: entrained flow`).toBe(at6(m.entrainedFlow));
       });
     }
   });
 
-  it("parses back to exactly the edge concentrations and margins", () => {
+  it("parses back to the edge concentrations and margins at 6 significant figures", () => {
     for (const { name, json } of results) {
       const rows = csvParse(resultCsv(json)).filter((r) => r.section === "mixing-zone-edge");
       json.mixingZone.constituents.forEach((c, i) => {
         const row = rows[i]!;
         const check = json.compliance.constituents.find((k) => k.constituent === c.constituent);
         expect(row.name, `${name}: constituent order`).toBe(c.constituent);
-        expect(back(row.edge_dilution), `${name} ${c.constituent}: edge dilution`).toBe(json.mixingZone.dilution);
-        expect(back(row.edge_concentration), `${name} ${c.constituent}: concentration`).toBe(c.concentration);
-        expect(back(row.edge_increase), `${name} ${c.constituent}: increase`).toBe(c.increase);
-        expect(back(row.required_dilution), `${name} ${c.constituent}: required dilution`).toBe(check?.requiredDilution ?? null);
-        expect(back(row.margin), `${name} ${c.constituent}: margin`).toBe(check?.margin ?? null);
+        expect(back(row["edgeDilution (-)"]), `${name} ${c.constituent}: edge dilution`).toBe(at6(json.mixingZone.dilution));
+        expect(back(row["edgeConcentration (see unit)"]), `${name} ${c.constituent}: concentration`).toBe(at6(c.concentration));
+        expect(back(row["edgeIncrease (see unit)"]), `${name} ${c.constituent}: increase`).toBe(at6(c.increase));
+        expect(back(row["requiredDilution (-)"]), `${name} ${c.constituent}: required dilution`).toBe(at6(check?.requiredDilution ?? null));
+        expect(back(row["margin (-)"]), `${name} ${c.constituent}: margin`).toBe(at6(check?.margin ?? null));
         expect(row.pass, `${name} ${c.constituent}: verdict`).toBe(check ? String(check.pass) : "");
       });
     }
@@ -81,17 +87,17 @@ describe("resultCsv()", () => {
 });
 
 describe("seriesCsv()", () => {
-  it("parses back to exactly the dilution series, point by point", () => {
+  it("parses back to the dilution series at 6 significant figures, point by point", () => {
     for (const { name, json } of results) {
       const s = json.mixingZone.series;
       const rows = csvParse(seriesCsv(json));
       expect(rows.columns, `${name}: columns`).toEqual([...SERIES_CSV_COLUMNS]);
       expect(rows.length, `${name}: one row per point`).toBe(s.distance.length);
       rows.forEach((row, i) => {
-        expect(back(row.distance_m), `${name}: distance ${i}`).toBe(s.distance[i]);
-        expect(back(row.dilution), `${name}: dilution ${i}`).toBe(s.dilution[i]);
-        expect(back(row.salinity_increase_g_kg), `${name}: salinity increase ${i}`).toBe(s.salinityIncrease[i]);
-        expect(back(row.layer_thickness_m), `${name}: layer thickness ${i}`).toBe(s.layerThickness[i] ?? null);
+        expect(back(row["distance (m)"]), `${name}: distance ${i}`).toBe(at6(s.distance[i]));
+        expect(back(row["dilution (-)"]), `${name}: dilution ${i}`).toBe(at6(s.dilution[i]));
+        expect(back(row["salinityIncrease (g/kg)"]), `${name}: salinity increase ${i}`).toBe(at6(s.salinityIncrease[i]));
+        expect(back(row["layerThickness (m)"]), `${name}: layer thickness ${i}`).toBe(at6(s.layerThickness[i] ?? null));
         expect(row.stage, `${name}: stage ${i}`).toBe(s.stage[i]);
       });
     }
@@ -99,14 +105,14 @@ describe("seriesCsv()", () => {
 });
 
 describe("studyResultCsv()", () => {
-  it("puts each variant's rows under its name, numbers unchanged", () => {
+  it("puts each variant's rows under its name, numbers as in its own CSV", () => {
     const variants = results.map((r) => ({ name: r.name, result: r.json }));
     const rows = csvParse(studyResultCsv(variants));
     expect(rows.columns[0], "variant first").toBe("variant");
     for (const v of variants) {
       const mine = rows.filter((r) => r.variant === v.name && r.section === "near-field");
       expect(mine.length, `${v.name}: one row per method`).toBe(v.result.nearField.length);
-      mine.forEach((row, i) => expect(back(row.impact_dilution), `${v.name}: impact dilution`).toBe(v.result.nearField[i]!.impactDilution));
+      mine.forEach((row, i) => expect(back(row["impactDilution (-)"]), `${v.name}: impact dilution`).toBe(at6(v.result.nearField[i]!.impactDilution)));
     }
   });
 });
@@ -133,5 +139,32 @@ describe("CSV cells are never run as spreadsheet formulas", () => {
     const csv = csvFormatSafe([{ name: "=cmd|' /C calc'!A0", margin: -0.25 }], ["name", "margin"]);
     expect(csv.split("\n")[1], "row").toBe("'=cmd|' /C calc'!A0,-0.25");
     expect(csvSafeCell(csvSafeCell("=x")), "neutralising twice changes nothing more").toBe("'=x");
+  });
+});
+
+describe("one CSV convention for every export", () => {
+  it("writes numbers to 6 significant figures, without exponent for ordinary magnitudes", async () => {
+    const { csvNumber } = await import("../../../core/report/csv");
+    expect(csvNumber(0.05787037037037037), "m³/s of 5000 m³/d").toBe("0.0578704");
+    expect(csvNumber(237.41234567), "a dilution").toBe("237.412");
+    expect(csvNumber(150000), "a whole number").toBe("150000");
+    expect(csvNumber(1.234567e-7), "a tiny number").toBe("1.23457e-7");
+    expect(csvNumber(Number.NaN), "not a number is an empty cell").toBe("");
+  });
+  it("names the unit of numbers in the header by the column's key", async () => {
+    const { unitOfKey } = await import("../../../core/report/csv");
+    expect(unitOfKey("ambient.depth"), "a scenario path takes its field's SI unit").toBe("m");
+    expect(unitOfKey("discharge.flow"), "flow").toBe("m3/s");
+    expect(unitOfKey("edgeDilution"), "dimensionless").toBe("-");
+    expect(unitOfKey("lengthScaleMaxRise"), "a method's rise").toBe("m");
+    expect(unitOfKey("verdict"), "text has no unit").toBeUndefined();
+  });
+  it("puts the scenario name and inputs hash beside the caution on the first row", async () => {
+    const { csvWithCaution, aboutResult } = await import("../../../core/report/csv");
+    const { csvParseRows } = await import("d3-dsv");
+    const { json } = results[0]!;
+    const first = csvParseRows(csvWithCaution(seriesCsv(json), json.caution, aboutResult(json)))[0]!;
+    expect(first[0]!.startsWith("Caution"), "caution first").toBe(true);
+    expect(first.slice(1), "what it was computed from").toEqual([`scenario: ${json.scenarioName}`, `inputsHash: ${json.inputsHash}`]);
   });
 });

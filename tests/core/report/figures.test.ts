@@ -5,6 +5,7 @@
  */
 import { describe, expect, it } from "vitest";
 import { linearTicks, logTicks, sideViewSvg, sideViewKeyPoints, sideViewPath, dilutionChartSvg } from "../../../core/report";
+import { sideViewScales } from "../../../core/report/figures";
 import type { NearFieldMethodResult } from "../../../core/nearfield/types";
 import type { MixingZoneResult } from "../../../core/result/contract";
 
@@ -88,6 +89,29 @@ describe("sideViewSvg()", () => {
     expect(svg, "no NaN coordinates").not.toContain("NaN");
   });
 
+  it("keeps the jet's proportions: true scale when it fits, never squashed below half nor stretched beyond ×2", () => {
+    // Plotting convention, common practice, no source: a side view at true scale shows the jet's true
+    // angles; the figure states any exaggeration it uses.
+    const square = sideViewScales(14, 15);
+    expect(square.exaggeration, "a 14 m reach in 15 m of water: true scale").toBeCloseTo(1, 6);
+    const deep = sideViewScales(11, 20);
+    expect(deep.exaggeration, "short jet in deep water: narrowed, not squashed").toBeGreaterThanOrEqual(0.5);
+    expect(deep.exaggeration, "and not stretched").toBeLessThanOrEqual(1);
+    const shallow = sideViewScales(60, 4);
+    expect(shallow.exaggeration, "long jet in shallow water: stretched at most ×2").toBeLessThanOrEqual(2 + 1e-9);
+    expect(shallow.height, "and its plot made lower").toBeLessThan(300);
+    const svg = sideViewSvg({ nearField: [lengthScale, integral], depth: 10, portHeight: 1, portAngle: 60 });
+    expect(svg, "the figure says its scale").toMatch(/true scale|vertical exaggeration ×/);
+  });
+
+  it("puts its legend below the plot, not over the water", () => {
+    const svg = sideViewSvg({ nearField: [lengthScale, integral], depth: 10, portHeight: 1, portAngle: 60 });
+    const seabedY = Number(/<line x1="[\d.]+" y1="([\d.]+)" x2="[\d.]+" y2="[\d.]+" stroke="#7c6a3c"/.exec(svg)?.[1]);
+    const legendY = Number(/<text x="[\d.]+" y="([\d.]+)"[^>]*>integral: computed centreline/.exec(svg)?.[1]);
+    expect(Number.isFinite(seabedY) && Number.isFinite(legendY), "both found").toBe(true);
+    expect(legendY, "legend below the seabed line and the axis").toBeGreaterThan(seabedY + 30);
+  });
+
   it("draws both methods side by side", () => {
     const svg = sideViewSvg({ nearField: [lengthScale, integral], depth: 10, portHeight: 1, portAngle: 60 });
     expect(svg, "integral legend").toContain("integral: computed centreline");
@@ -112,5 +136,17 @@ describe("dilutionChartSvg()", () => {
     const empty = dilutionChartSvg({ mixingZone: mz({ series: { distance: [], dilution: [], salinityIncrease: [], layerThickness: [], stage: [] } }), requiredDilution: 10 });
     expect(empty, "valid svg").toMatch(/<\/svg>$/);
     expect(empty, "no NaN coordinates").not.toContain("NaN");
+  });
+});
+
+describe("multiportSketchSvg()", () => {
+  it("draws the three regimes and marks the result's own in words, not by colour alone", async () => {
+    const { multiportSketchSvg } = await import("../../../core/report/figures");
+    for (const regime of ["independent", "partially-merged", "merged-line-source"]) {
+      const svg = multiportSketchSvg(regime);
+      expect((svg.match(/— this design/g) ?? []).length, `${regime}: exactly one panel says "this design"`).toBe(1);
+      expect(svg, `${regime}: its panel is the one named`).toContain(`${regime.replace(/-/g, " ")} — this design`);
+      expect(svg, "no NaN coordinates").not.toContain("NaN");
+    }
   });
 });

@@ -12,8 +12,8 @@ import { parseScenario } from "../../../core/scenario/parse";
 import { checkClaimOnScenario } from "../../../core/compliance/claim-run";
 import { command } from "../../../core/cli/commands/report";
 import { CliError } from "../../../core/cli/command";
-import { resultCsv, seriesCsv, reportNumber } from "../../../core/report";
-import { csvWithCaution } from "../../../core/report/csv";
+import { resultCsv, seriesCsv, reportNumber, reportValue } from "../../../core/report";
+import { aboutResult, csvWithCaution } from "../../../core/report/csv";
 import type { BrinefieldResult } from "../../../core/result/contract";
 import { at, DEMO_DIR, memoryIO, ROOT, runJson, tableById, tracedNumbers } from "./helpers";
 
@@ -28,15 +28,16 @@ describe("brinefield report <scenario>", () => {
     const json = JSON.parse(io.files.get(join(ROOT, "r.json")) as string) as BrinefieldResult;
     expect(json, "--json file is run --json's result").toEqual(expected);
     // Written CSV files open with the caution on their first row, then the table.
-    expect(io.files.get(join(ROOT, "r.csv")), "results CSV").toBe(csvWithCaution(resultCsv(expected)));
-    expect(io.files.get(join(ROOT, "s.csv")), "series CSV").toBe(csvWithCaution(seriesCsv(expected)));
+    // The first row also says what the numbers were computed from: scenario name and inputs hash.
+    expect(io.files.get(join(ROOT, "r.csv")), "results CSV").toBe(csvWithCaution(resultCsv(expected), undefined, aboutResult(expected)));
+    expect(io.files.get(join(ROOT, "s.csv")), "series CSV").toBe(csvWithCaution(seriesCsv(expected), undefined, aboutResult(expected)));
     expect((io.files.get(join(ROOT, "r.csv")) as string).startsWith('"Caution:'), "caution first").toBe(true);
     const html = io.files.get(join(ROOT, "r.html")) as string;
     const cells = tracedNumbers(html);
     expect(cells.length, "numbers traced").toBeGreaterThan(40);
     for (const { path, text } of cells) {
       const v = at(expected, path);
-      expect(text, `report cell ${path} equals run --json formatted`).toBe(typeof v === "number" ? reportNumber(v) : "—");
+      expect(text, `report cell ${path} equals run --json formatted`).toBe(typeof v === "number" ? reportValue(path, v) : "—");
     }
     expect(html, "says why there is no 3D view").toContain("No 3D view is included: it was turned off (--no-3d).");
     expect(io.out.join(""), "lists what it wrote").toContain("wrote HTML report: r.html");

@@ -6,7 +6,7 @@
 import { describe, expect, it, beforeAll } from "vitest";
 import { readFileSync } from "node:fs";
 import { basename } from "node:path";
-import { reportHtml, REPORT_SECTIONS, reportNumber, escapeHtml, referencesFromSources, resultSources, secondaryQuotationsFor } from "../../../core/report";
+import { reportHtml, REPORT_SECTIONS, reportNumber, reportValue, escapeHtml, referencesFromSources, resultSources, secondaryQuotationsFor } from "../../../core/report";
 import { CAUTION, type BrinefieldResult } from "../../../core/result/contract";
 import { parseScenario } from "../../../core/scenario/parse";
 import { runScenario } from "../../../core/pipeline";
@@ -79,13 +79,13 @@ describe("reportHtml() on the demo scenarios", () => {
     }
   });
 
-  it("prints every traced number exactly as run --json gives it, formatted with reportNumber", () => {
+  it("prints every traced number exactly as run --json gives it, formatted with reportValue (densities to 0.01 kg/m³)", () => {
     for (const r of rendered) {
       const cells = tracedNumbers(r.html);
       expect(cells.length, `${r.name}: the results tables trace their numbers`).toBeGreaterThan(40);
       for (const { path, text } of cells) {
         const v = at(r.json, path);
-        const expected = typeof v === "number" ? reportNumber(v) : "—";
+        const expected = typeof v === "number" ? reportValue(path, v) : "—";
         expect(text, `${r.name}: ${path}`).toBe(expected);
       }
     }
@@ -281,5 +281,15 @@ describe("report appendix: how the methods compare with published experiments", 
     expect(rows, "one row per comparison").toBe(table.points.length);
     expect(html, "names Lai & Lee (2012)").toContain("Lai &amp; Lee (2012)");
     expect(html, "prints a ratio of the table").toContain(`<td class="num">${table.points[0]!.ratio.toFixed(2)}</td>`);
+  });
+});
+
+describe("densities", () => {
+  it("are printed to 0.01 kg/m³ by the report and by run, so the brine's excess density shows", async () => {
+    const { densityNumber } = await import("../../../core/report");
+    expect(densityNumber(1025.3127), "six significant figures here").toBe("1025.31");
+    for (const r of rendered) {
+      expect(r.html, `${r.name}: brine density`).toContain(`data-path="densities.discharge">${r.json.densities.discharge.toFixed(2)}</td>`);
+    }
   });
 });

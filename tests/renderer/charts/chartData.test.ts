@@ -41,9 +41,9 @@ describe("distanceSeries() and seriesCsv()", () => {
     const s = distanceSeries(result, "si");
     expect(s.length, "same length as core's series").toBe(result.mixingZone.series.distance.filter((_, i) => result.mixingZone.series.dilution[i] > 0).length);
   });
-  it("writes CSV with the units in the header", () => {
+  it("writes CSV with the same column keys as the CLI and the units in the header", () => {
     const csv = seriesCsv(result, "us");
-    expect(csv.split("\n")[0], "header").toBe("distance (ft),dilution,salinity increase (g/kg),layer thickness (ft),stage");
+    expect(csv.split("\n")[0], "header").toBe("distance (ft),dilution (-),salinityIncrease (g/kg),layerThickness (ft),stage");
     expect(csv.trim().split("\n").length, "a row per point").toBe(result.mixingZone.series.distance.length + 1);
   });
 });

@@ -78,6 +78,32 @@ describe("withoutPathPrefix() and issuesByPath()", () => {
     ]);
     expect(map.get("x"), "two messages at x").toEqual(["one", "two"]);
   });
+  it("shows a cross-field problem on the field just changed, naming its own field in words", () => {
+    const raw = { ...blankScenario() } as Record<string, any>;
+    raw.ambient = { ...raw.ambient, depth: 1 };
+    raw.diffuser = { ...raw.diffuser, portHeight: 2 };
+    const run = runFile(3, raw);
+    expect(run.ok, "a port above the surface is refused").toBe(false);
+    if (run.ok) return;
+    const byDepth = issuesByPath(run.issues, "ambient.depth");
+    expect(byDepth.get("ambient.depth")?.join(" "), "on the depth the user typed").toMatch(/^port height above the seabed 2 m: must leave the port below the surface/);
+    expect(byDepth.has("diffuser.portHeight"), "not also on the port height").toBe(false);
+    const byHeight = issuesByPath(run.issues, "diffuser.portHeight");
+    expect(byHeight.get("diffuser.portHeight")?.join(" "), "on the port height when that was typed").toMatch(/^2 must leave the port below the surface/);
+    const unrelated = issuesByPath(run.issues, "mixingZone.radius");
+    expect(unrelated.has("diffuser.portHeight"), "an unrelated edit leaves it at home").toBe(true);
+  });
+  it("shows a too-fast port jet on a flow typed as 12 MGD, not on the port diameter", () => {
+    const raw = { ...blankScenario() } as Record<string, any>;
+    raw.discharge = { ...raw.discharge, flow: "12 MGD" };
+    raw.diffuser = { ...raw.diffuser, portDiameter: 0.1, portCount: 1, layout: "single" };
+    const run = runFile(4, raw);
+    expect(run.ok, "0.53 m³/s through one 0.1 m port is refused").toBe(false);
+    if (run.ok) return;
+    const map = issuesByPath(run.issues, "discharge.flow");
+    expect(map.get("discharge.flow")?.join(" "), "on the flow").toMatch(/exit velocity/);
+    expect(map.has("diffuser.portDiameter"), "not on the diameter").toBe(false);
+  });
 });
 
 describe("exportBlocked()", () => {

@@ -8,8 +8,10 @@ import {
   displayText,
   displayUnit,
   enteredNote,
+  fieldView,
   formatQuantity,
   storedValueFromText,
+  storedValueInField,
 } from "../../../renderer/inputs/quantityText";
 
 describe("displayText()", () => {
@@ -73,5 +75,38 @@ describe("formatQuantity()", () => {
   it("names the unit of each kind", () => {
     expect(displayUnit("flow", "si"), "SI flow").toBe("m³/s");
     expect(displayUnit("temperature", "us"), "US temperature").toBe("°F");
+  });
+});
+
+describe("fieldView(): values stay in the unit they were entered in, with SI beside", () => {
+  it("shows a plant flow typed in m³/d in m³/d, with m³/s beside (1 d = 86 400 s)", () => {
+    const v = fieldView("5000 m^3/day", "flow", "si");
+    expect(v.text, "the number as entered").toBe("5000");
+    expect(v.unit, "the unit as entered, with a superscript").toBe("m³/day");
+    expect(v.beside, "5000/86400 m³/s beside").toBe("= 0.05787 m³/s");
+  });
+  it("keeps MLD, L/s and percent", () => {
+    expect(fieldView("40 MLD", "flow", "si"), "40 MLD = 40 000 m³ / 86 400 s").toMatchObject({ text: "40", unit: "MLD", beside: "= 0.463 m³/s" });
+    expect(fieldView("300 L/s", "flow", "si"), "300 L/s").toMatchObject({ text: "300", unit: "L/s", beside: "= 0.3 m³/s" });
+    expect(fieldView("45 %", "ratio", "si"), "45 % recovery").toMatchObject({ text: "45", unit: "%", beside: "= 0.45" });
+  });
+  it("lets values in the SI unit or the chosen system's unit follow the unit system", () => {
+    expect(fieldView("18 m", "length", "us"), "18 m shown in feet with US units").toMatchObject({ unit: "ft", beside: null });
+    expect(fieldView("12 MGD", "flow", "us"), "MGD is the US flow unit").toMatchObject({ text: "12", unit: "MGD", beside: null });
+    expect(fieldView(0.5, "flow", "si"), "a plain number").toMatchObject({ text: "0.5", unit: "m³/s", beside: null });
+  });
+  it("shows the US unit beside as well when US units are chosen", () => {
+    expect(fieldView("40 MLD", "flow", "us").beside, "SI and MGD (40 MLD = 10.567 MGD)").toBe("= 0.463 m³/s = 10.57 MGD");
+  });
+});
+
+describe("storedValueInField()", () => {
+  it("takes a plain number in the unit the field shows", () => {
+    expect(storedValueInField("6000", "flow", "si", "m^3/day"), "stays in m³/day").toBe("6000 m^3/day");
+    expect(storedValueInField("42", "ratio", "si", "%"), "stays in percent").toBe("42 %");
+  });
+  it("keeps a typed unit and plain SI numbers as before", () => {
+    expect(storedValueInField("0.4 m3/s", "flow", "si", "m^3/day"), "a new unit").toBe("0.4 m3/s");
+    expect(storedValueInField("0.4", "flow", "si", null), "plain SI").toBe(0.4);
   });
 });

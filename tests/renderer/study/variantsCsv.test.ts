@@ -17,23 +17,24 @@ const rows: FlatRow[] = [
 ];
 
 describe("variantsCsv()", () => {
-  it("opens with the caution, beginning \"Caution\", in one cell", () => {
-    const table = csvParseRows(variantsCsv(rows));
-    expect(table[0], "the caution row").toEqual([CAUTION]);
+  it("opens with the caution, beginning \"Caution\", in its first cell, and names the study", () => {
+    expect(csvParseRows(variantsCsv(rows))[0], "the caution row").toEqual([CAUTION]);
+    const table = csvParseRows(variantsCsv(rows, undefined, "Cove options"));
+    expect(table[0], "the caution row with the study").toEqual([CAUTION, "study: Cove options"]);
     expect(table[0][0].startsWith("Caution"), "begins with the word Caution").toBe(true);
   });
-  it("names the unit of every length column and leaves dilutions unitless", () => {
+  it("names the unit of every number column, '-' for dilutions, as every Brinefield CSV does", () => {
     const header = csvParseRows(variantsCsv(rows))[1];
     expect(header, "header row").toEqual([
       "variant",
       "case",
-      "edgeDilution",
-      "integralMaxRise_m",
-      "integralImpactDistance_m",
-      "integralImpactDilution",
+      "edgeDilution (-)",
+      "integralMaxRise (m)",
+      "integralImpactDistance (m)",
+      "integralImpactDilution (-)",
       "verdict",
     ]);
-    expect(csvColumnName("lengthScaleMaxRise"), "any method's rise").toBe("lengthScaleMaxRise_m");
+    expect(csvColumnName("lengthScaleMaxRise"), "any method's rise").toBe("lengthScaleMaxRise (m)");
   });
   it("writes the numbers as core gave them (metres) and empty cells for missing values", () => {
     const table = csvParseRows(variantsCsv(rows));
