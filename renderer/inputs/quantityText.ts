@@ -128,7 +128,13 @@ export function fieldView(
   significant = 4,
 ): { text: string; unit: string; beside: string | null; enteredIn: string | null } {
   const entered = enteredUnit(raw, kind, system);
-  if (!entered) return { text: displayText(raw, kind, system, significant), unit: displayUnit(kind, system), beside: null, enteredIn: null };
+  if (!entered) {
+    // With US units on, the SI value stands beside the US one.
+    const siUnit = displayUnit(kind, "si");
+    const si = system === "us" && displayUnit(kind, "us") !== siUnit ? quantityToSI(raw, kind) : null;
+    const beside = si && si.ok ? `= ${formatNumber(si.value, 4)}${siUnit ? ` ${siUnit}` : ""}` : null;
+    return { text: displayText(raw, kind, system, significant), unit: displayUnit(kind, system), beside, enteredIn: null };
+  }
   const si = quantityToSI(raw, kind);
   const parts: string[] = [];
   if (si.ok) {

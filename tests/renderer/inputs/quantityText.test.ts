@@ -91,8 +91,8 @@ describe("fieldView(): values stay in the unit they were entered in, with SI bes
     expect(fieldView("45 %", "ratio", "si"), "45 % recovery").toMatchObject({ text: "45", unit: "%", beside: "= 0.45" });
   });
   it("lets values in the SI unit or the chosen system's unit follow the unit system", () => {
-    expect(fieldView("18 m", "length", "us"), "18 m shown in feet with US units").toMatchObject({ unit: "ft", beside: null });
-    expect(fieldView("12 MGD", "flow", "us"), "MGD is the US flow unit").toMatchObject({ text: "12", unit: "MGD", beside: null });
+    expect(fieldView("18 m", "length", "us"), "18 m shown in feet with US units, SI beside").toMatchObject({ unit: "ft", beside: "= 18 m" });
+    expect(fieldView("12 MGD", "flow", "us"), "MGD is the US flow unit; 12 MGD = 0.5258 m³/s").toMatchObject({ text: "12", unit: "MGD", beside: "= 0.5258 m³/s" });
     expect(fieldView(0.5, "flow", "si"), "a plain number").toMatchObject({ text: "0.5", unit: "m³/s", beside: null });
   });
   it("shows the US unit beside as well when US units are chosen", () => {
