@@ -8,7 +8,9 @@ const RUNS = Number(process.env.BRINEFIELD_FUZZ_RUNS ?? 10_000);
 
 describe("fuzz", () => {
   it(`valid scenarios (${RUNS})`, () => {
-    fc.assert(fc.property(validScenarioFile, (raw) => checkValidScenario(raw)), { numRuns: RUNS });
+    fc.assert(fc.property(validScenarioFile, (raw) => {
+        checkValidScenario(raw);
+      }), { numRuns: RUNS });
   });
   it(`invalid scenarios (${RUNS})`, () => {
     fc.assert(fc.property(directDischargeFile, corruption, (raw, c) => checkInvalidScenario(raw, c)), { numRuns: RUNS });
