@@ -8,9 +8,12 @@ const RUNS = Number(process.env.BRINEFIELD_FUZZ_RUNS ?? 10_000);
 
 describe("fuzz", () => {
   it(`valid scenarios (${RUNS})`, () => {
-    fc.assert(fc.property(validScenarioFile, (raw) => {
+    fc.assert(
+      fc.property(validScenarioFile, (raw) => {
         checkValidScenario(raw);
-      }), { numRuns: RUNS });
+      }),
+      { numRuns: RUNS },
+    );
   });
   it(`invalid scenarios (${RUNS})`, () => {
     fc.assert(fc.property(directDischargeFile, corruption, (raw, c) => checkInvalidScenario(raw, c)), { numRuns: RUNS });
