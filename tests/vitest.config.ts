@@ -14,7 +14,8 @@ export default defineConfig({
           name: "unit",
           root,
           include: ["tests/**/*.test.ts", "tests/**/*.test.tsx"],
-          exclude: ["tests/browser/**", "tests/fuzz/**", "node_modules/**"],
+          // tests/mutation/ holds Stryker's sandbox copies of the tests while `npm run mutate` runs.
+          exclude: ["tests/browser/**", "tests/fuzz/**", "tests/mutation/**", "node_modules/**"],
           testTimeout: 30_000,
         },
       },

@@ -293,7 +293,11 @@ export function beyondNearField(input: BeyondInput): BeyondOutput {
       );
     }
     const far = farSeries(chain, farMethod);
-    if (!edgeInside) layerAtEdge = interpolate(far.distance, far.thickness, radius);
+    if (!edgeInside) {
+      const h = interpolate(far.distance, far.thickness, radius);
+      // Where the method gives no thickness at the edge (the layer has become passive), say so with null.
+      layerAtEdge = Number.isFinite(h) ? h : null;
+    }
     // Thin-layer check over the layer inside the mixing zone, the part the edge dilution rests on.
     const depth = scenario.ambient.depth;
     let thickest = 0;
@@ -301,6 +305,8 @@ export function beyondNearField(input: BeyondInput): BeyondOutput {
       const h = far.thickness[i]!;
       if (Number.isFinite(h) && h > thickest) thickest = h;
     }
+    // The edge lies between two computed points: its interpolated thickness counts too.
+    if (layerAtEdge !== null && layerAtEdge > thickest) thickest = layerAtEdge;
     if (!edgeInside && thickest >= depth) {
       // A layer as thick as the water is deep is no longer a thin bottom layer: outside the screening methods.
       warnings.push(

@@ -130,6 +130,9 @@ export function propertiesFromScenario(scenario: Scenario): PropertiesStage {
     }
   }
 
+  const inversion = staticInstability(depths, densities);
+  if (inversion) warnings.push(unstableColumnWarning(inversion));
+
   const column: AmbientColumn = {
     depth: waterDepth,
     depths,
@@ -156,4 +159,59 @@ export function propertiesFromScenario(scenario: Scenario): PropertiesStage {
     },
     warnings,
   };
+}
+
+/**
+ * Largest density inversion tolerated as measurement noise, kg/m³: about 0.1 °C or 0.03 g/kg in
+ * seawater, the order of a field profiler's repeatability (common practice, no source; from memory).
+ */
+export const DENSITY_INVERSION_TOLERANCE = 0.02;
+
+/** A statically unstable stretch of the column: deeper water lighter than shallower water. */
+export interface StaticInstability {
+  /** Largest density drop with depth, kg/m³ (potential densities at the port's pressure). */
+  readonly drop: number;
+  readonly upperDepth: number; // m below the surface
+  readonly lowerDepth: number; // m below the surface
+}
+
+/**
+ * The largest inversion in a column (depths ascending, potential densities at one reference pressure),
+ * or null when the column is stable or neutral within {@link DENSITY_INVERSION_TOLERANCE}. Compares
+ * every depth with the densest water above it, so an inversion spread over many small steps counts.
+ */
+export function staticInstability(depths: readonly number[], densities: readonly number[]): StaticInstability | null {
+  let worst: StaticInstability | null = null;
+  let densest = -Infinity;
+  let densestDepth = 0;
+  for (let i = 0; i < densities.length; i++) {
+    const rho = densities[i]!;
+    const drop = densest - rho;
+    if (drop > DENSITY_INVERSION_TOLERANCE && (worst === null || drop > worst.drop)) {
+      worst = { drop, upperDepth: densestDepth, lowerDepth: depths[i]! };
+    }
+    if (rho > densest) {
+      densest = rho;
+      densestDepth = depths[i]!;
+    }
+  }
+  return worst;
+}
+
+/**
+ * A statically unstable ambient column makes the case outside-scope ("serious", properties stage): such
+ * a column overturns by itself within minutes, so the stated profile cannot be the steady sea the
+ * dense-jet methods assume (they rest on experiments in uniform or stably stratified water, e.g.
+ * Roberts, Ferrier & Daviero 1997; the integral model's buoyancy terms would act with the wrong sign),
+ * and a profile like this is most often a typing or unit mistake.
+ */
+function unstableColumnWarning(u: StaticInstability): ResultWarning {
+  return warning(
+    "ambient-statically-unstable",
+    "serious",
+    `The ambient profile is statically unstable: water at ${u.lowerDepth} m depth is ${u.drop.toFixed(3)} kg/m³ lighter than ` +
+      `water at ${u.upperDepth} m above it. Such a column overturns by itself, and the dense-jet methods assume a stable or ` +
+      "neutral sea, so no verdict is given (outside-scope). Check the profile's depths, salinities and temperatures.",
+    { parameter: "ambient.profile", value: u.drop, range: [0, DENSITY_INVERSION_TOLERANCE], stage: "properties" },
+  );
 }

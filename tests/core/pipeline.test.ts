@@ -85,3 +85,53 @@ describe("runScenario()", () => {
     expect(edge.nearField.map((m) => m.impactDilution), "near-field dilutions").toEqual(full.nearField.map((m) => m.impactDilution));
   });
 });
+
+describe("a statically unstable ambient profile", () => {
+  it("makes the case outside-scope with the reason, keeping the numbers", () => {
+    const raw = load("sandy-shelf.json");
+    const depth = 14; // the demo's "14 m"
+    expect(raw.ambient.depth, "demo depth").toBe("14 m");
+    // 35 g/kg at 10 °C over 35 g/kg at 20 °C: the bottom water is about 2 kg/m³ lighter (TEOS-10).
+    const unstable = {
+      ...raw,
+      ambient: {
+        depth: raw.ambient.depth,
+        profile: [
+          { depth: 0, salinity: 35, temperature: 10 },
+          { depth, salinity: 35, temperature: 20 },
+        ],
+      },
+    };
+    delete unstable.ambientCases;
+    const r = runScenario(scenarioOf(unstable));
+    expect(
+      r.warnings.find((w) => w.code === "ambient-statically-unstable")
+        ?.severity,
+      "a serious warning",
+    ).toBe("serious");
+    expect(r.compliance.verdict, "no verdict on an overturning column").toBe(
+      "outside-scope",
+    );
+    expect(
+      r.compliance.scopeReasons.some((s) => /statically unstable/.test(s)),
+      "the reason says why",
+    ).toBe(true);
+    expect(Number.isFinite(r.mixingZone.dilution), "numbers kept").toBe(true);
+    const stable = {
+      ...unstable,
+      ambient: {
+        ...unstable.ambient,
+        profile: [
+          { depth: 0, salinity: 35, temperature: 20 },
+          { depth, salinity: 35, temperature: 10 },
+        ],
+      },
+    };
+    expect(
+      runScenario(scenarioOf(stable)).warnings.some(
+        (w) => w.code === "ambient-statically-unstable",
+      ),
+      "the stable column (swapped) raises nothing",
+    ).toBe(false);
+  });
+});

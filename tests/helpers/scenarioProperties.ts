@@ -7,7 +7,10 @@ import type { Scenario } from "../../core/scenario/types";
 
 const finite = (v: number | null | undefined) => v === null || v === undefined || Number.isFinite(v);
 
-export function checkValidScenario(raw: unknown): void {
+/** What one valid scenario came to: a verdict, or "refused" (the dense-jet scope refusal). */
+export type ValidOutcome = "meets" | "exceeds" | "outside-scope" | "refused";
+
+export function checkValidScenario(raw: unknown): ValidOutcome {
   const parsed = parseScenario(raw);
   if (!parsed.ok) throw new Error(`valid scenario rejected: ${parsed.issues.map((i) => i.message).join("; ")}`);
   let r;
@@ -16,9 +19,10 @@ export function checkValidScenario(raw: unknown): void {
   } catch (e) {
     // Near-neutral cases may be lighter at the port once pressure and temperature act: that is the one
     // refusal in scope, and it must be the ScenarioError with the dense-jet message.
-    if (e instanceof ScenarioError && /dense-jet scope/.test(e.message)) return;
+    if (e instanceof ScenarioError && /dense-jet scope/.test(e.message)) return "refused";
     throw e;
   }
+  checkPhysicalOrder(r, parsed.scenario);
   for (const m of r.nearField) {
     for (const k of ["maxRiseHeight", "returnDistance", "impactDistance", "impactDilution", "nearFieldDistance", "nearFieldDilution", "entrainedFlow"] as const)
       expect(finite(m[k]), `${m.method}.${k} finite (${m[k]})`).toBe(true);
@@ -50,6 +54,89 @@ export function checkValidScenario(raw: unknown): void {
   }
   expect(Number.isFinite(r.compliance.margin) || r.compliance.margin === Number.POSITIVE_INFINITY, "margin is a number").toBe(true);
   checkVerdicts(r, parsed.scenario);
+  checkMargins(r, parsed.scenario);
+  return r.compliance.verdict;
+}
+
+/**
+ * Physical order and every value within its own range:
+ * - the jet's upper edge (port height + maximum rise) stays in the water unless the verdict is
+ *   outside-scope (a jet reaching the surface is outside the dense-jet methods);
+ * - the length-scale rise is at most 2.5 d·F for a single unmerged jet: the largest published
+ *   terminal-rise coefficient of the inclined dense jet is y_t/(dF) = 2.2 at 60° (Roberts, Ferrier &
+ *   Daviero 1997, J. Hydraul. Eng. 123(8):693–699); other angles and a current give less;
+ * - the integral model's rise lies within its own path: between the highest centreline point and that
+ *   point's upper edge (centreline + 2 half-widths, a generous envelope for any half-width definition);
+ * - each method's impact dilution lies within its own [low, high] range, and low ≥ 1;
+ * - the dense layer is no thicker than the water unless outside-scope; the footprint is not negative.
+ */
+export function checkPhysicalOrder(r: BrinefieldResult, s: Scenario): void {
+  const outside = r.compliance.verdict === "outside-scope";
+  const room = s.ambient.depth - s.diffuser.portHeight;
+  for (const m of r.nearField) {
+    if (!m.available) continue;
+    if (m.maxRiseHeight !== null) {
+      expect(m.maxRiseHeight >= 0, `${m.method}: rise ${m.maxRiseHeight} m not negative`).toBe(true);
+      if (!outside) expect(m.maxRiseHeight <= room * (1 + 1e-9), `${m.method}: rise ${m.maxRiseHeight} m ≤ water above the port ${room} m (verdict ${r.compliance.verdict})`).toBe(true);
+      if (m.method === "length-scale" && !r.multiport.merged && r.port.froude > 0) {
+        const ratio = m.maxRiseHeight / (r.port.diameter * r.port.froude);
+        expect(ratio <= 2.5, `length-scale rise ${m.maxRiseHeight} m = ${ratio} d·F, above the published 2.2 d·F`).toBe(true);
+      }
+      const path = m.path ?? [];
+      if (m.method === "integral" && path.length > 1) {
+        let top = -Infinity;
+        let edge = -Infinity;
+        for (const p of path) {
+          top = Math.max(top, p.z);
+          edge = Math.max(edge, p.z + 2 * p.halfWidth);
+        }
+        expect(m.maxRiseHeight <= edge + 1e-6 && m.maxRiseHeight >= Math.min(top, 0) - 1e-6, `integral rise ${m.maxRiseHeight} m within its path (centreline top ${top} m, upper envelope ${edge} m)`).toBe(true);
+      }
+    }
+    if (m.dilutionRange !== null && m.impactDilution !== null) {
+      const [lo, hi] = m.dilutionRange;
+      expect(lo >= 1 - 1e-9 && lo <= hi, `${m.method}: dilution range [${lo}, ${hi}] ordered, low ≥ 1`).toBe(true);
+      expect(m.impactDilution >= lo * (1 - 1e-9) && m.impactDilution <= hi * (1 + 1e-9), `${m.method}: impact dilution ${m.impactDilution} within its range [${lo}, ${hi}]`).toBe(true);
+    }
+  }
+  const z = r.mixingZone;
+  if (z.layerThickness !== null) {
+    expect(z.layerThickness >= 0, `layer thickness ${z.layerThickness} m not negative`).toBe(true);
+    if (!outside) expect(z.layerThickness <= s.ambient.depth * (1 + 1e-9), `layer ${z.layerThickness} m no thicker than the water ${s.ambient.depth} m`).toBe(true);
+  }
+  expect(z.footprint.area >= 0 && z.footprint.furthestExtent >= 0, "footprint area and extent not negative").toBe(true);
+}
+
+/**
+ * Verdict against margin, from the definitions (common practice, no source): the dilution a limit needs
+ * is S_req = max(1, (C_discharge − C_background)/(C_limit − C_background)); a limit's margin is the edge
+ * dilution ÷ S_req; it passes when the margin is at least 1; the governing margin is the smallest;
+ * "meets" needs every limit passed and "exceeds" at least one failed.
+ */
+export function checkMargins(r: BrinefieldResult, s: Scenario): void {
+  const c = r.compliance;
+  const edge = r.mixingZone.dilution;
+  expect(c.constituents.length, "one compliance line per limit").toBe(s.mixingZone.limits.length);
+  let smallest = Infinity;
+  s.mixingZone.limits.forEach((limit, i) => {
+    const line = c.constituents[i]!;
+    const at = r.mixingZone.constituents.find((k) => k.constituent.toLowerCase() === limit.constituent.toLowerCase());
+    expect(at, `limit ${limit.constituent} has its constituent at the edge`).toBeDefined();
+    if (!at) return;
+    const bg = limit.background ?? at.background;
+    const cap = Math.min(limit.maxIncrease !== undefined ? bg + limit.maxIncrease : Infinity, limit.maxConcentration ?? Infinity);
+    const required = cap <= bg ? Infinity : Math.max(1, (at.discharge - bg) / (cap - bg));
+    expect(Math.abs(line.requiredDilution - required) <= 1e-9 * required, `${limit.constituent}: required dilution ${line.requiredDilution} = ${required} from the limit`).toBe(true);
+    expect(line.edgeDilution, `${limit.constituent}: the edge dilution is the mixing zone's`).toBe(edge);
+    const margin = Number.isFinite(required) ? edge / required : 0;
+    expect(Math.abs(line.margin - margin) <= 1e-9 * Math.max(1, margin), `${limit.constituent}: margin ${line.margin} = ${edge} ÷ ${required}`).toBe(true);
+    expect(line.pass, `${limit.constituent}: pass exactly when the margin ${line.margin} is at least 1`).toBe(line.margin >= 1);
+    smallest = Math.min(smallest, line.margin);
+  });
+  expect(c.margin, "the governing margin is the smallest").toBe(smallest);
+  if (c.verdict === "meets") expect(c.constituents.every((k) => k.pass), "meets: every limit passed").toBe(true);
+  if (c.verdict === "exceeds") expect(c.constituents.some((k) => !k.pass), "exceeds: at least one limit failed").toBe(true);
+  if (c.scopeReasons.length === 0) expect(c.verdict, `in scope: the verdict follows the margin ${c.margin}`).toBe(c.margin >= 1 ? "meets" : "exceeds");
 }
 
 /**

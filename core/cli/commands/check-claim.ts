@@ -1,4 +1,5 @@
 /** `brinefield check-claim <scenario> --claimed-dilution D [--at L] [--json]` */
+import { jsonText } from "../../result/json";
 import { CliError, type CliCommand, type CliIO } from "../command";
 import { readArgs, numberOption } from "../args";
 import { loadScenarioFile } from "../load";
@@ -73,11 +74,8 @@ export const command: CliCommand = {
     const check = outcome.check;
     if (values.json) {
       io.stdout(
-        JSON.stringify(
-          { format: "brinefield-claim-check", version: 1, scenarioName: scenario.name, inputsHash: inputsHash(scenario), ...check, seriesEnd: outcome.seriesEnd, caution: CAUTION },
-          null,
-          2,
-        ) + "\n",
+        jsonText(
+          { format: "brinefield-claim-check", version: 1, scenarioName: scenario.name, inputsHash: inputsHash(scenario), ...check, seriesEnd: outcome.seriesEnd, caution: CAUTION }),
       );
       return 0;
     }

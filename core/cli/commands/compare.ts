@@ -1,4 +1,5 @@
 /** `brinefield compare`: a study's variants side by side, per ambient case and worst case. */
+import { jsonText } from "../../result/json";
 import { dirname, isAbsolute, join } from "node:path";
 import { caseWorkUnits, workIssue } from "../../study/budget";
 import { csvWithCaution, flatRowsCsv } from "../../report/csv";
@@ -99,7 +100,7 @@ async function run(argv: readonly string[], io: CliIO): Promise<number> {
   if (values.json) {
     const study = st.study.name;
     const json = { format: "brinefield-compare", version: 1, caution: CAUTION, study, columns, rows: flat, notes, tally };
-    io.stdout(JSON.stringify(json, null, 2) + "\n");
+    io.stdout(jsonText(json));
     return 0;
   }
   const methodCols = columns.filter((c) => /(MaxRise|ImpactDistance|ImpactDilution)$/.test(c));

@@ -1,4 +1,5 @@
 /** `brinefield design`: search port count, diameter, angle and spacing for designs that meet every limit. */
+import { jsonText } from "../../result/json";
 import { CAUTION } from "../../result/contract";
 import { withCaution } from "../../result/caution";
 import { CliError, type CliCommand, type CliIO } from "../command";
@@ -157,7 +158,7 @@ async function run(argv: readonly string[], io: CliIO): Promise<number> {
       `${formatNumber(c.minPortDiameter)}–${formatNumber(c.maxPortDiameter)} m for ${Math.min(...c.portCounts)}–${Math.max(...c.portCounts)} ports); ` +
       "widen design.minPortDiameter/maxPortDiameter, the velocity range or the port counts.";
     if (values.json) {
-      io.stdout(JSON.stringify({ format: "brinefield-design", version: 1, scenarioName: scenario.name, headline, constraints: c, candidatesTried: 0, candidatesPassing: 0, designs: [], nearestMiss: null, caution: CAUTION }, null, 2) + "\n");
+      io.stdout(jsonText({ format: "brinefield-design", version: 1, scenarioName: scenario.name, headline, constraints: c, candidatesTried: 0, candidatesPassing: 0, designs: [], nearestMiss: null, caution: CAUTION }));
     } else {
       io.stdout(withCaution([headline, constraintsLine].join("\n") + "\n"));
     }
@@ -172,7 +173,7 @@ async function run(argv: readonly string[], io: CliIO): Promise<number> {
   const outcome = designOutcome(scenario, c, candidates, points, rawDiffuser);
   if (values.json) {
     io.stdout(
-      JSON.stringify(
+      jsonText(
         {
           format: "brinefield-design",
           version: 1,
@@ -190,10 +191,7 @@ async function run(argv: readonly string[], io: CliIO): Promise<number> {
           notes: [casesNote, ...outcome.notes],
           elapsedSeconds,
           caution: outcome.caution,
-        },
-        null,
-        2,
-      ) + "\n",
+        }),
     );
     return 0;
   }

@@ -4,6 +4,7 @@
  * renderer when possible; when not, the report says why. Browser-driving code lives in
  * renderer/headless/ and is imported only when a PDF or the 3D image is asked for.
  */
+import { jsonText } from "../../result/json";
 import { withCaution } from "../../result/caution";
 import { basename, dirname, extname, resolve } from "node:path";
 import type { CliCommand, CliIO } from "../command";
@@ -180,7 +181,7 @@ export const command: CliCommand = {
       about = { study: study.name };
       csv = studyResultCsv(variants);
       series = studySeriesCsv(variants);
-      json = JSON.stringify(variants.map((v) => ({ variant: v.name, result: v.result })), null, 2) + "\n";
+      json = jsonText(variants.map((v) => ({ variant: v.name, result: v.result })));
     } else {
       const scenario = readScenarioRaw(file, inputPath);
       const result: BrinefieldResult = runScenario(scenario);
@@ -196,7 +197,7 @@ export const command: CliCommand = {
       about = aboutResult(result);
       csv = resultCsv(result);
       series = seriesCsv(result);
-      json = JSON.stringify(result, null, 2) + "\n";
+      json = jsonText(result);
     }
 
     const written: Written[] = [];

@@ -1,3 +1,4 @@
+import { jsonText } from "../../result/json";
 import type { CliCommand } from "../command";
 import { readArgs } from "../args";
 import { loadScenarioFile } from "../load";
@@ -25,7 +26,7 @@ its path); 70 an internal error.`,
     if (positionals.length !== 1) throw new CliError("brinefield run: give exactly one scenario file, e.g. `brinefield run demo-scenarios/island-cove.json`");
     const scenario = loadScenarioFile(positionals[0]!, io);
     const result = runScenario(scenario, { includePath: !values["no-path"] });
-    io.stdout(values.json ? JSON.stringify(result, null, 2) + "\n" : summaryText(scenario, result));
+    io.stdout(values.json ? jsonText(result) : summaryText(scenario, result));
     return 0;
   },
 };

@@ -1,4 +1,5 @@
 /** `brinefield sweep`: vary one or two inputs over a range and tabulate the verdict at each point. */
+import { jsonText } from "../../result/json";
 import { dirname, isAbsolute, join } from "node:path";
 import { sweepPointsIssue, workIssue } from "../../study/budget";
 import { csvWithCaution, flatRowsCsv } from "../../report/csv";
@@ -146,7 +147,7 @@ async function run(argv: readonly string[], io: CliIO): Promise<number> {
   });
   if (values.json) {
     io.stdout(
-      JSON.stringify(
+      jsonText(
         {
           format: "brinefield-sweep",
           version: 1,
@@ -160,10 +161,7 @@ async function run(argv: readonly string[], io: CliIO): Promise<number> {
           noPointMeets: counts.meets === 0,
           notes: [casesNote, ...keptNotes, ...crossingText],
           elapsedSeconds,
-        },
-        null,
-        2,
-      ) + "\n",
+        }),
     );
     return 0;
   }

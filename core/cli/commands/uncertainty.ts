@@ -1,4 +1,5 @@
 /** `brinefield uncertainty`: seeded, reproducible Monte Carlo over uncertain inputs, on all cores. */
+import { jsonText } from "../../result/json";
 import { CliError, type CliCommand, type CliIO } from "../command";
 import { readArgs } from "../args";
 import { loadScenarioFile } from "../load";
@@ -118,7 +119,7 @@ async function run(argv: readonly string[], io: CliIO): Promise<number> {
   ].join(" ");
   if (values.json) {
     io.stdout(
-      JSON.stringify(
+      jsonText(
         {
           format: "brinefield-uncertainty",
           version: 1,
@@ -137,10 +138,7 @@ async function run(argv: readonly string[], io: CliIO): Promise<number> {
           firstError: summary.firstError,
           workers,
           elapsedSeconds,
-        },
-        null,
-        2,
-      ) + "\n",
+        }),
     );
     return 0;
   }

@@ -1,4 +1,5 @@
 /** `brinefield validate [--json]`: both near-field methods against every published laboratory point held. */
+import { jsonText } from "../../result/json";
 import type { CliCommand, CliIO } from "../command";
 import { readArgs } from "../args";
 import { validationTable, type ValidationPoint } from "../../validation";
@@ -47,7 +48,7 @@ export const command: CliCommand = {
     }
     const table = validationTable();
     if (values.json) {
-      io.stdout(JSON.stringify({ ...table, caution: CAUTION }, null, 2) + "\n");
+      io.stdout(jsonText({ ...table, caution: CAUTION }));
       return 0;
     }
     const inBand = table.points.filter((p) => p.withinBand).length;

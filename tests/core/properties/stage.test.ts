@@ -9,6 +9,7 @@ import {
   profileAtDepth,
   propertiesFromScenario,
 } from "../../../core/properties";
+import { DENSITY_INVERSION_TOLERANCE, staticInstability } from "../../../core/properties/stage";
 import type { ProfilePoint, Scenario } from "../../../core/scenario/types";
 
 function scenario(options: {
@@ -147,5 +148,66 @@ describe("propertiesFromScenario()", () => {
     const stage = propertiesFromScenario(scenario({ depth: 5, portHeight: 8 }));
     expect(stage.warnings.map((w) => w.code), "port outside the column").toContain("port-outside-water-column");
     expect(stage.column.depths[0], "port clamped to the surface").toBe(0);
+  });
+});
+
+describe("a statically unstable ambient column", () => {
+  // Densities from Debian's python3-gsw (TEOS-10; IOC, SCOR & IAPSO 2010) at 35 g/kg and the port's
+  // pressure (19.5 m): 1026.915 kg/m³ at 10 °C, 1024.726 kg/m³ at 20 °C, 1026.906 kg/m³ at 10.05 °C.
+  const column = (bottomT: number) => [
+    { depth: 0, salinity: 35, temperature: 10 },
+    { depth: 20, salinity: 35, temperature: bottomT },
+  ];
+
+  it("is a serious properties warning with the density drop when warm water lies under cold", () => {
+    const r = propertiesFromScenario(
+      scenario({ profile: column(20), portHeight: 0.5, salinity: 40 }),
+    );
+    expect(r.eos.info.name, "TEOS-10 chosen for these salinities").toBe(
+      "TEOS-10",
+    );
+    const w = r.warnings.find((x) => x.code === "ambient-statically-unstable");
+    expect(w, "warning raised").toBeDefined();
+    expect(
+      w!.severity,
+      "serious, not info: it makes the case outside-scope",
+    ).toBe("serious");
+    expect(w!.stage, "properties stage").toBe("properties");
+    expect(
+      w!.value!,
+      "drop ≈ 1026.915 − 1024.726 = 2.189 kg/m³ (python3-gsw)",
+    ).toBeCloseTo(2.189, 2);
+    expect(w!.message, "names the depths").toMatch(/20 m depth .* 0 m above/);
+  });
+
+  it("is not raised for a stable column or an inversion within profiler noise", () => {
+    for (const bottomT of [10, 5, 10.05]) {
+      // 10.05 °C under 10 °C: 0.009 kg/m³ lighter (python3-gsw), under the 0.02 kg/m³ tolerance.
+      const r = propertiesFromScenario(scenario({ profile: column(bottomT) }));
+      expect(
+        r.warnings.some((x) => x.code === "ambient-statically-unstable"),
+        `bottom at ${bottomT} °C`,
+      ).toBe(false);
+    }
+  });
+
+  it("counts an inversion spread over several small steps against the densest water above", () => {
+    expect(
+      staticInstability([0, 10, 20, 30], [1026, 1025.99, 1025.98, 1025.97]),
+      "three 0.01 steps = 0.03 kg/m³",
+    ).toEqual({ drop: expect.closeTo(0.03, 9), upperDepth: 0, lowerDepth: 30 });
+    expect(
+      staticInstability([0, 10, 20], [1025, 1026, 1027]),
+      "density rising with depth is stable",
+    ).toBeNull();
+    expect(
+      staticInstability([0, 10, 20], [1025, 1025.5, 1025.47]),
+      "0.03 kg/m³ below the 10 m water",
+    ).toEqual({
+      drop: expect.closeTo(0.03, 9),
+      upperDepth: 10,
+      lowerDepth: 20,
+    });
+    expect(DENSITY_INVERSION_TOLERANCE, "tolerance").toBe(0.02);
   });
 });
