@@ -26,7 +26,9 @@ import {
   IX,
   IY,
   IZ,
+  entrainmentSwitch,
   integralJetRhs,
+  profileAt,
   radiusFromState,
   upperEdgeSlope,
   verticalHalfExtent,
@@ -41,6 +43,8 @@ import {
   EV_SEABED_EDGE,
   EV_SURFACE_CENTRE,
   EV_SURFACE_EDGE,
+  EV_TOP,
+  EV_ENTRAINMENT_SWITCH,
   centrelineDilution,
   integralInitialState,
   integralParamsFrom,
@@ -62,9 +66,9 @@ export interface IntegralOptions {
   sink?: PathSink;
   /** Include the decimated path in the result (default true). */
   includePath?: boolean;
-  /** Relative tolerance of the integrator (default 1e-8). */
+  /** Relative tolerance of the integrator (default 3e-8; `brinefield bench` prints the accuracy study behind it). */
   relTol?: number;
-  /** Absolute tolerance, relative to each variable's source scale (default 1e-10). */
+  /** Absolute tolerance, relative to each variable's source scale (default 3e-10). */
   absTol?: number;
   /** Maximum accepted steps (default 5000). */
   maxSteps?: number;
@@ -72,8 +76,8 @@ export interface IntegralOptions {
   maxLength?: number;
 }
 
-export const INTEGRAL_DEFAULT_REL_TOL = 1e-8;
-export const INTEGRAL_DEFAULT_ABS_TOL = 1e-10;
+export const INTEGRAL_DEFAULT_REL_TOL = 3e-8;
+export const INTEGRAL_DEFAULT_ABS_TOL = 3e-10;
 const DEFAULT_MAX_STEPS = 5000;
 
 // Module-scope scratch: one stepper and one path buffer reused across solves.
@@ -148,6 +152,7 @@ export function nearFieldIntegral(
   };
   events[EV_SURFACE_CENTRE] = { fn: (_s, y) => surfaceAbovePort - y[IZ], direction: -1, terminal: true };
   events[EV_MAX_RISE] = {
+    // The driver passes dy at step ends (the stepper's f) and the dense output's derivative inside a step.
     fn: (s, y, p, dy) => {
       if (dy) return upperEdgeSlope(y, dy);
       integralJetRhs(s, y, scratchDy, p);
@@ -155,7 +160,13 @@ export function nearFieldIntegral(
     },
     direction: -1,
     terminal: false,
+    slope: true,
   };
+  // The closure's buoyancy term depends on max(0, −t_z): the RHS has a kink where the axis levels off.
+  events[EV_TOP] = { fn: (_s, y) => y[IMZ], direction: 0, terminal: false, restart: true, rate: (_s, _y, _p, dy) => dy[IMZ] };
+  if (params.currentSpeed > 0) {
+    events[EV_ENTRAINMENT_SWITCH] = { fn: (_s, y, p) => entrainmentSwitch(y, p), direction: 0, terminal: false, restart: true };
+  }
 
   // Path recording and passive / trapped detection on every accepted step.
   const path = sharedPath;
@@ -178,9 +189,8 @@ export function nearFieldIntegral(
     const vz = y[IMZ] / q;
     const vRel = Math.sqrt(vx * vx + vy * vy + vz * vz);
     if (params.stratified) {
-      integralJetRhs(s, y, scratchDy, params);
-      // g′ sign from dMz/ds = −π b² g′.
-      const sgn = Math.sign(-scratchDy[IMZ]);
+      // Sign of the local reduced gravity g′ = B/Q − ε(z) (the RHS's buoyancy term, without the RHS).
+      const sgn = Math.sign(y[IB] / q - profileAt(params.depths, params.epsilon, params.portDepth - y[IZ]));
       if (sgn !== 0 && lastGSign !== 0 && sgn !== lastGSign) neutralCrossings++;
       if (sgn !== 0) lastGSign = sgn;
       // Two crossings of the neutral level: the jet oscillates about it and spreads as a layer.

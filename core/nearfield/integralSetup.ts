@@ -113,3 +113,7 @@ export const EV_IMPACT = 2;
 export const EV_SURFACE_EDGE = 3;
 export const EV_SURFACE_CENTRE = 4;
 export const EV_MAX_RISE = 5;
+/** Centreline top (M_z = 0): the entrainment closure's buoyancy term switches on there (a kink in the RHS). */
+export const EV_TOP = 6;
+/** Shear and forced entrainment equal: the closure switches from one to the other (a kink in the RHS). */
+export const EV_ENTRAINMENT_SWITCH = 7;
