@@ -39,8 +39,12 @@ export const IC = 8;
 export const INTEGRAL_DIM = 9;
 
 export interface IntegralParams {
-  /** Depth of the port centre below the surface, m. */
+  /** Depth of the port centre below the surface, m (= the surface's height above the port). */
   readonly portDepth: number;
+  /** Height of the port centre above the seabed, m. */
+  readonly portHeight: number;
+  /** Ambient salinity at port level, g/kg (0 when the column has no salinity profile). */
+  readonly portSalinity: number;
   /** Ambient profile depths below the surface, m, ascending. */
   readonly depths: Float64Array;
   /** ε = g(ρa − ρa0)/ρa0 at each profile depth, m/s² (ρa0 = ambient density at the port). */
