@@ -35,19 +35,32 @@ Times, on this machine:
   - 10,000 Monte Carlo cases of a 4-port diffuser with both near-field methods on one warm worker
     (target ≥ 5,000 cases/s) and on all cores (speed-up; target ≥ 1.6× on two), the first run on fresh
     workers apart, and a pure-compute control of the speed-up measured in the same window;
-  - a 30 × 30 two-input sweep (target ≤ 1 s).
+  - a 30 × 30 two-input sweep (target ≤ 1 s);
+  - the web build in headless Chromium: input change → new numbers (target ≤ 50 ms) and page load →
+    first result (target ≤ 300 ms), medians.
 
 Options:
   --json    One JSON object: integralSolveMicros, lengthScaleMicros, referenceSolveMicros, referenceRatio,
             referenceErrorRatio, minimalSolverMicros, monteCarloCasesPerSecond, monteCarloSpeedup,
-            parallelControlSpeedup, sweepSeconds, and more.
-  --quick   Near-field figures only (skips Monte Carlo and the sweep).
+            parallelControlSpeedup, sweepSeconds, typingToNumbersMs, loadToFirstResultMs, and more.
+  --quick   Near-field figures only (skips Monte Carlo, the sweep and the browser).
   -h, --help  Show this help.`,
   async run(argv, io) {
     const { values } = readArgs(argv, { json: { type: "boolean" }, quick: { type: "boolean" } }, "bench");
     const nf = benchIntegral();
     const lengthScaleMicros = medianMicros(() => void nearFieldLengthScale(BENCH_JET, BENCH_COLUMN));
     const study = values.quick ? null : await benchStudy();
+    let browser: { loadToFirstResultMs: number; typingToNumbersMs: number } | null = null;
+    let browserNote: string | null = null;
+    if (!values.quick) {
+      try {
+        const { benchBrowser } = await import("../../../renderer/headless/bench-browser");
+        const b = await benchBrowser();
+        browser = { loadToFirstResultMs: b.loadToFirstResultMs, typingToNumbersMs: b.typingToNumbersMs };
+      } catch (err) {
+        browserNote = err instanceof Error ? err.message : String(err);
+      }
+    }
     const out = {
       integralSolveMicros: nf.integralSolveMicros,
       lengthScaleMicros,
@@ -63,6 +76,8 @@ Options:
       integralRelTol: INTEGRAL_DEFAULT_REL_TOL,
       accuracyStudy: nf.accuracyStudy,
       ...(study ?? {}),
+      ...(browser ?? {}),
+      ...(browserNote ? { browserNotMeasured: browserNote } : {}),
       cores: io.cores,
     };
     if (values.json) {
@@ -89,6 +104,12 @@ Options:
       `Length-scale method: ${lengthScaleMicros.toFixed(2)} µs per evaluation (median)`,
     ];
     if (study) lines.push(describeStudyBench(study, io.cores));
+    if (browser) {
+      lines.push(
+        `Web build in headless Chromium: input change → new numbers ${browser.typingToNumbersMs.toFixed(0)} ms (median of 8 edits; target ≤ 50 ms); ` +
+          `page load → first result ${browser.loadToFirstResultMs.toFixed(0)} ms (median of 5 loads; target ≤ 300 ms)`,
+      );
+    } else if (browserNote) lines.push(`Web build in headless Chromium: not measured (${browserNote})`);
     io.stdout(lines.join("\n") + "\n");
     return 0;
   },
