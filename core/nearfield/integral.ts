@@ -111,8 +111,17 @@ SPECS_WITH_CURRENT[EV_ENTRAINMENT_SWITCH] = {
  * Every event function at once, sharing the geometry (one |M⃗|, one radius); the surface lies portDepth
  * above the port, the seabed portHeight below it. Module scope: a solve builds no closures.
  */
-function eventValues(s: number, y: Float64Array, p: IntegralParams, dy: Float64Array | undefined, out: Float64Array): void {
+function eventValues(s: number, y: Float64Array, p: IntegralParams, dy: Float64Array | undefined, out: Float64Array, only = -1): void {
   const z = y[IZ];
+  if (only >= 0 && only !== EV_SEABED_EDGE && only !== EV_SURFACE_EDGE && only !== EV_MAX_RISE) {
+    // Root search on a cheap event: just that value.
+    if (only === EV_RETURN) out[EV_RETURN] = z;
+    else if (only === EV_IMPACT) out[EV_IMPACT] = z + p.portHeight;
+    else if (only === EV_SURFACE_CENTRE) out[EV_SURFACE_CENTRE] = p.portDepth - z;
+    else if (only === EV_TOP) out[EV_TOP] = y[IMZ];
+    else out[EV_ENTRAINMENT_SWITCH] = entrainmentSwitch(y, p);
+    return;
+  }
   const half = verticalHalfExtent(y);
   out[EV_RETURN] = z;
   out[EV_SEABED_EDGE] = z - half + p.portHeight;

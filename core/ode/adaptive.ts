@@ -58,9 +58,10 @@ export interface EventSet<P> {
   readonly specs: readonly EventSpec[];
   /**
    * Writes g_e(t, y) for every event e into `out`. `dy` is f(t, y) at step ends; inside a step it is the
-   * dense output's derivative when any event has `slope`, else undefined.
+   * dense output's derivative when any event has `slope`, else undefined. `only` (the root search) names
+   * the one event whose value is read: an implementation may skip the others.
    */
-  values(t: number, y: Float64Array, params: P, dy: Float64Array | undefined, out: Float64Array): void;
+  values(t: number, y: Float64Array, params: P, dy: Float64Array | undefined, out: Float64Array, only?: number): void;
   /** dg_e/dt at a step end (dy = f(t, y)) for the restart events; with it, steps end at predicted crossings. */
   rates?(t: number, y: Float64Array, params: P, dy: Float64Array, out: Float64Array): void;
 }
@@ -453,7 +454,7 @@ function locateRoot<P>(
     if (!(m > a && m < b)) m = 0.5 * (a + b);
     stepper.interpolate(m, scratch);
     if (slope) stepper.interpolateDerivative(m, scratchDy);
-    events.values(t + m * h, scratch, params, slope ? scratchDy : undefined, gTry);
+    events.values(t + m * h, scratch, params, slope ? scratchDy : undefined, gTry, index);
     const fm = gTry[index];
     if (fm === 0) return m;
     if (fm * fb < 0) {
