@@ -35,7 +35,6 @@ import { StartView } from "./start/StartView";
 import { historyPush, historyRedo, historyReplace, historyStart, historyUndo, type History } from "./state/history";
 import { ConfirmDialog, type ConfirmRequest } from "./ui/ConfirmDialog";
 import { useFileDrop } from "./ui/useFileDrop";
-import { PlumeView } from "./view3d/PlumeView";
 import { TrajectoryChart } from "./charts/TrajectoryChart";
 import { DistanceChart } from "./charts/DistanceCharts";
 import { DistanceTable, TrajectoryTable } from "./charts/ChartTables";
@@ -47,6 +46,8 @@ const VIEW_TABS = ["design", "study"] as const;
 const CHART_TABS = ["trajectory", "dilution", "increase"] as const;
 const UNITS_KEY = "brinefield.units";
 
+// three.js and the 3D view load after the first screen (the inputs and results do not wait for them).
+const PlumeView = lazy(() => import("./view3d/PlumeView").then((m) => ({ default: m.PlumeView })));
 // The Study tab loads on first use (its own workers and charts stay out of the first screen).
 const StudyPanel = lazy(() => import("./study/StudyPanel").then((m) => ({ default: m.StudyPanel })));
 
@@ -433,7 +434,9 @@ export function App() {
             <section className="centre" aria-label="Views">
               <div className="view3d-panel">
                 {result && scenario ? (
-                  <PlumeView scenario={scenario} result={result} unitSystem={unitSystem} resetSignal={resetSignal} documentKey={documentKey} />
+                  <Suspense fallback={<div className="placeholder">Loading the 3D view…</div>}>
+                    <PlumeView scenario={scenario} result={result} unitSystem={unitSystem} resetSignal={resetSignal} documentKey={documentKey} />
+                  </Suspense>
                 ) : (
                   <div className="placeholder">{engine.error ? "No results: fix the inputs marked in red." : "Calculating…"}</div>
                 )}

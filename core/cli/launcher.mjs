@@ -24,6 +24,22 @@ function sourcesNewerThan(mtime) {
   return dirs.some((d) => newestMtime(d) > mtime) || statSync(join(root, "package.json")).mtimeMs > mtime;
 }
 
+// zod re-exports every message locale (64 languages, ~350 KiB) as `z.locales`; the command line speaks
+// English only, so its bundle gets a locales module with just the English one (the one zod installs).
+const zodEnglishOnly = {
+  name: "zod-english-only",
+  setup(build) {
+    build.onResolve({ filter: /^\.\.\/locales\/index\.js$/ }, (args) =>
+      /[\\/]zod[\\/]/.test(args.importer) ? { path: join(dirname(args.importer), "../locales/en.js"), namespace: "zod-locales" } : undefined,
+    );
+    build.onLoad({ filter: /.*/, namespace: "zod-locales" }, (args) => ({
+      contents: `export { default as en } from ${JSON.stringify(args.path)};`,
+      resolveDir: dirname(args.path),
+      loader: "js",
+    }));
+  },
+};
+
 async function ensureBundle() {
   const fresh = existsSync(out) && !sourcesNewerThan(statSync(out).mtimeMs);
   if (fresh) return;
@@ -37,7 +53,7 @@ async function ensureBundle() {
   mkdirSync(dirname(out), { recursive: true });
   const tmp = `${out}.${process.pid}.tmp`;
   try {
-    esbuild.buildSync({
+    await esbuild.build({
       entryPoints: [join(root, "core/cli/main.ts")],
       bundle: true,
       platform: "node",
@@ -46,6 +62,7 @@ async function ensureBundle() {
       outfile: tmp,
       external: ["playwright-core", "esbuild", "vite"],
       logLevel: "error",
+      plugins: [zodEnglishOnly],
       banner: { js: "import { createRequire as __brinefieldRequire } from 'node:module'; const require = __brinefieldRequire(import.meta.url);" },
     });
   } catch (err) {

@@ -4,6 +4,8 @@
  * immutable `PathPoint[]` for the result.
  */
 import type { PathPoint } from "./types";
+import { IQ, IX, IY, IZ, radiusFromState, verticalHalfExtent } from "./integralRhs";
+import { centrelineDilution } from "./integralSetup";
 
 /** At most this many points in the result's path (the sink still receives every step). */
 export const PATH_POINTS = 200;
@@ -21,8 +23,25 @@ export class IntegralPathBuffer {
   /** Upper-edge elevation z + b·√(1 − t_z²), m. */
   edge = new Float64Array(512);
 
+  /** Source volume flux of the run being recorded, m³/s (for the dilution column). */
+  q0 = 1;
+
   reset(): void {
     this.length = 0;
+  }
+
+  /** Records the state y at arc length s (radius, dilution and upper edge derived here); returns its index. */
+  pushState(s: number, y: Float64Array): number {
+    if (this.length >= this.s.length) this.grow();
+    const i = this.length++;
+    this.s[i] = s;
+    this.x[i] = y[IX];
+    this.y[i] = y[IY];
+    this.z[i] = y[IZ];
+    this.b[i] = radiusFromState(y);
+    this.dilution[i] = centrelineDilution(y[IQ], this.q0);
+    this.edge[i] = y[IZ] + verticalHalfExtent(y);
+    return i;
   }
 
   push(s: number, x: number, y: number, z: number, b: number, dilution: number, edge: number): void {

@@ -4,7 +4,7 @@
  */
 import { warning, type ResultWarning } from "../warnings";
 import { entrainmentLeeCheung1990ValidityIssues } from "../correlations/entrainmentLeeCheung1990";
-import type { AdaptiveResult } from "../ode/adaptive";
+import type { AdaptiveResult, EventLog } from "../ode/adaptive";
 import { INTEGRAL_DIM, IQ, IX, IY, IZ, verticalHalfExtent, type IntegralParams } from "./integralRhs";
 import type { IntegralPathBuffer } from "./integralPath";
 import {
@@ -24,6 +24,22 @@ import { ROBERTS_1997_NEAR_FIELD_GROWTH } from "../correlations/roberts-1997-inc
 import { FLUX_AVERAGING_FACTOR } from "./fluxAveraging";
 import { nullNearFieldResult, type AmbientColumn, type JetSource, type NearFieldEvent, type NearFieldMethodResult } from "./types";
 
+// Hit states read back from the event log (numbers are copied out before the next solve can reuse them).
+const HIT_Y = new Float64Array(INTEGRAL_DIM);
+const RETURN_Y = new Float64Array(INTEGRAL_DIM);
+const IMPACT_Y = new Float64Array(INTEGRAL_DIM);
+const RISE_Y = new Float64Array(INTEGRAL_DIM);
+
+const NEAR_FIELD_GROWTH_NOTE =
+  `End of the near field: impact dilution × ${ROBERTS_1997_NEAR_FIELD_GROWTH.dilution.toFixed(3)}, ` +
+  `${ROBERTS_1997_NEAR_FIELD_GROWTH.spreadLength.toFixed(1)}·d·F beyond impact — the growth from impact to the end ` +
+  "of the near field in Roberts et al. (1997) (S_n/S_i = 2.6/1.6, x_n − x_i = (9.0 − 2.4)·d·F; measured at " +
+  "60° in stagnant water).";
+const CENTRELINE_NOTE =
+  "Dilutions are centreline (minimum) values: flux-average (top-hat) dilution × λ²/(1+λ²) with λ = 1.2; " +
+  "the …FluxAveraged values are the top-hat dilution Q/Q0, entrainedFlow = Q(impact) − Q0; " +
+  "halfWidth is the top-hat radius (≈ √2 × the Gaussian 1/e velocity half-width).";
+
 /** Result for inputs the model cannot run with: nulls and one serious warning. */
 export function invalidIntegralResult(message: string, value: number | undefined, parameter: string): NearFieldMethodResult {
   const w = warning("integral-invalid-input", "serious", message, { parameter, value, stage: "integral" });
@@ -40,6 +56,7 @@ export function assembleIntegralResult(
   column: AmbientColumn,
   params: IntegralParams,
   run: AdaptiveResult,
+  log: EventLog,
   stopKind: "passive-layer" | "trapped" | null,
   q0: number,
   u0: number,
@@ -61,33 +78,34 @@ export function assembleIntegralResult(
   let surfaceEdge = false;
   let surfaceCentre = false;
   let seabedEdge = false;
-  for (const hit of run.events) {
-    switch (hit.index) {
+  const hitY = HIT_Y;
+  for (let k = 0; k < log.count; k++) {
+    const t = log.t[k];
+    log.copy(k, hitY);
+    switch (log.index[k]) {
       case EV_RETURN:
-        push("return-to-port-level", hit.t, hit.y);
-        if (!returnHit) {
-          returnHit = hit.y;
-        }
+        push("return-to-port-level", t, hitY);
+        if (!returnHit) returnHit = RETURN_Y.set(hitY) ?? RETURN_Y;
         break;
       case EV_SEABED_EDGE:
-        if (!seabedEdge) push("seabed-contact", hit.t, hit.y);
+        if (!seabedEdge) push("seabed-contact", t, hitY);
         seabedEdge = true;
         break;
       case EV_IMPACT:
-        push("centreline-impact", hit.t, hit.y);
-        impactHit = hit.y;
+        push("centreline-impact", t, hitY);
+        impactHit = IMPACT_Y.set(hitY) ?? IMPACT_Y;
         break;
       case EV_SURFACE_EDGE:
-        if (!surfaceEdge) push("surface-contact", hit.t, hit.y);
+        if (!surfaceEdge) push("surface-contact", t, hitY);
         surfaceEdge = true;
         break;
       case EV_SURFACE_CENTRE:
         surfaceCentre = true;
-        push("surface-contact", hit.t, hit.y);
+        push("surface-contact", t, hitY);
         break;
       case EV_MAX_RISE: {
-        const edge = hit.y[IZ] + verticalHalfExtent(hit.y);
-        if (!maxRise || edge > maxRise.edge) maxRise = { s: hit.t, y: hit.y, edge };
+        const edge = hitY[IZ] + verticalHalfExtent(hitY);
+        if (!maxRise || edge > maxRise.edge) maxRise = { s: t, y: RISE_Y.set(hitY) ?? RISE_Y, edge };
         break;
       }
     }
@@ -231,18 +249,9 @@ export function assembleIntegralResult(
   const nearFieldDistance =
     impactDistance === null ? null : impactDistance + (Number.isFinite(spreadLength) ? spreadLength : 0);
   if (impactDilution !== null) {
-    notes.push(
-      `End of the near field: impact dilution × ${ROBERTS_1997_NEAR_FIELD_GROWTH.dilution.toFixed(3)}, ` +
-        `${ROBERTS_1997_NEAR_FIELD_GROWTH.spreadLength.toFixed(1)}·d·F beyond impact — the growth from impact to the end ` +
-        "of the near field in Roberts et al. (1997) (S_n/S_i = 2.6/1.6, x_n − x_i = (9.0 − 2.4)·d·F; measured at " +
-        "60° in stagnant water).",
-    );
+    notes.push(NEAR_FIELD_GROWTH_NOTE);
   }
-  notes.push(
-    "Dilutions are centreline (minimum) values: flux-average (top-hat) dilution × λ²/(1+λ²) with λ = 1.2; " +
-      "the …FluxAveraged values are the top-hat dilution Q/Q0, entrainedFlow = Q(impact) − Q0; " +
-      "halfWidth is the top-hat radius (≈ √2 × the Gaussian 1/e velocity half-width).",
-  );
+  notes.push(CENTRELINE_NOTE);
   notes.push(`Integration: Dormand–Prince 5(4), ${run.steps} steps, ${run.rejected} rejected, ${run.evaluations} evaluations, stop: ${run.reason}.`);
 
   events.sort((a, b) => a.s - b.s);

@@ -25,7 +25,7 @@
  * (1990): entrained fluid brings the ambient momentum u_a·â; the buoyancy force per unit length
  * is π b² g′ (top-hat). Standard for integral jet models (e.g. Fischer et al. 1979, ch. 9).
  */
-import { entrainmentLeeCheung1990Rate } from "../correlations/entrainmentLeeCheung1990";
+import { entrainmentLeeCheung1990Alpha, entrainmentLeeCheung1990Rate } from "../correlations/entrainmentLeeCheung1990";
 
 export const IX = 0;
 export const IY = 1;
@@ -39,8 +39,12 @@ export const IC = 8;
 export const INTEGRAL_DIM = 9;
 
 export interface IntegralParams {
-  /** Depth of the port centre below the surface, m. */
+  /** Depth of the port centre below the surface, m (= the surface's height above the port). */
   readonly portDepth: number;
+  /** Height of the port centre above the seabed, m. */
+  readonly portHeight: number;
+  /** Ambient salinity at port level, g/kg (0 when the column has no salinity profile). */
+  readonly portSalinity: number;
   /** Ambient profile depths below the surface, m, ascending. */
   readonly depths: Float64Array;
   /** ε = g(ρa − ρa0)/ρa0 at each profile depth, m/s² (ρa0 = ambient density at the port). */
@@ -157,4 +161,35 @@ export function upperEdgeSlope(y: Float64Array, dy: Float64Array): number {
   // At a vertical axis c = 0 and the √ has an infinite slope; the edge is then the centreline.
   const dc = c > 1e-9 ? (-tz * dtz) / c : 0;
   return dy[IZ] + db * c + b * dc;
+}
+
+/**
+ * Shear minus forced entrainment (Lee & Cheung 1990 closure, as in `integralJetRhs`): the rate is the
+ * larger of the two, so the RHS has a kink where this crosses zero. Used to restart the integration
+ * there. Allocates nothing.
+ */
+export function entrainmentSwitch(y: Float64Array, p: IntegralParams): number {
+  const q = y[IQ];
+  const mx = y[IMX];
+  const my = y[IMY];
+  const mz = y[IMZ];
+  let m = Math.sqrt(mx * mx + my * my + mz * mz);
+  if (!(m > TINY_MOMENTUM)) m = TINY_MOMENTUM;
+  const tz = mz / m;
+  const speed = m / q;
+  const radius = q / Math.sqrt(Math.PI * m);
+  let eps = 0;
+  if (p.stratified) eps = profileAt(p.depths, p.epsilon, p.portDepth - y[IZ]);
+  const gDense = y[IB] / q - eps;
+  const gAbs = gDense >= 0 ? gDense : -gDense;
+  const align = gDense > 0 ? -tz : gDense < 0 ? tz : 0;
+  const ua = p.currentSpeed;
+  const cosAxisCurrent = (p.currentX * mx + p.currentY * my) / m;
+  const us = ua * cosAxisCurrent;
+  const deltaU = speed - us;
+  const alpha = entrainmentLeeCheung1990Alpha(deltaU, us, align, gAbs, radius);
+  const shear = deltaU > 0 ? 2 * Math.PI * radius * alpha * deltaU : 0;
+  const sin2 = 1 - cosAxisCurrent * cosAxisCurrent;
+  const forced = 2 * radius * ua * Math.sqrt(sin2 > 0 ? sin2 : 0);
+  return shear - forced;
 }

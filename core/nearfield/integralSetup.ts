@@ -54,6 +54,8 @@ export function integralParamsFrom(jet: JetSource, column: AmbientColumn): Integ
   const ua = Math.max(0, column.currentSpeed || 0);
   return {
     portDepth,
+    portHeight: jet.portHeight,
+    portSalinity: sal0,
     depths,
     epsilon,
     salinityExcess,
@@ -78,8 +80,11 @@ function interp(d: Float64Array, v: Float64Array, x: number): number {
   return v[n - 1];
 }
 
-/** Initial state at the port: top-hat jet of diameter d, speed U along the port axis. */
-export function integralInitialState(jet: JetSource, column: AmbientColumn): Float64Array {
+/**
+ * Initial state at the port: top-hat jet of diameter d, speed U along the port axis. `params` (from
+ * `integralParamsFrom` for the same jet and column) saves re-reading the profile.
+ */
+export function integralInitialState(jet: JetSource, column: AmbientColumn, params?: IntegralParams): Float64Array {
   const y0 = new Float64Array(INTEGRAL_DIM);
   const th = (jet.angle * Math.PI) / 180;
   const az = (jet.azimuth * Math.PI) / 180;
@@ -91,11 +96,8 @@ export function integralInitialState(jet: JetSource, column: AmbientColumn): Flo
   y0[IMY] = m0 * Math.cos(th) * Math.cos(az);
   y0[IMZ] = m0 * Math.sin(th);
   y0[IB] = q0 * jet.reducedGravity;
-  const portDepth = column.depth - jet.portHeight;
   // A missing salinity profile counts as uniform (salinity excess then equals discharge − 0).
-  const sal = column.salinities.length === column.depths.length ? column.salinities : column.depths.map(() => 0);
-  const sal0 = interp(Float64Array.from(column.depths), Float64Array.from(sal), portDepth);
-  y0[IC] = q0 * (jet.salinity - sal0);
+  y0[IC] = q0 * (jet.salinity - (params ?? integralParamsFrom(jet, column)).portSalinity);
   return y0;
 }
 
@@ -113,3 +115,7 @@ export const EV_IMPACT = 2;
 export const EV_SURFACE_EDGE = 3;
 export const EV_SURFACE_CENTRE = 4;
 export const EV_MAX_RISE = 5;
+/** Centreline top (M_z = 0): the entrainment closure's buoyancy term switches on there (a kink in the RHS). */
+export const EV_TOP = 6;
+/** Shear and forced entrainment equal: the closure switches from one to the other (a kink in the RHS). */
+export const EV_ENTRAINMENT_SWITCH = 7;

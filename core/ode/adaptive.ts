@@ -8,6 +8,14 @@
  * 1993, §II.4). Event location: Illinois (modified regula falsi) on g(t_old + θh, y(θ)) with the
  * dense output y(θ), to |Δt| ≤ 1e-12·max(1, |t|).
  *
+ * Events that need the slope of the solution (`slope: true`) get the derivative of the dense output
+ * during the root search, so the search never calls the right-hand side. Events marked `restart`
+ * flag points where the right-hand side is not smooth (a kink in a closure): the step size is capped
+ * so that a step ends at the predicted crossing (from `rate`, the event's dg/dt), and when a step
+ * does cross, the rest of it is discarded and the integration restarts at the located point. Steps
+ * then never straddle the kink, where the error estimate would reject them repeatedly and the
+ * 5th-order accuracy is lost (Hairer, Nørsett & Wanner 1993, §II.6, "discontinuities").
+ *
  * The inner loop allocates nothing: all vectors are created once per call; event hits (rare)
  * allocate their own state copies.
  */
@@ -24,6 +32,57 @@ export interface OdeEvent<P> {
   readonly direction: -1 | 0 | 1;
   /** Stop the integration at this event. */
   readonly terminal: boolean;
+  /** g uses dy: inside a step the driver passes the dense output's derivative (never the RHS). */
+  readonly slope?: boolean;
+  /** The right-hand side is not smooth where g = 0: restart the integration at the crossing. */
+  readonly restart?: boolean;
+  /** dg/dt at a step end (dy = f(t, y)); with `restart`, steps are cut to end at the predicted crossing. */
+  readonly rate?: (t: number, y: Float64Array, params: P, dy: Float64Array) => number;
+}
+
+/** How the driver treats one event of an `EventSet`. */
+export interface EventSpec {
+  readonly direction: -1 | 0 | 1;
+  readonly terminal: boolean;
+  /** The event's g uses dy: the root search then passes the dense output's derivative. */
+  readonly slope?: boolean;
+  /** The right-hand side is not smooth where g = 0: restart the integration at the crossing. */
+  readonly restart?: boolean;
+}
+
+/**
+ * Every event of a run evaluated by one function (shared work, and no number returned per event, so
+ * an optimised caller allocates nothing). Equivalent to an `OdeEvent[]`, which the driver wraps.
+ */
+export interface EventSet<P> {
+  readonly specs: readonly EventSpec[];
+  /**
+   * Writes g_e(t, y) for every event e into `out`. `dy` is f(t, y) at step ends; inside a step it is the
+   * dense output's derivative when any event has `slope`, else undefined. `only` (the root search) names
+   * the one event whose value is read: an implementation may skip the others.
+   */
+  values(t: number, y: Float64Array, params: P, dy: Float64Array | undefined, out: Float64Array, only?: number): void;
+  /** dg_e/dt at a step end (dy = f(t, y)) for the restart events; with it, steps end at predicted crossings. */
+  rates?(t: number, y: Float64Array, params: P, dy: Float64Array, out: Float64Array): void;
+}
+
+/** The event-set form of a list of single events. */
+export function eventSetFrom<P>(events: readonly OdeEvent<P>[]): EventSet<P> {
+  const withRate = events.some((e) => e.restart && e.rate);
+  return {
+    specs: events,
+    values(t, y, params, dy, out) {
+      for (let e = 0; e < events.length; e++) out[e] = events[e].fn(t, y, params, dy);
+    },
+    rates: withRate
+      ? (t, y, params, dy, out) => {
+          for (let e = 0; e < events.length; e++) {
+            const r = events[e].rate;
+            out[e] = r ? r(t, y, params, dy) : Number.NaN;
+          }
+        }
+      : undefined,
+  };
 }
 
 export interface EventHit {
@@ -46,6 +105,8 @@ export interface AdaptiveOptions {
   readonly hMax: number;
   readonly maxSteps: number;
   readonly tMax: number;
+  /** When given, event hits go here (reset at the start) and `AdaptiveResult.events` stays empty. */
+  readonly eventLog?: EventLog;
 }
 
 export interface AdaptiveResult {
@@ -57,7 +118,7 @@ export interface AdaptiveResult {
   readonly rejected: number;
   /** Right-hand-side evaluations by the stepper during this run (event functions not counted). */
   readonly evaluations: number;
-  /** Every located event in order of t (non-terminal ones included). */
+  /** Every located event in order of t (non-terminal ones included); empty when `eventLog` was given. */
   readonly events: readonly EventHit[];
 }
 
@@ -67,6 +128,95 @@ export interface AdaptiveResult {
  */
 export type StepCallback = (t: number, y: Float64Array) => boolean | void;
 
+const STOP_NONE = 0;
+const STOP_TERMINAL = 1;
+const STOP_RESTART = 2;
+
+interface StepCrossing {
+  readonly index: number;
+  readonly t: number;
+  readonly theta: number;
+}
+
+/**
+ * Event hits written into reusable buffers instead of `AdaptiveResult.events` (for callers that read
+ * them before the next run: no allocation per hit). `reset()` is called by the driver at the start.
+ */
+export class EventLog {
+  count = 0;
+  index = new Int32Array(16);
+  t = new Float64Array(16);
+  y: Float64Array;
+
+  constructor(readonly dim: number) {
+    this.y = new Float64Array(16 * dim);
+  }
+
+  reset(): void {
+    this.count = 0;
+  }
+
+  push(index: number, t: number, y: Float64Array): void {
+    if (this.count >= this.t.length) {
+      const grow = <T extends Float64Array | Int32Array>(a: T, size: number): T => {
+        const b = new (a.constructor as new (n: number) => T)(size);
+        b.set(a);
+        return b;
+      };
+      this.index = grow(this.index, this.t.length * 2);
+      this.y = grow(this.y, this.y.length * 2);
+      this.t = grow(this.t, this.t.length * 2);
+    }
+    const k = this.count++;
+    this.index[k] = index;
+    this.t[k] = t;
+    const at = k * this.dim;
+    for (let i = 0; i < this.dim; i++) this.y[at + i] = y[i];
+  }
+
+  /** Copies the state of hit k into out. */
+  copy(k: number, out: Float64Array): void {
+    const at = k * this.dim;
+    for (let i = 0; i < this.dim; i++) out[i] = this.y[at + i];
+  }
+
+  /** Component i of the state of hit k. */
+  component(k: number, i: number): number {
+    return this.y[k * this.dim + i];
+  }
+}
+
+interface Workspace {
+  readonly n: number;
+  readonly ne: number;
+  readonly yNew: Float64Array;
+  readonly yTry: Float64Array;
+  readonly dyTry: Float64Array;
+  readonly gOld: Float64Array;
+  readonly gNew: Float64Array;
+  readonly rateOld: Float64Array;
+  readonly rateNow: Float64Array;
+  readonly gTry: Float64Array;
+}
+
+/** One set of scratch vectors kept between runs (taken while a run is in progress, so nesting is safe). */
+let spare: Workspace | null = null;
+
+function newWorkspace(n: number, ne: number): Workspace {
+  return {
+    n,
+    ne,
+    yNew: new Float64Array(n),
+    yTry: new Float64Array(n),
+    dyTry: new Float64Array(n),
+    gOld: new Float64Array(ne),
+    gNew: new Float64Array(ne),
+    rateOld: new Float64Array(ne),
+    rateNow: new Float64Array(ne),
+    gTry: new Float64Array(ne),
+  };
+}
+
 /** Integrates from (t0, y0) forward until tMax, a terminal event, a guard, or the callback stops it. */
 export function integrateAdaptive<P>(
   stepper: Stepper<P>,
@@ -75,44 +225,64 @@ export function integrateAdaptive<P>(
   t0: number,
   y0: Float64Array,
   options: AdaptiveOptions,
-  events: readonly OdeEvent<P>[] = [],
+  eventList: readonly OdeEvent<P>[] | EventSet<P> = [],
   onStep?: StepCallback,
 ): AdaptiveResult {
+  const events: EventSet<P> = isEventSet(eventList) ? eventList : eventSetFrom(eventList);
+  const specs = events.specs;
   void rhs; // the stepper holds the right-hand side; kept in the signature for readability at call sites
   const n = stepper.dim;
   const { rtol, atol, hMin, hMax, maxSteps, tMax } = options;
-  const yNew = new Float64Array(n);
-  const yTry = new Float64Array(n);
-  const ne = events.length;
-  const gOld = new Float64Array(ne);
-  const gNew = new Float64Array(ne);
+  const ne = specs.length;
+  // Scratch vectors: the previous run's, when it has finished and the sizes match (no allocation per solve).
+  let ws = spare;
+  if (ws && ws.n === n && ws.ne === ne) spare = null;
+  else ws = newWorkspace(n, ne);
+  const { yNew, yTry, dyTry, gOld, gNew, rateOld, rateNow, gTry } = ws;
+  rateOld.fill(Number.NaN);
   const hits: EventHit[] = [];
+  const log = options.eventLog;
+  log?.reset();
   const exponent = -1 / (stepper.errorOrder + 1);
+  let tCapped = Number.NaN; // t of the last kink prediction (once per accepted point, not per attempt)
+  let hasRestart = false;
+  let anySlope = false;
+  for (let e = 0; e < ne; e++) {
+    if (specs[e].restart && events.rates) hasRestart = true;
+    if (specs[e].slope) anySlope = true;
+  }
 
   stepper.reset(t0, y0, params);
   const evaluations0 = stepper.evaluations;
-  for (let e = 0; e < ne; e++) gOld[e] = events[e].fn(t0, stepper.y, params, stepper.f);
+  if (ne > 0) events.values(t0, stepper.y, params, stepper.f, gOld);
 
   let h = Math.min(Math.max(options.h0, hMin), hMax);
   let steps = 0;
   let rejected = 0;
   let lastRejected = false;
 
-  const finish = (reason: StopReason, t: number, y: Float64Array): AdaptiveResult => ({
-    reason,
-    t,
-    y: Float64Array.from(y),
-    steps,
-    rejected,
-    evaluations: stepper.evaluations - evaluations0,
-    events: hits,
-  });
+  const finish = (reason: StopReason, t: number, y: Float64Array): AdaptiveResult => {
+    spare = ws;
+    return { reason, t, y: Float64Array.from(y), steps, rejected, evaluations: stepper.evaluations - evaluations0, events: hits };
+  };
 
   for (;;) {
     const t = stepper.t;
     if (t >= tMax) return finish("t-max", t, stepper.y);
     if (steps >= maxSteps) return finish("max-steps", t, stepper.y);
     if (t + h > tMax) h = tMax - t;
+    if (hasRestart && t !== tCapped) {
+      events.rates!(t, stepper.y, params, stepper.f, rateNow);
+      arrivedAt = -1;
+      h = capAtKink(specs, gOld, rateNow, h, hMin, rateOld, t - tCapped);
+      tCapped = t;
+      if (arrivedAt >= 0) {
+        // The crossing is at this point: record it and consume it; the next step starts on the kink.
+        if (log) log.push(arrivedAt, t, stepper.y);
+        else hits.push({ index: arrivedAt, t, y: Float64Array.from(stepper.y) });
+        gOld[arrivedAt] = 0;
+      }
+    }
     const err = stepper.attempt(h, yNew, atol, rtol);
     if (err > 1) {
       rejected++;
@@ -131,42 +301,126 @@ export function integrateAdaptive<P>(
     lastRejected = false;
     h = Math.min(hUsed * factor, hMax);
 
-    // Events in this step, earliest first; stop at the first terminal one.
-    let terminalHit: EventHit | null = null;
+    // Events in this step, earliest first; stop at the first terminal one, cut the step at a restart.
+    let stop = STOP_NONE;
+    let stopT = 0;
+    let stopIndex = -1;
     if (ne > 0) {
-      for (let e = 0; e < ne; e++) gNew[e] = events[e].fn(tNew, stepper.y, params, stepper.f);
-      let stepHits: EventHit[] | null = null; // allocated only when a crossing occurs
+      events.values(tNew, stepper.y, params, stepper.f, gNew);
+      let stepHits: StepCrossing[] | null = null; // allocated only when a crossing occurs
       for (let e = 0; e < ne; e++) {
         const a = gOld[e];
         const b = gNew[e];
-        const dir = events[e].direction;
+        const dir = specs[e].direction;
         const down = a > 0 && b <= 0;
         const up = a < 0 && b >= 0;
         if ((dir <= 0 && down) || (dir >= 0 && up)) {
-          const theta = locateRoot(stepper, events[e], params, t, hUsed, a, b, yTry);
-          stepper.interpolate(theta, yTry);
-          (stepHits ??= []).push({ index: e, t: t + theta * hUsed, y: Float64Array.from(yTry) });
+          const theta = locateRoot(stepper, events, e, anySlope, params, t, hUsed, a, b, yTry, dyTry, gTry);
+          (stepHits ??= []).push({ index: e, t: t + theta * hUsed, theta });
         }
       }
       if (stepHits) {
-        stepHits.sort((p, q) => p.t - q.t);
+        if (stepHits.length > 1) stepHits.sort((p, q) => p.t - q.t);
         for (const hit of stepHits) {
-          hits.push(hit);
-          if (events[hit.index].terminal) {
-            terminalHit = hit;
+          stepper.interpolate(hit.theta, yTry);
+          if (log) log.push(hit.index, hit.t, yTry);
+          else hits.push({ index: hit.index, t: hit.t, y: Float64Array.from(yTry) });
+          if (specs[hit.index].terminal) {
+            stop = STOP_TERMINAL;
+          } else if (specs[hit.index].restart && hit.t < tNew - 1e-12 * Math.max(1, Math.abs(tNew))) {
+            // A restart inside the step (not at its end): later crossings of this step are found again.
+            stop = STOP_RESTART;
+          }
+          if (stop !== STOP_NONE) {
+            stopT = hit.t;
+            stopIndex = hit.index;
             break;
           }
         }
       }
-      gOld.set(gNew);
+      if (stop !== STOP_RESTART) gOld.set(gNew);
     }
-    if (terminalHit) {
-      onStep?.(terminalHit.t, terminalHit.y);
-      return finish("event", terminalHit.t, terminalHit.y);
+    if (stop === STOP_TERMINAL) {
+      onStep?.(stopT, yTry);
+      return finish("event", stopT, yTry);
+    }
+    if (stop === STOP_RESTART) {
+      stepper.reset(stopT, yTry, params);
+      events.values(stopT, stepper.y, params, stepper.f, gOld);
+      gOld[stopIndex] = 0; // the crossing is consumed: g must leave zero again to count
+      if (onStep && onStep(stopT, stepper.y) === false) return finish("callback", stopT, stepper.y);
+      continue;
     }
     if (onStep && onStep(tNew, stepper.y) === false) return finish("callback", tNew, stepper.y);
     if (h < hMin) return finish("step-underflow", tNew, stepper.y);
   }
+}
+
+/** Set by capAtKink: index of a restart event whose crossing the current point has reached, else −1. */
+let arrivedAt = -1;
+/**
+ * A capped step ends this much beyond the predicted crossing, so a slightly late prediction still puts
+ * the crossing inside the step (located on the dense output) instead of leaving a sliver for one more.
+ */
+const KINK_MARGIN = 1.001;
+
+/**
+ * Shortens a step that would cross a restart event, to end at the crossing predicted from g and dg/dt
+ * at the current point (a little beyond it, so the crossing falls inside the step's last part and is
+ * located on the dense output instead of starting a tiny extra step).
+ */
+function capAtKink(
+  specs: readonly EventSpec[],
+  gOld: Float64Array,
+  rates: Float64Array,
+  h: number,
+  hMin: number,
+  rateOld: Float64Array,
+  hPrev: number,
+): number {
+  for (let e = 0; e < specs.length; e++) {
+    const ev = specs[e];
+    if (!ev.restart) continue;
+    const g = gOld[e];
+    const rate = rates[e];
+    if (g === 0 || rate !== rate) {
+      rateOld[e] = Number.NaN;
+      continue;
+    }
+    // Heading for zero in an allowed direction?
+    if (!(g * rate < 0) || (ev.direction < 0 && g < 0) || (ev.direction > 0 && g > 0)) {
+      rateOld[e] = rate;
+      continue;
+    }
+    let reach = -g / rate;
+    // Curvature of g from the change of its rate over the last step (quadratic prediction).
+    const prev = rateOld[e];
+    if (hPrev > 0 && prev === prev) {
+      const c = (rate - prev) / hPrev;
+      const disc = rate * rate - 2 * c * g;
+      if (c !== 0 && disc >= 0) {
+        const sq = Math.sqrt(disc);
+        // Smallest positive root of g + rate·τ + c·τ²/2 = 0, written to avoid cancellation.
+        const r1 = (-rate - Math.sign(rate) * sq) / c;
+        const r2 = (2 * -g) / (rate + Math.sign(rate) * sq);
+        const best = Math.min(r1 > 0 ? r1 : Infinity, r2 > 0 ? r2 : Infinity);
+        if (best < Infinity) reach = best;
+      }
+    }
+    rateOld[e] = rate;
+    // Already there (the last step ended within a millionth of a step of the crossing): no sliver step.
+    if (hPrev > 0 && reach <= 1e-6 * hPrev) {
+      arrivedAt = e;
+      continue;
+    }
+    reach *= KINK_MARGIN;
+    if (reach < h && reach > hMin) h = reach;
+  }
+  return h;
+}
+
+function isEventSet<P>(x: readonly OdeEvent<P>[] | EventSet<P>): x is EventSet<P> {
+  return !Array.isArray(x);
 }
 
 /**
@@ -175,13 +429,17 @@ export function integrateAdaptive<P>(
  */
 function locateRoot<P>(
   stepper: Stepper<P>,
-  event: OdeEvent<P>,
+  events: EventSet<P>,
+  index: number,
+  slope: boolean,
   params: P,
   t: number,
   h: number,
   gA: number,
   gB: number,
   scratch: Float64Array,
+  scratchDy: Float64Array,
+  gTry: Float64Array,
 ): number {
   if (gB === 0) return 1;
   let a = 0;
@@ -195,7 +453,9 @@ function locateRoot<P>(
     // Bisect if the secant point is not strictly inside the bracket (flat or non-finite g).
     if (!(m > a && m < b)) m = 0.5 * (a + b);
     stepper.interpolate(m, scratch);
-    const fm = event.fn(t + m * h, scratch, params);
+    if (slope) stepper.interpolateDerivative(m, scratchDy);
+    events.values(t + m * h, scratch, params, slope ? scratchDy : undefined, gTry, index);
+    const fm = gTry[index];
     if (fm === 0) return m;
     if (fm * fb < 0) {
       a = m;

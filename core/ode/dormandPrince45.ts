@@ -172,6 +172,22 @@ class DormandPrince45<P> implements Stepper<P> {
       out[i] = r1[i] + theta * (r2[i] + t1 * (r3[i] + theta * (r4[i] + t1 * r5[i])));
     }
   }
+
+  interpolateDerivative(theta: number, out: Float64Array): void {
+    const n = this.dim;
+    const { r2, r3, r4, r5 } = this;
+    const t1 = 1 - theta;
+    const invH = 1 / this.h;
+    // d/dθ of r1 + θ·A, A = r2 + (1−θ)·B, B = r3 + θ·C, C = r4 + (1−θ)·r5 (product rule, inside out).
+    for (let i = 0; i < n; i++) {
+      const c = r4[i] + t1 * r5[i];
+      const b = r3[i] + theta * c;
+      const a = r2[i] + t1 * b;
+      const dB = c - theta * r5[i];
+      const dA = t1 * dB - b;
+      out[i] = (a + theta * dA) * invH;
+    }
+  }
 }
 
 /** A new Dormand–Prince 5(4) stepper for a system of `dim` equations. */

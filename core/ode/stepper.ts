@@ -34,6 +34,11 @@ export interface Stepper<P> {
    * Valid only between `accept()` and the next `attempt()`.
    */
   interpolate(theta: number, out: Float64Array): void;
+  /**
+   * Derivative dy/dt of the dense output at t_old + theta·h (same validity as `interpolate`): lets event
+   * functions that need the slope be searched without calling the right-hand side.
+   */
+  interpolateDerivative(theta: number, out: Float64Array): void;
   /** Current point after the last `accept()` (or `reset`). */
   readonly t: number;
   readonly y: Float64Array;

@@ -1,6 +1,8 @@
 /**
- * Runs the current scenario file in the core worker, debounced, and keeps the last good result on screen
- * while the file has errors. Stale responses (an older edit finishing late) are dropped.
+ * Runs the current scenario file in the core worker and keeps the last good result on screen while the
+ * file has errors. The first edit is sent at once (no debounce); edits made while a run is in flight are
+ * coalesced into one run of the latest file, sent when the reply arrives. Stale responses (an older edit
+ * finishing late) are dropped.
  */
 import { fieldBounds } from "../../core/scenario/bounds";
 import { formatNumber, siLabel } from "../../core/units";
@@ -9,8 +11,7 @@ import type { BrinefieldResult } from "../../core/result/contract";
 import type { Scenario } from "../../core/scenario/types";
 import type { EngineIssue, EngineRequest, EngineResponse } from "./messages";
 import { runFile } from "./runFile";
-
-export const ENGINE_DEBOUNCE_MS = 150;
+import { dropEngineWorker, startEngineWorker } from "./engineWorker";
 
 export interface EngineState {
   /** Last successful run (kept while later edits fail). */
@@ -37,60 +38,87 @@ export function applyResponse(previous: EngineState, response: EngineResponse): 
     : { ...previous, issues: response.issues, error: response.message, stale: previous.result !== null, running: false };
 }
 
+/**
+ * Which request to send next: none while a run is in flight (the newest file waits and is sent when the
+ * reply comes), else the newest file if it has not been sent. Pure, for tests.
+ */
+export function nextRequest(inFlight: boolean, latestId: number, sentId: number): number | null {
+  return !inFlight && latestId > sentId ? latestId : null;
+}
+
 export function useEngine(file: unknown): EngineState {
   const [state, setState] = useState<EngineState>(INITIAL);
   const workerRef = useRef<Worker | null>(null);
   const latestId = useRef(0);
   const latestFile = useRef<unknown>(file);
   latestFile.current = file;
+  const sentId = useRef(0);
+  const inFlight = useRef(false);
   // Set when no worker can run (e.g. a platform that refuses module workers): core then runs here.
   const inThread = useRef(false);
+
+  const pump = useRef<() => void>(() => {});
+  pump.current = () => {
+    const id = nextRequest(inFlight.current, latestId.current, sentId.current);
+    if (id === null) return;
+    sentId.current = id;
+    const request: EngineRequest = { id, file: latestFile.current };
+    if (workerRef.current) {
+      inFlight.current = true;
+      workerRef.current.postMessage(request);
+    } else if (inThread.current) {
+      const response = runFile(id, request.file);
+      if (response.id === latestId.current) setState((previous) => applyResponse(previous, response));
+    }
+  };
 
   useEffect(() => {
     const accept = (response: EngineResponse) => {
       if (response.id !== latestId.current) return;
       setState((previous) => applyResponse(previous, response));
     };
-    let worker: Worker;
-    try {
-      worker = new Worker(new URL("../worker.ts", import.meta.url), { type: "module" });
-    } catch {
+    const runHere = () => {
       inThread.current = true;
+      inFlight.current = false;
       setState((previous) => ({ ...previous, inWorker: false }));
+      sentId.current = latestId.current;
       accept(runFile(latestId.current, latestFile.current));
+    };
+    const worker = startEngineWorker();
+    if (!worker) {
+      runHere();
       return;
     }
     workerRef.current = worker;
-    worker.addEventListener("message", (event: MessageEvent<EngineResponse>) => accept(event.data));
-    worker.addEventListener("error", (event) => {
+    const onMessage = (event: MessageEvent<EngineResponse>) => {
+      inFlight.current = false;
+      accept(event.data);
+      pump.current(); // edits made during the run: one request with the newest file
+    };
+    const onError = (event: ErrorEvent) => {
       // The worker could not load or crashed: keep working on this thread rather than stop.
       event.preventDefault();
-      worker.terminate();
+      dropEngineWorker();
       workerRef.current = null;
-      inThread.current = true;
-      setState((previous) => ({ ...previous, inWorker: false }));
-      accept(runFile(latestId.current, latestFile.current));
-    });
+      runHere();
+    };
+    worker.addEventListener("message", onMessage);
+    worker.addEventListener("error", onError);
+    pump.current(); // the file of the first render
     return () => {
-      worker.terminate();
+      // The worker belongs to the page (started before the first render) and stays for the next mount.
+      worker.removeEventListener("message", onMessage);
+      worker.removeEventListener("error", onError);
       workerRef.current = null;
+      inFlight.current = false;
+      sentId.current = 0;
     };
   }, []);
 
   useEffect(() => {
-    const id = ++latestId.current;
+    ++latestId.current;
     setState((previous) => (previous.running ? previous : { ...previous, running: true }));
-    const timer = setTimeout(() => {
-      const request: EngineRequest = { id, file };
-      if (workerRef.current) workerRef.current.postMessage(request);
-      else if (inThread.current) {
-        const response = runFile(id, file);
-        if (response.id === latestId.current) {
-          setState((previous) => applyResponse(previous, response));
-        }
-      }
-    }, ENGINE_DEBOUNCE_MS);
-    return () => clearTimeout(timer);
+    pump.current();
   }, [file]);
 
   return state;

@@ -5,7 +5,7 @@
  * the core pipeline; this component only plans with core helpers, shows progress and draws results.
  * Each section lives in its own file; this one holds the worker pool, the progress bar and the tabs.
  */
-import { useCallback, useEffect, useMemo, useState } from "react";
+import { useCallback, useEffect, useState } from "react";
 import type { Scenario } from "../../core/scenario/types";
 import type { UnitSystem } from "../../core/units";
 import type { Overrides } from "../../core/study/overrides";
@@ -13,7 +13,7 @@ import { splitRuns } from "../../core/study/montecarlo";
 import { describeCases, expandCases } from "../../core/study/cases";
 import type { PointEvaluation } from "../../core/study/evaluate-point";
 import type { StudyTask } from "./messages";
-import { StudyCancelled, StudyWorkerPool, defaultWorkerCount } from "./workerPool";
+import { StudyCancelled, StudyWorkerPool, sharedStudyPool } from "./workerPool";
 import type { Replies } from "./sections";
 import { VariantsSection } from "./VariantsSection";
 import { SweepSection } from "./SweepSection";
@@ -59,8 +59,9 @@ export function StudyPanel({
   onApplyDesign,
   onNotice,
 }: Props) {
-  const pool = useMemo(() => new StudyWorkerPool(defaultWorkerCount()), []);
-  useEffect(() => () => pool.dispose(), [pool]);
+  // One pool per page, kept between studies and tab switches (warm workers); unmounting stops a running job.
+  const pool = sharedStudyPool();
+  useEffect(() => () => pool.stopIfRunning(), [pool]);
   const [section, setSection] = useState<Section>("variants");
   // Sections stay mounted once opened (hidden when not shown), so results survive switching between them.
   const [opened, setOpened] = useState<ReadonlySet<Section>>(() => new Set<Section>(["variants"]));

@@ -1,7 +1,8 @@
 /**
  * A pool of Study Web Workers. Tasks go to free workers in order; replies come back by task index, so
  * merged results do not depend on scheduling (Monte Carlo runs draw from per-run streams anyway).
- * `cancel()` terminates the workers at once; the pool starts fresh ones for the next job.
+ * `cancel()` terminates the workers at once; the pool starts fresh ones for the next job. Between jobs the
+ * workers stay alive (`sharedStudyPool`), so later studies run on warm workers.
  */
 import type { StudyReply, StudyTask } from "./messages";
 
@@ -89,6 +90,21 @@ export class StudyWorkerPool {
   dispose(): void {
     this.cancel();
   }
+
+  /** Cancels the running job, if any (its workers are replaced); idle, warm workers are kept. */
+  stopIfRunning(): void {
+    if (this.abort) this.cancel();
+  }
+}
+
+let shared: StudyWorkerPool | null = null;
+
+/**
+ * The page's study pool, kept alive between studies and tab switches: warm workers skip the start-up and
+ * the compiler's warm-up that a fresh worker spends on its first thousands of cases.
+ */
+export function sharedStudyPool(): StudyWorkerPool {
+  return (shared ??= new StudyWorkerPool(defaultWorkerCount()));
 }
 
 export function defaultWorkerCount(): number {

@@ -21,10 +21,17 @@ export type WorkerTask =
       readonly id: number;
       readonly scenario: Scenario;
       readonly overrides: readonly Overrides[];
+    }
+  | {
+      /** Pure arithmetic with no memory traffic: the benchmark's control for the worker speed-up. */
+      readonly kind: "control";
+      readonly id: number;
+      readonly iterations: number;
     };
 
 export type WorkerReply =
   | { readonly kind: "progress"; readonly id: number; readonly done: number }
   | { readonly kind: "monte-carlo-done"; readonly id: number; readonly chunk: MonteCarloChunk }
   | { readonly kind: "points-done"; readonly id: number; readonly points: readonly PointEvaluation[] }
+  | { readonly kind: "control-done"; readonly id: number; readonly value: number }
   | { readonly kind: "error"; readonly id: number; readonly message: string };

@@ -65,16 +65,24 @@ export async function monteCarloOnWorkers(
   workers: number,
   onProgress?: (done: number) => void,
 ): Promise<MonteCarloChunk[]> {
-  return withPool(workers, async (pool) => {
-    const chunks = splitRuns(plan.runs, workers * CHUNKS_PER_WORKER);
-    const replies = await pool.run(
-      chunks.map((c) => ({ kind: "monte-carlo" as const, scenario, plan, start: c.start, end: c.end })),
-      onProgress,
-    );
-    return replies.map((r) => {
-      if (r.kind !== "monte-carlo-done") throw new Error("unexpected worker reply");
-      return r.chunk;
-    });
+  return withPool(workers, (pool) => monteCarloOnPool(pool, scenario, plan, onProgress));
+}
+
+/** Monte Carlo on a pool the caller keeps (warm workers: no start-up or compiler warm-up per study). */
+export async function monteCarloOnPool(
+  pool: StudyPool,
+  scenario: Scenario,
+  plan: MonteCarloPlan,
+  onProgress?: (done: number) => void,
+): Promise<MonteCarloChunk[]> {
+  const chunks = splitRuns(plan.runs, pool.size * CHUNKS_PER_WORKER);
+  const replies = await pool.run(
+    chunks.map((c) => ({ kind: "monte-carlo" as const, scenario, plan, start: c.start, end: c.end })),
+    onProgress,
+  );
+  return replies.map((r) => {
+    if (r.kind !== "monte-carlo-done") throw new Error("unexpected worker reply");
+    return r.chunk;
   });
 }
 

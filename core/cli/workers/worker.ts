@@ -32,6 +32,8 @@ export function runWorkerThread(): boolean {
         const arrays = [...chunk.edgeDilution, ...chunk.margin, ...(chunk.requiredDilution ?? []), ...chunk.pass];
         const buffers = arrays.map((a) => a.buffer as ArrayBuffer);
         post({ kind: "monte-carlo-done", id: task.id, chunk }, buffers);
+      } else if (task.kind === "control") {
+        post({ kind: "control-done", id: task.id, value: controlLoop(task.iterations) });
       } else {
         const points = evaluatePoints(task.scenario, task.overrides, evaluateScenario, (done) => {
           if (done % PROGRESS_EVERY === 0) post({ kind: "progress", id: task.id, done });
@@ -43,4 +45,15 @@ export function runWorkerThread(): boolean {
     }
   });
   return true;
+}
+
+/** A compute-only loop (a few registers, no allocation, no memory traffic): scales with cores if anything does. */
+export function controlLoop(iterations: number): number {
+  let x = 0.5;
+  let acc = 0;
+  for (let i = 0; i < iterations; i++) {
+    x = 3.9 * x * (1 - x); // logistic map: chaotic, so the loop cannot be folded away
+    acc += x;
+  }
+  return acc;
 }

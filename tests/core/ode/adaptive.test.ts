@@ -92,3 +92,55 @@ describe("integrateAdaptive()", () => {
     expect(calls, "called once per accepted step").toBe(3);
   });
 });
+
+describe("integrateAdaptive() at a kink of the right-hand side and with slope events", () => {
+  // y' = cos t + 3·max(0, t − 1): the derivative of f jumps at t = 1. Exact: y(3) = sin 3 + 1.5·(3 − 1)² (DERIVED).
+  const kink = (t: number, _y: Float64Array, out: Float64Array) => {
+    out[0] = Math.cos(t) + (t > 1 ? 3 * (t - 1) : 0);
+  };
+  const exact = Math.sin(3) + 6;
+  const kinkOpts = { rtol: 1e-6, atol: Float64Array.of(1e-6), h0: 0.37, hMin: 1e-14, hMax: 0.7, maxSteps: 10000, tMax: 3 };
+
+  it("ends a step at a restart event's predicted crossing and restarts there: accurate, no rejected step", () => {
+    const restart: OdeEvent<object>[] = [{ fn: (t) => t - 1, direction: 1, terminal: false, restart: true, rate: () => 1 }];
+    const withRestart = integrateAdaptive(stepperDormandPrince45(kink, 1), kink, {}, 0, Float64Array.of(0), kinkOpts, restart);
+    const plain = integrateAdaptive(stepperDormandPrince45(kink, 1), kink, {}, 0, Float64Array.of(0), kinkOpts);
+    expect(Math.abs(withRestart.y[0] - exact), "y(3) to the requested accuracy").toBeLessThan(2e-6);
+    expect(withRestart.rejected, "no rejected step with the restart at t = 1").toBe(0);
+    expect(Math.abs(plain.y[0] - exact), "without the restart the kink spoils the accuracy").toBeGreaterThan(1e-5);
+    expect(plain.rejected, "and steps straddling it are rejected").toBeGreaterThan(0);
+    expect(withRestart.events, "the kink is reported once").toHaveLength(1);
+    expect(Math.abs(withRestart.events[0]!.t - 1), "at t = 1").toBeLessThan(1e-9);
+  });
+
+  it("passes the dense output's derivative to slope events inside a step (maximum of sin at π/2)", () => {
+    const calls: number[] = [];
+    const oscCounted = (t: number, y: Float64Array, out: Float64Array) => {
+      calls.push(t);
+      osc(t, y, out);
+    };
+    const st = stepperDormandPrince45(oscCounted, 2);
+    // d/dt sin t = y[1] in the state, but the event reads the slope only from dy.
+    const events: OdeEvent<object>[] = [{ fn: (_t, _y, _p, dy) => dy![0], direction: -1, terminal: true, slope: true }];
+    const r = integrateAdaptive(st, oscCounted, {}, 0, Float64Array.of(0, 1), opts(), events);
+    expect(Math.abs(r.t - Math.PI / 2), "maximum of sin at π/2 (exact)").toBeLessThan(1e-8);
+    expect(calls.length, "the root search adds no right-hand-side evaluations").toBe(st.evaluations);
+  });
+});
+
+describe("Dormand–Prince dense output derivative", () => {
+  it("matches the exact derivative of the harmonic oscillator inside a step (cos t, −sin t)", () => {
+    const st = stepperDormandPrince45(osc, 2);
+    st.reset(0, Float64Array.of(0, 1), {});
+    const y = new Float64Array(2);
+    expect(st.attempt(0.1, y, Float64Array.of(1e-12, 1e-12), 1e-9), "step accepted").toBeLessThan(1e6);
+    st.accept();
+    const dy = new Float64Array(2);
+    for (const theta of [0, 0.3, 0.7, 1]) {
+      st.interpolateDerivative(theta, dy);
+      const t = 0.1 * theta;
+      expect(Math.abs(dy[0] - Math.cos(t)), `d/dt sin at t = ${t} (exact cos t)`).toBeLessThan(1e-6);
+      expect(Math.abs(dy[1] + Math.sin(t)), `d/dt cos at t = ${t} (exact −sin t)`).toBeLessThan(1e-6);
+    }
+  });
+});

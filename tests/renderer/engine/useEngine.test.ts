@@ -5,7 +5,7 @@
 import { readFileSync, readdirSync } from "node:fs";
 import { join } from "node:path";
 import { describe, expect, it } from "vitest";
-import { applyResponse, exportBlocked, issuesByPath, type EngineState } from "../../../renderer/engine/useEngine";
+import { applyResponse, exportBlocked, issuesByPath, nextRequest, type EngineState } from "../../../renderer/engine/useEngine";
 import { runFile, withoutPathPrefix } from "../../../renderer/engine/runFile";
 import { blankScenario } from "../../../renderer/state/scenarioState";
 
@@ -123,5 +123,18 @@ describe("exportBlocked()", () => {
   });
   it("refuses when there are no results at all", () => {
     expect(exportBlocked(empty), "nothing to export").toMatch(/No results/);
+  });
+});
+
+describe("nextRequest(): results while typing", () => {
+  it("sends the first change at once: nothing in flight, a newer file than the last sent", () => {
+    expect(nextRequest(false, 1, 0), "first edit goes out immediately (no debounce)").toBe(1);
+  });
+  it("holds edits while a run is in flight, then sends only the newest when it returns", () => {
+    expect(nextRequest(true, 4, 1), "a run is in flight: wait").toBeNull();
+    expect(nextRequest(false, 4, 1), "reply came: one request, for the newest file (edits 2 and 3 coalesced)").toBe(4);
+  });
+  it("sends nothing when the newest file has already been sent", () => {
+    expect(nextRequest(false, 4, 4), "up to date").toBeNull();
   });
 });
