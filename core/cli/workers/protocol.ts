@@ -3,6 +3,7 @@ import type { Scenario } from "../../scenario/types";
 import type { MonteCarloChunk, MonteCarloPlan } from "../../study/montecarlo";
 import type { PointEvaluation } from "../../study/evaluate-point";
 import type { Overrides } from "../../study/overrides";
+import type { StepOutcome } from "../../record/summary";
 
 /** Marks workerData so `runWorkerThread` knows the thread is a study worker. */
 export const STUDY_WORKER_TAG = "brinefield-study-worker";
@@ -21,10 +22,19 @@ export type WorkerTask =
       readonly id: number;
       readonly scenario: Scenario;
       readonly overrides: readonly Overrides[];
+    }
+  | {
+      /** Steps [start, end) of the scenario's ambient record. */
+      readonly kind: "record-steps";
+      readonly id: number;
+      readonly scenario: Scenario;
+      readonly start: number;
+      readonly end: number;
     };
 
 export type WorkerReply =
   | { readonly kind: "progress"; readonly id: number; readonly done: number }
   | { readonly kind: "monte-carlo-done"; readonly id: number; readonly chunk: MonteCarloChunk }
   | { readonly kind: "points-done"; readonly id: number; readonly points: readonly PointEvaluation[] }
+  | { readonly kind: "record-steps-done"; readonly id: number; readonly outcomes: readonly StepOutcome[] }
   | { readonly kind: "error"; readonly id: number; readonly message: string };

@@ -7,6 +7,7 @@ import type { Scenario } from "../../scenario/types";
 import { splitRuns, type MonteCarloChunk, type MonteCarloPlan } from "../../study/montecarlo";
 import type { PointEvaluation } from "../../study/evaluate-point";
 import type { Overrides } from "../../study/overrides";
+import type { StepOutcome } from "../../record/summary";
 import { CancelledError, StudyPool } from "./pool";
 
 export { CancelledError } from "./pool";
@@ -94,6 +95,28 @@ export async function pointsOnWorkers(
     return replies.flatMap((r) => {
       if (r.kind !== "points-done") throw new Error("unexpected worker reply");
       return r.points;
+    });
+  });
+}
+
+/** Steps of the scenario's ambient record on worker threads, in step order. */
+export async function recordStepsOnWorkers(
+  scenario: Scenario,
+  steps: number,
+  workers: number,
+  onProgress?: (done: number) => void,
+): Promise<StepOutcome[]> {
+  if (steps === 0) return [];
+  const n = Math.min(workers, steps);
+  return withPool(n, async (pool) => {
+    const chunks = splitRuns(steps, n * CHUNKS_PER_WORKER);
+    const replies = await pool.run(
+      chunks.map((c) => ({ kind: "record-steps" as const, scenario, start: c.start, end: c.end })),
+      onProgress,
+    );
+    return replies.flatMap((r) => {
+      if (r.kind !== "record-steps-done") throw new Error("unexpected worker reply");
+      return [...r.outcomes];
     });
   });
 }
