@@ -51,23 +51,22 @@ export function outcomeFromSummary(step: RecordStep, summary: CaseSummary): Step
 }
 
 /**
- * Outcomes of steps [start, end) of the scenario's record, each through `evaluate` (one ambient, no cases).
- * `onStep(done)` is called after each step.
+ * Outcomes of the scenario's record steps, each through `evaluate` (one ambient, no cases): every step,
+ * or only the steps listed in `indices` (a worker thread's share). A step with the same water as an
+ * earlier step reuses its result when that step was computed here. `onStep(done)` is called after each.
  */
 export function runRecordSteps(
   scenario: Scenario,
   evaluate: (s: Scenario) => CaseSummary,
-  start = 0,
-  end?: number,
+  indices?: readonly number[],
   onStep?: (done: number) => void,
   onSummary?: (index: number, summary: CaseSummary) => void,
 ): StepOutcome[] {
-  const steps = recordSteps(scenario);
-  const stop = Math.min(end ?? steps.length, steps.length);
+  const steps = recordSteps(scenario, indices);
   const out: StepOutcome[] = [];
   const summaries = new Map<number, CaseSummary>();
-  for (let i = start; i < stop; i++) {
-    const step = steps[i]!;
+  for (const step of steps) {
+    const i = step.index;
     if (step.refused) out.push(refusedOutcome(step, step.refused));
     else {
       const reuse = step.sameAs !== null ? summaries.get(step.sameAs) : undefined;
@@ -84,6 +83,26 @@ export function runRecordSteps(
     onStep?.(out.length);
   }
   return out;
+}
+
+/** The steps whose water is new (no earlier identical step) and that are not refused: those to compute. */
+export function distinctStepIndices(scenario: Scenario): number[] {
+  return recordSteps(scenario)
+    .filter((s) => s.sameAs === null && !s.refused)
+    .map((s) => s.index);
+}
+
+/**
+ * Every step's outcome from the outcomes of the distinct steps (`computed`, by step index): repeated
+ * water takes the earlier step's numbers with its own time; refused steps are refused.
+ */
+export function outcomesFromDistinct(scenario: Scenario, computed: ReadonlyMap<number, StepOutcome>): StepOutcome[] {
+  return recordSteps(scenario).map((step) => {
+    if (step.refused) return refusedOutcome(step, step.refused);
+    const o = computed.get(step.sameAs ?? step.index);
+    if (!o) throw new Error(`record step ${step.index} was not computed`);
+    return { ...o, time: step.time, duration: step.duration, name: step.spec.name };
+  });
 }
 
 export interface RecordEvaluation {

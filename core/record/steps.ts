@@ -51,16 +51,30 @@ export function stepDurations(time: readonly number[]): number[] {
   return time.map((t, i) => (i + 1 < n ? time[i + 1]! - t : n > 1 ? t - time[i - 1]! : 1));
 }
 
-/** The steps of the scenario's record (empty when it has none). */
-export function recordSteps(s: Scenario): RecordStep[] {
+/** For each step, the index of the first earlier step with the very same water, or null. */
+function sameWaterIndices(s: Scenario): (number | null)[] {
+  const rec = s.ambient.record!;
+  const seen = new Map<string, number>();
+  return rec.time.map((_, i) => {
+    const key = `${rec.depth?.[i] ?? ""}|${rec.currentSpeed[i]}|${rec.currentDirection[i]}|${rec.salinity?.[i] ?? ""}|${rec.temperature?.[i] ?? ""}`;
+    const earlier = seen.get(key);
+    if (earlier === undefined) seen.set(key, i);
+    return earlier ?? null;
+  });
+}
+
+/** The steps of the scenario's record (empty when it has none), or only those at `indices`. */
+export function recordSteps(s: Scenario, indices?: readonly number[]): RecordStep[] {
   const rec = s.ambient.record;
   if (!rec) return [];
   const a = s.ambient;
   const durations = stepDurations(rec.time);
-  const seen = new Map<string, number>();
+  const same = sameWaterIndices(s);
   const top = s.diffuser.portHeight + s.diffuser.portDiameter / 2;
   const bottom = a.profile[a.profile.length - 1]!;
-  return rec.time.map((time, i): RecordStep => {
+  const which = indices ?? rec.time.map((_, i) => i);
+  return which.map((i): RecordStep => {
+    const time = rec.time[i]!;
     const depth = rec.depth ? rec.depth[i]! : a.depth;
     let profile: readonly ProfilePoint[];
     let uniform = a.uniform;
@@ -74,9 +88,7 @@ export function recordSteps(s: Scenario): RecordStep[] {
       uniform = true;
     } else profile = depth === a.depth ? a.profile : profileToDepth(a.profile, depth);
     const ambient: AmbientInput = { ...a, depth, profile, uniform, currentSpeed: rec.currentSpeed[i]!, currentDirection: rec.currentDirection[i]! };
-    const key = [depth, ambient.currentSpeed, ambient.currentDirection, rec.salinity?.[i] ?? "", rec.temperature?.[i] ?? ""].join("|");
-    const earlier = seen.get(key);
-    if (earlier === undefined) seen.set(key, i);
+    const earlier = same[i]!;
     const refused =
       top >= depth
         ? `ambient.record.depth.${i}: ${formatNumber(depth)} m leaves the port's top (${formatNumber(top)} m above the seabed) at or above the surface at step ${stepName(time)}`
@@ -86,14 +98,14 @@ export function recordSteps(s: Scenario): RecordStep[] {
       time,
       duration: durations[i]!,
       ...(refused ? { refused } : {}),
-      sameAs: earlier ?? null,
+      sameAs: earlier,
       spec: {
         name: stepName(time),
         kind: "record",
         weight: durations[i]!,
         addedSlackWater: false,
         keeps: [],
-        sameAs: earlier ?? null,
+        sameAs: earlier,
         scenario: scenarioForAmbient(s, ambient),
       },
     };

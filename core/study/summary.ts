@@ -136,7 +136,7 @@ export function evaluateCases(scenario: Scenario, evaluate: Evaluator): CasesEva
 function evaluateRecordCases(scenario: Scenario, evaluate: Evaluator): CasesEvaluation {
   const steps = recordSteps(scenario);
   const summaries = new Map<number, CaseSummary>();
-  const outcomes = runRecordSteps(scenario, evaluate, 0, undefined, undefined, (i, s) => summaries.set(i, s));
+  const outcomes = runRecordSteps(scenario, evaluate, undefined, undefined, (i, s) => summaries.set(i, s));
   const cases: CaseEvaluation[] = [];
   outcomes.forEach((o, i) => {
     const s = summaries.get(i) ?? (steps[i]!.sameAs !== null ? summaries.get(steps[i]!.sameAs!) : undefined);

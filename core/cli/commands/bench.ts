@@ -7,6 +7,7 @@ import { readArgs } from "../args";
 import { benchIntegral, BENCH_JET, BENCH_COLUMN } from "../bench/nearfield";
 import { benchStudy, describeStudyBench } from "../bench/study";
 import { nearFieldLengthScale } from "../../nearfield/lengthScale";
+import { benchRecord, describeRecordBench } from "../bench/record";
 
 function medianMicros(fn: () => void, rounds = 9, perRound = 2000): number {
   for (let i = 0; i < perRound; i++) fn(); // warm-up
@@ -31,24 +32,28 @@ Times, on this machine:
   - the length-scale method (median µs per evaluation);
   - 10,000 Monte Carlo cases of a 4-port diffuser with both near-field methods on one core (target
     ≤ 2 s) and on all cores (speed-up; target near-linear);
-  - a 30 × 30 two-input sweep (target ≤ 1 s).
+  - a 30 × 30 two-input sweep (target ≤ 1 s);
+  - a year-long ambient record, 8,760 hourly steps with an intake, on all cores (target: well under
+    a minute on two cores).
 
 Options:
   --json    One JSON object: integralSolveMicros, lengthScaleMicros, referenceRatio,
-            monteCarloCasesPerSecond, monteCarloSpeedup, sweepSeconds, and more.
-  --quick   Near-field figures only (skips Monte Carlo and the sweep).
+            monteCarloCasesPerSecond, monteCarloSpeedup, sweepSeconds, recordSeconds, and more.
+  --quick   Near-field figures only (skips Monte Carlo, the sweep and the record).
   -h, --help  Show this help.`,
   async run(argv, io) {
     const { values } = readArgs(argv, { json: { type: "boolean" }, quick: { type: "boolean" } }, "bench");
     const nf = benchIntegral();
     const lengthScaleMicros = medianMicros(() => void nearFieldLengthScale(BENCH_JET, BENCH_COLUMN));
     const study = values.quick ? null : await benchStudy();
+    const record = values.quick ? null : await benchRecord(Math.max(1, io.cores));
     const out = {
       integralSolveMicros: nf.integralSolveMicros,
       lengthScaleMicros,
       referenceSolveMicros: nf.referenceSolveMicros,
       referenceRatio: nf.referenceRatio,
       ...(study ?? {}),
+      ...(record ?? {}),
       cores: io.cores,
     };
     if (values.json) {
@@ -61,6 +66,7 @@ Options:
       `Length-scale method: ${lengthScaleMicros.toFixed(2)} µs per evaluation (median)`,
     ];
     if (study) lines.push(describeStudyBench(study, io.cores));
+    if (record) lines.push(describeRecordBench(record));
     io.stdout(lines.join("\n") + "\n");
     return 0;
   },

@@ -7,6 +7,7 @@ import { CliError } from "../command";
 import { parseScenario } from "../../scenario/parse";
 import { recordFromCsv } from "../../record/csv";
 import { withRecord } from "../../record/result";
+import { distinctStepIndices } from "../../record/run";
 import { EXIT_CANCELLED, recordStepsOnWorkers, withProgress, workersOption } from "../workers/run-study";
 
 /** Records at least this long run on worker threads (shorter ones finish before workers start). */
@@ -59,7 +60,8 @@ its path); 70 an internal error; 130 cancelled.`,
     let result;
     if (steps >= RECORD_STEPS_FOR_WORKERS && workers > 1) {
       const top = runAmbientCase(scenario, { includePath });
-      const done = await withProgress(io, "Record steps", steps, (onProgress) => recordStepsOnWorkers(scenario, steps, workers, onProgress));
+      const distinct = distinctStepIndices(scenario).length;
+      const done = await withProgress(io, "Record steps", distinct, (onProgress) => recordStepsOnWorkers(scenario, workers, onProgress));
       if (!done) return EXIT_CANCELLED;
       result = withRecord(scenario, top, done.value);
     } else result = runScenario(scenario, { includePath });

@@ -79,7 +79,7 @@ export class StudyPool {
           }
           results[m.id] = m;
           const t = tasks[m.id]!;
-          progress[m.id] = t.kind === "points" ? t.overrides.length : t.end - t.start;
+          progress[m.id] = t.kind === "points" ? t.overrides.length : t.kind === "record-steps" ? t.indices.length : t.end - t.start;
           report();
           finished++;
           if (finished === tasks.length) resolve(results);

@@ -24,12 +24,11 @@ export type WorkerTask =
       readonly overrides: readonly Overrides[];
     }
   | {
-      /** Steps [start, end) of the scenario's ambient record. */
+      /** These steps (indices) of the scenario's ambient record. */
       readonly kind: "record-steps";
       readonly id: number;
       readonly scenario: Scenario;
-      readonly start: number;
-      readonly end: number;
+      readonly indices: readonly number[];
     };
 
 export type WorkerReply =

@@ -34,7 +34,7 @@ export function runWorkerThread(): boolean {
         const buffers = arrays.map((a) => a.buffer as ArrayBuffer);
         post({ kind: "monte-carlo-done", id: task.id, chunk }, buffers);
       } else if (task.kind === "record-steps") {
-        const outcomes = runRecordSteps(task.scenario, evaluateScenario, task.start, task.end, (done) => {
+        const outcomes = runRecordSteps(task.scenario, evaluateScenario, task.indices, (done) => {
           if (done % PROGRESS_EVERY === 0) post({ kind: "progress", id: task.id, done });
         });
         post({ kind: "record-steps-done", id: task.id, outcomes });
