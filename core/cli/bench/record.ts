@@ -50,7 +50,7 @@ export function benchRecordScenario(steps = RECORD_BENCH_STEPS): Scenario {
   return r.scenario;
 }
 
-export async function benchRecord(workers = Math.max(1, availableParallelism())): Promise<{ recordSteps: number; recordSeconds: number; recordWorkers: number }> {
+export async function benchRecord(workers = Math.max(1, availableParallelism())): Promise<{ recordSteps: number; recordDistinctSteps: number; recordSeconds: number; recordWorkers: number }> {
   const s = benchRecordScenario();
   const distinct = distinctStepIndices(s).length;
   let last = 0;
