@@ -97,6 +97,7 @@ describe("ambient record: steps as quasi-steady states", () => {
     expect(rec.meetsPercent).toBeLessThanOrEqual(75);
     expect(rec.refusals[0]).toMatch(/ambient\.record\.depth\.2/);
     expect(rec.worstStep.verdict, "nothing could be computed for the refused step: it is the worst").toBe("refused");
+    expect(rec.longestExceedanceHours, "a refused hour is an hour not meeting").toBeGreaterThanOrEqual(1);
     expect(r.overall.verdict, "a refused step allows no 'meets' without a time share").not.toBe("meets");
   });
 
