@@ -15,6 +15,9 @@ import { MixingZoneSection } from "./inputs/MixingZoneSection";
 import { TextField } from "./inputs/fields";
 import * as host from "./platform/host";
 import { ResultsPanel } from "./results/ResultsPanel";
+import { useRecordRun } from "./record/useRecordRun";
+import { RecordIntakeSection } from "./inputs/RecordIntakeSection";
+import { RecordChart, RecordStatus, RecordSummary } from "./record/RecordPanel";
 import { ClaimPanel } from "./results/ClaimPanel";
 import { applyDesign, type Action } from "./state/actions";
 import {
@@ -70,8 +73,14 @@ export function App() {
   const [notice, setNotice] = useState<string | null>(null);
   const [resetSignal, setResetSignal] = useState(0);
   const [documentKey, setDocumentKey] = useState(0);
-  const [chart, setChart] = useState<"trajectory" | "dilution" | "increase">("trajectory");
-  const engine = useEngine(doc.file);
+  const [chart, setChart] = useState<"trajectory" | "dilution" | "increase" | "record" | "duration">("trajectory");
+  const engineRun = useEngine(doc.file);
+  // A long ambient record runs on the study workers; its full result then stands for the engine's.
+  const recordRun = useRecordRun(engineRun.scenario, engineRun.result);
+  const engine = useMemo(
+    () => (recordRun.result ? { ...engineRun, result: recordRun.result } : { ...engineRun, running: engineRun.running || recordRun.running }),
+    [engineRun, recordRun.result, recordRun.running],
+  );
   const docRef = useRef(doc);
   docRef.current = doc;
 
@@ -373,6 +382,7 @@ export function App() {
               <AmbientSection />
               <DiffuserSection />
               <MixingZoneSection />
+              <RecordIntakeSection />
             </aside>
 
             <section className="centre" aria-label="Views">
@@ -388,10 +398,18 @@ export function App() {
                   <button type="button" role="tab" aria-selected={chart === "trajectory"} onClick={() => setChart("trajectory")}>Side view</button>
                   <button type="button" role="tab" aria-selected={chart === "dilution"} onClick={() => setChart("dilution")}>Dilution vs distance</button>
                   <button type="button" role="tab" aria-selected={chart === "increase"} onClick={() => setChart("increase")}>Salinity increase vs distance</button>
+                  {scenario?.ambient.record ? (
+                    <>
+                      <button type="button" role="tab" aria-selected={chart === "record"} onClick={() => setChart("record")} data-command="chart-record">Record over time</button>
+                      <button type="button" role="tab" aria-selected={chart === "duration"} onClick={() => setChart("duration")} data-command="chart-duration">Duration curve</button>
+                    </>
+                  ) : null}
                 </div>
                 {result && scenario ? (
                   chart === "trajectory" ? (
                     <TrajectoryChart result={result} scenario={scenario} unitSystem={unitSystem} />
+                  ) : chart === "record" || chart === "duration" ? (
+                    <RecordChart result={result} kind={chart === "record" ? "time" : "duration"} />
                   ) : (
                     <DistanceChart result={result} unitSystem={unitSystem} quantity={chart} />
                   )
@@ -412,8 +430,10 @@ export function App() {
                   `Up to date · ${engine.ms.toFixed(0)} ms`
                 ) : null}
               </div>
+              <RecordStatus run={recordRun} steps={scenario?.ambient.record?.time.length ?? 0} />
               <div className={engine.stale ? "stale" : undefined}>
                 {result ? <ResultsPanel result={result} unitSystem={unitSystem} /> : null}
+                {result ? <RecordSummary result={result} /> : null}
                 <ClaimPanel scenario={normalised} />
               </div>
             </aside>
