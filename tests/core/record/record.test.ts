@@ -9,6 +9,9 @@ import { describe, it, expect } from "vitest";
 import { runScenario } from "../../../core/pipeline";
 import { evaluateCases } from "../../../core/study/summary";
 import { evaluateScenario } from "../../../core/study/evaluate";
+import { evaluatePoint } from "../../../core/study/evaluate-point";
+import { withOverrides } from "../../../core/study/overrides";
+import { expandCases } from "../../../core/cases";
 import { stepDurations } from "../../../core/record/steps";
 import { weightedQuantile, valueExceededFor } from "../../../core/record/summary";
 import { recordFromCsv } from "../../../core/record/csv";
@@ -110,6 +113,20 @@ describe("ambient record: steps as quasi-steady states", () => {
     const run = runScenario(s, { includePath: false });
     const study = evaluateCases(s, evaluateScenario);
     expect(study.overall).toEqual(run.overall);
+  });
+
+  it("a sweep point uses the record's time-share verdict, and the record's steps are the cases of every path", () => {
+    const speeds = [0, 0.1, 0.3, 0.6, 0.05, 0.2];
+    const s = scenarioWith({
+      ambient: { record: { time: hours(6), currentSpeed: speeds, currentDirection: [90, 270, 90, 270, 90, 0] } },
+      mixingZone: { limits: [{ constituent: "salinity", maxIncrease: 0.5 }], timeCompliance: { percentOfTime: 80 } },
+    });
+    expect(expandCases(s).map((c) => c.kind)).toEqual(speeds.map(() => "record"));
+    const overrides = { "diffuser.portDiameter": 0.1, "ambient.salinity": 37 };
+    const point = evaluatePoint(s, overrides, evaluateScenario);
+    const run = runScenario(withOverrides(s, overrides), { includePath: false });
+    expect(point.overall).toEqual(run.overall);
+    expect(run.record!.percentOfTime).toBe(80);
   });
 
   it("times may be seconds, durations with a unit or ISO 8601 date-times, with the same result", () => {
