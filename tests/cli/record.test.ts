@@ -30,8 +30,8 @@ describe("run with an ambient record", () => {
     const raw = JSON.parse(readFileSync(join(root, DEMO), "utf8"));
     const rec = raw.ambient.record;
     const t0 = Date.parse(rec.time[0]);
-    const lines = ["time (h),currentSpeed (m/s),currentDirection (deg),depth (m)"];
-    rec.time.forEach((t: string, i: number) => lines.push(`${(Date.parse(t) - t0) / 3600000},${rec.currentSpeed[i]},${rec.currentDirection[i]},${rec.depth[i]}`));
+    const lines = ["time (h),currentSpeed (m/s),currentDirection (deg)"];
+    rec.time.forEach((t: string, i: number) => lines.push(`${(Date.parse(t) - t0) / 3600000},${rec.currentSpeed[i]},${rec.currentDirection[i]}`));
     const dir = mkdtempSync(join(tmpdir(), "brinefield-record-"));
     const csv = join(dir, "tide.csv");
     writeFileSync(csv, lines.join("\n") + "\n");

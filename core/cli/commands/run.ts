@@ -10,7 +10,7 @@ import { withRecord } from "../../record/result";
 import { distinctStepIndices } from "../../record/run";
 import { EXIT_CANCELLED, recordStepsOnWorkers, withProgress, workersOption } from "../workers/run-study";
 
-/** Records at least this long run on worker threads (shorter ones finish before workers start). */
+/** Records with at least this many distinct steps run on worker threads with progress and Ctrl-C (shorter ones finish before workers start). */
 export const RECORD_STEPS_FOR_WORKERS = 200;
 
 export const command: CliCommand = {
@@ -43,6 +43,16 @@ its path); 70 an internal error; 130 cancelled.`,
     if (positionals.length !== 1) throw new CliError("brinefield run: give exactly one scenario file, e.g. `brinefield run demo-scenarios/island-cove.json`");
     const path = positionals[0]!;
     const workers = workersOption(values.workers, io, "run");
+    // Ctrl-C before the worker threads start (reading a long record, the stated conditions) also cancels.
+    let cancelled = false;
+    const onSigint = () => void (cancelled = true);
+    process.once("SIGINT", onSigint);
+    try {
+      return await runCommand();
+    } finally {
+      process.removeListener("SIGINT", onSigint);
+    }
+    async function runCommand(): Promise<number> {
     let raw = loadJsonTextFile(path, io).value;
     if (values.record !== undefined) {
       const csv = recordFromCsv(io.readFile(values.record), values.record);
@@ -56,16 +66,26 @@ its path); 70 an internal error; 130 cancelled.`,
     if (!parsed.ok) throw new CliError(formatIssues(values.record !== undefined ? `${path} with ${values.record}` : path, parsed.issues));
     const scenario = parsed.scenario;
     const includePath = !values["no-path"];
-    const steps = scenario.ambient.record?.time.length ?? 0;
+    // Distinct steps (new water) are what costs time: repeated water is computed once.
+    const distinctSteps = scenario.ambient.record ? distinctStepIndices(scenario).length : 0;
     let result;
-    if (steps >= RECORD_STEPS_FOR_WORKERS && workers > 1) {
+    if (distinctSteps >= RECORD_STEPS_FOR_WORKERS) {
       const top = runAmbientCase(scenario, { includePath });
-      const distinct = distinctStepIndices(scenario).length;
-      const done = await withProgress(io, "Record steps", distinct, (onProgress) => recordStepsOnWorkers(scenario, workers, onProgress));
+      await new Promise((r) => setImmediate(r)); // let a pending Ctrl-C arrive
+      if (cancelled) {
+        io.stderr("Cancelled: no results.\n");
+        return EXIT_CANCELLED;
+      }
+      const done = await withProgress(io, "Record steps", distinctSteps, (onProgress) => recordStepsOnWorkers(scenario, workers, onProgress));
       if (!done) return EXIT_CANCELLED;
       result = withRecord(scenario, top, done.value);
     } else result = runScenario(scenario, { includePath });
+    if (cancelled) {
+      io.stderr("Cancelled: no results.\n");
+      return EXIT_CANCELLED;
+    }
     io.stdout(values.json ? JSON.stringify(result, null, 2) + "\n" : summaryText(scenario, result));
     return 0;
+    }
   },
 };
