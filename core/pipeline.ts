@@ -29,6 +29,10 @@ import { expandCases, overallFromCases, runCases } from "./cases";
 import type { ResultWarning } from "./warnings";
 import { BRINEFIELD_VERSION } from "./version";
 import { formatNumber } from "./units";
+import { runRecordSteps } from "./record/run";
+import { withIntakeCases, withRecord } from "./record/result";
+import { caseDetail, summaryWithIntake } from "./intake/summary";
+import { intakeFromResult } from "./intake/intake";
 
 export interface RunOptions {
   /** Include the integral model's path in the result (default true; Monte Carlo turns it off). */
@@ -98,9 +102,14 @@ export type AmbientCaseResult = Omit<BrinefieldResult, "cases" | "overall">;
  * (a discharge lighter than the sea, in any case); everything else comes back as warnings.
  */
 export function runScenario(scenario: Scenario, options: RunOptions = {}): BrinefieldResult {
+  if (scenario.ambient.record) {
+    // A record's steps are the cases (core/record); the stated conditions still fill the top level.
+    const top = runAmbientCase(scenario, options);
+    return withRecord(scenario, top, runRecordSteps(scenario, recordStepEvaluator));
+  }
   const specs = expandCases(scenario);
   const results = runCases(specs, (c, i) =>
-    i === 0 ? runAmbientCase(scenario, options) : runAmbientCase(c.scenario, { includePath: false, detail: "edge" }),
+    i === 0 ? runAmbientCase(scenario, options) : runAmbientCase(c.scenario, { includePath: false, detail: caseDetail(c.scenario) }),
   );
   const cases: CaseResult[] = specs.map((c, i) => {
     const r = results[i]!;
@@ -113,7 +122,13 @@ export function runScenario(scenario: Scenario, options: RunOptions = {}): Brine
       scopeReasons: r.compliance.scopeReasons,
     };
   });
-  return { ...results[0]!, cases, overall: overallFromCases(cases) };
+  const result: BrinefieldResult = { ...results[0]!, cases, overall: overallFromCases(cases) };
+  return scenario.intake ? withIntakeCases(scenario, result, specs.map((c, i) => ({ name: c.name, sample: intakeFromResult(c.scenario, results[i]!) }))) : result;
+}
+
+/** One record step through the pipeline: the study summary with the intake's figures. */
+export function recordStepEvaluator(s: Scenario) {
+  return summaryWithIntake(s, runAmbientCase(s, { includePath: false, detail: caseDetail(s) }));
 }
 
 /**

@@ -15,6 +15,9 @@ import { MixingZoneSection } from "./inputs/MixingZoneSection";
 import { TextField } from "./inputs/fields";
 import * as host from "./platform/host";
 import { ResultsPanel } from "./results/ResultsPanel";
+import { useRecordRun } from "./record/useRecordRun";
+import { RecordIntakeSection } from "./inputs/RecordIntakeSection";
+import { RecordChart, RecordStatus, RecordSummary } from "./record/RecordPanel";
 import { ClaimPanel } from "./results/ClaimPanel";
 import { applyDesign, type Action } from "./state/actions";
 import {
@@ -44,6 +47,8 @@ import { exportSeriesCsv, exportReport, printReportInBrowser } from "./exports";
 export const AUTOSAVE_INTERVAL_MS = 5000;
 const VIEW_TABS = ["design", "study"] as const;
 const CHART_TABS = ["trajectory", "dilution", "increase"] as const;
+type ChartTab = (typeof CHART_TABS)[number] | "record" | "duration";
+const RECORD_CHART_TABS: readonly ChartTab[] = [...CHART_TABS, "record", "duration"];
 const UNITS_KEY = "brinefield.units";
 
 // three.js and the 3D view load after the first screen (the inputs and results do not wait for them).
@@ -85,11 +90,18 @@ export function App() {
   const [notice, setNotice] = useState<string | null>(null);
   const [resetSignal, setResetSignal] = useState(0);
   const [documentKey, setDocumentKey] = useState(0);
-  const [chart, setChart] = useState<"trajectory" | "dilution" | "increase">("trajectory");
+  const [chart, setChart] = useState<ChartTab>("trajectory");
   const [chartAsTable, setChartAsTable] = useState(false);
   const mainTabs = useTabs("view", VIEW_TABS, tab, setTab);
-  const chartTabs = useTabs("chart", CHART_TABS, chart, setChart);
-  const engine = useEngine(doc.file);
+  const engineRun = useEngine(doc.file);
+  // A long ambient record runs on the study workers; its full result then stands for the engine's.
+  const recordRun = useRecordRun(engineRun.scenario, engineRun.result);
+  const engine = useMemo(
+    () => (recordRun.result ? { ...engineRun, result: recordRun.result } : { ...engineRun, running: engineRun.running || recordRun.running }),
+    [engineRun, recordRun.result, recordRun.running],
+  );
+  const hasRecord = Boolean(engineRun.scenario?.ambient.record);
+  const chartTabs = useTabs<ChartTab>("chart", hasRecord ? RECORD_CHART_TABS : CHART_TABS, chart, setChart);
   const docRef = useRef(doc);
   docRef.current = doc;
 
@@ -429,6 +441,7 @@ export function App() {
               <AmbientSection />
               <DiffuserSection />
               <MixingZoneSection />
+              <RecordIntakeSection />
             </aside>
 
             <section className="centre" aria-label="Views">
@@ -447,6 +460,12 @@ export function App() {
                     <button {...chartTabs.tab("trajectory")}>Side view</button>
                     <button {...chartTabs.tab("dilution")}>Dilution vs distance</button>
                     <button {...chartTabs.tab("increase")}>Salinity increase vs distance</button>
+                    {scenario?.ambient.record ? (
+                      <>
+                        <button {...chartTabs.tab("record")} data-command="chart-record">Record over time</button>
+                        <button {...chartTabs.tab("duration")} data-command="chart-duration">Duration curve</button>
+                      </>
+                    ) : null}
                   </div>
                   <button type="button" className="view-as" aria-pressed={chartAsTable} onClick={() => setChartAsTable((t) => !t)} data-command="chart-as-table" title="Show the numbers of the chart as a table">
                     Table
@@ -456,6 +475,8 @@ export function App() {
                   {result && scenario ? (
                     chart === "trajectory" ? (
                       chartAsTable ? <TrajectoryTable result={result} scenario={scenario} unitSystem={unitSystem} /> : <TrajectoryChart result={result} scenario={scenario} unitSystem={unitSystem} />
+                    ) : chart === "record" || chart === "duration" ? (
+                      <RecordChart result={result} kind={chart === "record" ? "time" : "duration"} />
                     ) : chartAsTable ? (
                       <DistanceTable result={result} unitSystem={unitSystem} quantity={chart} />
                     ) : (
@@ -479,8 +500,10 @@ export function App() {
                   `Up to date · ${engine.ms.toFixed(0)} ms`
                 ) : null}
               </div>
+              <RecordStatus run={recordRun} steps={scenario?.ambient.record?.time.length ?? 0} />
               <div className={engine.stale ? "stale" : undefined}>
                 {result ? <ResultsPanel result={result} unitSystem={unitSystem} /> : null}
+                {result ? <RecordSummary result={result} /> : null}
                 <ClaimPanel scenario={normalised} />
               </div>
             </aside>

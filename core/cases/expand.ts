@@ -15,6 +15,7 @@
 import type { AmbientCaseField, AmbientInput, Scenario } from "../scenario/types";
 import type { CaseKind } from "../result/contract";
 import { ScenarioError } from "../scenario/parse";
+import { recordSteps } from "../record/steps";
 
 export const STATED_CASE = "stated";
 export const SLACK_WATER_CASE = "slack water";
@@ -30,6 +31,8 @@ export interface CaseSpec {
   /** Index of an earlier case with the very same water, whose result is reused; null otherwise. */
   readonly sameAs: number | null;
   readonly scenario: Scenario;
+  /** A record step whose water breaks a scenario rule: the rule's message (core/record). */
+  readonly refused?: string;
 }
 
 export function scenarioForAmbient(s: Scenario, ambient: AmbientInput): Scenario {
@@ -45,8 +48,12 @@ export function scenarioForAmbient(s: Scenario, ambient: AmbientInput): Scenario
   return Object.freeze({ ...s, ambient: Object.freeze(a), ambientCases: Object.freeze([]) });
 }
 
-/** The cases of a scenario: stated, listed, slack water (see the file header). */
+/**
+ * The cases of a scenario: stated, listed, slack water (see the file header) — or, when the scenario has
+ * an ambient record, the record's steps (core/record/steps.ts), which replace all of them.
+ */
 export function expandCases(s: Scenario): CaseSpec[] {
+  if (s.ambient.record) return recordSteps(s).map((st) => (st.refused ? { ...st.spec, refused: st.refused } : st.spec));
   const cases: CaseSpec[] = [
     { name: STATED_CASE, kind: "stated", weight: 1, addedSlackWater: false, keeps: [], sameAs: null, scenario: s },
     ...s.ambientCases.map(

@@ -4,6 +4,7 @@ import type { Scenario } from "../scenario/types";
 import type { NearFieldMethodResult } from "../nearfield/types";
 import { formatNumber as f } from "../units";
 import { densityNumber } from "../report/format";
+import { intakeLines, recordLines } from "../record/text";
 
 const n = (v: number | null | undefined, unit = "", digits = 3): string =>
   v === null || v === undefined || !Number.isFinite(v) ? "—" : `${f(v, digits)}${unit ? ` ${unit}` : ""}`;
@@ -143,7 +144,9 @@ export function summaryText(s: Scenario, r: BrinefieldResult): string {
       ]),
     );
   }
-  if (r.cases?.length) {
+  out.push(...intakeLines(r));
+  if (r.record) out.push(...recordLines(r));
+  else if (r.cases?.length) {
     const o = r.overall;
     out.push("", `Ambient cases (the verdict over all of them is the overall verdict)`);
     out.push(

@@ -24,7 +24,7 @@ export interface OverallCase {
  */
 export function casesForOverall(s: Scenario): OverallCase[] {
   return expandCases(s)
-    .filter((c) => c.sameAs === null)
+    .filter((c) => c.sameAs === null && !c.refused)
     .map((c) => ({ name: c.name, scenario: c.kind === "stated" ? scenarioForAmbient(s, s.ambient) : c.scenario }));
 }
 

@@ -17,6 +17,7 @@ import { REPORT_CSS } from "./style";
 import { uncertaintyHtml } from "./uncertainty";
 import { validationAppendixHtml } from "./validation";
 import { claimHtml } from "./claim";
+import { intakeHtml, recordHtml } from "./record";
 import type { ClaimCheck } from "../compliance/claim";
 
 export interface ReportInput {
@@ -96,7 +97,7 @@ export function verdictStyle(v: Verdict | "refused"): { cls: string; badge: stri
 
 function casesHtml(result: BrinefieldResult): RawHtml {
   const cases = result.cases ?? [];
-  if (cases.length === 0) return html``;
+  if (cases.length === 0 || result.record) return html``;
   const rows = cases.map(
     (k) =>
       html`<tr><td>${k.name}${k.name === result.overall.governingCase ? " (governing)" : ""}</td><td class="num">${reportNumber(k.edgeDilution)}</td><td class="num">${reportNumber(k.margin)}</td><td class="${verdictStyle(k.verdict).cls}">${k.verdict}</td></tr>`,
@@ -393,6 +394,8 @@ export function reportBody(result: BrinefieldResult, input: ReportInput, options
     section(id("multiport"), "Multiport regime", multiportHtml(result)),
     section(id("mixing-zone"), "Mixing-zone edge", mixingZoneHtml(result, chart)),
     section(id("compliance"), "Compliance: verdict and margin", complianceHtml(result)),
+    ...(result.record ? [section(id("record"), "Ambient record: compliance over time", recordHtml(result))] : []),
+    ...(result.intake ? [section(id("intake"), "The plant's intake", intakeHtml(result))] : []),
     section(id("warnings"), "Warnings", warningsHtml(result)),
     options.claim !== undefined
       ? section(id("claim"), "Claimed dilution check", claimHtml(options.claim))

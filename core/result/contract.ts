@@ -5,6 +5,8 @@
  */
 import type { ResultWarning } from "../warnings";
 import type { NearFieldMethodResult } from "../nearfield/types";
+import type { RecordResult } from "../record/summary";
+import type { IntakeResult } from "../intake/result";
 
 export const RESULT_FORMAT = "brinefield-result" as const;
 export const RESULT_VERSION = 1 as const;
@@ -132,7 +134,7 @@ export interface ComplianceResult {
 }
 
 /** Where an ambient case comes from. */
-export type CaseKind = "stated" | "listed" | "slack-water";
+export type CaseKind = "stated" | "listed" | "slack-water" | "record";
 
 /** One ambient case's verdict at the mixing-zone edge (the stated conditions are the case "stated"). */
 export interface CaseResult {
@@ -180,6 +182,10 @@ export interface BrinefieldResult {
   readonly cases: readonly CaseResult[];
   /** The verdict over `cases`; the headline verdict of the report and of study rows. */
   readonly overall: OverallResult;
+  /** With `ambient.record`: compliance over time (core/record/summary.ts). */
+  readonly record?: RecordResult;
+  /** With `intake`: brine at the plant's intake (core/intake). */
+  readonly intake?: IntakeResult;
   readonly warnings: readonly ResultWarning[];
   readonly methods: readonly { readonly stage: string; readonly name: string; readonly source: string }[];
 }

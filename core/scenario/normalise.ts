@@ -21,6 +21,7 @@ import { absoluteSalinityFromPractical, salinityFromTds } from "../properties";
 import { formatNumber } from "../units";
 import { issue, type ScenarioIssue } from "./issue";
 import { scenarioRuleIssues } from "./rules";
+import { normaliseRecord } from "../record/normalise";
 
 // mathjs units, created on first use: study worker threads run scenarios that are already normalised.
 let mathUnits: ReturnType<typeof create> | null = null;
@@ -290,6 +291,14 @@ export function normaliseScenario(f: ScenarioFileParsed): { scenario: Scenario |
     bedSlope: num(a.bedSlope, 0),
     bedSlopeAzimuth: num(a.bedSlopeAzimuth, 0),
   };
+  if (ambient && a.record) {
+    // One note for the whole column: the conversions themselves follow resolveSalinity.
+    const quiet: Ctx = { issues: ctx.issues, conversions: [] };
+    const rec = normaliseRecord(a.record, ambient.profile[ambient.profile.length - 1]!.temperature, (sv, t) => resolveSalinity(sv, t, "ambient.record.salinity", quiet));
+    ctx.issues.push(...rec.issues);
+    ctx.conversions.push(...rec.notes);
+    if (rec.record) (ambient as { record?: AmbientInput["record"] }).record = rec.record;
+  }
 
   const ambientCases: AmbientCase[] = [];
   (f.ambientCases ?? []).forEach((c, i) => {
@@ -457,7 +466,8 @@ export function normaliseScenario(f: ScenarioFileParsed): { scenario: Scenario |
     ambient,
     ambientCases,
     diffuser,
-    mixingZone: { radius: f.mixingZone.radius, limits },
+    mixingZone: { radius: f.mixingZone.radius, limits, ...(f.mixingZone.timeCompliance ? { timeCompliance: { percentOfTime: f.mixingZone.timeCompliance.percentOfTime } } : {}) },
+    ...(f.intake ? { intake: { ...f.intake } } : {}),
     options: {
       nearFieldForEdge: f.options?.nearFieldForEdge ?? "conservative",
       farField: f.options?.farField ?? "conservative",

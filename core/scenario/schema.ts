@@ -8,6 +8,7 @@ import { z } from "zod";
 import { quantity, count, fraction, text, salinityExpectation } from "./fields";
 import { FIELD_BOUNDS, type BoundedPath } from "./bounds";
 import { matchPracticalSalinity, matchTds, quantityToSI } from "../units";
+import { recordSchema, timeComplianceSchema, intakeSchema } from "../record/schema";
 
 export const SCENARIO_FORMAT = "brinefield-scenario";
 export const SCENARIO_VERSION = 1;
@@ -101,7 +102,16 @@ const ambientFields = {
   bedSlopeAzimuth: bounded("ambient.bedSlopeAzimuth").optional(),
 };
 
-const ambient = z.strictObject(ambientFields);
+const ambient = z.strictObject({
+  ...ambientFields,
+  record: recordSchema({
+    currentSpeed: bounded("ambient.currentSpeed"),
+    currentDirection: bounded("ambient.currentDirection"),
+    depth: bounded("ambient.depth"),
+    salinity: salinity(FIELD_BOUNDS["ambient.salinity"].min, FIELD_BOUNDS["ambient.salinity"].max, FIELD_BOUNDS["ambient.salinity"].what),
+    temperature: bounded("ambient.temperature"),
+  }).optional(),
+});
 
 const ambientCase = z.strictObject({
   name: text("case name", 80),
@@ -152,6 +162,7 @@ const limit = z.strictObject({
 const mixingZone = z.strictObject({
   radius: bounded("mixingZone.radius"),
   limits: z.array(limit).min(1, { error: () => "must list at least one limit (salinity at least)" }).max(50),
+  timeCompliance: timeComplianceSchema.optional(),
 });
 
 const options = z.strictObject({
@@ -205,6 +216,7 @@ export const scenarioFileSchema = z
     diffuser,
     mixingZone,
     options: options.optional(),
+    intake: intakeSchema.optional(),
     uncertainty: z.strictObject({ inputs: z.array(uncertainInput).max(20) }).optional(),
     /** Design-search constraints, read by `brinefield design`; free-form here, validated there. */
     design: z.record(z.string(), z.unknown()).optional(),

@@ -70,6 +70,37 @@ export interface AmbientInput {
   readonly bedSlope: number;
   /** Azimuth the bed slopes down toward, degrees clockwise from north. */
   readonly bedSlopeAzimuth: number;
+  /** A record of ambient states over time (core/record): its steps replace the ambient cases. */
+  readonly record?: AmbientRecord;
+}
+
+/**
+ * An ambient record, in SI: times in seconds from the first step (strictly increasing), and one value per
+ * step for each column given. Columns left out follow the stated ambient (also when a study changes it).
+ */
+export interface AmbientRecord {
+  readonly time: readonly number[];
+  readonly currentSpeed: readonly number[];
+  readonly currentDirection: readonly number[];
+  readonly depth?: readonly number[];
+  /** Absolute Salinity, g/kg (uniform over the column at that step). */
+  readonly salinity?: readonly number[];
+  /** °C (uniform over the column at that step). */
+  readonly temperature?: readonly number[];
+  /** ISO 8601 date-time of the first step when the times were given as date-times. */
+  readonly start?: string;
+}
+
+/** The plant's seawater intake, measured from the diffuser centre (core/intake). */
+export interface IntakeInput {
+  /** Plan distance from the diffuser centre, m. */
+  readonly distance: number;
+  /** Bearing of the intake from the diffuser centre, degrees clockwise from north. */
+  readonly bearing: number;
+  /** Height of the intake mouth above the seabed, m. */
+  readonly heightAboveSeabed: number;
+  /** Largest allowed salinity increase at the intake, g/kg (optional limit). */
+  readonly maxSalinityIncrease?: number;
 }
 
 /** The ambient fields an ambient case may set itself (a profile sets salinity and temperature). */
@@ -158,7 +189,13 @@ export interface Scenario {
   readonly ambient: AmbientInput;
   readonly ambientCases: readonly AmbientCase[];
   readonly diffuser: DiffuserInput;
-  readonly mixingZone: { readonly radius: number; readonly limits: readonly LimitInput[] };
+  readonly mixingZone: {
+    readonly radius: number;
+    readonly limits: readonly LimitInput[];
+    /** With a record: the verdict is "met for at least percentOfTime % of the record". */
+    readonly timeCompliance?: { readonly percentOfTime: number };
+  };
+  readonly intake?: IntakeInput;
   readonly options: ScenarioOptions;
   readonly uncertainty?: { readonly inputs: readonly UncertainInput[] };
   /** Human-readable notes on conversions applied while reading the file. */

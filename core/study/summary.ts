@@ -5,6 +5,11 @@
 import type { BrinefieldResult, CaseKind, OverallResult, Verdict } from "../result/contract";
 import type { Scenario } from "../scenario/types";
 import { expandCases, overallFromCases, runCases } from "../cases";
+import type { IntakeSample } from "../intake/intake";
+import { recordSteps } from "../record/steps";
+import { recordFromOutcomes, runRecordSteps } from "../record/run";
+import { overallOfCasesWithIntake } from "../record/result";
+import { ScenarioError } from "../scenario/parse";
 
 export interface MethodSummary {
   readonly method: string;
@@ -37,6 +42,8 @@ export interface CaseSummary {
   readonly methods: readonly MethodSummary[];
   /** The method chain that reached the mixing-zone edge (near field, then far field), as `run` names it. */
   readonly chain: string;
+  /** The intake's figures for this case, when the scenario has an intake (core/intake). */
+  readonly intake?: IntakeSample | null;
 }
 
 /** Runs one scenario (one ambient, no cases) and returns its summary. */
@@ -113,11 +120,34 @@ export interface CasesEvaluation {
  * a case breaks a rule.
  */
 export function evaluateCases(scenario: Scenario, evaluate: Evaluator): CasesEvaluation {
+  if (scenario.ambient.record) return evaluateRecordCases(scenario, evaluate);
   const specs = expandCases(scenario);
   const summaries = runCases(specs, (c) => evaluate(c.scenario));
   const cases = specs.map((c, i) => ({ name: c.name, kind: c.kind, summary: summaries[i]! }));
-  const overall = overallFromCases(
+  const overCases = overallFromCases(
     cases.map((c) => ({ name: c.name, verdict: c.summary.verdict, margin: c.summary.margin, edgeDilution: c.summary.edgeDilution })),
   );
-  return { cases, overall, governing: cases.findIndex((c) => c.name === overall.governingCase) };
+  const overall = scenario.intake ? overallOfCasesWithIntake(scenario, overCases, cases.map((c) => ({ name: c.name, sample: c.summary.intake }))) : overCases;
+  const g = cases.findIndex((c) => c.name === overall.governingCase);
+  return { cases, overall, governing: g >= 0 ? g : cases.findIndex((c) => c.name === overCases.governingCase) };
+}
+
+/**
+ * A record's steps as the cases (core/record): the overall verdict is the record's (the time-share rule
+ * when set), the cases are the computed steps. Throws ScenarioError when every step is refused.
+ */
+function evaluateRecordCases(scenario: Scenario, evaluate: Evaluator): CasesEvaluation {
+  const steps = recordSteps(scenario);
+  const summaries = new Map<number, CaseSummary>();
+  const outcomes = runRecordSteps(scenario, evaluate, undefined, undefined, (i, s) => summaries.set(i, s));
+  const cases: CaseEvaluation[] = [];
+  outcomes.forEach((o, i) => {
+    const s = summaries.get(i) ?? (steps[i]!.sameAs !== null ? summaries.get(steps[i]!.sameAs!) : undefined);
+    if (s && o.verdict !== "refused") cases.push({ name: o.name, kind: "record", summary: s });
+  });
+  if (cases.length === 0) throw new ScenarioError([{ path: "ambient.record", message: outcomes[0]?.error ?? "every step of the ambient record was refused" }]);
+  const { overall } = recordFromOutcomes(scenario, outcomes);
+  let g = cases.findIndex((c) => c.name === overall.governingCase);
+  if (g < 0) g = worstIndex(cases.map((c) => c.summary));
+  return { cases, overall, governing: g };
 }

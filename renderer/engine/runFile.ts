@@ -4,6 +4,7 @@
  */
 import { parseScenario } from "../../core/scenario/parse";
 import { runScenario } from "../../core/pipeline";
+import { pendingRecordResult, INLINE_RECORD_STEPS } from "../record/pending";
 import type { EngineIssue, EngineResponse } from "./messages";
 
 /** Core's messages may already start with their path; fields show the message without it. */
@@ -56,7 +57,10 @@ export function runFile(id: number, file: unknown): EngineResponse {
       }));
       return { id, ok: false, issues, message: summary(issues) };
     }
-    const result = runScenario(parsed.scenario, { includePath: true });
+    // A long record runs on the study workers with progress and Cancel (renderer/record); meanwhile the
+    // stated conditions are shown with no verdict.
+    const steps = parsed.scenario.ambient.record?.time.length ?? 0;
+    const result = steps > INLINE_RECORD_STEPS ? pendingRecordResult(parsed.scenario) : runScenario(parsed.scenario, { includePath: true });
     return { id, ok: true, scenario: parsed.scenario, result, ms: performance.now() - started };
   } catch (error) {
     const issues = issuesOf(error) ?? [];

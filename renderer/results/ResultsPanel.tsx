@@ -59,7 +59,7 @@ export function VerdictBanner({ result }: { result: BrinefieldResult }) {
   return (
     <div className={`verdict ${look.cls}`} data-role="verdict" data-verdict={o.verdict}>
       <div className="verdict-word">
-        {look.word} <span className="verdict-state">({o.verdict}, over {cases.length || 1} ambient case{cases.length === 1 ? "" : "s"})</span>
+        {look.word} <span className="verdict-state">({o.verdict}, over {result.record ? `a record of ${result.record.steps} steps${result.record.percentOfTime !== null ? `; limit to be met at least ${formatNumber(result.record.percentOfTime, 3)} % of the time` : ""}` : `${cases.length || 1} ambient case${cases.length === 1 ? "" : "s"}`})</span>
       </div>
       <div className="verdict-detail">
         governing case <b>{o.governingCase}</b>: edge dilution <b>{formatNumber(o.edgeDilution, 3)}×</b>
@@ -76,7 +76,7 @@ export function VerdictBanner({ result }: { result: BrinefieldResult }) {
           ))}
         </ul>
       ) : null}
-      {cases.length > 1 ? (
+      {cases.length > 1 && !result.record ? (
         <table className="verdict-cases" data-role="verdict-cases">
           <tbody>
             {cases.map((k) => (

@@ -4,6 +4,7 @@ import type { MonteCarloChunk, MonteCarloPlan } from "../../core/study/montecarl
 import type { PointEvaluation } from "../../core/study/evaluate-point";
 import type { Overrides } from "../../core/study/overrides";
 import type { CompareRow } from "../../core/study/compare";
+import type { StepOutcome } from "../../core/record/summary";
 
 export interface VariantSpec {
   readonly name: string;
@@ -21,7 +22,8 @@ export type StudyTask =
       readonly plan: MonteCarloPlan;
       readonly start: number;
       readonly end: number;
-    };
+    }
+  | { readonly kind: "record-steps"; readonly scenario: Scenario; readonly indices: readonly number[] };
 
 export type StudyRequest = StudyTask & { readonly id: number };
 
@@ -31,4 +33,5 @@ export type StudyReply =
   | { readonly id: number; readonly kind: "compared"; readonly rows: readonly CompareRow[] }
   | { readonly id: number; readonly kind: "points"; readonly points: readonly PointEvaluation[] }
   | { readonly id: number; readonly kind: "monte-carlo"; readonly chunk: MonteCarloChunk }
+  | { readonly id: number; readonly kind: "record-steps"; readonly outcomes: readonly StepOutcome[] }
   | { readonly id: number; readonly kind: "error"; readonly message: string };

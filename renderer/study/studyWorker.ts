@@ -10,6 +10,7 @@ import { runMonteCarloChunk } from "../../core/study/montecarlo";
 import { compareVariant, studyVariants } from "../../core/study/compare";
 import { parseStudy } from "../../core/study/study-file";
 import type { StudyReply, StudyRequest } from "./messages";
+import { runRecordSteps } from "../../core/record/run";
 
 const scope = self as unknown as DedicatedWorkerGlobalScope;
 const PROGRESS_EVERY = 10;
@@ -58,6 +59,11 @@ function handle(req: StudyRequest): void {
       const points = evaluatePoints(req.scenario, req.overrides, evaluateScenario, progress);
       post({ id: req.id, kind: "points", points });
       return;
+    case "record-steps": {
+      const outcomes = runRecordSteps(req.scenario, evaluateScenario, req.indices, progress);
+      post({ id: req.id, kind: "record-steps", outcomes });
+      return;
+    }
     case "monte-carlo": {
       const { scenario, plan, start, end } = req;
       const chunk = runMonteCarloChunk(scenario, plan, start, end, evaluateScenario, progress);

@@ -8,6 +8,7 @@ import { ACCURACY_BUDGET, benchIntegral, BENCH_JET, BENCH_COLUMN } from "../benc
 import { INTEGRAL_DEFAULT_REL_TOL } from "../../nearfield/integral";
 import { benchStudy, describeStudyBench } from "../bench/study";
 import { nearFieldLengthScale } from "../../nearfield/lengthScale";
+import { benchRecord, describeRecordBench } from "../bench/record";
 
 function medianMicros(fn: () => void, rounds = 9, perRound = 2000): number {
   for (let i = 0; i < perRound; i++) fn(); // warm-up
@@ -36,14 +37,17 @@ Times, on this machine:
     (target ≥ 5,000 cases/s) and on all cores (speed-up; target ≥ 1.6× on two), the first run on fresh
     workers apart, and a pure-compute control of the speed-up measured in the same window;
   - a 30 × 30 two-input sweep (target ≤ 1 s);
+  - a year-long ambient record, 8,760 hourly steps with an intake, on all cores (target: well under
+    a minute on two cores);
   - the web build in headless Chromium: input change → new numbers (target ≤ 50 ms) and page load →
     first result (target ≤ 300 ms), medians.
 
 Options:
   --json    One JSON object: integralSolveMicros, lengthScaleMicros, referenceSolveMicros, referenceRatio,
             referenceErrorRatio, minimalSolverMicros, monteCarloCasesPerSecond, monteCarloSpeedup,
-            parallelControlSpeedup, sweepSeconds, typingToNumbersMs, loadToFirstResultMs, and more.
-  --quick   Near-field figures only (skips Monte Carlo, the sweep and the browser).
+            parallelControlSpeedup, sweepSeconds, recordSeconds, typingToNumbersMs, loadToFirstResultMs,
+            and more.
+  --quick   Near-field figures only (skips Monte Carlo, the sweep, the record and the browser).
   -h, --help  Show this help.`,
   async run(argv, io) {
     const { values } = readArgs(argv, { json: { type: "boolean" }, quick: { type: "boolean" } }, "bench");
@@ -61,6 +65,7 @@ Options:
         browserNote = err instanceof Error ? err.message : String(err);
       }
     }
+    const record = values.quick ? null : await benchRecord(Math.max(1, io.cores));
     const out = {
       integralSolveMicros: nf.integralSolveMicros,
       lengthScaleMicros,
@@ -78,6 +83,7 @@ Options:
       ...(study ?? {}),
       ...(browser ?? {}),
       ...(browserNote ? { browserNotMeasured: browserNote } : {}),
+      ...(record ?? {}),
       cores: io.cores,
     };
     if (values.json) {
@@ -110,6 +116,7 @@ Options:
           `page load → first result ${browser.loadToFirstResultMs.toFixed(0)} ms (median of 5 loads; target ≤ 300 ms)`,
       );
     } else if (browserNote) lines.push(`Web build in headless Chromium: not measured (${browserNote})`);
+    if (record) lines.push(describeRecordBench(record));
     io.stdout(lines.join("\n") + "\n");
     return 0;
   },

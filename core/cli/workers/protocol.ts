@@ -3,6 +3,7 @@ import type { Scenario } from "../../scenario/types";
 import type { MonteCarloChunk, MonteCarloPlan } from "../../study/montecarlo";
 import type { PointEvaluation } from "../../study/evaluate-point";
 import type { Overrides } from "../../study/overrides";
+import type { StepOutcome } from "../../record/summary";
 
 /** Marks workerData so `runWorkerThread` knows the thread is a study worker. */
 export const STUDY_WORKER_TAG = "brinefield-study-worker";
@@ -27,6 +28,13 @@ export type WorkerTask =
       readonly kind: "control";
       readonly id: number;
       readonly iterations: number;
+    }
+  | {
+      /** These steps (indices) of the scenario's ambient record. */
+      readonly kind: "record-steps";
+      readonly id: number;
+      readonly scenario: Scenario;
+      readonly indices: readonly number[];
     };
 
 export type WorkerReply =
@@ -34,4 +42,5 @@ export type WorkerReply =
   | { readonly kind: "monte-carlo-done"; readonly id: number; readonly chunk: MonteCarloChunk }
   | { readonly kind: "points-done"; readonly id: number; readonly points: readonly PointEvaluation[] }
   | { readonly kind: "control-done"; readonly id: number; readonly value: number }
+  | { readonly kind: "record-steps-done"; readonly id: number; readonly outcomes: readonly StepOutcome[] }
   | { readonly kind: "error"; readonly id: number; readonly message: string };

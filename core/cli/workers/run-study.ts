@@ -7,6 +7,8 @@ import type { Scenario } from "../../scenario/types";
 import { splitRuns, type MonteCarloChunk, type MonteCarloPlan } from "../../study/montecarlo";
 import type { PointEvaluation } from "../../study/evaluate-point";
 import type { Overrides } from "../../study/overrides";
+import type { StepOutcome } from "../../record/summary";
+import { distinctStepIndices, outcomesFromDistinct } from "../../record/run";
 import { CancelledError, StudyPool } from "./pool";
 
 export { CancelledError } from "./pool";
@@ -104,6 +106,36 @@ export async function pointsOnWorkers(
       return r.points;
     });
   });
+}
+
+/**
+ * Every step of the scenario's ambient record, in step order: the distinct steps (new water, not refused)
+ * run on worker threads, repeated water reuses them. `onProgress` counts distinct steps computed; the
+ * total is `distinctStepIndices(scenario).length`.
+ */
+export async function recordStepsOnWorkers(
+  scenario: Scenario,
+  workers: number,
+  onProgress?: (done: number) => void,
+): Promise<StepOutcome[]> {
+  const distinct = distinctStepIndices(scenario);
+  const computed = new Map<number, StepOutcome>();
+  if (distinct.length > 0) {
+    const n = Math.min(workers, distinct.length);
+    const replies = await withPool(n, (pool) => {
+      const chunks = splitRuns(distinct.length, n * CHUNKS_PER_WORKER);
+      return pool.run(
+        chunks.map((c) => ({ kind: "record-steps" as const, scenario, indices: distinct.slice(c.start, c.end) })),
+        onProgress,
+      );
+    });
+    let k = 0;
+    for (const r of replies) {
+      if (r.kind !== "record-steps-done") throw new Error("unexpected worker reply");
+      for (const o of r.outcomes) computed.set(distinct[k++]!, o);
+    }
+  }
+  return outcomesFromDistinct(scenario, computed);
 }
 
 /** Reads --workers: default all cores; must be a whole number from 1 to 256. */

@@ -8,6 +8,7 @@ import { parentPort, workerData } from "node:worker_threads";
 import { evaluateScenario } from "../../study/evaluate";
 import { evaluatePoints } from "../../study/evaluate-point";
 import { runMonteCarloChunk } from "../../study/montecarlo";
+import { runRecordSteps } from "../../record/run";
 import { STUDY_WORKER_TAG, type WorkerReply, type WorkerTask } from "./protocol";
 
 const PROGRESS_EVERY = 25;
@@ -34,6 +35,11 @@ export function runWorkerThread(): boolean {
         post({ kind: "monte-carlo-done", id: task.id, chunk }, buffers);
       } else if (task.kind === "control") {
         post({ kind: "control-done", id: task.id, value: controlLoop(task.iterations) });
+      } else if (task.kind === "record-steps") {
+        const outcomes = runRecordSteps(task.scenario, evaluateScenario, task.indices, (done) => {
+          if (done % PROGRESS_EVERY === 0) post({ kind: "progress", id: task.id, done });
+        });
+        post({ kind: "record-steps-done", id: task.id, outcomes });
       } else {
         const points = evaluatePoints(task.scenario, task.overrides, evaluateScenario, (done) => {
           if (done % PROGRESS_EVERY === 0) post({ kind: "progress", id: task.id, done });

@@ -1,0 +1,96 @@
+/**
+ * The ambient record in the app (Debian chromium): the record demo runs its steps on worker threads
+ * with progress, shows the record's verdict, figures over time and the duration curve; Cancel stops a
+ * record and leaves no verdict; a record pasted into the inputs is saved in the scenario and run.
+ */
+import { launchChromium } from "../../renderer/headless/chromium";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import type { Browser, Page } from "playwright-core";
+import { spawnSync } from "node:child_process";
+import { existsSync, mkdirSync, readdirSync, statSync } from "node:fs";
+import { dirname, join, resolve } from "node:path";
+import { fileURLToPath } from "node:url";
+import { serveDirectory, type StaticServer } from "../renderer/support/staticServer";
+
+const root = resolve(dirname(fileURLToPath(import.meta.url)), "../..");
+const dist = join(root, "dist/renderer");
+const artifacts = join(root, "test-artifacts");
+
+function newestSource(dir: string): number {
+  let newest = 0;
+  for (const entry of readdirSync(dir, { withFileTypes: true })) {
+    const p = join(dir, entry.name);
+    newest = Math.max(newest, entry.isDirectory() ? newestSource(p) : statSync(p).mtimeMs);
+  }
+  return newest;
+}
+
+function ensureBuilt(): void {
+  const index = join(dist, "index.html");
+  const sources = Math.max(newestSource(join(root, "renderer")), newestSource(join(root, "core")), newestSource(join(root, "demo-scenarios")));
+  if (existsSync(index) && statSync(index).mtimeMs > sources) return;
+  const run = spawnSync(process.execPath, [join(root, "node_modules/vite/bin/vite.js"), "build", "--config", "renderer/vite.config.ts", "--logLevel", "error"], { cwd: root, encoding: "utf8", timeout: 240_000 });
+  if (run.status !== 0) throw new Error(`renderer build failed: ${run.stderr || run.stdout}`);
+}
+
+let server: StaticServer;
+let browser: Browser;
+let page: Page;
+const problems: string[] = [];
+
+beforeAll(async () => {
+  ensureBuilt();
+  mkdirSync(artifacts, { recursive: true });
+  server = await serveDirectory(dist);
+  browser = await launchChromium();
+  page = await (await browser.newContext({ viewport: { width: 1600, height: 1000 } })).newPage();
+  page.on("pageerror", (e) => problems.push(e.message));
+  page.on("console", (m) => m.type() === "error" && problems.push(m.text()));
+  await page.goto(server.url);
+  await page.locator("[data-role=headline-table]").waitFor({ timeout: 60_000 });
+});
+
+afterAll(async () => {
+  await browser?.close();
+  await server?.close();
+});
+
+describe("ambient record in the app", () => {
+  it("runs the record demo on worker threads, then shows its verdict, figures and intake", async () => {
+    await page.locator("[data-command=start]").click();
+    await page.locator("[data-demo=tern-point]").click();
+    await page.locator("[data-role=record-status][data-state=running]").waitFor({ timeout: 60_000 });
+    await page.locator("[data-role=record-status][data-state=done]").waitFor({ timeout: 240_000 });
+    const summary = await page.locator("[data-role=record-summary]").textContent();
+    expect(summary).toMatch(/Ambient record: 720 steps/);
+    expect(summary).toMatch(/Plant intake 350 m/);
+    expect(await page.locator("[data-role=verdict]").textContent()).toMatch(/record of 720 steps/);
+    await page.locator("[data-command=chart-record]").click();
+    expect(await page.locator("[data-role=record-time-chart] svg").count(), "edge dilution and salinity increase against time").toBe(2);
+    await page.locator("[data-command=chart-duration]").click();
+    expect(await page.locator("[data-role=record-duration-chart] #record-duration-chart").count()).toBe(1);
+    await page.screenshot({ path: join(artifacts, "app-record.png") });
+    expect(problems).toEqual([]);
+  }, 300_000);
+
+  it("Cancel stops the record and leaves no verdict over it", async () => {
+    await page.locator("[data-command=record-restart], [data-command=record-remove]").first().waitFor();
+    // Any edit re-runs the record; cancel it while it runs.
+    const depth = page.getByLabel("Water depth at diffuser");
+    await depth.fill("16.5");
+    await depth.press("Enter");
+    await page.locator("[data-role=record-status][data-state=running]").waitFor({ timeout: 60_000 });
+    await page.locator("[data-command=record-cancel]").click();
+    await page.locator("[data-role=record-status][data-state=cancelled]").waitFor({ timeout: 30_000 });
+    expect(await page.locator("[data-role=verdict]").getAttribute("data-verdict"), "no verdict without the record").toBe("outside-scope");
+  }, 120_000);
+
+  it("a pasted record is saved in the scenario and run", async () => {
+    await page.locator("[data-command=record-paste]").click();
+    await page.locator("[data-role=record-paste-text]").fill("time (h),currentSpeed (m/s),currentDirection (deg)\n0,0.1,40\n1,0.3,220\n2,0.05,40\n");
+    await page.locator("[data-command=record-use-paste]").click();
+    await page.screenshot({ path: join(artifacts, "app-record-paste.png") });
+    await expect.poll(() => page.locator("[data-role=record-steps]").textContent(), { timeout: 30_000 }).toMatch(/3 steps/);
+    await expect.poll(() => page.locator("[data-role=record-summary]").textContent(), { timeout: 60_000 }).toMatch(/Ambient record: 3 steps/);
+  }, 120_000);
+});
