@@ -169,6 +169,7 @@ export function runAmbientCase(scenario: Scenario, options: RunOptions = {}): Am
       beyond.compliance,
       scopeReasons({ depth: scenario.ambient.depth, portHeight: scenario.diffuser.portHeight, nearField: beyond.nearField, warnings }),
     ),
+    ...(beyond.basin ? { basin: beyond.basin } : {}),
     warnings,
     methods: [
       { stage: "properties", name: props.eos.info.name, source: props.eos.info.source },

@@ -124,6 +124,20 @@ export function summaryText(s: Scenario, r: BrinefieldResult): string {
     if (z.layerThickness !== null) out.push(`  Dense-layer thickness at the edge: ${n(z.layerThickness, "m")}`);
     out.push(`  Seabed footprint above the governing limit: ${n(z.footprint.area, "m²")}, furthest ${n(z.footprint.furthestExtent, "m")}`);
   }
+  if (r.basin) {
+    const b = r.basin;
+    out.push(
+      "",
+      wrap(
+        `Enclosed basin (${b.method}): salinity background raised by ${n(b.backgroundIncrease, "g/kg")} to ${n(b.raisedBackground, "g/kg")} ` +
+          `(exchange flow ${n(b.exchangeFlow, "m³/s")}; 95 % of the rise within ${n(b.timeTo95Percent / 86400, "days")}). The edge uses the raised ` +
+          "background; limits stay relative to the natural one: required dilution = (C_discharge − C_raised)/(C_natural + allowed − C_raised).",
+        96,
+        "  ",
+      ),
+      wrap(`Assumption: ${b.limits}`, 96, "  "),
+    );
+  }
   if (r.compliance) {
     const c = r.compliance;
     out.push("", `Verdict under the stated conditions: ${c.verdict} — governing: ${c.governingConstituent} (margin ${n(c.margin)})`);

@@ -17,6 +17,7 @@ import { REPORT_CSS } from "./style";
 import { uncertaintyHtml } from "./uncertainty";
 import { validationAppendixHtml } from "./validation";
 import { claimHtml } from "./claim";
+import { basinHtml } from "./basin";
 import type { ClaimCheck } from "../compliance/claim";
 
 export interface ReportInput {
@@ -386,6 +387,7 @@ export function reportBody(result: BrinefieldResult, input: ReportInput, options
     section(id("near-field"), "Near field: dense jet from the mean port", nearFieldHtml(result, side)),
     section(id("multiport"), "Multiport regime", multiportHtml(result)),
     section(id("mixing-zone"), "Mixing-zone edge", mixingZoneHtml(result, chart)),
+    ...(result.basin ? [section(id("basin"), "Background build-up in the enclosed basin", basinHtml(result.basin))] : []),
     section(id("compliance"), "Compliance: verdict and margin", complianceHtml(result)),
     section(id("warnings"), "Warnings", warningsHtml(result)),
     options.claim !== undefined

@@ -64,6 +64,31 @@ export interface ConstituentAtEdge {
   readonly increase: number;
   readonly background: number;
   readonly discharge: number;
+  /**
+   * Natural background, present only with `ambient.basin`: `background` is then the raised background the
+   * box model gives and `increase` is measured from this natural background (the limit's basis).
+   */
+  readonly naturalBackground?: number;
+}
+
+/** Background build-up in an enclosed basin (`ambient.basin`), from a well-mixed box model. */
+export interface BasinResult {
+  /** Steady increase of the salinity background, g/kg (salt load over the exchange flow). */
+  readonly backgroundIncrease: number;
+  /** Time to reach 95 % of the steady increase, s. */
+  readonly timeTo95Percent: number;
+  /** Exchange flow with the open sea, m³/s. */
+  readonly exchangeFlow: number;
+  readonly method: string;
+  readonly volume: number; // m³
+  readonly flushingTime: number; // s
+  readonly naturalBackground: number; // g/kg, salinity
+  readonly raisedBackground: number; // g/kg, salinity
+  /** The same balance for every constituent with a limit basis (salinity, temperature, listed ones). */
+  readonly constituents: readonly { readonly constituent: string; readonly unit: string; readonly naturalBackground: number; readonly increase: number; readonly raisedBackground: number }[];
+  readonly source: string;
+  /** What the box model leaves out. */
+  readonly limits: string;
 }
 
 export interface SeriesResult {
@@ -180,6 +205,8 @@ export interface BrinefieldResult {
   readonly cases: readonly CaseResult[];
   /** The verdict over `cases`; the headline verdict of the report and of study rows. */
   readonly overall: OverallResult;
+  /** Present only with `ambient.basin`: the background build-up used in the compliance. */
+  readonly basin?: BasinResult;
   readonly warnings: readonly ResultWarning[];
   readonly methods: readonly { readonly stage: string; readonly name: string; readonly source: string }[];
 }

@@ -8,6 +8,7 @@ import type {
   AmbientCase,
   AmbientCaseField,
   AmbientInput,
+  BasinInput,
   ConstituentInput,
   DiffuserInput,
   LimitInput,
@@ -211,6 +212,12 @@ function limitValueInUnit(
   return undefined;
 }
 
+function basinFrom(b: { volume: number; flushingTime?: number; exchangeFlow?: number }, ctx: Ctx): BasinInput {
+  if ((b.flushingTime === undefined) === (b.exchangeFlow === undefined))
+    ctx.issues.push(issue("ambient.basin", "(basin)", "must give exactly one of flushingTime (s, e.g. \"10 days\") or exchangeFlow (m³/s) beside the volume"));
+  return b.flushingTime !== undefined ? { volume: b.volume, flushingTime: b.flushingTime } : { volume: b.volume, exchangeFlow: b.exchangeFlow };
+}
+
 function num(v: number | undefined, fallback: number): number {
   return v === undefined ? fallback : v;
 }
@@ -289,6 +296,7 @@ export function normaliseScenario(f: ScenarioFileParsed): { scenario: Scenario |
     currentDirection: num(a.currentDirection, 0),
     bedSlope: num(a.bedSlope, 0),
     bedSlopeAzimuth: num(a.bedSlopeAzimuth, 0),
+    ...(a.basin ? { basin: basinFrom(a.basin, ctx) } : {}),
   };
 
   const ambientCases: AmbientCase[] = [];
