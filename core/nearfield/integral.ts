@@ -27,6 +27,7 @@ import {
   IY,
   IZ,
   integralJetRhs,
+  profileAt,
   radiusFromState,
   upperEdgeSlope,
   verticalHalfExtent,
@@ -37,6 +38,7 @@ import { assembleIntegralResult, invalidIntegralResult } from "./integralResult"
 import {
   EV_IMPACT,
   EV_MAX_RISE,
+  EV_NEUTRAL,
   EV_RETURN,
   EV_SEABED_EDGE,
   EV_SURFACE_CENTRE,
@@ -156,6 +158,15 @@ export function nearFieldIntegral(
     direction: -1,
     terminal: false,
   };
+
+  // A rising discharge in stratified water: locate where its buoyancy changes sign (the trap level).
+  if (jet.reducedGravity <= 0 && params.stratified) {
+    events[EV_NEUTRAL] = {
+      fn: (_s, y, p) => y[IB] / y[IQ] - profileAt(p.depths, p.epsilon, p.portDepth - y[IZ]),
+      direction: 0,
+      terminal: false,
+    };
+  }
 
   // Path recording and passive / trapped detection on every accepted step.
   const path = sharedPath;

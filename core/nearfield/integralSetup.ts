@@ -113,3 +113,5 @@ export const EV_IMPACT = 2;
 export const EV_SURFACE_EDGE = 3;
 export const EV_SURFACE_CENTRE = 4;
 export const EV_MAX_RISE = 5;
+/** Rising discharges only: the centreline's local reduced gravity changes sign (the trap level). */
+export const EV_NEUTRAL = 6;
