@@ -15,6 +15,7 @@ import { beyondNearField, type BeyondOutput } from "./farfield/stage";
 import { risingLengthScale } from "./rising/length-scale";
 import { risingIntegral } from "./rising/integral";
 import { risingBeyond } from "./rising/stage";
+import { blendSignChange } from "./rising/blend";
 import { DENSE_SOURCE_CODES, risingScopeReasons } from "./rising/scope";
 import { portFlowsAndHydraulics, type PortHydraulics } from "./multiport";
 import { viscosityFromST, SHARQAWY_2010_VISCOSITY_SOURCE } from "./correlations/sharqawy-2010-viscosity";
@@ -114,7 +115,8 @@ export function runScenario(scenario: Scenario, options: RunOptions = {}): Brine
       scopeReasons: r.compliance.scopeReasons,
     };
   });
-  return { ...results[0]!, cases, overall: overallFromCases(cases) };
+  const blend = blendSignChange(scenario);
+  return { ...results[0]!, ...(blend ? { blend } : {}), cases, overall: overallFromCases(cases) };
 }
 
 /**

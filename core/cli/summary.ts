@@ -122,7 +122,15 @@ export function summaryText(s: Scenario, r: BrinefieldResult): string {
       ]),
     );
     if (z.layerThickness !== null) out.push(`  Dense-layer thickness at the edge: ${n(z.layerThickness, "m")}`);
-    out.push(`  Seabed footprint above the governing limit: ${n(z.footprint.area, "m²")}, furthest ${n(z.footprint.furthestExtent, "m")}`);
+    const risingPlume = r.nearField.some((m) => m.risingField !== undefined);
+    out.push(`  ${risingPlume ? "Field area (surface or trap level)" : "Seabed footprint"} above the governing limit: ${n(z.footprint.area, "m²")}, furthest ${n(z.footprint.furthestExtent, "m")}`);
+    for (const m of r.nearField) {
+      const f = m.risingField;
+      if (f) out.push(`  Rising plume (${m.method}): ${f.kind === "trapped" ? `trapped ${n(f.trapHeight, "m")} above the port` : f.kind === "surface" ? "reaches the surface" : "no end point"}, dilution ${n(f.dilution)} where the field starts ${n(f.distance, "m")} from the port`);
+    }
+  }
+  if (r.blend) {
+    out.push("", wrap(`Blend: ${r.blend.note}`, 96, "  "));
   }
   if (r.basin) {
     const b = r.basin;

@@ -179,6 +179,9 @@ export interface OverallResult {
   readonly edgeDilution: number;
 }
 
+export type { BlendResult } from "../rising/blend";
+import type { BlendResult } from "../rising/blend";
+
 export interface BrinefieldResult {
   readonly format: typeof RESULT_FORMAT;
   readonly version: typeof RESULT_VERSION;
@@ -207,6 +210,8 @@ export interface BrinefieldResult {
   readonly overall: OverallResult;
   /** Present only with `ambient.basin`: the background build-up used in the compliance. */
   readonly basin?: BasinResult;
+  /** Present only for a plant with blending streams: the blend's buoyancy and the blend ratio where it changes sign. */
+  readonly blend?: BlendResult;
   readonly warnings: readonly ResultWarning[];
   readonly methods: readonly { readonly stage: string; readonly name: string; readonly source: string }[];
 }

@@ -17,7 +17,7 @@ import type {
   UncertainInput,
 } from "./types";
 import type { SalinityValue, ScenarioFileParsed } from "./schema";
-import { brineFromPlant } from "./plant";
+import { blendingAtRatio, brineFlowFromPlant, brineFromPlant } from "./plant";
 import { absoluteSalinityFromPractical, salinityFromTds } from "../properties";
 import { formatNumber } from "../units";
 import { issue, type ScenarioIssue } from "./issue";
@@ -241,12 +241,19 @@ export function normaliseScenario(f: ScenarioFileParsed): { scenario: Scenario |
         ctx.issues.push(issue("discharge.temperature", undefined, "expected the brine temperature (°C), or plant.feedTemperature"));
       } else {
         const feedS = resolveSalinity(p.feedSalinity, p.feedTemperature ?? brineT, "plant.feedSalinity", ctx);
-        const blending = (p.blending ?? []).map((b, i) => ({
+        let blending = (p.blending ?? []).map((b, i) => ({
           name: b.name,
           flow: b.flow,
           temperature: b.temperature,
           salinity: resolveSalinity(b.salinity, b.temperature, `plant.blending.${i}.salinity`, ctx),
         }));
+        if (p.blendRatio !== undefined) {
+          if (blending.length === 0) ctx.issues.push(issue("plant.blendRatio", p.blendRatio, "needs at least one stream under plant.blending to scale"));
+          else {
+            blending = blendingAtRatio(blending, brineFlowFromPlant(p.productFlow, p.recovery), p.blendRatio);
+            ctx.conversions.push(`plant.blendRatio: blending streams scaled together to ${formatNumber(p.blendRatio)} × the brine flow`);
+          }
+        }
         const rej = p.saltRejection ?? DEFAULT_SALT_REJECTION;
         const bal = brineFromPlant({ productFlow: p.productFlow, recovery: p.recovery, feedSalinity: feedS, saltRejection: rej, brineTemperature: brineT, blending });
         flow = bal.dischargeFlow;
@@ -256,7 +263,16 @@ export function normaliseScenario(f: ScenarioFileParsed): { scenario: Scenario |
           `plant: product ${formatNumber(p.productFlow)} m³/s at recovery ${formatNumber(p.recovery)} and salt rejection ${formatNumber(rej)}${p.saltRejection === undefined ? " (default)" : ""} → brine ${formatNumber(bal.brineFlow)} m³/s at ${formatNumber(bal.brineSalinity)} g/kg (${formatNumber(bal.concentrationFactor, 3)}× the feed)` +
             (blending.length ? `; after blending ${blending.length} stream(s): ${formatNumber(flow)} m³/s at ${formatNumber(salinity)} g/kg, ${formatNumber(temperature)} °C` : ""),
         );
-        plantOut = { productFlow: p.productFlow, recovery: p.recovery, feedSalinity: feedS, saltRejection: rej, feedTemperature: p.feedTemperature, blending };
+        plantOut = {
+          productFlow: p.productFlow,
+          recovery: p.recovery,
+          feedSalinity: feedS,
+          saltRejection: rej,
+          feedTemperature: p.feedTemperature,
+          blending,
+          brineTemperature: brineT,
+          blendRatio: bal.brineFlow > 0 ? blending.reduce((s, b) => s + b.flow, 0) / bal.brineFlow : 0,
+        };
       }
     }
   } else {

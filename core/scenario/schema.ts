@@ -70,6 +70,7 @@ const plant = z.strictObject({
   saltRejection: fraction(0, 1, "salt rejection").optional(),
   feedTemperature: temperature("feed temperature").optional(),
   blending: z.array(blendStream).max(20, { error: () => "must list at most 20 blending streams" }).optional(),
+  blendRatio: quantity(FIELD_BOUNDS["plant.blendRatio"].kind, FIELD_BOUNDS["plant.blendRatio"], FIELD_BOUNDS["plant.blendRatio"].what).optional(),
 });
 
 const constituent = z.strictObject({
