@@ -7,7 +7,7 @@
  * by bisection to 0.1 % of the ratio.
  */
 import type { Scenario } from "../scenario/types";
-import { scenarioWithBlendRatio } from "../scenario/plant";
+import { blendRatioOfPlant, scenarioWithBlendRatio } from "../scenario/plant";
 import { propertiesFromScenario } from "../properties";
 
 export interface BlendResult {
@@ -37,7 +37,7 @@ export function blendSignChange(scenario: Scenario): BlendResult | null {
   const p = scenario.plant;
   if (!p || p.blending.length === 0) return null;
   const gAt = (r: number) => propertiesFromScenario(scenarioWithBlendRatio(scenario, r)).reducedGravity;
-  const ratio = p.blendRatio ?? 0;
+  const ratio = blendRatioOfPlant(p);
   const g0 = propertiesFromScenario(scenario).reducedGravity;
   const xs = grid();
   const gs = xs.map(gAt);

@@ -5,9 +5,13 @@
  *
  * Chain: the field dilution S_f where the plume reaches the surface or its trap level, then
  * S(x) = S_f × S_Brooks(x − x_f) (multiplicative, Fischer et al. 1979, from memory), the field's start
- * width being the plume's width there plus the diffuser's length across the current. In stagnant water no
- * further dilution is counted beyond the field's start (the buoyant spreading of the field adds mixing that
- * is not modelled — cautious). An edge inside the plume reads the plume's own dilution. The near-field
+ * width being the plume's width there plus the diffuser's length across the current. The field travels
+ * at the current speed, or at its own spreading speed where that is faster — c = √(g′_f·h) for a surface
+ * field and c = N·h for a trapped one, with g′_f the field's reduced gravity, h the plume's half-width where
+ * the field starts and N the buoyancy frequency (the scales of a gravity-current front and of an intrusion
+ * in stratified water; judgement, no source) — so the result is continuous as the current goes to zero.
+ * The field's own buoyant mixing is not counted (cautious). An edge inside the plume reads the plume's own
+ * dilution. The near-field
  * method carried to the edge is the one giving the lower edge dilution unless `options.nearFieldForEdge`
  * names one. The background of every constituent is the ambient at the field's level.
  */
@@ -60,10 +64,13 @@ export function risingBeyond(input: RisingBeyondInput): BeyondOutput {
   }
 
   const usable = mp.methods.filter((m) => m.nf.available && m.field.kind !== "none");
+  const speedOf = (m: RisingMethod) => Math.max(u, fieldSpreadingSpeed(m, jet.reducedGravity));
+  // Carried by the current, the field is as wide as the diffuser seen across the current; spreading on its
+  // own, it spreads from the whole diffuser length.
+  const widthOf = (m: RisingMethod) => 2 * m.field.halfWidth + (u >= fieldSpreadingSpeed(m, jet.reducedGravity) ? crossLength : diffuserLength);
   const edgeOf = (m: RisingMethod): number => {
     if (radius <= m.field.distance) return dilutionFromProfile(jetProfileFromNearField(m.nf), radius);
-    if (!(u > 0)) return m.field.dilution;
-    const field = brooksFieldFromInput({ initialWidth: 2 * m.field.halfWidth + crossLength, currentSpeed: u });
+    const field = brooksFieldFromInput({ initialWidth: widthOf(m), currentSpeed: speedOf(m) });
     return m.field.dilution * brooksDilutionInField(field, radius - m.field.distance);
   };
   let chosen: RisingMethod | undefined;
@@ -82,7 +89,7 @@ export function risingBeyond(input: RisingBeyondInput): BeyondOutput {
   const full = input.detail !== "edge";
   const alternatives = full
     ? usable.map((m) => ({
-        method: radius <= m.field.distance ? `${m.nf.method} (plume crosses the edge)` : `${m.nf.method} ${m.field.kind} field${u > 0 ? " + passive-diffusion" : " (stagnant: no further dilution)"}`,
+        method: radius <= m.field.distance ? `${m.nf.method} (plume crosses the edge)` : `${m.nf.method} ${m.field.kind} field + passive-diffusion`,
         dilution: edgeOf(m),
       }))
     : [];
@@ -110,18 +117,19 @@ export function risingBeyond(input: RisingBeyondInput): BeyondOutput {
         }),
       );
     }
-    if (!(u > 0) && !edgeInside) {
+    const c = fieldSpreadingSpeed(chosen, jet.reducedGravity);
+    if (c > u && !edgeInside) {
       warnings.push(
         warning(
-          "rising-field-stagnant",
+          "rising-field-own-spreading",
           "info",
-          `Stagnant water: the ${chosen.field.kind === "surface" ? "surface" : "trapped"} field's further dilution by its own spreading is not modelled; the edge takes the dilution where the field starts (cautious).`,
+          `The ${chosen.field.kind === "surface" ? "surface" : "trapped"} field spreads faster (${c.toPrecision(2)} m/s, ${chosen.field.kind === "surface" ? "√(g′h)" : "N·h"}) than the current carries it (${u.toPrecision(2)} m/s): passive diffusion is taken over the time it needs to spread to the edge at that speed (judgement, no source).`,
           { stage: "far-field" },
         ),
       );
     }
-    if (u > 0) warnings.push(...brooksDilutionFromDistanceValidityIssues({ distance: radius, initialWidth: 2 * chosen.field.halfWidth + crossLength, currentSpeed: u }));
-    if (full) series = risingSeries(chosen, Math.max(2 * radius, 1.2 * chosen.field.distance, 1), scenario.discharge.salinity - bgSalinity, u, crossLength);
+    warnings.push(...brooksDilutionFromDistanceValidityIssues({ distance: radius, initialWidth: widthOf(chosen), currentSpeed: speedOf(chosen) }));
+    if (full) series = risingSeries(chosen, Math.max(2 * radius, 1.2 * chosen.field.distance, 1), scenario.discharge.salinity - bgSalinity, speedOf(chosen), widthOf(chosen));
   }
 
   const assessment = complianceFromEdgeDilution(scenario, edgeDilution, bgSalinity, bgTemperature);
@@ -138,7 +146,7 @@ export function risingBeyond(input: RisingBeyondInput): BeyondOutput {
   const mixingZone: MixingZoneResult = {
     radius,
     dilution: edgeDilution,
-    method: edgeInside ? `${nfName} rising plume (edge inside the near field)` : `${nfName} rising plume → ${fieldLabel}${u > 0 ? " × Brooks (1960) passive diffusion" : " (stagnant: no further dilution)"}`,
+    method: edgeInside ? `${nfName} rising plume (edge inside the near field)` : `${nfName} rising plume → ${fieldLabel} × Brooks (1960) passive diffusion`,
     nearFieldMethod: nfName,
     edgeInsideNearField: edgeInside,
     alternatives,
@@ -148,13 +156,13 @@ export function risingBeyond(input: RisingBeyondInput): BeyondOutput {
     series,
     notModelled: [
       ...notModelledFor(scenario).filter((t) => !/dense layer|stratification beyond/i.test(t)),
-      "The buoyant spreading of the surface or trapped field (its own extra mixing) is not modelled; in stagnant water the field keeps the dilution it starts with.",
+      "The buoyant spreading of the surface or trapped field adds mixing that is not counted; it only sets how fast the field moves out in slack water.",
       "Ambient stratification beyond the near field is not modelled; a trapped field is carried at its trap level.",
     ],
   };
   const methods = [
     { stage: "multiport", name: "rising-plume merging and line-plume limit", source: RISING_MERGING_SOURCE },
-    ...(u > 0 ? [{ stage: "far-field", name: "passive lateral diffusion of the surface or trapped field", source: BROOKS_1960_SOURCE }] : []),
+    { stage: "far-field", name: "passive lateral diffusion of the surface or trapped field", source: `${BROOKS_1960_SOURCE}; carried by the current or by the field's own spreading speed, whichever is faster (judgement, no source)` },
     { stage: "compliance", name: "required dilution", source: "S_req = (C_d − C_b)/(C_limit − C_b), from the definition of dilution" },
     ...(assessment.basin ? [{ stage: "background", name: assessment.basin.method, source: assessment.basin.source }] : []),
   ];
@@ -174,7 +182,7 @@ function risingSeries(
   xEnd: number,
   excess: number,
   u: number,
-  crossLength: number,
+  width: number,
 ): SeriesResult {
   const distance: number[] = [];
   const dilution: number[] = [];
@@ -187,15 +195,25 @@ function risingSeries(
     dilution.push(dilutionFromProfile(profile, r));
     stage.push("jet");
   }
-  const field = u > 0 ? brooksFieldFromInput({ initialWidth: 2 * m.field.halfWidth + crossLength, currentSpeed: u }) : null;
+  const field = brooksFieldFromInput({ initialWidth: width, currentSpeed: u });
   const steps = 200;
   for (let i = 0; i <= steps; i++) {
     const r = m.field.distance + ((xEnd - m.field.distance) * i) / steps;
     if (r > xEnd) break;
     distance.push(r);
-    dilution.push(field ? m.field.dilution * brooksDilutionInField(field, r - m.field.distance) : m.field.dilution);
-    stage.push(u > 0 ? "passive-diffusion" : m.field.kind === "trapped" ? "trapped-field" : "surface-field");
+    dilution.push(m.field.dilution * brooksDilutionInField(field, r - m.field.distance));
+    stage.push("passive-diffusion");
   }
 
   return { distance, dilution, salinityIncrease: dilution.map((s) => excess / s), layerThickness: distance.map(() => null), stage };
+}
+
+/**
+ * The field's own spreading speed, m/s: √(g′_f·h) for a surface field (g′_f = |g′₀|/S_f) and N·h for a
+ * trapped one, with h the plume's half-width where the field starts (judgement, no source).
+ */
+function fieldSpreadingSpeed(m: RisingMethod, reducedGravity: number): number {
+  const h = Math.max(m.field.halfWidth, 0.1);
+  if (m.field.kind === "trapped" && m.field.buoyancyFrequency > 0) return m.field.buoyancyFrequency * h;
+  return Math.sqrt((Math.abs(reducedGravity) / Math.max(m.field.dilution, 1)) * h);
 }

@@ -270,8 +270,6 @@ export function normaliseScenario(f: ScenarioFileParsed): { scenario: Scenario |
           saltRejection: rej,
           feedTemperature: p.feedTemperature,
           blending,
-          brineTemperature: brineT,
-          blendRatio: bal.brineFlow > 0 ? blending.reduce((s, b) => s + b.flow, 0) / bal.brineFlow : 0,
         };
       }
     }

@@ -24,6 +24,11 @@ export interface PlantBalance {
   readonly dischargeTemperature: number; // °C after blending
 }
 
+/** The plant's blend ratio: total blending flow ÷ brine flow (0 without blending streams). */
+export function blendRatioOfPlant(p: { readonly productFlow: number; readonly recovery: number; readonly blending: readonly { readonly flow: number }[] }): number {
+  return p.blending.reduce((a, b) => a + b.flow, 0) / brineFlowFromPlant(p.productFlow, p.recovery);
+}
+
 /** Brine flow before blending, Q_b = Q_p·(1 − r)/r, m³/s. */
 export function brineFlowFromPlant(productFlow: number, recovery: number): number {
   return (productFlow * (1 - recovery)) / recovery;
@@ -72,18 +77,22 @@ export function brineFromPlant(p: PlantBalanceInput): PlantBalance {
 export function scenarioWithBlendRatio(s: Scenario, ratio: number): Scenario {
   const p = s.plant;
   if (!p || p.blending.length === 0) return s;
-  const blending = blendingAtRatio(p.blending, brineFlowFromPlant(p.productFlow, p.recovery), ratio);
+  const brineFlow = brineFlowFromPlant(p.productFlow, p.recovery);
+  const blending = blendingAtRatio(p.blending, brineFlow, ratio);
+  // The brine's own temperature, recovered from the blended discharge temperature (flow-weighted mean).
+  const q = brineFlow + p.blending.reduce((a, b) => a + b.flow, 0);
+  const brineTemperature = (q * s.discharge.temperature - p.blending.reduce((a, b) => a + b.flow * b.temperature, 0)) / brineFlow;
   const bal = brineFromPlant({
     productFlow: p.productFlow,
     recovery: p.recovery,
     feedSalinity: p.feedSalinity,
     saltRejection: p.saltRejection,
-    brineTemperature: p.brineTemperature ?? p.feedTemperature ?? s.discharge.temperature,
+    brineTemperature,
     blending,
   });
   return {
     ...s,
-    plant: { ...p, blending, blendRatio: ratio },
+    plant: { ...p, blending },
     discharge: { ...s.discharge, flow: bal.dischargeFlow, salinity: bal.dischargeSalinity, temperature: bal.dischargeTemperature },
   };
 }

@@ -56,10 +56,6 @@ export interface PlantInput {
   readonly saltRejection: number; // 0–1
   readonly feedTemperature?: number; // °C, brine temperature if discharge.temperature absent
   readonly blending: readonly BlendStream[];
-  /** Brine temperature before blending, °C (discharge.temperature, or the feed temperature). */
-  readonly brineTemperature?: number;
-  /** Total blending flow ÷ brine flow (0 without blending streams). */
-  readonly blendRatio?: number;
 }
 
 export interface AmbientInput {

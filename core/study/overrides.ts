@@ -18,7 +18,7 @@ import { issue } from "../scenario/issue";
 import { scenarioRuleIssues } from "../scenario/rules";
 import { ScenarioError } from "../scenario/parse";
 import { scenarioFileSchema } from "../scenario/schema";
-import { scenarioWithBlendRatio } from "../scenario/plant";
+import { blendRatioOfPlant, scenarioWithBlendRatio } from "../scenario/plant";
 
 export interface OverridePathInfo {
   readonly kind: QuantityKind;
@@ -92,7 +92,7 @@ export function readPath(s: Scenario, path: string): number {
   if (group === "diffuser" && field === "portDiameter") return s.diffuser.portDiameterNominal;
   if (group === "plant") {
     if (!s.plant || s.plant.blending.length === 0) throw new OverrideError(path, "needs a plant with at least one blending stream");
-    return s.plant.blendRatio ?? 0;
+    return blendRatioOfPlant(s.plant);
   }
   const obj = (s as unknown as Record<string, Record<string, unknown>>)[group];
   const v = obj?.[field];
