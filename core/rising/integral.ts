@@ -91,7 +91,8 @@ export function risingIntegral(jet: JetSource, column: AmbientColumn, options: I
     bias: RISING_INTEGRAL_BIAS,
     warnings,
     notes,
-    path: options.includePath === false ? undefined : path,
+    // Past the field's start (the overshoot above a trap level) the path's extra mixing is not counted.
+    path: options.includePath === false ? undefined : path.map((p) => (p.dilution > field.dilution ? { ...p, dilution: field.dilution } : p)),
     risingField: field,
   };
 }

@@ -121,7 +121,8 @@ export function risingLengthScale(jet: JetSource, column: AmbientColumn): NearFi
     impactDilution: null,
     nearFieldDistance: distance,
     nearFieldDilution: at.dilution,
-    maxRiseDilution: trapped ? buoyantJetDilution(f, zMax).dilution : at.dilution,
+    // The overshoot above the trap level adds mixing that is not counted: the same dilution as the field.
+    maxRiseDilution: at.dilution,
     dilutionRange: null,
     impactDilutionFluxAveraged: null,
     nearFieldDilutionFluxAveraged: null,

@@ -4,8 +4,10 @@
  * Criterion (geometric, as for dense jets): neighbouring plumes merge where a plume's full width equals
  * the spacing between their centrelines. A rising round plume's top-hat radius grows as √2·0.12·z
  * (Fischer et al. 1979, from memory), or is read off the integral path; plumes that merge below the
- * field height rise on as a line plume, whose dilution at the field height is S = 0.27·b^(1/3)·z/q with
- * q = the diffuser's flow per unit length (core/multiport/line-plume.ts). Roberts, Snyder & Baumgartner
+ * field height rise on as a line source, whose dilution at the field height is the larger of the line-plume
+ * law S = 0.27·b^(1/3)·z/q (core/multiport/line-plume.ts) and the plane-jet law S = √(m·z)/(2.38·q)
+ * (Fischer et al. 1979, ch. 9, table 9.1, from memory), q and m = U·q the flow and momentum per unit
+ * length of diffuser. Roberts, Snyder & Baumgartner
  * (1989) found closely spaced multiport plumes dilute close to a line plume. The merged dilution is the
  * lower of the single-plume and the line-plume value (merging can only lower it here). Ports on one
  * rosette riser are taken as merging at once (their plumes rise from one point; judgement).
@@ -75,7 +77,9 @@ export function risingMultiport(scenario: Scenario, jet: JetSource, methods: rea
     const zMerge = mergingHeight(m.nf, m.field, spacing);
     const linesUp = zMerge < m.field.height && Number.isFinite(q);
     if (!linesUp && !riserMerge) return m;
-    const sLine = linesUp ? linePlumeDilutionFromFlux(q, jet.reducedGravity, m.field.height) : Infinity;
+    const sLine = linesUp
+      ? Math.max(linePlumeDilutionFromFlux(q, jet.reducedGravity, m.field.height), planeJetDilution(q, jet.velocity * q, m.field.height))
+      : Infinity;
     const merged = Math.min(m.field.dilution, sRiser, sLine);
     const factor = merged / m.field.dilution;
     worst = Math.min(worst, factor);
@@ -85,8 +89,11 @@ export function risingMultiport(scenario: Scenario, jet: JetSource, methods: rea
     const note = `Merging (${m.nf.method}): ${parts.join("; ")}; field dilution ${merged.toFixed(1)} (× ${factor.toFixed(3)}).`;
     notes.push(note);
     const field = { ...m.field, dilution: merged, halfWidth: m.field.halfWidth };
+    // Along the path the dilution is held at the merged value once it would exceed it (stays non-decreasing).
     const nf: NearFieldMethodResult = {
       ...m.nf,
+      path: m.nf.path?.map((p) => (p.dilution > merged ? { ...p, dilution: merged } : p)),
+      risingField: field,
       nearFieldDilution: merged,
       maxRiseDilution: m.nf.maxRiseDilution === null || m.nf.maxRiseDilution === undefined ? null : Math.min(m.nf.maxRiseDilution, Math.max(merged, m.nf.maxRiseDilution * factor)),
       notes: [...(m.nf.notes ?? []), note],
@@ -110,3 +117,9 @@ export function risingMultiport(scenario: Scenario, jet: JetSource, methods: rea
   };
 }
 
+
+/** Plane-jet centreline dilution S = √(m·z)/(2.38·q), q and m per unit length (at least 1). */
+export function planeJetDilution(q: number, m: number, z: number): number {
+  if (!(q > 0) || !(m > 0) || !(z > 0)) return 1;
+  return Math.max(1, Math.sqrt(m * z) / (2.38 * q));
+}

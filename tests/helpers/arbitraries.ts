@@ -6,7 +6,10 @@ import fc from "fast-check";
 
 const num = (min: number, max: number) => fc.double({ min, max, noNaN: true, noDefaultInfinity: true });
 
-/** A valid raw scenario: every field within the schema's bounds, brine denser than the sea. */
+/**
+ * A valid raw scenario: every field within the schema's bounds, of either buoyancy — a brine denser than
+ * the sea, or a blend lighter than it (fresher, or warmer) that rises.
+ */
 export const validScenarioFile = fc
   .record({
     depth: num(2, 200),
@@ -29,13 +32,17 @@ export const validScenarioFile = fc
     stratified: fc.boolean(),
     stratDelta: num(0, 1.5),
     unitStrings: fc.boolean(),
+    rising: fc.boolean(),
+    deficitS: num(0, 30),
+    warmth: num(0, 20),
   })
   .map((v) => {
     const portHeight = Math.min(v.depth * v.portHeightFrac, v.depth - v.diameter - 0.5);
-    const brineS = Math.min(160, v.ambientS + v.excessS);
-    // Warmer brine can be lighter than the sea even when saltier; keep the generator in the dense-jet scope
-    // by requiring a clear salt excess relative to any temperature excess (≈ 0.8 g/kg per 3 °C).
-    const brineT = Math.min(v.brineT, v.ambientT + v.excessS * 2);
+    // Dense: a clear salt excess relative to any temperature excess (≈ 0.8 g/kg per 3 °C). Rising: fresher
+    // and/or warmer than the sea (a blend with wastewater or cooling water); near-neutral draws may still
+    // sink at the port once pressure acts, and are checked as dense jets then.
+    const brineS = v.rising ? Math.max(0, v.ambientS - v.deficitS) : Math.min(160, v.ambientS + v.excessS);
+    const brineT = v.rising ? Math.min(60, v.ambientT + v.warmth) : Math.min(v.brineT, v.ambientT + v.excessS * 2);
     const ambient: Record<string, unknown> = v.stratified
       ? {
           depth: v.depth,
