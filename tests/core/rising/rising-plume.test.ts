@@ -201,3 +201,15 @@ describe("the pipeline computes a discharge lighter than the sea", () => {
     expect(close.mixingZone.dilution).toBeLessThan(apart.mixingZone.dilution);
   });
 });
+
+describe("the report draws a rising plume", () => {
+  it("titles the near field as a rising plume, states where it spreads and marks the field in the side view", async () => {
+    const { reportHtml } = await import("../../../core/report");
+    const raw = warmBlend({ profile: true });
+    const r = runScenario(scenarioOf(raw));
+    const text = reportHtml(r, { scenarioFile: raw }, { generatedAt: "2026-12-03T00:00:00Z" });
+    expect(text).toMatch(/Near field: rising plume from the mean port/);
+    expect(text).toMatch(/id="rising-plume"/);
+    expect(text).toMatch(/trapped field \(trap level\)/);
+  });
+});
