@@ -38,7 +38,7 @@ export const BASIN_METHOD = "well-mixed box model (steady increase = excess load
 export const BASIN_SOURCE =
   "Well-mixed box (continuously stirred tank) balance V·dΔ/dt = Q_d·(C_d − C_n) − Q_e·Δ: Officer (1976), " +
   "Physical Oceanography of Estuaries (and Associated Coastal Waters), Wiley, ch. 5; Fischer et al. (1979), " +
-  "Mixing in Inland and Coastal Waters, Academic Press, ch. 7 (from memory)";
+  "Mixing in Inland and Coastal Waters, Academic Press, ch. 7";
 
 export const BASIN_LIMITS =
   "Assumes no stratification and complete mixing of the whole basin, steady discharge and exchange, a " +

@@ -34,8 +34,7 @@ import type { RisingField } from "./types";
 export const RISING_LENGTH_SCALE_SOURCE = `${ROUND_JET_SOURCE}; ${ROUND_PLUME_SOURCE}; ${TRAP_HEIGHT_SOURCE}; ${BUOYANT_JET_SOURCE}`;
 
 export const RISING_LENGTH_SCALE_BIAS =
-  "Asymptotic laws for a vertical round source in stagnant water (coefficients from Fischer et al. 1979, " +
-  "from memory). Near the jet-to-plume transition the larger asymptote under-states the dilution; an inclined " +
+  "Asymptotic laws for a vertical round source in stagnant water (coefficients of Fischer et al. 1979). Near the jet-to-plume transition the larger asymptote under-states the dilution; an inclined " +
   "port and any current add dilution that is not counted, so the dilutions are expected to be low (cautious).";
 
 /** Runs the rising length-scale method for one port (or a merged group handled by the caller). Never throws. */
