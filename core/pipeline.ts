@@ -5,15 +5,18 @@
  * of the ones before; nothing reaches back.
  */
 import type { Scenario } from "./scenario/types";
-import { ScenarioError } from "./scenario/parse";
-import { issue } from "./scenario/normalise";
 import { inputsHash } from "./scenario/hash";
 import { propertiesFromScenario, type PropertiesStage } from "./properties";
 import type { JetSource, NearFieldMethodResult, PathSink } from "./nearfield/types";
 import { nearFieldLengthScale } from "./nearfield/lengthScale";
 import { nearFieldIntegral } from "./nearfield/integral";
 import { jetSourceWarnings } from "./nearfield/sourceChecks";
-import { beyondNearField } from "./farfield/stage";
+import { beyondNearField, type BeyondOutput } from "./farfield/stage";
+import { risingLengthScale } from "./rising/length-scale";
+import { risingIntegral } from "./rising/integral";
+import { risingBeyond } from "./rising/stage";
+import { blendSignChange } from "./rising/blend";
+import { DENSE_SOURCE_CODES, risingScopeReasons } from "./rising/scope";
 import { portFlowsAndHydraulics, type PortHydraulics } from "./multiport";
 import { viscosityFromST, SHARQAWY_2010_VISCOSITY_SOURCE } from "./correlations/sharqawy-2010-viscosity";
 import {
@@ -98,14 +101,16 @@ export type AmbientCaseResult = Omit<BrinefieldResult, "cases" | "overall">;
 /**
  * Runs the whole screening chain for one scenario and every ambient case (core/cases): the stated
  * conditions fill the top level (`mixingZone`, `compliance`, …) as before; `cases` lists each case's
- * verdict and `overall` the verdict over them. Throws ScenarioError for inputs outside Brinefield's scope
- * (a discharge lighter than the sea, in any case); everything else comes back as warnings.
+ * verdict and `overall` the verdict over them. A discharge lighter than the sea is computed as a rising
+ * plume (core/rising); out-of-range physics comes back as warnings and scope reasons.
  */
 export function runScenario(scenario: Scenario, options: RunOptions = {}): BrinefieldResult {
   if (scenario.ambient.record) {
     // A record's steps are the cases (core/record); the stated conditions still fill the top level.
     const top = runAmbientCase(scenario, options);
-    return withRecord(scenario, top, runRecordSteps(scenario, recordStepEvaluator));
+    const recorded = withRecord(scenario, top, runRecordSteps(scenario, recordStepEvaluator));
+    const blend = blendSignChange(scenario);
+    return blend ? { ...recorded, blend } : recorded;
   }
   const specs = expandCases(scenario);
   const results = runCases(specs, (c, i) =>
@@ -122,7 +127,8 @@ export function runScenario(scenario: Scenario, options: RunOptions = {}): Brine
       scopeReasons: r.compliance.scopeReasons,
     };
   });
-  const result: BrinefieldResult = { ...results[0]!, cases, overall: overallFromCases(cases) };
+  const blend = blendSignChange(scenario);
+  const result: BrinefieldResult = { ...results[0]!, ...(blend ? { blend } : {}), cases, overall: overallFromCases(cases) };
   return scenario.intake ? withIntakeCases(scenario, result, specs.map((c, i) => ({ name: c.name, sample: intakeFromResult(c.scenario, results[i]!) }))) : result;
 }
 
@@ -137,24 +143,27 @@ export function recordStepEvaluator(s: Scenario) {
  */
 export function runAmbientCase(scenario: Scenario, options: RunOptions = {}): AmbientCaseResult {
   const props = propertiesFromScenario(scenario);
-  if (!(props.reducedGravity > 0)) {
-    throw new ScenarioError([
-      issue(
-        scenario.plant ? "plant" : "discharge.salinity",
-        `${formatNumber(props.dischargeDensity, 7)} kg/m³`,
-        `makes the discharge no denser than the sea at the port (${formatNumber(props.ambientDensityAtPort, 7)} kg/m³): it would rise as a buoyant plume, which is outside this version's dense-jet scope. Brinefield screens brines denser than the receiving water only.`,
-      ),
-    ]);
-  }
+  // A discharge no denser than the sea at the port rises: the same stages, read for a rising plume (core/rising).
+  const rising = !(props.reducedGravity > 0);
   const hydraulics = portFromScenario(scenario, props);
   const port = hydraulics.port;
   const jet = jetFromScenario(scenario, props, port);
-  const lengthScale = nearFieldLengthScale(jet, props.column);
-  // The path is always computed: the edge may lie inside the jet, where its dilution is read off the path.
-  const integral = nearFieldIntegral(jet, props.column, { includePath: true, sink: options.sink });
-  const nearField: NearFieldMethodResult[] = [lengthScale, integral];
-  const beyond = beyondNearField({ scenario, jet, column: props.column, nearField, densities: props.densities, port, detail: options.detail });
-  const sourceWarnings = jetSourceWarnings(jet, props.column);
+  let beyond: BeyondOutput;
+  let sourceWarnings: ResultWarning[];
+  if (rising) {
+    const lengthScale = risingLengthScale(jet, props.column);
+    const integral = risingIntegral(jet, props.column, { includePath: true, sink: options.sink });
+    const methods = [lengthScale, integral].map(({ risingField, ...nf }) => ({ nf: { ...nf, risingField }, field: risingField }));
+    beyond = risingBeyond({ scenario, jet, column: props.column, densities: props.densities, port, methods, detail: options.detail });
+    sourceWarnings = jetSourceWarnings(jet, props.column).filter((w) => !DENSE_SOURCE_CODES.has(w.code));
+  } else {
+    const lengthScale = nearFieldLengthScale(jet, props.column);
+    // The path is always computed: the edge may lie inside the jet, where its dilution is read off the path.
+    const integral = nearFieldIntegral(jet, props.column, { includePath: true, sink: options.sink });
+    const nearField: NearFieldMethodResult[] = [lengthScale, integral];
+    beyond = beyondNearField({ scenario, jet, column: props.column, nearField, densities: props.densities, port, detail: options.detail });
+    sourceWarnings = jetSourceWarnings(jet, props.column);
+  }
   const warnings = dedupe([
     ...props.warnings,
     ...hydraulics.warnings,
@@ -162,6 +171,9 @@ export function runAmbientCase(scenario: Scenario, options: RunOptions = {}): Am
     ...beyond.nearField.flatMap((m) => m.warnings),
     ...beyond.warnings,
   ]);
+  const reasons = rising
+    ? risingScopeReasons(beyond.nearField, warnings)
+    : scopeReasons({ depth: scenario.ambient.depth, portHeight: scenario.diffuser.portHeight, nearField: beyond.nearField, warnings });
   return {
     format: RESULT_FORMAT,
     version: RESULT_VERSION,
@@ -182,10 +194,8 @@ export function runAmbientCase(scenario: Scenario, options: RunOptions = {}): Am
     nearField: options.includePath === false ? beyond.nearField.map(({ path: _path, ...m }) => m) : beyond.nearField,
     multiport: beyond.multiport,
     mixingZone: beyond.mixingZone,
-    compliance: complianceWithScope(
-      beyond.compliance,
-      scopeReasons({ depth: scenario.ambient.depth, portHeight: scenario.diffuser.portHeight, nearField: beyond.nearField, warnings }),
-    ),
+    compliance: complianceWithScope(beyond.compliance, reasons),
+    ...(beyond.basin ? { basin: beyond.basin } : {}),
     warnings,
     methods: [
       { stage: "properties", name: props.eos.info.name, source: props.eos.info.source },

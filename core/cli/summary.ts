@@ -124,7 +124,29 @@ export function summaryText(s: Scenario, r: BrinefieldResult): string {
       ]),
     );
     if (z.layerThickness !== null) out.push(`  Dense-layer thickness at the edge: ${n(z.layerThickness, "m")}`);
-    out.push(`  Seabed footprint above the governing limit: ${n(z.footprint.area, "m²")}, furthest ${n(z.footprint.furthestExtent, "m")}`);
+    const risingPlume = r.nearField.some((m) => m.risingField !== undefined);
+    out.push(`  ${risingPlume ? "Field area (surface or trap level)" : "Seabed footprint"} above the governing limit: ${n(z.footprint.area, "m²")}, furthest ${n(z.footprint.furthestExtent, "m")}`);
+    for (const m of r.nearField) {
+      const f = m.risingField;
+      if (f) out.push(`  Rising plume (${m.method}): ${f.kind === "trapped" ? `trapped ${n(f.trapHeight, "m")} above the port` : f.kind === "surface" ? "reaches the surface" : "no end point"}, dilution ${n(f.dilution)} where the field starts ${n(f.distance, "m")} from the port`);
+    }
+  }
+  if (r.blend) {
+    out.push("", wrap(`Blend: ${r.blend.note}`, 96, "  "));
+  }
+  if (r.basin) {
+    const b = r.basin;
+    out.push(
+      "",
+      wrap(
+        `Enclosed basin (${b.method}): salinity background raised by ${n(b.backgroundIncrease, "g/kg")} to ${n(b.raisedBackground, "g/kg")} ` +
+          `(exchange flow ${n(b.exchangeFlow, "m³/s")}; 95 % of the rise within ${n(b.timeTo95Percent / 86400, "days")}). The edge uses the raised ` +
+          "background; limits stay relative to the natural one: required dilution = (C_discharge − C_raised)/(C_natural + allowed − C_raised).",
+        96,
+        "  ",
+      ),
+      wrap(`Assumption: ${b.limits}`, 96, "  "),
+    );
   }
   if (r.compliance) {
     const c = r.compliance;

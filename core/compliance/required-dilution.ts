@@ -12,6 +12,16 @@ import { formatNumber, unitSymbol } from "../units";
 import type { ConstituentInput, LimitInput, Scenario } from "../scenario/types";
 import type { ComplianceResult, ConstituentAtEdge, ConstituentCompliance } from "../result/contract";
 import { warning, type ResultWarning } from "../warnings";
+import type { BasinResult } from "../result/contract";
+import {
+  BASIN_LIMITS,
+  BASIN_METHOD,
+  BASIN_SOURCE,
+  backgroundIncreaseFromLoad,
+  exchangeFlowFromBasin,
+  flushingTimeFromBasin,
+  timeTo95PercentFromBasin,
+} from "../basin/box-model";
 
 /**
  * Dilution needed to bring a discharge concentration down to a limit.
@@ -72,6 +82,36 @@ export interface ComplianceAssessment {
   readonly compliance: ComplianceResult;
   readonly constituents: ConstituentAtEdge[];
   readonly warnings: ResultWarning[];
+  /** Present only with `ambient.basin`: the raised background used above. */
+  readonly basin?: BasinResult;
+}
+
+/**
+ * The background build-up of every constituent in an enclosed basin (core/basin/box-model.ts), or null
+ * for open water. `naturalBackground` per constituent is the background the limit is relative to.
+ */
+export function basinFromScenario(scenario: Scenario, sources: readonly ConstituentSource[]): BasinResult | null {
+  const b = scenario.ambient.basin;
+  if (!b) return null;
+  const qe = exchangeFlowFromBasin(b);
+  const constituents = sources.map((s) => {
+    const increase = backgroundIncreaseFromLoad(scenario.discharge.flow, s.discharge, s.background, qe);
+    return { constituent: s.name, unit: s.unit, naturalBackground: s.background, increase, raisedBackground: s.background + increase };
+  });
+  const sal = constituents.find((c) => c.constituent === "salinity")!;
+  return {
+    backgroundIncrease: sal.increase,
+    timeTo95Percent: timeTo95PercentFromBasin(b),
+    exchangeFlow: qe,
+    method: BASIN_METHOD,
+    volume: b.volume,
+    flushingTime: flushingTimeFromBasin(b),
+    naturalBackground: sal.naturalBackground,
+    raisedBackground: sal.raisedBackground,
+    constituents,
+    source: BASIN_SOURCE,
+    limits: BASIN_LIMITS,
+  };
 }
 
 /**
@@ -86,17 +126,42 @@ export function complianceFromEdgeDilution(
   ambientSalinity: number,
   ambientTemperature: number,
 ): ComplianceAssessment {
+  // Natural backgrounds: each limit's own background where it gives one, else the constituent's.
+  const natural = constituentSources(scenario, ambientSalinity, ambientTemperature).map((s) => {
+    const lim = scenario.mixingZone.limits.find((l) => l.constituent.toLowerCase() === s.name.toLowerCase() && l.background !== undefined);
+    return lim ? { ...s, background: lim.background! } : s;
+  });
+  const basin = basinFromScenario(scenario, natural);
+  // With a basin the water around the outfall carries the raised background: the plume dilutes toward it.
+  const raisedOf = (name: string, fallback: number) => basin?.constituents.find((c) => c.constituent === name)?.raisedBackground ?? fallback;
   const sources = constituentSources(scenario, ambientSalinity, ambientTemperature);
   const warnings: ResultWarning[] = [];
-  const constituents: ConstituentAtEdge[] = sources.map((s) => {
-    const concentration = concentrationFromDilution(s.discharge, s.background, edgeDilution);
+  if (basin) {
+    warnings.push(
+      warning(
+        "basin-background-raised",
+        "info",
+        `Enclosed basin: a well-mixed box model raises the salinity background by ${formatNumber(basin.backgroundIncrease, 3)} g/kg ` +
+          `(to ${formatNumber(basin.raisedBackground)} g/kg; 95 % of it within ${formatNumber(basin.timeTo95Percent / 86400, 3)} days; exchange flow ${formatNumber(basin.exchangeFlow, 3)} m³/s). ` +
+          "The edge is checked with the raised background while each limit stays relative to the natural background: " +
+          "required dilution = (C_discharge − C_raised)/(C_natural + allowed increase − C_raised). " +
+          BASIN_LIMITS,
+        { parameter: "ambient.basin", value: basin.backgroundIncrease, stage: "compliance", source: BASIN_SOURCE },
+      ),
+    );
+  }
+  const constituents: ConstituentAtEdge[] = sources.map((s, i) => {
+    const nat = natural[i]!.background;
+    const bg = basin ? raisedOf(s.name, s.background) : s.background;
+    const concentration = concentrationFromDilution(s.discharge, bg, edgeDilution);
     return {
       constituent: s.name,
       unit: s.unit,
       concentration,
-      increase: concentration - s.background,
-      background: s.background,
+      increase: concentration - (basin ? nat : bg),
+      background: bg,
       discharge: s.discharge,
+      ...(basin ? { naturalBackground: nat } : {}),
     };
   });
   const verdicts: ConstituentCompliance[] = [];
@@ -111,20 +176,29 @@ export function complianceFromEdgeDilution(
       continue;
     }
     const lim = limitFor({ ...source, background: limit.background ?? source.background }, limit);
-    const required = requiredDilutionFromLimit(source.discharge, lim.background, lim.absolute);
+    // With a basin the limit stays relative to the natural background while the water carries the raised
+    // one: S_req = (C_d − C_raised)/(C_natural + allowed − C_raised).
+    const dilutesToward = basin ? raisedOf(source.name, lim.background) : lim.background;
+    const required = requiredDilutionFromLimit(source.discharge, dilutesToward, lim.absolute);
     const pass = Number.isFinite(required) && edgeDilution >= required;
     const margin = Number.isFinite(required) ? edgeDilution / required : 0;
     let text = lim.text;
     if (!Number.isFinite(required)) {
-      text += `: can never be met — the limit ${lim.absolute} ${limit.unit} is at or below the background ${lim.background}`;
+      text += `: can never be met — the limit ${lim.absolute} ${limit.unit} is at or below the background ${formatNumber(dilutesToward)}${basin ? " raised by the basin build-up" : ""}`;
       warnings.push(
-        warning("limit-below-background", "serious", `The ${source.name} limit (${lim.absolute} ${limit.unit}) is at or below background (${lim.background}); no dilution meets it.`, {
-          parameter: "mixingZone.limits", value: lim.absolute, stage: "compliance",
-        }),
+        warning(
+          "limit-below-background",
+          "serious",
+          basin
+            ? `The ${source.name} limit (${formatNumber(lim.absolute)} ${limit.unit}) is at or below the background raised by the basin build-up (${formatNumber(dilutesToward)}); no dilution meets it.`
+            : `The ${source.name} limit (${lim.absolute} ${limit.unit}) is at or below background (${lim.background}); no dilution meets it.`,
+          { parameter: basin ? "ambient.basin" : "mixingZone.limits", value: lim.absolute, stage: "compliance" },
+        ),
       );
     } else if (required === 1) {
       text += ": met by the undiluted discharge";
     }
+    if (basin && Number.isFinite(required)) text += `; background raised by the basin build-up to ${formatNumber(dilutesToward)} ${unitSymbol(limit.unit)}`;
     verdicts.push({ constituent: source.name, unit: limit.unit, requiredDilution: required, edgeDilution, pass, margin, limit: text });
   }
   if (!verdicts.length) {
@@ -133,6 +207,7 @@ export function complianceFromEdgeDilution(
       compliance: { governingConstituent: "none", requiredDilution: 1, pass: true, verdict: "meets", scopeReasons: [], margin: edgeDilution, constituents: [] },
       constituents,
       warnings,
+      ...(basin ? { basin } : {}),
     };
   }
   const governing = verdicts.reduce((g, v) => (v.margin < g.margin ? v : g));
@@ -148,5 +223,6 @@ export function complianceFromEdgeDilution(
     },
     constituents,
     warnings,
+    ...(basin ? { basin } : {}),
   };
 }

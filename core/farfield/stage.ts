@@ -12,6 +12,7 @@
 import type { Scenario } from "../scenario/types";
 import type { AmbientColumn, JetSource, NearFieldMethodResult } from "../nearfield/types";
 import type {
+  BasinResult,
   ComplianceResult,
   DensitiesResult,
   MixingZoneResult,
@@ -60,7 +61,18 @@ export interface BeyondOutput {
   readonly compliance: ComplianceResult;
   readonly warnings: ResultWarning[];
   readonly methods: { stage: string; name: string; source: string }[];
+  /** Present only with `ambient.basin`: the background build-up used in the compliance. */
+  readonly basin?: BasinResult;
 }
+
+/** What the result leaves out; with `ambient.basin` the build-up is modelled by the box model instead. */
+export function notModelledFor(scenario: Scenario): readonly string[] {
+  if (!scenario.ambient.basin) return NOT_MODELLED;
+  return [BASIN_NOT_MODELLED, ...NOT_MODELLED.slice(1)];
+}
+
+export const BASIN_NOT_MODELLED =
+  "Background build-up in the enclosed basin is a well-mixed box-model estimate (no stratification, complete mixing); uneven build-up within the basin is not modelled.";
 
 export const NOT_MODELLED: readonly string[] = [
   "Background build-up of salinity in enclosed or poorly flushed water is not modelled; the background is taken as constant.",
@@ -361,7 +373,7 @@ export function beyondNearField(input: BeyondInput): BeyondOutput {
     layerThickness: layerAtEdge,
     footprint,
     series,
-    notModelled: NOT_MODELLED,
+    notModelled: notModelledFor(scenario),
   };
   const methods = [
     { stage: "multiport", name: "jet merging and line-plume limit", source: MERGING_SOURCE },
@@ -370,8 +382,17 @@ export function beyondNearField(input: BeyondInput): BeyondOutput {
     ...(u > 0 ? [{ stage: "far-field", name: "bed-stirred entrainment", source: KATO_PHILLIPS_1969_SOURCE }] : []),
     ...(u > 0 ? [{ stage: "far-field", name: "passive lateral diffusion", source: `${BROOKS_1960_SOURCE}; takes over from the drifting layer where its buoyant sideways spreading has slowed to the diffusive spreading (common practice, no source)` }] : []),
     { stage: "compliance", name: "required dilution", source: "S_req = (C_d − C_b)/(C_limit − C_b), from the definition of dilution" },
+    ...(assessment.basin ? [{ stage: "background", name: assessment.basin.method, source: assessment.basin.source }] : []),
   ];
-  return { multiport: mp.multiport, nearField: mp.nearField, mixingZone, compliance: assessment.compliance, warnings, methods };
+  return {
+    multiport: mp.multiport,
+    nearField: mp.nearField,
+    mixingZone,
+    compliance: assessment.compliance,
+    warnings,
+    methods,
+    ...(assessment.basin ? { basin: assessment.basin } : {}),
+  };
 }
 
 /** Current speed below which the far field is treated as stagnant, m/s (see beyondNearField). */

@@ -86,8 +86,9 @@ export function portFlowsAndHydraulics(input: PortHydraulicsInput): PortHydrauli
   const area = (Math.PI * d.portDiameter * d.portDiameter) / 4;
   const nominalArea = (Math.PI * d.portDiameterNominal * d.portDiameterNominal) / 4;
   const gPrime = (GRAVITY * (input.dischargeDensity - input.ambientDensity)) / input.ambientDensity;
-  // A neutral or buoyant discharge has no densimetric Froude number; report infinity rather than NaN.
-  const froudeOf = (u: number) => (gPrime > 0 ? u / Math.sqrt(gPrime * d.portDiameter) : Infinity);
+  // F = U/√(|g′|·d) for either sign of buoyancy (a rising discharge has g′ < 0); a neutral discharge has
+  // no densimetric Froude number: infinity rather than NaN.
+  const froudeOf = (u: number) => (gPrime !== 0 ? u / Math.sqrt(Math.abs(gPrime) * d.portDiameter) : Infinity);
   const cd = d.dischargeCoefficient;
   const ports: SinglePortHydraulics[] = fractions.map((f, index) => {
     const flow = scenario.discharge.flow * f;

@@ -39,6 +39,7 @@ import { assembleIntegralResult, invalidIntegralResult } from "./integralResult"
 import {
   EV_IMPACT,
   EV_MAX_RISE,
+  EV_NEUTRAL,
   EV_RETURN,
   EV_SEABED_EDGE,
   EV_SURFACE_CENTRE,
@@ -119,6 +120,7 @@ function eventValues(s: number, y: Float64Array, p: IntegralParams, dy: Float64A
     else if (only === EV_IMPACT) out[EV_IMPACT] = z + p.portHeight;
     else if (only === EV_SURFACE_CENTRE) out[EV_SURFACE_CENTRE] = p.portDepth - z;
     else if (only === EV_TOP) out[EV_TOP] = y[IMZ];
+    else if (only === EV_NEUTRAL) out[EV_NEUTRAL] = neutralBuoyancy(y, p);
     else out[EV_ENTRAINMENT_SWITCH] = entrainmentSwitch(y, p);
     return;
   }
@@ -135,12 +137,19 @@ function eventValues(s: number, y: Float64Array, p: IntegralParams, dy: Float64A
   }
   out[EV_TOP] = y[IMZ];
   if (out.length > EV_ENTRAINMENT_SWITCH) out[EV_ENTRAINMENT_SWITCH] = entrainmentSwitch(y, p);
+  if (out.length > EV_NEUTRAL) out[EV_NEUTRAL] = neutralBuoyancy(y, p);
+}
+
+/** The centreline's reduced gravity relative to the water at its level: zero at the trap level. */
+function neutralBuoyancy(y: Float64Array, p: IntegralParams): number {
+  return y[IB] / y[IQ] - profileAt(p.depths, p.epsilon, p.portDepth - y[IZ]);
 }
 
 /** dg/dt of the restart events (the top's only: the entrainment switch is located after the fact). */
 function eventRates(_s: number, _y: Float64Array, _p: IntegralParams, dy: Float64Array, out: Float64Array): void {
   out[EV_TOP] = dy[IMZ];
   if (out.length > EV_ENTRAINMENT_SWITCH) out[EV_ENTRAINMENT_SWITCH] = Number.NaN;
+  if (out.length > EV_NEUTRAL) out[EV_NEUTRAL] = Number.NaN;
 }
 
 const EVENTS: EventSet<IntegralParams> = {
@@ -150,6 +159,15 @@ const EVENTS: EventSet<IntegralParams> = {
 };
 const EVENTS_WITH_CURRENT: EventSet<IntegralParams> = {
   specs: SPECS_WITH_CURRENT,
+  values: eventValues,
+  rates: eventRates,
+};
+/** A rising discharge in stratified water also locates the trap level (the entrainment switch stays in: with
+ * no current it never changes sign). */
+const SPECS_RISING_STRATIFIED: EventSpec[] = [...SPECS_WITH_CURRENT];
+SPECS_RISING_STRATIFIED[EV_NEUTRAL] = { direction: 0, terminal: false };
+const EVENTS_RISING_STRATIFIED: EventSet<IntegralParams> = {
+  specs: SPECS_RISING_STRATIFIED,
   values: eventValues,
   rates: eventRates,
 };
@@ -207,7 +225,9 @@ export function nearFieldIntegral(jet: JetSource, column: AmbientColumn, options
   atol[IB] = absTol * bScale;
   atol[IC] = absTol * cScale;
 
-  const events = params.currentSpeed > 0 ? EVENTS_WITH_CURRENT : EVENTS;
+  // A rising discharge in stratified water: locate where its buoyancy changes sign (the trap level).
+  const events =
+    jet.reducedGravity <= 0 && params.stratified ? EVENTS_RISING_STRATIFIED : params.currentSpeed > 0 ? EVENTS_WITH_CURRENT : EVENTS;
 
   // Path recording and passive / trapped detection on every accepted step.
   const path = sharedPath;

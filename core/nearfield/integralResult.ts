@@ -12,6 +12,7 @@ import {
   DILUTION_BIAS_FACTOR,
   EV_IMPACT,
   EV_MAX_RISE,
+  EV_NEUTRAL,
   EV_RETURN,
   EV_SEABED_EDGE,
   EV_SURFACE_CENTRE,
@@ -102,6 +103,9 @@ export function assembleIntegralResult(
       case EV_SURFACE_CENTRE:
         surfaceCentre = true;
         push("surface-contact", t, hitY);
+        break;
+      case EV_NEUTRAL:
+        push("neutral-buoyancy", t, hitY);
         break;
       case EV_MAX_RISE: {
         const edge = hitY[IZ] + verticalHalfExtent(hitY);

@@ -119,3 +119,5 @@ export const EV_MAX_RISE = 5;
 export const EV_TOP = 6;
 /** Shear and forced entrainment equal: the closure switches from one to the other (a kink in the RHS). */
 export const EV_ENTRAINMENT_SWITCH = 7;
+/** Rising discharges in stratified water only: the centreline's local reduced gravity changes sign (the trap level). */
+export const EV_NEUTRAL = 8;

@@ -3,6 +3,7 @@
  * Frame: origin at the port centre, x east, y north, z up. Azimuths clockwise from north.
  */
 import type { ResultWarning } from "../warnings";
+import type { RisingField } from "../rising/types";
 
 /** Ambient water column as seen by a jet: density, salinity and temperature by depth. */
 export interface AmbientColumn {
@@ -71,7 +72,8 @@ export interface NearFieldEvent {
     | "passive-layer"
     | "step-limit"
     | "length-limit"
-    | "trapped";
+    | "trapped"
+    | "neutral-buoyancy";
   readonly s: number;
   readonly x: number;
   readonly y: number;
@@ -122,6 +124,8 @@ export interface NearFieldMethodResult {
   readonly events?: readonly NearFieldEvent[];
   /** Whether the numbers were interpolated between tabulated angles, etc. */
   readonly notes?: readonly string[];
+  /** Rising discharges only: where the plume spreads (surface or trap level) and its dilution there. */
+  readonly risingField?: RisingField;
 }
 
 /** Receiver of integral-model samples (chart arrays, 3D buffers, CSV) without core knowing which. */

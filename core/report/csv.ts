@@ -51,6 +51,8 @@ const KIND_UNITS: Record<keyof typeof QUANTITY_KINDS, string> = {
   density: "kg/m3",
   acceleration: "m/s2",
   ratio: "-",
+  volume: "m3",
+  time: "s",
 };
 
 /** Units of the result columns Brinefield writes under the same key in every CSV. */

@@ -208,6 +208,13 @@ export function sideViewSvg(input: SideViewInput): string {
         parts.push(`<line x1="${n(sx(0))}" y1="${n(y)}" x2="${n(xEnd)}" y2="${n(y)}" stroke="${colour}" stroke-width="1.2" stroke-dasharray="2 3"/>`);
       }
     }
+    const field = method.risingField;
+    if (field && field.kind !== "none") {
+      // A rising plume's field: where it spreads (the surface or the trap level), from where it starts.
+      const y = sy(hp + field.height);
+      parts.push(`<line x1="${n(sx(Math.max(0, field.distance - 2 * field.halfWidth)))}" y1="${n(y)}" x2="${n(sx(Math.min(xMax, field.distance + 0.25 * xMax)))}" y2="${n(y)}" stroke="${colour}" stroke-width="4" stroke-opacity="0.45"/>`);
+      parts.push(`<text x="${n(sx(Math.min(xMax * 0.97, field.distance + 0.02 * xMax)))}" y="${n(y + 12)}" font-size="9" fill="${colour}" ${FONT}>${escapeHtml(`${method.method}: ${field.kind === "trapped" ? "trapped field (trap level)" : "surface field"}, S = ${reportNumber(field.dilution)}`)}</text>`);
+    }
     const label = path
       ? `${method.method}: computed centreline; bar = upper edge at maximum rise`
       : method.maxRiseDistance !== null

@@ -18,6 +18,7 @@ import { uncertaintyHtml } from "./uncertainty";
 import { validationAppendixHtml } from "./validation";
 import { claimHtml } from "./claim";
 import { intakeHtml, recordHtml } from "./record";
+import { basinHtml } from "./basin";
 import type { ClaimCheck } from "../compliance/claim";
 
 export interface ReportInput {
@@ -219,6 +220,23 @@ function methodDetail(result: BrinefieldResult, m: NearFieldMethodResult, i: num
 
 /** Regimes the sketch draws (a single port has no neighbours to draw). */
 const REGIME_SKETCHED = new Set(["independent", "partially-merged", "merged-line-source"]);
+/** For a discharge lighter than the sea: what rises, where it spreads and how the blend behaves. */
+function risingNoteHtml(result: BrinefieldResult): RawHtml {
+  const parts: RawHtml[] = [];
+  if (!(result.densities.reducedGravity > 0)) {
+    const fields = result.nearField
+      .filter((m) => m.risingField && m.risingField.kind !== "none")
+      .map((m) => {
+        const f = m.risingField!;
+        return `${m.method}: ${f.kind === "trapped" ? `trapped ${reportNumber(f.trapHeight ?? f.height)} m above the port` : "reaches the surface"}, dilution ${reportNumber(f.dilution)} where the field starts ${reportNumber(f.distance)} m from the port`;
+      });
+    parts.push(
+      html`<p id="rising-plume"><strong>Rising plume.</strong> The discharge is lighter than the receiving water at the port (g′ = ${reportNumber(result.densities.reducedGravity)} m/s²): it rises as a buoyant plume instead of falling to the seabed. ${fields.join("; ")}. Beyond the plume the field at the surface or trap level is carried by passive diffusion; the maximum rise is the highest point of the plume's upper edge.</p>`,
+    );
+  }
+  if (result.blend) parts.push(html`<p id="blend-sign"><strong>Blend.</strong> ${result.blend.note}</p>`);
+  return join(parts);
+}
 
 function multiportHtml(result: BrinefieldResult): RawHtml {
   const mp = result.multiport;
@@ -390,9 +408,14 @@ export function reportBody(result: BrinefieldResult, input: ReportInput, options
     section(id("job"), "The job and the question asked", jobHtml(result, scenario)),
     section(id("inputs"), "Inputs", scenario ? inputsHtml(input.scenarioFile, scenario) : rawInputsHtml(input.scenarioFile)),
     section(id("derived"), "Derived quantities", derivedHtml(result)),
-    section(id("near-field"), "Near field: dense jet from the mean port", nearFieldHtml(result, side)),
+    section(
+      id("near-field"),
+      result.densities.reducedGravity > 0 ? "Near field: dense jet from the mean port" : "Near field: rising plume from the mean port",
+      join([risingNoteHtml(result), nearFieldHtml(result, side)]),
+    ),
     section(id("multiport"), "Multiport regime", multiportHtml(result)),
     section(id("mixing-zone"), "Mixing-zone edge", mixingZoneHtml(result, chart)),
+    ...(result.basin ? [section(id("basin"), "Background build-up in the enclosed basin", basinHtml(result.basin))] : []),
     section(id("compliance"), "Compliance: verdict and margin", complianceHtml(result)),
     ...(result.record ? [section(id("record"), "Ambient record: compliance over time", recordHtml(result))] : []),
     ...(result.intake ? [section(id("intake"), "The plant's intake", intakeHtml(result))] : []),

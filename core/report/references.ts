@@ -91,6 +91,10 @@ export const REFERENCES: readonly Reference[] = [
   ref("SWRCB 2015", "SWRCB", "2015", "State Water Resources Control Board, California (2015). Amendment to the Water Quality Control Plan for Ocean Waters of California addressing desalination facility intakes, brine discharges (Ocean Plan chapter III.M), adopted 6 May 2015.", true, [/Ocean Plan/i]),
   ref("Jenkins et al. 2012", "Jenkins", "2012", "Jenkins, S., Paduan, J., Roberts, P., Schlenk, D., Weis, J. (2012). Management of brine discharges to coastal waters: recommendations of a science advisory panel. Southern California Coastal Water Research Project, Technical Report 694.", true, [/SCCWRP/]),
   ref("Sánchez-Lizaso et al. 2008", "Sánchez-Lizaso", "2008", "Sánchez-Lizaso, J.L., Romero, J., Ruiz, J., Gacia, E., Buceta, J.L., Invers, O., Fernández Torquemada, Y., Mas, J., Ruiz-Mateo, A., Manzanera, M. (2008). Salinity tolerance of the Mediterranean seagrass Posidonia oceanica: recommendations to minimize the impact of brine discharges from desalination plants. Desalination 221, 602–607.", false),
+  // Rising plumes and background build-up
+  ref("Morton, Taylor & Turner 1956", "Morton", "1956", "Morton, B.R., Taylor, G.I., Turner, J.S. (1956). Turbulent gravitational convection from maintained and instantaneous sources. Proceedings of the Royal Society of London A 234, 1–23.", true),
+  ref("Wright 1984", "Wright", "1984", "Wright, S.J. (1984). Buoyant jets in density-stratified crossflow. Journal of Hydraulic Engineering 110.", false),
+  ref("Officer 1976", "Officer", "1976", "Officer, C.B. (1976). Physical Oceanography of Estuaries (and Associated Coastal Waters). Wiley, New York.", false),
 ];
 
 /**

@@ -66,6 +66,31 @@ export interface ConstituentAtEdge {
   readonly increase: number;
   readonly background: number;
   readonly discharge: number;
+  /**
+   * Natural background, present only with `ambient.basin`: `background` is then the raised background the
+   * box model gives and `increase` is measured from this natural background (the limit's basis).
+   */
+  readonly naturalBackground?: number;
+}
+
+/** Background build-up in an enclosed basin (`ambient.basin`), from a well-mixed box model. */
+export interface BasinResult {
+  /** Steady increase of the salinity background, g/kg (salt load over the exchange flow). */
+  readonly backgroundIncrease: number;
+  /** Time to reach 95 % of the steady increase, s. */
+  readonly timeTo95Percent: number;
+  /** Exchange flow with the open sea, m³/s. */
+  readonly exchangeFlow: number;
+  readonly method: string;
+  readonly volume: number; // m³
+  readonly flushingTime: number; // s
+  readonly naturalBackground: number; // g/kg, salinity
+  readonly raisedBackground: number; // g/kg, salinity
+  /** The same balance for every constituent with a limit basis (salinity, temperature, listed ones). */
+  readonly constituents: readonly { readonly constituent: string; readonly unit: string; readonly naturalBackground: number; readonly increase: number; readonly raisedBackground: number }[];
+  readonly source: string;
+  /** What the box model leaves out. */
+  readonly limits: string;
 }
 
 export interface SeriesResult {
@@ -156,6 +181,9 @@ export interface OverallResult {
   readonly edgeDilution: number;
 }
 
+export type { BlendResult } from "../rising/blend";
+import type { BlendResult } from "../rising/blend";
+
 export interface BrinefieldResult {
   readonly format: typeof RESULT_FORMAT;
   readonly version: typeof RESULT_VERSION;
@@ -186,6 +214,10 @@ export interface BrinefieldResult {
   readonly record?: RecordResult;
   /** With `intake`: brine at the plant's intake (core/intake). */
   readonly intake?: IntakeResult;
+  /** Present only with `ambient.basin`: the background build-up used in the compliance. */
+  readonly basin?: BasinResult;
+  /** Present only for a plant with blending streams: the blend's buoyancy and the blend ratio where it changes sign. */
+  readonly blend?: BlendResult;
   readonly warnings: readonly ResultWarning[];
   readonly methods: readonly { readonly stage: string; readonly name: string; readonly source: string }[];
 }

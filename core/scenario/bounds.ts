@@ -50,6 +50,8 @@ export const FIELD_BOUNDS = Object.freeze({
   "diffuser.diffuserAzimuth": q("angle", "diffuser axis azimuth", 0, 360),
   "diffuser.length": q("length", "diffuser length", 0, 10000),
   "mixingZone.radius": q("length", "mixing-zone radius", 0, 20000, true),
+  // Total blending flow ÷ brine flow; 100 parts of blending water per part of brine is far beyond practice.
+  "plant.blendRatio": q("ratio", "blend ratio (total blending flow ÷ brine flow)", 0, 100),
 } satisfies Record<string, FieldBounds>);
 
 export type BoundedPath = keyof typeof FIELD_BOUNDS;

@@ -26,6 +26,8 @@ const EXAMPLES: Record<QuantityKind, string> = {
   density: `e.g. 1025`,
   acceleration: `e.g. 0.3`,
   ratio: `e.g. 0.45 or "45 %"`,
+  volume: `e.g. 2e8 or "0.2 km^3"`,
+  time: `e.g. 864000 or "10 days"`,
 };
 
 /** "a" or "an" before a word, for readable messages. */

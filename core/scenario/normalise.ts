@@ -8,6 +8,7 @@ import type {
   AmbientCase,
   AmbientCaseField,
   AmbientInput,
+  BasinInput,
   ConstituentInput,
   DiffuserInput,
   LimitInput,
@@ -16,7 +17,7 @@ import type {
   UncertainInput,
 } from "./types";
 import type { SalinityValue, ScenarioFileParsed } from "./schema";
-import { brineFromPlant } from "./plant";
+import { blendingAtRatio, brineFlowFromPlant, brineFromPlant } from "./plant";
 import { absoluteSalinityFromPractical, salinityFromTds } from "../properties";
 import { formatNumber } from "../units";
 import { issue, type ScenarioIssue } from "./issue";
@@ -212,6 +213,12 @@ function limitValueInUnit(
   return undefined;
 }
 
+function basinFrom(b: { volume: number; flushingTime?: number; exchangeFlow?: number }, ctx: Ctx): BasinInput {
+  if ((b.flushingTime === undefined) === (b.exchangeFlow === undefined))
+    ctx.issues.push(issue("ambient.basin", "(basin)", "must give exactly one of flushingTime (s, e.g. \"10 days\") or exchangeFlow (m³/s) beside the volume"));
+  return b.flushingTime !== undefined ? { volume: b.volume, flushingTime: b.flushingTime } : { volume: b.volume, exchangeFlow: b.exchangeFlow };
+}
+
 function num(v: number | undefined, fallback: number): number {
   return v === undefined ? fallback : v;
 }
@@ -235,12 +242,19 @@ export function normaliseScenario(f: ScenarioFileParsed): { scenario: Scenario |
         ctx.issues.push(issue("discharge.temperature", undefined, "expected the brine temperature (°C), or plant.feedTemperature"));
       } else {
         const feedS = resolveSalinity(p.feedSalinity, p.feedTemperature ?? brineT, "plant.feedSalinity", ctx);
-        const blending = (p.blending ?? []).map((b, i) => ({
+        let blending = (p.blending ?? []).map((b, i) => ({
           name: b.name,
           flow: b.flow,
           temperature: b.temperature,
           salinity: resolveSalinity(b.salinity, b.temperature, `plant.blending.${i}.salinity`, ctx),
         }));
+        if (p.blendRatio !== undefined) {
+          if (blending.length === 0) ctx.issues.push(issue("plant.blendRatio", p.blendRatio, "needs at least one stream under plant.blending to scale"));
+          else {
+            blending = blendingAtRatio(blending, brineFlowFromPlant(p.productFlow, p.recovery), p.blendRatio);
+            ctx.conversions.push(`plant.blendRatio: blending streams scaled together to ${formatNumber(p.blendRatio)} × the brine flow`);
+          }
+        }
         const rej = p.saltRejection ?? DEFAULT_SALT_REJECTION;
         const bal = brineFromPlant({ productFlow: p.productFlow, recovery: p.recovery, feedSalinity: feedS, saltRejection: rej, brineTemperature: brineT, blending });
         flow = bal.dischargeFlow;
@@ -250,7 +264,14 @@ export function normaliseScenario(f: ScenarioFileParsed): { scenario: Scenario |
           `plant: product ${formatNumber(p.productFlow)} m³/s at recovery ${formatNumber(p.recovery)} and salt rejection ${formatNumber(rej)}${p.saltRejection === undefined ? " (default)" : ""} → brine ${formatNumber(bal.brineFlow)} m³/s at ${formatNumber(bal.brineSalinity)} g/kg (${formatNumber(bal.concentrationFactor, 3)}× the feed)` +
             (blending.length ? `; after blending ${blending.length} stream(s): ${formatNumber(flow)} m³/s at ${formatNumber(salinity)} g/kg, ${formatNumber(temperature)} °C` : ""),
         );
-        plantOut = { productFlow: p.productFlow, recovery: p.recovery, feedSalinity: feedS, saltRejection: rej, feedTemperature: p.feedTemperature, blending };
+        plantOut = {
+          productFlow: p.productFlow,
+          recovery: p.recovery,
+          feedSalinity: feedS,
+          saltRejection: rej,
+          feedTemperature: p.feedTemperature,
+          blending,
+        };
       }
     }
   } else {
@@ -290,6 +311,7 @@ export function normaliseScenario(f: ScenarioFileParsed): { scenario: Scenario |
     currentDirection: num(a.currentDirection, 0),
     bedSlope: num(a.bedSlope, 0),
     bedSlopeAzimuth: num(a.bedSlopeAzimuth, 0),
+    ...(a.basin ? { basin: basinFrom(a.basin, ctx) } : {}),
   };
   if (ambient && a.record) {
     // One note for the whole column: the conversions themselves follow resolveSalinity.

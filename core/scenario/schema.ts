@@ -71,6 +71,7 @@ const plant = z.strictObject({
   saltRejection: fraction(0, 1, "salt rejection").optional(),
   feedTemperature: temperature("feed temperature").optional(),
   blending: z.array(blendStream).max(20, { error: () => "must list at most 20 blending streams" }).optional(),
+  blendRatio: quantity(FIELD_BOUNDS["plant.blendRatio"].kind, FIELD_BOUNDS["plant.blendRatio"], FIELD_BOUNDS["plant.blendRatio"].what).optional(),
 });
 
 const constituent = z.strictObject({
@@ -102,8 +103,22 @@ const ambientFields = {
   bedSlopeAzimuth: bounded("ambient.bedSlopeAzimuth").optional(),
 };
 
+/**
+ * Enclosed water: the basin volume with its flushing time or its exchange flow (one of the two).
+ * Bounds: from a small harbour (1,000 m³) to a large lagoon (1e12 m³); a flushing time from an hour to
+ * ten years; an exchange flow up to 1e6 m³/s (plausibility bounds, no source).
+ */
+const basin = z
+  .strictObject({
+    volume: quantity("volume", { min: 1e3, max: 1e12 }, "basin volume"),
+    flushingTime: quantity("time", { min: 3600, max: 3.2e8 }, "flushing time").optional(),
+    exchangeFlow: quantity("flow", { min: 0, max: 1e6, exclusiveMin: true }, "exchange flow").optional(),
+  })
+  .meta({ description: "Enclosed water: {volume, flushingTime} or {volume, exchangeFlow}; a well-mixed box model raises the background" });
+
 const ambient = z.strictObject({
   ...ambientFields,
+  basin: basin.optional(),
   record: recordSchema({
     currentSpeed: bounded("ambient.currentSpeed"),
     currentDirection: bounded("ambient.currentDirection"),

@@ -4,6 +4,9 @@
  * Frames: x east, y north, z up. Azimuths are degrees clockwise from north.
  */
 
+import type { BasinInput } from "../basin/box-model";
+export type { BasinInput } from "../basin/box-model";
+
 export interface ProfilePoint {
   /** Depth below the water surface, m (0 = surface). */
   readonly depth: number;
@@ -70,6 +73,8 @@ export interface AmbientInput {
   readonly bedSlope: number;
   /** Azimuth the bed slopes down toward, degrees clockwise from north. */
   readonly bedSlopeAzimuth: number;
+  /** Enclosed water whose background builds up (well-mixed box model, core/basin); absent for open water. */
+  readonly basin?: BasinInput;
   /** A record of ambient states over time (core/record): its steps replace the ambient cases. */
   readonly record?: AmbientRecord;
 }

@@ -18,6 +18,7 @@ import { issue } from "../scenario/issue";
 import { scenarioRuleIssues } from "../scenario/rules";
 import { ScenarioError } from "../scenario/parse";
 import { scenarioFileSchema } from "../scenario/schema";
+import { blendRatioOfPlant, scenarioWithBlendRatio } from "../scenario/plant";
 
 export interface OverridePathInfo {
   readonly kind: QuantityKind;
@@ -89,6 +90,10 @@ export function readPath(s: Scenario, path: string): number {
     return bottom(s.ambient.profile, field);
   }
   if (group === "diffuser" && field === "portDiameter") return s.diffuser.portDiameterNominal;
+  if (group === "plant") {
+    if (!s.plant || s.plant.blending.length === 0) throw new OverrideError(path, "needs a plant with at least one blending stream");
+    return blendRatioOfPlant(s.plant);
+  }
   const obj = (s as unknown as Record<string, Record<string, unknown>>)[group];
   const v = obj?.[field];
   if (typeof v !== "number") throw new OverrideError(path, "has no numeric value in this scenario");
@@ -112,9 +117,11 @@ export function withOverrides(s: Scenario, overrides: Overrides): Scenario {
   const dischargePatch: Record<string, number> = {};
   const diffuserPatch: Record<string, number> = {};
   let radius: number | undefined;
+  let blendRatio: number | undefined;
   for (const [path, value] of entries) {
     const [group, field] = path.split(".") as [string, string];
-    if (group === "ambient") ambientPatch[field] = value;
+    if (group === "plant") blendRatio = value;
+    else if (group === "ambient") ambientPatch[field] = value;
     else if (group === "discharge") dischargePatch[field] = value;
     else if (group === "diffuser") diffuserPatch[field] = value;
     else radius = value;
@@ -137,6 +144,10 @@ export function withOverrides(s: Scenario, overrides: Overrides): Scenario {
     out = { ...out, diffuser: patchDiffuser(out.diffuser, diffuserPatch) };
   }
   if (radius !== undefined) out = { ...out, mixingZone: { ...out.mixingZone, radius } };
+  if (blendRatio !== undefined) {
+    if (!out.plant || out.plant.blending.length === 0) throw new OverrideError("plant.blendRatio", "needs a plant with at least one blending stream");
+    out = scenarioWithBlendRatio(out, blendRatio);
+  }
   const broken = scenarioRuleIssues(out);
   if (broken.length > 0) throw new ScenarioError(broken);
   return deepFreeze(out);

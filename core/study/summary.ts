@@ -31,6 +31,8 @@ export interface CaseSummary {
   readonly scopeReasons: readonly string[];
   readonly governingConstituent: string;
   readonly equationOfState: string;
+  /** "sinks" (denser than the sea at the port) or "rises" (a rising plume). */
+  readonly buoyancy: "sinks" | "rises";
   readonly warningCount: number;
   readonly seriousWarningCount: number;
   readonly exitVelocity: number;
@@ -76,6 +78,7 @@ export function summariseResult(result: Omit<BrinefieldResult, "cases" | "overal
     scopeReasons: result.compliance.scopeReasons,
     governingConstituent: result.compliance.governingConstituent,
     equationOfState: result.densities.equationOfState.name,
+    buoyancy: result.densities.reducedGravity > 0 ? "sinks" : "rises",
     warningCount: result.warnings.length,
     seriousWarningCount: result.warnings.filter((w) => w.severity === "serious").length,
     exitVelocity: result.port.velocity,

@@ -109,6 +109,8 @@ export interface SweepRow {
   readonly scopeReasons: readonly string[];
   /** Equations of state used, one per ambient case, distinct names joined by " / ". */
   readonly equationOfState: string;
+  /** "sinks" or "rises" (distinct values over the ambient cases joined by " / "); "" when refused. */
+  readonly buoyancy: string;
   readonly error?: string;
 }
 
@@ -127,6 +129,7 @@ export function sweepRows(grid: readonly SweepGridPoint[], points: readonly Poin
         verdict: "refused",
         scopeReasons: [],
         equationOfState: "",
+        buoyancy: "",
         error: p.error ?? "not run",
       };
     }
@@ -143,6 +146,7 @@ export function sweepRows(grid: readonly SweepGridPoint[], points: readonly Poin
       verdict: p.verdict,
       scopeReasons: w.summary.scopeReasons,
       equationOfState: eos,
+      buoyancy: [...new Set(p.cases.map((c) => c.summary.buoyancy))].join(" / "),
     };
   });
 }
@@ -152,6 +156,24 @@ export interface EosCrossing {
   readonly between: readonly [Overrides, Overrides];
   readonly from: string;
   readonly to: string;
+}
+
+/** Neighbouring grid points (along either axis) where the discharge changes from sinking to rising or back. */
+export function buoyancyCrossings(axes: readonly SweepAxis[], rows: readonly SweepRow[]): (EosCrossing & { readonly verdicts: readonly [string, string] })[] {
+  const key = (idx: readonly number[]) => idx.join(",");
+  const byIndex = new Map(rows.map((r) => [key(r.index), r]));
+  const out: (EosCrossing & { verdicts: readonly [string, string] })[] = [];
+  for (const r of rows) {
+    axes.forEach((axis, a) => {
+      const next = [...r.index];
+      next[a] = next[a]! + 1;
+      const n = byIndex.get(key(next));
+      if (n && r.buoyancy && n.buoyancy && n.buoyancy !== r.buoyancy) {
+        out.push({ path: axis.path, between: [r.values, n.values], from: r.buoyancy, to: n.buoyancy, verdicts: [r.verdict, n.verdict] });
+      }
+    });
+  }
+  return out;
 }
 
 /** Neighbouring grid points (along either axis) whose equation of state differs. */
@@ -187,13 +209,14 @@ export const SWEEP_RESULT_COLUMNS = [
   "pass",
   "scopeReasons",
   "equationOfState",
+  "discharge",
   "error",
 ] as const;
 
 /**
  * A sweep as flat records for CSV (command line and app alike): the varied paths with SI values, then
- * governing case, edge and required dilution, margin, verdict, pass, scope reasons, equation of state and
- * the refusal message.
+ * governing case, edge and required dilution, margin, verdict, pass, scope reasons, equation of state,
+ * whether the discharge sinks or rises, and the refusal message.
  */
 export function sweepRecords(axes: readonly SweepAxis[], rows: readonly SweepRow[]): { columns: string[]; records: Record<string, unknown>[] } {
   const records = rows.map((r) => ({
@@ -206,6 +229,7 @@ export function sweepRecords(axes: readonly SweepAxis[], rows: readonly SweepRow
     pass: r.pass,
     scopeReasons: r.scopeReasons.join(" "),
     equationOfState: r.equationOfState,
+    discharge: r.buoyancy,
     ...(r.error ? { error: r.error } : {}),
   }));
   return { columns: [...axes.map((a) => a.path), ...SWEEP_RESULT_COLUMNS], records };

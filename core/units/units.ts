@@ -43,6 +43,8 @@ export const QUANTITY_KINDS = {
   density: { si: "kg/m^3", us: "kg/m^3", label: "density" },
   acceleration: { si: "m/s^2", us: "ft/s^2", label: "acceleration" },
   ratio: { si: "", us: "", label: "ratio" },
+  volume: { si: "m^3", us: "ft^3", label: "volume" },
+  time: { si: "s", us: "s", label: "time" },
 } as const;
 
 export type QuantityKind = keyof typeof QUANTITY_KINDS;
@@ -53,6 +55,8 @@ export function unitSymbol(unit: string): string {
   const map: Record<string, string> = {
     "m^3/s": "m³/s",
     "m^2": "m²",
+    "m^3": "m³",
+    "ft^3": "ft³",
     "ft^2": "ft²",
     "kg/m^3": "kg/m³",
     "m/s^2": "m/s²",

@@ -183,6 +183,27 @@ export function ResultsPanel({ result, unitSystem: s }: { result: BrinefieldResu
       ) : null}
 
       <div className="facts">
+        {result.nearField.map((m) =>
+          m.risingField && m.risingField.kind !== "none" ? (
+            <div key={`rising-${m.method}`} data-role="rising-field">
+              <span>Rising plume ({m.method})</span>
+              <b>{m.risingField.kind === "trapped" ? "trapped below the surface" : "reaches the surface"}</b>
+              <em>
+                field at <Q value={m.risingField.height} kind="length" system={s} /> above the port, dilution {formatNumber(m.risingField.dilution, 3)}
+              </em>
+            </div>
+          ) : null,
+        )}
+        {result.blend ? (
+          <div data-role="blend"><span>Blend</span><b>{result.blend.buoyancy === "rises" ? "rises" : "sinks"}</b><em>{result.blend.note}</em></div>
+        ) : null}
+        {result.basin ? (
+          <div data-role="basin">
+            <span>Basin build-up (box model)</span>
+            <b>+{formatNumber(result.basin.backgroundIncrease, 3)} g/kg</b>
+            <em>95 % within {formatNumber(result.basin.timeTo95Percent / 86400, 3)} days; {result.basin.limits}</em>
+          </div>
+        ) : null}
         <div><span>Multiport regime</span><b data-role="regime">{result.multiport.regime.replace(/-/g, " ")}</b><em>{result.multiport.reason}</em></div>
         <div><span>Ports used</span><b>{result.multiport.portsUsed}</b>{result.multiport.spacingRatio !== null ? <em>s/(dF) = {formatNumber(result.multiport.spacingRatio, 3)}</em> : null}</div>
         <div><span>Port exit velocity</span><b><Q value={result.port.velocity} kind="speed" system={s} /></b></div>

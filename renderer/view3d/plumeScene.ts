@@ -151,6 +151,8 @@ function integralPath(result: BrinefieldResult): readonly PathPoint[] {
 /** Where the centreline meets the seabed: the core's impact event, else the lowest point of the path. */
 function impactPoint(result: BrinefieldResult, path: readonly PathPoint[]): PathPoint | null {
   const integral = result.nearField.find((m) => m.method === "integral");
+  // A rising plume never meets the seabed.
+  if (integral?.risingField) return null;
   const event = integral?.events?.find((e) => e.kind === "seabed-contact" || e.kind === "centreline-impact");
   if (event && path.length > 0) {
     let best = path[0];
@@ -341,6 +343,37 @@ export function buildPlumeScene(input: PlumeSceneInput): PlumeSceneOutput {
     );
     sheet.name = "spreading-layer";
     group.add(sheet);
+  }
+
+  // A rising plume's field: a sheet at the surface or at the trap level, coloured by dilution, from where the
+  // field starts out to the mixing-zone edge (the method carried to the edge; the integral one otherwise).
+  const risingMethod =
+    result.nearField.find((m) => m.method === result.mixingZone.nearFieldMethod && m.risingField) ??
+    result.nearField.find((m) => m.method === "integral" && m.risingField);
+  const rf = risingMethod?.risingField;
+  if (rf && rf.kind !== "none") {
+    const level = Math.max(0, depth - scenario.diffuser.portHeight - rf.height) + lift * 2;
+    const pts = series.distance
+      .map((d, i) => ({ d, s: series.dilution[i]! }))
+      .filter((p) => p.d >= rf.distance - 1e-9 && p.d <= mzRadius * 1.0001 && p.d > 0);
+    if (pts.length >= 2) {
+      const sheet = new Mesh(
+        track(
+          annulusGeometry({
+            distances: pts.map((p) => p.d),
+            heights: pts.map(() => 0),
+            colours: pts.map((p) => colourOf(p.s)),
+            bed: { depth: level, slope: 0, slopeAzimuth: 0 },
+            diffuserLength: ports.length > 1 ? diffuser.length : 0,
+            diffuserAzimuth: diffuser.diffuserAzimuth,
+          }),
+        ),
+        track(new MeshLambertMaterial({ vertexColors: true, transparent: true, opacity: 0.32, side: DoubleSide, depthWrite: false })),
+      );
+      sheet.name = rf.kind === "trapped" ? "trapped-field" : "surface-field";
+      group.add(sheet);
+      notes.push(rf.kind === "trapped" ? "The rising plume is trapped below the surface; the sheet shows its field at the trap level." : "The rising plume reaches the surface; the sheet shows its surface field.");
+    }
   }
 
   // Mixing-zone boundary and the distance where the governing limit is still exceeded.

@@ -1,13 +1,12 @@
 /**
  * The whole pipeline on the demo scenarios and on edge cases: contract shape, physical ordering and
- * the scope refusal for a brine lighter than the sea.
+ * a blend lighter than the sea computed as a rising plume.
  */
 import { describe, it, expect } from "vitest";
 import { readFileSync, readdirSync } from "node:fs";
 import { join } from "node:path";
 import { parseScenario } from "../../core/scenario/parse";
 import { runScenario } from "../../core/pipeline";
-import { ScenarioError } from "../../core/scenario/parse";
 
 const demoDir = join(__dirname, "../../demo-scenarios");
 const demos = readdirSync(demoDir).filter((f) => f.endsWith(".json"));
@@ -26,10 +25,11 @@ describe("runScenario()", () => {
     expect(r.caution.startsWith("Caution"), "caution begins with the word Caution").toBe(true);
     expect(JSON.parse(JSON.stringify(r)), "round-trips through JSON").toEqual(JSON.parse(JSON.stringify(r)));
     expect(r.nearField.map((m) => m.method), "both methods side by side").toEqual(["length-scale", "integral"]);
-    expect(r.densities.discharge > r.densities.ambient, "brine denser than the sea").toBe(true);
+    const rising = r.densities.discharge <= r.densities.ambient;
+    for (const m of r.nearField) expect(m.risingField !== undefined, `${m.method}: read as a rising plume exactly when lighter than the sea`).toBe(rising);
     const gp = (9.80665 * (r.densities.discharge - r.densities.ambient)) / r.densities.ambient;
     expect(Math.abs(r.densities.reducedGravity - gp) < 1e-9, "g′ = g(ρ0 − ρa)/ρa").toBe(true);
-    const froude = r.port.velocity / Math.sqrt(r.densities.reducedGravity * r.port.diameter);
+    const froude = r.port.velocity / Math.sqrt(Math.abs(r.densities.reducedGravity) * r.port.diameter);
     expect(Math.abs(r.port.froude - froude) < 1e-9 * froude, "F = U/√(g′d)").toBe(true);
     expect(Math.abs(r.port.flow * r.port.count - r.discharge.flow) < 1e-12, "port flows add up").toBe(true);
     for (const m of r.nearField) {
@@ -53,19 +53,15 @@ describe("runScenario()", () => {
     expect(r.compliance.margin, "margin = edge ÷ required").toBeCloseTo(edge / r.compliance.requiredDilution, 9);
   });
 
-  it("refuses a blend lighter than the sea at the port with a message that says why", () => {
+  it("computes a blend lighter than the sea at the port as a rising plume, by both methods", () => {
     const raw = load("sandy-shelf.json");
-    raw.discharge.salinity = 30; // fresher than the 35.6 g/kg sea: it would rise
-    let err: unknown;
-    try {
-      runScenario(scenarioOf(raw));
-    } catch (e) {
-      err = e;
-    }
-    expect(err instanceof ScenarioError, "a ScenarioError, not a crash").toBe(true);
-    expect((err as ScenarioError).issues[0]!.message, "names the scope").toMatch(
-      /^discharge\.salinity: .* no denser than the sea at the port .* rise as a buoyant plume, which is outside this version's dense-jet scope/,
-    );
+    raw.discharge.salinity = 30; // fresher than the 35.6 g/kg sea: it rises
+    const r = runScenario(scenarioOf(raw));
+    expect(r.densities.reducedGravity, "lighter than the sea").toBeLessThan(0);
+    expect(r.nearField.map((m) => m.method)).toEqual(["length-scale", "integral"]);
+    for (const m of r.nearField) expect(m.risingField?.kind, `${m.method} ends at the surface or a trap level`).toMatch(/^(surface|trapped)$/);
+    expect(["meets", "exceeds", "outside-scope"]).toContain(r.overall.verdict);
+    expect(Number.isFinite(r.mixingZone.dilution) && r.mixingZone.dilution >= 1, "an edge dilution").toBe(true);
   });
 
   it("reports the same numbers with and without the path (Monte Carlo mode)", () => {

@@ -32,10 +32,11 @@ const oddName = fc.oneof(
 );
 
 /**
- * A valid raw scenario: every field within the schema's bounds, brine denser than the sea. It covers
- * single, line and rosette diffusers; the discharge given directly or through a plant section (with
- * and without a blending stream); extra constituents with their own limits; listed ambient cases;
- * both near-field and every beyond-near-field option; and odd names.
+ * A valid raw scenario: every field within the schema's bounds, of either buoyancy — a brine denser than
+ * the sea, or a blend lighter than it (fresher, or warmer) that rises. It covers single, line and rosette
+ * diffusers; the discharge given directly or through a plant section (with and without a blending
+ * stream); extra constituents with their own limits; listed ambient cases; both near-field and every
+ * beyond-near-field option; and odd names.
  */
 export const validScenarioFile = fc
   .record({
@@ -75,14 +76,18 @@ export const validScenarioFile = fc
     ),
     name: oddName,
     constituentNames: fc.uniqueArray(oddName.filter((n) => !/^\s*(salinity|temperature)\s*$/i.test(n)), { minLength: 3, maxLength: 3, selector: (n) => n.trim().toLowerCase() }),
+    rising: fc.boolean(),
+    deficitS: num(0, 30),
+    warmth: num(0, 20),
   })
   .map((v) => {
     const portHeight = Math.min(v.depth * v.portHeightFrac, v.depth - v.diameter - 0.5);
-    const brineS = Math.min(160, v.ambientS + v.excessS);
-    // Warmer brine can be lighter than the sea even when saltier; keep the generator in the dense-jet scope
-    // by requiring a clear salt excess relative to any temperature excess (≈ 0.8 g/kg per 3 °C), with room
-    // for the listed cases, which may make the sea up to 0.1 × excess saltier and 0.3 × excess °C colder.
-    const brineT = Math.min(v.brineT, v.ambientT + v.excessS * 1.5);
+    // Dense: a clear salt excess relative to any temperature excess (≈ 0.8 g/kg per 3 °C), with room for
+    // the listed cases, which may make the sea up to 0.1 × excess saltier and 0.3 × excess °C colder.
+    // Rising: fresher and/or warmer than the sea (a blend with wastewater or cooling water); near-neutral
+    // draws may still sink at the port once pressure acts, and are checked as dense jets then.
+    const brineS = v.rising ? Math.max(0, v.ambientS - v.deficitS) : Math.min(160, v.ambientS + v.excessS);
+    const brineT = v.rising ? Math.min(60, v.ambientT + v.warmth) : Math.min(v.brineT, v.ambientT + v.excessS * 1.5);
     const ambient: Record<string, unknown> = v.stratified
       ? {
           depth: v.depth,

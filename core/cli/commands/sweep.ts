@@ -8,6 +8,7 @@ import { CliError, type CliCommand, type CliIO } from "../command";
 import { readArgs } from "../args";
 import { formatIssues, loadJsonFile } from "../load";
 import { parseScenario } from "../../scenario/parse";
+import { blendSignChange } from "../../rising/blend";
 import type { Scenario } from "../../scenario/types";
 import { describeCases, expandCases, keptValueNotes } from "../../study/cases";
 import { CAUTION } from "../../result/contract";
@@ -16,6 +17,7 @@ import { parseStudy } from "../../study/study-file";
 import {
   axisFromParts,
   eosCrossings,
+  buoyancyCrossings,
   parseSweepAxis,
   sweepGrid,
   sweepRows,
@@ -38,7 +40,8 @@ const HELP = `Usage: brinefield sweep <scenario.json | study.json> --vary path=f
 
 Runs the screening pipeline over a grid of one or two inputs and reports, per point, the dilution at the
 mixing-zone edge, the margin (edge ÷ required dilution), the verdict, the governing ambient case and the
-equation of state used; it says where neighbouring points cross from one equation of state to the other.
+equation of state used; it says where neighbouring points cross from one equation of state to the other
+and where the discharge changes from sinking to rising (with plant.blendRatio, the exact blend ratio).
 Every point is run under every ambient case — the stated conditions ("stated"), each listed case and
 slack water unless options.addSlackWater is false, as \`run\` does — and judged by the verdict over them
 (\`run\`'s "overall"): meets, exceeds or outside-scope; a point whose inputs break a scenario rule is
@@ -128,6 +131,9 @@ async function run(argv: readonly string[], io: CliIO): Promise<number> {
   const { value: points, elapsedSeconds } = done;
   const rows = sweepRows(grid, points);
   const crossings = eosCrossings(axes, rows);
+  const signChanges = buoyancyCrossings(axes, rows);
+  // Where the blend ratio is swept, the blend ratio at which the buoyancy changes sign, located exactly.
+  const blend = axes.some((a) => a.path === "plant.blendRatio") ? blendSignChange(scenario) : null;
   const counts = sweepCounts(rows);
   const casesNote = describeCases(expandCases(scenario), scenario);
   const keptNotes = keptValueNotes(scenario, axes.map((a) => a.path));
@@ -145,6 +151,16 @@ async function run(argv: readonly string[], io: CliIO): Promise<number> {
       (other ? ` (${other} = ${formatNumber(a[other]!)})` : "")
     );
   });
+  const signText = signChanges.map((c) => {
+    const [a, b] = c.between;
+    const other = axes.find((x) => x.path !== c.path)?.path;
+    return (
+      `The discharge changes from ${c.from === "sinks" ? "sinking" : "rising"} to ${c.to === "sinks" ? "sinking" : "rising"} between ` +
+      `${c.path} = ${formatNumber(a[c.path]!)} (${c.verdicts[0]}) and ${formatNumber(b[c.path]!)} (${c.verdicts[1]})` +
+      (other ? ` (${other} = ${formatNumber(a[other]!)})` : "")
+    );
+  });
+  if (blend && blend.signChanges.length > 0) signText.push(`Blend: ${blend.note}`);
   if (values.json) {
     io.stdout(
       jsonText(
@@ -157,9 +173,11 @@ async function run(argv: readonly string[], io: CliIO): Promise<number> {
           axes,
           points: flat,
           equationOfStateCrossings: crossings,
+          buoyancySignChanges: signChanges,
+          ...(blend ? { blendSignChangeRatio: blend.signChangeRatio, blendSignChanges: blend.signChanges } : {}),
           counts,
           noPointMeets: counts.meets === 0,
-          notes: [casesNote, ...keptNotes, ...crossingText],
+          notes: [casesNote, ...keptNotes, ...crossingText, ...signText],
           elapsedSeconds,
         }),
     );
@@ -173,7 +191,7 @@ async function run(argv: readonly string[], io: CliIO): Promise<number> {
     textTable(
       [
         ...axes.map((a) => a.path),
-        ...["governing case", "edge dilution", "required", "margin", "verdict", "equation of state"],
+        ...["governing case", "edge dilution", "required", "margin", "verdict", "discharge", "equation of state"],
       ],
       rows.map((r) => [
         ...axes.map((a) => r.values[a.path]!),
@@ -182,6 +200,7 @@ async function run(argv: readonly string[], io: CliIO): Promise<number> {
         r.requiredDilution,
         r.margin,
         r.verdict,
+        r.buoyancy,
         r.equationOfState,
       ]),
     ),
@@ -200,6 +219,7 @@ async function run(argv: readonly string[], io: CliIO): Promise<number> {
   if (outside.length > 5) out.push(`… and ${outside.length - 5} more points outside the methods' scope.`);
   if (crossingText.length > 0) out.push(...crossingText);
   else out.push("The equation of state is the same at every point.");
+  out.push(...signText);
   io.stdout(withCaution(out.join("\n") + "\n"));
   return 0;
 }

@@ -54,8 +54,12 @@ describe("portFlowsAndHydraulics() — flow split, exit velocity, Froude number,
     expect(portCountFromDiffuser(scenario), "2 × 4").toBe(8);
   });
 
-  it("reports an infinite Froude number rather than NaN for a non-dense discharge (degenerate input)", () => {
-    const h = portFlowsAndHydraulics({ scenario: scenarioFixture(), dischargeDensity: 1020, ambientDensity: 1023.5 });
-    expect(h.port.froude, "no densimetric Froude number").toBe(Infinity);
+  it("gives a lighter discharge its Froude number on |g′| and a neutral one an infinite Froude number, never NaN", () => {
+    const light = portFlowsAndHydraulics({ scenario: scenarioFixture(), dischargeDensity: 1020, ambientDensity: 1023.5 });
+    const dense = portFlowsAndHydraulics({ scenario: scenarioFixture(), dischargeDensity: 1027, ambientDensity: 1023.5 });
+    // Same |Δρ| = 3.5 kg/m³ either way; g′ differs only through the reference density (ambient in both).
+    expect(light.port.froude, "rising: U/√(|g′|·d)").toBeCloseTo(dense.port.froude, 9);
+    const neutral = portFlowsAndHydraulics({ scenario: scenarioFixture(), dischargeDensity: 1023.5, ambientDensity: 1023.5 });
+    expect(neutral.port.froude, "no densimetric Froude number").toBe(Infinity);
   });
 });

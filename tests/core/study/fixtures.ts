@@ -47,6 +47,7 @@ export function identityEvaluator(required: number, read: (s: Scenario) => numbe
       scopeReasons: [],
       governingConstituent: "salinity",
       equationOfState: "test",
+      buoyancy: "sinks",
       warningCount: 0,
       seriousWarningCount: 0,
       exitVelocity: 0,

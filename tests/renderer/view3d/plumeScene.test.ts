@@ -87,3 +87,20 @@ describe("niceStep()", () => {
     expect(niceStep(1, 10), "1 m in ~10 steps").toBe(0.1);
   });
 });
+
+describe("buildPlumeScene() for a rising plume", () => {
+  it("draws the rising jets and a field sheet at the surface, no seabed impact or dense layer", () => {
+    const { scenario, result } = demo("power-station-blend.json");
+    const built = buildPlumeScene({ scenario, result, unitSystem: "si" });
+    const named = (n: string) => built.group.children.filter((c) => c.name === n);
+    expect(named("jet").length, "jet meshes").toBe(scenario.diffuser.portCount);
+    expect(named("impact").length, "no seabed impact").toBe(0);
+    expect(named("spreading-layer").length, "no dense layer").toBe(0);
+    const field = named("surface-field");
+    expect(field.length, "a surface field sheet").toBe(1);
+    const box = new Box3().setFromObject(field[0]!);
+    // The sheet lies at the water surface (scene height 0; the seabed is at minus the depth).
+    expect(Math.abs(box.max.y) < 0.05 * scenario.ambient.depth, `sheet at ${box.max.y}`).toBe(true);
+    expect(Math.abs(box.min.y) < 0.05 * scenario.ambient.depth, `sheet at ${box.min.y}`).toBe(true);
+  });
+});
