@@ -3,15 +3,15 @@
  * list and the autosave slot. Plain Node (fs/promises); no Electron import, so every function here is
  * unit-tested without an Electron binary (tests/electron/fileStore.test.ts).
  *
- * The reader and the atomic writer are the shared ones of nodeio/ (also used by the command line), so
+ * The reader and the atomic writer are the shared ones of core/cli/node/ (also used by the command line), so
  * the app and the command line accept, refuse and write files by the same rules.
  */
 import * as fsp from "node:fs/promises";
 import { basename, dirname, isAbsolute, resolve } from "node:path";
-import { formatByteSize, MAX_INPUT_BYTES, parseJsonText, readInputFile, writeFileAtomic } from "../nodeio";
+import { formatByteSize, MAX_INPUT_BYTES, parseJsonText, readInputFile, writeFileAtomic } from "../core/cli/node";
 
-export { writeFileAtomic, tempPathFor, OutputRefusedError } from "../nodeio";
-export type { AtomicWriteOptions } from "../nodeio";
+export { writeFileAtomic, tempPathFor, OutputRefusedError } from "../core/cli/node";
+export type { AtomicWriteOptions } from "../core/cli/node";
 
 /** Largest scenario file Brinefield opens, saves or autosaves: the one input cap of every reader. */
 export const MAX_SCENARIO_BYTES = MAX_INPUT_BYTES;

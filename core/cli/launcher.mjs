@@ -20,7 +20,7 @@ function newestMtime(dir) {
 }
 
 function sourcesNewerThan(mtime) {
-  const dirs = [join(root, "core"), join(root, "nodeio"), join(root, "renderer/headless")].filter((d) => existsSync(d));
+  const dirs = [join(root, "core")];
   return dirs.some((d) => newestMtime(d) > mtime) || statSync(join(root, "package.json")).mtimeMs > mtime;
 }
 

@@ -11,7 +11,7 @@ import { CliError, type CliIO } from "./command";
 import { ScenarioError } from "../scenario/parse";
 import { BRINEFIELD_VERSION } from "../version";
 import { CAUTION } from "../result/contract";
-import { readInputFileSync, writeFileAtomic, fsErrorReason, OutputRefusedError, type FileIdentity } from "../../nodeio";
+import { readInputFileSync, writeFileAtomic, fsErrorReason, OutputRefusedError, type FileIdentity } from "./node";
 import { terminalSafeChunk } from "./terminal";
 
 /** The process's file system and terminal. Every file read is remembered so no output overwrites it. */

@@ -2,7 +2,7 @@
  * Turning the bytes of a file into a JSON value, the same way for every command and the app: the size
  * cap, UTF-8 only (a byte-order mark is accepted, UTF-16 is refused with "save as UTF-8"), nesting depth
  * capped before parsing, and duplicate object keys refused with their path. Pure functions over bytes
- * and strings; the Node side (stat, open, bounded read) lives in nodeio/ and the app's file drop.
+ * and strings; the Node side (stat, open, bounded read) lives in core/cli/node/ and the app's file drop.
  */
 
 // TextDecoder exists wherever Brinefield runs (Node, browsers, workers); core type-checks against ES2022

@@ -11,7 +11,7 @@ import { spawnSync } from "node:child_process";
 import { existsSync, mkdirSync, readdirSync, statSync } from "node:fs";
 import { dirname, join, resolve } from "node:path";
 import { fileURLToPath } from "node:url";
-import { launchChromium } from "../../renderer/headless/chromium";
+import { launchChromium } from "../../core/cli/node/headless/chromium";
 import { serveDirectory, type StaticServer } from "../renderer/support/staticServer";
 
 const root = resolve(dirname(fileURLToPath(import.meta.url)), "../..");

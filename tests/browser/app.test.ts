@@ -3,7 +3,7 @@
  * dist/renderer with the app's Content-Security-Policy, driven as a user would. Screenshots of the main
  * screens go to test-artifacts/ for review.
  */
-import { launchChromium } from "../../renderer/headless/chromium";
+import { launchChromium } from "../../core/cli/node/headless/chromium";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import type { Browser, Page } from "playwright-core";
 import { spawnSync } from "node:child_process";
@@ -99,7 +99,7 @@ beforeAll(async () => {
   ensureBuilt();
   mkdirSync(artifacts, { recursive: true });
   server = await serveDirectory(dist);
-  browser = await launchChromium(); // Debian's /usr/bin/chromium, software WebGL (renderer/headless)
+  browser = await launchChromium(); // Debian's /usr/bin/chromium, software WebGL (core/cli/node/headless)
   const context = await browser.newContext({ viewport: { width: 1600, height: 950 }, acceptDownloads: true });
   page = await context.newPage();
   page.on("console", (m) => {

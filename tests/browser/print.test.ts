@@ -7,7 +7,7 @@ import type { Browser } from "playwright-core";
 import { join, resolve, dirname } from "node:path";
 import { fileURLToPath } from "node:url";
 import { existsSync } from "node:fs";
-import { launchChromium } from "../../renderer/headless/chromium";
+import { launchChromium } from "../../core/cli/node/headless/chromium";
 import { serveDirectory, type StaticServer } from "../renderer/support/staticServer";
 
 const root = resolve(dirname(fileURLToPath(import.meta.url)), "../..");

@@ -3,7 +3,7 @@
  * with progress, shows the record's verdict, figures over time and the duration curve; Cancel stops a
  * record and leaves no verdict; a record pasted into the inputs is saved in the scenario and run.
  */
-import { launchChromium } from "../../renderer/headless/chromium";
+import { launchChromium } from "../../core/cli/node/headless/chromium";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import type { Browser, Page } from "playwright-core";
 import { spawnSync } from "node:child_process";

@@ -13,8 +13,8 @@ import { fileURLToPath } from "node:url";
 import { parseScenarioText } from "../../core/scenario/parse";
 import { runScenario } from "../../core/pipeline";
 import { reportHtml } from "../../core/report";
-import { pdfFromHtml } from "../../renderer/headless/print-pdf";
-import { capture3dView } from "../../renderer/headless/capture-3d";
+import { pdfFromHtml } from "../../core/cli/node/headless/print-pdf";
+import { capture3dView } from "../../core/cli/node/headless/capture-3d";
 
 const ROOT = fileURLToPath(new URL("../../", import.meta.url));
 const SCENARIO = join(ROOT, "demo-scenarios/island-cove.json");

@@ -5,7 +5,7 @@
  * governing case and chain), open a variant as a scenario. Screenshots at 1440×900 and 1280×720 go to
  * test-artifacts/ for review.
  */
-import { launchChromium } from "../../renderer/headless/chromium";
+import { launchChromium } from "../../core/cli/node/headless/chromium";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import type { Browser, Page } from "playwright-core";
 import { spawnSync } from "node:child_process";

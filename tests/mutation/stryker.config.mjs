@@ -38,7 +38,7 @@ export default {
     "test-artifacts",
     "renderer",
     "electron",
-    "nodeio",
+    "core/cli/node",
     "tests/browser",
     "tests/renderer",
     "tests/electron",

@@ -1,8 +1,9 @@
 /**
  * Layering rules of the project (see DEVELOPERS.md): core/ imports only core/ (and packages);
  * nothing imports renderer/ except renderer/; electron/ imports the contract, the CSP and core types only;
- * nodeio/ (the shared Node-side reader and writer) uses only Node and core's pure text rules, and only the
- * Node-side parts (core/cli, electron, renderer/headless) import it.
+ * core/cli/node/ (the shared Node-side reader, writer and headless-browser helpers) uses only Node,
+ * playwright-core and core's pure text rules, and only the Node-side parts (core/cli, electron) import it.
+ * The same rules are enforced by ESLint (eslint.config.js, `no-restricted-imports` per folder).
  * Checked as a test so CI fails on a violation, not as a wish.
  */
 import { describe, it, expect } from "vitest";
@@ -47,46 +48,44 @@ describe("layering", () => {
     expect(bad, "core must stay pure").toEqual([]);
   });
 
-  it("nothing outside renderer/ imports renderer/ (except the command line's headless printer)", () => {
+  it("nothing outside renderer/ imports renderer/", () => {
     const bad: string[] = [];
-    for (const dir of ["core", "electron", "nodeio"]) {
+    for (const dir of ["core", "electron"]) {
       for (const f of files(join(root, dir))) {
-        for (const i of imports(f)) {
-          if (i.target?.startsWith("renderer/") && !(relative(root, f).startsWith("core/cli/") && i.target.startsWith("renderer/headless"))) {
-            bad.push(`${relative(root, f)} → ${i.spec}`);
-          }
-        }
+        for (const i of imports(f)) if (i.target?.startsWith("renderer/")) bad.push(`${relative(root, f)} → ${i.spec}`);
       }
     }
     expect(bad, "renderer is imported by nobody").toEqual([]);
   });
 
-  it("electron/ imports core only for types", () => {
+  it("electron/ imports core only for types, apart from the shared Node-side file I/O (core/cli/node/)", () => {
     const bad: string[] = [];
     for (const f of files(join(root, "electron"))) {
-      for (const i of imports(f)) if (i.target?.startsWith("core/") && !i.typeOnly) bad.push(`${relative(root, f)} → ${i.spec}`);
+      for (const i of imports(f)) {
+        if (i.target?.startsWith("core/") && !i.typeOnly && !i.target.startsWith("core/cli/node")) bad.push(`${relative(root, f)} → ${i.spec}`);
+      }
     }
     expect(bad, "electron main stays thin").toEqual([]);
   });
 
-  it("nodeio/ imports only Node built-ins and core's pure text rules (core/scenario/jsonText.ts)", () => {
+  it("core/cli/node/ imports only Node built-ins, playwright-core and core's pure text rules (core/scenario/jsonText.ts)", () => {
     const bad: string[] = [];
-    for (const f of files(join(root, "nodeio"))) {
+    for (const f of files(join(root, "core/cli/node"))) {
       for (const i of imports(f)) {
-        if (i.target && !i.target.startsWith("nodeio/") && i.target !== "core/scenario/jsonText") bad.push(`${relative(root, f)} → ${i.spec}`);
-        if (!i.target && !NODE_BUILTINS.test(i.spec)) bad.push(`${relative(root, f)} → ${i.spec}`);
+        if (i.target && !i.target.startsWith("core/cli/node/") && i.target !== "core/scenario/jsonText") bad.push(`${relative(root, f)} → ${i.spec}`);
+        if (!i.target && !NODE_BUILTINS.test(i.spec) && i.spec !== "playwright-core") bad.push(`${relative(root, f)} → ${i.spec}`);
       }
     }
-    expect(bad, "nodeio stays a thin Node layer").toEqual([]);
+    expect(bad, "core/cli/node stays a thin Node layer").toEqual([]);
   });
 
-  it("only the Node-side parts (core/cli, electron, renderer/headless) import nodeio/", () => {
+  it("only the Node-side parts (core/cli, electron) import core/cli/node/", () => {
     const bad: string[] = [];
     for (const dir of ["core", "renderer", "electron"]) {
       for (const f of files(join(root, dir))) {
         const rel = relative(root, f);
-        const nodeSide = rel.startsWith("core/cli/") || rel.startsWith("electron/") || rel.startsWith("renderer/headless/");
-        for (const i of imports(f)) if (i.target?.startsWith("nodeio") && !nodeSide) bad.push(`${rel} → ${i.spec}`);
+        const nodeSide = rel.startsWith("core/cli/") || rel.startsWith("electron/");
+        for (const i of imports(f)) if (i.target?.startsWith("core/cli/node") && !nodeSide) bad.push(`${rel} → ${i.spec}`);
       }
     }
     expect(bad, "the browser side and pure core never reach Node I/O").toEqual([]);

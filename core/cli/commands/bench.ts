@@ -58,7 +58,7 @@ Options:
     let browserNote: string | null = null;
     if (!values.quick) {
       try {
-        const { benchBrowser } = await import("../../../renderer/headless/bench-browser");
+        const { benchBrowser } = await import("../node/headless/bench-browser");
         const b = await benchBrowser();
         browser = { loadToFirstResultMs: b.loadToFirstResultMs, typingToNumbersMs: b.typingToNumbersMs };
       } catch (err) {

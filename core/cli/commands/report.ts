@@ -2,7 +2,7 @@
  * `brinefield report`: the screening report of a scenario or a study as a printable HTML document, with
  * optional PDF (headless Chromium), CSV and JSON exports. The 3D view is captured from the built
  * renderer when possible; when not, the report says why. Browser-driving code lives in
- * renderer/headless/ and is imported only when a PDF or the 3D image is asked for.
+ * core/cli/node/headless/ and is imported only when a PDF or the 3D image is asked for.
  */
 import { jsonText } from "../../result/json";
 import { withCaution } from "../../result/caution";
@@ -71,7 +71,7 @@ function defaultOut(input: string): string {
 
 async function tryCapture3d(text: string, io: CliIO): Promise<{ png?: string; note?: string }> {
   try {
-    const { capture3dView } = await import("../../../renderer/headless/capture-3d");
+    const { capture3dView } = await import("../node/headless/capture-3d");
     return { png: await capture3dView(text) };
   } catch (err) {
     const reason = err instanceof Error ? err.message : String(err);
@@ -220,7 +220,7 @@ export const command: CliCommand = {
     if (values.pdf) {
       let pdf: Uint8Array | undefined;
       try {
-        const { pdfFromHtml } = await import("../../../renderer/headless/print-pdf");
+        const { pdfFromHtml } = await import("../node/headless/print-pdf");
         pdf = await pdfFromHtml(html);
       } catch (err) {
         io.stderr(`brinefield report: the PDF was not written: ${err instanceof Error ? err.message : String(err)}\n`);

@@ -1,10 +1,10 @@
-/** The one reader and the one writer of every Brinefield file (nodeio/): what they refuse and keep. */
+/** The one reader and the one writer of every Brinefield file (core/cli/node/): what they refuse and keep. */
 import { afterEach, beforeEach, describe, expect, it } from "vitest";
 import { spawnSync } from "node:child_process";
 import { chmodSync, lstatSync, mkdtempSync, readFileSync, readdirSync, rmSync, statSync, symlinkSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
-import { readInputFile, readInputFileSync, writeFileAtomic } from "../../nodeio";
+import { readInputFile, readInputFileSync, writeFileAtomic } from "../../../core/cli/node";
 
 let dir: string;
 beforeEach(() => {

@@ -21,10 +21,10 @@ export class Capture3dError extends Error {
   }
 }
 
-/** Repository root (this file is renderer/headless/capture-3d.ts; the CLI bundle passes it explicitly). */
+/** Repository root (this file is core/cli/node/headless/capture-3d.ts; the CLI bundle passes it explicitly). */
 function defaultRoot(): string {
   try {
-    return resolve(dirname(fileURLToPath(import.meta.url)), "../..");
+    return resolve(dirname(fileURLToPath(import.meta.url)), "../../../..");
   } catch {
     return process.cwd();
   }

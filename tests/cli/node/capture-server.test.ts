@@ -5,7 +5,7 @@ import { request } from "node:http";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import type { Server } from "node:http";
-import { serveStatic } from "../../../renderer/headless/capture-3d";
+import { serveStatic } from "../../../core/cli/node/headless/capture-3d";
 
 let dir: string;
 let server: Server;

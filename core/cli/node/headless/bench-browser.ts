@@ -8,14 +8,24 @@
  *    `input` event dispatched, as a keystroke does), timed until the results table shows other numbers,
  *    median of several edits. Timed in the page itself, so the driver's round trips are not counted.
  */
-import { dirname, resolve } from "node:path";
+import { existsSync } from "node:fs";
+import { dirname, join } from "node:path";
 import { fileURLToPath } from "node:url";
 import { rendererBuildIsStale, buildRenderer, serveStatic } from "./capture-3d";
 import { withChromium } from "./chromium";
 
-/** Repository root: this file is renderer/headless/…, the command-line bundle dist/cli/… (both two levels down). */
+/**
+ * Repository root: the nearest folder above this file holding the project's package.json (this file is
+ * core/cli/node/headless/… in the sources and dist/cli/… in the command-line bundle).
+ */
 function defaultRoot(): string {
-  return resolve(dirname(fileURLToPath(import.meta.url)), "../..");
+  let dir = dirname(fileURLToPath(import.meta.url));
+  for (;;) {
+    if (existsSync(join(dir, "package.json")) && existsSync(join(dir, "renderer"))) return dir;
+    const up = dirname(dir);
+    if (up === dir) return process.cwd();
+    dir = up;
+  }
 }
 
 export interface BrowserBench {
