@@ -8,6 +8,7 @@
  * and dilution. The interpolation between published points is engineering judgement.
  */
 import type { NearFieldMethodResult } from "../nearfield/types";
+import { interpolateLinear } from "../interpolate";
 
 export interface JetProfile {
   readonly distance: readonly number[]; // m, plan distance, ascending
@@ -52,15 +53,7 @@ export function jetProfileFromNearField(nf: NearFieldMethodResult): JetProfile {
 
 /** Dilution at plan distance r on a profile (clamped to the profile's end values). */
 export function dilutionFromProfile(profile: JetProfile, r: number): number {
-  const { distance: x, dilution: s } = profile;
-  if (r <= x[0]) return s[0];
-  for (let i = 1; i < x.length; i++) {
-    if (r <= x[i]) {
-      const t = (r - x[i - 1]) / (x[i] - x[i - 1]);
-      return s[i - 1] + t * (s[i] - s[i - 1]);
-    }
-  }
-  return s[s.length - 1];
+  return interpolateLinear(profile.distance, profile.dilution, r);
 }
 
 /** End of the near field used downstream: near-field end, else impact, else return point (m, dilution). */

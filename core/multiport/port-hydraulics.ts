@@ -6,18 +6,19 @@
  * number F_i = U_i/√(g′d) with g′ = g(ρ₀ − ρa)/ρa (the usual definition).
  * Exit head loss, where a discharge coefficient C_d is given: h = (q/(C_d·A))²/(2g) on the nominal port
  * area A — standard orifice hydraulics (e.g. any hydraulics handbook; common practice, no source).
- * Usual exit velocity range about 2–6 m/s (common practice, no source; Jirka 2008 and Bleninger & Jirka
- * 2008, Desalination 221:585–597, give about 3–6 m/s, from memory).
+ * Usual exit velocity range: USUAL_EXIT_VELOCITY in core/constants.ts (one warning for all ports outside it).
  */
 import type { Scenario } from "../scenario/types";
 import type { PortResult } from "../result/contract";
 import { warning, type ResultWarning } from "../warnings";
+import { STANDARD_GRAVITY, USUAL_EXIT_VELOCITY, USUAL_EXIT_VELOCITY_TEXT } from "../constants";
 
-export const GRAVITY = 9.80665; // m/s², standard gravity (3rd CGPM, 1901)
+/** Standard gravity, m/s² (core/constants.ts). */
+export const GRAVITY = STANDARD_GRAVITY;
 /** Kinematic viscosity of seawater near 20 °C, m²/s (handbook value, from memory). */
 export const SEAWATER_KINEMATIC_VISCOSITY = 1.05e-6;
-export const USUAL_EXIT_VELOCITY: readonly [number, number] = [2, 6];
-const EXIT_VELOCITY_SOURCE = "common practice, no source (about 2–6 m/s)";
+export { USUAL_EXIT_VELOCITY };
+const EXIT_VELOCITY_SOURCE = `common practice, no source (about ${USUAL_EXIT_VELOCITY_TEXT})`;
 
 export interface PortHydraulicsInput {
   readonly scenario: Scenario;
@@ -99,15 +100,17 @@ export function portFlowsAndHydraulics(input: PortHydraulicsInput): PortHydrauli
   // One warning for all ports outside the usual range (a long diffuser would otherwise repeat it per port).
   const unusual = ports.filter((p) => p.velocity < USUAL_EXIT_VELOCITY[0] || p.velocity > USUAL_EXIT_VELOCITY[1]);
   if (unusual.length) {
+    const mid = (USUAL_EXIT_VELOCITY[0] + USUAL_EXIT_VELOCITY[1]) / 2;
     const vs = unusual.map((p) => p.velocity);
     const lo = Math.min(...vs);
     const hi = Math.max(...vs);
     const which = unusual.length === n ? (n === 1 ? "The port" : `All ${n} ports`) : `Ports ${unusual.map((p) => p.index + 1).join(", ")}`;
     const speed = lo === hi ? `${lo.toFixed(2)} m/s` : `${lo.toFixed(2)}–${hi.toFixed(2)} m/s`;
     warnings.push(
-      warning("port-velocity-unusual", "warning", `${which}: exit velocity ${speed}, outside the usual 2–6 m/s.`, {
+      warning("port-velocity-unusual", "warning", `${which}: exit velocity ${speed}, outside the usual ${USUAL_EXIT_VELOCITY_TEXT}.`, {
         parameter: unusual.length === 1 ? `port[${unusual[0].index}].velocity` : "port.velocity",
-        value: Math.abs(hi - 4) > Math.abs(lo - 4) ? hi : lo,
+        // the velocity furthest from the middle of the band
+        value: Math.abs(hi - mid) > Math.abs(lo - mid) ? hi : lo,
         range: USUAL_EXIT_VELOCITY,
         source: EXIT_VELOCITY_SOURCE,
         stage: "multiport",

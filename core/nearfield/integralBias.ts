@@ -12,6 +12,7 @@
  */
 import type { AmbientColumn, JetSource, NearFieldMethodResult } from "./types";
 import { LAI_LEE_2012_IMPACT_DILUTION } from "../correlations/lai-lee-2012-inclined-dense-jet";
+import { STANDARD_GRAVITY } from "../constants";
 
 /** Angles of Lai & Lee (2012) at which S_i/F = 1.06 is stated (their 38°–60° runs), degrees. */
 export const INTEGRAL_BIAS_ANGLES: readonly number[] = [38, 45, 52, 60];
@@ -40,7 +41,7 @@ export function laboratoryJet(angle: number, froude = INTEGRAL_BIAS_FROUDE): { j
     diameter: d,
     flow: (velocity * Math.PI * d * d) / 4,
     velocity,
-    density: rhoA * (1 + gp / 9.80665),
+    density: rhoA * (1 + gp / STANDARD_GRAVITY),
     salinity: 30,
     temperature: 20,
     angle,

@@ -5,8 +5,10 @@
 import { ENTRAINMENT_LEE_CHEUNG_1990_SOURCE } from "../correlations/entrainmentLeeCheung1990";
 import { IB, IC, INTEGRAL_DIM, IMX, IMY, IMZ, IQ, type IntegralParams } from "./integralRhs";
 import type { AmbientColumn, JetSource } from "./types";
+import { STANDARD_GRAVITY } from "../constants";
+import { interpolateLinear } from "../interpolate";
 
-const G = 9.80665; // standard gravity, m/s² (CGPM 1901)
+const G = STANDARD_GRAVITY;
 
 /** Gaussian tracer-to-velocity width ratio λ (Fischer et al. 1979: 0.127/0.107 jet, 0.12/0.10 plume; FROM MEMORY). */
 export const TRACER_WIDTH_RATIO = 1.2;
@@ -66,19 +68,7 @@ export function integralParamsFrom(jet: JetSource, column: AmbientColumn): Integ
   };
 }
 
-function interp(d: Float64Array, v: Float64Array, x: number): number {
-  const n = d.length;
-  if (n === 0) return 0;
-  if (x <= d[0]) return v[0];
-  if (x >= d[n - 1]) return v[n - 1];
-  for (let i = 1; i < n; i++) {
-    if (x <= d[i]) {
-      const span = d[i] - d[i - 1];
-      return span > 0 ? v[i - 1] + ((x - d[i - 1]) / span) * (v[i] - v[i - 1]) : v[i];
-    }
-  }
-  return v[n - 1];
-}
+const interp = interpolateLinear;
 
 /**
  * Initial state at the port: top-hat jet of diameter d, speed U along the port axis. `params` (from

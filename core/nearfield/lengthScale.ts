@@ -39,6 +39,8 @@ import {
   crossflowRegimeFromFroude,
 } from "../correlations/lai-lee-2013-crossflow-regime";
 import { weakCurrentValidityIssues } from "../correlations/abessi-roberts-2016-weak-current";
+import { STANDARD_GRAVITY } from "../constants";
+import { interpolateLinear } from "../interpolate";
 
 /** Datasets held; the headline takes, quantity by quantity, the less favourable of those covering the angle. */
 export const LENGTH_SCALE_DATASETS: readonly DenseJetDataset[] = [LAI_LEE_2012_DATASET, ROBERTS_1997_DATASET];
@@ -49,7 +51,6 @@ export const LENGTH_SCALE_ANGLE_RANGE: readonly [number, number] = [
   Math.max(...LENGTH_SCALE_DATASETS.map((d) => d.angleRange[1])),
 ];
 
-const STANDARD_GRAVITY = 9.80665; // m/s², to turn g′ back into a density excess
 
 export interface EvaluatedDataset {
   readonly dataset: DenseJetDataset;
@@ -364,13 +365,7 @@ function currentIssues(jet: JetSource, column: AmbientColumn, notes: string[]): 
 
 /** Ambient density at a depth below the surface, linear between profile points, held at the ends. */
 function densityAtDepth(column: AmbientColumn, depth: number): number {
-  const z = column.depths;
-  const r = column.densities;
-  if (depth <= z[0]) return r[0];
-  for (let i = 1; i < z.length; i++) {
-    if (depth <= z[i]) return r[i - 1] + ((depth - z[i - 1]) / (z[i] - z[i - 1])) * (r[i] - r[i - 1]);
-  }
-  return r[r.length - 1];
+  return interpolateLinear(column.depths, column.densities, depth);
 }
 
 function stratificationIssues(jet: JetSource, column: AmbientColumn): ResultWarning[] {

@@ -13,9 +13,6 @@ export const REYNOLDS_SOURCE =
   "Abdel-Rahman, Al-Fahed & Chakroun (1996), Mech. Res. Commun. 23(3):313–324: near-field centreline decay " +
   "constant 6.11 at Re = 19 400 but 1.35 at Re = 1 430; keep Re ≳ 10⁴";
 
-/** Typical exit velocity band, m/s (common practice, no source). */
-export const EXIT_VELOCITY_RANGE: readonly [number, number] = [2, 6];
-
 /** Visible edge spreading angle of a round jet from its axis, degrees (common practice, no source). */
 export const JET_EDGE_SPREAD_ANGLE = 12;
 /** Port height below which the bed crowds the jet, in port diameters (common practice, no source). */
@@ -123,19 +120,6 @@ export function jetSourceWarnings(jet: JetSource, column: AmbientColumn): Result
     );
   }
 
-  // 4. Exit velocity band.
-  const [vLo, vHi] = EXIT_VELOCITY_RANGE;
-  if (!(jet.velocity >= vLo && jet.velocity <= vHi)) {
-    out.push(
-      warning(
-        "exit-velocity-atypical",
-        "info",
-        `Exit velocity ${jet.velocity.toFixed(2)} m/s is outside the usual ${vLo}–${vHi} m/s ` +
-          `(${jet.velocity < vLo ? "low momentum, poorer dilution" : "high head loss"}; common practice, ` +
-          `no source).`,
-        { parameter: "port.velocity", value: jet.velocity, range: [vLo, vHi], stage },
-      ),
-    );
-  }
+  // The usual exit-velocity band is checked once per port by the port stage (core/multiport/port-hydraulics.ts).
   return out;
 }

@@ -13,9 +13,10 @@ import type { ProfilePoint, Scenario } from "../scenario/types";
 import { warning, type ResultWarning } from "../warnings";
 import { equationOfStateFor, type EquationOfState } from "./equation-of-state";
 import { pressureFromDepth } from "./pressure-from-depth";
+import { STANDARD_GRAVITY } from "../constants";
+import { interpolateLinear } from "../interpolate";
 
-/** Standard acceleration of gravity, m/s² (CGPM 1901 conventional value; common practice, no source). */
-export const STANDARD_GRAVITY = 9.80665;
+export { STANDARD_GRAVITY };
 
 export interface PropertiesStage {
   readonly eos: EquationOfState;
@@ -40,24 +41,12 @@ export function profileAtDepth(
   profile: readonly ProfilePoint[],
   depth: number,
 ): { salinity: number; temperature: number } {
-  const first = profile[0];
-  const last = profile[profile.length - 1];
-  if (depth <= first.depth) return { salinity: first.salinity, temperature: first.temperature };
-  if (depth >= last.depth) return { salinity: last.salinity, temperature: last.temperature };
-  for (let i = 1; i < profile.length; i++) {
-    const b = profile[i];
-    if (depth <= b.depth) {
-      const a = profile[i - 1];
-      const span = b.depth - a.depth;
-      // Two points at the same depth: take the deeper one's values rather than divide by zero.
-      const f = span > 0 ? (depth - a.depth) / span : 1;
-      return {
-        salinity: a.salinity + f * (b.salinity - a.salinity),
-        temperature: a.temperature + f * (b.temperature - a.temperature),
-      };
-    }
-  }
-  return { salinity: last.salinity, temperature: last.temperature };
+  // Two points at the same depth: the deeper one's values are taken rather than dividing by zero.
+  const depths = profile.map((p) => p.depth);
+  return {
+    salinity: interpolateLinear(depths, profile.map((p) => p.salinity), depth),
+    temperature: interpolateLinear(depths, profile.map((p) => p.temperature), depth),
+  };
 }
 
 /**

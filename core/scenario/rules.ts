@@ -8,6 +8,7 @@
 import type { AmbientInput, Scenario } from "./types";
 import { FIELD_BOUNDS, withinBounds, type BoundedPath, type FieldBounds } from "./bounds";
 import { expectationFor } from "./fields";
+import { USUAL_EXIT_VELOCITY_TEXT } from "../constants";
 import { issue, type ScenarioIssue } from "./issue";
 import { formatNumber } from "../units";
 
@@ -125,7 +126,7 @@ export function scenarioRuleIssues(s: Scenario): ScenarioIssue[] {
         issue(
           "diffuser.portDiameter",
           d.portDiameterNominal,
-          `with a total flow of ${formatNumber(flow)} m³/s over ${d.portCount} port${d.portCount === 1 ? "" : "s"} gives a port exit velocity of ${formatNumber(fastest)} m/s; Brinefield screens exit velocities up to ${MAX_EXIT_VELOCITY} m/s (usual designs: about 2–6 m/s) — check the flow, the port count and the diameter`,
+          `with a total flow of ${formatNumber(flow)} m³/s over ${d.portCount} port${d.portCount === 1 ? "" : "s"} gives a port exit velocity of ${formatNumber(fastest)} m/s; Brinefield screens exit velocities up to ${MAX_EXIT_VELOCITY} m/s (usual designs: about ${USUAL_EXIT_VELOCITY_TEXT}) — check the flow, the port count and the diameter`,
           EXIT_VELOCITY_FIELDS,
         ),
       );

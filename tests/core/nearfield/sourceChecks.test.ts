@@ -53,12 +53,8 @@ describe("jetSourceWarnings()", () => {
     expect(codes(makeJet(), 30), "prototype port, Re ≈ 7e5").not.toContain("port-reynolds-low");
   });
 
-  it("notes exit velocities outside 2–6 m/s (common practice, no source)", () => {
-    expect(codes(makeJet({ U: 1.5 }), 30), "1.5 m/s").toContain("exit-velocity-atypical");
-    expect(codes(makeJet({ U: 7 }), 30), "7 m/s").toContain("exit-velocity-atypical");
-    expect(codes(makeJet({ U: 4 }), 30), "4 m/s").not.toContain("exit-velocity-atypical");
-    const all = jetSourceWarnings(makeJet({ U: 7 }), makeColumn(30));
-    const w = all.find((x) => x.code === "exit-velocity-atypical");
-    expect(w!.message, "says the band has no source").toMatch(/common practice, no source/);
+  it("leaves the exit-velocity band to the port stage, so one fact gives one warning", () => {
+    const all = jetSourceWarnings(makeJet({ U: 7 }), makeColumn(30)).map((w) => w.message);
+    expect(all.filter((m) => /exit velocity/i.test(m)), "no exit-velocity warning here").toEqual([]);
   });
 });
