@@ -24,7 +24,10 @@
  * - Line plume (merged multiport): S = 0.27·b^(1/3)·z/q (core/multiport/line-plume.ts).
  */
 
-export const GRAVITY = 9.80665; // m/s², standard gravity (CGPM 1901)
+import { STANDARD_GRAVITY } from "../constants";
+import { interpolateLinear } from "../interpolate";
+
+export const GRAVITY = STANDARD_GRAVITY;
 
 export const ROUND_JET_CONCENTRATION_COEFFICIENT = 5.64;
 export const ROUND_PLUME_BUOYANCY_COEFFICIENT = 11;
@@ -90,21 +93,8 @@ export function bulkBuoyancyFrequencySquared(
 ): number {
   const h = column.depth - portHeight;
   if (!(h > 0)) return 0;
-  const rhoPort = interpolate(column.depths, column.densities, h);
-  const rhoTop = interpolate(column.depths, column.densities, 0);
+  const rhoPort = interpolateLinear(column.depths, column.densities, h);
+  const rhoTop = interpolateLinear(column.depths, column.densities, 0);
   return (GRAVITY * (rhoPort - rhoTop)) / (rhoPort * h);
 }
 
-/** Linear interpolation of ys(xs) at x, clamped to the ends (xs ascending). */
-export function interpolate(xs: readonly number[], ys: readonly number[], x: number): number {
-  const n = xs.length;
-  if (n === 0) return Number.NaN;
-  if (x <= xs[0]!) return ys[0]!;
-  for (let i = 1; i < n; i++) {
-    if (x <= xs[i]!) {
-      const span = xs[i]! - xs[i - 1]!;
-      return span > 0 ? ys[i - 1]! + ((x - xs[i - 1]!) / span) * (ys[i]! - ys[i - 1]!) : ys[i]!;
-    }
-  }
-  return ys[n - 1]!;
-}

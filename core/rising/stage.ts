@@ -30,7 +30,7 @@ import {
 import { STAGNANT_CURRENT, notModelledFor, type BeyondOutput } from "../farfield/stage";
 import { portCountFromDiffuser } from "../multiport/port-hydraulics";
 import { risingMultiport, RISING_MERGING_SOURCE, type RisingMethod } from "./merging";
-import { interpolate } from "./plume-laws";
+import { interpolateLinear as interpolate } from "../interpolate";
 
 export interface RisingBeyondInput {
   readonly scenario: Scenario;
