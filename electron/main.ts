@@ -76,7 +76,7 @@ const closeGuard = createCloseGuard({
   },
   requestSave: () => sendMenu("save"),
   closeWindow: () => setTimeout(() => mainWindow?.close(), 0),
-  onDiscard: () => autosave.clear().catch(() => undefined),
+  onDiscard: () => autosave.clear().catch((error: unknown) => console.error("Brinefield: clearing the autosave failed:", error)),
 });
 
 function refreshMenu(recentPaths: readonly string[]): void {

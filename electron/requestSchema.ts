@@ -17,7 +17,7 @@ export const MAX_TITLE_CHARS = 300;
 
 const noNul = (s: string) => !s.includes("\0");
 // Control characters (C0 and DEL) never belong in a file name or a window title.
-// eslint-disable-next-line no-control-regex
+// eslint-disable-next-line no-control-regex -- the pattern matches control characters on purpose, to remove or refuse them
 const CONTROL_CHARS = /[\u0000-\u001f\u007f]/;
 
 const absolutePath = z

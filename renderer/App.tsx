@@ -64,6 +64,15 @@ function initialUnits(): UnitSystem {
   }
 }
 
+/** Logs a failed host call the user need not act on (the console is the app's log). */
+function logFailure(what: string): (error: unknown) => void {
+  return (error) => console.warn(`Brinefield: ${what} failed:`, error);
+}
+
+function errorText(error: unknown): string {
+  return error instanceof Error ? error.message : String(error);
+}
+
 function initialDocument(): DocumentState {
   const first = DEMO_SCENARIOS[0];
   return first ? documentFromFile(first.file, null) : documentFromFile(blankScenario(), null);
@@ -104,6 +113,16 @@ export function App() {
   const chartTabs = useTabs<ChartTab>("chart", hasRecord ? RECORD_CHART_TABS : CHART_TABS, chart, setChart);
   const docRef = useRef(doc);
   docRef.current = doc;
+  const flash = useCallback((message: string) => {
+    setNotice(message);
+    window.setTimeout(() => setNotice((n) => (n === message ? null : n)), 6000);
+  }, []);
+
+  /** Autosave failures reach the user: their unsaved work is not backed up. */
+  const autosaveFailed = useCallback(
+    (error: unknown) => flash(`Autosave failed (${errorText(error)}): unsaved work is not backed up until you save it.`),
+    [flash],
+  );
 
   /** Replaces the document (open, new, demo) and gives the 3D view a fresh camera. */
   const loadDocument = useCallback((next: DocumentState) => {
@@ -111,10 +130,10 @@ export function App() {
     setHistory(historyStart(next));
     // The user opened something else (after agreeing to drop unsaved work): the autosave is obsolete.
     // Recovered work is the exception: it is unsaved, so it is written back at once (below).
-    if (next.dirty) void host.autosaveWrite(serialiseDocument(next)).catch(() => {});
-    else void host.autosaveClear().catch(() => {});
+    if (next.dirty) void host.autosaveWrite(serialiseDocument(next)).catch(autosaveFailed);
+    else void host.autosaveClear().catch(logFailure("clearing the autosave"));
     setDocumentKey((n) => n + 1);
-  }, []);
+  }, [autosaveFailed]);
   /** The field changed last: a cross-field problem is shown there (see issuesByPath). */
   const [lastEdited, setLastEdited] = useState<string | null>(null);
   const perform = useCallback(<I,>(action: Action<I>, input: I) => {
@@ -159,7 +178,7 @@ export function App() {
   // Title and dirty flag to the host (only when they change, not on every keystroke); units remembered.
   const documentTitle = documentName(doc);
   useEffect(() => {
-    void host.setDocumentState(doc.dirty, documentTitle).catch(() => {});
+    void host.setDocumentState(doc.dirty, documentTitle).catch(logFailure("telling the host the document state"));
   }, [doc.dirty, documentTitle]);
   useEffect(() => {
     try {
@@ -173,8 +192,8 @@ export function App() {
   useEffect(() => {
     void host.autosaveRead().then((record) => {
       if (record && record.text.trim() !== "") setRecovery(record);
-    }).catch(() => {});
-    void host.recentFiles().then(setRecent).catch(() => {});
+    }).catch(logFailure("reading the autosave"));
+    void host.recentFiles().then(setRecent).catch(logFailure("reading the recent files"));
   }, []);
   useEffect(() => {
     let written: DocumentState | null = null;
@@ -183,21 +202,16 @@ export function App() {
       // Only unsaved work, and only when it changed since the last autosave.
       if (!current.dirty || (written !== null && current.file === written.file && current.study === written.study)) return;
       written = current;
-      void host.autosaveWrite(serialiseDocument(current)).catch(() => {});
+      void host.autosaveWrite(serialiseDocument(current)).catch(autosaveFailed);
     }, AUTOSAVE_INTERVAL_MS);
     return () => clearInterval(timer);
-  }, []);
+  }, [autosaveFailed]);
   useEffect(() => {
     const onBeforeUnload = (event: BeforeUnloadEvent) => {
       if (docRef.current.dirty && !host.isDesktop()) event.preventDefault();
     };
     window.addEventListener("beforeunload", onBeforeUnload);
     return () => window.removeEventListener("beforeunload", onBeforeUnload);
-  }, []);
-
-  const flash = useCallback((message: string) => {
-    setNotice(message);
-    window.setTimeout(() => setNotice((n) => (n === message ? null : n)), 6000);
   }, []);
 
   const loadText = useCallback((text: string, path: string | null) => {
@@ -210,7 +224,7 @@ export function App() {
     setShowStart(false);
     setTab(read.study ? "study" : "design");
     if (path !== null) host.rememberOpened({ path, text });
-    void host.recentFiles().then(setRecent).catch(() => {});
+    void host.recentFiles().then(setRecent).catch(logFailure("reading the recent files"));
   }, [flash, loadDocument]);
 
   const saveAs = useCallback(async (forceDialog: boolean): Promise<boolean> => {
@@ -221,12 +235,12 @@ export function App() {
       savedFile.current = { file: current.file, study: current.study ?? null };
       // Clean only if nothing changed while the dialog was open (the file object is replaced on every edit).
       setDoc((d) => (d.file === current.file && d.study === current.study ? { ...d, path, dirty: false } : { ...d, path }));
-      await host.autosaveClear().catch(() => {});
-      void host.recentFiles().then(setRecent).catch(() => {});
+      await host.autosaveClear().catch(logFailure("clearing the autosave"));
+      void host.recentFiles().then(setRecent).catch(logFailure("reading the recent files"));
       flash(`Saved ${path.replace(/^.*[\\/]/, "")}`);
       return true;
     } catch (error) {
-      flash(`Could not save: ${error instanceof Error ? error.message : String(error)}`);
+      flash(`Could not save: ${errorText(error)}`);
       return false;
     }
   }, [flash, setDoc]);
@@ -306,7 +320,7 @@ export function App() {
     const read = documentFromText(record.text);
     if (!read.ok) {
       flash(`The unsaved work could not be recovered. ${read.message}`);
-      void host.autosaveClear().catch(() => {});
+      void host.autosaveClear().catch(logFailure("clearing the autosave"));
       return;
     }
     guardUnsaved("Recover the earlier unsaved work", () => {
@@ -423,7 +437,7 @@ export function App() {
           <div className="banner recovery" role="status">
             Unsaved work from {recovery.savedAt ? new Date(recovery.savedAt).toLocaleString() : "an earlier session"} was kept.
             <button type="button" onClick={() => recover(recovery)}>Recover it</button>
-            <button type="button" className="link-button" onClick={() => { void host.autosaveClear().catch(() => {}); setRecovery(null); }}>Discard</button>
+            <button type="button" className="link-button" onClick={() => { void host.autosaveClear().catch(logFailure("clearing the autosave")); setRecovery(null); }}>Discard</button>
           </div>
         ) : null}
         {notice ? <div className="banner notice" role="status" data-role="notice">{notice}</div> : null}

@@ -1,5 +1,5 @@
 /** Export commands: the HTML report (core/report/html.ts) and the distance series as CSV. */
-import { CAUTION, type BrinefieldResult } from "../core/result/contract";
+import type { BrinefieldResult } from "../core/result/contract";
 import { siToDisplay, type UnitSystem } from "../core/units";
 import { exportFile } from "./platform/host";
 import { aboutResult, csvTable, csvWithCaution } from "../core/report/csv";

@@ -13,9 +13,9 @@
  *     data is lost.
  */
 
-// eslint-disable-next-line no-control-regex
+// eslint-disable-next-line no-control-regex -- the pattern matches control characters on purpose, to remove or refuse them
 const CSI_SEQUENCE = /\u001b\[[0-?]*[ -/]*[@-~]/g;
-// eslint-disable-next-line no-control-regex
+// eslint-disable-next-line no-control-regex -- the pattern matches control characters on purpose, to remove or refuse them
 const C0_AND_DEL = /[\u0000-\u0008\u000b-\u001f\u007f]/g;
 const SHOWN_ESCAPED = /[\u0080-\u009f\u202a-\u202e\u2066-\u2069]/g;
 

@@ -48,7 +48,7 @@ export function useModal<T extends HTMLElement>(onClose: () => void, initialFocu
       if (before?.isConnected) before.focus();
     };
     // The dialog's elements are fixed for its lifetime; onClose is read through a ref.
-    // eslint-disable-next-line react-hooks/exhaustive-deps
+    // eslint-disable-next-line react-hooks/exhaustive-deps -- see the comment above: the omitted values are read through refs on purpose
   }, []);
   return ref;
 }

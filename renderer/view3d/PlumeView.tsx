@@ -204,7 +204,7 @@ export function PlumeView(props: PlumeViewProps) {
     setCurrent(content.current);
     render();
     // documentKey is read through placedForDocument; a new key alone (old result) must not re-place.
-    // eslint-disable-next-line react-hooks/exhaustive-deps
+    // eslint-disable-next-line react-hooks/exhaustive-deps -- see the comment above: the omitted values are read through refs on purpose
   }, [scenario, result, unitSystem, render]);
 
   const choose = useCallback(

@@ -302,7 +302,7 @@ describe("control characters in user text never reach the terminal", () => {
     for (const args of [["run", at("escape.json")], ["run", at("escape.json"), "--json", "--no-path"], ["check-claim", at("escape.json"), "--claimed-dilution", "30"]]) {
       const o = await cli(...args);
       expect(o.code, `${args.join(" ")} runs`).toBe(0);
-      // eslint-disable-next-line no-control-regex
+      // eslint-disable-next-line no-control-regex -- the pattern matches control characters on purpose, to remove or refuse them
       expect(o.out + o.err, `${args.join(" ")}: no ESC, CR, BEL or C1 control`).not.toMatch(/[\u001b\r\u0007\u0080-\u009f]/);
     }
     const json = JSON.parse((await cli("run", at("escape.json"), "--json", "--no-path")).out);
@@ -311,7 +311,7 @@ describe("control characters in user text never reach the terminal", () => {
   it("strips control characters from messages quoting user input", async () => {
     const o = await cli("run", at("mine.json"), "--\u001b[31mred");
     expect(o.code, "exit").toBe(2);
-    // eslint-disable-next-line no-control-regex
+    // eslint-disable-next-line no-control-regex -- the pattern matches control characters on purpose, to remove or refuse them
     expect(o.err, "no escape in the quoted option").not.toMatch(/\u001b/);
   });
 });
