@@ -31,7 +31,6 @@ import { complianceWithScope, scopeReasons } from "./compliance/scope";
 import { expandCases, overallFromCases, runCases } from "./cases";
 import type { ResultWarning } from "./warnings";
 import { BRINEFIELD_VERSION } from "./version";
-import { formatNumber } from "./units";
 import { runRecordSteps } from "./record/run";
 import { withIntakeCases, withRecord } from "./record/result";
 import { caseDetail, summaryWithIntake } from "./intake/summary";

@@ -159,7 +159,6 @@ export function beyondNearField(input: BeyondInput): BeyondOutput {
   const bedSlope = (): number => (scenario.ambient.bedSlope > 0 ? scenario.ambient.bedSlope : 0);
   const crossLength = (): number =>
     u > 0 ? diffuserLength * Math.abs(Math.sin(degToRad(diffuser.diffuserAzimuth - column.currentDirection))) : diffuserLength;
-  const crossWidth = (c: Chain) => 2 * c.layerRadius + crossLength();
 
   // Integrates over [end of the near field, xEnd] in `steps` steps, stopping after the first step past xStop.
   const integrateFar = (

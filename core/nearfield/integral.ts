@@ -29,7 +29,6 @@ import {
   entrainmentSwitch,
   integralJetRhs,
   profileAt,
-  radiusFromState,
   upperEdgeSlope,
   verticalHalfExtent,
   type IntegralParams,
@@ -46,7 +45,6 @@ import {
   EV_SURFACE_EDGE,
   EV_TOP,
   EV_ENTRAINMENT_SWITCH,
-  centrelineDilution,
   integralInitialState,
   integralParamsFrom,
 } from "./integralSetup";
