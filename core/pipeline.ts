@@ -113,7 +113,9 @@ export function runScenario(scenario: Scenario, options: RunOptions = {}): Brine
   }
   const specs = expandCases(scenario);
   const results = runCases(specs, (c, i) =>
-    i === 0 ? runAmbientCase(scenario, options) : runAmbientCase(c.scenario, { includePath: false, detail: caseDetail(c.scenario) }),
+    i === 0
+      ? runAmbientCase(scenario, options)
+      : runAmbientCase(c.scenario, { includePath: false, detail: caseDetail(c.scenario) }),
   );
   const cases: CaseResult[] = specs.map((c, i) => {
     const r = results[i]!;
@@ -127,8 +129,19 @@ export function runScenario(scenario: Scenario, options: RunOptions = {}): Brine
     };
   });
   const blend = blendSignChange(scenario);
-  const result: BrinefieldResult = { ...results[0]!, ...(blend ? { blend } : {}), cases, overall: overallFromCases(cases) };
-  return scenario.intake ? withIntakeCases(scenario, result, specs.map((c, i) => ({ name: c.name, sample: intakeFromResult(c.scenario, results[i]!) }))) : result;
+  const result: BrinefieldResult = {
+    ...results[0]!,
+    ...(blend ? { blend } : {}),
+    cases,
+    overall: overallFromCases(cases),
+  };
+  return scenario.intake
+    ? withIntakeCases(
+        scenario,
+        result,
+        specs.map((c, i) => ({ name: c.name, sample: intakeFromResult(c.scenario, results[i]!) })),
+      )
+    : result;
 }
 
 /** One record step through the pipeline: the study summary with the intake's figures. */
@@ -152,15 +165,34 @@ export function runAmbientCase(scenario: Scenario, options: RunOptions = {}): Am
   if (rising) {
     const lengthScale = risingLengthScale(jet, props.column);
     const integral = risingIntegral(jet, props.column, { includePath: true, sink: options.sink });
-    const methods = [lengthScale, integral].map(({ risingField, ...nf }) => ({ nf: { ...nf, risingField }, field: risingField }));
-    beyond = risingBeyond({ scenario, jet, column: props.column, densities: props.densities, port, methods, detail: options.detail });
+    const methods = [lengthScale, integral].map(({ risingField, ...nf }) => ({
+      nf: { ...nf, risingField },
+      field: risingField,
+    }));
+    beyond = risingBeyond({
+      scenario,
+      jet,
+      column: props.column,
+      densities: props.densities,
+      port,
+      methods,
+      detail: options.detail,
+    });
     sourceWarnings = jetSourceWarnings(jet, props.column).filter((w) => !DENSE_SOURCE_CODES.has(w.code));
   } else {
     const lengthScale = nearFieldLengthScale(jet, props.column);
     // The path is always computed: the edge may lie inside the jet, where its dilution is read off the path.
     const integral = nearFieldIntegral(jet, props.column, { includePath: true, sink: options.sink });
     const nearField: NearFieldMethodResult[] = [lengthScale, integral];
-    beyond = beyondNearField({ scenario, jet, column: props.column, nearField, densities: props.densities, port, detail: options.detail });
+    beyond = beyondNearField({
+      scenario,
+      jet,
+      column: props.column,
+      nearField,
+      densities: props.densities,
+      port,
+      detail: options.detail,
+    });
     sourceWarnings = jetSourceWarnings(jet, props.column);
   }
   const warnings = dedupe([
@@ -172,7 +204,12 @@ export function runAmbientCase(scenario: Scenario, options: RunOptions = {}): Am
   ]);
   const reasons = rising
     ? risingScopeReasons(beyond.nearField, warnings)
-    : scopeReasons({ depth: scenario.ambient.depth, portHeight: scenario.diffuser.portHeight, nearField: beyond.nearField, warnings });
+    : scopeReasons({
+        depth: scenario.ambient.depth,
+        portHeight: scenario.diffuser.portHeight,
+        nearField: beyond.nearField,
+        warnings,
+      });
   return {
     format: RESULT_FORMAT,
     version: RESULT_VERSION,

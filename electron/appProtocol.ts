@@ -45,10 +45,7 @@ export function isAppUrl(url: string): boolean {
     return false;
   }
   return (
-    parsed.protocol === `${APP_SCHEME}:` &&
-    parsed.host === APP_HOST &&
-    parsed.username === "" &&
-    parsed.password === ""
+    parsed.protocol === `${APP_SCHEME}:` && parsed.host === APP_HOST && parsed.username === "" && parsed.password === ""
   );
 }
 

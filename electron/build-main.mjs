@@ -13,11 +13,7 @@ import { fileURLToPath, pathToFileURL } from "node:url";
 export const ROOT = resolve(dirname(fileURLToPath(import.meta.url)), "..");
 
 /** Build all three bundles into `outDir` (default `<root>/dist/electron`). Throws on esbuild errors. */
-export async function buildElectron({
-  root = ROOT,
-  outDir = join(root, "dist", "electron"),
-  minify = false,
-} = {}) {
+export async function buildElectron({ root = ROOT, outDir = join(root, "dist", "electron"), minify = false } = {}) {
   const common = {
     bundle: true,
     platform: "node",

@@ -12,8 +12,19 @@ export type FileFilter = { readonly name: string; readonly extensions: readonly 
 export type HostRequest =
   | { readonly kind: "open-scenario" }
   | { readonly kind: "open-path"; readonly path: string }
-  | { readonly kind: "save-file"; readonly path: string | null; readonly text: string; readonly suggestedName: string; readonly filters: readonly FileFilter[] }
-  | { readonly kind: "export-file"; readonly suggestedName: string; readonly text: string; readonly filters: readonly FileFilter[] }
+  | {
+      readonly kind: "save-file";
+      readonly path: string | null;
+      readonly text: string;
+      readonly suggestedName: string;
+      readonly filters: readonly FileFilter[];
+    }
+  | {
+      readonly kind: "export-file";
+      readonly suggestedName: string;
+      readonly text: string;
+      readonly filters: readonly FileFilter[];
+    }
   | { readonly kind: "print-pdf"; readonly suggestedName: string }
   | { readonly kind: "recent-files" }
   | { readonly kind: "autosave-write"; readonly text: string }

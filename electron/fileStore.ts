@@ -21,8 +21,7 @@ export const MAX_EXPORT_BYTES = 25 * 1024 * 1024;
 export const MAX_RECENT_FILES = 10;
 
 export type ReadTextResult =
-  | { readonly ok: true; readonly text: string }
-  | { readonly ok: false; readonly message: string };
+  { readonly ok: true; readonly text: string } | { readonly ok: false; readonly message: string };
 
 /** "812 kB", "5 MB", "7.3 MB" — decimal-free when whole, for messages. */
 export const formatBytes = formatByteSize;
@@ -76,7 +75,10 @@ export async function readJsonTextFile(path: string, options: ReadJsonOptions = 
     if (/^cannot be read \(no such file\)/.test(read.message)) {
       return { ok: false, message: `Could not open “${name}”: the file or its folder does not exist.` };
     }
-    return { ok: false, message: `“${name}” ${read.message} (a ${label} file is UTF-8 JSON of at most ${formatBytes(maxBytes)}).` };
+    return {
+      ok: false,
+      message: `“${name}” ${read.message} (a ${label} file is UTF-8 JSON of at most ${formatBytes(maxBytes)}).`,
+    };
   }
   if (read.text.trim() === "") return { ok: false, message: `“${name}” is empty.` };
   const json = parseJsonText(read.text, maxBytes);
@@ -138,8 +140,7 @@ export function createRecentFilesStore(options: RecentFilesOptions): RecentFiles
       if (!Array.isArray(paths)) return [];
       const clean: string[] = [];
       for (const p of paths) {
-        const usable =
-          typeof p === "string" && p.length > 0 && p.length <= 4096 && !p.includes("\0") && isAbsolute(p);
+        const usable = typeof p === "string" && p.length > 0 && p.length <= 4096 && !p.includes("\0") && isAbsolute(p);
         if (!usable) continue;
         if (!clean.some((q) => samePath(q, p, platform))) clean.push(p);
       }

@@ -47,9 +47,7 @@ export function checkedChannel(channel: string): string {
 }
 
 function isHostResponse(value: unknown): value is HostResponse {
-  return (
-    typeof value === "object" && value !== null && typeof (value as { kind?: unknown }).kind === "string"
-  );
+  return typeof value === "object" && value !== null && typeof (value as { kind?: unknown }).kind === "string";
 }
 
 export function createHostBridge(ipc: BridgeIpc, platform: string): BrinefieldHost {

@@ -19,7 +19,10 @@ import { portFromArgs, startWebServer, type StartedWebServer } from "./webServer
 export const ELECTRON_MIN_NODE: readonly [number, number, number] = [22, 12, 0];
 
 export function nodeAtLeast(version: string, min: readonly [number, number, number]): boolean {
-  const parts = version.replace(/^v/, "").split(".").map((p) => Number.parseInt(p, 10) || 0);
+  const parts = version
+    .replace(/^v/, "")
+    .split(".")
+    .map((p) => Number.parseInt(p, 10) || 0);
   for (let i = 0; i < 3; i++) {
     const have = parts[i] ?? 0;
     if (have !== min[i]) return have > min[i];
@@ -78,8 +81,7 @@ export type LaunchPlan =
   | { readonly kind: "web"; readonly reason: string; readonly hint: string };
 
 const INTERNET_HINT =
-  "With Node ≥ 22.12 and an internet connection, `npm start` fetches Electron once " +
-  "and opens the desktop app.";
+  "With Node ≥ 22.12 and an internet connection, `npm start` fetches Electron once " + "and opens the desktop app.";
 
 /** Electron, a first-start download, or the browser fallback — and why. */
 export function decideLaunch(inputs: LaunchInputs): LaunchPlan {
@@ -98,8 +100,7 @@ export function decideLaunch(inputs: LaunchInputs): LaunchPlan {
       hint: "Run `npm install`, then `npm start`.",
     };
   }
-  const hasDisplay =
-    inputs.platform !== "linux" || Boolean(inputs.env.DISPLAY) || Boolean(inputs.env.WAYLAND_DISPLAY);
+  const hasDisplay = inputs.platform !== "linux" || Boolean(inputs.env.DISPLAY) || Boolean(inputs.env.WAYLAND_DISPLAY);
   const noDisplay: LaunchPlan = {
     kind: "web",
     reason: "there is no graphical display (DISPLAY and WAYLAND_DISPLAY are unset)",
@@ -113,8 +114,7 @@ export function decideLaunch(inputs: LaunchInputs): LaunchPlan {
     return {
       kind: "web",
       reason:
-        "the Electron runtime is not downloaded yet, " +
-        `and this Node (${inputs.nodeVersion}) is too old to fetch it`,
+        "the Electron runtime is not downloaded yet, " + `and this Node (${inputs.nodeVersion}) is too old to fetch it`,
       hint: INTERNET_HINT,
     };
   }
@@ -263,11 +263,7 @@ async function buildRenderer(root: string, env: RunOptions["env"]): Promise<bool
   return result.code === 0;
 }
 
-async function ensureRenderer(
-  root: string,
-  env: RunOptions["env"],
-  log: (line: string) => void,
-): Promise<boolean> {
+async function ensureRenderer(root: string, env: RunOptions["env"], log: (line: string) => void): Promise<boolean> {
   const index = join(root, "dist", "renderer", "index.html");
   const newest = await newestSourceMtime([join(root, "renderer"), join(root, "core")]);
   if (!isRendererStale(mtimeOrNull(index), newest)) return true;
@@ -296,11 +292,7 @@ async function downloadElectron(packageDir: string, log: (line: string) => void)
 }
 
 /** Serve dist/renderer until Ctrl+C; resolves to the exit code. */
-async function serveUntilInterrupted(
-  root: string,
-  port: number,
-  log: (line: string) => void,
-): Promise<number> {
+async function serveUntilInterrupted(root: string, port: number, log: (line: string) => void): Promise<number> {
   const rendererDir = join(root, "dist", "renderer");
   if (!existsSync(join(rendererDir, "index.html"))) {
     log("dist/renderer/index.html is missing: run `npm run build` first.");

@@ -76,7 +76,8 @@ const closeGuard = createCloseGuard({
   },
   requestSave: () => sendMenu("save"),
   closeWindow: () => setTimeout(() => mainWindow?.close(), 0),
-  onDiscard: () => autosave.clear().catch((error: unknown) => console.error("Brinefield: clearing the autosave failed:", error)),
+  onDiscard: () =>
+    autosave.clear().catch((error: unknown) => console.error("Brinefield: clearing the autosave failed:", error)),
 });
 
 function refreshMenu(recentPaths: readonly string[]): void {
@@ -134,7 +135,12 @@ const handlers = createHostHandlers({
   async printToPdf() {
     if (!mainWindow) throw new Error("the window is closed");
     // Tagged (accessible) with a document outline, as the CLI's headless printing does.
-    return mainWindow.webContents.printToPDF({ printBackground: true, pageSize: "A4", generateTaggedPDF: true, generateDocumentOutline: true });
+    return mainWindow.webContents.printToPDF({
+      printBackground: true,
+      pageSize: "A4",
+      generateTaggedPDF: true,
+      generateDocumentOutline: true,
+    });
   },
   recent,
   autosave,

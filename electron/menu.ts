@@ -41,12 +41,10 @@ export function buildMenuTemplate(options: MenuOptions, actions: MenuActions): M
     options.recent.length === 0
       ? [{ label: "No recent files", enabled: false }]
       : [
-          ...options.recent.map(
-            (path): MenuItemConstructorOptions => ({
-              label: recentLabel(path),
-              click: () => actions.send("open-recent", path),
-            }),
-          ),
+          ...options.recent.map((path): MenuItemConstructorOptions => ({
+            label: recentLabel(path),
+            click: () => actions.send("open-recent", path),
+          })),
           { type: "separator" },
           { label: "Clear Recent Files", click: () => actions.clearRecent() },
         ];

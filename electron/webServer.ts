@@ -54,8 +54,7 @@ export function securityHeaders(): Record<string, string> {
 }
 
 export type ResolvedRequest =
-  | { readonly ok: true; readonly file: string }
-  | { readonly ok: false; readonly status: 400 | 403 | 404 };
+  { readonly ok: true; readonly file: string } | { readonly ok: false; readonly status: 400 | 403 | 404 };
 
 /**
  * Map a request target ("/assets/app.js?x=1") to a file under `root`, refusing anything that could
@@ -240,14 +239,10 @@ export async function startWebServer(options: StartWebServerOptions): Promise<St
 }
 
 export type PortChoice =
-  | { readonly ok: true; readonly port: number }
-  | { readonly ok: false; readonly message: string };
+  { readonly ok: true; readonly port: number } | { readonly ok: false; readonly message: string };
 
 /** Port from `--port N` / `--port=N`, else the PORT environment variable, else 5178. */
-export function portFromArgs(
-  argv: readonly string[],
-  env: Readonly<Record<string, string | undefined>>,
-): PortChoice {
+export function portFromArgs(argv: readonly string[], env: Readonly<Record<string, string | undefined>>): PortChoice {
   let raw: string | undefined;
   for (let i = 0; i < argv.length; i++) {
     const arg = argv[i];

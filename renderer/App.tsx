@@ -83,8 +83,12 @@ export function App() {
   const doc = history.present;
   /** The file (and study part) as last opened or saved: undoing back to it makes the document clean again. */
   const savedFile = useRef<{ file: ScenarioFile; study: StudyPart | null } | null>({ file: doc.file, study: null });
-  const isSaved = (d: DocumentState) => savedFile.current !== null && d.file === savedFile.current.file && (d.study ?? null) === savedFile.current.study;
-  const setDoc = useCallback((update: (d: DocumentState) => DocumentState) => setHistory((h) => historyReplace(h, update(h.present))), []);
+  const isSaved = (d: DocumentState) =>
+    savedFile.current !== null && d.file === savedFile.current.file && (d.study ?? null) === savedFile.current.study;
+  const setDoc = useCallback(
+    (update: (d: DocumentState) => DocumentState) => setHistory((h) => historyReplace(h, update(h.present))),
+    [],
+  );
   const [unitSystem, setUnitSystem] = useState<UnitSystem>(initialUnits);
   const [tab, setTab] = useState<"design" | "study">("design");
   // The Study tab stays mounted once opened, so its results and choices survive a tab switch.
@@ -106,7 +110,10 @@ export function App() {
   // A long ambient record runs on the study workers; its full result then stands for the engine's.
   const recordRun = useRecordRun(engineRun.scenario, engineRun.result);
   const engine = useMemo(
-    () => (recordRun.result ? { ...engineRun, result: recordRun.result } : { ...engineRun, running: engineRun.running || recordRun.running }),
+    () =>
+      recordRun.result
+        ? { ...engineRun, result: recordRun.result }
+        : { ...engineRun, running: engineRun.running || recordRun.running },
     [engineRun, recordRun.result, recordRun.running],
   );
   const hasRecord = Boolean(engineRun.scenario?.ambient.record);
@@ -120,24 +127,29 @@ export function App() {
 
   /** Autosave failures reach the user: their unsaved work is not backed up. */
   const autosaveFailed = useCallback(
-    (error: unknown) => flash(`Autosave failed (${errorText(error)}): unsaved work is not backed up until you save it.`),
+    (error: unknown) =>
+      flash(`Autosave failed (${errorText(error)}): unsaved work is not backed up until you save it.`),
     [flash],
   );
 
   /** Replaces the document (open, new, demo) and gives the 3D view a fresh camera. */
-  const loadDocument = useCallback((next: DocumentState) => {
-    savedFile.current = { file: next.file, study: next.study ?? null };
-    setHistory(historyStart(next));
-    // The user opened something else (after agreeing to drop unsaved work): the autosave is obsolete.
-    // Recovered work is the exception: it is unsaved, so it is written back at once (below).
-    if (next.dirty) void host.autosaveWrite(serialiseDocument(next)).catch(autosaveFailed);
-    else void host.autosaveClear().catch(logFailure("clearing the autosave"));
-    setDocumentKey((n) => n + 1);
-  }, [autosaveFailed]);
+  const loadDocument = useCallback(
+    (next: DocumentState) => {
+      savedFile.current = { file: next.file, study: next.study ?? null };
+      setHistory(historyStart(next));
+      // The user opened something else (after agreeing to drop unsaved work): the autosave is obsolete.
+      // Recovered work is the exception: it is unsaved, so it is written back at once (below).
+      if (next.dirty) void host.autosaveWrite(serialiseDocument(next)).catch(autosaveFailed);
+      else void host.autosaveClear().catch(logFailure("clearing the autosave"));
+      setDocumentKey((n) => n + 1);
+    },
+    [autosaveFailed],
+  );
   /** The field changed last: a cross-field problem is shown there (see issuesByPath). */
   const [lastEdited, setLastEdited] = useState<string | null>(null);
   const perform = useCallback(<I,>(action: Action<I>, input: I) => {
-    const path = typeof input === "object" && input !== null && "path" in input ? String((input as { path: unknown }).path) : "";
+    const path =
+      typeof input === "object" && input !== null && "path" in input ? String((input as { path: unknown }).path) : "";
     setLastEdited(path || null);
     setHistory((h) => historyPush(h, action.perform(h.present, input), `${action.name}:${path}`, Date.now()));
   }, []);
@@ -190,9 +202,12 @@ export function App() {
 
   // Autosave while dirty; offer recovery on start.
   useEffect(() => {
-    void host.autosaveRead().then((record) => {
-      if (record && record.text.trim() !== "") setRecovery(record);
-    }).catch(logFailure("reading the autosave"));
+    void host
+      .autosaveRead()
+      .then((record) => {
+        if (record && record.text.trim() !== "") setRecovery(record);
+      })
+      .catch(logFailure("reading the autosave"));
     void host.recentFiles().then(setRecent).catch(logFailure("reading the recent files"));
   }, []);
   useEffect(() => {
@@ -200,7 +215,8 @@ export function App() {
     const timer = setInterval(() => {
       const current = docRef.current;
       // Only unsaved work, and only when it changed since the last autosave.
-      if (!current.dirty || (written !== null && current.file === written.file && current.study === written.study)) return;
+      if (!current.dirty || (written !== null && current.file === written.file && current.study === written.study))
+        return;
       written = current;
       void host.autosaveWrite(serialiseDocument(current)).catch(autosaveFailed);
     }, AUTOSAVE_INTERVAL_MS);
@@ -214,70 +230,91 @@ export function App() {
     return () => window.removeEventListener("beforeunload", onBeforeUnload);
   }, []);
 
-  const loadText = useCallback((text: string, path: string | null) => {
-    const read = documentFromText(text);
-    if (!read.ok) {
-      flash(read.message);
-      return;
-    }
-    loadDocument({ ...documentFromFile(read.file, path), study: read.study });
-    setShowStart(false);
-    setTab(read.study ? "study" : "design");
-    if (path !== null) host.rememberOpened({ path, text });
-    void host.recentFiles().then(setRecent).catch(logFailure("reading the recent files"));
-  }, [flash, loadDocument]);
-
-  const saveAs = useCallback(async (forceDialog: boolean): Promise<boolean> => {
-    const current = docRef.current;
-    try {
-      const path = await host.saveScenario(forceDialog ? null : current.path, serialiseDocument(current), suggestedDocumentName(current));
-      if (path === null) return false;
-      savedFile.current = { file: current.file, study: current.study ?? null };
-      // Clean only if nothing changed while the dialog was open (the file object is replaced on every edit).
-      setDoc((d) => (d.file === current.file && d.study === current.study ? { ...d, path, dirty: false } : { ...d, path }));
-      await host.autosaveClear().catch(logFailure("clearing the autosave"));
+  const loadText = useCallback(
+    (text: string, path: string | null) => {
+      const read = documentFromText(text);
+      if (!read.ok) {
+        flash(read.message);
+        return;
+      }
+      loadDocument({ ...documentFromFile(read.file, path), study: read.study });
+      setShowStart(false);
+      setTab(read.study ? "study" : "design");
+      if (path !== null) host.rememberOpened({ path, text });
       void host.recentFiles().then(setRecent).catch(logFailure("reading the recent files"));
-      flash(`Saved ${path.replace(/^.*[\\/]/, "")}`);
-      return true;
-    } catch (error) {
-      flash(`Could not save: ${errorText(error)}`);
-      return false;
-    }
-  }, [flash, setDoc]);
+    },
+    [flash, loadDocument],
+  );
+
+  const saveAs = useCallback(
+    async (forceDialog: boolean): Promise<boolean> => {
+      const current = docRef.current;
+      try {
+        const path = await host.saveScenario(
+          forceDialog ? null : current.path,
+          serialiseDocument(current),
+          suggestedDocumentName(current),
+        );
+        if (path === null) return false;
+        savedFile.current = { file: current.file, study: current.study ?? null };
+        // Clean only if nothing changed while the dialog was open (the file object is replaced on every edit).
+        setDoc((d) =>
+          d.file === current.file && d.study === current.study ? { ...d, path, dirty: false } : { ...d, path },
+        );
+        await host.autosaveClear().catch(logFailure("clearing the autosave"));
+        void host.recentFiles().then(setRecent).catch(logFailure("reading the recent files"));
+        flash(`Saved ${path.replace(/^.*[\\/]/, "")}`);
+        return true;
+      } catch (error) {
+        flash(`Could not save: ${errorText(error)}`);
+        return false;
+      }
+    },
+    [flash, setDoc],
+  );
 
   /** Runs `proceed` now, or after the user agrees to lose unsaved changes. */
-  const guardUnsaved = useCallback((what: string, proceed: () => void) => {
-    if (!docRef.current.dirty) {
-      proceed();
-      return;
-    }
-    setConfirm({
-      title: "Unsaved changes",
-      message: `“${documentName(docRef.current)}” has changes that are not saved. ${what} anyway?`,
-      confirmLabel: "Discard changes",
-      extraLabel: "Save first",
-      onExtra: () => void saveAs(false).then((saved) => saved && proceed()),
-      onConfirm: proceed,
-    });
-  }, [saveAs]);
+  const guardUnsaved = useCallback(
+    (what: string, proceed: () => void) => {
+      if (!docRef.current.dirty) {
+        proceed();
+        return;
+      }
+      setConfirm({
+        title: "Unsaved changes",
+        message: `“${documentName(docRef.current)}” has changes that are not saved. ${what} anyway?`,
+        confirmLabel: "Discard changes",
+        extraLabel: "Save first",
+        onExtra: () => void saveAs(false).then((saved) => saved && proceed()),
+        onConfirm: proceed,
+      });
+    },
+    [saveAs],
+  );
 
   // Exports pair the results with the inputs, so they wait for the latest edit's run to finish.
   const engineRef = useRef(engine);
   engineRef.current = engine;
   const pendingExport = useRef<(() => void) | null>(null);
-  const whenResultsCurrent = useCallback((run: (result: BrinefieldResult) => Promise<string>) => {
-    const attempt = () => {
-      const current = engineRef.current;
-      if (current.running) {
-        pendingExport.current = attempt;
-        return;
-      }
-      const why = exportBlocked(current);
-      if (why !== null || !current.result) return flash(why ?? "No results to export yet.");
-      void run(current.result).then((message) => message && flash(message), (e: unknown) => flash(String(e)));
-    };
-    attempt();
-  }, [flash]);
+  const whenResultsCurrent = useCallback(
+    (run: (result: BrinefieldResult) => Promise<string>) => {
+      const attempt = () => {
+        const current = engineRef.current;
+        if (current.running) {
+          pendingExport.current = attempt;
+          return;
+        }
+        const why = exportBlocked(current);
+        if (why !== null || !current.result) return flash(why ?? "No results to export yet.");
+        void run(current.result).then(
+          (message) => message && flash(message),
+          (e: unknown) => flash(String(e)),
+        );
+      };
+      attempt();
+    },
+    [flash],
+  );
   useEffect(() => {
     if (engine.running || !pendingExport.current) return;
     const attempt = pendingExport.current;
@@ -285,62 +322,85 @@ export function App() {
     attempt();
   }, [engine.running]);
 
-  const commands = useMemo(() => ({
-    newScenario: () => guardUnsaved("Start a new scenario", () => {
-      loadDocument(documentFromFile(blankScenario(), null));
-      setShowStart(false);
+  const commands = useMemo(
+    () => ({
+      newScenario: () =>
+        guardUnsaved("Start a new scenario", () => {
+          loadDocument(documentFromFile(blankScenario(), null));
+          setShowStart(false);
+        }),
+      open: () =>
+        guardUnsaved("Open another scenario", () => {
+          void host
+            .openScenario()
+            .then((opened) => opened && loadText(opened.text, opened.path))
+            .catch((e: unknown) => flash(String(e)));
+        }),
+      openRecent: (path: string) =>
+        guardUnsaved("Open another scenario", () => {
+          void host
+            .openRecent(path)
+            .then((opened) => (opened ? loadText(opened.text, opened.path) : flash(`${path} is no longer available`)))
+            .catch((e: unknown) => flash(String(e)));
+        }),
+      openDemo: (demo: DemoScenario) =>
+        guardUnsaved("Open a demo scenario", () => {
+          loadDocument(documentFromFile(demo.file, null));
+          setShowStart(false);
+          setTab("design");
+        }),
+      save: () => void saveAs(false),
+      saveAs: () => void saveAs(true),
+      exportReport: () => whenResultsCurrent((r) => exportReport(r, docRef.current.file)),
+      exportCsv: () => whenResultsCurrent((r) => exportSeriesCsv(r, docRef.current.file, unitSystem)),
+      print: () =>
+        whenResultsCurrent((r) =>
+          host.isDesktop()
+            ? host.printPdf(suggestedFileName(docRef.current.file, "pdf")).then(() => "")
+            : printReportInBrowser(r, docRef.current.file),
+        ),
     }),
-    open: () => guardUnsaved("Open another scenario", () => {
-      void host.openScenario().then((opened) => opened && loadText(opened.text, opened.path)).catch((e: unknown) => flash(String(e)));
-    }),
-    openRecent: (path: string) => guardUnsaved("Open another scenario", () => {
-      void host.openRecent(path).then((opened) => (opened ? loadText(opened.text, opened.path) : flash(`${path} is no longer available`))).catch((e: unknown) => flash(String(e)));
-    }),
-    openDemo: (demo: DemoScenario) => guardUnsaved("Open a demo scenario", () => {
-      loadDocument(documentFromFile(demo.file, null));
-      setShowStart(false);
-      setTab("design");
-    }),
-    save: () => void saveAs(false),
-    saveAs: () => void saveAs(true),
-    exportReport: () => whenResultsCurrent((r) => exportReport(r, docRef.current.file)),
-    exportCsv: () => whenResultsCurrent((r) => exportSeriesCsv(r, docRef.current.file, unitSystem)),
-    print: () =>
-      whenResultsCurrent((r) =>
-        host.isDesktop() ? host.printPdf(suggestedFileName(docRef.current.file, "pdf")).then(() => "") : printReportInBrowser(r, docRef.current.file),
-      ),
-  }), [guardUnsaved, loadText, loadDocument, saveAs, flash, whenResultsCurrent, unitSystem]);
+    [guardUnsaved, loadText, loadDocument, saveAs, flash, whenResultsCurrent, unitSystem],
+  );
 
   /**
    * Brings back autosaved work as an unsaved document. Text that is no longer a scenario is dropped with
    * a message; edits made since the start are not thrown away without asking.
    */
-  const recover = useCallback((record: host.AutosaveRecord) => {
-    setRecovery(null);
-    const read = documentFromText(record.text);
-    if (!read.ok) {
-      flash(`The unsaved work could not be recovered. ${read.message}`);
-      void host.autosaveClear().catch(logFailure("clearing the autosave"));
-      return;
-    }
-    guardUnsaved("Recover the earlier unsaved work", () => {
-      loadDocument({ ...documentFromFile(read.file, null), study: read.study, dirty: true });
-      savedFile.current = null; // nothing of it is on disk: undoing back to it stays dirty
-      setShowStart(false);
-      setTab("design");
-    });
-  }, [flash, guardUnsaved, loadDocument]);
+  const recover = useCallback(
+    (record: host.AutosaveRecord) => {
+      setRecovery(null);
+      const read = documentFromText(record.text);
+      if (!read.ok) {
+        flash(`The unsaved work could not be recovered. ${read.message}`);
+        void host.autosaveClear().catch(logFailure("clearing the autosave"));
+        return;
+      }
+      guardUnsaved("Recover the earlier unsaved work", () => {
+        loadDocument({ ...documentFromFile(read.file, null), study: read.study, dirty: true });
+        savedFile.current = null; // nothing of it is on disk: undoing back to it stays dirty
+        setShowStart(false);
+        setTab("design");
+      });
+    },
+    [flash, guardUnsaved, loadDocument],
+  );
 
   /** Opens a variant's or a design's full scenario as a new, unsaved scenario document. */
-  const openAsScenario = useCallback((file: ScenarioFile) => {
-    guardUnsaved("Open it as a scenario", () => {
-      loadDocument({ ...documentFromFile(file, null), dirty: true });
-      savedFile.current = null; // nothing of it is on disk yet
-      setShowStart(false);
-      setTab("design");
-      flash(`Opened “${typeof file["name"] === "string" ? file["name"] : "the scenario"}” as a new scenario (not saved yet).`);
-    });
-  }, [guardUnsaved, loadDocument, flash]);
+  const openAsScenario = useCallback(
+    (file: ScenarioFile) => {
+      guardUnsaved("Open it as a scenario", () => {
+        loadDocument({ ...documentFromFile(file, null), dirty: true });
+        savedFile.current = null; // nothing of it is on disk yet
+        setShowStart(false);
+        setTab("design");
+        flash(
+          `Opened “${typeof file["name"] === "string" ? file["name"] : "the scenario"}” as a new scenario (not saved yet).`,
+        );
+      });
+    },
+    [guardUnsaved, loadDocument, flash],
+  );
 
   // Keyboard shortcuts and host menu commands.
   useEffect(() => {
@@ -363,18 +423,30 @@ export function App() {
     window.addEventListener("keydown", onKey);
     const unsubscribe = host.onMenuCommand((command, path) => {
       switch (command) {
-        case "open-recent": return path ? commands.openRecent(path) : undefined;
-        case "new": return commands.newScenario();
-        case "open": return commands.open();
-        case "save": return commands.save();
-        case "save-as": return commands.saveAs();
-        case "export-report": return commands.exportReport();
-        case "export-csv": return commands.exportCsv();
-        case "print-pdf": return commands.print();
-        case "start-view": return setShowStart(true);
-        case "reset-view": return setResetSignal((n) => n + 1);
-        case "units-si": return setUnitSystem("si");
-        case "units-us": return setUnitSystem("us");
+        case "open-recent":
+          return path ? commands.openRecent(path) : undefined;
+        case "new":
+          return commands.newScenario();
+        case "open":
+          return commands.open();
+        case "save":
+          return commands.save();
+        case "save-as":
+          return commands.saveAs();
+        case "export-report":
+          return commands.exportReport();
+        case "export-csv":
+          return commands.exportCsv();
+        case "print-pdf":
+          return commands.print();
+        case "start-view":
+          return setShowStart(true);
+        case "reset-view":
+          return setResetSignal((n) => n + 1);
+        case "units-si":
+          return setUnitSystem("si");
+        case "units-us":
+          return setUnitSystem("us");
       }
     });
     return () => {
@@ -392,7 +464,8 @@ export function App() {
         if (!read.ok) return flash(`${file.name}: ${read.message}`);
         guardUnsaved("Open the dropped file", () => loadText(opened.text, opened.path));
       },
-      (error: unknown) => flash(`Could not read ${file.name}: ${error instanceof Error ? error.message : String(error)}`),
+      (error: unknown) =>
+        flash(`Could not read ${file.name}: ${error instanceof Error ? error.message : String(error)}`),
     );
   });
 
@@ -404,43 +477,139 @@ export function App() {
     <EditorContext.Provider value={editor}>
       <div className="app" data-dirty={doc.dirty}>
         <header className="topbar">
-          <div className="brand" aria-hidden="true">Brinefield</div>
+          <div className="brand" aria-hidden="true">
+            Brinefield
+          </div>
           <nav className="file-commands" aria-label="File">
-            <button type="button" onClick={() => setShowStart(true)} data-command="start">Start</button>
-            <button type="button" onClick={commands.newScenario} title="Ctrl+N">New</button>
-            <button type="button" onClick={commands.open} title="Ctrl+O" data-command="open">Open…</button>
-            <button type="button" onClick={commands.save} title="Ctrl+S" data-command="save">Save</button>
-            <button type="button" onClick={commands.saveAs} title="Ctrl+Shift+S">Save as…</button>
-            <button type="button" onClick={() => step("undo")} disabled={history.past.length === 0} title="Undo (Ctrl+Z)" aria-label="Undo" data-command="undo">↶</button>
-            <button type="button" onClick={() => step("redo")} disabled={history.future.length === 0} title="Redo (Ctrl+Shift+Z)" aria-label="Redo" data-command="redo">↷</button>
-            <button type="button" onClick={commands.exportReport} disabled={!result || engine.error !== null} data-command="export-report">Export report</button>
-            <button type="button" onClick={commands.exportCsv} disabled={!result || engine.error !== null} data-command="export-csv">Export CSV</button>
-            <button type="button" onClick={commands.print} disabled={!result || engine.error !== null} data-command="print-pdf" title="Print the report, or save it as PDF (Ctrl+P)">Print / PDF…</button>
+            <button type="button" onClick={() => setShowStart(true)} data-command="start">
+              Start
+            </button>
+            <button type="button" onClick={commands.newScenario} title="Ctrl+N">
+              New
+            </button>
+            <button type="button" onClick={commands.open} title="Ctrl+O" data-command="open">
+              Open…
+            </button>
+            <button type="button" onClick={commands.save} title="Ctrl+S" data-command="save">
+              Save
+            </button>
+            <button type="button" onClick={commands.saveAs} title="Ctrl+Shift+S">
+              Save as…
+            </button>
+            <button
+              type="button"
+              onClick={() => step("undo")}
+              disabled={history.past.length === 0}
+              title="Undo (Ctrl+Z)"
+              aria-label="Undo"
+              data-command="undo"
+            >
+              ↶
+            </button>
+            <button
+              type="button"
+              onClick={() => step("redo")}
+              disabled={history.future.length === 0}
+              title="Redo (Ctrl+Shift+Z)"
+              aria-label="Redo"
+              data-command="redo"
+            >
+              ↷
+            </button>
+            <button
+              type="button"
+              onClick={commands.exportReport}
+              disabled={!result || engine.error !== null}
+              data-command="export-report"
+            >
+              Export report
+            </button>
+            <button
+              type="button"
+              onClick={commands.exportCsv}
+              disabled={!result || engine.error !== null}
+              data-command="export-csv"
+            >
+              Export CSV
+            </button>
+            <button
+              type="button"
+              onClick={commands.print}
+              disabled={!result || engine.error !== null}
+              data-command="print-pdf"
+              title="Print the report, or save it as PDF (Ctrl+P)"
+            >
+              Print / PDF…
+            </button>
           </nav>
           <div className="doc-title" title={doc.path ?? "not saved yet"}>
-            {doc.dirty ? <span className="dirty-dot" role="img" aria-label="unsaved changes" title="unsaved changes">●</span> : null}
-            {doc.study ? <span className="doc-kind" data-role="doc-kind">Study</span> : null}
+            {doc.dirty ? (
+              <span className="dirty-dot" role="img" aria-label="unsaved changes" title="unsaved changes">
+                ●
+              </span>
+            ) : null}
+            {doc.study ? (
+              <span className="doc-kind" data-role="doc-kind">
+                Study
+              </span>
+            ) : null}
             {title}
             {doc.path ? <span className="doc-path">{doc.path.replace(/^.*[\\/]/, "")}</span> : null}
           </div>
           <div className="tabs" {...mainTabs.list} aria-label="View">
-            <button {...mainTabs.tab("design")} data-command="design">Design</button>
-            <button {...mainTabs.tab("study")} data-command="study">Study</button>
+            <button {...mainTabs.tab("design")} data-command="design">
+              Design
+            </button>
+            <button {...mainTabs.tab("study")} data-command="study">
+              Study
+            </button>
           </div>
           <div className="segmented units" role="radiogroup" aria-label="Units">
-            <button type="button" role="radio" aria-checked={unitSystem === "si"} onClick={() => setUnitSystem("si")} data-units="si">SI</button>
-            <button type="button" role="radio" aria-checked={unitSystem === "us"} onClick={() => setUnitSystem("us")} data-units="us">US</button>
+            <button
+              type="button"
+              role="radio"
+              aria-checked={unitSystem === "si"}
+              onClick={() => setUnitSystem("si")}
+              data-units="si"
+            >
+              SI
+            </button>
+            <button
+              type="button"
+              role="radio"
+              aria-checked={unitSystem === "us"}
+              onClick={() => setUnitSystem("us")}
+              data-units="us"
+            >
+              US
+            </button>
           </div>
         </header>
 
         {recovery ? (
           <div className="banner recovery" role="status">
-            Unsaved work from {recovery.savedAt ? new Date(recovery.savedAt).toLocaleString() : "an earlier session"} was kept.
-            <button type="button" onClick={() => recover(recovery)}>Recover it</button>
-            <button type="button" className="link-button" onClick={() => { void host.autosaveClear().catch(logFailure("clearing the autosave")); setRecovery(null); }}>Discard</button>
+            Unsaved work from {recovery.savedAt ? new Date(recovery.savedAt).toLocaleString() : "an earlier session"}{" "}
+            was kept.
+            <button type="button" onClick={() => recover(recovery)}>
+              Recover it
+            </button>
+            <button
+              type="button"
+              className="link-button"
+              onClick={() => {
+                void host.autosaveClear().catch(logFailure("clearing the autosave"));
+                setRecovery(null);
+              }}
+            >
+              Discard
+            </button>
           </div>
         ) : null}
-        {notice ? <div className="banner notice" role="status" data-role="notice">{notice}</div> : null}
+        {notice ? (
+          <div className="banner notice" role="status" data-role="notice">
+            {notice}
+          </div>
+        ) : null}
 
         {tab === "design" ? (
           <main className="workspace" {...mainTabs.panel}>
@@ -462,10 +631,18 @@ export function App() {
               <div className="view3d-panel">
                 {result && scenario ? (
                   <Suspense fallback={<div className="placeholder">Loading the 3D view…</div>}>
-                    <PlumeView scenario={scenario} result={result} unitSystem={unitSystem} resetSignal={resetSignal} documentKey={documentKey} />
+                    <PlumeView
+                      scenario={scenario}
+                      result={result}
+                      unitSystem={unitSystem}
+                      resetSignal={resetSignal}
+                      documentKey={documentKey}
+                    />
                   </Suspense>
                 ) : (
-                  <div className="placeholder">{engine.error ? "No results: fix the inputs marked in red." : "Calculating…"}</div>
+                  <div className="placeholder">
+                    {engine.error ? "No results: fix the inputs marked in red." : "Calculating…"}
+                  </div>
                 )}
               </div>
               <div className="chart-panel">
@@ -476,19 +653,34 @@ export function App() {
                     <button {...chartTabs.tab("increase")}>Salinity increase vs distance</button>
                     {scenario?.ambient.record ? (
                       <>
-                        <button {...chartTabs.tab("record")} data-command="chart-record">Record over time</button>
-                        <button {...chartTabs.tab("duration")} data-command="chart-duration">Duration curve</button>
+                        <button {...chartTabs.tab("record")} data-command="chart-record">
+                          Record over time
+                        </button>
+                        <button {...chartTabs.tab("duration")} data-command="chart-duration">
+                          Duration curve
+                        </button>
                       </>
                     ) : null}
                   </div>
-                  <button type="button" className="view-as" aria-pressed={chartAsTable} onClick={() => setChartAsTable((t) => !t)} data-command="chart-as-table" title="Show the numbers of the chart as a table">
+                  <button
+                    type="button"
+                    className="view-as"
+                    aria-pressed={chartAsTable}
+                    onClick={() => setChartAsTable((t) => !t)}
+                    data-command="chart-as-table"
+                    title="Show the numbers of the chart as a table"
+                  >
                     Table
                   </button>
                 </div>
                 <div className="chart-body" {...chartTabs.panel}>
                   {result && scenario ? (
                     chart === "trajectory" ? (
-                      chartAsTable ? <TrajectoryTable result={result} scenario={scenario} unitSystem={unitSystem} /> : <TrajectoryChart result={result} scenario={scenario} unitSystem={unitSystem} />
+                      chartAsTable ? (
+                        <TrajectoryTable result={result} scenario={scenario} unitSystem={unitSystem} />
+                      ) : (
+                        <TrajectoryChart result={result} scenario={scenario} unitSystem={unitSystem} />
+                      )
                     ) : chart === "record" || chart === "duration" ? (
                       <RecordChart result={result} kind={chart === "record" ? "time" : "duration"} />
                     ) : chartAsTable ? (
@@ -502,8 +694,15 @@ export function App() {
             </section>
 
             <aside className="results-column" aria-label="Results">
-              <p className="caution" data-role="caution">{CAUTION}</p>
-              <div className={`engine-status${engine.error ? " error" : ""}`} role="status" data-role="engine-status" data-engine={engine.inWorker ? "worker" : "in-thread"}>
+              <p className="caution" data-role="caution">
+                {CAUTION}
+              </p>
+              <div
+                className={`engine-status${engine.error ? " error" : ""}`}
+                role="status"
+                data-role="engine-status"
+                data-engine={engine.inWorker ? "worker" : "in-thread"}
+              >
                 {engine.error ? (
                   <>
                     <b>{result ? "Showing the last good results." : "No results."}</b> {engine.error}
@@ -525,7 +724,11 @@ export function App() {
         ) : null}
         {studyMounted || tab === "study" ? (
           <main className="study-workspace" hidden={tab !== "study"} {...(tab === "study" ? mainTabs.panel : {})}>
-            {tab === "study" ? <p className="caution" data-role="caution">{CAUTION}</p> : null}
+            {tab === "study" ? (
+              <p className="caution" data-role="caution">
+                {CAUTION}
+              </p>
+            ) : null}
             <Suspense fallback={<div className="placeholder">Loading study tools…</div>}>
               <StudyPanel
                 active={tab === "study"}

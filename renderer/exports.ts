@@ -125,8 +125,16 @@ export function seriesCsv(result: BrinefieldResult, unitSystem: UnitSystem): str
  * the first cell and no reader splits it), then the table. Readers of the data skip one row.
  */
 
-export async function exportSeriesCsv(result: BrinefieldResult, file: ScenarioFile, unitSystem: UnitSystem): Promise<string> {
+export async function exportSeriesCsv(
+  result: BrinefieldResult,
+  file: ScenarioFile,
+  unitSystem: UnitSystem,
+): Promise<string> {
   const name = suggestedFileName(file, "series.csv");
-  const done = await exportFile(name, csvWithCaution(seriesCsv(result, unitSystem), result.caution, aboutResult(result)), [{ name: "CSV", extensions: ["csv"] }]);
+  const done = await exportFile(
+    name,
+    csvWithCaution(seriesCsv(result, unitSystem), result.caution, aboutResult(result)),
+    [{ name: "CSV", extensions: ["csv"] }],
+  );
   return done ? `Series exported: ${name}` : "Export cancelled.";
 }

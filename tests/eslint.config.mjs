@@ -4,12 +4,39 @@
 import tseslint from "typescript-eslint";
 import reactHooks from "eslint-plugin-react-hooks";
 
-const NODE_BUILTINS = ["node:*", "fs", "fs/*", "path", "os", "child_process", "worker_threads", "http", "https", "net", "crypto", "url"];
+const NODE_BUILTINS = [
+  "node:*",
+  "fs",
+  "fs/*",
+  "path",
+  "os",
+  "child_process",
+  "worker_threads",
+  "http",
+  "https",
+  "net",
+  "crypto",
+  "url",
+];
 
 /** Imports core/ (outside core/cli/) may not make: Node, the UI, Electron, the command-line adapter. */
 const CORE_FORBIDDEN = [
   { group: NODE_BUILTINS, message: "core/ is pure: Node belongs in core/cli/ (see DEVELOPERS.md, Layering)." },
-  { group: ["three", "three/*", "d3", "d3-selection", "react", "react/*", "react-dom", "react-dom/*", "electron", "playwright-core"], message: "core/ is pure: no UI, Electron or browser driving." },
+  {
+    group: [
+      "three",
+      "three/*",
+      "d3",
+      "d3-selection",
+      "react",
+      "react/*",
+      "react-dom",
+      "react-dom/*",
+      "electron",
+      "playwright-core",
+    ],
+    message: "core/ is pure: no UI, Electron or browser driving.",
+  },
   { group: ["**/renderer/**", "**/electron/**"], message: "core/ imports only core/." },
   { group: ["**/cli", "**/cli/**"], message: "core/cli is the Node adapter: nothing else in core/ imports it." },
 ];
@@ -32,13 +59,23 @@ export default tseslint.config(
       "no-restricted-syntax": [
         "error",
         {
-          selector: "CallExpression[callee.property.name='catch'] > :matches(ArrowFunctionExpression, FunctionExpression)[body.type='BlockStatement'][body.body.length=0]",
-          message: "No silent catch: report the failure to the user or the log, or say in a comment why it is safe to drop.",
+          selector:
+            "CallExpression[callee.property.name='catch'] > :matches(ArrowFunctionExpression, FunctionExpression)[body.type='BlockStatement'][body.body.length=0]",
+          message:
+            "No silent catch: report the failure to the user or the log, or say in a comment why it is safe to drop.",
         },
       ],
       // Unused names are errors, except a leading underscore that marks a value deliberately dropped
       // (`{ path: _path, ...rest }`).
-      "@typescript-eslint/no-unused-vars": ["error", { argsIgnorePattern: "^_", varsIgnorePattern: "^_", destructuredArrayIgnorePattern: "^_", caughtErrors: "none" }],
+      "@typescript-eslint/no-unused-vars": [
+        "error",
+        {
+          argsIgnorePattern: "^_",
+          varsIgnorePattern: "^_",
+          destructuredArrayIgnorePattern: "^_",
+          caughtErrors: "none",
+        },
+      ],
     },
   },
   {
@@ -71,7 +108,10 @@ export default tseslint.config(
           patterns: [
             { group: NODE_BUILTINS, message: "renderer/ runs in the browser: no Node." },
             { group: ["**/core/cli", "**/core/cli/**"], message: "core/cli is the Node adapter." },
-            { group: ["**/electron/**", "!**/electron/contract", "!**/electron/csp"], message: "renderer/ reaches the host only through renderer/platform and electron/contract.ts (types)." },
+            {
+              group: ["**/electron/**", "!**/electron/contract", "!**/electron/csp"],
+              message: "renderer/ reaches the host only through renderer/platform and electron/contract.ts (types).",
+            },
           ],
         },
       ],
@@ -92,7 +132,14 @@ export default tseslint.config(
     rules: {
       "no-restricted-imports": [
         "error",
-        { patterns: [{ group: ["**/renderer/**", "**/electron/**"], message: "The command line uses core/ and core/cli/node/ only." }] },
+        {
+          patterns: [
+            {
+              group: ["**/renderer/**", "**/electron/**"],
+              message: "The command line uses core/ and core/cli/node/ only.",
+            },
+          ],
+        },
       ],
     },
   },
@@ -107,7 +154,8 @@ export default tseslint.config(
             {
               regex: "(^|/)core/(?!cli/node(/|$))",
               allowTypeImports: true,
-              message: "electron/ imports core for types only (physics runs in the renderer's worker); file I/O comes from core/cli/node/.",
+              message:
+                "electron/ imports core for types only (physics runs in the renderer's worker); file I/O comes from core/cli/node/.",
             },
           ],
         },

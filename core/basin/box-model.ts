@@ -65,7 +65,12 @@ export function flushingTimeFromBasin(b: BasinInput): number {
  * @param naturalBackground C_n
  * @param exchangeFlow Q_e, m³/s
  */
-export function backgroundIncreaseFromLoad(dischargeFlow: number, discharge: number, naturalBackground: number, exchangeFlow: number): number {
+export function backgroundIncreaseFromLoad(
+  dischargeFlow: number,
+  discharge: number,
+  naturalBackground: number,
+  exchangeFlow: number,
+): number {
   return (dischargeFlow * (discharge - naturalBackground)) / exchangeFlow;
 }
 
@@ -85,7 +90,11 @@ export function backgroundIncreaseAtTime(steadyIncrease: number, b: BasinInput, 
  * Follows from C_edge = C_r + (C_d − C_r)/S ≤ C_n + allowed. Infinity when the raised background alone
  * uses up the allowance; 1 when the undiluted discharge already meets it.
  */
-export function requiredDilutionWithRaisedBackground(discharge: number, raised: number, limitConcentration: number): number {
+export function requiredDilutionWithRaisedBackground(
+  discharge: number,
+  raised: number,
+  limitConcentration: number,
+): number {
   if (discharge <= limitConcentration) return 1;
   if (limitConcentration <= raised) return Infinity;
   return Math.max(1, (discharge - raised) / (limitConcentration - raised));

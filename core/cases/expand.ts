@@ -56,17 +56,15 @@ export function expandCases(s: Scenario): CaseSpec[] {
   if (s.ambient.record) return recordSteps(s).map((st) => (st.refused ? { ...st.spec, refused: st.refused } : st.spec));
   const cases: CaseSpec[] = [
     { name: STATED_CASE, kind: "stated", weight: 1, addedSlackWater: false, keeps: [], sameAs: null, scenario: s },
-    ...s.ambientCases.map(
-      (c): CaseSpec => ({
-        name: c.name,
-        kind: "listed",
-        weight: c.weight,
-        addedSlackWater: false,
-        keeps: c.sets,
-        sameAs: null,
-        scenario: scenarioForAmbient(s, c),
-      }),
-    ),
+    ...s.ambientCases.map((c): CaseSpec => ({
+      name: c.name,
+      kind: "listed",
+      weight: c.weight,
+      addedSlackWater: false,
+      keeps: c.sets,
+      sameAs: null,
+      scenario: scenarioForAmbient(s, c),
+    })),
   ];
   if (s.options.addSlackWater) {
     cases.push({
@@ -131,7 +129,9 @@ export function keptValueNotes(s: Scenario, paths: readonly string[]): string[] 
     for (const c of cases) {
       if (c.keeps.includes(field)) {
         const why = c.addedSlackWater ? "zero current, by definition" : "its own value, set in ambientCases";
-        out.push(`Case "${c.name}" keeps ${why}, for ${path}; the change applies to the stated conditions and the cases that do not set it.`);
+        out.push(
+          `Case "${c.name}" keeps ${why}, for ${path}; the change applies to the stated conditions and the cases that do not set it.`,
+        );
       }
     }
   }

@@ -30,7 +30,9 @@ const zodEnglishOnly = {
   name: "zod-english-only",
   setup(build) {
     build.onResolve({ filter: /^\.\.\/locales\/index\.js$/ }, (args) =>
-      /[\\/]zod[\\/]/.test(args.importer) ? { path: join(dirname(args.importer), "../locales/en.js"), namespace: "zod-locales" } : undefined,
+      /[\\/]zod[\\/]/.test(args.importer)
+        ? { path: join(dirname(args.importer), "../locales/en.js"), namespace: "zod-locales" }
+        : undefined,
     );
     build.onLoad({ filter: /.*/, namespace: "zod-locales" }, (args) => ({
       contents: `export { default as en } from ${JSON.stringify(args.path)};`,
@@ -47,7 +49,9 @@ async function ensureBundle() {
   try {
     esbuild = await import("esbuild");
   } catch {
-    process.stderr.write("brinefield: the command-line bundle is missing and esbuild is not installed; run `npm install` first.\n");
+    process.stderr.write(
+      "brinefield: the command-line bundle is missing and esbuild is not installed; run `npm install` first.\n",
+    );
     process.exit(2);
   }
   mkdirSync(dirname(out), { recursive: true });
@@ -63,7 +67,9 @@ async function ensureBundle() {
       external: ["playwright-core", "esbuild", "vite"],
       logLevel: "error",
       plugins: [zodEnglishOnly],
-      banner: { js: "import { createRequire as __brinefieldRequire } from 'node:module'; const require = __brinefieldRequire(import.meta.url);" },
+      banner: {
+        js: "import { createRequire as __brinefieldRequire } from 'node:module'; const require = __brinefieldRequire(import.meta.url);",
+      },
     });
   } catch (err) {
     process.stderr.write(`brinefield: could not build the command-line bundle:\n${err?.message ?? err}\n`);

@@ -61,7 +61,13 @@ ${CAUTION}
 export async function cliMain(argv: readonly string[], rawIo: CliIO = nodeIO()): Promise<number> {
   // Everything printed passes through terminalSafe: user text (names, quoted values) may hold
   // control characters or escape sequences that would drive the terminal.
-  const io: CliIO = { ...rawIo, readFile: (p) => rawIo.readFile(p), writeFile: (p, d) => rawIo.writeFile(p, d), stdout: (t) => rawIo.stdout(terminalSafeChunk(t)), stderr: (t) => rawIo.stderr(terminalSafeChunk(t)) };
+  const io: CliIO = {
+    ...rawIo,
+    readFile: (p) => rawIo.readFile(p),
+    writeFile: (p, d) => rawIo.writeFile(p, d),
+    stdout: (t) => rawIo.stdout(terminalSafeChunk(t)),
+    stderr: (t) => rawIo.stderr(terminalSafeChunk(t)),
+  };
   let code: number;
   try {
     code = await dispatch(argv, io);
@@ -74,7 +80,9 @@ export async function cliMain(argv: readonly string[], rawIo: CliIO = nodeIO()):
       code = 2;
     } else {
       const msg = err instanceof Error ? err.message : String(err);
-      io.stderr(`brinefield: internal error: ${msg}\nPlease report it with the scenario file.${process.env.BRINEFIELD_DEBUG ? `\n${(err as Error)?.stack}` : ""}\n`);
+      io.stderr(
+        `brinefield: internal error: ${msg}\nPlease report it with the scenario file.${process.env.BRINEFIELD_DEBUG ? `\n${(err as Error)?.stack}` : ""}\n`,
+      );
       code = 70;
     }
   }
@@ -92,7 +100,10 @@ async function dispatch(argv: readonly string[], io: CliIO): Promise<number> {
     return 0;
   }
   const cmd = COMMANDS.find((c) => c.name === name);
-  if (!cmd) throw new CliError(`brinefield: unknown command "${name}". Commands: ${COMMANDS.map((c) => c.name).join(", ")}. See \`brinefield --help\`.`);
+  if (!cmd)
+    throw new CliError(
+      `brinefield: unknown command "${name}". Commands: ${COMMANDS.map((c) => c.name).join(", ")}. See \`brinefield --help\`.`,
+    );
   if (rest.includes("-h") || rest.includes("--help")) {
     io.stdout(cmd.help.endsWith("\n") ? cmd.help : cmd.help + "\n");
     return 0;

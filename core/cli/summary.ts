@@ -26,7 +26,9 @@ function wrap(text: string, width = 96, indent = ""): string {
 
 function table(rows: string[][]): string {
   const widths = rows[0]!.map((_, c) => Math.max(...rows.map((r) => (r[c] ?? "").length)));
-  return rows.map((r) => "  " + r.map((cell, c) => (c === 0 ? cell.padEnd(widths[c]!) : cell.padStart(widths[c]!))).join("   ")).join("\n");
+  return rows
+    .map((r) => "  " + r.map((cell, c) => (c === 0 ? cell.padEnd(widths[c]!) : cell.padStart(widths[c]!))).join("   "))
+    .join("\n");
 }
 
 export function summaryText(s: Scenario, r: BrinefieldResult): string {
@@ -51,7 +53,12 @@ export function summaryText(s: Scenario, r: BrinefieldResult): string {
           ? `${n(top.salinity, "g/kg")} / ${n(top.temperature, "°C")} (uniform)`
           : `${n(top.salinity, "g/kg")} / ${n(top.temperature, "°C")} at surface, ${n(bottom.salinity, "g/kg")} / ${n(bottom.temperature, "°C")} at ${n(bottom.depth, "m")}`,
       ],
-      ["Current", a.currentSpeed > 0 ? `${n(a.currentSpeed, "m/s")} toward ${n(a.currentDirection, "°")} from north` : "none (stagnant)"],
+      [
+        "Current",
+        a.currentSpeed > 0
+          ? `${n(a.currentSpeed, "m/s")} toward ${n(a.currentDirection, "°")} from north`
+          : "none (stagnant)",
+      ],
       [
         "Diffuser",
         `${d.layout}, ${d.portCount} port${d.portCount > 1 ? "s" : ""} of ${n(d.portDiameter, "m")}${d.portCount > 1 && d.layout === "line" ? ` at ${n(d.portSpacing, "m")} spacing` : ""}`,
@@ -96,7 +103,12 @@ export function summaryText(s: Scenario, r: BrinefieldResult): string {
         [...row("Return to port level", (x) => n(x.returnDistance, "m")), ratio((x) => x.returnDistance)],
         [...row("Seabed impact", (x) => n(x.impactDistance, "m")), ratio((x) => x.impactDistance)],
         [...row("Impact dilution", (x) => n(x.impactDilution)), ratio((x) => x.impactDilution)],
-        [...row("Impact dilution range", (x) => (x.dilutionRange ? `${f(x.dilutionRange[0], 3)}–${f(x.dilutionRange[1], 3)}` : "—")), ""],
+        [
+          ...row("Impact dilution range", (x) =>
+            x.dilutionRange ? `${f(x.dilutionRange[0], 3)}–${f(x.dilutionRange[1], 3)}` : "—",
+          ),
+          "",
+        ],
         [...row("Near-field end", (x) => n(x.nearFieldDistance, "m")), ratio((x) => x.nearFieldDistance)],
         [...row("Near-field dilution", (x) => n(x.nearFieldDilution)), ratio((x) => x.nearFieldDilution)],
         [...row("Entrained seawater flow", (x) => n(x.entrainedFlow, "m³/s")), ratio((x) => x.entrainedFlow)],
@@ -114,21 +126,36 @@ export function summaryText(s: Scenario, r: BrinefieldResult): string {
   }
   if (r.mixingZone) {
     const z = r.mixingZone;
-    out.push("", `Mixing-zone edge at ${n(z.radius, "m")}: dilution ${n(z.dilution)} (${z.method}; near field from ${z.nearFieldMethod})`);
-    if (z.edgeInsideNearField) out.push("  The edge lies inside the near field: the jet's own dilution where it crosses the edge is used.");
+    out.push(
+      "",
+      `Mixing-zone edge at ${n(z.radius, "m")}: dilution ${n(z.dilution)} (${z.method}; near field from ${z.nearFieldMethod})`,
+    );
+    if (z.edgeInsideNearField)
+      out.push("  The edge lies inside the near field: the jet's own dilution where it crosses the edge is used.");
     for (const alt of z.alternatives) out.push(`  alternative: ${alt.method} → dilution ${n(alt.dilution)}`);
     out.push(
       table([
         ["Constituent", "discharge", "background", "at edge", "increase"],
-        ...z.constituents.map((c) => [c.constituent, `${n(c.discharge)} ${c.unit}`, `${n(c.background)} ${c.unit}`, `${n(c.concentration)} ${c.unit}`, `${n(c.increase)} ${c.unit}`]),
+        ...z.constituents.map((c) => [
+          c.constituent,
+          `${n(c.discharge)} ${c.unit}`,
+          `${n(c.background)} ${c.unit}`,
+          `${n(c.concentration)} ${c.unit}`,
+          `${n(c.increase)} ${c.unit}`,
+        ]),
       ]),
     );
     if (z.layerThickness !== null) out.push(`  Dense-layer thickness at the edge: ${n(z.layerThickness, "m")}`);
     const risingPlume = r.nearField.some((m) => m.risingField !== undefined);
-    out.push(`  ${risingPlume ? "Field area (surface or trap level)" : "Seabed footprint"} above the governing limit: ${n(z.footprint.area, "m²")}, furthest ${n(z.footprint.furthestExtent, "m")}`);
+    out.push(
+      `  ${risingPlume ? "Field area (surface or trap level)" : "Seabed footprint"} above the governing limit: ${n(z.footprint.area, "m²")}, furthest ${n(z.footprint.furthestExtent, "m")}`,
+    );
     for (const m of r.nearField) {
       const f = m.risingField;
-      if (f) out.push(`  Rising plume (${m.method}): ${f.kind === "trapped" ? `trapped ${n(f.trapHeight, "m")} above the port` : f.kind === "surface" ? "reaches the surface" : "no end point"}, dilution ${n(f.dilution)} where the field starts ${n(f.distance, "m")} from the port`);
+      if (f)
+        out.push(
+          `  Rising plume (${m.method}): ${f.kind === "trapped" ? `trapped ${n(f.trapHeight, "m")} above the port` : f.kind === "surface" ? "reaches the surface" : "no end point"}, dilution ${n(f.dilution)} where the field starts ${n(f.distance, "m")} from the port`,
+        );
     }
   }
   if (r.blend) {
@@ -150,7 +177,10 @@ export function summaryText(s: Scenario, r: BrinefieldResult): string {
   }
   if (r.compliance) {
     const c = r.compliance;
-    out.push("", `Verdict under the stated conditions: ${c.verdict} — governing: ${c.governingConstituent} (margin ${n(c.margin)})`);
+    out.push(
+      "",
+      `Verdict under the stated conditions: ${c.verdict} — governing: ${c.governingConstituent} (margin ${n(c.margin)})`,
+    );
     for (const reason of c.scopeReasons) out.push(wrap(`- outside scope: ${reason}`, 96, "  "));
     out.push(
       table([
@@ -177,12 +207,17 @@ export function summaryText(s: Scenario, r: BrinefieldResult): string {
         ...r.cases.map((k) => [k.name, n(k.edgeDilution), n(k.margin), k.verdict]),
       ]),
     );
-    for (const k of r.cases.slice(1)) for (const reason of k.scopeReasons) out.push(wrap(`- ${k.name}: outside scope: ${reason}`, 96, "  "));
-    out.push("", `OVERALL VERDICT: ${o.verdict} — governing case: ${o.governingCase} (edge dilution ${n(o.edgeDilution)}, margin ${n(o.margin)})`);
+    for (const k of r.cases.slice(1))
+      for (const reason of k.scopeReasons) out.push(wrap(`- ${k.name}: outside scope: ${reason}`, 96, "  "));
+    out.push(
+      "",
+      `OVERALL VERDICT: ${o.verdict} — governing case: ${o.governingCase} (edge dilution ${n(o.edgeDilution)}, margin ${n(o.margin)})`,
+    );
   }
   if (r.warnings.length) {
     out.push("", `Warnings (${r.warnings.length})`);
-    for (const w of r.warnings) out.push(wrap(`[${w.severity}] ${w.message}${w.source ? ` (${w.source})` : ""}`, 96, "  "));
+    for (const w of r.warnings)
+      out.push(wrap(`[${w.severity}] ${w.message}${w.source ? ` (${w.source})` : ""}`, 96, "  "));
   }
   if (r.mixingZone?.notModelled.length) {
     out.push("", "Not modelled");

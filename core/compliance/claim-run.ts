@@ -54,7 +54,11 @@ export function checkClaimOnScenario(s: Scenario, claimedDilution: number, atDis
   }
   const distance = atDistance ?? s.mixingZone.radius;
   if (!Number.isFinite(distance) || !(distance > 0)) {
-    return { ok: false, field: "at", message: `distance ${distance} m must be a finite number of metres greater than 0.` };
+    return {
+      ok: false,
+      field: "at",
+      message: `distance ${distance} m must be a finite number of metres greater than 0.`,
+    };
   }
   const seriesEnd = claimSeriesEnd(s);
   if (distance > seriesEnd * (1 + 1e-9)) {

@@ -93,7 +93,10 @@ export function chainParts(method: string): { nearFieldMethod: string; farField:
   const plus = method.indexOf(" + ");
   if (plus >= 0) {
     const far = method.slice(plus + 3).trim();
-    return { nearFieldMethod: method.slice(0, plus), farField: far === "passive-diffusion" ? "passive-diffusion" : "gravity-current" };
+    return {
+      nearFieldMethod: method.slice(0, plus),
+      farField: far === "passive-diffusion" ? "passive-diffusion" : "gravity-current",
+    };
   }
   const paren = method.indexOf(" (");
   return { nearFieldMethod: paren >= 0 ? method.slice(0, paren) : method, farField: "jet" };
@@ -148,7 +151,11 @@ function scatterOf(r: BrinefieldResult, nf: string): [number, number] {
  * The claim check from case results already computed at the distance (every result's mixing-zone radius
  * is `distance`). Pure: the scenario-level runner is `checkClaimOnScenario` (claim-run.ts).
  */
-export function checkClaimFromCases(cases: readonly ClaimCaseResult[], claimedDilution: number, distance: number): ClaimCheck {
+export function checkClaimFromCases(
+  cases: readonly ClaimCaseResult[],
+  claimedDilution: number,
+  distance: number,
+): ClaimCheck {
   if (cases.length === 0) throw new Error("checkClaimFromCases: no case results");
   const tol = 1 + CLAIM_TOLERANCE;
   const chains: ClaimChain[] = [];
@@ -177,7 +184,11 @@ export function checkClaimFromCases(cases: readonly ClaimCaseResult[], claimedDi
       });
     }
   }
-  const caseList: ClaimCase[] = cases.map((c) => ({ name: c.name, edgeDilution: c.result.mixingZone.dilution, currentSpeed: c.currentSpeed }));
+  const caseList: ClaimCase[] = cases.map((c) => ({
+    name: c.name,
+    edgeDilution: c.result.mixingZone.dilution,
+    currentSpeed: c.currentSpeed,
+  }));
   let gov = caseList[0]!;
   for (const k of caseList) if (k.edgeDilution < gov.edgeDilution) gov = k;
   const conservative = gov.edgeDilution;
@@ -203,7 +214,8 @@ export function checkClaimFromCases(cases: readonly ClaimCaseResult[], claimedDi
     summary =
       `The claimed dilution ${fmt(claimedDilution)} ${where} is ${ratio.toFixed(2)}× Brinefield's conservative value ` +
       `${fmt(conservative)} (case ${caseLabel(gov.name)}). ${reproducing.length} of ${chains.length} method chains give at least that much: ` +
-      groupText.join("; ") + ".";
+      groupText.join("; ") +
+      ".";
     for (const [m, list] of groups) {
       const first = list[0]!;
       const scatterOnly = list.filter((c) => c.onlyWithinScatter).map((c) => caseLabel(c.case));
@@ -214,7 +226,9 @@ export function checkClaimFromCases(cases: readonly ClaimCaseResult[], claimedDi
       const scatter = scatterOnly.length
         ? ` In ${scatterOnly.join(", ")} only the top of the near-field method's stated scatter reaches the claim.`
         : "";
-      assumptionsNeeded.push(`${m}, in ${list.map((c) => caseLabel(c.case)).join(", ")}: ${rest.join(" ")}${merged}${scatter}`);
+      assumptionsNeeded.push(
+        `${m}, in ${list.map((c) => caseLabel(c.case)).join(", ")}: ${rest.join(" ")}${merged}${scatter}`,
+      );
     }
   } else {
     const top = chains.reduce((a, b) => (b.high > a.high ? b : a));

@@ -65,14 +65,20 @@ export function constituentSources(
   ];
 }
 
-function limitFor(source: ConstituentSource, limit: LimitInput): { absolute: number; background: number; text: string } {
+function limitFor(
+  source: ConstituentSource,
+  limit: LimitInput,
+): { absolute: number; background: number; text: string } {
   const background = limit.background ?? source.background;
   const fromIncrease = limit.maxIncrease !== undefined ? background + limit.maxIncrease : Infinity;
   const fromAbsolute = limit.maxConcentration ?? Infinity;
   const absolute = Math.min(fromIncrease, fromAbsolute);
   const parts: string[] = [];
   const unit = unitSymbol(limit.unit);
-  if (limit.maxIncrease !== undefined) parts.push(`at most ${formatNumber(limit.maxIncrease)} ${unit} above background ${formatNumber(background)} ${unit}`);
+  if (limit.maxIncrease !== undefined)
+    parts.push(
+      `at most ${formatNumber(limit.maxIncrease)} ${unit} above background ${formatNumber(background)} ${unit}`,
+    );
   if (limit.maxConcentration !== undefined) parts.push(`at most ${formatNumber(limit.maxConcentration)} ${unit}`);
   const basis = limit.basis ? ` (${limit.basis})` : "";
   return { absolute, background, text: `${source.name} ${parts.join(" and ")}${basis}` };
@@ -96,7 +102,13 @@ export function basinFromScenario(scenario: Scenario, sources: readonly Constitu
   const qe = exchangeFlowFromBasin(b);
   const constituents = sources.map((s) => {
     const increase = backgroundIncreaseFromLoad(scenario.discharge.flow, s.discharge, s.background, qe);
-    return { constituent: s.name, unit: s.unit, naturalBackground: s.background, increase, raisedBackground: s.background + increase };
+    return {
+      constituent: s.name,
+      unit: s.unit,
+      naturalBackground: s.background,
+      increase,
+      raisedBackground: s.background + increase,
+    };
   });
   const sal = constituents.find((c) => c.constituent === "salinity")!;
   return {
@@ -128,12 +140,15 @@ export function complianceFromEdgeDilution(
 ): ComplianceAssessment {
   // Natural backgrounds: each limit's own background where it gives one, else the constituent's.
   const natural = constituentSources(scenario, ambientSalinity, ambientTemperature).map((s) => {
-    const lim = scenario.mixingZone.limits.find((l) => l.constituent.toLowerCase() === s.name.toLowerCase() && l.background !== undefined);
+    const lim = scenario.mixingZone.limits.find(
+      (l) => l.constituent.toLowerCase() === s.name.toLowerCase() && l.background !== undefined,
+    );
     return lim ? { ...s, background: lim.background! } : s;
   });
   const basin = basinFromScenario(scenario, natural);
   // With a basin the water around the outfall carries the raised background: the plume dilutes toward it.
-  const raisedOf = (name: string, fallback: number) => basin?.constituents.find((c) => c.constituent === name)?.raisedBackground ?? fallback;
+  const raisedOf = (name: string, fallback: number) =>
+    basin?.constituents.find((c) => c.constituent === name)?.raisedBackground ?? fallback;
   const sources = constituentSources(scenario, ambientSalinity, ambientTemperature);
   const warnings: ResultWarning[] = [];
   if (basin) {
@@ -169,9 +184,15 @@ export function complianceFromEdgeDilution(
     const source = sources.find((s) => s.name.toLowerCase() === limit.constituent.toLowerCase());
     if (!source) {
       warnings.push(
-        warning("limit-constituent-unknown", "serious", `Limit on "${limit.constituent}" names no known constituent; it was not checked.`, {
-          parameter: "mixingZone.limits", stage: "compliance",
-        }),
+        warning(
+          "limit-constituent-unknown",
+          "serious",
+          `Limit on "${limit.constituent}" names no known constituent; it was not checked.`,
+          {
+            parameter: "mixingZone.limits",
+            stage: "compliance",
+          },
+        ),
       );
       continue;
     }
@@ -198,13 +219,34 @@ export function complianceFromEdgeDilution(
     } else if (required === 1) {
       text += ": met by the undiluted discharge";
     }
-    if (basin && Number.isFinite(required)) text += `; background raised by the basin build-up to ${formatNumber(dilutesToward)} ${unitSymbol(limit.unit)}`;
-    verdicts.push({ constituent: source.name, unit: limit.unit, requiredDilution: required, edgeDilution, pass, margin, limit: text });
+    if (basin && Number.isFinite(required))
+      text += `; background raised by the basin build-up to ${formatNumber(dilutesToward)} ${unitSymbol(limit.unit)}`;
+    verdicts.push({
+      constituent: source.name,
+      unit: limit.unit,
+      requiredDilution: required,
+      edgeDilution,
+      pass,
+      margin,
+      limit: text,
+    });
   }
   if (!verdicts.length) {
-    warnings.push(warning("no-limits", "info", "No concentration limits given; compliance was not assessed.", { stage: "compliance" }));
+    warnings.push(
+      warning("no-limits", "info", "No concentration limits given; compliance was not assessed.", {
+        stage: "compliance",
+      }),
+    );
     return {
-      compliance: { governingConstituent: "none", requiredDilution: 1, pass: true, verdict: "meets", scopeReasons: [], margin: edgeDilution, constituents: [] },
+      compliance: {
+        governingConstituent: "none",
+        requiredDilution: 1,
+        pass: true,
+        verdict: "meets",
+        scopeReasons: [],
+        margin: edgeDilution,
+        constituents: [],
+      },
       constituents,
       warnings,
       ...(basin ? { basin } : {}),

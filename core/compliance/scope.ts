@@ -19,7 +19,11 @@ import type { ResultWarning } from "../warnings";
 import { formatNumber } from "../units";
 
 /** Warning codes that mean the jet or the layer reaches the water surface. */
-export const SURFACE_WARNING_CODES: ReadonlySet<string> = new Set(["jet-reaches-surface", "surface-contact", "layer-reaches-surface"]);
+export const SURFACE_WARNING_CODES: ReadonlySet<string> = new Set([
+  "jet-reaches-surface",
+  "surface-contact",
+  "layer-reaches-surface",
+]);
 
 export interface ScopeInput {
   readonly depth: number; // m, water depth at the diffuser

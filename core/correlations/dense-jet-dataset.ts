@@ -87,10 +87,7 @@ export interface AngleInterpolation {
  * Linear interpolation of a coefficient in discharge angle between the two tabulated angles that bracket
  * `angle`. Returns null outside the tabulated range: callers clamp and warn, never extrapolate silently.
  */
-export function interpolateAngleTable(
-  table: readonly AngleTablePoint[],
-  angle: number,
-): AngleInterpolation | null {
+export function interpolateAngleTable(table: readonly AngleTablePoint[], angle: number): AngleInterpolation | null {
   if (table.length === 0 || !Number.isFinite(angle)) return null;
   const first = table[0];
   const last = table[table.length - 1];

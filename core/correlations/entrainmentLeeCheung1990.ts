@@ -172,7 +172,13 @@ export function entrainmentLeeCheung1990ValidityIssues(inputs: EntrainmentValidi
           "integral-weak-crossflow",
           "info",
           `Crossflow Froude number ${fc.toFixed(2)} < 0.8: jet-dominated regime with detrainment, where a Lagrangian integral model under-predicts the maximum rise.`,
-          { parameter: "crossflowFroude", value: fc, range: [0.8, Infinity], source: "Lai & Lee (2013)", stage: "integral" },
+          {
+            parameter: "crossflowFroude",
+            value: fc,
+            range: [0.8, Infinity],
+            source: "Lai & Lee (2013)",
+            stage: "integral",
+          },
         ),
       );
     }

@@ -29,4 +29,8 @@ export {
   entrainmentLeeCheung1990Rate,
   entrainmentLeeCheung1990ValidityIssues,
 } from "./entrainmentLeeCheung1990";
-export { SHARQAWY_2010_VISCOSITY_SOURCE, viscosityFromST, viscosityFromSTValidityIssues } from "./sharqawy-2010-viscosity";
+export {
+  SHARQAWY_2010_VISCOSITY_SOURCE,
+  viscosityFromST,
+  viscosityFromSTValidityIssues,
+} from "./sharqawy-2010-viscosity";

@@ -76,9 +76,7 @@ export function laiLee2012CoefficientsAtAngle(angle: number): DenseJetCoefficien
   const [dLo, dHi] = LAI_LEE_2012_DILUTION_ANGLES;
   const inDilutionRange = angle >= dLo && angle <= dHi;
   if (!inDilutionRange) {
-    notes.push(
-      `Lai & Lee (2012) state S_t and S_i only for ${dLo}°–${dHi}°; none given at ${angle.toFixed(1)}°.`,
-    );
+    notes.push(`Lai & Lee (2012) state S_t and S_i only for ${dLo}°–${dHi}°; none given at ${angle.toFixed(1)}°.`);
   }
   return {
     angle,
@@ -116,8 +114,7 @@ export function laiLee2012CoefficientsAtAngleValidityIssues(input: DenseJetValid
       warning(
         "lai-lee-2012-froude-below-range",
         "serious",
-        `Densimetric Froude number ${froude.toFixed(1)} is below the F = ${fLo}–${fHi} ` +
-          `Lai & Lee (2012) studied.`,
+        `Densimetric Froude number ${froude.toFixed(1)} is below the F = ${fLo}–${fHi} ` + `Lai & Lee (2012) studied.`,
         { parameter: "froude", value: froude, range: [fLo, fHi], ...extra },
       ),
     );

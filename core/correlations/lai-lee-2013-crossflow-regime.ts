@@ -43,11 +43,7 @@ export type CrossflowRegime = "stagnant" | "jet-dominated" | "bent-over" | "cros
  * @param froude F = U/√(g′d), dimensionless
  * @returns F_c, dimensionless; 0 for no current; NaN when U ≤ 0
  */
-export function crossflowFroudeFromSpeeds(
-  currentSpeed: number,
-  exitVelocity: number,
-  froude: number,
-): number {
+export function crossflowFroudeFromSpeeds(currentSpeed: number, exitVelocity: number, froude: number): number {
   if (!(exitVelocity > 0)) return Number.NaN; // no jet: the ratio is undefined
   return (Math.max(0, currentSpeed) / exitVelocity) * froude;
 }

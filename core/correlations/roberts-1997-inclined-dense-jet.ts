@@ -26,12 +26,7 @@
  * (1.6·F here vs 1.06·F in Lai & Lee 2012, abstract).
  */
 import { warning, type ResultWarning } from "../warnings";
-import type {
-  DenseJetCoefficients,
-  DenseJetDataset,
-  DenseJetValidityInput,
-  TracedValue,
-} from "./dense-jet-dataset";
+import type { DenseJetCoefficients, DenseJetDataset, DenseJetValidityInput, TracedValue } from "./dense-jet-dataset";
 
 export const ROBERTS_1997_SOURCE =
   "Roberts, Ferrier & Daviero (1997), J. Hydraulic Eng. 123(8):693–699, 60° jet: y_t = 2.2 dF, " +

@@ -27,21 +27,31 @@ export function viscosityFromSTValidityIssues(salinity: number, temperature: num
   const out: ResultWarning[] = [];
   if (salinity < 0 || salinity > 150)
     out.push(
-      warning("viscosity-salinity-range", "info", `Viscosity correlation used at ${salinity.toFixed(1)} g/kg, outside its 0–150 g/kg fit.`, {
-        parameter: "salinity",
-        value: salinity,
-        range: [0, 150],
-        source: SHARQAWY_2010_VISCOSITY_SOURCE,
-      }),
+      warning(
+        "viscosity-salinity-range",
+        "info",
+        `Viscosity correlation used at ${salinity.toFixed(1)} g/kg, outside its 0–150 g/kg fit.`,
+        {
+          parameter: "salinity",
+          value: salinity,
+          range: [0, 150],
+          source: SHARQAWY_2010_VISCOSITY_SOURCE,
+        },
+      ),
     );
   if (temperature < 0 || temperature > 180)
     out.push(
-      warning("viscosity-temperature-range", "info", `Viscosity correlation used at ${temperature.toFixed(1)} °C, outside its 0–180 °C fit.`, {
-        parameter: "temperature",
-        value: temperature,
-        range: [0, 180],
-        source: SHARQAWY_2010_VISCOSITY_SOURCE,
-      }),
+      warning(
+        "viscosity-temperature-range",
+        "info",
+        `Viscosity correlation used at ${temperature.toFixed(1)} °C, outside its 0–180 °C fit.`,
+        {
+          parameter: "temperature",
+          value: temperature,
+          range: [0, 180],
+          source: SHARQAWY_2010_VISCOSITY_SOURCE,
+        },
+      ),
     );
   return out;
 }

@@ -114,7 +114,12 @@ export function brooksDilutionFromDistanceValidityIssues(input: BrooksInput): Re
         "brooks-no-current",
         "info",
         "Passive diffusion in a current needs a current; none given, so no passive dilution is credited.",
-        { parameter: "ambient.currentSpeed", value: input.currentSpeed, source: BROOKS_1960_SOURCE, stage: "far-field" },
+        {
+          parameter: "ambient.currentSpeed",
+          value: input.currentSpeed,
+          source: BROOKS_1960_SOURCE,
+          stage: "far-field",
+        },
       ),
     );
   }

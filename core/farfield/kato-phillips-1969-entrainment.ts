@@ -46,7 +46,13 @@ export function bedEntrainmentFromRichardsonValidityIssues(richardson: number): 
         "info",
         `The current stirs the dense layer strongly (Ri* = ${richardson.toFixed(1)}, below ${KATO_PHILLIPS_RI_STAR_MIN}); ` +
           `bed-stirred entrainment is held at its Ri* = ${KATO_PHILLIPS_RI_STAR_MIN} value.`,
-        { parameter: "richardson", value: richardson, range: [KATO_PHILLIPS_RI_STAR_MIN, Infinity], source: KATO_PHILLIPS_1969_SOURCE, stage: "far-field" },
+        {
+          parameter: "richardson",
+          value: richardson,
+          range: [KATO_PHILLIPS_RI_STAR_MIN, Infinity],
+          source: KATO_PHILLIPS_1969_SOURCE,
+          stage: "far-field",
+        },
       ),
     ];
   }

@@ -133,9 +133,14 @@ export function beyondNearField(input: BeyondInput): BeyondOutput {
     const end = nearFieldEndFromResult(nf);
     if (!end) {
       warnings.push(
-        warning("near-field-no-end", "warning", `Near-field method "${nf.method}" gave no near-field end; not carried to the edge.`, {
-          stage: "far-field",
-        }),
+        warning(
+          "near-field-no-end",
+          "warning",
+          `Near-field method "${nf.method}" gave no near-field end; not carried to the edge.`,
+          {
+            stage: "far-field",
+          },
+        ),
       );
       continue;
     }
@@ -158,16 +163,12 @@ export function beyondNearField(input: BeyondInput): BeyondOutput {
   // Bed slope magnitude: gravity drives the layer downslope relative to the water above whatever the current.
   const bedSlope = (): number => (scenario.ambient.bedSlope > 0 ? scenario.ambient.bedSlope : 0);
   const crossLength = (): number =>
-    u > 0 ? diffuserLength * Math.abs(Math.sin(degToRad(diffuser.diffuserAzimuth - column.currentDirection))) : diffuserLength;
+    u > 0
+      ? diffuserLength * Math.abs(Math.sin(degToRad(diffuser.diffuserAzimuth - column.currentDirection)))
+      : diffuserLength;
 
   // Integrates over [end of the near field, xEnd] in `steps` steps, stopping after the first step past xStop.
-  const integrateFar = (
-    c: Chain,
-    method: FarMethod,
-    xEnd: number,
-    steps: number,
-    xStop: number,
-  ): FarSeries => {
+  const integrateFar = (c: Chain, method: FarMethod, xEnd: number, steps: number, xStop: number): FarSeries => {
     // Passive diffusion reuses the spreading layer's distances and start thickness (memoised below).
     if (method === "passive-diffusion" && u > 0) return passiveFromLayer(c, farSeries(c, "gravity-current"));
     // Like with like: the layer is handed the volume flux (flux-averaged dilution) and its dilution is
@@ -206,7 +207,14 @@ export function beyondNearField(input: BeyondInput): BeyondOutput {
     const k = passiveHandOverIndex(gc, gBottom / c.fluxFactor);
     if (k < 0) return { ...gc, handOverDistance: null };
     const field = brooksFieldFromInput({ initialWidth: gc.width[k], currentSpeed: u });
-    const out: FarSeries = { distance: [], dilution: [], thickness: [], width: [], switchDistance: gc.switchDistance, handOverDistance: gc.distance[k] };
+    const out: FarSeries = {
+      distance: [],
+      dilution: [],
+      thickness: [],
+      width: [],
+      switchDistance: gc.switchDistance,
+      handOverDistance: gc.distance[k],
+    };
     for (let i = 0; i < gc.distance.length; i++) {
       const r = gc.distance[i];
       out.distance.push(r);
@@ -239,7 +247,8 @@ export function beyondNearField(input: BeyondInput): BeyondOutput {
   const edgeOf = (c: Chain, m: FarMethod): number =>
     radius <= c.end.distance ? dilutionFromProfile(c.profile, radius) : atRadius(farSeries(c, m));
   for (const c of full ? chains : []) {
-    if (radius <= c.end.distance) alternatives.push({ method: `${c.nf.method} (jet crosses the edge)`, dilution: edgeOf(c, "gravity-current") });
+    if (radius <= c.end.distance)
+      alternatives.push({ method: `${c.nf.method} (jet crosses the edge)`, dilution: edgeOf(c, "gravity-current") });
     else for (const m of farMethods) alternatives.push({ method: `${c.nf.method} + ${m}`, dilution: edgeOf(c, m) });
   }
 
@@ -253,9 +262,15 @@ export function beyondNearField(input: BeyondInput): BeyondOutput {
   };
   if (opts.farField === "passive-diffusion" && !(u > 0)) {
     warnings.push(
-      warning("passive-diffusion-no-current", "warning", "Passive diffusion was requested but the water is stagnant; the spreading layer was used.", {
-        parameter: "options.farField", stage: "far-field",
-      }),
+      warning(
+        "passive-diffusion-no-current",
+        "warning",
+        "Passive diffusion was requested but the water is stagnant; the spreading layer was used.",
+        {
+          parameter: "options.farField",
+          stage: "far-field",
+        },
+      ),
     );
   }
 
@@ -267,9 +282,15 @@ export function beyondNearField(input: BeyondInput): BeyondOutput {
     chain = chains.find((c) => c.nf.method === opts.nearFieldForEdge);
     if (!chain && chains.length) {
       warnings.push(
-        warning("near-field-choice-unavailable", "warning", `Near-field method "${opts.nearFieldForEdge}" gave no result; the more conservative available method was used.`, {
-          parameter: "options.nearFieldForEdge", stage: "far-field",
-        }),
+        warning(
+          "near-field-choice-unavailable",
+          "warning",
+          `Near-field method "${opts.nearFieldForEdge}" gave no result; the more conservative available method was used.`,
+          {
+            parameter: "options.nearFieldForEdge",
+            stage: "far-field",
+          },
+        ),
       );
     }
   }
@@ -283,24 +304,42 @@ export function beyondNearField(input: BeyondInput): BeyondOutput {
   let edgeDilution = 1;
   let edgeInside = false;
   let layerAtEdge: number | null = null;
-  let series: SeriesResult = { distance: [0], dilution: [1], salinityIncrease: [scenario.discharge.salinity - seabedSalinity], layerThickness: [null], stage: ["jet"] };
+  let series: SeriesResult = {
+    distance: [0],
+    dilution: [1],
+    salinityIncrease: [scenario.discharge.salinity - seabedSalinity],
+    layerThickness: [null],
+    stage: ["jet"],
+  };
   let footprint = { area: 0, furthestExtent: 0 };
   const excess = scenario.discharge.salinity - seabedSalinity;
 
   if (!chain) {
     warnings.push(
-      warning("edge-dilution-undiluted", "serious", "No near-field result reached the seabed; the edge dilution is taken as 1 (undiluted).", {
-        stage: "far-field",
-      }),
+      warning(
+        "edge-dilution-undiluted",
+        "serious",
+        "No near-field result reached the seabed; the edge dilution is taken as 1 (undiluted).",
+        {
+          stage: "far-field",
+        },
+      ),
     );
   } else {
     edgeInside = radius <= chain.end.distance;
     edgeDilution = edgeOf(chain, farMethod);
     if (edgeInside) {
       warnings.push(
-        warning("edge-inside-near-field", "info", `The mixing-zone edge (${radius} m) lies inside the near field (ends at ${chain.end.distance.toFixed(1)} m); the jet's own dilution where it crosses the edge is used.`, {
-          parameter: "mixingZone.radius", value: radius, stage: "far-field",
-        }),
+        warning(
+          "edge-inside-near-field",
+          "info",
+          `The mixing-zone edge (${radius} m) lies inside the near field (ends at ${chain.end.distance.toFixed(1)} m); the jet's own dilution where it crosses the edge is used.`,
+          {
+            parameter: "mixingZone.radius",
+            value: radius,
+            stage: "far-field",
+          },
+        ),
       );
     }
     const far = farSeries(chain, farMethod);
@@ -351,16 +390,23 @@ export function beyondNearField(input: BeyondInput): BeyondOutput {
     );
     if (footprint.furthestExtent >= farRange(chain) * 0.999) {
       warnings.push(
-        warning("footprint-beyond-range", "warning", `The governing limit is still exceeded at ${footprint.furthestExtent.toFixed(0)} m, the end of the computed range; the footprint is larger than reported.`, {
-          stage: "far-field",
-        }),
+        warning(
+          "footprint-beyond-range",
+          "warning",
+          `The governing limit is still exceeded at ${footprint.furthestExtent.toFixed(0)} m, the end of the computed range; the footprint is larger than reported.`,
+          {
+            stage: "far-field",
+          },
+        ),
       );
     }
   }
-  if (u > 0) warnings.push(...brooksDilutionFromDistanceValidityIssues({ distance: radius, initialWidth: 1, currentSpeed: u }));
+  if (u > 0)
+    warnings.push(...brooksDilutionFromDistanceValidityIssues({ distance: radius, initialWidth: 1, currentSpeed: u }));
 
   const nfName = chain ? chain.nf.method : "none";
-  const farLabel = farMethod === "passive-diffusion" ? "Brooks (1960) passive diffusion" : "spreading dense layer E(Ri)";
+  const farLabel =
+    farMethod === "passive-diffusion" ? "Brooks (1960) passive diffusion" : "spreading dense layer E(Ri)";
   const mixingZone: MixingZoneResult = {
     radius,
     dilution: edgeDilution,
@@ -379,9 +425,23 @@ export function beyondNearField(input: BeyondInput): BeyondOutput {
     { stage: "far-field", name: "spreading dense layer", source: SPREADING_LAYER_SOURCE },
     { stage: "far-field", name: "entrainment law E(Ri)", source: TURNER_1986_SOURCE },
     ...(u > 0 ? [{ stage: "far-field", name: "bed-stirred entrainment", source: KATO_PHILLIPS_1969_SOURCE }] : []),
-    ...(u > 0 ? [{ stage: "far-field", name: "passive lateral diffusion", source: `${BROOKS_1960_SOURCE}; takes over from the drifting layer where its buoyant sideways spreading has slowed to the diffusive spreading (common practice, no source)` }] : []),
-    { stage: "compliance", name: "required dilution", source: "S_req = (C_d − C_b)/(C_limit − C_b), from the definition of dilution" },
-    ...(assessment.basin ? [{ stage: "background", name: assessment.basin.method, source: assessment.basin.source }] : []),
+    ...(u > 0
+      ? [
+          {
+            stage: "far-field",
+            name: "passive lateral diffusion",
+            source: `${BROOKS_1960_SOURCE}; takes over from the drifting layer where its buoyant sideways spreading has slowed to the diffusive spreading (common practice, no source)`,
+          },
+        ]
+      : []),
+    {
+      stage: "compliance",
+      name: "required dilution",
+      source: "S_req = (C_d − C_b)/(C_limit − C_b), from the definition of dilution",
+    },
+    ...(assessment.basin
+      ? [{ stage: "background", name: assessment.basin.method, source: assessment.basin.source }]
+      : []),
   ];
   return {
     multiport: mp.multiport,
@@ -419,7 +479,14 @@ function passiveHandOverIndex(gc: FarSeries, gBottom: number): number {
 
 /** The part of a far-field series up to `xEnd` (the displayed range), ending exactly at `xEnd`. */
 function truncateSeries(f: FarSeries, xEnd: number): FarSeries {
-  const out: FarSeries = { distance: [], dilution: [], thickness: [], width: [], switchDistance: f.switchDistance, handOverDistance: f.handOverDistance };
+  const out: FarSeries = {
+    distance: [],
+    dilution: [],
+    thickness: [],
+    width: [],
+    switchDistance: f.switchDistance,
+    handOverDistance: f.handOverDistance,
+  };
   for (let i = 0; i < f.distance.length; i++) {
     if (f.distance[i] > xEnd) {
       if (i > 0) {

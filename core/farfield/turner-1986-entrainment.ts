@@ -45,7 +45,13 @@ export function entrainmentFromRichardsonValidityIssues(richardson: number): Res
         "entrainment-richardson-negative",
         "warning",
         `Layer Richardson number ${richardson.toFixed(3)} is negative (unstable layer); entrainment taken at Ri = 0.`,
-        { parameter: "richardson", value: richardson, range: [0, Infinity], source: TURNER_1986_SOURCE, stage: "far-field" },
+        {
+          parameter: "richardson",
+          value: richardson,
+          range: [0, Infinity],
+          source: TURNER_1986_SOURCE,
+          stage: "far-field",
+        },
       ),
     ];
   }

@@ -135,27 +135,49 @@ export function intakeFromSeries(
     }
   }
   if (r <= r0) return reached(s0, "near field: the dilution the jet hands to the seabed layer", upstreamReach);
-  if (u === 0) return reached(interpolate(series.distance, series.dilution, r), "slack water: layer spreading radially", null);
+  if (u === 0)
+    return reached(interpolate(series.distance, series.dilution, r), "slack water: layer spreading radially", null);
   if (upstreamReach === null) {
     const up = bearingDifference(intake.bearing, current.direction) > 90;
     return reached(
       interpolate(series.distance, series.dilution, r),
-      up ? "upstream, front not arrested within the computed layer: taken to reach the intake" : "downstream or across: layer drifting with the current",
+      up
+        ? "upstream, front not arrested within the computed layer: taken to reach the intake"
+        : "downstream or across: layer drifting with the current",
       null,
     );
   }
-  if (r <= upstreamReach) return reached(interpolate(series.distance, series.dilution, r), "upstream, within the layer's arrested front", upstreamReach);
-  return { dilution: null, salinityIncrease: 0, inDenseLayer: false, method: "upstream, beyond the layer's arrested front: no brine", upstreamReach };
+  if (r <= upstreamReach)
+    return reached(
+      interpolate(series.distance, series.dilution, r),
+      "upstream, within the layer's arrested front",
+      upstreamReach,
+    );
+  return {
+    dilution: null,
+    salinityIncrease: 0,
+    inDenseLayer: false,
+    method: "upstream, beyond the layer's arrested front: no brine",
+    upstreamReach,
+  };
 }
 
 /** The intake sample for a scenario's steady state from its full-detail pipeline result. */
 export function intakeFromResult(
   scenario: Scenario,
-  result: { readonly mixingZone: { readonly series: SeriesResult }; readonly densities: { readonly discharge: number; readonly ambientBottom: number } },
+  result: {
+    readonly mixingZone: { readonly series: SeriesResult };
+    readonly densities: { readonly discharge: number; readonly ambientBottom: number };
+  },
 ): IntakeSample | null {
   if (!scenario.intake) return null;
   const g0 = (GRAVITY * (result.densities.discharge - result.densities.ambientBottom)) / result.densities.ambientBottom;
   const series = result.mixingZone.series;
-  const sample = intakeFromSeries(scenario.intake, series, { speed: scenario.ambient.currentSpeed, direction: scenario.ambient.currentDirection }, g0);
+  const sample = intakeFromSeries(
+    scenario.intake,
+    series,
+    { speed: scenario.ambient.currentSpeed, direction: scenario.ambient.currentDirection },
+    g0,
+  );
   return { ...sample, background: scenario.discharge.salinity - series.salinityIncrease[0]! * series.dilution[0]! };
 }

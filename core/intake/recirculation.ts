@@ -22,14 +22,26 @@ export interface Recirculation {
   readonly brineFlow: number;
 }
 
-export function recirculationFromPlant(scenario: Scenario, intakeDilution: number | null, backgroundSalinity: number): Recirculation | null {
+export function recirculationFromPlant(
+  scenario: Scenario,
+  intakeDilution: number | null,
+  backgroundSalinity: number,
+): Recirculation | null {
   const p = scenario.plant;
   if (!p) return null;
   const brineTemperature = scenario.discharge.temperature;
   const balanceAt = (feed: number) =>
-    brineFromPlant({ productFlow: p.productFlow, recovery: p.recovery, feedSalinity: feed, saltRejection: p.saltRejection, brineTemperature, blending: p.blending });
+    brineFromPlant({
+      productFlow: p.productFlow,
+      recovery: p.recovery,
+      feedSalinity: feed,
+      saltRejection: p.saltRejection,
+      brineTemperature,
+      blending: p.blending,
+    });
   const base = balanceAt(p.feedSalinity);
-  if (intakeDilution === null) return { feedSalinity: p.feedSalinity, brineSalinity: base.brineSalinity, brineFlow: base.brineFlow };
+  if (intakeDilution === null)
+    return { feedSalinity: p.feedSalinity, brineSalinity: base.brineSalinity, brineFlow: base.brineFlow };
   const B = balanceAt(0).dischargeSalinity;
   const A = balanceAt(1).dischargeSalinity - B;
   const D = intakeDilution;

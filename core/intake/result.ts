@@ -33,7 +33,12 @@ export interface IntakeResult {
   readonly judgedSalinityIncrease?: number;
   readonly verdict?: "meets" | "exceeds";
   /** Every ambient case's intake figures (no record). */
-  readonly cases?: readonly { readonly name: string; readonly dilution: number | null; readonly salinityIncrease: number; readonly inDenseLayer: boolean }[];
+  readonly cases?: readonly {
+    readonly name: string;
+    readonly dilution: number | null;
+    readonly salinityIncrease: number;
+    readonly inDenseLayer: boolean;
+  }[];
   /** With a record: percentiles over time (time-weighted, see core/record/summary.ts) and the worst step. */
   readonly overTime?: {
     readonly salinityIncrease: { readonly p50: number; readonly p95: number; readonly max: number };
@@ -70,11 +75,19 @@ export function intakeResult(
   const w = cases.map((c) => c.duration);
   const inc = cases.map((c) => c.sample.salinityIncrease);
   const dil = cases.map((c) => c.sample.dilution ?? Number.POSITIVE_INFINITY);
-  const share = (pred: (c: IntakeCase) => boolean) => (100 * cases.reduce((a, c, i) => a + (pred(c) ? w[i]! : 0), 0)) / w.reduce((a, b) => a + b, 0);
+  const share = (pred: (c: IntakeCase) => boolean) =>
+    (100 * cases.reduce((a, c, i) => a + (pred(c) ? w[i]! : 0), 0)) / w.reduce((a, b) => a + b, 0);
   // The increase the limit is judged on: with a time share P, the increase not exceeded for P % of the time.
-  const judged = record && record.percentOfTime !== null ? weightedQuantile(inc, w, record.percentOfTime / 100) : worst.sample.salinityIncrease;
+  const judged =
+    record && record.percentOfTime !== null
+      ? weightedQuantile(inc, w, record.percentOfTime / 100)
+      : worst.sample.salinityIncrease;
   const max = spec.maxSalinityIncrease;
-  const recirculation = recirculationFromPlant(scenario, worst.sample.dilution, worst.sample.background ?? scenario.ambient.profile[scenario.ambient.profile.length - 1]!.salinity);
+  const recirculation = recirculationFromPlant(
+    scenario,
+    worst.sample.dilution,
+    worst.sample.background ?? scenario.ambient.profile[scenario.ambient.profile.length - 1]!.salinity,
+  );
   const warnings: ResultWarning[] = [];
   const reachedInLayer = cases.filter((c) => c.sample.dilution !== null && c.sample.inDenseLayer);
   if (reachedInLayer.length > 0) {
@@ -82,18 +95,30 @@ export function intakeResult(
       warning(
         "intake-in-dense-layer",
         "serious",
-        `The intake (${formatNumber(spec.distance)} m from the diffuser centre, ${formatNumber(spec.heightAboveSeabed)} m above the seabed) lies inside the spreading brine layer's footprint${record ? ` for ${formatNumber(share((c) => c.sample.dilution !== null && c.sample.inDenseLayer), 3)} % of the record` : ` in ${reachedInLayer.map((c) => `"${c.name}"`).join(", ")}`}: it would draw brine back into the plant (salinity increase up to ${formatNumber(worst.sample.salinityIncrease, 3)} g/kg).`,
+        `The intake (${formatNumber(spec.distance)} m from the diffuser centre, ${formatNumber(spec.heightAboveSeabed)} m above the seabed) lies inside the spreading brine layer's footprint${
+          record
+            ? ` for ${formatNumber(
+                share((c) => c.sample.dilution !== null && c.sample.inDenseLayer),
+                3,
+              )} % of the record`
+            : ` in ${reachedInLayer.map((c) => `"${c.name}"`).join(", ")}`
+        }: it would draw brine back into the plant (salinity increase up to ${formatNumber(worst.sample.salinityIncrease, 3)} g/kg).`,
         { parameter: "intake.distance", value: spec.distance, stage: "intake" },
       ),
     );
   }
   if (recirculation && recirculation.feedSalinity === null) {
     warnings.push(
-      warning("intake-runaway", "serious", "The intake draws back so much brine that the plant balance has no steady state: the feed salinity would keep rising.", {
-        parameter: "intake.distance",
-        value: spec.distance,
-        stage: "intake",
-      }),
+      warning(
+        "intake-runaway",
+        "serious",
+        "The intake draws back so much brine that the plant balance has no steady state: the feed salinity would keep rising.",
+        {
+          parameter: "intake.distance",
+          value: spec.distance,
+          stage: "intake",
+        },
+      ),
     );
   }
   const intake: IntakeResult = {
@@ -107,18 +132,43 @@ export function intakeResult(
     upstreamReach: worst.sample.upstreamReach,
     governingCase: worst.name,
     ...(recirculation ? { recirculation } : {}),
-    ...(max !== undefined ? { maxSalinityIncrease: max, judgedSalinityIncrease: judged, verdict: judged <= max ? ("meets" as const) : ("exceeds" as const) } : {}),
+    ...(max !== undefined
+      ? {
+          maxSalinityIncrease: max,
+          judgedSalinityIncrease: judged,
+          verdict: judged <= max ? ("meets" as const) : ("exceeds" as const),
+        }
+      : {}),
     ...(record
       ? {
           overTime: {
-            salinityIncrease: { p50: weightedQuantile(inc, w, 0.5), p95: weightedQuantile(inc, w, 0.95), max: Math.max(...inc) },
-            dilution: { min: nullIfInfinite(Math.min(...dil)), p5: nullIfInfinite(weightedQuantile(dil, w, 0.05)), p50: nullIfInfinite(weightedQuantile(dil, w, 0.5)) },
+            salinityIncrease: {
+              p50: weightedQuantile(inc, w, 0.5),
+              p95: weightedQuantile(inc, w, 0.95),
+              max: Math.max(...inc),
+            },
+            dilution: {
+              min: nullIfInfinite(Math.min(...dil)),
+              p5: nullIfInfinite(weightedQuantile(dil, w, 0.05)),
+              p50: nullIfInfinite(weightedQuantile(dil, w, 0.5)),
+            },
             inDenseLayerPercent: share((c) => c.sample.dilution !== null && c.sample.inDenseLayer),
             reachedPercent: share((c) => c.sample.dilution !== null),
-            worstStep: { time: worst.time ?? 0, dilution: worst.sample.dilution, salinityIncrease: worst.sample.salinityIncrease },
+            worstStep: {
+              time: worst.time ?? 0,
+              dilution: worst.sample.dilution,
+              salinityIncrease: worst.sample.salinityIncrease,
+            },
           },
         }
-      : { cases: cases.map((c) => ({ name: c.name, dilution: c.sample.dilution, salinityIncrease: c.sample.salinityIncrease, inDenseLayer: c.sample.inDenseLayer })) }),
+      : {
+          cases: cases.map((c) => ({
+            name: c.name,
+            dilution: c.sample.dilution,
+            salinityIncrease: c.sample.salinityIncrease,
+            inDenseLayer: c.sample.inDenseLayer,
+          })),
+        }),
     source: INTAKE_SOURCE,
   };
   return { intake, warnings };
@@ -127,5 +177,10 @@ export function intakeResult(
 /** The overall verdict with the intake limit folded in: an intake above its limit makes the design fail. */
 export function overallWithIntake(overall: OverallResult, intake: IntakeResult | null | undefined): OverallResult {
   if (!intake || intake.verdict !== "exceeds" || overall.verdict === "exceeds") return overall;
-  return { ...overall, governingCase: "intake", verdict: "exceeds", margin: intake.maxSalinityIncrease! / intake.judgedSalinityIncrease! };
+  return {
+    ...overall,
+    governingCase: "intake",
+    verdict: "exceeds",
+    margin: intake.maxSalinityIncrease! / intake.judgedSalinityIncrease!,
+  };
 }

@@ -13,10 +13,5 @@ export {
   LINE_PLUME_MIN_COEFFICIENT,
   LINE_PLUME_SOURCE,
 } from "./line-plume";
-export {
-  multiportFromNearField,
-  jetWidthsFromNearField,
-  neighbourSpacingAtDistance,
-  MERGING_SOURCE,
-} from "./merging";
+export { multiportFromNearField, jetWidthsFromNearField, neighbourSpacingAtDistance, MERGING_SOURCE } from "./merging";
 export type { MultiportInput, MultiportAssessment, MethodMerging, JetWidths } from "./merging";

@@ -55,7 +55,13 @@ export function linePlumeDilutionFromFluxValidityIssues(
         "line-plume-near-source",
         "info",
         `Line-plume fall height ${height.toFixed(2)} m is under five source lengths (${(5 * lq).toFixed(2)} m); the plume law is rough there.`,
-        { parameter: "height", value: height, range: [5 * lq, Infinity], source: LINE_PLUME_SOURCE, stage: "multiport" },
+        {
+          parameter: "height",
+          value: height,
+          range: [5 * lq, Infinity],
+          source: LINE_PLUME_SOURCE,
+          stage: "multiport",
+        },
       ),
     ];
   }

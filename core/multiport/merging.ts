@@ -196,9 +196,15 @@ function scaleMethod(nf: NearFieldMethodResult, factor: number, note: string, po
 export const MERGING_WIDTH_DEFINITIONS: readonly { readonly definition: string; readonly widthFactor: number }[] = [
   // The integral path's top-hat width is √2 × the Gaussian 1/e velocity width (DERIVED for equal fluxes):
   // the common width definitions differ by about that factor either way.
-  { definition: "narrower: width used ÷ √2 (e.g. Gaussian 1/e velocity width instead of top-hat)", widthFactor: Math.SQRT1_2 },
+  {
+    definition: "narrower: width used ÷ √2 (e.g. Gaussian 1/e velocity width instead of top-hat)",
+    widthFactor: Math.SQRT1_2,
+  },
   { definition: "width used (see basis)", widthFactor: 1 },
-  { definition: "wider: width used × √2 (e.g. top-hat instead of Gaussian, or the visible edge)", widthFactor: Math.SQRT2 },
+  {
+    definition: "wider: width used × √2 (e.g. top-hat instead of Gaussian, or the visible edge)",
+    widthFactor: Math.SQRT2,
+  },
 ];
 
 /** Regime and dilution factor of one method for jet widths multiplied by `widthFactor`. */
@@ -248,7 +254,15 @@ export function multiportFromNearField(input: MultiportInput): MultiportAssessme
   for (const nf of nearField) {
     const widths = jetWidthsFromNearField(nf, ph);
     if (!widths || nf.impactDilution === null) {
-      perMethod.push({ method: nf.method, regime: "unknown", factor: 1, widths, spacingAtMaxRise: NaN, spacingAtImpact: NaN, lineDilution: null });
+      perMethod.push({
+        method: nf.method,
+        regime: "unknown",
+        factor: 1,
+        widths,
+        spacingAtMaxRise: NaN,
+        spacingAtImpact: NaN,
+        lineDilution: null,
+      });
       adjusted.push(nf);
       continue;
     }
@@ -266,7 +280,16 @@ export function multiportFromNearField(input: MultiportInput): MultiportAssessme
       widthFactor: d.widthFactor,
       ...regimeFor(widths, d.widthFactor, sTop, sImp, mergedFactor),
     }));
-    perMethod.push({ method: nf.method, regime, factor, widths, spacingAtMaxRise: sTop, spacingAtImpact: sImp, lineDilution, sensitivity });
+    perMethod.push({
+      method: nf.method,
+      regime,
+      factor,
+      widths,
+      spacingAtMaxRise: sTop,
+      spacingAtImpact: sImp,
+      lineDilution,
+      sensitivity,
+    });
     const note =
       `Multiport ${regime}: dilutions after maximum rise multiplied by ${factor.toFixed(3)} ` +
       `(line-plume dilution ${lineDilution.toFixed(1)} vs single-jet impact dilution ${nf.impactDilution.toFixed(1)}).`;
@@ -278,9 +301,10 @@ export function multiportFromNearField(input: MultiportInput): MultiportAssessme
   const regime = known.length
     ? known.map((m) => m.regime).sort((a, b) => regimeRank.indexOf(b) - regimeRank.indexOf(a))[0]
     : "unknown";
-  const spacing = scenario.diffuser.layout === "rosette" && scenario.diffuser.risers
-    ? scenario.diffuser.risers.spacing
-    : scenario.diffuser.portSpacing;
+  const spacing =
+    scenario.diffuser.layout === "rosette" && scenario.diffuser.risers
+      ? scenario.diffuser.risers.spacing
+      : scenario.diffuser.portSpacing;
   const parts = known.map(
     (m) =>
       `${m.method}: jet width ${m.widths!.widthAtMaxRise.toFixed(2)} m at max rise vs spacing ` +
@@ -289,17 +313,26 @@ export function multiportFromNearField(input: MultiportInput): MultiportAssessme
   );
   if (!known.length) {
     warnings.push(
-      warning("multiport-merging-unknown", "warning", "No near-field method gave jet widths; merging was not assessed.", {
-        stage: "multiport",
-      }),
+      warning(
+        "multiport-merging-unknown",
+        "warning",
+        "No near-field method gave jet widths; merging was not assessed.",
+        {
+          stage: "multiport",
+        },
+      ),
     );
   }
   const sensitivity = known.flatMap((m) => m.sensitivity ?? []);
-  const changes = sensitivity.filter((x) => x.widthFactor !== 1 && x.regime !== known.find((m) => m.method === x.method)?.regime);
+  const changes = sensitivity.filter(
+    (x) => x.widthFactor !== 1 && x.regime !== known.find((m) => m.method === x.method)?.regime,
+  );
   const sensitivityText = known.length
     ? changes.length
       ? ` Sensitivity to the jet-width definition: ${changes
-          .map((x) => `${x.method} with widths ×${x.widthFactor.toFixed(2)} → ${x.regime} (factor ${x.factor.toFixed(3)})`)
+          .map(
+            (x) => `${x.method} with widths ×${x.widthFactor.toFixed(2)} → ${x.regime} (factor ${x.factor.toFixed(3)})`,
+          )
           .join("; ")}.`
       : " The decision is the same with jet widths ÷√2 or ×√2 (other common width definitions)."
     : "";

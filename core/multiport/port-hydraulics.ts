@@ -104,17 +104,27 @@ export function portFlowsAndHydraulics(input: PortHydraulicsInput): PortHydrauli
     const vs = unusual.map((p) => p.velocity);
     const lo = Math.min(...vs);
     const hi = Math.max(...vs);
-    const which = unusual.length === n ? (n === 1 ? "The port" : `All ${n} ports`) : `Ports ${unusual.map((p) => p.index + 1).join(", ")}`;
+    const which =
+      unusual.length === n
+        ? n === 1
+          ? "The port"
+          : `All ${n} ports`
+        : `Ports ${unusual.map((p) => p.index + 1).join(", ")}`;
     const speed = lo === hi ? `${lo.toFixed(2)} m/s` : `${lo.toFixed(2)}–${hi.toFixed(2)} m/s`;
     warnings.push(
-      warning("port-velocity-unusual", "warning", `${which}: exit velocity ${speed}, outside the usual ${USUAL_EXIT_VELOCITY_TEXT}.`, {
-        parameter: unusual.length === 1 ? `port[${unusual[0].index}].velocity` : "port.velocity",
-        // the velocity furthest from the middle of the band
-        value: Math.abs(hi - mid) > Math.abs(lo - mid) ? hi : lo,
-        range: USUAL_EXIT_VELOCITY,
-        source: EXIT_VELOCITY_SOURCE,
-        stage: "multiport",
-      }),
+      warning(
+        "port-velocity-unusual",
+        "warning",
+        `${which}: exit velocity ${speed}, outside the usual ${USUAL_EXIT_VELOCITY_TEXT}.`,
+        {
+          parameter: unusual.length === 1 ? `port[${unusual[0].index}].velocity` : "port.velocity",
+          // the velocity furthest from the middle of the band
+          value: Math.abs(hi - mid) > Math.abs(lo - mid) ? hi : lo,
+          range: USUAL_EXIT_VELOCITY,
+          source: EXIT_VELOCITY_SOURCE,
+          stage: "multiport",
+        },
+      ),
     );
   }
   const meanFlow = scenario.discharge.flow / n;

@@ -49,7 +49,12 @@ import {
   integralParamsFrom,
 } from "./integralSetup";
 import type { AmbientColumn, JetSource, NearFieldMethodResult, PathSink } from "./types";
-import { integralBiasByAngle, integralBiasRatioAtAngle, integralBiasStatement, type IntegralBiasPoint } from "./integralBias";
+import {
+  integralBiasByAngle,
+  integralBiasRatioAtAngle,
+  integralBiasStatement,
+  type IntegralBiasPoint,
+} from "./integralBias";
 
 export {
   CENTRELINE_PROFILE_FACTOR,
@@ -110,7 +115,14 @@ SPECS_WITH_CURRENT[EV_ENTRAINMENT_SWITCH] = {
  * Every event function at once, sharing the geometry (one |M⃗|, one radius); the surface lies portDepth
  * above the port, the seabed portHeight below it. Module scope: a solve builds no closures.
  */
-function eventValues(s: number, y: Float64Array, p: IntegralParams, dy: Float64Array | undefined, out: Float64Array, only = -1): void {
+function eventValues(
+  s: number,
+  y: Float64Array,
+  p: IntegralParams,
+  dy: Float64Array | undefined,
+  out: Float64Array,
+  only = -1,
+): void {
   const z = y[IZ];
   if (only >= 0 && only !== EV_SEABED_EDGE && only !== EV_SURFACE_EDGE && only !== EV_MAX_RISE) {
     // Root search on a cheap event: just that value.
@@ -173,10 +185,15 @@ const EVENTS_RISING_STRATIFIED: EventSet<IntegralParams> = {
 const POSITIVE_INPUTS = ["diameter", "velocity"] as const;
 
 /** Runs the integral jet model for one port (or equivalent merged port). Never throws. */
-export function nearFieldIntegral(jet: JetSource, column: AmbientColumn, options: IntegralOptions = {}): NearFieldMethodResult {
+export function nearFieldIntegral(
+  jet: JetSource,
+  column: AmbientColumn,
+  options: IntegralOptions = {},
+): NearFieldMethodResult {
   for (const k of POSITIVE_INPUTS) {
     const v = jet[k];
-    if (!(v > 0) || !Number.isFinite(v)) return invalidIntegralResult(`Port ${k} must be positive and finite (got ${v}).`, v, k);
+    if (!(v > 0) || !Number.isFinite(v))
+      return invalidIntegralResult(`Port ${k} must be positive and finite (got ${v}).`, v, k);
   }
   if (!Number.isFinite(jet.reducedGravity)) {
     return invalidIntegralResult("Reduced gravity must be finite.", jet.reducedGravity, "reducedGravity");
@@ -191,7 +208,11 @@ export function nearFieldIntegral(jet: JetSource, column: AmbientColumn, options
     );
   }
   if (column.depths.length < 1 || column.densities.length !== column.depths.length) {
-    return invalidIntegralResult("Ambient profile needs matching depths and densities.", column.depths.length, "column");
+    return invalidIntegralResult(
+      "Ambient profile needs matching depths and densities.",
+      column.depths.length,
+      "column",
+    );
   }
 
   const params = integralParamsFrom(jet, column);
@@ -225,7 +246,11 @@ export function nearFieldIntegral(jet: JetSource, column: AmbientColumn, options
 
   // A rising discharge in stratified water: locate where its buoyancy changes sign (the trap level).
   const events =
-    jet.reducedGravity <= 0 && params.stratified ? EVENTS_RISING_STRATIFIED : params.currentSpeed > 0 ? EVENTS_WITH_CURRENT : EVENTS;
+    jet.reducedGravity <= 0 && params.stratified
+      ? EVENTS_RISING_STRATIFIED
+      : params.currentSpeed > 0
+        ? EVENTS_WITH_CURRENT
+        : EVENTS;
 
   // Path recording and passive / trapped detection on every accepted step.
   const path = sharedPath;
@@ -296,7 +321,20 @@ export function nearFieldIntegral(jet: JetSource, column: AmbientColumn, options
     } finally {
       sink?.end();
     }
-    result = assembleIntegralResult(jet, column, params, run, log, stopKind, q0, u0, includePath, path, maxSteps, maxLength);
+    result = assembleIntegralResult(
+      jet,
+      column,
+      params,
+      run,
+      log,
+      stopKind,
+      q0,
+      u0,
+      includePath,
+      path,
+      maxSteps,
+      maxLength,
+    );
   } finally {
     if (usingShared) stepperBusy = false;
   }

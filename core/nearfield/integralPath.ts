@@ -76,7 +76,14 @@ export class IntegralPathBuffer {
     const n = this.length;
     const out: PathPoint[] = [];
     const take = (i: number) =>
-      out.push({ s: this.s[i], x: this.x[i], y: this.y[i], z: this.z[i], halfWidth: this.b[i], dilution: this.dilution[i] });
+      out.push({
+        s: this.s[i],
+        x: this.x[i],
+        y: this.y[i],
+        z: this.z[i],
+        halfWidth: this.b[i],
+        dilution: this.dilution[i],
+      });
     if (n <= PATH_POINTS) {
       for (let i = 0; i < n; i++) take(i);
       return out;

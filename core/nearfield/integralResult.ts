@@ -23,7 +23,13 @@ import {
 } from "./integralSetup";
 import { ROBERTS_1997_NEAR_FIELD_GROWTH } from "../correlations/roberts-1997-inclined-dense-jet";
 import { FLUX_AVERAGING_FACTOR } from "./fluxAveraging";
-import { nullNearFieldResult, type AmbientColumn, type JetSource, type NearFieldEvent, type NearFieldMethodResult } from "./types";
+import {
+  nullNearFieldResult,
+  type AmbientColumn,
+  type JetSource,
+  type NearFieldEvent,
+  type NearFieldMethodResult,
+} from "./types";
 
 // Hit states read back from the event log (numbers are copied out before the next solve can reuse them).
 const HIT_Y = new Float64Array(INTEGRAL_DIM);
@@ -42,7 +48,11 @@ const CENTRELINE_NOTE =
   "halfWidth is the top-hat radius (≈ √2 × the Gaussian 1/e velocity half-width).";
 
 /** Result for inputs the model cannot run with: nulls and one serious warning. */
-export function invalidIntegralResult(message: string, value: number | undefined, parameter: string): NearFieldMethodResult {
+export function invalidIntegralResult(
+  message: string,
+  value: number | undefined,
+  parameter: string,
+): NearFieldMethodResult {
   const w = warning("integral-invalid-input", "serious", message, { parameter, value, stage: "integral" });
   return { ...nullNearFieldResult("integral", INTEGRAL_SOURCE, INTEGRAL_BIAS, [w], message), path: [], events: [] };
 }
@@ -118,9 +128,7 @@ export function assembleIntegralResult(
   if (!maxRise && path.length > 0) {
     let iBest = 0;
     for (let i = 1; i < path.length; i++) if (path.edge[i] > path.edge[iBest]) iBest = i;
-    notes.push(
-      "No turning point of the upper edge was located; the maximum rise is the highest sampled upper edge.",
-    );
+    notes.push("No turning point of the upper edge was located; the maximum rise is the highest sampled upper edge.");
     const y = new Float64Array(INTEGRAL_DIM);
     y[IX] = path.x[iBest];
     y[IY] = path.y[iBest];
@@ -177,11 +185,16 @@ export function assembleIntegralResult(
   if (run.reason === "max-steps") {
     push("step-limit", run.t, last);
     warnings.push(
-      warning("integral-step-limit", "warning", `The integrator stopped after ${maxSteps} steps without reaching the seabed.`, {
-        parameter: "maxSteps",
-        value: maxSteps,
-        stage,
-      }),
+      warning(
+        "integral-step-limit",
+        "warning",
+        `The integrator stopped after ${maxSteps} steps without reaching the seabed.`,
+        {
+          parameter: "maxSteps",
+          value: maxSteps,
+          stage,
+        },
+      ),
     );
   } else if (run.reason === "t-max") {
     push("length-limit", run.t, last);
@@ -224,9 +237,14 @@ export function assembleIntegralResult(
   }
   if (!impactHit) {
     warnings.push(
-      warning("integral-no-impact", "warning", "The jet centreline did not reach the seabed; impact distance and dilution are not available.", {
-        stage,
-      }),
+      warning(
+        "integral-no-impact",
+        "warning",
+        "The jet centreline did not reach the seabed; impact distance and dilution are not available.",
+        {
+          stage,
+        },
+      ),
     );
   }
   if (!returnHit && jet.angle <= 0) {
@@ -256,7 +274,9 @@ export function assembleIntegralResult(
     notes.push(NEAR_FIELD_GROWTH_NOTE);
   }
   notes.push(CENTRELINE_NOTE);
-  notes.push(`Integration: Dormand–Prince 5(4), ${run.steps} steps, ${run.rejected} rejected, ${run.evaluations} evaluations, stop: ${run.reason}.`);
+  notes.push(
+    `Integration: Dormand–Prince 5(4), ${run.steps} steps, ${run.rejected} rejected, ${run.evaluations} evaluations, stop: ${run.reason}.`,
+  );
 
   events.sort((a, b) => a.s - b.s);
   return {

@@ -18,7 +18,7 @@ export const TRACER_WIDTH_RATIO = 1.2;
  * flux-average dilution, so centreline dilution S_c = (Q/Q0)·λ²/(1 + λ²). Fischer et al. (1979)
  * plume constants give the same ratio: μ = 0.15 vs centreline 1/11 = 0.091 → 0.61.
  */
-export const CENTRELINE_PROFILE_FACTOR = (TRACER_WIDTH_RATIO ** 2) / (1 + TRACER_WIDTH_RATIO ** 2);
+export const CENTRELINE_PROFILE_FACTOR = TRACER_WIDTH_RATIO ** 2 / (1 + TRACER_WIDTH_RATIO ** 2);
 
 /** Factor by which Lai & Lee (2012) found integral models under-predict dilution at max rise (~30 %). */
 export const DILUTION_BIAS_FACTOR = 0.7;

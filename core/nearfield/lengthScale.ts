@@ -24,15 +24,18 @@
  * another angle's numbers.
  */
 import { warning, type ResultWarning } from "../warnings";
-import { nullNearFieldResult, type AmbientColumn, type JetSource, type NearFieldMethodResult, type NearFieldVariant } from "./types";
+import {
+  nullNearFieldResult,
+  type AmbientColumn,
+  type JetSource,
+  type NearFieldMethodResult,
+  type NearFieldVariant,
+} from "./types";
 import type { DenseJetCoefficients, DenseJetDataset } from "../correlations/dense-jet-dataset";
 import { clampAngle } from "../correlations/dense-jet-dataset";
 import { ROBERTS_1997_DATASET, ROBERTS_1997_NEAR_FIELD_GROWTH } from "../correlations/roberts-1997-inclined-dense-jet";
 import { FLUX_AVERAGING_FACTOR, fluxAveragedFromCentreline } from "./fluxAveraging";
-import {
-  LAI_LEE_2012_DATASET,
-  LAI_LEE_2012_MAX_RISE_DILUTION,
-} from "../correlations/lai-lee-2012-inclined-dense-jet";
+import { LAI_LEE_2012_DATASET, LAI_LEE_2012_MAX_RISE_DILUTION } from "../correlations/lai-lee-2012-inclined-dense-jet";
 import {
   crossflowFroudeFromSpeeds,
   crossflowFroudeValidityIssues,
@@ -50,7 +53,6 @@ export const LENGTH_SCALE_ANGLE_RANGE: readonly [number, number] = [
   Math.min(...LENGTH_SCALE_DATASETS.map((d) => d.angleRange[0])),
   Math.max(...LENGTH_SCALE_DATASETS.map((d) => d.angleRange[1])),
 ];
-
 
 export interface EvaluatedDataset {
   readonly dataset: DenseJetDataset;
@@ -228,7 +230,8 @@ export function nearFieldLengthScale(jet: JetSource, column: AmbientColumn): Nea
       from.nearFieldDilution = `${from.impactDilution} impact dilution with the Roberts et al. (1997) growth`;
     }
     if (top.nearFieldDistance === null && top.impactDistance !== null) {
-      top.nearFieldDistance = top.impactDistance + ROBERTS_1997_NEAR_FIELD_GROWTH.spreadLength * jet.diameter * jet.froude;
+      top.nearFieldDistance =
+        top.impactDistance + ROBERTS_1997_NEAR_FIELD_GROWTH.spreadLength * jet.diameter * jet.froude;
       from.nearFieldDistance = `impact distance + ${ROBERTS_1997_NEAR_FIELD_GROWTH.spreadLength.toFixed(1)}·d·F (Roberts et al. 1997)`;
     }
   }
@@ -237,7 +240,9 @@ export function nearFieldLengthScale(jet: JetSource, column: AmbientColumn): Nea
     notes.push(
       "Headline values are the less favourable of the datasets for each quantity (lower dilution, higher " +
         "rise, longer distance): " +
-        HEADLINE_FIELDS.filter((f) => from[f]).map((f) => `${f} from ${from[f]}`).join("; ") +
+        HEADLINE_FIELDS.filter((f) => from[f])
+          .map((f) => `${f} from ${from[f]}`)
+          .join("; ") +
         ".",
     );
   }
@@ -253,8 +258,7 @@ export function nearFieldLengthScale(jet: JetSource, column: AmbientColumn): Nea
     dilutions.length >= 2 ? [Math.min(...dilutions), Math.max(...dilutions)] : null;
   if (dilutionRange === null) {
     notes.push(
-      "No dilution range: fewer than two datasets give an impact dilution here and no published scatter " +
-        "is known.",
+      "No dilution range: fewer than two datasets give an impact dilution here and no published scatter " + "is known.",
     );
   }
 

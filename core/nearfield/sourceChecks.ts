@@ -30,8 +30,7 @@ export function jetSourceWarnings(jet: JetSource, column: AmbientColumn): Result
   if (rises.length > 0 && column.depth > 0) {
     const top = rises.reduce((a, b) => (b.height > a.height ? b : a));
     const reach = top.height + Math.max(0, jet.portHeight);
-    const beyond =
-      jet.angle > 60 ? " (the port is steeper than any dataset, so the true rise is likely higher)" : "";
+    const beyond = jet.angle > 60 ? " (the port is steeper than any dataset, so the true rise is likely higher)" : "";
     const sum =
       `upper-edge rise ${top.height.toFixed(2)} m + port height ${jet.portHeight.toFixed(2)} m = ` +
       `${reach.toFixed(2)} m`;

@@ -263,7 +263,15 @@ export function integrateAdaptive<P>(
 
   const finish = (reason: StopReason, t: number, y: Float64Array): AdaptiveResult => {
     spare = ws;
-    return { reason, t, y: Float64Array.from(y), steps, rejected, evaluations: stepper.evaluations - evaluations0, events: hits };
+    return {
+      reason,
+      t,
+      y: Float64Array.from(y),
+      steps,
+      rejected,
+      evaluations: stepper.evaluations - evaluations0,
+      events: hits,
+    };
   };
 
   for (;;) {

@@ -14,12 +14,7 @@ import {
   NAYAR_2016_SOURCE,
 } from "./nayar-2016-pressure-correction";
 import { SHARQAWY_2010_SOURCE } from "./sharqawy-2010-density";
-import {
-  densityTeos10,
-  densityTeos10ValidityIssues,
-  TEOS10_SALINITY_RANGE,
-  TEOS10_SOURCE,
-} from "./teos10-density";
+import { densityTeos10, densityTeos10ValidityIssues, TEOS10_SALINITY_RANGE, TEOS10_SOURCE } from "./teos10-density";
 
 export interface EquationOfState {
   readonly info: EquationOfStateInfo;
@@ -56,10 +51,7 @@ export function equationOfStateBrine(reason: string): EquationOfState {
  * @param temperatures every temperature involved, °C (reported in the reason when outside TEOS-10's range)
  * @returns TEOS-10 if all salinities are within 0–42 g/kg, else Sharqawy 2010 + Nayar 2016
  */
-export function equationOfStateFor(
-  salinities: readonly number[],
-  temperatures: readonly number[],
-): EquationOfState {
+export function equationOfStateFor(salinities: readonly number[], temperatures: readonly number[]): EquationOfState {
   const [low, high] = TEOS10_SALINITY_RANGE;
   const outside = salinities.filter((s) => !(s >= low && s <= high));
   if (outside.length === 0) {

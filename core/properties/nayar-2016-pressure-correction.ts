@@ -26,9 +26,7 @@ export const NAYAR_2016_SOURCE =
  * Equation number in the paper: from memory not reliable, not given.
  */
 export const NAYAR_2016_PRESSURE_COEFFICIENTS = {
-  c: [
-    5.0792e-4, -3.4168e-6, 5.6931e-8, -3.7263e-10, 1.4465e-12, -1.7058e-15, -1.3389e-6, 4.8603e-9, -6.8039e-13,
-  ],
+  c: [5.0792e-4, -3.4168e-6, 5.6931e-8, -3.7263e-10, 1.4465e-12, -1.7058e-15, -1.3389e-6, 4.8603e-9, -6.8039e-13],
   d: [-1.1077e-6, 5.5584e-9, -4.2539e-11, 8.3702e-9],
 } as const;
 

@@ -64,8 +64,7 @@ export function salinityFromTdsValidityIssues(tdsMgPerL: number): ResultWarning[
     warning(
       "tds-out-of-range",
       "warning",
-      `TDS ${tdsMgPerL} mg/L is outside 0–131 000 mg/L (0–120 g/kg), ` +
-        "the range of the density used to convert it.",
+      `TDS ${tdsMgPerL} mg/L is outside 0–131 000 mg/L (0–120 g/kg), ` + "the range of the density used to convert it.",
       {
         parameter: "tds",
         value: tdsMgPerL,

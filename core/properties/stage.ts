@@ -44,8 +44,16 @@ export function profileAtDepth(
   // Two points at the same depth: the deeper one's values are taken rather than dividing by zero.
   const depths = profile.map((p) => p.depth);
   return {
-    salinity: interpolateLinear(depths, profile.map((p) => p.salinity), depth),
-    temperature: interpolateLinear(depths, profile.map((p) => p.temperature), depth),
+    salinity: interpolateLinear(
+      depths,
+      profile.map((p) => p.salinity),
+      depth,
+    ),
+    temperature: interpolateLinear(
+      depths,
+      profile.map((p) => p.temperature),
+      depth,
+    ),
   };
 }
 
@@ -104,8 +112,7 @@ export function propertiesFromScenario(scenario: Scenario): PropertiesStage {
   const ambientSurface = eos.density(surfaceState.salinity, surfaceState.temperature, 0);
   const bottomState = states[depths.length - 1];
   const ambientBottom = eos.density(bottomState.salinity, bottomState.temperature, pressures[depths.length - 1]);
-  const reducedGravity =
-    (STANDARD_GRAVITY * (dischargeDensity - ambientDensityAtPort)) / ambientDensityAtPort;
+  const reducedGravity = (STANDARD_GRAVITY * (dischargeDensity - ambientDensityAtPort)) / ambientDensityAtPort;
 
   warnings.push(...eos.validityIssues(discharge.salinity, discharge.temperature, portPressure, "discharge"));
   const seen = new Set(warnings.map((w) => `${w.code}|${w.parameter}`));

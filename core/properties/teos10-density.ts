@@ -107,12 +107,7 @@ export function gibbsPressureIntegralTeos10(sa: number, t: number, p: number): n
  * @param p sea pressure, dbar
  * @param what label of the water concerned, e.g. "discharge"
  */
-export function densityTeos10ValidityIssues(
-  sa: number,
-  t: number,
-  p: number,
-  what = "water",
-): ResultWarning[] {
+export function densityTeos10ValidityIssues(sa: number, t: number, p: number, what = "water"): ResultWarning[] {
   const out: ResultWarning[] = [];
   const source = "TEOS-10 oceanographic range (IOC, SCOR & IAPSO 2010; GSW functions 0–42 g/kg)";
   const check = (name: string, value: number, range: readonly [number, number], unit: string) => {

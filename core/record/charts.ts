@@ -35,7 +35,9 @@ export function periodsNotMeeting(rec: RecordResult): { from: number; to: number
 export function durationCurve(rec: RecordResult): { percent: number; dilution: number }[] {
   const t = rec.series.time;
   const d = t.map((x, i) => (i + 1 < t.length ? t[i + 1]! - x : t.length > 1 ? x - t[i - 1]! : 1));
-  const pts = rec.series.edgeDilution.map((v, i) => ({ v, w: d[i]! })).filter((p): p is { v: number; w: number } => p.v !== null && Number.isFinite(p.v));
+  const pts = rec.series.edgeDilution
+    .map((v, i) => ({ v, w: d[i]! }))
+    .filter((p): p is { v: number; w: number } => p.v !== null && Number.isFinite(p.v));
   pts.sort((a, b) => b.v - a.v);
   const total = d.reduce((a, b) => a + b, 0);
   let acc = 0;
@@ -74,7 +76,10 @@ function panel(
   const sx = (x: number) => L + ((x - t0) / (t1 - t0)) * (W - L - R);
   const sy = (y: number) => T + (1 - (Math.log(y) - Math.log(lo)) / (Math.log(hi) - Math.log(lo))) * (H - T - B);
   const shade = periodsNotMeeting(rec)
-    .map((p) => `<rect x="${sx(p.from / f).toFixed(1)}" y="${T}" width="${Math.max(0.8, sx(p.to / f) - sx(p.from / f)).toFixed(1)}" height="${H - T - B}" fill="#fecaca" opacity="0.7"/>`)
+    .map(
+      (p) =>
+        `<rect x="${sx(p.from / f).toFixed(1)}" y="${T}" width="${Math.max(0.8, sx(p.to / f) - sx(p.from / f)).toFixed(1)}" height="${H - T - B}" fill="#fecaca" opacity="0.7"/>`,
+    )
     .join("");
   const path = (vs: readonly (number | null)[]) => {
     let d = "";
@@ -89,8 +94,18 @@ function panel(
     });
     return d;
   };
-  const xt = linearTicks(t0, t1, 8).map((x) => `<g><line x1="${sx(x)}" x2="${sx(x)}" y1="${T}" y2="${H - B}" stroke="#e5e7eb"/><text x="${sx(x)}" y="${H - B + 14}" font-size="10" text-anchor="middle">${escapeHtml(reportNumber(x))}</text></g>`).join("");
-  const yt = yTicks(lo, hi).map((y) => `<g><line x1="${L}" x2="${W - R}" y1="${sy(y)}" y2="${sy(y)}" stroke="#f3f4f6"/><text x="${L - 5}" y="${sy(y) + 3}" font-size="10" text-anchor="end">${escapeHtml(reportNumber(y))}</text></g>`).join("");
+  const xt = linearTicks(t0, t1, 8)
+    .map(
+      (x) =>
+        `<g><line x1="${sx(x)}" x2="${sx(x)}" y1="${T}" y2="${H - B}" stroke="#e5e7eb"/><text x="${sx(x)}" y="${H - B + 14}" font-size="10" text-anchor="middle">${escapeHtml(reportNumber(x))}</text></g>`,
+    )
+    .join("");
+  const yt = yTicks(lo, hi)
+    .map(
+      (y) =>
+        `<g><line x1="${L}" x2="${W - R}" y1="${sy(y)}" y2="${sy(y)}" stroke="#f3f4f6"/><text x="${L - 5}" y="${sy(y) + 3}" font-size="10" text-anchor="end">${escapeHtml(reportNumber(y))}</text></g>`,
+    )
+    .join("");
   return `<svg xmlns="http://www.w3.org/2000/svg" id="${id}" viewBox="0 0 ${W} ${H}" width="${W}" height="${H}" role="img" aria-label="${escapeHtml(label)} against time" ${FONT}>
 ${shade}${xt}${yt}
 <line x1="${L}" x2="${L}" y1="${T}" y2="${H - B}" stroke="#111"/><line x1="${L}" x2="${W - R}" y1="${H - B}" y2="${H - B}" stroke="#111"/>
@@ -104,7 +119,14 @@ ${shade}${xt}${yt}
 
 /** Edge dilution against time, with the required dilution. */
 export function recordDilutionSvg(rec: RecordResult): string {
-  return panel(rec, rec.series.edgeDilution, rec.series.requiredDilution, "edge dilution (×, log)", "dashed: required dilution", "record-dilution-chart");
+  return panel(
+    rec,
+    rec.series.edgeDilution,
+    rec.series.requiredDilution,
+    "edge dilution (×, log)",
+    "dashed: required dilution",
+    "record-dilution-chart",
+  );
 }
 
 /** Salinity increase at the edge against time, with the allowed increase (the governing limit). */
@@ -114,7 +136,14 @@ export function recordIncreaseSvg(rec: RecordResult): string {
     const req = rec.series.requiredDilution[i];
     return inc !== null && d !== null && req !== null && req > 0 ? (inc * d) / req : null;
   });
-  return panel(rec, rec.series.salinityIncrease, allowed, "increase at edge (g/kg, log)", "dashed: allowed increase", "record-increase-chart");
+  return panel(
+    rec,
+    rec.series.salinityIncrease,
+    allowed,
+    "increase at edge (g/kg, log)",
+    "dashed: allowed increase",
+    "record-increase-chart",
+  );
 }
 
 /** The duration curve: edge dilution against the percentage of time it is equalled or exceeded. */
@@ -133,9 +162,22 @@ export function recordDurationSvg(rec: RecordResult): string {
     d += `${d ? "L" : "M"}${sx(prev).toFixed(1)},${sy(p.dilution).toFixed(1)}L${sx(p.percent).toFixed(1)},${sy(p.dilution).toFixed(1)}`;
     prev = p.percent;
   }
-  const rule = rec.percentOfTime !== null ? `<line x1="${sx(rec.percentOfTime)}" x2="${sx(rec.percentOfTime)}" y1="${T}" y2="${H - B}" stroke="#6b7280" stroke-dasharray="3 3"/><text x="${sx(rec.percentOfTime) - 4}" y="${T + 12}" font-size="10" text-anchor="end">${escapeHtml(reportNumber(rec.percentOfTime))} % of the time</text>` : "";
-  const xt = [0, 20, 40, 60, 80, 100].map((x) => `<g><line x1="${sx(x)}" x2="${sx(x)}" y1="${T}" y2="${H - B}" stroke="#e5e7eb"/><text x="${sx(x)}" y="${H - B + 14}" font-size="10" text-anchor="middle">${x}</text></g>`).join("");
-  const yt = yTicks(lo, hi).map((y) => `<g><line x1="${L}" x2="${W - R}" y1="${sy(y)}" y2="${sy(y)}" stroke="#f3f4f6"/><text x="${L - 5}" y="${sy(y) + 3}" font-size="10" text-anchor="end">${escapeHtml(reportNumber(y))}</text></g>`).join("");
+  const rule =
+    rec.percentOfTime !== null
+      ? `<line x1="${sx(rec.percentOfTime)}" x2="${sx(rec.percentOfTime)}" y1="${T}" y2="${H - B}" stroke="#6b7280" stroke-dasharray="3 3"/><text x="${sx(rec.percentOfTime) - 4}" y="${T + 12}" font-size="10" text-anchor="end">${escapeHtml(reportNumber(rec.percentOfTime))} % of the time</text>`
+      : "";
+  const xt = [0, 20, 40, 60, 80, 100]
+    .map(
+      (x) =>
+        `<g><line x1="${sx(x)}" x2="${sx(x)}" y1="${T}" y2="${H - B}" stroke="#e5e7eb"/><text x="${sx(x)}" y="${H - B + 14}" font-size="10" text-anchor="middle">${x}</text></g>`,
+    )
+    .join("");
+  const yt = yTicks(lo, hi)
+    .map(
+      (y) =>
+        `<g><line x1="${L}" x2="${W - R}" y1="${sy(y)}" y2="${sy(y)}" stroke="#f3f4f6"/><text x="${L - 5}" y="${sy(y) + 3}" font-size="10" text-anchor="end">${escapeHtml(reportNumber(y))}</text></g>`,
+    )
+    .join("");
   return `<svg xmlns="http://www.w3.org/2000/svg" id="record-duration-chart" viewBox="0 0 ${W} ${H}" width="${W}" height="${H}" role="img" aria-label="duration curve of the edge dilution" ${FONT}>
 ${xt}${yt}
 <line x1="${L}" x2="${L}" y1="${T}" y2="${H - B}" stroke="#111"/><line x1="${L}" x2="${W - R}" y1="${H - B}" y2="${H - B}" stroke="#111"/>

@@ -25,7 +25,8 @@ function unquote(cell: string): string {
 export function recordFromCsv(text: string, source = "record CSV"): CsvRecordParse {
   const lines = text.replace(/^\uFEFF/, "").split(/\r\n|\n|\r/);
   const rows = lines.map((l, i) => ({ l, n: i + 1 })).filter(({ l }) => l.trim() !== "" && !l.trim().startsWith("#"));
-  if (rows.length < 2) return { ok: false, message: `${source}: expected a header line and at least one row of values` };
+  if (rows.length < 2)
+    return { ok: false, message: `${source}: expected a header line and at least one row of values` };
   const headerLine = rows[0]!.l;
   const sep = headerLine.includes("\t") ? "\t" : headerLine.includes(";") && !headerLine.includes(",") ? ";" : ",";
   const header = headerLine.split(sep).map(unquote);
@@ -34,17 +35,22 @@ export function recordFromCsv(text: string, source = "record CSV"): CsvRecordPar
     const m = HEADER_CELL.exec(h);
     const field = m && RECORD_COLUMNS.find((c) => c.toLowerCase() === m[1]!.toLowerCase());
     if (!m || !field)
-      return { ok: false, message: `${source}: header column ${i + 1} "${h}" must be one of ${RECORD_COLUMNS.join(", ")}, optionally followed by its unit in parentheses, e.g. "currentSpeed (m/s)"` };
+      return {
+        ok: false,
+        message: `${source}: header column ${i + 1} "${h}" must be one of ${RECORD_COLUMNS.join(", ")}, optionally followed by its unit in parentheses, e.g. "currentSpeed (m/s)"`,
+      };
     if (cols.some((c) => c.field === field)) return { ok: false, message: `${source}: header names "${field}" twice` };
     cols.push({ field, unit: (m[2] ?? "").trim() });
   }
   for (const need of ["time", "currentSpeed", "currentDirection"] as const)
-    if (!cols.some((c) => c.field === need)) return { ok: false, message: `${source}: the header must name a "${need}" column` };
+    if (!cols.some((c) => c.field === need))
+      return { ok: false, message: `${source}: the header must name a "${need}" column` };
   const record: Partial<Record<RecordColumn, (number | string)[]>> = {};
   for (const c of cols) record[c.field] = [];
   for (const { l, n } of rows.slice(1)) {
     const cells = l.split(sep).map(unquote);
-    if (cells.length !== cols.length) return { ok: false, message: `${source}: line ${n} has ${cells.length} cells; the header has ${cols.length}` };
+    if (cells.length !== cols.length)
+      return { ok: false, message: `${source}: line ${n} has ${cells.length} cells; the header has ${cols.length}` };
     cells.forEach((cell, j) => {
       const c = cols[j]!;
       const isNumber = cell !== "" && Number.isFinite(Number(cell)) && !/^\s*[-+]?0[xob]/i.test(cell);

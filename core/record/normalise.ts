@@ -54,13 +54,25 @@ export function normaliseRecord(
         origin = t.value;
       }
     } else if (kind !== t.kind) {
-      issues.push(issue(`ambient.record.time.${i}`, raw.time[i], "must be written the same way as the first time: all date-times, or all seconds/durations from the start"));
+      issues.push(
+        issue(
+          `ambient.record.time.${i}`,
+          raw.time[i],
+          "must be written the same way as the first time: all date-times, or all seconds/durations from the start",
+        ),
+      );
       break;
     }
     seconds.push(t.kind === "date-time" ? (t.value - origin) / 1000 : t.value);
     const k = seconds.length - 1;
     if (k > 0 && !(seconds[k]! > seconds[k - 1]!)) {
-      issues.push(issue(`ambient.record.time.${i}`, raw.time[i], "must be later than the time before it (times strictly increasing)"));
+      issues.push(
+        issue(
+          `ambient.record.time.${i}`,
+          raw.time[i],
+          "must be later than the time before it (times strictly increasing)",
+        ),
+      );
       break;
     }
   }
@@ -73,7 +85,10 @@ export function normaliseRecord(
       if (s.basis !== "absolute") converted++;
       return resolveSalinity(s, temperature ? temperature[i]! : statedTemperature);
     });
-    if (converted > 0) notes.push(`ambient.record.salinity: ${converted} value(s) converted to Absolute Salinity (g/kg) by the same rule as ambient.salinity`);
+    if (converted > 0)
+      notes.push(
+        `ambient.record.salinity: ${converted} value(s) converted to Absolute Salinity (g/kg) by the same rule as ambient.salinity`,
+      );
   }
   if (kind === "date-time") notes.push(`ambient.record.time: date-times taken as seconds from the first, ${start}`);
   const record: AmbientRecord = {

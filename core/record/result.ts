@@ -12,21 +12,34 @@ import { recordFromOutcomes } from "./run";
 import { intakeResult, overallWithIntake } from "../intake/result";
 import { INTAKE_SOURCE, type IntakeSample } from "../intake/intake";
 
-export const RECORD_METHOD = { stage: "record", name: "ambient record, quasi-steady steps", source: `${QUASI_STEADY_NOTE} Shares of time weight each step by the time until the next step (common practice, no source).` };
+export const RECORD_METHOD = {
+  stage: "record",
+  name: "ambient record, quasi-steady steps",
+  source: `${QUASI_STEADY_NOTE} Shares of time weight each step by the time until the next step (common practice, no source).`,
+};
 export const INTAKE_METHOD = { stage: "intake", name: "brine at the plant's intake", source: INTAKE_SOURCE };
 
 /** With an intake, the "not modelled" note on intakes gives way to what is screened. */
-function mixingZoneWithIntake<T extends { readonly mixingZone: AmbientCaseResult["mixingZone"] }>(scenario: Scenario, r: T): T["mixingZone"] {
+function mixingZoneWithIntake<T extends { readonly mixingZone: AmbientCaseResult["mixingZone"] }>(
+  scenario: Scenario,
+  r: T,
+): T["mixingZone"] {
   if (!scenario.intake) return r.mixingZone;
   return {
     ...r.mixingZone,
     notModelled: r.mixingZone.notModelled.map((x) =>
-      /intake/i.test(x) ? "Brine reaching the plant's intake is screened by a simple steady rule (see intake.method); the plume's path between steps is not modelled." : x,
+      /intake/i.test(x)
+        ? "Brine reaching the plant's intake is screened by a simple steady rule (see intake.method); the plume's path between steps is not modelled."
+        : x,
     ),
   };
 }
 
-export function withRecord(scenario: Scenario, top: AmbientCaseResult, outcomes: readonly StepOutcome[]): BrinefieldResult {
+export function withRecord(
+  scenario: Scenario,
+  top: AmbientCaseResult,
+  outcomes: readonly StepOutcome[],
+): BrinefieldResult {
   const r = recordFromOutcomes(scenario, outcomes);
   return {
     ...top,

@@ -124,7 +124,8 @@ export function recordFromOutcomes(scenario: Scenario, outcomes: readonly StepOu
     edgeDilution: o.edgeDilution,
     verdict: o.verdict === "refused" ? "outside-scope" : o.verdict,
     margin: o.margin,
-    scopeReasons: o.verdict === "refused" ? [`refused: ${o.error ?? "the step breaks a scenario rule"}`] : o.scopeReasons,
+    scopeReasons:
+      o.verdict === "refused" ? [`refused: ${o.error ?? "the step breaks a scenario rule"}`] : o.scopeReasons,
   }));
   const withIntake = outcomes.filter((o) => o.intake);
   const ir = intakeResult(

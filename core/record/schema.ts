@@ -10,13 +10,13 @@ import { TIME_EXPECTATION } from "./time";
 /** Most steps a record may hold: a year of 10-minute steps fits (52,560). */
 export const MAX_RECORD_STEPS = 60000;
 
-export function recordSchema<A extends z.ZodType, B extends z.ZodType, C extends z.ZodType, D extends z.ZodType, E extends z.ZodType>(el: {
-  currentSpeed: A;
-  currentDirection: B;
-  depth: C;
-  salinity: D;
-  temperature: E;
-}) {
+export function recordSchema<
+  A extends z.ZodType,
+  B extends z.ZodType,
+  C extends z.ZodType,
+  D extends z.ZodType,
+  E extends z.ZodType,
+>(el: { currentSpeed: A; currentDirection: B; depth: C; salinity: D; temperature: E }) {
   const column = <T extends z.ZodType>(t: T) =>
     z
       .array(t)
@@ -35,12 +35,18 @@ export function recordSchema<A extends z.ZodType, B extends z.ZodType, C extends
 export const timeComplianceSchema = z.strictObject({
   percentOfTime: z
     .number({ error: () => "must be a percentage of the record's time, greater than 0 and at most 100 (e.g. 95)" })
-    .refine((v) => Number.isFinite(v) && v > 0 && v <= 100, { error: () => "must be a percentage of the record's time, greater than 0 and at most 100 (e.g. 95)" }),
+    .refine((v) => Number.isFinite(v) && v > 0 && v <= 100, {
+      error: () => "must be a percentage of the record's time, greater than 0 and at most 100 (e.g. 95)",
+    }),
 });
 
 export const intakeSchema = z.strictObject({
   distance: quantity("length", { min: 0, max: 100000 }, "intake distance from the diffuser centre"),
   bearing: quantity("angle", { min: 0, max: 360 }, "intake bearing from the diffuser centre"),
   heightAboveSeabed: quantity("length", { min: 0, max: 1000 }, "intake height above the seabed"),
-  maxSalinityIncrease: quantity("salinity", { min: 0, max: 100, exclusiveMin: true }, "largest salinity increase allowed at the intake").optional(),
+  maxSalinityIncrease: quantity(
+    "salinity",
+    { min: 0, max: 100, exclusiveMin: true },
+    "largest salinity increase allowed at the intake",
+  ).optional(),
 });

@@ -32,7 +32,11 @@ function profileToDepth(profile: readonly ProfilePoint[], depth: number): Profil
     else {
       const q = i > 0 ? profile[i - 1]! : p;
       const t = p.depth > q.depth ? (depth - q.depth) / (p.depth - q.depth) : 0;
-      out.push({ depth, salinity: q.salinity + t * (p.salinity - q.salinity), temperature: q.temperature + t * (p.temperature - q.temperature) });
+      out.push({
+        depth,
+        salinity: q.salinity + t * (p.salinity - q.salinity),
+        temperature: q.temperature + t * (p.temperature - q.temperature),
+      });
       return out;
     }
   }
@@ -87,7 +91,14 @@ export function recordSteps(s: Scenario, indices?: readonly number[]): RecordSte
       ];
       uniform = true;
     } else profile = depth === a.depth ? a.profile : profileToDepth(a.profile, depth);
-    const ambient: AmbientInput = { ...a, depth, profile, uniform, currentSpeed: rec.currentSpeed[i]!, currentDirection: rec.currentDirection[i]! };
+    const ambient: AmbientInput = {
+      ...a,
+      depth,
+      profile,
+      uniform,
+      currentSpeed: rec.currentSpeed[i]!,
+      currentDirection: rec.currentDirection[i]!,
+    };
     const earlier = same[i]!;
     const refused =
       top >= depth

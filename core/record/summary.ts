@@ -45,7 +45,12 @@ export interface RecordResult {
   readonly outsideScopePercent: number;
   readonly refusedPercent: number;
   /** Steps by verdict. */
-  readonly counts: { readonly meets: number; readonly exceeds: number; readonly outsideScope: number; readonly refused: number };
+  readonly counts: {
+    readonly meets: number;
+    readonly exceeds: number;
+    readonly outsideScope: number;
+    readonly refused: number;
+  };
   /** The time-share rule when set. */
   readonly percentOfTime: number | null;
   /** Seconds, from the first step; ISO 8601 date-time of the first step when the record gave date-times. */
@@ -105,7 +110,8 @@ export function summariseRecord(
   if (steps.length === 0) throw new Error("summariseRecord: no steps");
   const w = steps.map((s) => s.duration);
   const total = w.reduce((a, b) => a + b, 0);
-  const share = (pred: (s: StepOutcome) => boolean) => (100 * steps.reduce((a, s, i) => a + (pred(s) ? w[i]! : 0), 0)) / total;
+  const share = (pred: (s: StepOutcome) => boolean) =>
+    (100 * steps.reduce((a, s, i) => a + (pred(s) ? w[i]! : 0), 0)) / total;
   const meetsPercent = share((s) => s.verdict === "meets");
   const exceedsPercent = share((s) => s.verdict === "exceeds");
   const outsideScopePercent = share((s) => s.verdict === "outside-scope");
@@ -170,7 +176,12 @@ export function summariseRecord(
     exceedsPercent,
     outsideScopePercent,
     refusedPercent,
-    counts: { meets: count("meets"), exceeds: count("exceeds"), outsideScope: count("outside-scope"), refused: count("refused") },
+    counts: {
+      meets: count("meets"),
+      exceeds: count("exceeds"),
+      outsideScope: count("outside-scope"),
+      refused: count("refused"),
+    },
     percentOfTime,
     start,
     durationHours: total / 3600,

@@ -3,13 +3,17 @@ import type { BrinefieldResult } from "../result/contract";
 import { formatNumber } from "../units";
 import { formatElapsed } from "./time";
 
-const n = (v: number | null | undefined, unit = "") => (v === null || v === undefined || !Number.isFinite(v) ? "—" : `${formatNumber(v, 4)}${unit ? ` ${unit}` : ""}`);
+const n = (v: number | null | undefined, unit = "") =>
+  v === null || v === undefined || !Number.isFinite(v) ? "—" : `${formatNumber(v, 4)}${unit ? ` ${unit}` : ""}`;
 
 export function recordLines(r: BrinefieldResult): string[] {
   const rec = r.record;
   if (!rec) return [];
   const o = r.overall;
-  const rule = rec.percentOfTime !== null ? `the limit must be met for at least ${formatNumber(rec.percentOfTime)} % of the time` : "every step must meet the limit (no timeCompliance set)";
+  const rule =
+    rec.percentOfTime !== null
+      ? `the limit must be met for at least ${formatNumber(rec.percentOfTime)} % of the time`
+      : "every step must meet the limit (no timeCompliance set)";
   return [
     "",
     `Ambient record: ${rec.steps} steps over ${n(rec.durationHours, "h")}${rec.start ? ` from ${rec.start}` : ""}; ${rule}.`,
@@ -39,6 +43,9 @@ export function intakeLines(r: BrinefieldResult): string[] {
     out.push(
       `  With the brine drawn back in (steady plant balance): feed ${n(k.recirculation.feedSalinity, "g/kg")}, brine ${n(k.recirculation.brineSalinity, "g/kg")} at ${n(k.recirculation.brineFlow, "m³/s")}.`,
     );
-  if (k.verdict) out.push(`  Intake limit ${n(k.maxSalinityIncrease, "g/kg")}: ${k.verdict} (judged increase ${n(k.judgedSalinityIncrease, "g/kg")}).`);
+  if (k.verdict)
+    out.push(
+      `  Intake limit ${n(k.maxSalinityIncrease, "g/kg")}: ${k.verdict} (judged increase ${n(k.judgedSalinityIncrease, "g/kg")}).`,
+    );
   return out;
 }

@@ -6,10 +6,23 @@
  */
 
 const UNIT_SECONDS: Readonly<Record<string, number>> = {
-  s: 1, sec: 1, secs: 1, second: 1, seconds: 1,
-  min: 60, mins: 60, minute: 60, minutes: 60,
-  h: 3600, hr: 3600, hrs: 3600, hour: 3600, hours: 3600,
-  d: 86400, day: 86400, days: 86400,
+  s: 1,
+  sec: 1,
+  secs: 1,
+  second: 1,
+  seconds: 1,
+  min: 60,
+  mins: 60,
+  minute: 60,
+  minutes: 60,
+  h: 3600,
+  hr: 3600,
+  hrs: 3600,
+  hour: 3600,
+  hours: 3600,
+  d: 86400,
+  day: 86400,
+  days: 86400,
 };
 
 /** Names of the time units accepted, for messages and the CSV header. */
@@ -50,7 +63,8 @@ export function parseTime(raw: unknown): TimeParse {
   const v = Number(m[1]);
   const unit = m[2] === "" ? "s" : m[2]!;
   const f = secondsPerUnit(unit);
-  if (f === null) return { ok: false, message: `has a time unit Brinefield does not know ("${unit}"); use one of s, min, h, d` };
+  if (f === null)
+    return { ok: false, message: `has a time unit Brinefield does not know ("${unit}"); use one of s, min, h, d` };
   if (!Number.isFinite(v * f)) return { ok: false, message: TIME_EXPECTATION };
   return { ok: true, kind: "seconds", value: v * f };
 }

@@ -85,7 +85,10 @@ export function unitOfKey(key: string): string | undefined {
 }
 
 /** Columns for keys whose values are numbers or text, units found by `unitOfKey`. */
-export function columnsForKeys(keys: readonly string[], rows: readonly Readonly<Record<string, unknown>>[] = []): CsvColumn[] {
+export function columnsForKeys(
+  keys: readonly string[],
+  rows: readonly Readonly<Record<string, unknown>>[] = [],
+): CsvColumn[] {
   return keys.map((key) => {
     const unit = unitOfKey(key);
     const numeric = unit !== undefined || rows.some((r) => typeof r[key] === "number");
@@ -233,7 +236,13 @@ export function resultCsv(result: BrinefieldResult): string {
       requiredDilution: num(check?.requiredDilution),
       margin: num(check?.margin),
       pass: check ? String(check.pass && result.compliance.verdict === "meets") : "",
-      verdict: check ? (result.compliance.verdict === "outside-scope" ? "outside-scope" : check.pass ? "meets" : "exceeds") : "",
+      verdict: check
+        ? result.compliance.verdict === "outside-scope"
+          ? "outside-scope"
+          : check.pass
+            ? "meets"
+            : "exceeds"
+        : "",
       scopeReasons: result.compliance.scopeReasons.join(" "),
     });
   }
@@ -280,17 +289,29 @@ export function seriesCsv(result: BrinefieldResult): string {
 }
 
 /** A study's key results: every variant's `resultCsv` rows with the variant name in front. */
-export function studyResultCsv(variants: readonly { readonly name: string; readonly result: BrinefieldResult }[]): string {
-  return withVariantColumn(variants.map((v) => ({ name: v.name, csv: resultCsv(v.result) })), [...RESULT_CSV_COLUMNS]);
+export function studyResultCsv(
+  variants: readonly { readonly name: string; readonly result: BrinefieldResult }[],
+): string {
+  return withVariantColumn(
+    variants.map((v) => ({ name: v.name, csv: resultCsv(v.result) })),
+    [...RESULT_CSV_COLUMNS],
+  );
 }
 
 /** A study's dilution series: every variant's `seriesCsv` rows with the variant name in front. */
-export function studySeriesCsv(variants: readonly { readonly name: string; readonly result: BrinefieldResult }[]): string {
-  return withVariantColumn(variants.map((v) => ({ name: v.name, csv: seriesCsv(v.result) })), [...SERIES_CSV_COLUMNS]);
+export function studySeriesCsv(
+  variants: readonly { readonly name: string; readonly result: BrinefieldResult }[],
+): string {
+  return withVariantColumn(
+    variants.map((v) => ({ name: v.name, csv: seriesCsv(v.result) })),
+    [...SERIES_CSV_COLUMNS],
+  );
 }
 
 function withVariantColumn(parts: readonly { name: string; csv: string }[], columns: string[]): string {
-  const rows: Record<string, string>[] = parts.flatMap((p) => csvParse(p.csv).map((row) => ({ variant: p.name, ...row }) as Record<string, string>));
+  const rows: Record<string, string>[] = parts.flatMap((p) =>
+    csvParse(p.csv).map((row) => ({ variant: p.name, ...row }) as Record<string, string>),
+  );
   return csvFormatSafe(rows, ["variant", ...columns]);
 }
 

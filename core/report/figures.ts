@@ -125,7 +125,10 @@ const SIDE_VIEW_MAX_PLOT = { width: 604, height: 300 } as const;
  * gets a narrower plot rather than a squashed one, and a long, shallow one is stretched vertically by at
  * most SIDE_VIEW_MAX_EXAGGERATION, its plot made lower instead. Exaggeration = (px/m vertical)/(px/m horizontal).
  */
-export function sideViewScales(xMax: number, yMax: number): { kx: number; ky: number; width: number; height: number; exaggeration: number } {
+export function sideViewScales(
+  xMax: number,
+  yMax: number,
+): { kx: number; ky: number; width: number; height: number; exaggeration: number } {
   let kx = SIDE_VIEW_MAX_PLOT.width / xMax;
   let ky = SIDE_VIEW_MAX_PLOT.height / yMax;
   if (ky < kx) kx = Math.max(ky, SIDE_VIEW_MIN_PLOT.width / xMax); // deep water: narrow the plot toward true scale
@@ -165,55 +168,91 @@ export function sideViewSvg(input: SideViewInput): string {
   const parts: string[] = [];
   // Water, seabed and surface.
   if (input.depth !== null) {
-    parts.push(`<rect x="${n(sx(0))}" y="${n(sy(input.depth))}" width="${n(plotWidth(f))}" height="${n(sy(0) - sy(input.depth))}" fill="#eef6fb"/>`);
-    parts.push(`<line x1="${n(sx(0))}" y1="${n(sy(input.depth))}" x2="${n(sx(xMax))}" y2="${n(sy(input.depth))}" stroke="#0369a1" stroke-width="1.2"/>`);
-    parts.push(`<text x="${n(sx(xMax))}" y="${n(sy(input.depth) - 4)}" text-anchor="end" font-size="10" fill="#075985" ${FONT}>water surface (depth ${escapeHtml(reportNumber(input.depth))} m)</text>`);
+    parts.push(
+      `<rect x="${n(sx(0))}" y="${n(sy(input.depth))}" width="${n(plotWidth(f))}" height="${n(sy(0) - sy(input.depth))}" fill="#eef6fb"/>`,
+    );
+    parts.push(
+      `<line x1="${n(sx(0))}" y1="${n(sy(input.depth))}" x2="${n(sx(xMax))}" y2="${n(sy(input.depth))}" stroke="#0369a1" stroke-width="1.2"/>`,
+    );
+    parts.push(
+      `<text x="${n(sx(xMax))}" y="${n(sy(input.depth) - 4)}" text-anchor="end" font-size="10" fill="#075985" ${FONT}>water surface (depth ${escapeHtml(reportNumber(input.depth))} m)</text>`,
+    );
   }
   parts.push(`<rect x="${n(sx(0))}" y="${n(sy(0))}" width="${n(plotWidth(f))}" height="6" fill="#d6c7a1"/>`);
-  parts.push(`<line x1="${n(sx(0))}" y1="${n(sy(0))}" x2="${n(sx(xMax))}" y2="${n(sy(0))}" stroke="#7c6a3c" stroke-width="1.4"/>`);
+  parts.push(
+    `<line x1="${n(sx(0))}" y1="${n(sy(0))}" x2="${n(sx(xMax))}" y2="${n(sy(0))}" stroke="#7c6a3c" stroke-width="1.4"/>`,
+  );
   // Axes and ticks (fewer on a narrow plot so the labels never touch).
   const xTickCount = Math.max(2, Math.min(6, Math.floor(scale.width / 70)));
   parts.push(...axisTicks(linearTicks(0, xMax, xTickCount), (t) => sx(t), sy(0) + 6, "x"));
-  parts.push(...axisTicks(linearTicks(0, yTop, Math.max(2, Math.min(5, Math.floor(scale.height / 40)))), (t) => sy(t), sx(0), "y"));
+  parts.push(
+    ...axisTicks(
+      linearTicks(0, yTop, Math.max(2, Math.min(5, Math.floor(scale.height / 40)))),
+      (t) => sy(t),
+      sx(0),
+      "y",
+    ),
+  );
   parts.push(`<line x1="${n(sx(0))}" y1="${n(sy(0))}" x2="${n(sx(0))}" y2="${n(sy(yTop))}" stroke="#334155"/>`);
   const axisY = f.top + scale.height + 6 + 30;
-  parts.push(`<text x="${n(f.left)}" y="${n(axisY)}" font-size="11" ${FONT}>plan distance from the port along the discharge (m)</text>`);
-  parts.push(`<text transform="translate(14 ${n(sy(yTop / 2))}) rotate(-90)" text-anchor="middle" font-size="11" ${FONT}>height above seabed (m)</text>`);
+  parts.push(
+    `<text x="${n(f.left)}" y="${n(axisY)}" font-size="11" ${FONT}>plan distance from the port along the discharge (m)</text>`,
+  );
+  parts.push(
+    `<text transform="translate(14 ${n(sy(yTop / 2))}) rotate(-90)" text-anchor="middle" font-size="11" ${FONT}>height above seabed (m)</text>`,
+  );
   // Riser and port.
-  parts.push(`<line x1="${n(sx(0))}" y1="${n(sy(0))}" x2="${n(sx(0))}" y2="${n(sy(hp))}" stroke="#334155" stroke-width="3"/>`);
+  parts.push(
+    `<line x1="${n(sx(0))}" y1="${n(sy(0))}" x2="${n(sx(0))}" y2="${n(sy(hp))}" stroke="#334155" stroke-width="3"/>`,
+  );
   parts.push(`<circle cx="${n(sx(0))}" cy="${n(sy(hp))}" r="3" fill="#334155"/>`);
   const legendTop = axisY + 8;
   lines.forEach(({ method, path, keys }, i) => {
     const colour = METHOD_COLOURS[method.method] ?? "#475569";
     if (path) {
-      parts.push(`<path d="${polyline(path.map(([x, y]) => [sx(x), sy(y)] as const))}" fill="none" stroke="${colour}" stroke-width="2"/>`);
+      parts.push(
+        `<path d="${polyline(path.map(([x, y]) => [sx(x), sy(y)] as const))}" fill="none" stroke="${colour}" stroke-width="2"/>`,
+      );
     } else if (keys.some((k) => k.kind === "max-rise")) {
       // A line through the reported points only (port, max rise, return, impact): no shape is invented between them.
       const pts: [number, number][] = [[sx(0), sy(hp)], ...keys.map((k) => [sx(k.x), sy(k.y)] as [number, number])];
-      parts.push(`<path d="${smoothPath(pts)}" fill="none" stroke="${colour}" stroke-width="1.6" stroke-dasharray="6 3"/>`);
+      parts.push(
+        `<path d="${smoothPath(pts)}" fill="none" stroke="${colour}" stroke-width="1.6" stroke-dasharray="6 3"/>`,
+      );
     }
     for (const k of keys) {
       if (k.kind === "impact") parts.push(`<circle cx="${n(sx(k.x))}" cy="${n(sy(0))}" r="4" fill="${colour}"/>`);
-      if (k.kind === "return") parts.push(`<rect x="${n(sx(k.x) - 3.5)}" y="${n(sy(k.y) - 3.5)}" width="7" height="7" fill="none" stroke="${colour}" stroke-width="1.5"/>`);
+      if (k.kind === "return")
+        parts.push(
+          `<rect x="${n(sx(k.x) - 3.5)}" y="${n(sy(k.y) - 3.5)}" width="7" height="7" fill="none" stroke="${colour}" stroke-width="1.5"/>`,
+        );
     }
     if (method.maxRiseHeight !== null) {
       const y = sy(hp + method.maxRiseHeight);
       if (method.maxRiseDistance !== null) {
         const x = sx(method.maxRiseDistance);
-        parts.push(`<line x1="${n(x - 7)}" y1="${n(y)}" x2="${n(x + 7)}" y2="${n(y)}" stroke="${colour}" stroke-width="2"/>`);
+        parts.push(
+          `<line x1="${n(x - 7)}" y1="${n(y)}" x2="${n(x + 7)}" y2="${n(y)}" stroke="${colour}" stroke-width="2"/>`,
+        );
       } else {
         // Location of the maximum not reported: the height is drawn as a level across the rising jet.
         // Without a return point the level runs across the whole plot: it states a height, not a place.
         const xEnd = sx(keys.find((k) => k.kind === "return")?.x ?? xMax);
-        parts.push(`<line x1="${n(sx(0))}" y1="${n(y)}" x2="${n(xEnd)}" y2="${n(y)}" stroke="${colour}" stroke-width="1.2" stroke-dasharray="2 3"/>`);
+        parts.push(
+          `<line x1="${n(sx(0))}" y1="${n(y)}" x2="${n(xEnd)}" y2="${n(y)}" stroke="${colour}" stroke-width="1.2" stroke-dasharray="2 3"/>`,
+        );
       }
     }
     const field = method.risingField;
     if (field && field.kind !== "none") {
       // A rising plume's field: where it spreads (the surface or the trap level), from where it starts.
       const y = sy(hp + field.height);
-      parts.push(`<line x1="${n(sx(Math.max(0, field.distance - 2 * field.halfWidth)))}" y1="${n(y)}" x2="${n(sx(Math.min(xMax, field.distance + 0.25 * xMax)))}" y2="${n(y)}" stroke="${colour}" stroke-width="4" stroke-opacity="0.45"/>`);
-      parts.push(`<text x="${n(sx(Math.min(xMax * 0.97, field.distance + 0.02 * xMax)))}" y="${n(y + 12)}" font-size="9" fill="${colour}" ${FONT}>${escapeHtml(`${method.method}: ${field.kind === "trapped" ? "trapped field (trap level)" : "surface field"}, S = ${reportNumber(field.dilution)}`)}</text>`);
+      parts.push(
+        `<line x1="${n(sx(Math.max(0, field.distance - 2 * field.halfWidth)))}" y1="${n(y)}" x2="${n(sx(Math.min(xMax, field.distance + 0.25 * xMax)))}" y2="${n(y)}" stroke="${colour}" stroke-width="4" stroke-opacity="0.45"/>`,
+      );
+      parts.push(
+        `<text x="${n(sx(Math.min(xMax * 0.97, field.distance + 0.02 * xMax)))}" y="${n(y + 12)}" font-size="9" fill="${colour}" ${FONT}>${escapeHtml(`${method.method}: ${field.kind === "trapped" ? "trapped field (trap level)" : "surface field"}, S = ${reportNumber(field.dilution)}`)}</text>`,
+      );
     }
     const label = path
       ? `${method.method}: computed centreline; bar = upper edge at maximum rise`
@@ -221,12 +260,19 @@ export function sideViewSvg(input: SideViewInput): string {
         ? `${method.method}: reported points joined; bar = upper edge at maximum rise`
         : `${method.method}: reported points; dotted level = maximum rise of the upper edge`;
     const ly = legendTop + i * 14;
-    parts.push(`<line x1="${f.left}" y1="${n(ly)}" x2="${f.left + 24}" y2="${n(ly)}" stroke="${colour}" stroke-width="2"${path ? "" : ` stroke-dasharray="6 3"`}/>`);
+    parts.push(
+      `<line x1="${f.left}" y1="${n(ly)}" x2="${f.left + 24}" y2="${n(ly)}" stroke="${colour}" stroke-width="2"${path ? "" : ` stroke-dasharray="6 3"`}/>`,
+    );
     parts.push(`<text x="${f.left + 30}" y="${n(ly + 3.5)}" font-size="10" ${FONT}>${escapeHtml(label)}</text>`);
   });
   const ve = scale.exaggeration;
-  const veText = Math.abs(ve - 1) > 0.05 ? `vertical exaggeration ×${reportNumber(Number(ve.toPrecision(2)))}` : "true scale (no vertical exaggeration)";
-  parts.push(`<text x="${f.left}" y="${n(legendTop + lines.length * 14 + 3.5)}" font-size="10" fill="#475569" ${FONT}>● seabed impact · □ return to port level · ${escapeHtml(veText)}</text>`);
+  const veText =
+    Math.abs(ve - 1) > 0.05
+      ? `vertical exaggeration ×${reportNumber(Number(ve.toPrecision(2)))}`
+      : "true scale (no vertical exaggeration)";
+  parts.push(
+    `<text x="${f.left}" y="${n(legendTop + lines.length * 14 + 3.5)}" font-size="10" fill="#475569" ${FONT}>● seabed impact · □ return to port level · ${escapeHtml(veText)}</text>`,
+  );
   return svgWrap(parts, "Side view of the jet centrelines above the seabed", f);
 }
 
@@ -273,9 +319,11 @@ export function dilutionChartSvg(input: DilutionChartInput): string {
     if (Number.isFinite(x) && Number.isFinite(y) && y >= 1) pts.push({ x, y, stage: series.stage[i] ?? "" });
   }
   const xMax = Math.max(radius, ...pts.map((p) => p.x), 1) * 1.05;
-  const ys = [...pts.map((p) => p.y), dilution, ...(input.requiredDilution !== null ? [input.requiredDilution] : [])].filter(
-    (v) => Number.isFinite(v) && v >= 1,
-  );
+  const ys = [
+    ...pts.map((p) => p.y),
+    dilution,
+    ...(input.requiredDilution !== null ? [input.requiredDilution] : []),
+  ].filter((v) => Number.isFinite(v) && v >= 1);
   const yLo = Math.max(1, Math.min(...ys, 10) / 1.3);
   const yHi = Math.max(...ys, 2) * 1.3;
   const useLog = yHi / yLo > 10;
@@ -287,25 +335,41 @@ export function dilutionChartSvg(input: DilutionChartInput): string {
   const xTicks = linearTicks(0, xMax);
   const parts: string[] = [];
   parts.push(...gridLines(xTicks, sx, f, "x"), ...gridLines(yTicks, sy, f, "y"));
-  parts.push(`<rect x="${f.left}" y="${f.top}" width="${plotWidth(f)}" height="${plotHeight(f)}" fill="none" stroke="#94a3b8"/>`);
+  parts.push(
+    `<rect x="${f.left}" y="${f.top}" width="${plotWidth(f)}" height="${plotHeight(f)}" fill="none" stroke="#94a3b8"/>`,
+  );
   parts.push(...axisTicks(xTicks, sx, f.top + plotHeight(f), "x"), ...axisTicks(yTicks, sy, f.left, "y"));
-  parts.push(`<text x="${n(f.left + plotWidth(f) / 2)}" y="${f.height - 6}" text-anchor="middle" font-size="11" ${FONT}>plan distance from the diffuser (m)</text>`);
-  parts.push(`<text transform="translate(14 ${n(f.top + plotHeight(f) / 2)}) rotate(-90)" text-anchor="middle" font-size="11" ${FONT}>centreline dilution${useLog ? " (log scale)" : ""}</text>`);
+  parts.push(
+    `<text x="${n(f.left + plotWidth(f) / 2)}" y="${f.height - 6}" text-anchor="middle" font-size="11" ${FONT}>plan distance from the diffuser (m)</text>`,
+  );
+  parts.push(
+    `<text transform="translate(14 ${n(f.top + plotHeight(f) / 2)}) rotate(-90)" text-anchor="middle" font-size="11" ${FONT}>centreline dilution${useLog ? " (log scale)" : ""}</text>`,
+  );
   // Required dilution and the mixing-zone edge.
   if (input.requiredDilution !== null && Number.isFinite(input.requiredDilution) && input.requiredDilution >= 1) {
     const y = sy(input.requiredDilution);
-    parts.push(`<line x1="${f.left}" y1="${n(y)}" x2="${f.left + plotWidth(f)}" y2="${n(y)}" stroke="#b91c1c" stroke-width="1.4" stroke-dasharray="7 4"/>`);
-    parts.push(`<text x="${f.left + plotWidth(f) - 4}" y="${n(y - 4)}" text-anchor="end" font-size="10" fill="#b91c1c" ${FONT}>required dilution ${escapeHtml(reportNumber(input.requiredDilution))}</text>`);
+    parts.push(
+      `<line x1="${f.left}" y1="${n(y)}" x2="${f.left + plotWidth(f)}" y2="${n(y)}" stroke="#b91c1c" stroke-width="1.4" stroke-dasharray="7 4"/>`,
+    );
+    parts.push(
+      `<text x="${f.left + plotWidth(f) - 4}" y="${n(y - 4)}" text-anchor="end" font-size="10" fill="#b91c1c" ${FONT}>required dilution ${escapeHtml(reportNumber(input.requiredDilution))}</text>`,
+    );
   }
   const ex = sx(radius);
-  parts.push(`<line x1="${n(ex)}" y1="${f.top}" x2="${n(ex)}" y2="${f.top + plotHeight(f)}" stroke="#0f172a" stroke-width="1.2" stroke-dasharray="3 3"/>`);
-  parts.push(`<text x="${n(ex + 4)}" y="${f.top + 12}" font-size="10" ${FONT}>mixing-zone edge ${escapeHtml(reportNumber(radius))} m</text>`);
+  parts.push(
+    `<line x1="${n(ex)}" y1="${f.top}" x2="${n(ex)}" y2="${f.top + plotHeight(f)}" stroke="#0f172a" stroke-width="1.2" stroke-dasharray="3 3"/>`,
+  );
+  parts.push(
+    `<text x="${n(ex + 4)}" y="${f.top + 12}" font-size="10" ${FONT}>mixing-zone edge ${escapeHtml(reportNumber(radius))} m</text>`,
+  );
   // The series, coloured by stage.
   let run: { x: number; y: number }[] = [];
   let stage = pts[0]?.stage ?? "";
   const flush = () => {
     if (run.length > 1) {
-      parts.push(`<path d="${polyline(run.map((p) => [sx(p.x), sy(p.y)] as const))}" fill="none" stroke="${STAGE_COLOURS[stage] ?? "#475569"}" stroke-width="2"/>`);
+      parts.push(
+        `<path d="${polyline(run.map((p) => [sx(p.x), sy(p.y)] as const))}" fill="none" stroke="${STAGE_COLOURS[stage] ?? "#475569"}" stroke-width="2"/>`,
+      );
     }
   };
   for (const p of pts) {
@@ -320,13 +384,19 @@ export function dilutionChartSvg(input: DilutionChartInput): string {
   flush();
   if (Number.isFinite(dilution) && dilution >= 1) {
     parts.push(`<circle cx="${n(ex)}" cy="${n(sy(dilution))}" r="4" fill="#0f172a"/>`);
-    parts.push(`<text x="${n(ex + 6)}" y="${n(sy(dilution) + 14)}" font-size="10" ${FONT}>S = ${escapeHtml(reportNumber(dilution))} at the edge</text>`);
+    parts.push(
+      `<text x="${n(ex + 6)}" y="${n(sy(dilution) + 14)}" font-size="10" ${FONT}>S = ${escapeHtml(reportNumber(dilution))} at the edge</text>`,
+    );
   }
   const stages = [...new Set(pts.map((p) => p.stage))];
   stages.forEach((s, i) => {
     const y = f.top + plotHeight(f) - 12 - (stages.length - 1 - i) * 14;
-    parts.push(`<line x1="${f.left + plotWidth(f) - 150}" y1="${y}" x2="${f.left + plotWidth(f) - 126}" y2="${y}" stroke="${STAGE_COLOURS[s] ?? "#475569"}" stroke-width="2"/>`);
-    parts.push(`<text x="${f.left + plotWidth(f) - 120}" y="${y + 3.5}" font-size="10" ${FONT}>${escapeHtml(s)}</text>`);
+    parts.push(
+      `<line x1="${f.left + plotWidth(f) - 150}" y1="${y}" x2="${f.left + plotWidth(f) - 126}" y2="${y}" stroke="${STAGE_COLOURS[s] ?? "#475569"}" stroke-width="2"/>`,
+    );
+    parts.push(
+      `<text x="${f.left + plotWidth(f) - 120}" y="${y + 3.5}" font-size="10" ${FONT}>${escapeHtml(s)}</text>`,
+    );
   });
   return svgWrap(parts, "Centreline dilution against distance from the diffuser");
 }
@@ -353,24 +423,37 @@ export function multiportSketchSvg(regime: string): string {
     const active = r.id === regime;
     const ink = active ? "#1d4ed8" : "#94a3b8";
     const fill = active ? "rgba(29,78,216,0.22)" : "rgba(148,163,184,0.18)";
-    parts.push(`<rect x="${x0 + 4}" y="4" width="${panelW - 8}" height="${panelH - 4}" rx="4" fill="#ffffff" stroke="${active ? "#0f172a" : "#cbd5e1"}" stroke-width="${active ? 2 : 1}"/>`);
+    parts.push(
+      `<rect x="${x0 + 4}" y="4" width="${panelW - 8}" height="${panelH - 4}" rx="4" fill="#ffffff" stroke="${active ? "#0f172a" : "#cbd5e1"}" stroke-width="${active ? 2 : 1}"/>`,
+    );
     const bed = 84;
     const top = 24;
     const spacing = 46;
     const spread = [14, 26, 40][i]!; // half-width at the top of the rise: apart, touching, overlapping
-    parts.push(`<line x1="${x0 + 14}" y1="${bed}" x2="${x0 + panelW - 14}" y2="${bed}" stroke="#7c6a3c" stroke-width="2"/>`);
+    parts.push(
+      `<line x1="${x0 + 14}" y1="${bed}" x2="${x0 + panelW - 14}" y2="${bed}" stroke="#7c6a3c" stroke-width="2"/>`,
+    );
     if (i === 2) {
       // One sheet over all three ports.
       const cx = x0 + panelW / 2;
-      parts.push(`<path d="M${cx - spacing - 3},${bed - 6} L${cx - spacing - spread},${top} L${cx + spacing + spread},${top} L${cx + spacing + 3},${bed - 6} Z" fill="${fill}" stroke="${ink}" stroke-width="1.2"/>`);
+      parts.push(
+        `<path d="M${cx - spacing - 3},${bed - 6} L${cx - spacing - spread},${top} L${cx + spacing + spread},${top} L${cx + spacing + 3},${bed - 6} Z" fill="${fill}" stroke="${ink}" stroke-width="1.2"/>`,
+      );
     }
     for (let k = -1; k <= 1; k++) {
       const cx = x0 + panelW / 2 + k * spacing;
-      if (i !== 2) parts.push(`<path d="M${cx - 3},${bed - 6} L${cx - spread},${top} L${cx + spread},${top} L${cx + 3},${bed - 6} Z" fill="${fill}" stroke="${ink}" stroke-width="1.2"/>`);
+      if (i !== 2)
+        parts.push(
+          `<path d="M${cx - 3},${bed - 6} L${cx - spread},${top} L${cx + spread},${top} L${cx + 3},${bed - 6} Z" fill="${fill}" stroke="${ink}" stroke-width="1.2"/>`,
+        );
       parts.push(`<rect x="${cx - 3}" y="${bed - 6}" width="6" height="6" fill="#334155"/>`);
     }
-    parts.push(`<text x="${x0 + panelW / 2}" y="${bed + 16}" text-anchor="middle" font-size="11" font-weight="${active ? 700 : 400}" fill="${active ? "#0f172a" : "#475569"}" ${FONT}>${escapeHtml(r.title)}${active ? " — this design" : ""}</text>`);
-    parts.push(`<text x="${x0 + panelW / 2}" y="${bed + 29}" text-anchor="middle" font-size="9.5" fill="#475569" ${FONT}>${escapeHtml(r.note)}</text>`);
+    parts.push(
+      `<text x="${x0 + panelW / 2}" y="${bed + 16}" text-anchor="middle" font-size="11" font-weight="${active ? 700 : 400}" fill="${active ? "#0f172a" : "#475569"}" ${FONT}>${escapeHtml(r.title)}${active ? " — this design" : ""}</text>`,
+    );
+    parts.push(
+      `<text x="${x0 + panelW / 2}" y="${bed + 29}" text-anchor="middle" font-size="9.5" fill="#475569" ${FONT}>${escapeHtml(r.note)}</text>`,
+    );
   });
   return (
     `<svg xmlns="http://www.w3.org/2000/svg" viewBox="0 0 ${width} ${height}" width="100%" role="img" aria-label="${escapeHtml(`Multiport regimes: independent, partially merged, merged line source; this design: ${regime}`)}">` +

@@ -49,7 +49,23 @@ function rowsHtml(file: unknown, rows: readonly InputRow[]): RawHtml {
 }
 
 function table(caption: string, body: RawHtml): RawHtml {
-  return html`<table class="inputs"><caption>${caption}</caption><thead><tr><th>Input</th><th>Field</th><th>As entered</th><th>SI value used</th><th>SI unit</th></tr></thead><tbody>${body}</tbody></table>`;
+  return html`<table class="inputs">
+    <caption>
+      ${caption}
+    </caption>
+    <thead>
+      <tr>
+        <th>Input</th>
+        <th>Field</th>
+        <th>As entered</th>
+        <th>SI value used</th>
+        <th>SI unit</th>
+      </tr>
+    </thead>
+    <tbody>
+      ${body}
+    </tbody>
+  </table>`;
 }
 
 /** All inputs tables for a read scenario. */
@@ -59,17 +75,45 @@ export function inputsHtml(file: unknown, s: Scenario): RawHtml {
   const fromPlant = s.plant ? "(from the plant below)" : undefined;
   const dischargeRows: InputRow[] = [
     { label: "Total brine flow", path: "discharge.flow", si: d.flow, unit: "m³/s", whenAbsent: fromPlant },
-    { label: "Brine salinity (Absolute Salinity)", path: "discharge.salinity", si: d.salinity, unit: "g/kg", whenAbsent: fromPlant },
+    {
+      label: "Brine salinity (Absolute Salinity)",
+      path: "discharge.salinity",
+      si: d.salinity,
+      unit: "g/kg",
+      whenAbsent: fromPlant,
+    },
     { label: "Brine temperature", path: "discharge.temperature", si: d.temperature, unit: "°C", whenAbsent: fromPlant },
   ];
   parts.push(table("Discharge", rowsHtml(file, dischargeRows)));
   if (d.constituents.length > 0) {
     const rows = d.constituents.map(
       (c, i) =>
-        html`<tr><td>${c.name}</td><td class="path">discharge.constituents.${String(i)}</td><td class="num">${reportNumber(c.concentration)}</td><td class="num">${reportNumber(c.background)}</td><td>${c.unit}</td></tr>`,
+        html`<tr>
+          <td>${c.name}</td>
+          <td class="path">discharge.constituents.${String(i)}</td>
+          <td class="num">${reportNumber(c.concentration)}</td>
+          <td class="num">${reportNumber(c.background)}</td>
+          <td>${c.unit}</td>
+        </tr>`,
     );
     parts.push(
-      html`<table class="inputs"><caption>Constituents in the discharge (kept in the unit entered)</caption><thead><tr><th>Constituent</th><th>Field</th><th>In the discharge</th><th>Background</th><th>Unit</th></tr></thead><tbody>${join(rows)}</tbody></table>`,
+      html`<table class="inputs">
+        <caption>
+          Constituents in the discharge (kept in the unit entered)
+        </caption>
+        <thead>
+          <tr>
+            <th>Constituent</th>
+            <th>Field</th>
+            <th>In the discharge</th>
+            <th>Background</th>
+            <th>Unit</th>
+          </tr>
+        </thead>
+        <tbody>
+          ${join(rows)}
+        </tbody>
+      </table>`,
     );
   }
   if (s.plant) {
@@ -85,7 +129,12 @@ export function inputsHtml(file: unknown, s: Scenario): RawHtml {
       rows.push(
         { label: `Blend "${b.name}" flow`, path: `plant.blending.${i}.flow`, si: b.flow, unit: "m³/s" },
         { label: `Blend "${b.name}" salinity`, path: `plant.blending.${i}.salinity`, si: b.salinity, unit: "g/kg" },
-        { label: `Blend "${b.name}" temperature`, path: `plant.blending.${i}.temperature`, si: b.temperature, unit: "°C" },
+        {
+          label: `Blend "${b.name}" temperature`,
+          path: `plant.blending.${i}.temperature`,
+          si: b.temperature,
+          unit: "°C",
+        },
       );
     });
     parts.push(table("Desalination plant (the discharge is derived from it)", rowsHtml(file, rows)));
@@ -94,10 +143,25 @@ export function inputsHtml(file: unknown, s: Scenario): RawHtml {
   const bottom = a.profile[a.profile.length - 1]!;
   const ambientRows: InputRow[] = [
     { label: "Water depth at the diffuser", path: "ambient.depth", si: a.depth, unit: "m" },
-    { label: a.uniform ? "Ambient salinity (uniform)" : "Ambient salinity at the seabed", path: "ambient.salinity", si: bottom.salinity, unit: "g/kg" },
-    { label: a.uniform ? "Ambient temperature (uniform)" : "Ambient temperature at the seabed", path: "ambient.temperature", si: bottom.temperature, unit: "°C" },
+    {
+      label: a.uniform ? "Ambient salinity (uniform)" : "Ambient salinity at the seabed",
+      path: "ambient.salinity",
+      si: bottom.salinity,
+      unit: "g/kg",
+    },
+    {
+      label: a.uniform ? "Ambient temperature (uniform)" : "Ambient temperature at the seabed",
+      path: "ambient.temperature",
+      si: bottom.temperature,
+      unit: "°C",
+    },
     { label: "Current speed", path: "ambient.currentSpeed", si: a.currentSpeed, unit: "m/s" },
-    { label: "Current direction (towards, from north)", path: "ambient.currentDirection", si: a.currentDirection, unit: "°" },
+    {
+      label: "Current direction (towards, from north)",
+      path: "ambient.currentDirection",
+      si: a.currentDirection,
+      unit: "°",
+    },
     { label: "Bed slope (rise/run)", path: "ambient.bedSlope", si: a.bedSlope, unit: "–" },
     { label: "Downslope azimuth", path: "ambient.bedSlopeAzimuth", si: a.bedSlopeAzimuth, unit: "°" },
   ];
@@ -107,8 +171,18 @@ export function inputsHtml(file: unknown, s: Scenario): RawHtml {
     a.profile.forEach((p, i) => {
       rows.push(
         { label: `Profile point ${i + 1} depth`, path: `ambient.profile.${i}.depth`, si: p.depth, unit: "m" },
-        { label: `Profile point ${i + 1} salinity`, path: `ambient.profile.${i}.salinity`, si: p.salinity, unit: "g/kg" },
-        { label: `Profile point ${i + 1} temperature`, path: `ambient.profile.${i}.temperature`, si: p.temperature, unit: "°C" },
+        {
+          label: `Profile point ${i + 1} salinity`,
+          path: `ambient.profile.${i}.salinity`,
+          si: p.salinity,
+          unit: "g/kg",
+        },
+        {
+          label: `Profile point ${i + 1} temperature`,
+          path: `ambient.profile.${i}.temperature`,
+          si: p.temperature,
+          unit: "°C",
+        },
       );
     });
     parts.push(table("Ambient profile", rowsHtml(file, rows)));
@@ -116,10 +190,36 @@ export function inputsHtml(file: unknown, s: Scenario): RawHtml {
   if (s.ambientCases.length > 0) {
     const rows = s.ambientCases.map((c) => {
       const b = c.profile[c.profile.length - 1]!;
-      return html`<tr><td>${c.name}</td><td class="num">${reportNumber(c.weight)}</td><td class="num">${reportNumber(c.depth)}</td><td class="num">${reportNumber(b.salinity)}</td><td class="num">${reportNumber(b.temperature)}</td><td class="num">${reportNumber(c.currentSpeed)}</td><td class="num">${reportNumber(c.currentDirection)}</td></tr>`;
+      return html`<tr>
+        <td>${c.name}</td>
+        <td class="num">${reportNumber(c.weight)}</td>
+        <td class="num">${reportNumber(c.depth)}</td>
+        <td class="num">${reportNumber(b.salinity)}</td>
+        <td class="num">${reportNumber(b.temperature)}</td>
+        <td class="num">${reportNumber(c.currentSpeed)}</td>
+        <td class="num">${reportNumber(c.currentDirection)}</td>
+      </tr>`;
     });
     parts.push(
-      html`<table class="inputs"><caption>Further ambient cases (SI; seabed values)</caption><thead><tr><th>Case</th><th>Weight</th><th>Depth (m)</th><th>Salinity (g/kg)</th><th>Temperature (°C)</th><th>Current (m/s)</th><th>Direction (°)</th></tr></thead><tbody>${join(rows)}</tbody></table>`,
+      html`<table class="inputs">
+        <caption>
+          Further ambient cases (SI; seabed values)
+        </caption>
+        <thead>
+          <tr>
+            <th>Case</th>
+            <th>Weight</th>
+            <th>Depth (m)</th>
+            <th>Salinity (g/kg)</th>
+            <th>Temperature (°C)</th>
+            <th>Current (m/s)</th>
+            <th>Direction (°)</th>
+          </tr>
+        </thead>
+        <tbody>
+          ${join(rows)}
+        </tbody>
+      </table>`,
     );
   }
   const f = s.diffuser;
@@ -134,7 +234,12 @@ export function inputsHtml(file: unknown, s: Scenario): RawHtml {
     { label: "Port azimuth (from north)", path: "diffuser.portAzimuth", si: f.portAzimuth, unit: "°" },
     { label: "Diffuser axis azimuth", path: "diffuser.diffuserAzimuth", si: f.diffuserAzimuth, unit: "°" },
     { label: "Diffuser length", path: "diffuser.length", si: f.length, unit: "m" },
-    { label: "Port discharge coefficient", path: "diffuser.dischargeCoefficient", si: f.dischargeCoefficient ?? null, unit: "–" },
+    {
+      label: "Port discharge coefficient",
+      path: "diffuser.dischargeCoefficient",
+      si: f.dischargeCoefficient ?? null,
+      unit: "–",
+    },
   ];
   if (f.risers) {
     diffuserRows.push(
@@ -158,30 +263,90 @@ export function inputsHtml(file: unknown, s: Scenario): RawHtml {
         : l.maxConcentration !== undefined
           ? `concentration ≤ ${reportNumber(l.maxConcentration)}`
           : "—";
-    return html`<tr><td>${l.constituent}</td><td class="entered">${entered}</td><td>${used}</td><td>${l.unit}</td><td>${l.background !== undefined ? reportNumber(l.background) : "ambient"}</td><td>${l.basis ?? "—"}</td></tr>`;
+    return html`<tr>
+      <td>${l.constituent}</td>
+      <td class="entered">${entered}</td>
+      <td>${used}</td>
+      <td>${l.unit}</td>
+      <td>${l.background !== undefined ? reportNumber(l.background) : "ambient"}</td>
+      <td>${l.basis ?? "—"}</td>
+    </tr>`;
   });
   parts.push(
-    html`<table class="inputs"><caption>Mixing zone: radius ${reportNumber(s.mixingZone.radius)} m (entered: ${asEntered(valueAtPath(file, "mixingZone.radius"))})</caption><thead><tr><th>Limit on</th><th>As entered</th><th>Used</th><th>Unit</th><th>Background</th><th>Basis</th></tr></thead><tbody>${join(limitRows)}</tbody></table>`,
+    html`<table class="inputs">
+      <caption>
+        Mixing zone: radius ${reportNumber(s.mixingZone.radius)} m (entered:
+        ${asEntered(valueAtPath(file, "mixingZone.radius"))})
+      </caption>
+      <thead>
+        <tr>
+          <th>Limit on</th>
+          <th>As entered</th>
+          <th>Used</th>
+          <th>Unit</th>
+          <th>Background</th>
+          <th>Basis</th>
+        </tr>
+      </thead>
+      <tbody>
+        ${join(limitRows)}
+      </tbody>
+    </table>`,
   );
   const optionRows: InputRow[] = [
-    { label: "Near-field dilution carried to the edge", path: "options.nearFieldForEdge", si: s.options.nearFieldForEdge, unit: "" },
+    {
+      label: "Near-field dilution carried to the edge",
+      path: "options.nearFieldForEdge",
+      si: s.options.nearFieldForEdge,
+      unit: "",
+    },
     { label: "Method beyond the near field", path: "options.farField", si: s.options.farField, unit: "" },
-    { label: "Add a slack-water case to studies", path: "options.addSlackWater", si: String(s.options.addSlackWater), unit: "" },
+    {
+      label: "Add a slack-water case to studies",
+      path: "options.addSlackWater",
+      si: String(s.options.addSlackWater),
+      unit: "",
+    },
   ];
   parts.push(table("Options", rowsHtml(file, optionRows)));
   if (s.uncertainty && s.uncertainty.inputs.length > 0) {
     const rows = s.uncertainty.inputs.map(
       (u) =>
-        html`<tr><td class="path">${u.path}</td><td>${u.distribution}</td><td>${Object.entries(u.params)
-          .map(([k, v]) => `${k} = ${reportNumber(v)}`)
-          .join(", ")}</td></tr>`,
+        html`<tr>
+          <td class="path">${u.path}</td>
+          <td>${u.distribution}</td>
+          <td>
+            ${Object.entries(u.params)
+              .map(([k, v]) => `${k} = ${reportNumber(v)}`)
+              .join(", ")}
+          </td>
+        </tr>`,
     );
     parts.push(
-      html`<table class="inputs"><caption>Uncertain inputs (SI parameters)</caption><thead><tr><th>Input</th><th>Distribution</th><th>Parameters</th></tr></thead><tbody>${join(rows)}</tbody></table>`,
+      html`<table class="inputs">
+        <caption>
+          Uncertain inputs (SI parameters)
+        </caption>
+        <thead>
+          <tr>
+            <th>Input</th>
+            <th>Distribution</th>
+            <th>Parameters</th>
+          </tr>
+        </thead>
+        <tbody>
+          ${join(rows)}
+        </tbody>
+      </table>`,
     );
   }
   if (s.conversions.length > 0) {
-    parts.push(html`<p class="note"><strong>Conversions applied while reading the file:</strong></p><ul class="conversions">${join(s.conversions.map((c) => html`<li>${c}</li>`))}</ul>`);
+    parts.push(
+      html`<p class="note"><strong>Conversions applied while reading the file:</strong></p>
+        <ul class="conversions">
+          ${join(s.conversions.map((c) => html`<li>${c}</li>`))}
+        </ul>`,
+    );
   }
   return join(parts);
 }
@@ -193,10 +358,27 @@ export function rawInputsHtml(file: unknown): RawHtml {
     if (v !== null && typeof v === "object") {
       for (const [k, child] of Object.entries(v as Record<string, unknown>)) walk(child, path ? `${path}.${k}` : k);
     } else {
-      rows.push(html`<tr><td class="path">${path}</td><td class="entered">${asEntered(v)}</td></tr>`);
+      rows.push(
+        html`<tr>
+          <td class="path">${path}</td>
+          <td class="entered">${asEntered(v)}</td>
+        </tr>`,
+      );
     }
   };
   walk(file, "");
-  return html`<table class="inputs"><caption>Inputs as entered (the file could not be re-read, so SI values are not shown)</caption><thead><tr><th>Field</th><th>As entered</th></tr></thead><tbody>${join(rows)}</tbody></table>`;
+  return html`<table class="inputs">
+    <caption>
+      Inputs as entered (the file could not be re-read, so SI values are not shown)
+    </caption>
+    <thead>
+      <tr>
+        <th>Field</th>
+        <th>As entered</th>
+      </tr>
+    </thead>
+    <tbody>
+      ${join(rows)}
+    </tbody>
+  </table>`;
 }
-

@@ -87,7 +87,13 @@ export interface BasinResult {
   readonly naturalBackground: number; // g/kg, salinity
   readonly raisedBackground: number; // g/kg, salinity
   /** The same balance for every constituent with a limit basis (salinity, temperature, listed ones). */
-  readonly constituents: readonly { readonly constituent: string; readonly unit: string; readonly naturalBackground: number; readonly increase: number; readonly raisedBackground: number }[];
+  readonly constituents: readonly {
+    readonly constituent: string;
+    readonly unit: string;
+    readonly naturalBackground: number;
+    readonly increase: number;
+    readonly raisedBackground: number;
+  }[];
   readonly source: string;
   /** What the box model leaves out. */
   readonly limits: string;

@@ -14,8 +14,7 @@ export function rangeBoundJson(v: unknown): unknown {
 
 /** `JSON.stringify` replacer: arrays under a key named `range` or ending in `Range` get explicit bounds. */
 export function jsonRangeReplacer(key: string, value: unknown): unknown {
-  if (Array.isArray(value) && (key === "range" || key.endsWith("Range")))
-    return value.map(rangeBoundJson);
+  if (Array.isArray(value) && (key === "range" || key.endsWith("Range"))) return value.map(rangeBoundJson);
   return value;
 }
 

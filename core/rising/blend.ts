@@ -45,28 +45,34 @@ export function blendSignChange(scenario: Scenario): BlendResult | null {
   for (let i = 1; i < xs.length; i++) {
     const a = gs[i - 1]!;
     const b = gs[i]!;
-    if ((a > 0) === (b > 0)) continue;
+    if (a > 0 === b > 0) continue;
     let lo = xs[i - 1]!;
     let hi = xs[i]!;
     let glo = a;
     while (hi - lo > 1e-3 * hi) {
       const mid = 0.5 * (lo + hi);
       const gm = gAt(mid);
-      if ((gm > 0) === (glo > 0)) {
+      if (gm > 0 === glo > 0) {
         lo = mid;
         glo = gm;
       } else hi = mid;
     }
     changes.push({ ratio: 0.5 * (lo + hi), above: b > 0 ? "sinks" : "rises" });
   }
-  const nearest = changes.reduce<{ ratio: number } | null>((n, c) => (n === null || Math.abs(c.ratio - ratio) < Math.abs(n.ratio - ratio) ? c : n), null);
+  const nearest = changes.reduce<{ ratio: number } | null>(
+    (n, c) => (n === null || Math.abs(c.ratio - ratio) < Math.abs(n.ratio - ratio) ? c : n),
+    null,
+  );
   const buoyancy = g0 > 0 ? "sinks" : "rises";
   const fmt = (x: number) => x.toPrecision(3);
   const note =
     changes.length === 0
       ? `The blend ${buoyancy === "sinks" ? "sinks" : "rises"} at every blend ratio from 0 to ${MAX_RATIO} (blending flow ÷ brine flow).`
       : changes
-          .map((c) => `at a blend ratio of ${fmt(c.ratio)} the discharge changes to ${c.above === "rises" ? "rising (lighter than the sea)" : "sinking (denser than the sea)"}`)
+          .map(
+            (c) =>
+              `at a blend ratio of ${fmt(c.ratio)} the discharge changes to ${c.above === "rises" ? "rising (lighter than the sea)" : "sinking (denser than the sea)"}`,
+          )
           .join("; ") + `; this scenario's ratio is ${fmt(ratio)}, where it ${buoyancy}.`;
   return { ratio, buoyancy, reducedGravity: g0, signChangeRatio: nearest?.ratio ?? null, signChanges: changes, note };
 }

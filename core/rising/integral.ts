@@ -31,7 +31,11 @@ const DENSE_ONLY = new Set([
   "integral-angle-outside-validation",
 ]);
 
-export function risingIntegral(jet: JetSource, column: AmbientColumn, options: IntegralOptions = {}): NearFieldMethodResult & { risingField: RisingField } {
+export function risingIntegral(
+  jet: JetSource,
+  column: AmbientColumn,
+  options: IntegralOptions = {},
+): NearFieldMethodResult & { risingField: RisingField } {
   const r = nearFieldIntegral(jet, column, { ...options, includePath: true });
   const surface = column.depth - jet.portHeight;
   const events = r.events ?? [];
@@ -39,10 +43,24 @@ export function risingIntegral(jet: JetSource, column: AmbientColumn, options: I
   const warnings: ResultWarning[] = r.warnings.filter((w) => !DENSE_ONLY.has(w.code));
   const notes = (r.notes ?? []).filter((n) => !/impact|near field: impact/i.test(n));
   if (!r.available || path.length < 2) {
-    return { ...r, bias: RISING_INTEGRAL_BIAS, risingField: { kind: "none", height: 0, dilution: 1, distance: 0, halfWidth: 0, trapHeight: null, buoyancyFrequency: 0 } };
+    return {
+      ...r,
+      bias: RISING_INTEGRAL_BIAS,
+      risingField: {
+        kind: "none",
+        height: 0,
+        dilution: 1,
+        distance: 0,
+        halfWidth: 0,
+        trapHeight: null,
+        buoyancyFrequency: 0,
+      },
+    };
   }
   const last = path[path.length - 1]!;
-  const reachedSurface = events.some((e) => e.kind === "surface-contact" && e.z >= surface - 1e-6 * Math.max(1, surface));
+  const reachedSurface = events.some(
+    (e) => e.kind === "surface-contact" && e.z >= surface - 1e-6 * Math.max(1, surface),
+  );
   const neutral = events.filter((e) => e.kind === "neutral-buoyancy");
   const n2 = bulkBuoyancyFrequencySquared(column, jet.portHeight);
   let field: RisingField;
@@ -55,24 +73,55 @@ export function risingIntegral(jet: JetSource, column: AmbientColumn, options: I
   if (reachedSurface) {
     const top = events.filter((e) => e.kind === "surface-contact").reduce((a, b) => (b.s > a.s ? b : a));
     const hw = halfWidthAt(top.s);
-    field = { kind: "surface", height: surface, dilution: top.dilution, distance: plan(top.x, top.y) + hw, halfWidth: hw, trapHeight: null, buoyancyFrequency: n2 > 0 ? Math.sqrt(n2) : 0 };
-    notes.push(`Reaches the surface ${surface.toFixed(2)} m above the port with centreline dilution ${top.dilution.toFixed(1)}; the surface field starts at the plume's edge.`);
+    field = {
+      kind: "surface",
+      height: surface,
+      dilution: top.dilution,
+      distance: plan(top.x, top.y) + hw,
+      halfWidth: hw,
+      trapHeight: null,
+      buoyancyFrequency: n2 > 0 ? Math.sqrt(n2) : 0,
+    };
+    notes.push(
+      `Reaches the surface ${surface.toFixed(2)} m above the port with centreline dilution ${top.dilution.toFixed(1)}; the surface field starts at the plume's edge.`,
+    );
   } else if (neutral.length > 0) {
     // The first sign change on the way up: where the plume's buoyancy is spent (the trap level).
     const n = neutral[0]!;
     const hw = halfWidthAt(n.s);
-    field = { kind: "trapped", height: n.z, dilution: n.dilution, distance: plan(n.x, n.y) + hw, halfWidth: hw, trapHeight: n.z, buoyancyFrequency: Math.sqrt(Math.max(0, n2)) };
+    field = {
+      kind: "trapped",
+      height: n.z,
+      dilution: n.dilution,
+      distance: plan(n.x, n.y) + hw,
+      halfWidth: hw,
+      trapHeight: n.z,
+      buoyancyFrequency: Math.sqrt(Math.max(0, n2)),
+    };
     notes.push(
       `Trapped by the stratification: buoyancy vanishes ${n.z.toFixed(2)} m above the port (centreline dilution ${n.dilution.toFixed(1)}); the upper edge overshoots to ${(r.maxRiseHeight ?? n.z).toFixed(2)} m and the plume spreads as a layer near the trap level.`,
     );
   } else {
     // Stopped without reaching the surface or a trap level (length or step limits): keep the last point,
     // and say the result does not apply.
-    field = { kind: "none", height: last.z, dilution: last.dilution, distance: plan(last.x, last.y), halfWidth: last.halfWidth, trapHeight: null, buoyancyFrequency: 0 };
+    field = {
+      kind: "none",
+      height: last.z,
+      dilution: last.dilution,
+      distance: plan(last.x, last.y),
+      halfWidth: last.halfWidth,
+      trapHeight: null,
+      buoyancyFrequency: 0,
+    };
     warnings.push(
-      warning("rising-plume-no-end", "serious", "The rising plume reached neither the surface nor a trap level within the model's limits; its dilutions do not apply.", {
-        stage: "integral",
-      }),
+      warning(
+        "rising-plume-no-end",
+        "serious",
+        "The rising plume reached neither the surface nor a trap level within the model's limits; its dilutions do not apply.",
+        {
+          stage: "integral",
+        },
+      ),
     );
   }
   const maxRise = Math.min(r.maxRiseHeight ?? field.height, surface);
@@ -92,7 +141,10 @@ export function risingIntegral(jet: JetSource, column: AmbientColumn, options: I
     warnings,
     notes,
     // Past the field's start (the overshoot above a trap level) the path's extra mixing is not counted.
-    path: options.includePath === false ? undefined : path.map((p) => (p.dilution > field.dilution ? { ...p, dilution: field.dilution } : p)),
+    path:
+      options.includePath === false
+        ? undefined
+        : path.map((p) => (p.dilution > field.dilution ? { ...p, dilution: field.dilution } : p)),
     risingField: field,
   };
 }

@@ -38,14 +38,20 @@ export const RISING_LENGTH_SCALE_BIAS =
   "port and any current add dilution that is not counted, so the dilutions are expected to be low (cautious).";
 
 /** Runs the rising length-scale method for one port (or a merged group handled by the caller). Never throws. */
-export function risingLengthScale(jet: JetSource, column: AmbientColumn): NearFieldMethodResult & { risingField: RisingField } {
+export function risingLengthScale(
+  jet: JetSource,
+  column: AmbientColumn,
+): NearFieldMethodResult & { risingField: RisingField } {
   const stage = "length-scale";
   const warnings: ResultWarning[] = [];
   const notes: string[] = [];
   const h = column.depth - jet.portHeight;
   if (!(jet.flow > 0) || !(jet.velocity > 0) || !(h > 0)) {
     const reason = "The port flow, velocity and submergence must be positive.";
-    return { ...nullNearFieldResult("length-scale", RISING_LENGTH_SCALE_SOURCE, RISING_LENGTH_SCALE_BIAS, [], reason), risingField: nullField() };
+    return {
+      ...nullNearFieldResult("length-scale", RISING_LENGTH_SCALE_SOURCE, RISING_LENGTH_SCALE_BIAS, [], reason),
+      risingField: nullField(),
+    };
   }
   const f = roundSourceFluxes(jet.flow, jet.velocity, jet.reducedGravity);
   const n2 = bulkBuoyancyFrequencySquared(column, jet.portHeight);
@@ -70,13 +76,21 @@ export function risingLengthScale(jet: JetSource, column: AmbientColumn): NearFi
     `Horizontal offset of the rising plume taken as min(l_M, rise)·cos θ = ${offset.toFixed(2)} m, and the field starts at the plume's top-hat radius √2·0.12·z = ${radius.toFixed(2)} m (judgement).`,
   );
   if (n2 > 0 && column.depths.length > 2) {
-    notes.push("The trap height uses the bulk stratification between the port and the surface (exact for a linear profile); the integral method follows the profile itself.");
+    notes.push(
+      "The trap height uses the bulk stratification between the port and the surface (exact for a linear profile); the integral method follows the profile itself.",
+    );
   }
   if (n2 < 0) {
     warnings.push(
-      warning("length-scale-unstable-column", "warning", "The water above the port is denser at the top than at the port (unstable); the plume is taken to reach the surface.", {
-        parameter: "ambient.profile", stage,
-      }),
+      warning(
+        "length-scale-unstable-column",
+        "warning",
+        "The water above the port is denser at the top than at the port (unstable); the plume is taken to reach the surface.",
+        {
+          parameter: "ambient.profile",
+          stage,
+        },
+      ),
     );
   }
   if (column.currentSpeed > 0) {
@@ -94,9 +108,16 @@ export function risingLengthScale(jet: JetSource, column: AmbientColumn): NearFi
   }
   if (jet.angle < 30) {
     warnings.push(
-      warning("length-scale-shallow-port", "info", `Port angle ${jet.angle.toFixed(0)}° is far from vertical: the vertical-plume laws are rough; its longer path adds dilution not counted here.`, {
-        parameter: "diffuser.portAngle", value: jet.angle, stage,
-      }),
+      warning(
+        "length-scale-shallow-port",
+        "info",
+        `Port angle ${jet.angle.toFixed(0)}° is far from vertical: the vertical-plume laws are rough; its longer path adds dilution not counted here.`,
+        {
+          parameter: "diffuser.portAngle",
+          value: jet.angle,
+          stage,
+        },
+      ),
     );
   }
   const field: RisingField = {

@@ -34,7 +34,6 @@ export interface RisingMerging {
   readonly methods: RisingMethod[];
 }
 
-
 /** Spacing between neighbouring plume sources seen across the diffuser, m (Infinity for one source). */
 function sourceSpacing(scenario: Scenario): number {
   const d = scenario.diffuser;
@@ -59,13 +58,24 @@ export function risingMultiport(scenario: Scenario, jet: JetSource, methods: rea
   const d = scenario.diffuser;
   if (n <= 1) {
     return {
-      multiport: { regime: "single-port", merged: false, portsUsed: 1, reason: "One port: no neighbouring plumes.", spacingRatio: null, dilutionFactor: 1, source: RISING_MERGING_SOURCE },
+      multiport: {
+        regime: "single-port",
+        merged: false,
+        portsUsed: 1,
+        reason: "One port: no neighbouring plumes.",
+        spacingRatio: null,
+        dilutionFactor: 1,
+        source: RISING_MERGING_SOURCE,
+      },
       methods: [...methods],
     };
   }
   const spacing = sourceSpacing(scenario);
   const riserMerge = d.layout === "rosette" && d.risers !== undefined && d.risers.portsPerRiser > 1;
-  const lineLength = d.layout === "rosette" && d.risers ? Math.max(d.risers.count, 1) * (Number.isFinite(spacing) ? spacing : 0) : n * d.portSpacing;
+  const lineLength =
+    d.layout === "rosette" && d.risers
+      ? Math.max(d.risers.count, 1) * (Number.isFinite(spacing) ? spacing : 0)
+      : n * d.portSpacing;
   const q = lineLength > 0 ? scenario.discharge.flow / lineLength : Infinity;
   let worst = 1;
   const notes: string[] = [];
@@ -78,15 +88,22 @@ export function risingMultiport(scenario: Scenario, jet: JetSource, methods: rea
     const linesUp = zMerge < m.field.height && Number.isFinite(q);
     if (!linesUp && !riserMerge) return m;
     const sLine = linesUp
-      ? Math.max(linePlumeDilutionFromFlux(q, jet.reducedGravity, m.field.height), planeJetDilution(q, jet.velocity * q, m.field.height))
+      ? Math.max(
+          linePlumeDilutionFromFlux(q, jet.reducedGravity, m.field.height),
+          planeJetDilution(q, jet.velocity * q, m.field.height),
+        )
       : Infinity;
     // A dilution is at least 1 (the undiluted discharge): scaling a weak plume by k^(−2/3) must not go below it.
     const merged = Math.max(1, Math.min(m.field.dilution, sRiser, sLine));
     const factor = merged / m.field.dilution;
     worst = Math.min(worst, factor);
     const parts: string[] = [];
-    if (riserMerge) parts.push(`the ${k} plumes of each riser rise as one (dilution × ${Math.pow(k, -2 / 3).toFixed(3)})`);
-    if (linesUp) parts.push(`neighbouring plumes merge ${zMerge.toFixed(2)} m above the ports (spacing ${spacing.toFixed(2)} m) and rise as a line plume (q = ${q.toPrecision(3)} m²/s), dilution ${sLine.toFixed(1)} at ${m.field.height.toFixed(2)} m`);
+    if (riserMerge)
+      parts.push(`the ${k} plumes of each riser rise as one (dilution × ${Math.pow(k, -2 / 3).toFixed(3)})`);
+    if (linesUp)
+      parts.push(
+        `neighbouring plumes merge ${zMerge.toFixed(2)} m above the ports (spacing ${spacing.toFixed(2)} m) and rise as a line plume (q = ${q.toPrecision(3)} m²/s), dilution ${sLine.toFixed(1)} at ${m.field.height.toFixed(2)} m`,
+      );
     const note = `Merging (${m.nf.method}): ${parts.join("; ")}; field dilution ${merged.toFixed(1)} (× ${factor.toFixed(3)}).`;
     notes.push(note);
     const field = { ...m.field, dilution: merged, halfWidth: m.field.halfWidth };
@@ -96,7 +113,10 @@ export function risingMultiport(scenario: Scenario, jet: JetSource, methods: rea
       path: m.nf.path?.map((p) => (p.dilution > merged ? { ...p, dilution: merged } : p)),
       risingField: field,
       nearFieldDilution: merged,
-      maxRiseDilution: m.nf.maxRiseDilution === null || m.nf.maxRiseDilution === undefined ? null : Math.min(m.nf.maxRiseDilution, Math.max(merged, m.nf.maxRiseDilution * factor)),
+      maxRiseDilution:
+        m.nf.maxRiseDilution === null || m.nf.maxRiseDilution === undefined
+          ? null
+          : Math.min(m.nf.maxRiseDilution, Math.max(merged, m.nf.maxRiseDilution * factor)),
       notes: [...(m.nf.notes ?? []), note],
     };
     return { nf, field };
@@ -117,7 +137,6 @@ export function risingMultiport(scenario: Scenario, jet: JetSource, methods: rea
     methods: out,
   };
 }
-
 
 /** Plane-jet centreline dilution S = √(m·z)/(2.38·q), q and m per unit length (at least 1). */
 export function planeJetDilution(q: number, m: number, z: number): number {

@@ -42,7 +42,8 @@ export const ROUND_PLUME_SOURCE =
   "Round plume S = B^(1/3)·z^(5/3)/(11·Q): Fischer et al. (1979) ch. 9, table 9.1; similarity solution of Morton, Taylor & Turner (1956)";
 export const TRAP_HEIGHT_SOURCE =
   "Plume trap height in linear stratification z_max = 3.8·(B/N³)^(1/4), buoyancy vanishing at about 0.75·z_max: Morton, Taylor & Turner (1956)";
-export const BUOYANT_JET_SOURCE = "Buoyant-jet asymptotic regimes (jet-like below l_M, plume-like above): Wright (1984)";
+export const BUOYANT_JET_SOURCE =
+  "Buoyant-jet asymptotic regimes (jet-like below l_M, plume-like above): Wright (1984)";
 
 export interface RoundSourceFluxes {
   readonly q: number; // m³/s
@@ -97,4 +98,3 @@ export function bulkBuoyancyFrequencySquared(
   const rhoTop = interpolateLinear(column.depths, column.densities, 0);
   return (GRAVITY * (rhoPort - rhoTop)) / (rhoPort * h);
 }
-

@@ -8,16 +8,25 @@ import type { NearFieldMethodResult } from "../nearfield/types";
 import type { ResultWarning } from "../warnings";
 import { methodNotCovering } from "../compliance/scope";
 
-export function risingScopeReasons(nearField: readonly NearFieldMethodResult[], warnings: readonly ResultWarning[]): string[] {
+export function risingScopeReasons(
+  nearField: readonly NearFieldMethodResult[],
+  warnings: readonly ResultWarning[],
+): string[] {
   const reasons: string[] = [];
   const all = [...warnings, ...nearField.flatMap((m) => m.warnings)];
   const notCovering = nearField.map((m) => ({ m, why: methodNotCovering(m, all) }));
   if (notCovering.length === 0 || notCovering.every((x) => x.why !== null)) {
-    reasons.push(`No near-field method covers the rising plume${notCovering.length ? `: ${notCovering.map((x) => `${x.m.method} ${x.why}`).join("; ")}` : ""}.`);
+    reasons.push(
+      `No near-field method covers the rising plume${notCovering.length ? `: ${notCovering.map((x) => `${x.m.method} ${x.why}`).join("; ")}` : ""}.`,
+    );
   }
   for (const w of all) if (w.severity === "serious" && w.stage === "properties") reasons.push(w.message);
   return [...new Set(reasons)];
 }
 
 /** Source warnings of the dense-jet checks that do not apply to a rising plume. */
-export const DENSE_SOURCE_CODES: ReadonlySet<string> = new Set(["jet-reaches-surface", "jet-near-surface", "seabed-attachment-shallow-angle"]);
+export const DENSE_SOURCE_CODES: ReadonlySet<string> = new Set([
+  "jet-reaches-surface",
+  "jet-near-surface",
+  "seabed-attachment-shallow-angle",
+]);

@@ -53,13 +53,20 @@ export function risingBeyond(input: RisingBeyondInput): BeyondOutput {
   const d = scenario.diffuser;
   const n = portCountFromDiffuser(scenario);
   const diffuserLength = n > 1 ? Math.max(d.length, 0) : 0;
-  const crossLength = u > 0 ? diffuserLength * Math.abs(Math.sin(degToRad(d.diffuserAzimuth - column.currentDirection))) : diffuserLength;
+  const crossLength =
+    u > 0 ? diffuserLength * Math.abs(Math.sin(degToRad(d.diffuserAzimuth - column.currentDirection))) : diffuserLength;
   const opts = scenario.options;
   if (opts.farField === "gravity-current") {
     warnings.push(
-      warning("rising-no-dense-layer", "info", "The discharge rises: there is no spreading dense layer; the field at the surface or trap level was carried by passive diffusion.", {
-        parameter: "options.farField", stage: "far-field",
-      }),
+      warning(
+        "rising-no-dense-layer",
+        "info",
+        "The discharge rises: there is no spreading dense layer; the field at the surface or trap level was carried by passive diffusion.",
+        {
+          parameter: "options.farField",
+          stage: "far-field",
+        },
+      ),
     );
   }
 
@@ -67,7 +74,8 @@ export function risingBeyond(input: RisingBeyondInput): BeyondOutput {
   const speedOf = (m: RisingMethod) => Math.max(u, fieldSpreadingSpeed(m, jet.reducedGravity));
   // Carried by the current, the field is as wide as the diffuser seen across the current; spreading on its
   // own, it spreads from the whole diffuser length.
-  const widthOf = (m: RisingMethod) => 2 * m.field.halfWidth + (u >= fieldSpreadingSpeed(m, jet.reducedGravity) ? crossLength : diffuserLength);
+  const widthOf = (m: RisingMethod) =>
+    2 * m.field.halfWidth + (u >= fieldSpreadingSpeed(m, jet.reducedGravity) ? crossLength : diffuserLength);
   const edgeOf = (m: RisingMethod): number => {
     if (radius <= m.field.distance) return dilutionFromProfile(jetProfileFromNearField(m.nf), radius);
     const field = brooksFieldFromInput({ initialWidth: widthOf(m), currentSpeed: speedOf(m) });
@@ -78,18 +86,30 @@ export function risingBeyond(input: RisingBeyondInput): BeyondOutput {
     chosen = usable.find((m) => m.nf.method === opts.nearFieldForEdge);
     if (!chosen && usable.length) {
       warnings.push(
-        warning("near-field-choice-unavailable", "warning", `Near-field method "${opts.nearFieldForEdge}" gave no result; the more conservative available method was used.`, {
-          parameter: "options.nearFieldForEdge", stage: "far-field",
-        }),
+        warning(
+          "near-field-choice-unavailable",
+          "warning",
+          `Near-field method "${opts.nearFieldForEdge}" gave no result; the more conservative available method was used.`,
+          {
+            parameter: "options.nearFieldForEdge",
+            stage: "far-field",
+          },
+        ),
       );
     }
   }
-  chosen ??= usable.reduce<RisingMethod | undefined>((lo, m) => (lo === undefined || edgeOf(m) < edgeOf(lo) ? m : lo), undefined);
+  chosen ??= usable.reduce<RisingMethod | undefined>(
+    (lo, m) => (lo === undefined || edgeOf(m) < edgeOf(lo) ? m : lo),
+    undefined,
+  );
 
   const full = input.detail !== "edge";
   const alternatives = full
     ? usable.map((m) => ({
-        method: radius <= m.field.distance ? `${m.nf.method} (plume crosses the edge)` : `${m.nf.method} ${m.field.kind} field + passive-diffusion`,
+        method:
+          radius <= m.field.distance
+            ? `${m.nf.method} (plume crosses the edge)`
+            : `${m.nf.method} ${m.field.kind} field + passive-diffusion`,
         dilution: edgeOf(m),
       }))
     : [];
@@ -100,21 +120,39 @@ export function risingBeyond(input: RisingBeyondInput): BeyondOutput {
   const bgTemperature = interpolate(column.depths, column.temperatures, fieldDepth);
   let edgeDilution = 1;
   let edgeInside = false;
-  let series: SeriesResult = { distance: [0], dilution: [1], salinityIncrease: [scenario.discharge.salinity - bgSalinity], layerThickness: [null], stage: ["jet"] };
+  let series: SeriesResult = {
+    distance: [0],
+    dilution: [1],
+    salinityIncrease: [scenario.discharge.salinity - bgSalinity],
+    layerThickness: [null],
+    stage: ["jet"],
+  };
   if (!chosen) {
     warnings.push(
-      warning("edge-dilution-undiluted", "serious", "No near-field method reached the surface or a trap level; the edge dilution is taken as 1 (undiluted).", {
-        stage: "far-field",
-      }),
+      warning(
+        "edge-dilution-undiluted",
+        "serious",
+        "No near-field method reached the surface or a trap level; the edge dilution is taken as 1 (undiluted).",
+        {
+          stage: "far-field",
+        },
+      ),
     );
   } else {
     edgeDilution = edgeOf(chosen);
     edgeInside = radius <= chosen.field.distance;
     if (edgeInside) {
       warnings.push(
-        warning("edge-inside-near-field", "info", `The mixing-zone edge (${radius} m) lies inside the rising plume's near field (ends at ${chosen.field.distance.toFixed(1)} m); the plume's own dilution there is used.`, {
-          parameter: "mixingZone.radius", value: radius, stage: "far-field",
-        }),
+        warning(
+          "edge-inside-near-field",
+          "info",
+          `The mixing-zone edge (${radius} m) lies inside the rising plume's near field (ends at ${chosen.field.distance.toFixed(1)} m); the plume's own dilution there is used.`,
+          {
+            parameter: "mixingZone.radius",
+            value: radius,
+            stage: "far-field",
+          },
+        ),
       );
     }
     const c = fieldSpreadingSpeed(chosen, jet.reducedGravity);
@@ -128,8 +166,21 @@ export function risingBeyond(input: RisingBeyondInput): BeyondOutput {
         ),
       );
     }
-    warnings.push(...brooksDilutionFromDistanceValidityIssues({ distance: radius, initialWidth: widthOf(chosen), currentSpeed: speedOf(chosen) }));
-    if (full) series = risingSeries(chosen, Math.max(2 * radius, 1.2 * chosen.field.distance, 1), scenario.discharge.salinity - bgSalinity, speedOf(chosen), widthOf(chosen));
+    warnings.push(
+      ...brooksDilutionFromDistanceValidityIssues({
+        distance: radius,
+        initialWidth: widthOf(chosen),
+        currentSpeed: speedOf(chosen),
+      }),
+    );
+    if (full)
+      series = risingSeries(
+        chosen,
+        Math.max(2 * radius, 1.2 * chosen.field.distance, 1),
+        scenario.discharge.salinity - bgSalinity,
+        speedOf(chosen),
+        widthOf(chosen),
+      );
   }
 
   const assessment = complianceFromEdgeDilution(scenario, edgeDilution, bgSalinity, bgTemperature);
@@ -138,15 +189,20 @@ export function risingBeyond(input: RisingBeyondInput): BeyondOutput {
   // the area is that of a circle of that radius (an upper bound for a field drifting with the current).
   let furthest = 0;
   const req = assessment.compliance.requiredDilution;
-  for (let i = 0; i < series.distance.length; i++) if (series.dilution[i]! < req) furthest = Math.max(furthest, series.distance[i]!);
-  const footprint = full ? { area: Math.PI * furthest * furthest, furthestExtent: furthest } : { area: 0, furthestExtent: 0 };
+  for (let i = 0; i < series.distance.length; i++)
+    if (series.dilution[i]! < req) furthest = Math.max(furthest, series.distance[i]!);
+  const footprint = full
+    ? { area: Math.PI * furthest * furthest, furthestExtent: furthest }
+    : { area: 0, furthestExtent: 0 };
 
   const nfName = chosen ? chosen.nf.method : "none";
   const fieldLabel = chosen?.field.kind === "trapped" ? "trapped field" : "surface field";
   const mixingZone: MixingZoneResult = {
     radius,
     dilution: edgeDilution,
-    method: edgeInside ? `${nfName} rising plume (edge inside the near field)` : `${nfName} rising plume → ${fieldLabel} × Brooks (1960) passive diffusion`,
+    method: edgeInside
+      ? `${nfName} rising plume (edge inside the near field)`
+      : `${nfName} rising plume → ${fieldLabel} × Brooks (1960) passive diffusion`,
     nearFieldMethod: nfName,
     edgeInsideNearField: edgeInside,
     alternatives,
@@ -162,9 +218,19 @@ export function risingBeyond(input: RisingBeyondInput): BeyondOutput {
   };
   const methods = [
     { stage: "multiport", name: "rising-plume merging and line-plume limit", source: RISING_MERGING_SOURCE },
-    { stage: "far-field", name: "passive lateral diffusion of the surface or trapped field", source: `${BROOKS_1960_SOURCE}; carried by the current or by the field's own spreading speed, whichever is faster (judgement, no source)` },
-    { stage: "compliance", name: "required dilution", source: "S_req = (C_d − C_b)/(C_limit − C_b), from the definition of dilution" },
-    ...(assessment.basin ? [{ stage: "background", name: assessment.basin.method, source: assessment.basin.source }] : []),
+    {
+      stage: "far-field",
+      name: "passive lateral diffusion of the surface or trapped field",
+      source: `${BROOKS_1960_SOURCE}; carried by the current or by the field's own spreading speed, whichever is faster (judgement, no source)`,
+    },
+    {
+      stage: "compliance",
+      name: "required dilution",
+      source: "S_req = (C_d − C_b)/(C_limit − C_b), from the definition of dilution",
+    },
+    ...(assessment.basin
+      ? [{ stage: "background", name: assessment.basin.method, source: assessment.basin.source }]
+      : []),
   ];
   return {
     multiport: mp.multiport,
@@ -177,13 +243,7 @@ export function risingBeyond(input: RisingBeyondInput): BeyondOutput {
   };
 }
 
-function risingSeries(
-  m: RisingMethod,
-  xEnd: number,
-  excess: number,
-  u: number,
-  width: number,
-): SeriesResult {
+function risingSeries(m: RisingMethod, xEnd: number, excess: number, u: number, width: number): SeriesResult {
   const distance: number[] = [];
   const dilution: number[] = [];
   const stage: string[] = [];
@@ -205,7 +265,13 @@ function risingSeries(
     stage.push("passive-diffusion");
   }
 
-  return { distance, dilution, salinityIncrease: dilution.map((s) => excess / s), layerThickness: distance.map(() => null), stage };
+  return {
+    distance,
+    dilution,
+    salinityIncrease: dilution.map((s) => excess / s),
+    layerThickness: distance.map(() => null),
+    stage,
+  };
 }
 
 /**

@@ -58,7 +58,9 @@ export type BoundedPath = keyof typeof FIELD_BOUNDS;
 
 /** The bounds of a path, looked up as an own key of the fixed table only (never the prototype chain). */
 export function fieldBounds(path: string): FieldBounds | undefined {
-  return Object.prototype.hasOwnProperty.call(FIELD_BOUNDS, path) ? (FIELD_BOUNDS as Record<string, FieldBounds>)[path] : undefined;
+  return Object.prototype.hasOwnProperty.call(FIELD_BOUNDS, path)
+    ? (FIELD_BOUNDS as Record<string, FieldBounds>)[path]
+    : undefined;
 }
 
 /** True when `value` lies within the bounds (whole numbers for counts). */

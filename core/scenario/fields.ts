@@ -112,7 +112,10 @@ export function fraction(min: number, max: number, what: string, exclusiveMin = 
     .transform((raw, ctx) => {
       const parsed = quantityToSI(raw, "ratio");
       if (!parsed.ok) {
-        ctx.addIssue({ code: "custom", message: typeof raw === "string" ? `${parsed.message}; ${expectation}` : expectation });
+        ctx.addIssue({
+          code: "custom",
+          message: typeof raw === "string" ? `${parsed.message}; ${expectation}` : expectation,
+        });
         return z.NEVER;
       }
       const v = parsed.value;

@@ -19,5 +19,10 @@ export function issue(path: string, value: unknown, expectation: string, related
       : typeof value === "number" && !Number.isFinite(value)
         ? String(value)
         : `${(JSON.stringify(value) ?? String(value)).slice(0, 80)}`;
-  return { path, value, message: `${path || "(file)"}: ${shown} ${expectation}`, ...(related && related.length ? { related } : {}) };
+  return {
+    path,
+    value,
+    message: `${path || "(file)"}: ${shown} ${expectation}`,
+    ...(related && related.length ? { related } : {}),
+  };
 }

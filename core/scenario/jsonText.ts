@@ -19,7 +19,8 @@ export const MAX_INPUT_BYTES = 5 * 1024 * 1024;
  */
 export const MAX_JSON_DEPTH = 64;
 
-export type JsonTextOutcome<T> = { readonly ok: true; readonly value: T } | { readonly ok: false; readonly message: string };
+export type JsonTextOutcome<T> =
+  { readonly ok: true; readonly value: T } | { readonly ok: false; readonly message: string };
 
 /** "812 kB", "5 MB", "7.3 MB" (binary units, as file managers show them). */
 export function formatByteSize(bytes: number): string {
@@ -71,7 +72,8 @@ export function jsonNestingDepth(text: string, limit = Number.POSITIVE_INFINITY)
   for (let i = 0; i < text.length; i++) {
     const c = text.charCodeAt(i);
     if (inString) {
-      if (c === 0x5c) i++; // backslash: skip the escaped character
+      if (c === 0x5c)
+        i++; // backslash: skip the escaped character
       else if (c === 0x22) inString = false;
     } else if (c === 0x22) inString = true;
     else if (c === 0x5b || c === 0x7b) {

@@ -70,9 +70,20 @@ interface RawAmbientLike {
   currentDirection?: number;
 }
 
-function buildProfile(a: RawAmbientLike, depth: number, path: string, ctx: Ctx): { profile: ProfilePoint[]; uniform: boolean } | null {
+function buildProfile(
+  a: RawAmbientLike,
+  depth: number,
+  path: string,
+  ctx: Ctx,
+): { profile: ProfilePoint[]; uniform: boolean } | null {
   if (a.profile && (a.salinity !== undefined || a.temperature !== undefined)) {
-    ctx.issues.push(issue(`${path}.profile`, "(profile and uniform values)", "give either a profile or uniform salinity and temperature, not both"));
+    ctx.issues.push(
+      issue(
+        `${path}.profile`,
+        "(profile and uniform values)",
+        "give either a profile or uniform salinity and temperature, not both",
+      ),
+    );
     return null;
   }
   if (a.profile) {
@@ -83,7 +94,14 @@ function buildProfile(a: RawAmbientLike, depth: number, path: string, ctx: Ctx):
     }));
     const below = pts.findIndex((p) => p.depth > depth);
     if (below >= 0) {
-      ctx.issues.push(issue(`${path}.profile.${below}.depth`, pts[below]!.depth, `is below the seabed (the water is ${formatNumber(depth)} m deep)`, [`${path}.depth`]));
+      ctx.issues.push(
+        issue(
+          `${path}.profile.${below}.depth`,
+          pts[below]!.depth,
+          `is below the seabed (the water is ${formatNumber(depth)} m deep)`,
+          [`${path}.depth`],
+        ),
+      );
       return null;
     }
     pts.sort((p, q) => p.depth - q.depth);
@@ -94,15 +112,22 @@ function buildProfile(a: RawAmbientLike, depth: number, path: string, ctx: Ctx):
       }
     }
     if (pts[0]!.depth > 0) {
-      ctx.conversions.push(`${path}.profile: extended from ${formatNumber(pts[0]!.depth)} m up to the surface with the shallowest point's values`);
+      ctx.conversions.push(
+        `${path}.profile: extended from ${formatNumber(pts[0]!.depth)} m up to the surface with the shallowest point's values`,
+      );
       pts.unshift({ ...pts[0]!, depth: 0 });
     }
     const last = pts[pts.length - 1]!;
     if (last.depth < depth) {
-      ctx.conversions.push(`${path}.profile: extended from ${formatNumber(last.depth)} m down to the seabed at ${formatNumber(depth)} m with the deepest point's values`);
+      ctx.conversions.push(
+        `${path}.profile: extended from ${formatNumber(last.depth)} m down to the seabed at ${formatNumber(depth)} m with the deepest point's values`,
+      );
       pts.push({ ...last, depth });
     }
-    return { profile: pts, uniform: pts.every((p) => p.salinity === pts[0]!.salinity && p.temperature === pts[0]!.temperature) };
+    return {
+      profile: pts,
+      uniform: pts.every((p) => p.salinity === pts[0]!.salinity && p.temperature === pts[0]!.temperature),
+    };
   }
   if (a.salinity === undefined) {
     ctx.issues.push(issue(`${path}.salinity`, undefined, "expected the ambient salinity (g/kg) or a profile"));
@@ -153,7 +178,8 @@ function parseLimitValue(
 
 /** Null when the value is acceptable for the field, else what is expected. */
 function limitValueProblem(value: number, constituent: string, unit: string, field: LimitField): string | null {
-  if (!Number.isFinite(value) || Math.abs(value) > 1e9) return `must be a finite number (in ${unit}) of at most 1e9 in size`;
+  if (!Number.isFinite(value) || Math.abs(value) > 1e9)
+    return `must be a finite number (in ${unit}) of at most 1e9 in size`;
   if (field === "maxIncrease") {
     if (value === 0) return "must be a positive increase (a zero increase can never be met)";
     if (value < 0) return `must be a positive increase (in ${unit})`;
@@ -179,7 +205,13 @@ function limitValueInUnit(
 ): number | undefined {
   if (typeof raw === "number") return raw;
   if (NON_DECIMAL.test(raw)) {
-    ctx.issues.push(issue(path, raw, `must be a decimal number with an optional unit (in ${unit}); hex, octal and binary forms are not accepted`));
+    ctx.issues.push(
+      issue(
+        path,
+        raw,
+        `must be a decimal number with an optional unit (in ${unit}); hex, octal and binary forms are not accepted`,
+      ),
+    );
     return undefined;
   }
   const m = /^\s*([-+]?(?:\d+\.?\d*|\.\d+)(?:e[-+]?\d+)?)\s*(.*)$/i.exec(raw);
@@ -215,8 +247,16 @@ function limitValueInUnit(
 
 function basinFrom(b: { volume: number; flushingTime?: number; exchangeFlow?: number }, ctx: Ctx): BasinInput {
   if ((b.flushingTime === undefined) === (b.exchangeFlow === undefined))
-    ctx.issues.push(issue("ambient.basin", "(basin)", "must give exactly one of flushingTime (s, e.g. \"10 days\") or exchangeFlow (m³/s) beside the volume"));
-  return b.flushingTime !== undefined ? { volume: b.volume, flushingTime: b.flushingTime } : { volume: b.volume, exchangeFlow: b.exchangeFlow };
+    ctx.issues.push(
+      issue(
+        "ambient.basin",
+        "(basin)",
+        'must give exactly one of flushingTime (s, e.g. "10 days") or exchangeFlow (m³/s) beside the volume',
+      ),
+    );
+  return b.flushingTime !== undefined
+    ? { volume: b.volume, flushingTime: b.flushingTime }
+    : { volume: b.volume, exchangeFlow: b.exchangeFlow };
 }
 
 function num(v: number | undefined, fallback: number): number {
@@ -234,12 +274,20 @@ export function normaliseScenario(f: ScenarioFileParsed): { scenario: Scenario |
   let plantOut: Scenario["plant"];
   if (f.plant) {
     if (d.flow !== undefined || d.salinity !== undefined) {
-      ctx.issues.push(issue("plant", "(plant and discharge.flow/salinity)", "give either plant (to compute the brine) or discharge.flow and discharge.salinity, not both"));
+      ctx.issues.push(
+        issue(
+          "plant",
+          "(plant and discharge.flow/salinity)",
+          "give either plant (to compute the brine) or discharge.flow and discharge.salinity, not both",
+        ),
+      );
     } else {
       const p = f.plant;
       const brineT = d.temperature ?? p.feedTemperature;
       if (brineT === undefined) {
-        ctx.issues.push(issue("discharge.temperature", undefined, "expected the brine temperature (°C), or plant.feedTemperature"));
+        ctx.issues.push(
+          issue("discharge.temperature", undefined, "expected the brine temperature (°C), or plant.feedTemperature"),
+        );
       } else {
         const feedS = resolveSalinity(p.feedSalinity, p.feedTemperature ?? brineT, "plant.feedSalinity", ctx);
         let blending = (p.blending ?? []).map((b, i) => ({
@@ -249,20 +297,34 @@ export function normaliseScenario(f: ScenarioFileParsed): { scenario: Scenario |
           salinity: resolveSalinity(b.salinity, b.temperature, `plant.blending.${i}.salinity`, ctx),
         }));
         if (p.blendRatio !== undefined) {
-          if (blending.length === 0) ctx.issues.push(issue("plant.blendRatio", p.blendRatio, "needs at least one stream under plant.blending to scale"));
+          if (blending.length === 0)
+            ctx.issues.push(
+              issue("plant.blendRatio", p.blendRatio, "needs at least one stream under plant.blending to scale"),
+            );
           else {
             blending = blendingAtRatio(blending, brineFlowFromPlant(p.productFlow, p.recovery), p.blendRatio);
-            ctx.conversions.push(`plant.blendRatio: blending streams scaled together to ${formatNumber(p.blendRatio)} × the brine flow`);
+            ctx.conversions.push(
+              `plant.blendRatio: blending streams scaled together to ${formatNumber(p.blendRatio)} × the brine flow`,
+            );
           }
         }
         const rej = p.saltRejection ?? DEFAULT_SALT_REJECTION;
-        const bal = brineFromPlant({ productFlow: p.productFlow, recovery: p.recovery, feedSalinity: feedS, saltRejection: rej, brineTemperature: brineT, blending });
+        const bal = brineFromPlant({
+          productFlow: p.productFlow,
+          recovery: p.recovery,
+          feedSalinity: feedS,
+          saltRejection: rej,
+          brineTemperature: brineT,
+          blending,
+        });
         flow = bal.dischargeFlow;
         salinity = bal.dischargeSalinity;
         temperature = bal.dischargeTemperature;
         ctx.conversions.push(
           `plant: product ${formatNumber(p.productFlow)} m³/s at recovery ${formatNumber(p.recovery)} and salt rejection ${formatNumber(rej)}${p.saltRejection === undefined ? " (default)" : ""} → brine ${formatNumber(bal.brineFlow)} m³/s at ${formatNumber(bal.brineSalinity)} g/kg (${formatNumber(bal.concentrationFactor, 3)}× the feed)` +
-            (blending.length ? `; after blending ${blending.length} stream(s): ${formatNumber(flow)} m³/s at ${formatNumber(salinity)} g/kg, ${formatNumber(temperature)} °C` : ""),
+            (blending.length
+              ? `; after blending ${blending.length} stream(s): ${formatNumber(flow)} m³/s at ${formatNumber(salinity)} g/kg, ${formatNumber(temperature)} °C`
+              : ""),
         );
         plantOut = {
           productFlow: p.productFlow,
@@ -275,9 +337,18 @@ export function normaliseScenario(f: ScenarioFileParsed): { scenario: Scenario |
       }
     }
   } else {
-    if (d.flow === undefined) ctx.issues.push(issue("discharge.flow", undefined, "expected the total brine flow (m³/s, e.g. 0.5 or \"12 MGD\"), or a plant section"));
-    if (d.salinity === undefined) ctx.issues.push(issue("discharge.salinity", undefined, "expected the brine salinity (g/kg), or a plant section"));
-    if (d.temperature === undefined) ctx.issues.push(issue("discharge.temperature", undefined, "expected the brine temperature (°C)"));
+    if (d.flow === undefined)
+      ctx.issues.push(
+        issue(
+          "discharge.flow",
+          undefined,
+          'expected the total brine flow (m³/s, e.g. 0.5 or "12 MGD"), or a plant section',
+        ),
+      );
+    if (d.salinity === undefined)
+      ctx.issues.push(issue("discharge.salinity", undefined, "expected the brine salinity (g/kg), or a plant section"));
+    if (d.temperature === undefined)
+      ctx.issues.push(issue("discharge.temperature", undefined, "expected the brine temperature (°C)"));
     if (d.flow !== undefined && d.salinity !== undefined && d.temperature !== undefined) {
       flow = d.flow;
       temperature = d.temperature;
@@ -294,7 +365,14 @@ export function normaliseScenario(f: ScenarioFileParsed): { scenario: Scenario |
   const names = new Set<string>();
   constituents.forEach((c, i) => {
     const k = c.name.toLowerCase();
-    if (k === "salinity" || k === "temperature") ctx.issues.push(issue(`discharge.constituents.${i}.name`, c.name, "is implicit: salinity and temperature come from the discharge and ambient; use another name"));
+    if (k === "salinity" || k === "temperature")
+      ctx.issues.push(
+        issue(
+          `discharge.constituents.${i}.name`,
+          c.name,
+          "is implicit: salinity and temperature come from the discharge and ambient; use another name",
+        ),
+      );
     if (names.has(k)) ctx.issues.push(issue(`discharge.constituents.${i}.name`, c.name, "is listed twice"));
     names.add(k);
   });
@@ -316,7 +394,9 @@ export function normaliseScenario(f: ScenarioFileParsed): { scenario: Scenario |
   if (ambient && a.record) {
     // One note for the whole column: the conversions themselves follow resolveSalinity.
     const quiet: Ctx = { issues: ctx.issues, conversions: [] };
-    const rec = normaliseRecord(a.record, ambient.profile[ambient.profile.length - 1]!.temperature, (sv, t) => resolveSalinity(sv, t, "ambient.record.salinity", quiet));
+    const rec = normaliseRecord(a.record, ambient.profile[ambient.profile.length - 1]!.temperature, (sv, t) =>
+      resolveSalinity(sv, t, "ambient.record.salinity", quiet),
+    );
     ctx.issues.push(...rec.issues);
     ctx.conversions.push(...rec.notes);
     if (rec.record) (ambient as { record?: AmbientInput["record"] }).record = rec.record;
@@ -369,38 +449,79 @@ export function normaliseScenario(f: ScenarioFileParsed): { scenario: Scenario |
   let portCount = g.portCount ?? 1;
   const layout = g.layout ?? (g.risers ? "rosette" : portCount > 1 ? "line" : "single");
   if (layout === "rosette") {
-    if (!g.risers) ctx.issues.push(issue("diffuser.risers", undefined, "expected {count, portsPerRiser, spacing} for a rosette diffuser"));
+    if (!g.risers)
+      ctx.issues.push(
+        issue("diffuser.risers", undefined, "expected {count, portsPerRiser, spacing} for a rosette diffuser"),
+      );
     else {
       const n = g.risers.count * g.risers.portsPerRiser;
       if (g.portCount !== undefined && g.portCount !== n)
-        ctx.issues.push(issue("diffuser.portCount", g.portCount, `must equal risers.count × risers.portsPerRiser = ${n} (or be left out)`));
+        ctx.issues.push(
+          issue(
+            "diffuser.portCount",
+            g.portCount,
+            `must equal risers.count × risers.portsPerRiser = ${n} (or be left out)`,
+          ),
+        );
       portCount = n;
-      if (g.risers.count > 1 && g.risers.spacing === undefined) ctx.issues.push(issue("diffuser.risers.spacing", undefined, "expected the spacing between risers (m)"));
+      if (g.risers.count > 1 && g.risers.spacing === undefined)
+        ctx.issues.push(issue("diffuser.risers.spacing", undefined, "expected the spacing between risers (m)"));
       if (g.risers.portAzimuths && g.risers.portAzimuths.length !== g.risers.portsPerRiser)
-        ctx.issues.push(issue("diffuser.risers.portAzimuths", g.risers.portAzimuths, `must list ${g.risers.portsPerRiser} azimuths, one per port on a riser`));
+        ctx.issues.push(
+          issue(
+            "diffuser.risers.portAzimuths",
+            g.risers.portAzimuths,
+            `must list ${g.risers.portsPerRiser} azimuths, one per port on a riser`,
+          ),
+        );
     }
   }
-  if (layout === "single" && portCount !== 1) ctx.issues.push(issue("diffuser.portCount", portCount, 'must be 1 for layout "single" (use "line" or "rosette" for more ports)'));
+  if (layout === "single" && portCount !== 1)
+    ctx.issues.push(
+      issue("diffuser.portCount", portCount, 'must be 1 for layout "single" (use "line" or "rosette" for more ports)'),
+    );
   if (layout === "line" && portCount > 1 && g.portSpacing === undefined)
-    ctx.issues.push(issue("diffuser.portSpacing", undefined, "expected the spacing between ports (m) for a diffuser with more than one port"));
+    ctx.issues.push(
+      issue(
+        "diffuser.portSpacing",
+        undefined,
+        "expected the spacing between ports (m) for a diffuser with more than one port",
+      ),
+    );
   const portSpacing = g.portSpacing ?? 0;
   // Neighbouring ports closer than a port diameter would overlap on the pipe (geometry, no source).
   if (layout === "line" && portCount > 1 && g.portSpacing !== undefined && g.portSpacing < g.portDiameter * (1 - 1e-9))
-    ctx.issues.push(issue("diffuser.portSpacing", g.portSpacing, `must be at least the port diameter (${formatNumber(g.portDiameter)} m): closer ports would overlap`));
+    ctx.issues.push(
+      issue(
+        "diffuser.portSpacing",
+        g.portSpacing,
+        `must be at least the port diameter (${formatNumber(g.portDiameter)} m): closer ports would overlap`,
+      ),
+    );
   const portAzimuth = g.portAzimuth ?? 0;
   const diffuserAzimuth = g.diffuserAzimuth ?? defaultDiffuserAzimuth(portAzimuth);
   const riserSpacing = g.risers?.spacing ?? 0;
   const naturalLength =
-    layout === "rosette" ? Math.max(0, ((g.risers?.count ?? 1) - 1) * riserSpacing) : Math.max(0, (portCount - 1) * portSpacing);
+    layout === "rosette"
+      ? Math.max(0, ((g.risers?.count ?? 1) - 1) * riserSpacing)
+      : Math.max(0, (portCount - 1) * portSpacing);
   const length = g.length ?? naturalLength;
   let flowSplit: number[];
   if (g.flowSplit) {
     const sum = g.flowSplit.reduce((s, v) => s + v, 0);
     if (g.flowSplit.length !== portCount) {
-      ctx.issues.push(issue("diffuser.flowSplit", `${g.flowSplit.length} values`, `must list one share per port (${portCount})`));
+      ctx.issues.push(
+        issue("diffuser.flowSplit", `${g.flowSplit.length} values`, `must list one share per port (${portCount})`),
+      );
       flowSplit = [];
     } else if (!(sum > 0) || g.flowSplit.some((v) => v <= 0)) {
-      ctx.issues.push(issue("diffuser.flowSplit", g.flowSplit.slice(0, 5), "must list positive shares (any scale; they are normalised)"));
+      ctx.issues.push(
+        issue(
+          "diffuser.flowSplit",
+          g.flowSplit.slice(0, 5),
+          "must list positive shares (any scale; they are normalised)",
+        ),
+      );
       flowSplit = [];
     } else flowSplit = g.flowSplit.map((v) => v / sum);
   } else flowSplit = new Array<number>(portCount).fill(1 / portCount);
@@ -411,7 +532,12 @@ export function normaliseScenario(f: ScenarioFileParsed): { scenario: Scenario |
       `diffuser.portDiameter: vena-contracta contraction ${formatNumber(contraction)} applied to the area → effective diameter ${formatNumber(effectiveDiameter)} m`,
     );
   const riserAzimuths =
-    g.risers && (g.risers.portAzimuths ?? Array.from({ length: g.risers.portsPerRiser }, (_, k) => (portAzimuth + (360 * k) / g.risers!.portsPerRiser) % 360));
+    g.risers &&
+    (g.risers.portAzimuths ??
+      Array.from(
+        { length: g.risers.portsPerRiser },
+        (_, k) => (portAzimuth + (360 * k) / g.risers!.portsPerRiser) % 360,
+      ));
 
   const diffuser: DiffuserInput = {
     layout,
@@ -442,7 +568,13 @@ export function normaliseScenario(f: ScenarioFileParsed): { scenario: Scenario |
     const key = l.constituent.toLowerCase();
     const c = constituents.find((x) => x.name.toLowerCase() === key);
     if (key !== "salinity" && key !== "temperature" && !c) {
-      ctx.issues.push(issue(`${path}.constituent`, l.constituent, `must be "salinity", "temperature" or a name listed under discharge.constituents`));
+      ctx.issues.push(
+        issue(
+          `${path}.constituent`,
+          l.constituent,
+          `must be "salinity", "temperature" or a name listed under discharge.constituents`,
+        ),
+      );
       return;
     }
     const unit = key === "salinity" ? "g/kg" : key === "temperature" ? "degC" : c!.unit;
@@ -465,7 +597,8 @@ export function normaliseScenario(f: ScenarioFileParsed): { scenario: Scenario |
 
   // --- uncertainty --------------------------------------------------------------------------------------
   f.uncertainty?.inputs.forEach((u, i, all) => {
-    if (all.findIndex((v) => v.path === u.path) !== i) ctx.issues.push(issue(`uncertainty.inputs.${i}.path`, u.path, "is listed twice; give each uncertain input once"));
+    if (all.findIndex((v) => v.path === u.path) !== i)
+      ctx.issues.push(issue(`uncertainty.inputs.${i}.path`, u.path, "is listed twice; give each uncertain input once"));
   });
   const uncertainty = f.uncertainty && {
     inputs: f.uncertainty.inputs.map((u): UncertainInput => {
@@ -488,7 +621,13 @@ export function normaliseScenario(f: ScenarioFileParsed): { scenario: Scenario |
     ambient,
     ambientCases,
     diffuser,
-    mixingZone: { radius: f.mixingZone.radius, limits, ...(f.mixingZone.timeCompliance ? { timeCompliance: { percentOfTime: f.mixingZone.timeCompliance.percentOfTime } } : {}) },
+    mixingZone: {
+      radius: f.mixingZone.radius,
+      limits,
+      ...(f.mixingZone.timeCompliance
+        ? { timeCompliance: { percentOfTime: f.mixingZone.timeCompliance.percentOfTime } }
+        : {}),
+    },
     ...(f.intake ? { intake: { ...f.intake } } : {}),
     options: {
       nearFieldForEdge: f.options?.nearFieldForEdge ?? "conservative",

@@ -23,7 +23,9 @@ const MAX_ISSUES = 40;
  * Migrations from older format versions, keyed by the version they upgrade FROM. Version 1 is the first
  * published format, so the table is empty; each future version adds one pure function here and a note.
  */
-export const SCENARIO_MIGRATIONS: Readonly<Record<number, { readonly note: string; readonly migrate: (raw: Record<string, unknown>) => Record<string, unknown> }>> = {};
+export const SCENARIO_MIGRATIONS: Readonly<
+  Record<number, { readonly note: string; readonly migrate: (raw: Record<string, unknown>) => Record<string, unknown> }>
+> = {};
 
 /** An error carrying scenario issues, for callers that prefer exceptions (the pipeline, the CLI). */
 export class ScenarioError extends Error {
@@ -46,29 +48,46 @@ function zodIssueToScenarioIssue(raw: unknown, zi: z.core.$ZodIssue): ScenarioIs
   const path = zi.path.map(String).join(".");
   if (zi.code === "unrecognized_keys") {
     return zi.keys.map((k) =>
-      issue(path ? `${path}.${k}` : k, valueAt(raw, [...zi.path, k]), "is not a field of this section; check the spelling (see the format in README.md)"),
+      issue(
+        path ? `${path}.${k}` : k,
+        valueAt(raw, [...zi.path, k]),
+        "is not a field of this section; check the spelling (see the format in README.md)",
+      ),
     );
   }
   const value = valueAt(raw, zi.path);
   let expectation = zi.message;
   if (zi.code === "invalid_type" && /^Invalid input/.test(expectation)) expectation = `must be ${zi.expected}`;
-  if (value === undefined && zi.code === "invalid_type") expectation = `expected: ${expectation.replace(/^must be /, "")}`;
+  if (value === undefined && zi.code === "invalid_type")
+    expectation = `expected: ${expectation.replace(/^must be /, "")}`;
   return [issue(path, value, expectation)];
 }
 
 /** Validates and normalises a scenario object (already parsed from JSON). */
 export function parseScenario(raw: unknown): ParseOutcome {
   if (raw === null || typeof raw !== "object" || Array.isArray(raw)) {
-    return { ok: false, issues: [issue("", typeof raw, "must be a JSON object with \"format\": \"brinefield-scenario\"")] };
+    return { ok: false, issues: [issue("", typeof raw, 'must be a JSON object with "format": "brinefield-scenario"')] };
   }
   let obj = raw as Record<string, unknown>;
   const notes: string[] = [];
   if (obj.format !== SCENARIO_FORMAT) {
-    return { ok: false, issues: [issue("format", obj.format, `must be "${SCENARIO_FORMAT}": this is not a Brinefield scenario file`)] };
+    return {
+      ok: false,
+      issues: [issue("format", obj.format, `must be "${SCENARIO_FORMAT}": this is not a Brinefield scenario file`)],
+    };
   }
   const version = obj.version;
   if (typeof version !== "number" || !Number.isInteger(version) || version < 1) {
-    return { ok: false, issues: [issue("version", version, `must be a format version number (this Brinefield reads version ${SCENARIO_VERSION})`)] };
+    return {
+      ok: false,
+      issues: [
+        issue(
+          "version",
+          version,
+          `must be a format version number (this Brinefield reads version ${SCENARIO_VERSION})`,
+        ),
+      ],
+    };
   }
   if (version > SCENARIO_VERSION) {
     return {
@@ -84,7 +103,8 @@ export function parseScenario(raw: unknown): ParseOutcome {
   }
   for (let v = version; v < SCENARIO_VERSION; v++) {
     const m = SCENARIO_MIGRATIONS[v];
-    if (!m) return { ok: false, issues: [issue("version", version, `has no migration to version ${SCENARIO_VERSION}`)] };
+    if (!m)
+      return { ok: false, issues: [issue("version", version, `has no migration to version ${SCENARIO_VERSION}`)] };
     obj = m.migrate(obj);
     notes.push(`Migrated from format version ${v} to ${v + 1}: ${m.note}`);
   }

@@ -25,7 +25,11 @@ export interface PlantBalance {
 }
 
 /** The plant's blend ratio: total blending flow ÷ brine flow (0 without blending streams). */
-export function blendRatioOfPlant(p: { readonly productFlow: number; readonly recovery: number; readonly blending: readonly { readonly flow: number }[] }): number {
+export function blendRatioOfPlant(p: {
+  readonly productFlow: number;
+  readonly recovery: number;
+  readonly blending: readonly { readonly flow: number }[];
+}): number {
   return p.blending.reduce((a, b) => a + b.flow, 0) / brineFlowFromPlant(p.productFlow, p.recovery);
 }
 
@@ -38,7 +42,11 @@ export function brineFlowFromPlant(productFlow: number, recovery: number): numbe
  * The blending streams scaled together so that their total flow is `ratio` × the brine flow (the blend
  * ratio); each keeps its share of the blending flow (equal shares when every stream is at zero flow).
  */
-export function blendingAtRatio<T extends { readonly flow: number }>(blending: readonly T[], brineFlow: number, ratio: number): T[] {
+export function blendingAtRatio<T extends { readonly flow: number }>(
+  blending: readonly T[],
+  brineFlow: number,
+  ratio: number,
+): T[] {
   const total = blending.reduce((s, b) => s + b.flow, 0);
   const target = ratio * brineFlow;
   return blending.map((b) => ({ ...b, flow: total > 0 ? (b.flow / total) * target : target / blending.length }));
@@ -81,7 +89,8 @@ export function scenarioWithBlendRatio(s: Scenario, ratio: number): Scenario {
   const blending = blendingAtRatio(p.blending, brineFlow, ratio);
   // The brine's own temperature, recovered from the blended discharge temperature (flow-weighted mean).
   const q = brineFlow + p.blending.reduce((a, b) => a + b.flow, 0);
-  const brineTemperature = (q * s.discharge.temperature - p.blending.reduce((a, b) => a + b.flow * b.temperature, 0)) / brineFlow;
+  const brineTemperature =
+    (q * s.discharge.temperature - p.blending.reduce((a, b) => a + b.flow * b.temperature, 0)) / brineFlow;
   const bal = brineFromPlant({
     productFlow: p.productFlow,
     recovery: p.recovery,
@@ -93,6 +102,11 @@ export function scenarioWithBlendRatio(s: Scenario, ratio: number): Scenario {
   return {
     ...s,
     plant: { ...p, blending },
-    discharge: { ...s.discharge, flow: bal.dischargeFlow, salinity: bal.dischargeSalinity, temperature: bal.dischargeTemperature },
+    discharge: {
+      ...s.discharge,
+      flow: bal.dischargeFlow,
+      salinity: bal.dischargeSalinity,
+      temperature: bal.dischargeTemperature,
+    },
   };
 }

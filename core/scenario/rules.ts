@@ -75,16 +75,29 @@ export function scenarioRuleIssues(s: Scenario): ScenarioIssue[] {
     ["diffuser.length", d.length],
   ];
   for (const [path, v] of diffuserFields) checkBound(out, path, B[path], v);
-  if (d.layout !== "single" && d.portCount > 1 && d.portSpacing !== 0) checkBound(out, "diffuser.portSpacing", B["diffuser.portSpacing"], d.portSpacing);
+  if (d.layout !== "single" && d.portCount > 1 && d.portSpacing !== 0)
+    checkBound(out, "diffuser.portSpacing", B["diffuser.portSpacing"], d.portSpacing);
   checkBound(out, "mixingZone.radius", B["mixingZone.radius"], s.mixingZone.radius);
   if (out.length > 0) return out;
 
   // --- port layout ----------------------------------------------------------------------------------------
   if (d.layout === "single" && d.portCount !== 1)
-    out.push(issue("diffuser.portCount", d.portCount, 'must be 1 for layout "single" (use "line" or "rosette" for more ports)'));
+    out.push(
+      issue(
+        "diffuser.portCount",
+        d.portCount,
+        'must be 1 for layout "single" (use "line" or "rosette" for more ports)',
+      ),
+    );
   if (d.layout === "line" && d.portCount > 1) {
     if (!(d.portSpacing > 0)) {
-      out.push(issue("diffuser.portSpacing", d.portSpacing, "expected the spacing between ports (m) for a diffuser with more than one port"));
+      out.push(
+        issue(
+          "diffuser.portSpacing",
+          d.portSpacing,
+          "expected the spacing between ports (m) for a diffuser with more than one port",
+        ),
+      );
     } else if (d.portSpacing < d.portDiameterNominal) {
       out.push(
         issue(
@@ -97,9 +110,17 @@ export function scenarioRuleIssues(s: Scenario): ScenarioIssue[] {
     }
   }
   if (d.layout === "rosette" && d.risers && d.risers.count * d.risers.portsPerRiser !== d.portCount)
-    out.push(issue("diffuser.portCount", d.portCount, `must equal risers.count × risers.portsPerRiser = ${d.risers.count * d.risers.portsPerRiser} (or be left out)`));
+    out.push(
+      issue(
+        "diffuser.portCount",
+        d.portCount,
+        `must equal risers.count × risers.portsPerRiser = ${d.risers.count * d.risers.portsPerRiser} (or be left out)`,
+      ),
+    );
   const naturalLength =
-    d.layout === "rosette" ? Math.max(0, ((d.risers?.count ?? 1) - 1) * (d.risers?.spacing ?? 0)) : Math.max(0, (d.portCount - 1) * d.portSpacing);
+    d.layout === "rosette"
+      ? Math.max(0, ((d.risers?.count ?? 1) - 1) * (d.risers?.spacing ?? 0))
+      : Math.max(0, (d.portCount - 1) * d.portSpacing);
   if (d.length + 1e-9 < naturalLength)
     out.push(
       issue("diffuser.length", d.length, `must be at least the port layout's length ${formatNumber(naturalLength)} m`, [
@@ -110,7 +131,9 @@ export function scenarioRuleIssues(s: Scenario): ScenarioIssue[] {
       ]),
     );
   if (d.flowSplit.length !== d.portCount) {
-    out.push(issue("diffuser.flowSplit", `${d.flowSplit.length} values`, `must list one share per port (${d.portCount})`));
+    out.push(
+      issue("diffuser.flowSplit", `${d.flowSplit.length} values`, `must list one share per port (${d.portCount})`),
+    );
     return out;
   }
 
@@ -136,10 +159,12 @@ export function scenarioRuleIssues(s: Scenario): ScenarioIssue[] {
   const top = d.portHeight + d.portDiameter / 2;
   if (top >= s.ambient.depth)
     out.push(
-      issue("diffuser.portHeight", d.portHeight, `must leave the port below the surface: water depth is ${formatNumber(s.ambient.depth)} m`, [
-        "ambient.depth",
-        "diffuser.portDiameter",
-      ]),
+      issue(
+        "diffuser.portHeight",
+        d.portHeight,
+        `must leave the port below the surface: water depth is ${formatNumber(s.ambient.depth)} m`,
+        ["ambient.depth", "diffuser.portDiameter"],
+      ),
     );
   s.ambientCases.forEach((c, i) => {
     if (top >= c.depth && c.depth !== s.ambient.depth)

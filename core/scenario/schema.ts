@@ -14,13 +14,19 @@ export const SCENARIO_FORMAT = "brinefield-scenario";
 export const SCENARIO_VERSION = 1;
 
 /** Salinity with its basis: g/kg Absolute Salinity, practical salinity (psu) or TDS (mg/L). */
-export type SalinityValue = { readonly basis: "absolute" | "practical" | "tds"; readonly value: number; readonly raw: unknown };
+export type SalinityValue = {
+  readonly basis: "absolute" | "practical" | "tds";
+  readonly value: number;
+  readonly raw: unknown;
+};
 
 export function salinity(min: number, max: number, what = "salinity") {
   const expectation = salinityExpectation(min, max, what);
   return z
     .union([z.number(), z.string()], { error: () => expectation })
-    .meta({ description: `${what}: number in g/kg (Absolute Salinity), or a string in g/kg, psu (practical) or mg/L (TDS)` })
+    .meta({
+      description: `${what}: number in g/kg (Absolute Salinity), or a string in g/kg, psu (practical) or mg/L (TDS)`,
+    })
     .transform((raw, ctx): SalinityValue => {
       const sp = matchPracticalSalinity(raw);
       if (sp !== null) {
@@ -70,27 +76,52 @@ const plant = z.strictObject({
   feedSalinity: salinity(0, 80, "feed salinity"),
   saltRejection: fraction(0, 1, "salt rejection").optional(),
   feedTemperature: temperature("feed temperature").optional(),
-  blending: z.array(blendStream).max(20, { error: () => "must list at most 20 blending streams" }).optional(),
-  blendRatio: quantity(FIELD_BOUNDS["plant.blendRatio"].kind, FIELD_BOUNDS["plant.blendRatio"], FIELD_BOUNDS["plant.blendRatio"].what).optional(),
+  blending: z
+    .array(blendStream)
+    .max(20, { error: () => "must list at most 20 blending streams" })
+    .optional(),
+  blendRatio: quantity(
+    FIELD_BOUNDS["plant.blendRatio"].kind,
+    FIELD_BOUNDS["plant.blendRatio"],
+    FIELD_BOUNDS["plant.blendRatio"].what,
+  ).optional(),
 });
 
 const constituent = z.strictObject({
   name: text("constituent name", 60),
-  concentration: z.number({ error: () => "must be a number in the constituent's unit" }).min(0, { error: () => "must not be negative" }).max(1e9, { error: () => "is implausibly large (over 1e9)" }),
+  concentration: z
+    .number({ error: () => "must be a number in the constituent's unit" })
+    .min(0, { error: () => "must not be negative" })
+    .max(1e9, { error: () => "is implausibly large (over 1e9)" }),
   unit: text("unit of the concentration, e.g. mg/L", 20),
-  background: z.number({ error: () => "must be a number in the constituent's unit" }).min(0, { error: () => "must not be negative" }).max(1e9).optional(),
+  background: z
+    .number({ error: () => "must be a number in the constituent's unit" })
+    .min(0, { error: () => "must not be negative" })
+    .max(1e9)
+    .optional(),
 });
 
 const discharge = z.strictObject({
   flow: bounded("discharge.flow").optional(),
-  salinity: salinity(FIELD_BOUNDS["discharge.salinity"].min, FIELD_BOUNDS["discharge.salinity"].max, FIELD_BOUNDS["discharge.salinity"].what).optional(),
+  salinity: salinity(
+    FIELD_BOUNDS["discharge.salinity"].min,
+    FIELD_BOUNDS["discharge.salinity"].max,
+    FIELD_BOUNDS["discharge.salinity"].what,
+  ).optional(),
   temperature: bounded("discharge.temperature").optional(),
-  constituents: z.array(constituent).max(50, { error: () => "must list at most 50 constituents" }).optional(),
+  constituents: z
+    .array(constituent)
+    .max(50, { error: () => "must list at most 50 constituents" })
+    .optional(),
 });
 
 const ambientFields = {
   depth: bounded("ambient.depth"),
-  salinity: salinity(FIELD_BOUNDS["ambient.salinity"].min, FIELD_BOUNDS["ambient.salinity"].max, FIELD_BOUNDS["ambient.salinity"].what).optional(),
+  salinity: salinity(
+    FIELD_BOUNDS["ambient.salinity"].min,
+    FIELD_BOUNDS["ambient.salinity"].max,
+    FIELD_BOUNDS["ambient.salinity"].what,
+  ).optional(),
   temperature: bounded("ambient.temperature").optional(),
   profile: z
     .array(profilePoint)
@@ -99,7 +130,11 @@ const ambientFields = {
     .optional(),
   currentSpeed: bounded("ambient.currentSpeed").optional(),
   currentDirection: bounded("ambient.currentDirection").optional(),
-  bedSlope: fraction(FIELD_BOUNDS["ambient.bedSlope"].min, FIELD_BOUNDS["ambient.bedSlope"].max, FIELD_BOUNDS["ambient.bedSlope"].what).optional(),
+  bedSlope: fraction(
+    FIELD_BOUNDS["ambient.bedSlope"].min,
+    FIELD_BOUNDS["ambient.bedSlope"].max,
+    FIELD_BOUNDS["ambient.bedSlope"].what,
+  ).optional(),
   bedSlopeAzimuth: bounded("ambient.bedSlopeAzimuth").optional(),
 };
 
@@ -114,7 +149,10 @@ const basin = z
     flushingTime: quantity("time", { min: 3600, max: 3.2e8 }, "flushing time").optional(),
     exchangeFlow: quantity("flow", { min: 0, max: 1e6, exclusiveMin: true }, "exchange flow").optional(),
   })
-  .meta({ description: "Enclosed water: {volume, flushingTime} or {volume, exchangeFlow}; a well-mixed box model raises the background" });
+  .meta({
+    description:
+      "Enclosed water: {volume, flushingTime} or {volume, exchangeFlow}; a well-mixed box model raises the background",
+  });
 
 const ambient = z.strictObject({
   ...ambientFields,
@@ -123,14 +161,22 @@ const ambient = z.strictObject({
     currentSpeed: bounded("ambient.currentSpeed"),
     currentDirection: bounded("ambient.currentDirection"),
     depth: bounded("ambient.depth"),
-    salinity: salinity(FIELD_BOUNDS["ambient.salinity"].min, FIELD_BOUNDS["ambient.salinity"].max, FIELD_BOUNDS["ambient.salinity"].what),
+    salinity: salinity(
+      FIELD_BOUNDS["ambient.salinity"].min,
+      FIELD_BOUNDS["ambient.salinity"].max,
+      FIELD_BOUNDS["ambient.salinity"].what,
+    ),
     temperature: bounded("ambient.temperature"),
   }).optional(),
 });
 
 const ambientCase = z.strictObject({
   name: text("case name", 80),
-  weight: z.number({ error: () => "must be a number" }).min(0, { error: () => "must not be negative" }).max(1e6).optional(),
+  weight: z
+    .number({ error: () => "must be a number" })
+    .min(0, { error: () => "must not be negative" })
+    .max(1e6)
+    .optional(),
   depth: ambientFields.depth.optional(),
   salinity: ambientFields.salinity,
   temperature: ambientFields.temperature,
@@ -148,7 +194,11 @@ const risers = z.strictObject({
 
 const diffuser = z.strictObject({
   layout: z.enum(["single", "line", "rosette"], { error: () => 'must be "single", "line" or "rosette"' }).optional(),
-  portCount: count(FIELD_BOUNDS["diffuser.portCount"].min, FIELD_BOUNDS["diffuser.portCount"].max, FIELD_BOUNDS["diffuser.portCount"].what).optional(),
+  portCount: count(
+    FIELD_BOUNDS["diffuser.portCount"].min,
+    FIELD_BOUNDS["diffuser.portCount"].max,
+    FIELD_BOUNDS["diffuser.portCount"].what,
+  ).optional(),
   portDiameter: bounded("diffuser.portDiameter"),
   contraction: fraction(0.5, 1, "contraction coefficient (effective/nominal area)").optional(),
   portAngle: bounded("diffuser.portAngle"),
@@ -158,7 +208,12 @@ const diffuser = z.strictObject({
   diffuserAzimuth: bounded("diffuser.diffuserAzimuth").optional(),
   length: bounded("diffuser.length").optional(),
   flowSplit: z
-    .array(z.number({ error: () => "must be a number" }).min(0, { error: () => "must not be negative" }).max(1e6))
+    .array(
+      z
+        .number({ error: () => "must be a number" })
+        .min(0, { error: () => "must not be negative" })
+        .max(1e6),
+    )
     .max(1000)
     .optional(),
   dischargeCoefficient: fraction(0.3, 1, "port discharge coefficient").optional(),
@@ -167,8 +222,12 @@ const diffuser = z.strictObject({
 
 const limit = z.strictObject({
   constituent: text("constituent (salinity, temperature or a listed constituent name)", 60),
-  maxIncrease: z.union([z.number(), z.string()], { error: () => "must be a number or a string with a unit" }).optional(),
-  maxConcentration: z.union([z.number(), z.string()], { error: () => "must be a number or a string with a unit" }).optional(),
+  maxIncrease: z
+    .union([z.number(), z.string()], { error: () => "must be a number or a string with a unit" })
+    .optional(),
+  maxConcentration: z
+    .union([z.number(), z.string()], { error: () => "must be a number or a string with a unit" })
+    .optional(),
   unit: text("unit of the limit", 20).optional(),
   background: z.union([z.number(), z.string()], { error: () => "must be a number or a string with a unit" }).optional(),
   basis: text("where the limit comes from", 2000).optional(),
@@ -176,13 +235,18 @@ const limit = z.strictObject({
 
 const mixingZone = z.strictObject({
   radius: bounded("mixingZone.radius"),
-  limits: z.array(limit).min(1, { error: () => "must list at least one limit (salinity at least)" }).max(50),
+  limits: z
+    .array(limit)
+    .min(1, { error: () => "must list at least one limit (salinity at least)" })
+    .max(50),
   timeCompliance: timeComplianceSchema.optional(),
 });
 
 const options = z.strictObject({
   nearFieldForEdge: z
-    .enum(["conservative", "length-scale", "integral"], { error: () => 'must be "conservative", "length-scale" or "integral"' })
+    .enum(["conservative", "length-scale", "integral"], {
+      error: () => 'must be "conservative", "length-scale" or "integral"',
+    })
     .optional(),
   farField: z
     .enum(["conservative", "gravity-current", "passive-diffusion"], {
@@ -227,7 +291,10 @@ export const scenarioFileSchema = z
     discharge: discharge.optional(),
     plant: plant.optional(),
     ambient,
-    ambientCases: z.array(ambientCase).max(50, { error: () => "must list at most 50 cases" }).optional(),
+    ambientCases: z
+      .array(ambientCase)
+      .max(50, { error: () => "must list at most 50 cases" })
+      .optional(),
     diffuser,
     mixingZone,
     options: options.optional(),

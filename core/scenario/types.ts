@@ -110,7 +110,13 @@ export interface IntakeInput {
 
 /** The ambient fields an ambient case may set itself (a profile sets salinity and temperature). */
 export type AmbientCaseField = "depth" | "salinity" | "temperature" | "currentSpeed" | "currentDirection";
-export const AMBIENT_CASE_FIELDS: readonly AmbientCaseField[] = ["depth", "salinity", "temperature", "currentSpeed", "currentDirection"];
+export const AMBIENT_CASE_FIELDS: readonly AmbientCaseField[] = [
+  "depth",
+  "salinity",
+  "temperature",
+  "currentSpeed",
+  "currentDirection",
+];
 
 export interface AmbientCase extends AmbientInput {
   readonly name: string;

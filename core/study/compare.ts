@@ -85,7 +85,15 @@ export const WORST_CASE_ROW = OVERALL_ROW;
 
 export function compareVariant(v: StudyVariant, evaluate: Evaluator): CompareRow[] {
   const refusedRow = (error: string): CompareRow[] => [
-    { variant: v.name, case: OVERALL_ROW, worstCase: true, governingCase: null, verdict: "refused", summary: null, error },
+    {
+      variant: v.name,
+      case: OVERALL_ROW,
+      worstCase: true,
+      governingCase: null,
+      verdict: "refused",
+      summary: null,
+      error,
+    },
   ];
   if (!v.scenario) return refusedRow((v.refused ?? ["refused"]).join("; "));
   let e: ReturnType<typeof evaluateCases>;

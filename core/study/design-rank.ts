@@ -67,7 +67,9 @@ export function judgeDesign(candidate: DesignCandidate, p: PointEvaluation, c: D
     if (sc !== null) clearance = clearance === null ? sc : Math.min(clearance, sc);
   }
   if (clearance !== null && clearance < c.surfaceClearance && !surfaced) {
-    reasons.push(`jet's upper edge only ${clearance.toFixed(2)} m below the surface (${c.surfaceClearance} m required)`);
+    reasons.push(
+      `jet's upper edge only ${clearance.toFixed(2)} m below the surface (${c.surfaceClearance} m required)`,
+    );
   }
   const w = p.cases[p.worst]!;
   return {
@@ -161,7 +163,12 @@ export interface NearestMiss {
 }
 
 /** The failed candidate closest to passing: highest worst margin, preferring jets below the surface. */
-export function nearestMiss(verdicts: readonly DesignVerdict[], c: DesignConstraints, s: Scenario, rawDiffuser?: unknown): NearestMiss | null {
+export function nearestMiss(
+  verdicts: readonly DesignVerdict[],
+  c: DesignConstraints,
+  s: Scenario,
+  rawDiffuser?: unknown,
+): NearestMiss | null {
   const ran = verdicts.filter((v) => !v.ok && !v.refused && Number.isFinite(v.worstMargin));
   if (ran.length === 0) return null;
   const below = ran.filter((v) => !v.reachesSurface);
@@ -179,24 +186,47 @@ export function nearestMiss(verdicts: readonly DesignVerdict[], c: DesignConstra
     });
   }
   const maxPorts = Math.max(...c.portCounts);
-  if (d.portCount >= maxPorts) steps.push({ field: "design.maxPorts", message: `it already has the most ports allowed (${maxPorts}): allow more ports` });
+  if (d.portCount >= maxPorts)
+    steps.push({
+      field: "design.maxPorts",
+      message: `it already has the most ports allowed (${maxPorts}): allow more ports`,
+    });
   if (d.portCount > 1 && d.length >= c.maxLength * 0.74) {
-    steps.push({ field: "design.maxLength", message: `its diffuser is ${d.length.toFixed(1)} m of the ${c.maxLength} m allowed: allow a longer diffuser (wider spacing, less merging)` });
+    steps.push({
+      field: "design.maxLength",
+      message: `its diffuser is ${d.length.toFixed(1)} m of the ${c.maxLength} m allowed: allow a longer diffuser (wider spacing, less merging)`,
+    });
   }
   if (d.exitVelocity >= c.maxExitVelocity * 0.9) {
-    steps.push({ field: "design.maxExitVelocity", message: `its exit velocity ${d.exitVelocity.toFixed(2)} m/s is near the ${c.maxExitVelocity} m/s allowed: a faster jet (higher Froude number) dilutes more` });
+    steps.push({
+      field: "design.maxExitVelocity",
+      message: `its exit velocity ${d.exitVelocity.toFixed(2)} m/s is near the ${c.maxExitVelocity} m/s allowed: a faster jet (higher Froude number) dilutes more`,
+    });
   }
   if (d.portDiameter <= c.minPortDiameter * 1.05) {
-    steps.push({ field: "design.minPortDiameter", message: `its ports are at the smallest diameter allowed (${c.minPortDiameter} m)` });
+    steps.push({
+      field: "design.minPortDiameter",
+      message: `its ports are at the smallest diameter allowed (${c.minPortDiameter} m)`,
+    });
   }
   if (miss.reachesSurface) {
     steps.push({ field: "design.portAngles", message: "the jet reaches the surface: try lower port angles" });
   }
   if (steps.length <= (shortfall > 1 ? 1 : 0)) {
-    steps.push({ field: "mixingZone", message: "no design constraint is at its bound: the site (depth, current) or the limit itself decides; a longer outfall to deeper water is the usual remedy" });
+    steps.push({
+      field: "mixingZone",
+      message:
+        "no design constraint is at its bound: the site (depth, current) or the limit itself decides; a longer outfall to deeper water is the usual remedy",
+    });
   }
   const asRanked: RankedDesign = { ...miss, rank: 0, bestFor: [] };
-  return { design: designJson(asRanked, s, rawDiffuser), reasons: miss.reasons, requiredMargin: c.minMargin, dilutionShortfall: shortfall, toClose: steps };
+  return {
+    design: designJson(asRanked, s, rawDiffuser),
+    reasons: miss.reasons,
+    requiredMargin: c.minMargin,
+    dilutionShortfall: shortfall,
+    toClose: steps,
+  };
 }
 
 /**
@@ -213,9 +243,22 @@ export function designDiffuserBlock(d: DesignCandidate, s: Scenario, rawDiffuser
           portAzimuth: s.diffuser.portAzimuth,
           diffuserAzimuth: s.diffuser.diffuserAzimuth,
           ...(s.diffuser.contraction !== 1 && { contraction: s.diffuser.contraction }),
-          ...(s.diffuser.dischargeCoefficient !== undefined && { dischargeCoefficient: s.diffuser.dischargeCoefficient }),
+          ...(s.diffuser.dischargeCoefficient !== undefined && {
+            dischargeCoefficient: s.diffuser.dischargeCoefficient,
+          }),
         };
-  for (const k of ["layout", "portCount", "portDiameter", "portAngle", "portHeight", "portSpacing", "length", "flowSplit", "risers"]) delete base[k];
+  for (const k of [
+    "layout",
+    "portCount",
+    "portDiameter",
+    "portAngle",
+    "portHeight",
+    "portSpacing",
+    "length",
+    "flowSplit",
+    "risers",
+  ])
+    delete base[k];
   return {
     layout: d.portCount === 1 ? "single" : "line",
     portCount: d.portCount,
@@ -283,7 +326,9 @@ export function designOutcome(
     ranked.length > 0
       ? `${passing} of ${candidates.length} candidate designs meet every limit in every ambient case; the best ${ranked.length} are listed.`
       : `No design meets every limit in every ambient case (${candidates.length} candidates tried${refused ? `, ${refused} refused by the scenario rules` : ""})` +
-        (miss ? `; nearest miss: ${miss.design.portCount} port(s) of ${(miss.design.portDiameter * 1000).toFixed(0)} mm, worst margin ${miss.design.worstMargin.toFixed(2)}.` : ".");
+        (miss
+          ? `; nearest miss: ${miss.design.portCount} port(s) of ${(miss.design.portDiameter * 1000).toFixed(0)} mm, worst margin ${miss.design.worstMargin.toFixed(2)}.`
+          : ".");
   const notes = [DESIGN_RANKING_RULE];
   if (c.nominalSizes) notes.push(`Port diameters kept to nominal sizes: ${NOMINAL_SIZES_SOURCE}.`);
   if (refused) {

@@ -101,8 +101,16 @@ export const designBlockSchema = z.strictObject({
   maxLength: qty("length", 0, 10000, "maximum diffuser length").optional(),
   portCounts: z.array(z.number().int().min(1).max(200)).min(1).max(200).optional(),
   maxPorts: z.number().int().min(1).max(200).optional(),
-  portAngles: z.array(qty("angle", 0, 90, "port angle")).min(1).max(20).optional(),
-  portHeights: z.array(qty("length", 0, 100, "port height")).min(1).max(20).optional(),
+  portAngles: z
+    .array(qty("angle", 0, 90, "port angle"))
+    .min(1)
+    .max(20)
+    .optional(),
+  portHeights: z
+    .array(qty("length", 0, 100, "port height"))
+    .min(1)
+    .max(20)
+    .optional(),
   diameterSteps: z.number().int().min(1).max(50).optional(),
   minPortDiameter: qty("smallLength", 0.005, 3, "smallest port diameter").optional(),
   maxPortDiameter: qty("smallLength", 0.005, 3, "largest port diameter").optional(),
@@ -155,7 +163,10 @@ export function designConstraintsFrom(
     issues.push({ path: "design.minExitVelocity", message: "must not exceed the maximum exit velocity" });
   }
   if (c.minPortDiameter > c.maxPortDiameter) {
-    issues.push({ path: "design.minPortDiameter", message: "must not exceed the largest port diameter (design.maxPortDiameter)" });
+    issues.push({
+      path: "design.minPortDiameter",
+      message: "must not exceed the largest port diameter (design.maxPortDiameter)",
+    });
   }
   if (s.diffuser.layout === "rosette") {
     issues.push({
@@ -179,12 +190,7 @@ export interface DesignCandidate {
 }
 
 /** Exit velocity of the mean port for a nominal diameter (contraction applied to the area). */
-export function exitVelocity(
-  flow: number,
-  portCount: number,
-  nominalDiameter: number,
-  contraction: number,
-): number {
+export function exitVelocity(flow: number, portCount: number, nominalDiameter: number, contraction: number): number {
   return flow / portCount / ((Math.PI * nominalDiameter * nominalDiameter * contraction) / 4);
 }
 
@@ -314,4 +320,3 @@ export function candidateOverrides(d: DesignCandidate): Overrides {
   else o["diffuser.length"] = 0;
   return o;
 }
-

@@ -27,7 +27,14 @@ export function evaluatePoint(base: Scenario, overrides: Overrides, evaluate: Ev
     const e = evaluateCases(scenario, evaluate);
     return { overrides, cases: e.cases, worst: e.governing, overall: e.overall, verdict: e.overall.verdict };
   } catch (err) {
-    return { overrides, cases: [], worst: -1, overall: null, verdict: "refused", error: err instanceof Error ? err.message : String(err) };
+    return {
+      overrides,
+      cases: [],
+      worst: -1,
+      overall: null,
+      verdict: "refused",
+      error: err instanceof Error ? err.message : String(err),
+    };
   }
 }
 

@@ -12,14 +12,7 @@ export {
 export type { ResolvedDistribution } from "./distributions";
 export { quantile, quantileSorted, percentileSummary } from "./percentiles";
 export type { PercentileSummary } from "./percentiles";
-export {
-  OVERRIDE_PATHS,
-  OverrideError,
-  withOverrides,
-  withRawOverride,
-  readPath,
-  overrideIssue,
-} from "./overrides";
+export { OVERRIDE_PATHS, OverrideError, withOverrides, withRawOverride, readPath, overrideIssue } from "./overrides";
 export type { Overrides } from "./overrides";
 export { expandCases, describeCases, scenarioForAmbient, SLACK_WATER_CASE } from "./cases";
 export type { StudyCase } from "./cases";
@@ -56,7 +49,15 @@ export {
   DESIGN_MAX_RUNS,
 } from "./design";
 export type { DesignConstraints, DesignCandidate, DesignPlan } from "./design";
-export { judgeDesign, shortList, designJson, designOutcome, designDiffuserBlock, nearestMiss, DESIGN_RANKING_RULE } from "./design-rank";
+export {
+  judgeDesign,
+  shortList,
+  designJson,
+  designOutcome,
+  designDiffuserBlock,
+  nearestMiss,
+  DESIGN_RANKING_RULE,
+} from "./design-rank";
 export type { DesignVerdict, RankedDesign, DesignOutcome, NearestMiss } from "./design-rank";
 export { NOMINAL_SIZES_DN, NOMINAL_SIZES_SOURCE } from "./nominal-sizes";
 export { parseStudy, studyFileSchema, studyJsonSchema, STUDY_FORMAT, STUDY_VERSION } from "./study-file";

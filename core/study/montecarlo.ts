@@ -31,7 +31,12 @@ import { streamFor } from "./random";
 import { evaluateCases, type CasesEvaluation, type Evaluator } from "./summary";
 
 /** Verdict codes in the typed arrays of a chunk. */
-export const VERDICT_CODE: Readonly<Record<StudyVerdict, number>> = { exceeds: 0, meets: 1, refused: 2, "outside-scope": 3 };
+export const VERDICT_CODE: Readonly<Record<StudyVerdict, number>> = {
+  exceeds: 0,
+  meets: 1,
+  refused: 2,
+  "outside-scope": 3,
+};
 export const VERDICT_OF_CODE: readonly StudyVerdict[] = ["exceeds", "meets", "refused", "outside-scope"];
 
 export interface MonteCarloPlan {
@@ -74,10 +79,7 @@ export function planMonteCarlo(scenario: Scenario, runs: number, seed: number): 
   });
   if (issues.length > 0) return { ok: false, issues };
   const cases = expandCases(scenario);
-  const notes = [
-    ...(usedDefaultSpreads ? [DEFAULT_SPREADS_NOTE] : []),
-    ...distributions.map(describeDistribution),
-  ];
+  const notes = [...(usedDefaultSpreads ? [DEFAULT_SPREADS_NOTE] : []), ...distributions.map(describeDistribution)];
   return {
     ok: true,
     plan: { seed, runs, distributions, usedDefaultSpreads, caseNames: cases.map((c) => c.name), notes },
@@ -178,7 +180,18 @@ export function runMonteCarloChunk(
     }
     onProgress?.(k + 1);
   }
-  return { start, end, edgeDilution: edge, margin, requiredDilution: required, pass, clampedSamples: clamped, clampedByInput: clampedBy, firstError, equationsOfState: eos };
+  return {
+    start,
+    end,
+    edgeDilution: edge,
+    margin,
+    requiredDilution: required,
+    pass,
+    clampedSamples: clamped,
+    clampedByInput: clampedBy,
+    firstError,
+    equationsOfState: eos,
+  };
 }
 
 /**
@@ -250,10 +263,7 @@ export interface MonteCarloSamples {
 }
 
 /** Merges chunks (in any order) by run index. */
-export function mergeMonteCarloChunks(
-  plan: MonteCarloPlan,
-  chunks: readonly MonteCarloChunk[],
-): MonteCarloSamples {
+export function mergeMonteCarloChunks(plan: MonteCarloPlan, chunks: readonly MonteCarloChunk[]): MonteCarloSamples {
   const ordered = [...chunks].sort((a, b) => a.start - b.start);
   const total = ordered.reduce((n, c) => n + (c.end - c.start), 0);
   const nc = plan.caseNames.length;
@@ -338,7 +348,10 @@ function marginKey(m: number): number {
 function stats(name: string, e: Float64Array, m: Float64Array, p: Uint8Array, r: Float64Array): MonteCarloStats {
   const counts = [0, 0, 0, 0];
   for (let i = 0; i < p.length; i++) counts[p[i]!] = (counts[p[i]!] ?? 0) + 1;
-  const verdicts = Object.fromEntries(VERDICT_OF_CODE.map((v, code) => [v, counts[code] ?? 0])) as Record<StudyVerdict, number>;
+  const verdicts = Object.fromEntries(VERDICT_OF_CODE.map((v, code) => [v, counts[code] ?? 0])) as Record<
+    StudyVerdict,
+    number
+  >;
   const computed = p.length - verdicts.refused;
   return {
     name,
@@ -354,10 +367,7 @@ function stats(name: string, e: Float64Array, m: Float64Array, p: Uint8Array, r:
 }
 
 /** Percentiles and exceedance probabilities per case and for the worst case. */
-export function summariseMonteCarlo(
-  plan: MonteCarloPlan,
-  chunks: readonly MonteCarloChunk[],
-): MonteCarloSummary {
+export function summariseMonteCarlo(plan: MonteCarloPlan, chunks: readonly MonteCarloChunk[]): MonteCarloSummary {
   const m = mergeMonteCarloChunks(plan, chunks);
   return {
     runs: m.worstPass.length,
@@ -365,7 +375,9 @@ export function summariseMonteCarlo(
     usedDefaultSpreads: plan.usedDefaultSpreads,
     notes: [...plan.notes, ...[equationOfStateNote(m.equationsOfState)].filter((x): x is string => x !== null)],
     equationsOfState: m.equationsOfState,
-    cases: plan.caseNames.map((name, c) => stats(name, m.edgeDilution[c]!, m.margin[c]!, m.pass[c]!, m.requiredDilution[c]!)),
+    cases: plan.caseNames.map((name, c) =>
+      stats(name, m.edgeDilution[c]!, m.margin[c]!, m.pass[c]!, m.requiredDilution[c]!),
+    ),
     worstCase: stats("overall", m.worstEdgeDilution, m.worstMargin, m.worstPass, m.worstRequiredDilution),
     clampedSamples: m.clampedSamples,
     clampedByInput: m.clampedByInput,
@@ -374,10 +386,7 @@ export function summariseMonteCarlo(
 }
 
 /** Histogram of a sample for charts: `bins` equal-width bins between the finite min and max. */
-export function histogram(
-  values: ArrayLike<number>,
-  bins: number,
-): { x0: number; x1: number; count: number }[] {
+export function histogram(values: ArrayLike<number>, bins: number): { x0: number; x1: number; count: number }[] {
   let lo = Number.POSITIVE_INFINITY;
   let hi = Number.NEGATIVE_INFINITY;
   for (let i = 0; i < values.length; i++) {

@@ -10,7 +10,14 @@
  * A profile (non-uniform ambient) is shifted as a whole by `ambient.salinity` / `ambient.temperature`
  * so that its value at the seabed becomes the given one; stratification is kept.
  */
-import type { AmbientCase, AmbientCaseField, AmbientInput, DiffuserInput, ProfilePoint, Scenario } from "../scenario/types";
+import type {
+  AmbientCase,
+  AmbientCaseField,
+  AmbientInput,
+  DiffuserInput,
+  ProfilePoint,
+  Scenario,
+} from "../scenario/types";
 import type { QuantityKind } from "../units";
 import { FIELD_BOUNDS, fieldBounds, withinBounds } from "../scenario/bounds";
 import { expectationFor } from "../scenario/fields";
@@ -91,7 +98,8 @@ export function readPath(s: Scenario, path: string): number {
   }
   if (group === "diffuser" && field === "portDiameter") return s.diffuser.portDiameterNominal;
   if (group === "plant") {
-    if (!s.plant || s.plant.blending.length === 0) throw new OverrideError(path, "needs a plant with at least one blending stream");
+    if (!s.plant || s.plant.blending.length === 0)
+      throw new OverrideError(path, "needs a plant with at least one blending stream");
     return blendRatioOfPlant(s.plant);
   }
   const obj = (s as unknown as Record<string, Record<string, unknown>>)[group];
@@ -145,7 +153,8 @@ export function withOverrides(s: Scenario, overrides: Overrides): Scenario {
   }
   if (radius !== undefined) out = { ...out, mixingZone: { ...out.mixingZone, radius } };
   if (blendRatio !== undefined) {
-    if (!out.plant || out.plant.blending.length === 0) throw new OverrideError("plant.blendRatio", "needs a plant with at least one blending stream");
+    if (!out.plant || out.plant.blending.length === 0)
+      throw new OverrideError("plant.blendRatio", "needs a plant with at least one blending stream");
     out = scenarioWithBlendRatio(out, blendRatio);
   }
   const broken = scenarioRuleIssues(out);
@@ -266,7 +275,14 @@ function deepFreeze<T>(value: T): T {
 const PROTOTYPE_KEYS = new Set(Object.getOwnPropertyNames(Object.prototype).concat(["__proto__", "prototype"]));
 
 interface ZodNode {
-  readonly _zod: { readonly def: { readonly type: string; readonly shape?: Record<string, ZodNode>; readonly innerType?: ZodNode; readonly element?: ZodNode } };
+  readonly _zod: {
+    readonly def: {
+      readonly type: string;
+      readonly shape?: Record<string, ZodNode>;
+      readonly innerType?: ZodNode;
+      readonly element?: ZodNode;
+    };
+  };
 }
 
 /**
@@ -281,7 +297,8 @@ export function rawPathIssue(raw: unknown, path: string): string | null {
   for (let i = 0; i < parts.length; i++) {
     const key = parts[i]!;
     const here = parts.slice(0, i + 1).join(".");
-    if (key === "" || PROTOTYPE_KEYS.has(key)) return `"${key}" is not a field of the scenario format (in ${JSON.stringify(here.slice(0, 80))})`;
+    if (key === "" || PROTOTYPE_KEYS.has(key))
+      return `"${key}" is not a field of the scenario format (in ${JSON.stringify(here.slice(0, 80))})`;
     while (node && node._zod.def.type === "optional" && node._zod.def.innerType) node = node._zod.def.innerType;
     const type = node?._zod.def.type;
     if (type === "object") {
@@ -291,12 +308,16 @@ export function rawPathIssue(raw: unknown, path: string): string | null {
         return `"${key}" is not a field of ${where}; fields: ${Object.keys(shape).join(", ")}`;
       }
       node = shape[key]!;
-      value = value !== null && typeof value === "object" && Object.prototype.hasOwnProperty.call(value, key) ? (value as Record<string, unknown>)[key] : undefined;
+      value =
+        value !== null && typeof value === "object" && Object.prototype.hasOwnProperty.call(value, key)
+          ? (value as Record<string, unknown>)[key]
+          : undefined;
     } else if (type === "array") {
       if (!/^\d+$/.test(key)) return `"${key}" must be an index into ${parts.slice(0, i).join(".")}`;
       const length = Array.isArray(value) ? value.length : 0;
       const index = Number(key);
-      if (index >= length) return `index ${key} is beyond ${parts.slice(0, i).join(".")}, which has ${length} entr${length === 1 ? "y" : "ies"} (indices from 0)`;
+      if (index >= length)
+        return `index ${key} is beyond ${parts.slice(0, i).join(".")}, which has ${length} entr${length === 1 ? "y" : "ies"} (indices from 0)`;
       node = node!._zod.def.element!;
       value = (value as unknown[])[index];
     } else if (type === "record") {

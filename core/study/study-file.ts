@@ -16,11 +16,9 @@ const name = (what: string) =>
     .min(1, { error: () => `must not be empty (${what})` })
     .max(200, { error: () => `must be at most 200 characters (${what})` });
 
-const overridePath = z
-  .string()
-  .regex(/^[A-Za-z][A-Za-z0-9]*(\.([A-Za-z][A-Za-z0-9]*|\d+))+$/, {
-    error: () => 'must be a dotted scenario path such as "ambient.depth" or "diffuser.portCount"',
-  });
+const overridePath = z.string().regex(/^[A-Za-z][A-Za-z0-9]*(\.([A-Za-z][A-Za-z0-9]*|\d+))+$/, {
+  error: () => 'must be a dotted scenario path such as "ambient.depth" or "diffuser.portCount"',
+});
 
 const overrideValue = z.union(
   [z.number(), z.string(), z.boolean(), z.array(z.unknown()), z.record(z.string(), z.unknown())],
@@ -95,9 +93,7 @@ export interface StudyIssue {
   readonly message: string;
 }
 
-export function parseStudy(
-  raw: unknown,
-): { ok: true; study: StudyFile } | { ok: false; issues: StudyIssue[] } {
+export function parseStudy(raw: unknown): { ok: true; study: StudyFile } | { ok: false; issues: StudyIssue[] } {
   const r = studyFileSchema.safeParse(raw);
   if (r.success) return { ok: true, study: r.data };
   return {

@@ -128,9 +128,20 @@ export function evaluateCases(scenario: Scenario, evaluate: Evaluator): CasesEva
   const summaries = runCases(specs, (c) => evaluate(c.scenario));
   const cases = specs.map((c, i) => ({ name: c.name, kind: c.kind, summary: summaries[i]! }));
   const overCases = overallFromCases(
-    cases.map((c) => ({ name: c.name, verdict: c.summary.verdict, margin: c.summary.margin, edgeDilution: c.summary.edgeDilution })),
+    cases.map((c) => ({
+      name: c.name,
+      verdict: c.summary.verdict,
+      margin: c.summary.margin,
+      edgeDilution: c.summary.edgeDilution,
+    })),
   );
-  const overall = scenario.intake ? overallOfCasesWithIntake(scenario, overCases, cases.map((c) => ({ name: c.name, sample: c.summary.intake }))) : overCases;
+  const overall = scenario.intake
+    ? overallOfCasesWithIntake(
+        scenario,
+        overCases,
+        cases.map((c) => ({ name: c.name, sample: c.summary.intake })),
+      )
+    : overCases;
   const g = cases.findIndex((c) => c.name === overall.governingCase);
   return { cases, overall, governing: g >= 0 ? g : cases.findIndex((c) => c.name === overCases.governingCase) };
 }
@@ -148,7 +159,10 @@ function evaluateRecordCases(scenario: Scenario, evaluate: Evaluator): CasesEval
     const s = summaries.get(i) ?? (steps[i]!.sameAs !== null ? summaries.get(steps[i]!.sameAs!) : undefined);
     if (s && o.verdict !== "refused") cases.push({ name: o.name, kind: "record", summary: s });
   });
-  if (cases.length === 0) throw new ScenarioError([{ path: "ambient.record", message: outcomes[0]?.error ?? "every step of the ambient record was refused" }]);
+  if (cases.length === 0)
+    throw new ScenarioError([
+      { path: "ambient.record", message: outcomes[0]?.error ?? "every step of the ambient record was refused" },
+    ]);
   const { overall } = recordFromOutcomes(scenario, outcomes);
   let g = cases.findIndex((c) => c.name === overall.governingCase);
   if (g < 0) g = worstIndex(cases.map((c) => c.summary));

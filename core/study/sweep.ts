@@ -48,7 +48,10 @@ export function axisFromParts(
     return { ok: false, message: `${path}: steps must be a whole number from 1 to ${MAX_SWEEP_STEPS}` };
   }
   const bounds: number[] = [];
-  for (const [what, raw] of [["from", fromRaw], ["to", toRaw]] as const) {
+  for (const [what, raw] of [
+    ["from", fromRaw],
+    ["to", toRaw],
+  ] as const) {
     const q = quantityToSI(typeof raw === "string" ? raw.trim() : raw, info.kind);
     if (!q.ok) return { ok: false, message: `${path}: "${what}" ${q.message}` };
     const issue = overrideIssue(path, info.integer ? Math.round(q.value) : q.value);
@@ -159,7 +162,10 @@ export interface EosCrossing {
 }
 
 /** Neighbouring grid points (along either axis) where the discharge changes from sinking to rising or back. */
-export function buoyancyCrossings(axes: readonly SweepAxis[], rows: readonly SweepRow[]): (EosCrossing & { readonly verdicts: readonly [string, string] })[] {
+export function buoyancyCrossings(
+  axes: readonly SweepAxis[],
+  rows: readonly SweepRow[],
+): (EosCrossing & { readonly verdicts: readonly [string, string] })[] {
   const key = (idx: readonly number[]) => idx.join(",");
   const byIndex = new Map(rows.map((r) => [key(r.index), r]));
   const out: (EosCrossing & { verdicts: readonly [string, string] })[] = [];
@@ -169,7 +175,13 @@ export function buoyancyCrossings(axes: readonly SweepAxis[], rows: readonly Swe
       next[a] = next[a]! + 1;
       const n = byIndex.get(key(next));
       if (n && r.buoyancy && n.buoyancy && n.buoyancy !== r.buoyancy) {
-        out.push({ path: axis.path, between: [r.values, n.values], from: r.buoyancy, to: n.buoyancy, verdicts: [r.verdict, n.verdict] });
+        out.push({
+          path: axis.path,
+          between: [r.values, n.values],
+          from: r.buoyancy,
+          to: n.buoyancy,
+          verdicts: [r.verdict, n.verdict],
+        });
       }
     });
   }
@@ -218,7 +230,10 @@ export const SWEEP_RESULT_COLUMNS = [
  * governing case, edge and required dilution, margin, verdict, pass, scope reasons, equation of state,
  * whether the discharge sinks or rises, and the refusal message.
  */
-export function sweepRecords(axes: readonly SweepAxis[], rows: readonly SweepRow[]): { columns: string[]; records: Record<string, unknown>[] } {
+export function sweepRecords(
+  axes: readonly SweepAxis[],
+  rows: readonly SweepRow[],
+): { columns: string[]; records: Record<string, unknown>[] } {
   const records = rows.map((r) => ({
     ...r.values,
     governingCase: r.governingCase,

@@ -18,6 +18,9 @@ export function textTable(headers: readonly string[], rows: readonly (readonly C
   );
   const width = headers.map((h, c) => Math.max(h.length, ...cells.map((r) => (r[c] ?? "").length)));
   const line = (r: readonly string[]) =>
-    r.map((x, c) => (numeric[c] ? x.padStart(width[c]!) : x.padEnd(width[c]!))).join("  ").trimEnd();
+    r
+      .map((x, c) => (numeric[c] ? x.padStart(width[c]!) : x.padEnd(width[c]!)))
+      .join("  ")
+      .trimEnd();
   return [line(headers), line(width.map((w) => "-".repeat(w))), ...cells.map(line)].join("\n") + "\n";
 }

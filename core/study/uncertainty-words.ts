@@ -31,7 +31,8 @@ export const PROBABILITY_MEANING =
   "The chance of not meeting the limit is the share of the computed runs (refused runs left out) whose " +
   "verdict is not \u201cmeets\u201d: runs that exceed a limit and runs outside scope both count.";
 
-export const MARGIN_MEANING = "Margin is the dilution at the edge divided by the required dilution: 1 or more meets the limit.";
+export const MARGIN_MEANING =
+  "Margin is the dilution at the edge divided by the required dilution: 1 or more meets the limit.";
 
 /** A probability (fraction 0–1) as a percentage for people: "12.3 %", "0 %", "< 0.1 %", "100 %". */
 export function percentText(p: number): string {
@@ -52,14 +53,18 @@ export function inputWords(path: string): string {
  * One sentence per clamped input: "current speed (ambient.currentSpeed): 778 of 2000 draws (38.9 %) fell
  * outside 0–5 m/s and were set to the nearest bound." Empty when nothing was clamped.
  */
-export function clampedSentences(summary: Pick<MonteCarloSummary, "runs" | "clampedByInput" | "clampedSamples">): string[] {
+export function clampedSentences(
+  summary: Pick<MonteCarloSummary, "runs" | "clampedByInput" | "clampedSamples">,
+): string[] {
   const by = summary.clampedByInput ?? {};
   const out = Object.entries(by)
     .filter(([, n]) => n > 0)
     .map(([path, n]) => {
       const info = overridePathInfo(path);
       const unit = info ? siToDisplay(1, info.kind, "si").unit : "";
-      const range = info ? `${formatNumber(info.min)}\u2013${formatNumber(info.max)}${unit ? ` ${unit}` : ""}` : "its bounds";
+      const range = info
+        ? `${formatNumber(info.min)}\u2013${formatNumber(info.max)}${unit ? ` ${unit}` : ""}`
+        : "its bounds";
       return `${inputWords(path)} (${path}): ${n} of ${summary.runs} draws (${percentText(n / Math.max(1, summary.runs))}) fell outside ${range} and were set to the nearest bound.`;
     });
   if (out.length === 0 && summary.clampedSamples > 0) {
@@ -80,7 +85,10 @@ export function verdictCountsSentence(stats: MonteCarloStats, runs: number): str
 /** The headline sentence for a case or the per-run worst case, with units and the chance as a percentage. */
 export function headlineSentence(stats: MonteCarloStats, requiredDilution: number | null): string {
   const d = stats.edgeDilution;
-  const req = requiredDilution !== null && Number.isFinite(requiredDilution) ? ` (required: ${formatNumber(requiredDilution)}\u00d7 at the stated inputs)` : "";
+  const req =
+    requiredDilution !== null && Number.isFinite(requiredDilution)
+      ? ` (required: ${formatNumber(requiredDilution)}\u00d7 at the stated inputs)`
+      : "";
   return (
     `Dilution at the mixing-zone edge, per-run worst case: P5 ${formatNumber(d.p5)}\u00d7, P50 ${formatNumber(d.p50)}\u00d7, ` +
     `P95 ${formatNumber(d.p95)}\u00d7${req}; chance of not meeting the limit ${percentText(stats.probabilityOfExceedance)}.`

@@ -86,11 +86,13 @@ export function quantityToSI(raw: unknown, kind: QuantityKind): QuantityParse {
     if (!Number.isFinite(raw)) return { ok: false, message: "must be a finite number" };
     return { ok: true, value: raw, converted: false };
   }
-  if (typeof raw !== "string") return { ok: false, message: `must be a number in ${siLabel(kind)} or a string with a unit` };
+  if (typeof raw !== "string")
+    return { ok: false, message: `must be a number in ${siLabel(kind)} or a string with a unit` };
   const text = raw.trim();
   if (text === "") return { ok: false, message: "is empty" };
   // Number() and mathjs read hex, octal and binary ("0x1E"): a typo or a trick, never a quantity.
-  if (/^[-+]?0[xob]/i.test(text)) return { ok: false, message: "must be a decimal number (hex, octal and binary forms are not accepted)" };
+  if (/^[-+]?0[xob]/i.test(text))
+    return { ok: false, message: "must be a decimal number (hex, octal and binary forms are not accepted)" };
   const plain = Number(text);
   if (Number.isFinite(plain)) return { ok: true, value: plain, converted: false };
   if (!Number.isNaN(plain)) return { ok: false, message: "is not a finite number" };
@@ -100,7 +102,9 @@ export function quantityToSI(raw: unknown, kind: QuantityKind): QuantityParse {
     const percent = PERCENT.exec(text);
     if (percent) {
       const v = Number(percent[1]) / 100;
-      return Number.isFinite(v) ? { ok: true, value: v, converted: true, note: `${raw} → ${formatNumber(v)}` } : { ok: false, message: "is not a finite number" };
+      return Number.isFinite(v)
+        ? { ok: true, value: v, converted: true, note: `${raw} → ${formatNumber(v)}` }
+        : { ok: false, message: "is not a finite number" };
     }
     return { ok: false, message: 'must be a plain number or a percentage (e.g. 0.45 or "45 %")' };
   }
@@ -113,7 +117,10 @@ export function quantityToSI(raw: unknown, kind: QuantityKind): QuantityParse {
     const msg = err instanceof Error ? err.message : String(err);
     const unknown = /Unit "([^"]*)" not found/i.exec(msg);
     if (unknown) return { ok: false, message: `has a unit Brinefield does not know ("${unknown[1]}")` };
-    return { ok: false, message: `is not a ${QUANTITY_KINDS[kind].label} (expected a unit convertible to ${unitSymbol(target)})` };
+    return {
+      ok: false,
+      message: `is not a ${QUANTITY_KINDS[kind].label} (expected a unit convertible to ${unitSymbol(target)})`,
+    };
   }
   if (!Number.isFinite(value)) return { ok: false, message: `is not a finite ${QUANTITY_KINDS[kind].label}` };
   return { ok: true, value, converted: true, note: `${raw} → ${formatNumber(value)} ${unitSymbol(target)}` };
@@ -175,7 +182,10 @@ export function formatNumber(value: number, significant = 4): string {
   const abs = Math.abs(value);
   if (abs >= 1e-3 && abs < 1e7) {
     const digits = Math.max(0, significant - 1 - Math.floor(Math.log10(abs)));
-    return value.toFixed(Math.min(digits, 10)).replace(/(\.\d*?)0+$/, "$1").replace(/\.$/, "");
+    return value
+      .toFixed(Math.min(digits, 10))
+      .replace(/(\.\d*?)0+$/, "$1")
+      .replace(/\.$/, "");
   }
   return value.toExponential(significant - 1);
 }

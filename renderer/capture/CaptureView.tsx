@@ -16,7 +16,8 @@ function markError(message: string): void {
 export function CaptureView({ unitSystem }: { unitSystem: UnitSystem }) {
   const outcome = useMemo(() => {
     const text = window.__brinefieldCapture;
-    if (typeof text !== "string" || text.trim() === "") return { ok: false as const, message: "window.__brinefieldCapture holds no scenario text" };
+    if (typeof text !== "string" || text.trim() === "")
+      return { ok: false as const, message: "window.__brinefieldCapture holds no scenario text" };
     let file: unknown;
     try {
       file = JSON.parse(text);
@@ -27,7 +28,11 @@ export function CaptureView({ unitSystem }: { unitSystem: UnitSystem }) {
   }, []);
   if (!outcome.ok) {
     markError(outcome.message);
-    return <div className="capture-error" role="alert">{outcome.message}</div>;
+    return (
+      <div className="capture-error" role="alert">
+        {outcome.message}
+      </div>
+    );
   }
   return (
     <div className="capture-root">

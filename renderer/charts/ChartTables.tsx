@@ -6,7 +6,14 @@
 import type { BrinefieldResult } from "../../core/result/contract";
 import type { Scenario } from "../../core/scenario/types";
 import { formatNumber, siToDisplay, type UnitSystem } from "../../core/units";
-import { distanceSeries, impactDilutionMarkers, riseMarkers, salinityIncreaseLimit, trajectorySeries, type MethodMarker } from "./chartData";
+import {
+  distanceSeries,
+  impactDilutionMarkers,
+  riseMarkers,
+  salinityIncreaseLimit,
+  trajectorySeries,
+  type MethodMarker,
+} from "./chartData";
 
 /** Every n-th item so that at most `max` remain, first and last always kept. */
 export function thinned<T>(items: readonly T[], max = 60): T[] {
@@ -17,24 +24,54 @@ export function thinned<T>(items: readonly T[], max = 60): T[] {
   return out;
 }
 
-function MarkerRows({ markers, unit, valueLabel }: { markers: readonly MethodMarker[]; unit: string; valueLabel: (m: MethodMarker) => string }) {
+function MarkerRows({
+  markers,
+  unit,
+  valueLabel,
+}: {
+  markers: readonly MethodMarker[];
+  unit: string;
+  valueLabel: (m: MethodMarker) => string;
+}) {
   if (markers.length === 0) return null;
   return (
     <table>
       <caption>Method points</caption>
       <thead>
-        <tr><th className="text" scope="col">method</th><th className="text" scope="col">point</th><th scope="col">distance ({unit})</th><th scope="col">value</th></tr>
+        <tr>
+          <th className="text" scope="col">
+            method
+          </th>
+          <th className="text" scope="col">
+            point
+          </th>
+          <th scope="col">distance ({unit})</th>
+          <th scope="col">value</th>
+        </tr>
       </thead>
       <tbody>
         {markers.map((m, i) => (
-          <tr key={i}><td className="text">{m.method}</td><td className="text">{m.label}</td><td>{formatNumber(m.distance, 3)}</td><td>{valueLabel(m)}</td></tr>
+          <tr key={i}>
+            <td className="text">{m.method}</td>
+            <td className="text">{m.label}</td>
+            <td>{formatNumber(m.distance, 3)}</td>
+            <td>{valueLabel(m)}</td>
+          </tr>
         ))}
       </tbody>
     </table>
   );
 }
 
-export function TrajectoryTable({ result, scenario, unitSystem }: { result: BrinefieldResult; scenario: Scenario; unitSystem: UnitSystem }) {
+export function TrajectoryTable({
+  result,
+  scenario,
+  unitSystem,
+}: {
+  result: BrinefieldResult;
+  scenario: Scenario;
+  unitSystem: UnitSystem;
+}) {
   const unit = siToDisplay(1, "length", unitSystem).unit;
   const points = thinned(trajectorySeries(result, scenario, unitSystem));
   return (
@@ -53,17 +90,33 @@ export function TrajectoryTable({ result, scenario, unitSystem }: { result: Brin
         <tbody>
           {points.map((p, i) => (
             <tr key={i}>
-              <td>{formatNumber(p.distance, 3)}</td><td>{formatNumber(p.height, 3)}</td><td>{formatNumber(p.lower, 3)}</td><td>{formatNumber(p.upper, 3)}</td><td>{formatNumber(p.dilution, 3)}</td>
+              <td>{formatNumber(p.distance, 3)}</td>
+              <td>{formatNumber(p.height, 3)}</td>
+              <td>{formatNumber(p.lower, 3)}</td>
+              <td>{formatNumber(p.upper, 3)}</td>
+              <td>{formatNumber(p.dilution, 3)}</td>
             </tr>
           ))}
         </tbody>
       </table>
-      <MarkerRows markers={riseMarkers(result, scenario, unitSystem)} unit={unit} valueLabel={(m) => `height ${formatNumber(m.value, 3)} ${unit}`} />
+      <MarkerRows
+        markers={riseMarkers(result, scenario, unitSystem)}
+        unit={unit}
+        valueLabel={(m) => `height ${formatNumber(m.value, 3)} ${unit}`}
+      />
     </div>
   );
 }
 
-export function DistanceTable({ result, unitSystem, quantity }: { result: BrinefieldResult; unitSystem: UnitSystem; quantity: "dilution" | "increase" }) {
+export function DistanceTable({
+  result,
+  unitSystem,
+  quantity,
+}: {
+  result: BrinefieldResult;
+  unitSystem: UnitSystem;
+  quantity: "dilution" | "increase";
+}) {
   const unit = siToDisplay(1, "length", unitSystem).unit;
   const points = thinned(distanceSeries(result, unitSystem));
   const edge = siToDisplay(result.mixingZone.radius, "length", unitSystem).value;
@@ -71,19 +124,26 @@ export function DistanceTable({ result, unitSystem, quantity }: { result: Brinef
   const allowed = salinityIncreaseLimit(result);
   const limit =
     quantity === "dilution"
-      ? Number.isFinite(required) && required > 0 ? `required dilution ${formatNumber(required, 3)}×` : "no required dilution"
-      : allowed !== null ? `allowed salinity increase ${formatNumber(allowed, 3)} g/kg` : "no salinity limit to draw";
+      ? Number.isFinite(required) && required > 0
+        ? `required dilution ${formatNumber(required, 3)}×`
+        : "no required dilution"
+      : allowed !== null
+        ? `allowed salinity increase ${formatNumber(allowed, 3)} g/kg`
+        : "no salinity limit to draw";
   return (
     <div className="chart-table" data-role={`${quantity}-table`}>
       <table>
         <caption>
-          {quantity === "dilution" ? "Centreline dilution" : "Salinity increase"} against distance from the diffuser · mixing-zone edge {formatNumber(edge, 3)} {unit} · {limit}
+          {quantity === "dilution" ? "Centreline dilution" : "Salinity increase"} against distance from the diffuser ·
+          mixing-zone edge {formatNumber(edge, 3)} {unit} · {limit}
         </caption>
         <thead>
           <tr>
             <th scope="col">distance ({unit})</th>
             <th scope="col">{quantity === "dilution" ? "dilution (×)" : "salinity increase (g/kg)"}</th>
-            <th className="text" scope="col">stage</th>
+            <th className="text" scope="col">
+              stage
+            </th>
           </tr>
         </thead>
         <tbody>
@@ -97,7 +157,11 @@ export function DistanceTable({ result, unitSystem, quantity }: { result: Brinef
         </tbody>
       </table>
       {quantity === "dilution" ? (
-        <MarkerRows markers={impactDilutionMarkers(result, unitSystem)} unit={unit} valueLabel={(m) => `dilution ${formatNumber(m.value, 3)}×`} />
+        <MarkerRows
+          markers={impactDilutionMarkers(result, unitSystem)}
+          unit={unit}
+          valueLabel={(m) => `dilution ${formatNumber(m.value, 3)}×`}
+        />
       ) : null}
     </div>
   );

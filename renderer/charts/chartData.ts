@@ -45,7 +45,12 @@ export function riseMarkers(result: BrinefieldResult, scenario: Scenario, system
   const out: MethodMarker[] = [];
   for (const m of result.nearField) {
     if (m.maxRiseHeight !== null && m.maxRiseDistance !== null) {
-      out.push({ method: m.method, label: "max rise", distance: len(m.maxRiseDistance, system), value: len(m.maxRiseHeight + scenario.diffuser.portHeight, system) });
+      out.push({
+        method: m.method,
+        label: "max rise",
+        distance: len(m.maxRiseDistance, system),
+        value: len(m.maxRiseHeight + scenario.diffuser.portHeight, system),
+      });
     }
     if (m.impactDistance !== null) {
       out.push({ method: m.method, label: "impact", distance: len(m.impactDistance, system), value: 0 });
@@ -66,7 +71,12 @@ export function distanceSeries(result: BrinefieldResult, system: UnitSystem): Di
   const out: DistanceSeriesPoint[] = [];
   for (let i = 0; i < s.distance.length; i++) {
     if (!(s.dilution[i] > 0) || !Number.isFinite(s.distance[i])) continue;
-    out.push({ distance: len(s.distance[i], system), dilution: s.dilution[i], increase: s.salinityIncrease[i], stage: s.stage[i] ?? "" });
+    out.push({
+      distance: len(s.distance[i], system),
+      dilution: s.dilution[i],
+      increase: s.salinityIncrease[i],
+      stage: s.stage[i] ?? "",
+    });
   }
   return out;
 }
@@ -78,7 +88,12 @@ export function impactDilutionMarkers(result: BrinefieldResult, system: UnitSyst
       out.push({ method: m.method, label: "impact", distance: len(m.impactDistance, system), value: m.impactDilution });
     }
     if (m.nearFieldDistance !== null && m.nearFieldDilution !== null) {
-      out.push({ method: m.method, label: "end of near field", distance: len(m.nearFieldDistance, system), value: m.nearFieldDilution });
+      out.push({
+        method: m.method,
+        label: "end of near field",
+        distance: len(m.nearFieldDistance, system),
+        value: m.nearFieldDilution,
+      });
     }
   }
   return out;

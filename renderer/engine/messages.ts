@@ -16,5 +16,11 @@ export interface EngineRequest {
 }
 
 export type EngineResponse =
-  | { readonly id: number; readonly ok: true; readonly scenario: Scenario; readonly result: BrinefieldResult; readonly ms: number }
+  | {
+      readonly id: number;
+      readonly ok: true;
+      readonly scenario: Scenario;
+      readonly result: BrinefieldResult;
+      readonly ms: number;
+    }
   | { readonly id: number; readonly ok: false; readonly issues: readonly EngineIssue[]; readonly message: string };

@@ -32,7 +32,9 @@ function issuesOf(error: unknown): EngineIssue[] | null {
 }
 
 function relatedOf(related: unknown): { related?: string[] } {
-  return Array.isArray(related) && related.length ? { related: related.filter((p): p is string => typeof p === "string") } : {};
+  return Array.isArray(related) && related.length
+    ? { related: related.filter((p): p is string => typeof p === "string") }
+    : {};
 }
 
 /** Issue values go through postMessage; keep only plain data. */
@@ -60,7 +62,10 @@ export function runFile(id: number, file: unknown): EngineResponse {
     // A long record runs on the study workers with progress and Cancel (renderer/record); meanwhile the
     // stated conditions are shown with no verdict.
     const steps = parsed.scenario.ambient.record?.time.length ?? 0;
-    const result = steps > INLINE_RECORD_STEPS ? pendingRecordResult(parsed.scenario) : runScenario(parsed.scenario, { includePath: true });
+    const result =
+      steps > INLINE_RECORD_STEPS
+        ? pendingRecordResult(parsed.scenario)
+        : runScenario(parsed.scenario, { includePath: true });
     return { id, ok: true, scenario: parsed.scenario, result, ms: performance.now() - started };
   } catch (error) {
     const issues = issuesOf(error) ?? [];

@@ -29,13 +29,37 @@ export interface EngineState {
   readonly inWorker: boolean;
 }
 
-const INITIAL: EngineState = { result: null, scenario: null, issues: [], error: null, stale: false, running: false, ms: null, inWorker: true };
+const INITIAL: EngineState = {
+  result: null,
+  scenario: null,
+  issues: [],
+  error: null,
+  stale: false,
+  running: false,
+  ms: null,
+  inWorker: true,
+};
 
 /** Next engine state for a response: success replaces everything; failure keeps the last good result. */
 export function applyResponse(previous: EngineState, response: EngineResponse): EngineState {
   return response.ok
-    ? { ...previous, result: response.result, scenario: response.scenario, issues: [], error: null, stale: false, running: false, ms: response.ms }
-    : { ...previous, issues: response.issues, error: response.message, stale: previous.result !== null, running: false };
+    ? {
+        ...previous,
+        result: response.result,
+        scenario: response.scenario,
+        issues: [],
+        error: null,
+        stale: false,
+        running: false,
+        ms: response.ms,
+      }
+    : {
+        ...previous,
+        issues: response.issues,
+        error: response.message,
+        stale: previous.result !== null,
+        running: false,
+      };
 }
 
 /**
@@ -147,7 +171,10 @@ export function movedMessage(issue: EngineIssue): string {
   const unit = bounds && bounds.form === "quantity" ? siLabel(bounds.kind) : "";
   const valueText = typeof issue.value === "number" ? `${formatNumber(issue.value)}${unit ? ` ${unit}` : ""}` : "";
   const shownValue = issue.value === undefined ? "" : (JSON.stringify(issue.value) ?? "");
-  const rest = shownValue && issue.message.startsWith(`${shownValue} `) ? issue.message.slice(shownValue.length + 1) : issue.message;
+  const rest =
+    shownValue && issue.message.startsWith(`${shownValue} `)
+      ? issue.message.slice(shownValue.length + 1)
+      : issue.message;
   return `${what}${valueText ? ` ${valueText}` : ""}: ${rest}`;
 }
 
@@ -156,7 +183,10 @@ export function movedMessage(issue: EngineIssue): string {
  * the surface; the port jet is too fast) is shown on the field the user just changed when that field is
  * one it involves, so typing a shallow depth marks the depth, not the port height.
  */
-export function issuesByPath(issues: readonly EngineIssue[], lastEdited: string | null = null): ReadonlyMap<string, string[]> {
+export function issuesByPath(
+  issues: readonly EngineIssue[],
+  lastEdited: string | null = null,
+): ReadonlyMap<string, string[]> {
   const map = new Map<string, string[]>();
   for (const issue of issues) {
     const involvesEdit =

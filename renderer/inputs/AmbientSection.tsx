@@ -31,10 +31,20 @@ export function AmbientSection() {
       <header>
         <h2 id="sec-ambient">Receiving water</h2>
         <div className="segmented" role="radiogroup" aria-label="Water column">
-          <button type="button" role="radio" aria-checked={!isProfile} onClick={() => editor.perform(setAmbientMode, { mode: "uniform" })}>
+          <button
+            type="button"
+            role="radio"
+            aria-checked={!isProfile}
+            onClick={() => editor.perform(setAmbientMode, { mode: "uniform" })}
+          >
             Uniform
           </button>
-          <button type="button" role="radio" aria-checked={isProfile} onClick={() => editor.perform(setAmbientMode, { mode: "profile" })}>
+          <button
+            type="button"
+            role="radio"
+            aria-checked={isProfile}
+            onClick={() => editor.perform(setAmbientMode, { mode: "profile" })}
+          >
             Profile
           </button>
         </div>
@@ -47,10 +57,32 @@ export function AmbientSection() {
             <QuantityField path="ambient.temperature" label="Temperature" kind="temperature" />
           </>
         ) : null}
-        <QuantityField path="ambient.currentSpeed" label="Current speed" kind="speed" hint="depth-averaged; 0 = still water" />
-        <QuantityField path="ambient.currentDirection" label="Current toward" kind="angle" hint="clockwise from north" />
-        <QuantityField path="ambient.bedSlope" label="Bed slope" kind="ratio" hint="rise/run, e.g. 0.02" placeholder="0 (flat)" />
-        <QuantityField path="ambient.bedSlopeAzimuth" label="Bed slopes down toward" kind="angle" hint="clockwise from north" placeholder="0" />
+        <QuantityField
+          path="ambient.currentSpeed"
+          label="Current speed"
+          kind="speed"
+          hint="depth-averaged; 0 = still water"
+        />
+        <QuantityField
+          path="ambient.currentDirection"
+          label="Current toward"
+          kind="angle"
+          hint="clockwise from north"
+        />
+        <QuantityField
+          path="ambient.bedSlope"
+          label="Bed slope"
+          kind="ratio"
+          hint="rise/run, e.g. 0.02"
+          placeholder="0 (flat)"
+        />
+        <QuantityField
+          path="ambient.bedSlopeAzimuth"
+          label="Bed slopes down toward"
+          kind="angle"
+          hint="clockwise from north"
+          placeholder="0"
+        />
       </div>
       {isProfile ? (
         <div className="sub-table">
@@ -69,11 +101,30 @@ export function AmbientSection() {
               {profile.map((_, i) => (
                 <tr key={i}>
                   <td className="muted">{i + 1}</td>
-                  <td><QuantityField path={`ambient.profile.${i}.depth`} label={`Depth, row ${i + 1}`} kind="length" /></td>
-                  <td><QuantityField path={`ambient.profile.${i}.salinity`} label={`Salinity, row ${i + 1}`} kind="salinity" /></td>
-                  <td><QuantityField path={`ambient.profile.${i}.temperature`} label={`Temperature, row ${i + 1}`} kind="temperature" /></td>
                   <td>
-                    <button type="button" className="icon-button" aria-label={`Remove row ${i + 1}`} onClick={() => editor.perform(removeArrayItem, { path: "ambient.profile", index: i })}>
+                    <QuantityField path={`ambient.profile.${i}.depth`} label={`Depth, row ${i + 1}`} kind="length" />
+                  </td>
+                  <td>
+                    <QuantityField
+                      path={`ambient.profile.${i}.salinity`}
+                      label={`Salinity, row ${i + 1}`}
+                      kind="salinity"
+                    />
+                  </td>
+                  <td>
+                    <QuantityField
+                      path={`ambient.profile.${i}.temperature`}
+                      label={`Temperature, row ${i + 1}`}
+                      kind="temperature"
+                    />
+                  </td>
+                  <td>
+                    <button
+                      type="button"
+                      className="icon-button"
+                      aria-label={`Remove row ${i + 1}`}
+                      onClick={() => editor.perform(removeArrayItem, { path: "ambient.profile", index: i })}
+                    >
                       ×
                     </button>
                   </td>
@@ -82,9 +133,15 @@ export function AmbientSection() {
             </tbody>
           </table>
           <div className="button-row">
-            <button type="button" className="link-button" onClick={() => editor.perform(addProfileRow, undefined)}>+ Add row</button>
-            <button type="button" className="link-button" onClick={() => setPasteOpen((o) => !o)}>Paste from spreadsheet…</button>
-            <button type="button" className="link-button" onClick={() => fileInput.current?.click()}>Load CSV…</button>
+            <button type="button" className="link-button" onClick={() => editor.perform(addProfileRow, undefined)}>
+              + Add row
+            </button>
+            <button type="button" className="link-button" onClick={() => setPasteOpen((o) => !o)}>
+              Paste from spreadsheet…
+            </button>
+            <button type="button" className="link-button" onClick={() => fileInput.current?.click()}>
+              Load CSV…
+            </button>
             <input
               ref={fileInput}
               type="file"
@@ -96,7 +153,8 @@ export function AmbientSection() {
                 if (file) {
                   readDroppedFile(file).then(
                     (opened) => importText(opened.text),
-                    (error: unknown) => setPasteErrors([`${file.name}: ${error instanceof Error ? error.message : String(error)}`]),
+                    (error: unknown) =>
+                      setPasteErrors([`${file.name}: ${error instanceof Error ? error.message : String(error)}`]),
                   );
                 }
                 event.target.value = "";
@@ -105,17 +163,31 @@ export function AmbientSection() {
           </div>
           {pasteOpen ? (
             <div className="paste-box">
-              <label htmlFor="profile-paste">Paste rows: depth, salinity, temperature (header optional; units in brackets, e.g. "depth (ft)")</label>
-              <textarea id="profile-paste" rows={5} value={pasteText} onChange={(e) => setPasteText(e.target.value)} spellCheck={false} />
+              <label htmlFor="profile-paste">
+                Paste rows: depth, salinity, temperature (header optional; units in brackets, e.g. "depth (ft)")
+              </label>
+              <textarea
+                id="profile-paste"
+                rows={5}
+                value={pasteText}
+                onChange={(e) => setPasteText(e.target.value)}
+                spellCheck={false}
+              />
               <div className="button-row">
-                <button type="button" onClick={() => importText(pasteText)}>Use these rows</button>
-                <button type="button" className="link-button" onClick={() => setPasteOpen(false)}>Cancel</button>
+                <button type="button" onClick={() => importText(pasteText)}>
+                  Use these rows
+                </button>
+                <button type="button" className="link-button" onClick={() => setPasteOpen(false)}>
+                  Cancel
+                </button>
               </div>
             </div>
           ) : null}
           {pasteErrors.length ? (
             <div className="section-issues" role="alert">
-              {pasteErrors.map((e, i) => <div key={i}>{e}</div>)}
+              {pasteErrors.map((e, i) => (
+                <div key={i}>{e}</div>
+              ))}
             </div>
           ) : null}
         </div>
@@ -123,9 +195,16 @@ export function AmbientSection() {
       <SectionIssues
         path="ambient"
         shownPaths={[
-          "ambient.depth", "ambient.salinity", "ambient.temperature", "ambient.currentSpeed", "ambient.currentDirection",
-          "ambient.bedSlope", "ambient.bedSlopeAzimuth",
-          ...(isProfile ? profile.flatMap((_, i) => ["depth", "salinity", "temperature"].map((k) => `ambient.profile.${i}.${k}`)) : []),
+          "ambient.depth",
+          "ambient.salinity",
+          "ambient.temperature",
+          "ambient.currentSpeed",
+          "ambient.currentDirection",
+          "ambient.bedSlope",
+          "ambient.bedSlopeAzimuth",
+          ...(isProfile
+            ? profile.flatMap((_, i) => ["depth", "salinity", "temperature"].map((k) => `ambient.profile.${i}.${k}`))
+            : []),
         ]}
       />
     </section>

@@ -27,10 +27,13 @@ export function sketchDiffuser(file: unknown): DiffuserInput {
         count: Math.max(1, Math.min(50, Math.floor(siNumber(risersRaw["count"], "ratio", 1)))),
         portsPerRiser: Math.max(1, Math.min(12, Math.floor(siNumber(risersRaw["portsPerRiser"], "ratio", 1)))),
         spacing: siNumber(risersRaw["spacing"], "length", spacing),
-        portAzimuths: Array.isArray(risersRaw["portAzimuths"]) ? risersRaw["portAzimuths"].map((a) => siNumber(a, "angle", 0)) : [],
+        portAzimuths: Array.isArray(risersRaw["portAzimuths"])
+          ? risersRaw["portAzimuths"].map((a) => siNumber(a, "angle", 0))
+          : [],
       }
     : undefined;
-  const portCount = layout === "rosette" && risers ? risers.count * risers.portsPerRiser : layout === "single" ? 1 : count;
+  const portCount =
+    layout === "rosette" && risers ? risers.count * risers.portsPerRiser : layout === "single" ? 1 : count;
   const length = layout === "rosette" && risers ? (risers.count - 1) * risers.spacing : (portCount - 1) * spacing;
   const diameter = siNumber(raw["portDiameter"], "smallLength", 0.2);
   return {
@@ -43,7 +46,11 @@ export function sketchDiffuser(file: unknown): DiffuserInput {
     portHeight: siNumber(raw["portHeight"], "length", 1),
     portSpacing: spacing,
     portAzimuth: siNumber(raw["portAzimuth"], "angle", 0),
-    diffuserAzimuth: siNumber(raw["diffuserAzimuth"], "angle", defaultDiffuserAzimuth(siNumber(raw["portAzimuth"], "angle", 0))),
+    diffuserAzimuth: siNumber(
+      raw["diffuserAzimuth"],
+      "angle",
+      defaultDiffuserAzimuth(siNumber(raw["portAzimuth"], "angle", 0)),
+    ),
     length: siNumber(raw["length"], "length", length),
     flowSplit: [],
     ...(risers ? { risers } : {}),
@@ -68,14 +75,30 @@ export function DiffuserSection() {
         unitSystem={editor.unitSystem}
       />
       <div className="field-grid">
-        <ChoiceField path="diffuser.layout" label="Layout" options={LAYOUTS} fallback="single" onChoose={(value) => editor.perform(setLayout, { layout: value })} />
+        <ChoiceField
+          path="diffuser.layout"
+          label="Layout"
+          options={LAYOUTS}
+          fallback="single"
+          onChoose={(value) => editor.perform(setLayout, { layout: value })}
+        />
         {layout === "line" ? <CountField path="diffuser.portCount" label="Number of ports" /> : null}
         <QuantityField path="diffuser.portDiameter" label="Port diameter" kind="smallLength" />
         <QuantityField path="diffuser.portAngle" label="Port angle" kind="angle" hint="above horizontal, 0–90" />
         <QuantityField path="diffuser.portHeight" label="Port height" kind="length" hint="above seabed" />
-        {layout !== "rosette" ? <QuantityField path="diffuser.portAzimuth" label="Port azimuth" kind="angle" hint="clockwise from north" /> : null}
+        {layout !== "rosette" ? (
+          <QuantityField path="diffuser.portAzimuth" label="Port azimuth" kind="angle" hint="clockwise from north" />
+        ) : null}
         {layout === "line" ? <QuantityField path="diffuser.portSpacing" label="Port spacing" kind="length" /> : null}
-        {layout !== "single" ? <QuantityField path="diffuser.diffuserAzimuth" label="Diffuser axis" kind="angle" hint="clockwise from north" placeholder="⊥ to ports" /> : null}
+        {layout !== "single" ? (
+          <QuantityField
+            path="diffuser.diffuserAzimuth"
+            label="Diffuser axis"
+            kind="angle"
+            hint="clockwise from north"
+            placeholder="⊥ to ports"
+          />
+        ) : null}
         {layout === "rosette" ? (
           <>
             <CountField path="diffuser.risers.count" label="Risers" />
@@ -83,8 +106,19 @@ export function DiffuserSection() {
             <QuantityField path="diffuser.risers.spacing" label="Riser spacing" kind="length" />
           </>
         ) : null}
-        <QuantityField path="diffuser.dischargeCoefficient" label="Discharge coefficient" kind="ratio" placeholder="optional" hint="for head loss" />
-        <QuantityField path="diffuser.contraction" label="Contraction coefficient" kind="ratio" placeholder="1 (none)" />
+        <QuantityField
+          path="diffuser.dischargeCoefficient"
+          label="Discharge coefficient"
+          kind="ratio"
+          placeholder="optional"
+          hint="for head loss"
+        />
+        <QuantityField
+          path="diffuser.contraction"
+          label="Contraction coefficient"
+          kind="ratio"
+          placeholder="1 (none)"
+        />
       </div>
       {layout === "rosette" && Array.isArray(azimuths) ? (
         <div className="sub-table">
@@ -99,9 +133,19 @@ export function DiffuserSection() {
       <SectionIssues
         path="diffuser"
         shownPaths={[
-          "diffuser.layout", "diffuser.portCount", "diffuser.portDiameter", "diffuser.portAngle", "diffuser.portHeight",
-          "diffuser.portAzimuth", "diffuser.portSpacing", "diffuser.diffuserAzimuth", "diffuser.risers.count",
-          "diffuser.risers.portsPerRiser", "diffuser.risers.spacing", "diffuser.dischargeCoefficient", "diffuser.contraction",
+          "diffuser.layout",
+          "diffuser.portCount",
+          "diffuser.portDiameter",
+          "diffuser.portAngle",
+          "diffuser.portHeight",
+          "diffuser.portAzimuth",
+          "diffuser.portSpacing",
+          "diffuser.diffuserAzimuth",
+          "diffuser.risers.count",
+          "diffuser.risers.portsPerRiser",
+          "diffuser.risers.spacing",
+          "diffuser.dischargeCoefficient",
+          "diffuser.contraction",
           ...(Array.isArray(azimuths) ? azimuths.map((_, i) => `diffuser.risers.portAzimuths.${i}`) : []),
         ]}
       />

@@ -4,7 +4,12 @@ import { formatNumber, siToDisplay, type UnitSystem } from "../../core/units";
 import { azimuthToEastNorth } from "../view3d/plumeGeometry";
 import { portPlacements } from "../view3d/ports";
 
-export function DiffuserSketch(props: { diffuser: DiffuserInput; currentDirection: number; currentSpeed: number; unitSystem: UnitSystem }) {
+export function DiffuserSketch(props: {
+  diffuser: DiffuserInput;
+  currentDirection: number;
+  currentSpeed: number;
+  unitSystem: UnitSystem;
+}) {
   const { diffuser } = props;
   const ports = portPlacements(diffuser);
   const width = 340;
@@ -21,33 +26,68 @@ export function DiffuserSketch(props: { diffuser: DiffuserInput; currentDirectio
   const current = azimuthToEastNorth(props.currentDirection);
   const lengthText = siToDisplay(diffuser.length, "length", props.unitSystem);
   return (
-    <svg className="diffuser-sketch" viewBox={`0 0 ${width} ${height}`} role="img" aria-label="Plan sketch of the diffuser ports">
+    <svg
+      className="diffuser-sketch"
+      viewBox={`0 0 ${width} ${height}`}
+      role="img"
+      aria-label="Plan sketch of the diffuser ports"
+    >
       <defs>
-        <marker id="sk-arrow" viewBox="0 0 10 10" refX="9" refY="5" markerWidth="6" markerHeight="6" orient="auto-start-reverse">
+        <marker
+          id="sk-arrow"
+          viewBox="0 0 10 10"
+          refX="9"
+          refY="5"
+          markerWidth="6"
+          markerHeight="6"
+          orient="auto-start-reverse"
+        >
           <path d="M0,0 L10,5 L0,10 z" />
         </marker>
       </defs>
       <rect x={0.5} y={0.5} width={width - 1} height={height - 1} className="sketch-frame" />
       {ports.length > 1 ? (
-        <line className="sketch-axis" x1={sx(-axis.east * half)} y1={sy(-axis.north * half)} x2={sx(axis.east * half)} y2={sy(axis.north * half)} />
+        <line
+          className="sketch-axis"
+          x1={sx(-axis.east * half)}
+          y1={sy(-axis.north * half)}
+          x2={sx(axis.east * half)}
+          y2={sy(axis.north * half)}
+        />
       ) : null}
       {ports.map((p, i) => {
         const d = azimuthToEastNorth(p.azimuth);
         return (
           <g key={i} className="sketch-port">
-            <line x1={sx(p.east)} y1={sy(p.north)} x2={sx(p.east) + d.east * arm} y2={sy(p.north) - d.north * arm} markerEnd="url(#sk-arrow)" />
+            <line
+              x1={sx(p.east)}
+              y1={sy(p.north)}
+              x2={sx(p.east) + d.east * arm}
+              y2={sy(p.north) - d.north * arm}
+              markerEnd="url(#sk-arrow)"
+            />
             <circle cx={sx(p.east)} cy={sy(p.north)} r={2.6} />
           </g>
         );
       })}
       <g className="sketch-north" transform={`translate(${width - 16},${30})`}>
         <line x1={0} y1={10} x2={0} y2={-10} markerEnd="url(#sk-arrow)" />
-        <text y={-13} textAnchor="middle">N</text>
+        <text y={-13} textAnchor="middle">
+          N
+        </text>
       </g>
       {props.currentSpeed > 0 ? (
         <g className="sketch-current" transform={`translate(${24},${height - 24})`}>
-          <line x1={-current.east * 12} y1={current.north * 12} x2={current.east * 12} y2={-current.north * 12} markerEnd="url(#sk-arrow)" />
-          <text x={18} y={4}>current</text>
+          <line
+            x1={-current.east * 12}
+            y1={current.north * 12}
+            x2={current.east * 12}
+            y2={-current.north * 12}
+            markerEnd="url(#sk-arrow)"
+          />
+          <text x={18} y={4}>
+            current
+          </text>
         </g>
       ) : null}
       <text className="sketch-caption" x={6} y={12}>

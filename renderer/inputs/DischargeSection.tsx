@@ -18,10 +18,20 @@ export function DischargeSection() {
       <header>
         <h2 id="sec-discharge">Discharge</h2>
         <div className="segmented" role="radiogroup" aria-label="Discharge given as">
-          <button type="button" role="radio" aria-checked={!plant} onClick={() => editor.perform(setDischargeSource, { source: "discharge" })}>
+          <button
+            type="button"
+            role="radio"
+            aria-checked={!plant}
+            onClick={() => editor.perform(setDischargeSource, { source: "discharge" })}
+          >
             Brine stream
           </button>
-          <button type="button" role="radio" aria-checked={plant} onClick={() => editor.perform(setDischargeSource, { source: "plant" })}>
+          <button
+            type="button"
+            role="radio"
+            aria-checked={plant}
+            onClick={() => editor.perform(setDischargeSource, { source: "plant" })}
+          >
             From plant
           </button>
         </div>
@@ -30,9 +40,19 @@ export function DischargeSection() {
         {plant ? (
           <>
             <QuantityField path="plant.productFlow" label="Product water flow" kind="flow" />
-            <QuantityField path="plant.recovery" label="Recovery" kind="ratio" hint="fraction or percent: 0.45 or 45 %" />
+            <QuantityField
+              path="plant.recovery"
+              label="Recovery"
+              kind="ratio"
+              hint="fraction or percent: 0.45 or 45 %"
+            />
             <QuantityField path="plant.feedSalinity" label="Feed salinity" kind="salinity" />
-            <QuantityField path="plant.saltRejection" label="Salt rejection" kind="ratio" hint="fraction or percent: 99.6 %" />
+            <QuantityField
+              path="plant.saltRejection"
+              label="Salt rejection"
+              kind="ratio"
+              hint="fraction or percent: 99.6 %"
+            />
             <QuantityField path="plant.feedTemperature" label="Feed temperature" kind="temperature" />
           </>
         ) : (
@@ -41,7 +61,12 @@ export function DischargeSection() {
             <QuantityField path="discharge.salinity" label="Brine salinity" kind="salinity" hint="absolute salinity" />
           </>
         )}
-        <QuantityField path="discharge.temperature" label="Brine temperature" kind="temperature" placeholder={plant ? "feed temperature" : undefined} />
+        <QuantityField
+          path="discharge.temperature"
+          label="Brine temperature"
+          kind="temperature"
+          placeholder={plant ? "feed temperature" : undefined}
+        />
       </div>
       {plant ? (
         <div className="sub-table">
@@ -53,7 +78,12 @@ export function DischargeSection() {
                 <QuantityField path={`plant.blending.${i}.flow`} label="Flow" kind="flow" />
                 <QuantityField path={`plant.blending.${i}.salinity`} label="Salinity" kind="salinity" />
                 <QuantityField path={`plant.blending.${i}.temperature`} label="Temperature" kind="temperature" />
-                <button type="button" className="icon-button" aria-label={`Remove blending stream ${i + 1}`} onClick={() => editor.perform(removeArrayItem, { path: "plant.blending", index: i })}>
+                <button
+                  type="button"
+                  className="icon-button"
+                  aria-label={`Remove blending stream ${i + 1}`}
+                  onClick={() => editor.perform(removeArrayItem, { path: "plant.blending", index: i })}
+                >
                   ×
                 </button>
               </div>
@@ -61,7 +91,16 @@ export function DischargeSection() {
           ) : (
             <p className="muted">None: brine is discharged undiluted.</p>
           )}
-          <button type="button" className="link-button" onClick={() => editor.perform(appendArrayItem, { path: "plant.blending", item: { name: "cooling water", flow: 0, salinity: 38, temperature: 25 } })}>
+          <button
+            type="button"
+            className="link-button"
+            onClick={() =>
+              editor.perform(appendArrayItem, {
+                path: "plant.blending",
+                item: { name: "cooling water", flow: 0, salinity: 38, temperature: 25 },
+              })
+            }
+          >
             + Add blending stream
           </button>
         </div>
@@ -72,10 +111,25 @@ export function DischargeSection() {
           constituents.map((c, i) => (
             <div className="row-fields" key={i}>
               <TextField path={`discharge.constituents.${i}.name`} label="Name" />
-              <QuantityField path={`discharge.constituents.${i}.concentration`} label="In discharge" kind="ratio" unitText={constituentUnit(c)} />
+              <QuantityField
+                path={`discharge.constituents.${i}.concentration`}
+                label="In discharge"
+                kind="ratio"
+                unitText={constituentUnit(c)}
+              />
               <TextField path={`discharge.constituents.${i}.unit`} label="Unit" placeholder="mg/L" />
-              <QuantityField path={`discharge.constituents.${i}.background`} label="Background" kind="ratio" unitText={constituentUnit(c)} />
-              <button type="button" className="icon-button" aria-label={`Remove constituent ${i + 1}`} onClick={() => editor.perform(removeArrayItem, { path: "discharge.constituents", index: i })}>
+              <QuantityField
+                path={`discharge.constituents.${i}.background`}
+                label="Background"
+                kind="ratio"
+                unitText={constituentUnit(c)}
+              />
+              <button
+                type="button"
+                className="icon-button"
+                aria-label={`Remove constituent ${i + 1}`}
+                onClick={() => editor.perform(removeArrayItem, { path: "discharge.constituents", index: i })}
+              >
                 ×
               </button>
             </div>
@@ -83,12 +137,32 @@ export function DischargeSection() {
         ) : (
           <p className="muted">Salinity and temperature only.</p>
         )}
-        <button type="button" className="link-button" onClick={() => editor.perform(appendArrayItem, { path: "discharge.constituents", item: { name: "antiscalant", concentration: 5, unit: "mg/L", background: 0 } })}>
+        <button
+          type="button"
+          className="link-button"
+          onClick={() =>
+            editor.perform(appendArrayItem, {
+              path: "discharge.constituents",
+              item: { name: "antiscalant", concentration: 5, unit: "mg/L", background: 0 },
+            })
+          }
+        >
           + Add constituent
         </button>
       </div>
       <SectionIssues path="discharge" shownPaths={["discharge.flow", "discharge.salinity", "discharge.temperature"]} />
-      {plant ? <SectionIssues path="plant" shownPaths={["plant.productFlow", "plant.recovery", "plant.feedSalinity", "plant.saltRejection", "plant.feedTemperature"]} /> : null}
+      {plant ? (
+        <SectionIssues
+          path="plant"
+          shownPaths={[
+            "plant.productFlow",
+            "plant.recovery",
+            "plant.feedSalinity",
+            "plant.saltRejection",
+            "plant.feedTemperature",
+          ]}
+        />
+      ) : null}
     </section>
   );
 }

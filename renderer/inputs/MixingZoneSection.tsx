@@ -13,7 +13,9 @@ export function limitUnit(file: unknown, limit: unknown): string {
   if (name === "temperature") return "°C";
   const constituents = getAtPath(file, "discharge.constituents");
   const match = Array.isArray(constituents)
-    ? constituents.find((c) => isPlainObject(c) && typeof c["name"] === "string" && c["name"].trim().toLowerCase() === name)
+    ? constituents.find(
+        (c) => isPlainObject(c) && typeof c["name"] === "string" && c["name"].trim().toLowerCase() === name,
+      )
     : undefined;
   return isPlainObject(match) && typeof match["unit"] === "string" ? match["unit"] : "–";
 }
@@ -53,7 +55,11 @@ export function MixingZoneSection() {
       <div className="sub-table">
         <h3>Limits at the edge</h3>
         {list.map((limit, i) => {
-          const byIncrease = !(isPlainObject(limit) && limit["maxConcentration"] !== undefined && limit["maxIncrease"] === undefined);
+          const byIncrease = !(
+            isPlainObject(limit) &&
+            limit["maxConcentration"] !== undefined &&
+            limit["maxIncrease"] === undefined
+          );
           const base = `mixingZone.limits.${i}`;
           return (
             <div className="row-fields" key={i}>
@@ -67,7 +73,10 @@ export function MixingZoneSection() {
                     const current = isPlainObject(limit) ? limit : {};
                     const value = current["maxIncrease"] ?? current["maxConcentration"] ?? 2;
                     const { maxIncrease: _a, maxConcentration: _b, ...rest } = current;
-                    editor.perform(setField, { path: base, value: { ...rest, [e.target.value === "increase" ? "maxIncrease" : "maxConcentration"]: value } });
+                    editor.perform(setField, {
+                      path: base,
+                      value: { ...rest, [e.target.value === "increase" ? "maxIncrease" : "maxConcentration"]: value },
+                    });
                   }}
                 >
                   <option value="increase">increase over background</option>
@@ -75,23 +84,57 @@ export function MixingZoneSection() {
                 </select>
               </div>
               {byIncrease ? (
-                <QuantityField path={`${base}.maxIncrease`} label="Max increase" kind="ratio" unitText={limitUnit(editor.file, limit)} />
+                <QuantityField
+                  path={`${base}.maxIncrease`}
+                  label="Max increase"
+                  kind="ratio"
+                  unitText={limitUnit(editor.file, limit)}
+                />
               ) : (
-                <QuantityField path={`${base}.maxConcentration`} label="Max concentration" kind="ratio" unitText={limitUnit(editor.file, limit)} />
+                <QuantityField
+                  path={`${base}.maxConcentration`}
+                  label="Max concentration"
+                  kind="ratio"
+                  unitText={limitUnit(editor.file, limit)}
+                />
               )}
               <TextField path={`${base}.unit`} label="Unit" placeholder="g/kg" />
               <TextField path={`${base}.basis`} label="Basis" placeholder="permit, rule…" />
-              <button type="button" className="icon-button" aria-label={`Remove limit ${i + 1}`} onClick={() => editor.perform(removeArrayItem, { path: "mixingZone.limits", index: i })}>
+              <button
+                type="button"
+                className="icon-button"
+                aria-label={`Remove limit ${i + 1}`}
+                onClick={() => editor.perform(removeArrayItem, { path: "mixingZone.limits", index: i })}
+              >
                 ×
               </button>
             </div>
           );
         })}
-        <button type="button" className="link-button" onClick={() => editor.perform(appendArrayItem, { path: "mixingZone.limits", item: { constituent: "salinity", maxIncrease: 2, unit: "g/kg" } })}>
+        <button
+          type="button"
+          className="link-button"
+          onClick={() =>
+            editor.perform(appendArrayItem, {
+              path: "mixingZone.limits",
+              item: { constituent: "salinity", maxIncrease: 2, unit: "g/kg" },
+            })
+          }
+        >
           + Add limit
         </button>
       </div>
-      <SectionIssues path="mixingZone" shownPaths={["mixingZone.radius", ...list.flatMap((_, i) => ["constituent", "maxIncrease", "maxConcentration", "unit", "basis"].map((k) => `mixingZone.limits.${i}.${k}`))]} />
+      <SectionIssues
+        path="mixingZone"
+        shownPaths={[
+          "mixingZone.radius",
+          ...list.flatMap((_, i) =>
+            ["constituent", "maxIncrease", "maxConcentration", "unit", "basis"].map(
+              (k) => `mixingZone.limits.${i}.${k}`,
+            ),
+          ),
+        ]}
+      />
       <SectionIssues path="options" shownPaths={["options.nearFieldForEdge", "options.farField"]} />
     </section>
   );

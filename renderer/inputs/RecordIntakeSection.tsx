@@ -45,10 +45,31 @@ export function RecordIntakeSection() {
           : "No ambient record: the stated conditions and the ambient cases are screened."}
       </p>
       <div className="button-row">
-        <button type="button" className="link-button" onClick={() => fileInput.current?.click()} data-command="record-load">Load record CSV…</button>
-        <button type="button" className="link-button" onClick={() => setPasteOpen((o) => !o)} data-command="record-paste">Paste record…</button>
+        <button
+          type="button"
+          className="link-button"
+          onClick={() => fileInput.current?.click()}
+          data-command="record-load"
+        >
+          Load record CSV…
+        </button>
+        <button
+          type="button"
+          className="link-button"
+          onClick={() => setPasteOpen((o) => !o)}
+          data-command="record-paste"
+        >
+          Paste record…
+        </button>
         {steps > 0 ? (
-          <button type="button" className="link-button" onClick={() => editor.perform(setField, { path: "ambient.record", value: undefined })} data-command="record-remove">Remove record</button>
+          <button
+            type="button"
+            className="link-button"
+            onClick={() => editor.perform(setField, { path: "ambient.record", value: undefined })}
+            data-command="record-remove"
+          >
+            Remove record
+          </button>
         ) : null}
         <input
           ref={fileInput}
@@ -61,7 +82,8 @@ export function RecordIntakeSection() {
             if (file) {
               readDroppedFile(file).then(
                 (opened) => importText(opened.text, file.name),
-                (error: unknown) => setErrors([`${file.name}: ${error instanceof Error ? error.message : String(error)}`]),
+                (error: unknown) =>
+                  setErrors([`${file.name}: ${error instanceof Error ? error.message : String(error)}`]),
               );
             }
             event.target.value = "";
@@ -71,29 +93,73 @@ export function RecordIntakeSection() {
       {pasteOpen ? (
         <div className="paste-box">
           <label htmlFor="record-paste">
-            Paste the record with a header naming the columns, units in brackets: time (h), currentSpeed (m/s), currentDirection (deg), and optionally depth (m), salinity (g/kg), temperature (degC)
+            Paste the record with a header naming the columns, units in brackets: time (h), currentSpeed (m/s),
+            currentDirection (deg), and optionally depth (m), salinity (g/kg), temperature (degC)
           </label>
-          <textarea id="record-paste" rows={6} value={pasteText} onChange={(e) => setPasteText(e.target.value)} spellCheck={false} data-role="record-paste-text" />
+          <textarea
+            id="record-paste"
+            rows={6}
+            value={pasteText}
+            onChange={(e) => setPasteText(e.target.value)}
+            spellCheck={false}
+            data-role="record-paste-text"
+          />
           <div className="button-row">
-            <button type="button" onClick={() => importText(pasteText, "pasted record")} data-command="record-use-paste">Use this record</button>
-            <button type="button" className="link-button" onClick={() => setPasteOpen(false)}>Cancel</button>
+            <button
+              type="button"
+              onClick={() => importText(pasteText, "pasted record")}
+              data-command="record-use-paste"
+            >
+              Use this record
+            </button>
+            <button type="button" className="link-button" onClick={() => setPasteOpen(false)}>
+              Cancel
+            </button>
           </div>
         </div>
       ) : null}
       {errors.length ? (
         <div className="section-issues" role="alert" data-role="record-errors">
-          {errors.map((e, i) => <div key={i}>{e}</div>)}
+          {errors.map((e, i) => (
+            <div key={i}>{e}</div>
+          ))}
         </div>
       ) : null}
       <div className="field-grid">
-        <QuantityField path="mixingZone.timeCompliance.percentOfTime" label="Limit met for at least" kind="ratio" unitText="% of the time" placeholder="every step" hint="with a record" />
-        <QuantityField path="intake.distance" label="Intake distance" kind="length" hint="from the diffuser centre" placeholder="no intake" />
+        <QuantityField
+          path="mixingZone.timeCompliance.percentOfTime"
+          label="Limit met for at least"
+          kind="ratio"
+          unitText="% of the time"
+          placeholder="every step"
+          hint="with a record"
+        />
+        <QuantityField
+          path="intake.distance"
+          label="Intake distance"
+          kind="length"
+          hint="from the diffuser centre"
+          placeholder="no intake"
+        />
         <QuantityField path="intake.bearing" label="Intake bearing" kind="angle" hint="clockwise from north" />
         <QuantityField path="intake.heightAboveSeabed" label="Intake height" kind="length" hint="above the seabed" />
-        <QuantityField path="intake.maxSalinityIncrease" label="Intake limit" kind="salinity" hint="max salinity increase (optional)" placeholder="none" />
+        <QuantityField
+          path="intake.maxSalinityIncrease"
+          label="Intake limit"
+          kind="salinity"
+          hint="max salinity increase (optional)"
+          placeholder="none"
+        />
       </div>
       {intake !== undefined ? (
-        <button type="button" className="link-button" onClick={() => editor.perform(setField, { path: "intake", value: undefined })} data-command="intake-remove">Remove intake</button>
+        <button
+          type="button"
+          className="link-button"
+          onClick={() => editor.perform(setField, { path: "intake", value: undefined })}
+          data-command="intake-remove"
+        >
+          Remove intake
+        </button>
       ) : null}
       <SectionIssues
         path="intake"

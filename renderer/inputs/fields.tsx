@@ -9,7 +9,14 @@ import { getAtPath } from "../state/scenarioState";
 import { issuesUnder, useEditor } from "./EditorContext";
 import { fieldView, storedValueInField } from "./quantityText";
 
-function FieldShell(props: { id: string; label: ReactNode; errors: readonly string[]; hint?: string; children: ReactNode; wide?: boolean }) {
+function FieldShell(props: {
+  id: string;
+  label: ReactNode;
+  errors: readonly string[];
+  hint?: string;
+  children: ReactNode;
+  wide?: boolean;
+}) {
   const errorId = `${props.id}-error`;
   return (
     <div className={`field${props.errors.length ? " has-error" : ""}${props.wide ? " wide" : ""}`}>
@@ -122,7 +129,17 @@ export function CountField({ path, label, hint }: { path: string; label: string;
   );
 }
 
-export function TextField({ path, label, wide, placeholder }: { path: string; label: string; wide?: boolean; placeholder?: string }) {
+export function TextField({
+  path,
+  label,
+  wide,
+  placeholder,
+}: {
+  path: string;
+  label: string;
+  wide?: boolean;
+  placeholder?: string;
+}) {
   const editor = useEditor();
   const id = useId();
   const raw = getAtPath(editor.file, path);
@@ -136,7 +153,9 @@ export function TextField({ path, label, wide, placeholder }: { path: string; la
         value={typeof raw === "string" ? raw : raw === undefined ? "" : String(raw)}
         placeholder={placeholder}
         {...invalidProps(id, errors)}
-        onChange={(event) => editor.perform(setField, { path, value: event.target.value === "" ? undefined : event.target.value })}
+        onChange={(event) =>
+          editor.perform(setField, { path, value: event.target.value === "" ? undefined : event.target.value })
+        }
       />
     </FieldShell>
   );

@@ -78,7 +78,8 @@ export function parseProfileText(text: string): ProfileParse {
       temperature: cell(r[columns.temperature] ?? "", units.temperature),
     };
     for (const key of Object.keys(row) as Column[]) {
-      if (typeof row[key] === "string" && !/\d/.test(String(row[key]))) errors.push(`row ${line}: ${key} "${row[key]}" is not a number`);
+      if (typeof row[key] === "string" && !/\d/.test(String(row[key])))
+        errors.push(`row ${line}: ${key} "${row[key]}" is not a number`);
     }
     rows.push(row);
   });

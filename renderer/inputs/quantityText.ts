@@ -99,7 +99,11 @@ export function prettyUnit(unit: string): string {
  * m³/day, "45 %" in %, "0.15 knot" in knots. Values in the SI unit itself ("18 m") or in the unit system's
  * own unit ("40 ft" with US units on) follow the unit system as plain numbers do. Null otherwise.
  */
-export function enteredUnit(raw: unknown, kind: QuantityKind, system: UnitSystem): { value: number; unit: string; text: string } | null {
+export function enteredUnit(
+  raw: unknown,
+  kind: QuantityKind,
+  system: UnitSystem,
+): { value: number; unit: string; text: string } | null {
   if (typeof raw !== "string") return null;
   const m = LEADING_NUMBER.exec(raw);
   if (!m || m[2] === "") return null;
@@ -133,7 +137,12 @@ export function fieldView(
     const siUnit = displayUnit(kind, "si");
     const si = system === "us" && displayUnit(kind, "us") !== siUnit ? quantityToSI(raw, kind) : null;
     const beside = si && si.ok ? `= ${formatNumber(si.value, 4)}${siUnit ? ` ${siUnit}` : ""}` : null;
-    return { text: displayText(raw, kind, system, significant), unit: displayUnit(kind, system), beside, enteredIn: null };
+    return {
+      text: displayText(raw, kind, system, significant),
+      unit: displayUnit(kind, system),
+      beside,
+      enteredIn: null,
+    };
   }
   const si = quantityToSI(raw, kind);
   const parts: string[] = [];
@@ -157,7 +166,12 @@ export function fieldView(
  * What to store for text typed into a field that shows `enteredIn` (a unit of the user's own): a plain
  * number is taken in that unit. Otherwise as storedValueFromText.
  */
-export function storedValueInField(text: string, kind: QuantityKind, system: UnitSystem, enteredIn: string | null): unknown {
+export function storedValueInField(
+  text: string,
+  kind: QuantityKind,
+  system: UnitSystem,
+  enteredIn: string | null,
+): unknown {
   const trimmed = text.trim();
   if (enteredIn !== null && trimmed !== "" && Number.isFinite(Number(trimmed))) return `${trimmed} ${enteredIn}`;
   return storedValueFromText(text, kind, system);

@@ -8,9 +8,7 @@ import type { BrinefieldHost, FileFilter, HostRequest, HostResponse, MenuCommand
 
 export type { MenuCommand };
 
-export const SCENARIO_FILTERS: readonly FileFilter[] = [
-  { name: "Brinefield scenario", extensions: ["json"] },
-];
+export const SCENARIO_FILTERS: readonly FileFilter[] = [{ name: "Brinefield scenario", extensions: ["json"] }];
 
 export interface OpenedFile {
   readonly path: string;
@@ -174,9 +172,17 @@ export async function saveScenario(path: string | null, text: string, suggestedN
 }
 
 /** Exports a derived file (report HTML, CSV). Returns false when cancelled. */
-export async function exportFile(suggestedName: string, text: string, filters: readonly FileFilter[]): Promise<boolean> {
+export async function exportFile(
+  suggestedName: string,
+  text: string,
+  filters: readonly FileFilter[],
+): Promise<boolean> {
   if (!isDesktop()) {
-    const mime = suggestedName.endsWith(".html") ? "text/html" : suggestedName.endsWith(".csv") ? "text/csv" : "text/plain";
+    const mime = suggestedName.endsWith(".html")
+      ? "text/html"
+      : suggestedName.endsWith(".csv")
+        ? "text/csv"
+        : "text/plain";
     downloadText(suggestedName, text, mime);
     return true;
   }
@@ -224,7 +230,9 @@ export async function autosaveRead(): Promise<AutosaveRecord | null> {
     }
   }
   const response = await invoke({ kind: "autosave-read" });
-  return response.kind === "autosave" && response.text !== null ? { text: response.text, savedAt: response.savedAt } : null;
+  return response.kind === "autosave" && response.text !== null
+    ? { text: response.text, savedAt: response.savedAt }
+    : null;
 }
 
 export async function autosaveClear(): Promise<void> {

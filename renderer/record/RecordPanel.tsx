@@ -15,14 +15,25 @@ export function RecordStatus({ run, steps }: { run: RecordRun; steps: number }) 
       <div className="record-status" role="status" data-role="record-status" data-state="running">
         Ambient record: computing {run.done} of {run.total} distinct steps on worker threads…
         <progress max={Math.max(1, run.total)} value={run.done} />
-        <button type="button" onClick={run.cancel} data-command="record-cancel">Cancel</button>
+        <button type="button" onClick={run.cancel} data-command="record-cancel">
+          Cancel
+        </button>
       </div>
     );
   if (run.cancelled || run.error)
     return (
-      <div className="record-status" role="status" data-role="record-status" data-state={run.cancelled ? "cancelled" : "error"}>
-        {run.cancelled ? "Ambient record cancelled: no verdict over the record." : `Ambient record failed: ${run.error}`}{" "}
-        <button type="button" onClick={run.restart} data-command="record-restart">Run the record</button>
+      <div
+        className="record-status"
+        role="status"
+        data-role="record-status"
+        data-state={run.cancelled ? "cancelled" : "error"}
+      >
+        {run.cancelled
+          ? "Ambient record cancelled: no verdict over the record."
+          : `Ambient record failed: ${run.error}`}{" "}
+        <button type="button" onClick={run.restart} data-command="record-restart">
+          Run the record
+        </button>
       </div>
     );
   return run.seconds !== null ? (
@@ -49,5 +60,7 @@ export function RecordChart({ result, kind }: { result: BrinefieldResult; kind: 
   const rec = result.record;
   if (!rec) return <div className="placeholder">The record has not been computed yet.</div>;
   const svg = kind === "time" ? recordDilutionSvg(rec) + recordIncreaseSvg(rec) : recordDurationSvg(rec);
-  return <div className="chart record-chart" data-role={`record-${kind}-chart`} dangerouslySetInnerHTML={{ __html: svg }} />;
+  return (
+    <div className="chart record-chart" data-role={`record-${kind}-chart`} dangerouslySetInnerHTML={{ __html: svg }} />
+  );
 }

@@ -19,9 +19,26 @@ export function pendingRecordResult(scenario: Scenario): BrinefieldResult {
   return {
     ...top,
     caution: `${top.caution} ${QUASI_STEADY_NOTE}`,
-    cases: [{ name: RECORD_PENDING_CASE, kind: "record", edgeDilution: Number.NaN, verdict: "outside-scope", margin: Number.NaN, scopeReasons: [reason] }],
-    overall: { governingCase: RECORD_PENDING_CASE, verdict: "outside-scope", margin: Number.NaN, edgeDilution: Number.NaN },
-    warnings: [...top.warnings, { code: "record-pending", severity: "serious", message: reason, parameter: "ambient.record", stage: "record" }],
+    cases: [
+      {
+        name: RECORD_PENDING_CASE,
+        kind: "record",
+        edgeDilution: Number.NaN,
+        verdict: "outside-scope",
+        margin: Number.NaN,
+        scopeReasons: [reason],
+      },
+    ],
+    overall: {
+      governingCase: RECORD_PENDING_CASE,
+      verdict: "outside-scope",
+      margin: Number.NaN,
+      edgeDilution: Number.NaN,
+    },
+    warnings: [
+      ...top.warnings,
+      { code: "record-pending", severity: "serious", message: reason, parameter: "ambient.record", stage: "record" },
+    ],
   };
 }
 

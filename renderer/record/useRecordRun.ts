@@ -27,7 +27,15 @@ export interface RecordRun {
 const CHUNKS_PER_WORKER = 4;
 
 export function useRecordRun(scenario: Scenario | null, pendingResult: BrinefieldResult | null): RecordRun {
-  const [state, setState] = useState({ result: null as BrinefieldResult | null, running: false, done: 0, total: 0, cancelled: false, error: null as string | null, seconds: null as number | null });
+  const [state, setState] = useState({
+    result: null as BrinefieldResult | null,
+    running: false,
+    done: 0,
+    total: 0,
+    cancelled: false,
+    error: null as string | null,
+    seconds: null as number | null,
+  });
   const poolRef = useRef<StudyWorkerPool | null>(null);
   const [attempt, setAttempt] = useState(0);
   const pending = isRecordPending(pendingResult);
@@ -43,10 +51,21 @@ export function useRecordRun(scenario: Scenario | null, pendingResult: Brinefiel
     const distinct = distinctStepIndices(scenario);
     const chunks: number[][] = [];
     const parts = Math.max(1, Math.min(distinct.length, cores * CHUNKS_PER_WORKER));
-    for (let i = 0; i < parts; i++) chunks.push(distinct.slice(Math.floor((distinct.length * i) / parts), Math.floor((distinct.length * (i + 1)) / parts)));
+    for (let i = 0; i < parts; i++)
+      chunks.push(
+        distinct.slice(Math.floor((distinct.length * i) / parts), Math.floor((distinct.length * (i + 1)) / parts)),
+      );
     let live = true;
     const t0 = performance.now();
-    setState({ result: null, running: true, done: 0, total: distinct.length, cancelled: false, error: null, seconds: null });
+    setState({
+      result: null,
+      running: true,
+      done: 0,
+      total: distinct.length,
+      cancelled: false,
+      error: null,
+      seconds: null,
+    });
     pool
       .run(
         chunks.filter((c) => c.length > 0).map((indices) => ({ kind: "record-steps" as const, scenario, indices })),
@@ -62,12 +81,33 @@ export function useRecordRun(scenario: Scenario | null, pendingResult: Brinefiel
             if (r.kind !== "record-steps") throw new Error("unexpected reply");
             for (const o of r.outcomes) computed.set(flat[k++]!, o);
           }
-          const result = withRecord(scenario, { ...pendingResult, caution: pendingResult.caution.replace(/ Each step of the record.*$/, "") , warnings: pendingResult.warnings.filter((w) => w.code !== "record-pending") }, outcomesFromDistinct(scenario, computed));
-          setState({ result, running: false, done: distinct.length, total: distinct.length, cancelled: false, error: null, seconds: (performance.now() - t0) / 1000 });
+          const result = withRecord(
+            scenario,
+            {
+              ...pendingResult,
+              caution: pendingResult.caution.replace(/ Each step of the record.*$/, ""),
+              warnings: pendingResult.warnings.filter((w) => w.code !== "record-pending"),
+            },
+            outcomesFromDistinct(scenario, computed),
+          );
+          setState({
+            result,
+            running: false,
+            done: distinct.length,
+            total: distinct.length,
+            cancelled: false,
+            error: null,
+            seconds: (performance.now() - t0) / 1000,
+          });
         },
         (err: unknown) => {
           if (!live) return;
-          setState((s) => ({ ...s, running: false, cancelled: err instanceof StudyCancelled, error: err instanceof StudyCancelled ? null : err instanceof Error ? err.message : String(err) }));
+          setState((s) => ({
+            ...s,
+            running: false,
+            cancelled: err instanceof StudyCancelled,
+            error: err instanceof StudyCancelled ? null : err instanceof Error ? err.message : String(err),
+          }));
         },
       );
     return () => {

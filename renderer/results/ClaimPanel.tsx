@@ -46,7 +46,12 @@ export function ClaimPanel({ scenario }: { scenario: Scenario | null }) {
       <div className="claim-form">
         <label>
           claimed dilution
-          <input value={claimed} onChange={(e) => setClaimed(e.target.value)} placeholder="e.g. 60" data-field="claim-dilution" />
+          <input
+            value={claimed}
+            onChange={(e) => setClaimed(e.target.value)}
+            placeholder="e.g. 60"
+            data-field="claim-dilution"
+          />
         </label>
         <label>
           at distance
@@ -61,7 +66,11 @@ export function ClaimPanel({ scenario }: { scenario: Scenario | null }) {
           Check
         </button>
       </div>
-      {problem ? <p className="claim-error" role="alert">{problem}</p> : null}
+      {problem ? (
+        <p className="claim-error" role="alert">
+          {problem}
+        </p>
+      ) : null}
       {shown ? (
         <div className={stale ? "stale" : undefined} data-claim-verdict={shown.verdict}>
           {stale ? <p className="muted">The scenario changed since this check; press Check again.</p> : null}
@@ -70,8 +79,8 @@ export function ClaimPanel({ scenario }: { scenario: Scenario | null }) {
           </p>
           <p>{shown.summary}</p>
           <p>
-            Conservative value <b>{formatNumber(shown.conservativeDilution, 3)}×</b> (case “{shown.conservativeCase}”) · claim ÷
-            conservative <b>{formatNumber(shown.ratioToConservative, 3)}</b>
+            Conservative value <b>{formatNumber(shown.conservativeDilution, 3)}×</b> (case “{shown.conservativeCase}”) ·
+            claim ÷ conservative <b>{formatNumber(shown.ratioToConservative, 3)}</b>
           </p>
           <div className="claim-figure" dangerouslySetInnerHTML={{ __html: claimRangeBarSvg(shown) }} />
           <table className="claim-chains">

@@ -40,7 +40,14 @@ export const setDischargeSource: Action<{ source: "discharge" | "plant" }> = {
     if (source === "plant") {
       const plant = isPlainObject(state.file["plant"])
         ? state.file["plant"]
-        : { productFlow: 0.5, recovery: 0.45, feedSalinity: 38, saltRejection: 0.996, feedTemperature: 22, blending: [] };
+        : {
+            productFlow: 0.5,
+            recovery: 0.45,
+            feedSalinity: 38,
+            saltRejection: 0.996,
+            feedTemperature: 22,
+            blending: [],
+          };
       return updateScenario(state, { plant, discharge: { flow: undefined, salinity: undefined } });
     }
     const next = updateScenario(state, { plant: undefined });
@@ -79,11 +86,14 @@ export const setAmbientMode: Action<{ mode: "uniform" | "profile" }> = {
   },
 };
 
-export const replaceProfile: Action<{ rows: readonly { depth: unknown; salinity: unknown; temperature: unknown }[] }> = {
-  name: "replace-profile",
-  perform: (state, { rows }) =>
-    updateScenario(state, { ambient: { salinity: undefined, temperature: undefined, profile: rows.map((r) => ({ ...r })) } }),
-};
+export const replaceProfile: Action<{ rows: readonly { depth: unknown; salinity: unknown; temperature: unknown }[] }> =
+  {
+    name: "replace-profile",
+    perform: (state, { rows }) =>
+      updateScenario(state, {
+        ambient: { salinity: undefined, temperature: undefined, profile: rows.map((r) => ({ ...r })) },
+      }),
+  };
 
 export const addProfileRow: Action<void> = {
   name: "add-profile-row",

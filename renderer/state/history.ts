@@ -20,7 +20,13 @@ export function historyStart(present: DocumentState): History {
 }
 
 /** Records an edit. `key` names what changed (e.g. "set-field:diffuser.portAngle"). */
-export function historyPush(history: History, next: DocumentState, key: string, now: number, mergeWindowMs = 1000): History {
+export function historyPush(
+  history: History,
+  next: DocumentState,
+  key: string,
+  now: number,
+  mergeWindowMs = 1000,
+): History {
   if (next === history.present) return history;
   const merge = key === history.lastKey && now - history.lastAt <= mergeWindowMs && history.past.length > 0;
   const past = merge ? history.past : [...history.past, history.present].slice(-HISTORY_LIMIT);

@@ -141,7 +141,7 @@ export function fileFromText(text: string): { ok: true; file: ScenarioFile } | {
   if (!isPlainObject(parsed)) return { ok: false, message: "The file is JSON but not a scenario object." };
   const format = parsed["format"];
   if (format !== SCENARIO_FORMAT) {
-    const what = typeof format === "string" ? `its format is "${format.slice(0, 60)}"` : "it has no \"format\" field";
+    const what = typeof format === "string" ? `its format is "${format.slice(0, 60)}"` : 'it has no "format" field';
     return { ok: false, message: `The file is not a Brinefield scenario: ${what}, not "${SCENARIO_FORMAT}".` };
   }
   return { ok: true, file: parsed };

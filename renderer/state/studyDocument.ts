@@ -77,9 +77,7 @@ export function serialiseDocument(doc: Pick<DocumentState, "file" | "study">): s
   return doc.study ? JSON.stringify(studyFileObject(doc.file, doc.study), null, 2) + "\n" : serialiseScenario(doc.file);
 }
 
-export type ReadDocument =
-  | { ok: true; file: ScenarioFile; study: StudyPart | null }
-  | { ok: false; message: string };
+export type ReadDocument = { ok: true; file: ScenarioFile; study: StudyPart | null } | { ok: false; message: string };
 
 /**
  * Reads the text of a file the user opened, dropped or recovered: a Brinefield scenario, or a Brinefield
@@ -90,8 +88,14 @@ export function documentFromText(text: string): ReadDocument {
   if (json.ok && isPlainObject(json.value) && json.value["format"] === STUDY_FORMAT) {
     const parsed = parseStudy(json.value);
     if (!parsed.ok) {
-      const list = parsed.issues.slice(0, 5).map((i) => i.message).join("; ");
-      return { ok: false, message: `The file is a Brinefield study ("${STUDY_FORMAT}") with ${parsed.issues.length} problem(s): ${list}` };
+      const list = parsed.issues
+        .slice(0, 5)
+        .map((i) => i.message)
+        .join("; ");
+      return {
+        ok: false,
+        message: `The file is a Brinefield study ("${STUDY_FORMAT}") with ${parsed.issues.length} problem(s): ${list}`,
+      };
     }
     const s = parsed.study;
     if (typeof s.base === "string") {
@@ -109,7 +113,11 @@ export function documentFromText(text: string): ReadDocument {
       study: {
         name: s.name,
         ...(s.description ? { description: s.description } : {}),
-        variants: (s.variants ?? []).map((v) => ({ name: v.name, ...(v.description ? { description: v.description } : {}), overrides: v.overrides })),
+        variants: (s.variants ?? []).map((v) => ({
+          name: v.name,
+          ...(v.description ? { description: v.description } : {}),
+          overrides: v.overrides,
+        })),
         ...(s.sweep !== undefined ? { sweep: s.sweep } : {}),
       },
     };
@@ -120,7 +128,10 @@ export function documentFromText(text: string): ReadDocument {
 }
 
 /** The variant's full raw scenario: the base with its overrides applied, or why it cannot be built. */
-export function variantScenario(base: ScenarioFile, variant: StudyVariantDoc): { ok: true; file: ScenarioFile } | { ok: false; message: string } {
+export function variantScenario(
+  base: ScenarioFile,
+  variant: StudyVariantDoc,
+): { ok: true; file: ScenarioFile } | { ok: false; message: string } {
   let raw: unknown = base;
   try {
     for (const [path, value] of Object.entries(variant.overrides)) raw = withRawOverride(raw, path, value);
@@ -135,7 +146,10 @@ export function variantScenario(base: ScenarioFile, variant: StudyVariantDoc): {
  * compared key by key, lists of equal length element by element; a list that changes length is one entry.
  * A value removed from a section cannot be written as an override: that is returned as a problem.
  */
-export function overridesBetween(base: unknown, edited: unknown): { ok: true; overrides: Record<string, unknown> } | { ok: false; message: string } {
+export function overridesBetween(
+  base: unknown,
+  edited: unknown,
+): { ok: true; overrides: Record<string, unknown> } | { ok: false; message: string } {
   const out: Record<string, unknown> = {};
   let problem: string | null = null;
   const same = (a: unknown, b: unknown) => JSON.stringify(a) === JSON.stringify(b);

@@ -11,7 +11,16 @@ import { logTicks } from "../../core/report/figures";
 import { useSize } from "../ui/useSize";
 import { isLengthColumn } from "./variantsCsv";
 
-const DEFAULT_COLUMNS = ["variant", "case", "verdict", "margin", "edgeDilution", "requiredDilution", "governingCase", "chain"];
+const DEFAULT_COLUMNS = [
+  "variant",
+  "case",
+  "verdict",
+  "margin",
+  "edgeDilution",
+  "requiredDilution",
+  "governingCase",
+  "chain",
+];
 
 const COLUMN_LABELS: Readonly<Record<string, string>> = {
   variant: "variant",
@@ -45,9 +54,22 @@ function cellText(v: FlatRow[string] | undefined): string {
   return v === null || v === undefined ? "—" : String(v);
 }
 
-const VERDICT_CLASS: Readonly<Record<string, string>> = { meets: "pass", exceeds: "fail", "outside-scope": "scope", refused: "refused" };
+const VERDICT_CLASS: Readonly<Record<string, string>> = {
+  meets: "pass",
+  exceeds: "fail",
+  "outside-scope": "scope",
+  refused: "refused",
+};
 
-export function CompareView({ rows, unitSystem, stale }: { rows: readonly FlatRow[]; unitSystem: UnitSystem; stale: boolean }) {
+export function CompareView({
+  rows,
+  unitSystem,
+  stale,
+}: {
+  rows: readonly FlatRow[];
+  unitSystem: UnitSystem;
+  stale: boolean;
+}) {
   const lengthUnit = siToDisplay(1, "length", unitSystem).unit;
   const all = columnsOf(rows);
   const [shown, setShown] = useState<ReadonlySet<string>>(() => new Set(DEFAULT_COLUMNS));
@@ -67,7 +89,8 @@ export function CompareView({ rows, unitSystem, stale }: { rows: readonly FlatRo
       <ul className="compare-governing" data-role="compare-governing">
         {overall.map((r) => (
           <li key={String(r.variant)}>
-            <b>{String(r.variant)}</b>: <span className={`gov-verdict ${VERDICT_CLASS[String(r.verdict)] ?? ""}`}>{String(r.verdict)}</span>
+            <b>{String(r.variant)}</b>:{" "}
+            <span className={`gov-verdict ${VERDICT_CLASS[String(r.verdict)] ?? ""}`}>{String(r.verdict)}</span>
             {r.verdict === "refused" ? (
               <> — {String(r.error ?? "breaks a scenario rule")}</>
             ) : (
@@ -81,7 +104,9 @@ export function CompareView({ rows, unitSystem, stale }: { rows: readonly FlatRo
       </ul>
       <MarginChart rows={rows} />
       <details className="compare-columns">
-        <summary>Columns ({columns.length} of {all.length} shown)</summary>
+        <summary>
+          Columns ({columns.length} of {all.length} shown)
+        </summary>
         <div className="column-choices">
           {all.map((c) => (
             <label key={c}>
@@ -103,7 +128,9 @@ export function CompareView({ rows, unitSystem, stale }: { rows: readonly FlatRo
       </details>
       <div className="study-table-wrap">
         <table data-role="study-variants-table">
-          <caption className="visually-hidden">Each variant under each ambient case; the overall row gives the variant's verdict over every case.</caption>
+          <caption className="visually-hidden">
+            Each variant under each ambient case; the overall row gives the variant's verdict over every case.
+          </caption>
           <thead>
             <tr>
               {columns.map((c) => (
@@ -113,7 +140,12 @@ export function CompareView({ rows, unitSystem, stale }: { rows: readonly FlatRo
                   className={typeof rows[0]![c] === "number" ? "" : "text"}
                   aria-sort={sort === c ? "ascending" : sort === `-${c}` ? "descending" : "none"}
                 >
-                  <button type="button" className="sort-button" title="Sort by this column" onClick={() => setSort(sort === c ? `-${c}` : c)}>
+                  <button
+                    type="button"
+                    className="sort-button"
+                    title="Sort by this column"
+                    onClick={() => setSort(sort === c ? `-${c}` : c)}
+                  >
                     {columnLabel(c, lengthUnit)}
                     {sort === c ? " ▲" : sort === `-${c}` ? " ▼" : ""}
                   </button>
@@ -126,10 +158,19 @@ export function CompareView({ rows, unitSystem, stale }: { rows: readonly FlatRo
               <tr key={i} className={r.case === "overall" ? "worst" : ""}>
                 {columns.map((c) => {
                   const raw = r[c];
-                  const v = typeof raw === "number" && isLengthColumn(c) ? siToDisplay(raw, "length", unitSystem).value : raw;
+                  const v =
+                    typeof raw === "number" && isLengthColumn(c) ? siToDisplay(raw, "length", unitSystem).value : raw;
                   const cls = c === "verdict" ? (VERDICT_CLASS[String(v)] ?? "") : typeof v === "number" ? "" : "text";
                   return (
-                    <td key={c} className={cls} title={c === "chain" || c === "error" || c === "notes" || c === "scopeReasons" ? String(v ?? "") : undefined}>
+                    <td
+                      key={c}
+                      className={cls}
+                      title={
+                        c === "chain" || c === "error" || c === "notes" || c === "scopeReasons"
+                          ? String(v ?? "")
+                          : undefined
+                      }
+                    >
                       {cellText(v)}
                     </td>
                   );
@@ -142,7 +183,8 @@ export function CompareView({ rows, unitSystem, stale }: { rows: readonly FlatRo
       <p className="study-note">
         Margin is the dilution at the mixing-zone edge divided by the required dilution: 1 or more meets the limit. The
         overall row is the variant's verdict over every ambient case (meets, exceeds, outside-scope; refused when the
-        variant breaks a scenario rule), governed by the case that decides it. Lengths in {lengthUnit}; the CSV keeps SI.
+        variant breaks a scenario rule), governed by the case that decides it. Lengths in {lengthUnit}; the CSV keeps
+        SI.
       </p>
     </div>
   );
@@ -156,7 +198,9 @@ function MarginChart({ rows }: { rows: readonly FlatRow[] }) {
   const [ref, size] = useSize<HTMLDivElement>();
   const variants = [...new Set(rows.map((r) => String(r.variant)))];
   const groups = variants.map((v) => rows.filter((r) => String(r.variant) === v));
-  const margins = rows.map((r) => r.margin).filter((m): m is number => typeof m === "number" && Number.isFinite(m) && m > 0);
+  const margins = rows
+    .map((r) => r.margin)
+    .filter((m): m is number => typeof m === "number" && Number.isFinite(m) && m > 0);
   const width = Math.max(360, size.width);
   const left = Math.min(260, Math.max(150, width * 0.28));
   const right = 150;
@@ -178,7 +222,13 @@ function MarginChart({ rows }: { rows: readonly FlatRow[] }) {
   if (!ticks.includes(1)) ticks.push(1);
   return (
     <div ref={ref} className="compare-chart">
-      <svg width={width} height={height} role="img" aria-label="Margin per variant and ambient case; margin 1 is the limit" data-figure="compare-margins">
+      <svg
+        width={width}
+        height={height}
+        role="img"
+        aria-label="Margin per variant and ambient case; margin 1 is the limit"
+        data-figure="compare-margins"
+      >
         {ticks.map((t) => (
           <g key={t}>
             <line x1={sx(t)} x2={sx(t)} y1={top - 4} y2={y - GAP} stroke="#e2e8f0" />
@@ -200,10 +250,19 @@ function MarginChart({ rows }: { rows: readonly FlatRow[] }) {
             const label = k === 0 ? `${String(r.variant)} · ${String(r.case)}` : String(r.case);
             return (
               <g key={`${g.start}-${k}`} className={`margin-bar ${cls}${isOverall ? " overall" : ""}`}>
-                <text x={left - 6} y={yy + ROW / 2 + 4} textAnchor="end" fontSize={11} fontWeight={isOverall || k === 0 ? 600 : 400} fill="#1f2933">
+                <text
+                  x={left - 6}
+                  y={yy + ROW / 2 + 4}
+                  textAnchor="end"
+                  fontSize={11}
+                  fontWeight={isOverall || k === 0 ? 600 : 400}
+                  fill="#1f2933"
+                >
                   {label.length > 40 ? `${label.slice(0, 39)}…` : label}
                 </text>
-                {m !== null ? <rect x={sx(lo)} y={yy + 2} width={Math.max(1, sx(m) - sx(lo))} height={ROW - 5} /> : null}
+                {m !== null ? (
+                  <rect x={sx(lo)} y={yy + 2} width={Math.max(1, sx(m) - sx(lo))} height={ROW - 5} />
+                ) : null}
                 <text x={(m !== null ? sx(m) : sx(lo)) + 5} y={yy + ROW / 2 + 4} fontSize={11} fill="#1f2933">
                   {m !== null ? `${formatNumber(m, 3)} · ${String(r.verdict)}` : String(r.verdict)}
                 </text>

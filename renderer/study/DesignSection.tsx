@@ -67,7 +67,9 @@ export function DesignSection({
     setProblem(null);
     setApplied(null);
     if (plan.candidates.length === 0) {
-      setProblem("No design: no port diameter gives an exit velocity within the range inside the diameter limits; widen them.");
+      setProblem(
+        "No design: no port diameter gives an exit velocity within the range inside the diameter limits; widen them.",
+      );
       return;
     }
     const points = await runPoints("Design search", scenario, plan.candidates.map(candidateOverrides));
@@ -93,10 +95,10 @@ export function DesignSection({
     <section data-role="study-design">
       <h3>Design search</h3>
       <p className="study-note">
-        Port count, diameter, angle (30°, 45°, 60°) and spacing within the maximum length; every design must
-        meet every limit at the mixing-zone edge under all ambient cases, keep the jet below the surface and
-        stay within the velocity and diameter ranges (0.05–0.5 m by default, common practice). The
-        scenario's “design” block supplies further constraints.
+        Port count, diameter, angle (30°, 45°, 60°) and spacing within the maximum length; every design must meet every
+        limit at the mixing-zone edge under all ambient cases, keep the jet below the surface and stay within the
+        velocity and diameter ranges (0.05–0.5 m by default, common practice). The scenario's “design” block supplies
+        further constraints.
       </p>
       <div className="study-form">
         {texts.map(([k, label]) => (
@@ -107,7 +109,11 @@ export function DesignSection({
         ))}
         <label>
           nominal pipe sizes (ISO 6708 DN)
-          <input type="checkbox" checked={form.nominalSizes} onChange={(e) => setForm({ ...form, nominalSizes: e.target.checked })} />
+          <input
+            type="checkbox"
+            checked={form.nominalSizes}
+            onChange={(e) => setForm({ ...form, nominalSizes: e.target.checked })}
+          />
         </label>
         <button type="button" disabled={busy || !scenario} onClick={() => void run()} data-command="study-design">
           Search
@@ -119,9 +125,13 @@ export function DesignSection({
           <p data-role="design-headline">
             <b>{outcome.headline}</b>
           </p>
-          <p className="study-note" data-role="design-rule">{outcome.rankingRule}</p>
+          <p className="study-note" data-role="design-rule">
+            {outcome.rankingRule}
+          </p>
           {outcome.notes.slice(1).map((n) => (
-            <p key={n} className="study-note">{n}</p>
+            <p key={n} className="study-note">
+              {n}
+            </p>
           ))}
         </>
       ) : null}
@@ -129,10 +139,11 @@ export function DesignSection({
         <div data-role="design-nearest-miss">
           <h4>Nearest miss</h4>
           <p>
-            {outcome.nearestMiss.design.portCount} port(s) of {show(outcome.nearestMiss.design.portDiameter, "smallLength")} at{" "}
-            {outcome.nearestMiss.design.portAngle}°, length {show(outcome.nearestMiss.design.length, "length")}, exit velocity{" "}
-            {show(outcome.nearestMiss.design.exitVelocity, "speed")}: worst margin {formatNumber(outcome.nearestMiss.design.worstMargin)}× in “
-            {outcome.nearestMiss.design.governingCase}”.
+            {outcome.nearestMiss.design.portCount} port(s) of{" "}
+            {show(outcome.nearestMiss.design.portDiameter, "smallLength")} at {outcome.nearestMiss.design.portAngle}°,
+            length {show(outcome.nearestMiss.design.length, "length")}, exit velocity{" "}
+            {show(outcome.nearestMiss.design.exitVelocity, "speed")}: worst margin{" "}
+            {formatNumber(outcome.nearestMiss.design.worstMargin)}× in “{outcome.nearestMiss.design.governingCase}”.
           </p>
           <ul>
             {outcome.nearestMiss.reasons.map((r) => (
@@ -211,7 +222,8 @@ export function DesignSection({
       ) : null}
       {applied !== null ? (
         <p className="study-note" role="status">
-          Design #{applied} is now the scenario's diffuser; Undo (Ctrl+Z) restores the previous one. Check it with the full results and warnings.
+          Design #{applied} is now the scenario's diffuser; Undo (Ctrl+Z) restores the previous one. Check it with the
+          full results and warnings.
         </p>
       ) : null}
     </section>

@@ -80,18 +80,11 @@ export function MonteCarloSection({ scenario, busy, runJob, poolSize }: MonteCar
           seed
           <input className="narrow" value={seed} onChange={(e) => setSeed(e.target.value)} />
         </label>
-        <button
-          type="button"
-          disabled={busy || !scenario}
-          onClick={() => void run()}
-          data-command="study-monte-carlo"
-        >
+        <button type="button" disabled={busy || !scenario} onClick={() => void run()} data-command="study-monte-carlo">
           Run
         </button>
       </div>
-      <p className="study-note">
-        The same seed gives the same results on any machine and any number of workers.
-      </p>
+      <p className="study-note">The same seed gives the same results on any machine and any number of workers.</p>
       {problem ? <div className="study-error">{problem}</div> : null}
       {out && w ? (
         <div className="mc-result">
@@ -103,7 +96,18 @@ export function MonteCarloSection({ scenario, busy, runJob, poolSize }: MonteCar
             <caption className="visually-hidden">Dilution at the mixing-zone edge per ambient case (×)</caption>
             <thead>
               <tr>
-                {["ambient case", "edge dilution P5 (×)", "P50 (×)", "P95 (×)", "margin P5", "chance not meeting limit", "meets", "exceeds", "outside scope", "refused"].map((h) => (
+                {[
+                  "ambient case",
+                  "edge dilution P5 (×)",
+                  "P50 (×)",
+                  "P95 (×)",
+                  "margin P5",
+                  "chance not meeting limit",
+                  "meets",
+                  "exceeds",
+                  "outside scope",
+                  "refused",
+                ].map((h) => (
                   <th key={h} className={h === "ambient case" ? "text" : ""} scope="col">
                     {h}
                   </th>

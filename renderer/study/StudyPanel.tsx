@@ -25,7 +25,6 @@ import "./study.css";
 
 type Section = "variants" | "sweep" | "design" | "monte-carlo";
 
-
 interface Job {
   readonly label: string;
   readonly total: number;
@@ -179,7 +178,11 @@ export function StudyPanel({
         ) : (
           <span className="study-note">Reading the scenario…</span>
         )}
-        {error ? <span className="study-error" role="alert">{error}</span> : null}
+        {error ? (
+          <span className="study-error" role="alert">
+            {error}
+          </span>
+        ) : null}
       </div>
       <div hidden={section !== "variants"} role="tabpanel" aria-label="Variants">
         <VariantsSection

@@ -5,7 +5,15 @@ import { useState } from "react";
 import type { Scenario } from "../../core/scenario/types";
 import { formatNumber, siToDisplay, type UnitSystem } from "../../core/units";
 import { OVERRIDE_PATHS } from "../../core/study/overrides";
-import { axisFromParts, eosCrossings, sweepGrid, sweepRecords, sweepRows, type SweepAxis, type SweepRow } from "../../core/study/sweep";
+import {
+  axisFromParts,
+  eosCrossings,
+  sweepGrid,
+  sweepRecords,
+  sweepRows,
+  type SweepAxis,
+  type SweepRow,
+} from "../../core/study/sweep";
 import { flatRowsCsv } from "../../core/report/csv";
 import { inputsHash } from "../../core/scenario/hash";
 import { exportFile } from "../platform/host";
@@ -31,9 +39,7 @@ export function SweepSection({
   busy: boolean;
   runPoints: RunPoints;
 }) {
-  const [forms, setForms] = useState<AxisForm[]>([
-    { path: "ambient.currentSpeed", from: "0", to: "0.5", steps: "11" },
-  ]);
+  const [forms, setForms] = useState<AxisForm[]>([{ path: "ambient.currentSpeed", from: "0", to: "0.5", steps: "11" }]);
   const [result, setResult] = useState<{ axes: SweepAxis[]; rows: SweepRow[] } | null>(null);
   const [problem, setProblem] = useState<string | null>(null);
   const [view, setView] = useState<"chart" | "table">("chart");
@@ -56,14 +62,20 @@ export function SweepSection({
     // The same caps as the command line (core/study/budget.ts).
     const pointCount = axes.reduce((n, a) => n * a.steps, 1);
     const caseCount = expandCases(scenario).length;
-    const tooMuch = sweepPointsIssue(pointCount) ?? workIssue(`A sweep of ${pointCount} points × ${caseCount} ambient cases`, pointCount * caseCount, scenario);
+    const tooMuch =
+      sweepPointsIssue(pointCount) ??
+      workIssue(`A sweep of ${pointCount} points × ${caseCount} ambient cases`, pointCount * caseCount, scenario);
     if (tooMuch) {
       setProblem(tooMuch);
       return;
     }
     setProblem(null);
     const grid = sweepGrid(axes);
-    const points = await runPoints("Sweep", scenario, grid.map((g) => g.overrides));
+    const points = await runPoints(
+      "Sweep",
+      scenario,
+      grid.map((g) => g.overrides),
+    );
     if (points) setResult({ axes, rows: sweepRows(grid, points) });
   };
 
@@ -72,9 +84,8 @@ export function SweepSection({
     <section>
       <h3>Sweep</h3>
       <p className="study-note">
-        Bounds are values with units (e.g. “0.5 knot”, “8 in”); a plain number is read in SI whichever
-        units the app shows. One input draws a line chart;
-        two draw a heat map of the margin with the limit contour.
+        Bounds are values with units (e.g. “0.5 knot”, “8 in”); a plain number is read in SI whichever units the app
+        shows. One input draws a line chart; two draw a heat map of the margin with the limit contour.
       </p>
       {forms.map((f, i) => (
         <div className="study-form" key={i}>
@@ -109,29 +120,32 @@ export function SweepSection({
         {forms.length === 1 ? (
           <button
             type="button"
-            onClick={() =>
-              setForms([...forms, { path: "diffuser.portDiameter", from: "0.1", to: "0.3", steps: "11" }])
-            }
+            onClick={() => setForms([...forms, { path: "diffuser.portDiameter", from: "0.1", to: "0.3", steps: "11" }])}
           >
             Add second input
           </button>
         ) : null}
-        <button
-          type="button"
-          disabled={busy || !scenario}
-          onClick={() => void run()}
-          data-command="study-sweep"
-        >
+        <button type="button" disabled={busy || !scenario} onClick={() => void run()} data-command="study-sweep">
           Run sweep
         </button>
       </div>
       {problem ? <div className="study-error">{problem}</div> : null}
       {result ? (
         <div className="button-row sweep-view" role="group" aria-label="Show the sweep as">
-          <button type="button" aria-pressed={view === "chart"} onClick={() => setView("chart")} data-command="sweep-chart">
+          <button
+            type="button"
+            aria-pressed={view === "chart"}
+            onClick={() => setView("chart")}
+            data-command="sweep-chart"
+          >
             Chart
           </button>
-          <button type="button" aria-pressed={view === "table"} onClick={() => setView("table")} data-command="sweep-table">
+          <button
+            type="button"
+            aria-pressed={view === "table"}
+            onClick={() => setView("table")}
+            data-command="sweep-table"
+          >
             Table
           </button>
           <button type="button" onClick={() => exportSweepCsv(result, scenario, setProblem)} data-command="sweep-csv">
@@ -195,16 +209,28 @@ function heatAxis(a: SweepAxis, unitSystem: UnitSystem) {
 }
 
 /** The sweep as CSV, the same columns as `brinefield sweep --csv` (varied inputs in SI), opened by the caution. */
-function exportSweepCsv(result: { axes: SweepAxis[]; rows: SweepRow[] }, scenario: Scenario | null, onProblem: (m: string | null) => void) {
+function exportSweepCsv(
+  result: { axes: SweepAxis[]; rows: SweepRow[] },
+  scenario: Scenario | null,
+  onProblem: (m: string | null) => void,
+) {
   const { columns, records } = sweepRecords(result.axes, result.rows);
   const about = scenario ? { scenario: scenario.name, inputsHash: inputsHash(scenario) } : {};
-  void exportFile("brinefield-sweep.csv", csvWithCaution(flatRowsCsv(records, columns), undefined, about), [{ name: "CSV", extensions: ["csv"] }]).catch(
-    (error: unknown) => onProblem(`Could not export: ${error instanceof Error ? error.message : String(error)}`),
+  void exportFile("brinefield-sweep.csv", csvWithCaution(flatRowsCsv(records, columns), undefined, about), [
+    { name: "CSV", extensions: ["csv"] },
+  ]).catch((error: unknown) =>
+    onProblem(`Could not export: ${error instanceof Error ? error.message : String(error)}`),
   );
 }
 
 /** Every point of the sweep as a table: the varied inputs in the display units, then the results. */
-function SweepTable({ result, unitSystem }: { result: { axes: SweepAxis[]; rows: SweepRow[] }; unitSystem: UnitSystem }) {
+function SweepTable({
+  result,
+  unitSystem,
+}: {
+  result: { axes: SweepAxis[]; rows: SweepRow[] };
+  unitSystem: UnitSystem;
+}) {
   const axes = result.axes.map((a) => ({ path: a.path, ...axisDisplay(a.path, unitSystem) }));
   return (
     <div className="study-table-wrap sweep-table" data-role="sweep-table">
@@ -213,13 +239,19 @@ function SweepTable({ result, unitSystem }: { result: { axes: SweepAxis[]; rows:
         <thead>
           <tr>
             {axes.map((a) => (
-              <th key={a.path} scope="col">{a.label}</th>
+              <th key={a.path} scope="col">
+                {a.label}
+              </th>
             ))}
-            <th scope="col" className="text">governing case</th>
+            <th scope="col" className="text">
+              governing case
+            </th>
             <th scope="col">edge dilution (×)</th>
             <th scope="col">required dilution (×)</th>
             <th scope="col">margin</th>
-            <th scope="col" className="text">verdict</th>
+            <th scope="col" className="text">
+              verdict
+            </th>
           </tr>
         </thead>
         <tbody>
@@ -232,7 +264,10 @@ function SweepTable({ result, unitSystem }: { result: { axes: SweepAxis[]; rows:
               <td>{formatNumber(r.edgeDilution)}</td>
               <td>{formatNumber(r.requiredDilution)}</td>
               <td>{formatNumber(r.margin)}</td>
-              <td className={`text ${r.verdict === "meets" ? "pass" : r.verdict === "exceeds" ? "fail" : r.verdict === "outside-scope" ? "scope" : "refused"}`} title={r.error ?? undefined}>
+              <td
+                className={`text ${r.verdict === "meets" ? "pass" : r.verdict === "exceeds" ? "fail" : r.verdict === "outside-scope" ? "scope" : "refused"}`}
+                title={r.error ?? undefined}
+              >
                 {r.verdict}
               </td>
             </tr>

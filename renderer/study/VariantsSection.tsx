@@ -90,7 +90,10 @@ export function VariantsSection({
   const duplicate = () => {
     if (!study || !variant) return;
     const copy = { ...variant, name: freshVariantName(study, `${variant.name} copy`) };
-    change({ ...study, variants: [...study.variants.slice(0, index + 1), copy, ...study.variants.slice(index + 1)] }, "duplicate");
+    change(
+      { ...study, variants: [...study.variants.slice(0, index + 1), copy, ...study.variants.slice(index + 1)] },
+      "duplicate",
+    );
     setSelected(index + 1);
   };
   const remove = () => {
@@ -116,13 +119,17 @@ export function VariantsSection({
   const exportStudy = () => {
     if (!study) return;
     const doc = { file: scenarioFile, study, path: null, dirty: false, revision: 0 };
-    void exportFile(suggestedDocumentName(doc), serialiseDocument(doc), [{ name: "Brinefield study", extensions: ["json"] }])
+    void exportFile(suggestedDocumentName(doc), serialiseDocument(doc), [
+      { name: "Brinefield study", extensions: ["json"] },
+    ])
       .then((done) => done && onNotice?.("Study file exported: `brinefield compare` and `brinefield report` read it."))
-      .catch((error: unknown) => setProblem(`Could not export: ${error instanceof Error ? error.message : String(error)}`));
+      .catch((error: unknown) =>
+        setProblem(`Could not export: ${error instanceof Error ? error.message : String(error)}`),
+      );
   };
   const exportCsv = () => {
-    void exportFile("brinefield-variants.csv", variantsCsv(rows), [{ name: "CSV", extensions: ["csv"] }]).catch((error: unknown) =>
-      setProblem(`Could not export: ${error instanceof Error ? error.message : String(error)}`),
+    void exportFile("brinefield-variants.csv", variantsCsv(rows), [{ name: "CSV", extensions: ["csv"] }]).catch(
+      (error: unknown) => setProblem(`Could not export: ${error instanceof Error ? error.message : String(error)}`),
     );
   };
   const openVariant = () => {
@@ -152,10 +159,21 @@ export function VariantsSection({
           <button type="button" onClick={addVariant} data-command="variant-add">
             Add variant
           </button>
-          <button type="button" disabled={busy || !study || variants.length === 0} onClick={() => void run()} data-command="study-compare">
+          <button
+            type="button"
+            disabled={busy || !study || variants.length === 0}
+            onClick={() => void run()}
+            data-command="study-compare"
+          >
             Compare
           </button>
-          <button type="button" disabled={!study} onClick={exportStudy} data-command="study-export" title="Save a copy of the study file (base scenario and variants) without changing the document">
+          <button
+            type="button"
+            disabled={!study}
+            onClick={exportStudy}
+            data-command="study-export"
+            title="Save a copy of the study file (base scenario and variants) without changing the document"
+          >
             Export study file…
           </button>
           <button type="button" disabled={rows.length === 0} onClick={exportCsv} data-command="study-compare-csv">
@@ -166,9 +184,9 @@ export function VariantsSection({
       {!study ? (
         <div className="study-start" data-role="study-start">
           <p>
-            A study keeps this scenario as its base and adds named variants — a deeper site, more ports, another
-            current — each edited with the same fields and units as the Design tab. Save writes one study file
-            (the base scenario inside it) that <code>brinefield compare</code> and <code>brinefield report</code> read.
+            A study keeps this scenario as its base and adds named variants — a deeper site, more ports, another current
+            — each edited with the same fields and units as the Design tab. Save writes one study file (the base
+            scenario inside it) that <code>brinefield compare</code> and <code>brinefield report</code> read.
           </p>
           <button type="button" onClick={startStudy} data-command="study-start">
             Start a study from this scenario
@@ -189,7 +207,9 @@ export function VariantsSection({
                       data-variant={v.name}
                     >
                       <span className="variant-name">{v.name}</span>
-                      <span className="variant-count">{n === 0 ? "no changes" : `${n} change${n === 1 ? "" : "s"}`}</span>
+                      <span className="variant-count">
+                        {n === 0 ? "no changes" : `${n} change${n === 1 ? "" : "s"}`}
+                      </span>
                     </button>
                   </li>
                 );
@@ -246,7 +266,19 @@ interface EditorProps {
 }
 
 /** One variant: its name, its changes from the base in words, and the Design tab's fields on its scenario. */
-function VariantEditor({ active, base, study, index, variant, unitSystem, onChange, onProblem, onDuplicate, onRemove, onOpen }: EditorProps) {
+function VariantEditor({
+  active,
+  base,
+  study,
+  index,
+  variant,
+  unitSystem,
+  onChange,
+  onProblem,
+  onDuplicate,
+  onRemove,
+  onOpen,
+}: EditorProps) {
   const built = useMemo(() => variantScenario(base, variant), [base, variant]);
   const file = built.ok ? built.file : base;
   const read = useMemo(() => parseScenario(file), [file]);
@@ -269,8 +301,14 @@ function VariantEditor({ active, base, study, index, variant, unitSystem, onChan
           return;
         }
         onProblem(null);
-        const path = typeof input === "object" && input !== null && "path" in input ? String((input as { path: unknown }).path) : "";
-        onChange(withVariant(study, index, { ...variant, overrides: diff.overrides }), `variant:${index}:${action.name}:${path}`);
+        const path =
+          typeof input === "object" && input !== null && "path" in input
+            ? String((input as { path: unknown }).path)
+            : "";
+        onChange(
+          withVariant(study, index, { ...variant, overrides: diff.overrides }),
+          `variant:${index}:${action.name}:${path}`,
+        );
       },
     }),
     [file, unitSystem, issues, read, base, study, index, variant, onChange, onProblem],
@@ -290,14 +328,25 @@ function VariantEditor({ active, base, study, index, variant, unitSystem, onChan
           <input
             value={variant.name}
             data-field="variant-name"
-            onChange={(e) => onChange(withVariant(study, index, { ...variant, name: e.target.value }), `variant:${index}:name`)}
+            onChange={(e) =>
+              onChange(withVariant(study, index, { ...variant, name: e.target.value }), `variant:${index}:name`)
+            }
           />
         </label>
         <div className="button-row">
-          <button type="button" onClick={onDuplicate} data-command="variant-duplicate">Duplicate</button>
-          <button type="button" onClick={onRemove} data-command="variant-remove">Remove</button>
+          <button type="button" onClick={onDuplicate} data-command="variant-duplicate">
+            Duplicate
+          </button>
+          <button type="button" onClick={onRemove} data-command="variant-remove">
+            Remove
+          </button>
           {onOpen ? (
-            <button type="button" onClick={onOpen} data-command="variant-open-as-scenario" title="Open this variant's full scenario as a new, unsaved scenario">
+            <button
+              type="button"
+              onClick={onOpen}
+              data-command="variant-open-as-scenario"
+              title="Open this variant's full scenario as a new, unsaved scenario"
+            >
               Open as scenario
             </button>
           ) : null}
@@ -314,7 +363,12 @@ function VariantEditor({ active, base, study, index, variant, unitSystem, onChan
               <li key={path} data-change={path}>
                 <span className="change-what">{pathWords(path)}</span>: {valueText(path, value)}{" "}
                 <span className="change-base">(base {valueText(path, getAtPath(base, path))})</span>{" "}
-                <button type="button" className="link-button" onClick={() => reset(path)} aria-label={`Reset ${pathWords(path)} to the base value`}>
+                <button
+                  type="button"
+                  className="link-button"
+                  onClick={() => reset(path)}
+                  aria-label={`Reset ${pathWords(path)} to the base value`}
+                >
                   reset
                 </button>
               </li>
@@ -322,7 +376,9 @@ function VariantEditor({ active, base, study, index, variant, unitSystem, onChan
           </ul>
         )}
         {!read.ok ? (
-          <p className="study-error">This variant breaks a scenario rule (marked in red below); Compare shows it as refused.</p>
+          <p className="study-error">
+            This variant breaks a scenario rule (marked in red below); Compare shows it as refused.
+          </p>
         ) : null}
       </div>
       {active ? (

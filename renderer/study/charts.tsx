@@ -3,16 +3,7 @@
  * margin for a two-input sweep with the limit contour (margin = 1) marked, and a Monte Carlo histogram
  * with P5/P50/P95. No physics here: the charts draw numbers the core computed.
  */
-import {
-  contours,
-  extent,
-  geoPath,
-  interpolateRdYlGn,
-  line,
-  scaleLinear,
-  scaleLog,
-  scaleSequential,
-} from "d3";
+import { contours, extent, geoPath, interpolateRdYlGn, line, scaleLinear, scaleLog, scaleSequential } from "d3";
 import type { SweepRow } from "../../core/study/sweep";
 import { formatNumber } from "../../core/units";
 import { logTicks } from "../../core/report/figures";
@@ -29,7 +20,8 @@ const M = { top: 20, right: 16, bottom: 40, left: 60 };
 export function readableLogTicks(lo: number, hi: number, toPixel: (v: number) => number, minGap: number): number[] {
   const thin = (list: number[]) => {
     const out: number[] = [];
-    for (const t of list) if (out.length === 0 || Math.abs(toPixel(t) - toPixel(out[out.length - 1]!)) >= minGap) out.push(t);
+    for (const t of list)
+      if (out.length === 0 || Math.abs(toPixel(t) - toPixel(out[out.length - 1]!)) >= minGap) out.push(t);
     return out;
   };
   const all = logTicks(lo, hi);
@@ -95,41 +87,72 @@ export function SweepLineChart({ rows, axis }: { rows: readonly SweepRow[]; axis
     .domain([Math.max(1, Math.min(...ys, 10) * 0.8), Math.max(...ys, 10) * 1.25])
     .range([h - M.bottom, M.top])
     .nice();
-  const edge = line<{ x: number; y: number }>().x((p) => x(p.x)).y((p) => y(p.y));
+  const edge = line<{ x: number; y: number }>()
+    .x((p) => x(p.x))
+    .y((p) => y(p.y));
   const req = line<{ x: number; req: number }>()
     .x((p) => x(p.x))
     .y((p) => y(Math.max(y.domain()[0]!, p.req)));
   return (
     <div className="sweep-chart-block">
-    <div className="chart study-chart" ref={ref} data-role="sweep-line-chart">
-      <svg width={w} height={h} role="img" aria-label={`Edge dilution against ${axis.label}`}>
-        {x.ticks(linearTickCount(w - M.left - M.right)).map((t) => (
-          <g key={`x${t}`} transform={`translate(${x(t)},0)`}>
-            <line className="gridline" y1={M.top} y2={h - M.bottom} />
-            <text className="tick" y={h - M.bottom + 14} textAnchor="middle">{formatNumber(t)}</text>
-          </g>
-        ))}
-        {readableLogTicks(y.domain()[0]!, y.domain()[1]!, (v) => y(v), 18).map((t, i) => (
-          <g key={`y${i}`} transform={`translate(0,${y(t)})`}>
-            <line className="gridline" x1={M.left} x2={w - M.right} />
-            <text className="tick" x={M.left - 6} dy="0.32em" textAnchor="end">{formatNumber(t)}</text>
-          </g>
-        ))}
-        <path d={req(pts) ?? ""} className="study-limit" />
-        <path d={edge(pts) ?? ""} className="study-line" />
-        {pts.map((p, i) => (
-          <VerdictMark key={i} x={x(p.x)} y={y(p.y)} verdict={p.verdict} />
-        ))}
-        <XLabel w={w} h={h} text={axis.label} />
-        <YLabel h={h} text="Dilution at the edge (×, log scale)" />
-      </svg>
-    </div>
+      <div className="chart study-chart" ref={ref} data-role="sweep-line-chart">
+        <svg width={w} height={h} role="img" aria-label={`Edge dilution against ${axis.label}`}>
+          {x.ticks(linearTickCount(w - M.left - M.right)).map((t) => (
+            <g key={`x${t}`} transform={`translate(${x(t)},0)`}>
+              <line className="gridline" y1={M.top} y2={h - M.bottom} />
+              <text className="tick" y={h - M.bottom + 14} textAnchor="middle">
+                {formatNumber(t)}
+              </text>
+            </g>
+          ))}
+          {readableLogTicks(y.domain()[0]!, y.domain()[1]!, (v) => y(v), 18).map((t, i) => (
+            <g key={`y${i}`} transform={`translate(0,${y(t)})`}>
+              <line className="gridline" x1={M.left} x2={w - M.right} />
+              <text className="tick" x={M.left - 6} dy="0.32em" textAnchor="end">
+                {formatNumber(t)}
+              </text>
+            </g>
+          ))}
+          <path d={req(pts) ?? ""} className="study-limit" />
+          <path d={edge(pts) ?? ""} className="study-line" />
+          {pts.map((p, i) => (
+            <VerdictMark key={i} x={x(p.x)} y={y(p.y)} verdict={p.verdict} />
+          ))}
+          <XLabel w={w} h={h} text={axis.label} />
+          <YLabel h={h} text="Dilution at the edge (×, log scale)" />
+        </svg>
+      </div>
       <ul className="chart-legend" aria-label="Legend">
-        <li><svg width="26" height="10" aria-hidden="true"><line x1="0" y1="5" x2="26" y2="5" className="study-line" /></svg> dilution at the mixing-zone edge, governing case</li>
-        <li><svg width="26" height="10" aria-hidden="true"><line x1="0" y1="5" x2="26" y2="5" className="study-limit" /></svg> required dilution</li>
-        <li><svg width="10" height="10" aria-hidden="true"><VerdictMark x={5} y={5} verdict="meets" /></svg> meets</li>
-        <li><svg width="10" height="10" aria-hidden="true"><VerdictMark x={5} y={5} verdict="exceeds" /></svg> exceeds</li>
-        <li><svg width="10" height="10" aria-hidden="true"><VerdictMark x={5} y={5} verdict="outside-scope" /></svg> outside scope</li>
+        <li>
+          <svg width="26" height="10" aria-hidden="true">
+            <line x1="0" y1="5" x2="26" y2="5" className="study-line" />
+          </svg>{" "}
+          dilution at the mixing-zone edge, governing case
+        </li>
+        <li>
+          <svg width="26" height="10" aria-hidden="true">
+            <line x1="0" y1="5" x2="26" y2="5" className="study-limit" />
+          </svg>{" "}
+          required dilution
+        </li>
+        <li>
+          <svg width="10" height="10" aria-hidden="true">
+            <VerdictMark x={5} y={5} verdict="meets" />
+          </svg>{" "}
+          meets
+        </li>
+        <li>
+          <svg width="10" height="10" aria-hidden="true">
+            <VerdictMark x={5} y={5} verdict="exceeds" />
+          </svg>{" "}
+          exceeds
+        </li>
+        <li>
+          <svg width="10" height="10" aria-hidden="true">
+            <VerdictMark x={5} y={5} verdict="outside-scope" />
+          </svg>{" "}
+          outside scope
+        </li>
       </ul>
     </div>
   );
@@ -137,18 +160,26 @@ export function SweepLineChart({ rows, axis }: { rows: readonly SweepRow[]; axis
 
 /** A point's verdict as a shape as well as a colour: disc meets, square exceeds, ring outside scope. */
 function VerdictMark({ x, y, verdict }: { x: number; y: number; verdict: string }) {
-  if (verdict === "meets") return <circle cx={x} cy={y} r={3.5} className="study-pass"><title>meets</title></circle>;
-  if (verdict === "outside-scope") return <circle cx={x} cy={y} r={3.5} className="study-scope"><title>outside-scope</title></circle>;
-  return <rect x={x - 3.5} y={y - 3.5} width={7} height={7} className="study-fail"><title>{verdict}</title></rect>;
+  if (verdict === "meets")
+    return (
+      <circle cx={x} cy={y} r={3.5} className="study-pass">
+        <title>meets</title>
+      </circle>
+    );
+  if (verdict === "outside-scope")
+    return (
+      <circle cx={x} cy={y} r={3.5} className="study-scope">
+        <title>outside-scope</title>
+      </circle>
+    );
+  return (
+    <rect x={x - 3.5} y={y - 3.5} width={7} height={7} className="study-fail">
+      <title>{verdict}</title>
+    </rect>
+  );
 }
 
-export function SweepHeatmap({
-  rows,
-  axes,
-}: {
-  rows: readonly SweepRow[];
-  axes: readonly [GridAxis, GridAxis];
-}) {
+export function SweepHeatmap({ rows, axes }: { rows: readonly SweepRow[]; axes: readonly [GridAxis, GridAxis] }) {
   const [ref, size] = useSize<HTMLDivElement>();
   const w = Math.max(260, size.width);
   const h = Math.max(220, size.height);
@@ -188,26 +219,26 @@ export function SweepHeatmap({
   }
   const hasPass = field.some((v) => v >= 1);
   const hasFail = field.some((v) => v < 1);
-  const limit =
-    nx > 1 && ny > 1 && hasPass && hasFail ? contours().size([px, py]).thresholds([1])(field)[0] : null;
+  const limit = nx > 1 && ny > 1 && hasPass && hasFail ? contours().size([px, py]).thresholds([1])(field)[0] : null;
   // d3-contour places value (i, j) at (i + 0.5, j + 0.5) in grid units: scaling by the cell size maps
   // the contour onto the cell centres of the heat map (after removing the one-cell padding).
   const project = geoPath(null);
   const clipId = `study-heatmap-clip-${nx}-${ny}`;
   return (
     <div className="chart study-chart" ref={ref} data-role="sweep-heatmap">
-      <svg
-        width={w}
-        height={h}
-        role="img"
-        aria-label={`Margin over ${a.label} and ${b.label}, limit contour marked`}
-      >
+      <svg width={w} height={h} role="img" aria-label={`Margin over ${a.label} and ${b.label}, limit contour marked`}>
         <defs>
           <clipPath id={clipId}>
             {/* In the heat map's own (translated, y-up) coordinates. */}
             <rect x={0} y={0} width={w - M.left - M.right - legendW} height={h - M.top - M.bottom} />
           </clipPath>
-          <pattern id={`${clipId}-hatch`} width="6" height="6" patternUnits="userSpaceOnUse" patternTransform="rotate(45)">
+          <pattern
+            id={`${clipId}-hatch`}
+            width="6"
+            height="6"
+            patternUnits="userSpaceOnUse"
+            patternTransform="rotate(45)"
+          >
             <line x1="0" y1="0" x2="0" y2="6" stroke="#1d2833" strokeOpacity="0.35" strokeWidth="1.2" />
           </pattern>
           <linearGradient id={`${clipId}-legend`} x1="0" y1="1" x2="0" y2="0">
@@ -253,29 +284,27 @@ export function SweepHeatmap({
             </g>
           ) : null}
         </g>
-        {xv.map((t, i) => (i % Math.ceil(nx / Math.max(2, Math.floor((nx * cw) / 64))) === 0 ? (
-          <text
-            key={`x${i}`}
-            className="tick"
-            x={M.left + (i + 0.5) * cw}
-            y={h - M.bottom + 14}
-            textAnchor="middle"
-          >
-            {formatNumber(t)}
-          </text>
-        ) : null))}
-        {yv.map((t, j) => (j % Math.ceil(ny / Math.max(2, Math.floor((ny * ch) / 20))) === 0 ? (
-          <text
-            key={`y${j}`}
-            className="tick"
-            x={M.left - 6}
-            y={h - M.bottom - (j + 0.5) * ch}
-            dy="0.32em"
-            textAnchor="end"
-          >
-            {formatNumber(t)}
-          </text>
-        ) : null))}
+        {xv.map((t, i) =>
+          i % Math.ceil(nx / Math.max(2, Math.floor((nx * cw) / 64))) === 0 ? (
+            <text key={`x${i}`} className="tick" x={M.left + (i + 0.5) * cw} y={h - M.bottom + 14} textAnchor="middle">
+              {formatNumber(t)}
+            </text>
+          ) : null,
+        )}
+        {yv.map((t, j) =>
+          j % Math.ceil(ny / Math.max(2, Math.floor((ny * ch) / 20))) === 0 ? (
+            <text
+              key={`y${j}`}
+              className="tick"
+              x={M.left - 6}
+              y={h - M.bottom - (j + 0.5) * ch}
+              dy="0.32em"
+              textAnchor="end"
+            >
+              {formatNumber(t)}
+            </text>
+          ) : null,
+        )}
         <XLabel w={w - legendW} h={h} text={a.label} />
         <YLabel h={h} text={b.label} />
         <HeatLegend
@@ -305,11 +334,32 @@ export function MonteCarloHistogram({
   const [ref, size] = useSize<HTMLDivElement>();
   if (bins.length === 0) return <div className="placeholder">No runs.</div>;
   const svg = uncertaintyHistogramSvg(bins, worst, Math.max(420, Math.min(900, size.width || 680)));
-  return <div className="study-histogram" ref={ref} data-role="monte-carlo-histogram" dangerouslySetInnerHTML={{ __html: svg }} />;
+  return (
+    <div
+      className="study-histogram"
+      ref={ref}
+      data-role="monte-carlo-histogram"
+      dangerouslySetInnerHTML={{ __html: svg }}
+    />
+  );
 }
 
 /** The heat map's colour legend: margin on a log scale, margin = 1 marked as the black limit line, hatching for not meeting. */
-function HeatLegend({ x, top, height, span, gradient, hatch }: { x: number; top: number; height: number; span: number; gradient: string; hatch: string }) {
+function HeatLegend({
+  x,
+  top,
+  height,
+  span,
+  gradient,
+  hatch,
+}: {
+  x: number;
+  top: number;
+  height: number;
+  span: number;
+  gradient: string;
+  hatch: string;
+}) {
   const barH = Math.max(60, height - 54);
   const sy = (logMargin: number) => top + 14 + barH * (1 - (logMargin + span) / (2 * span));
   const lo = Math.pow(10, -span);
@@ -318,19 +368,29 @@ function HeatLegend({ x, top, height, span, gradient, hatch }: { x: number; top:
   if (!ticks.some((t) => Math.abs(t - 1) < 1e-9)) ticks.push(1);
   return (
     <g data-role="heatmap-legend" fontSize={10.5}>
-      <text x={x - 4} y={top + 4} className="axis-label">margin</text>
+      <text x={x - 4} y={top + 4} className="axis-label">
+        margin
+      </text>
       <rect x={x} y={top + 14} width={14} height={barH} fill={`url(#${gradient})`} stroke="#94a3b8" />
       <rect x={x} y={sy(0)} width={14} height={top + 14 + barH - sy(0)} fill={`url(#${hatch})`} />
       {ticks.map((t) => (
         <g key={t}>
           <line x1={x + 14} x2={x + 18} y1={sy(Math.log10(t))} y2={sy(Math.log10(t))} stroke="#334155" />
-          <text x={x + 21} y={sy(Math.log10(t))} dy="0.32em" className="tick" textAnchor="start">{formatNumber(t, 2)}</text>
+          <text x={x + 21} y={sy(Math.log10(t))} dy="0.32em" className="tick" textAnchor="start">
+            {formatNumber(t, 2)}
+          </text>
         </g>
       ))}
       <line x1={x - 4} x2={x + 18} y1={sy(0)} y2={sy(0)} className="study-contour" />
-      <text x={x - 4} y={top + 14 + barH + 14} className="tick">black line:</text>
-      <text x={x - 4} y={top + 14 + barH + 26} className="tick">margin = 1 (limit)</text>
-      <text x={x - 4} y={top + 14 + barH + 38} className="tick">hatched: not met</text>
+      <text x={x - 4} y={top + 14 + barH + 14} className="tick">
+        black line:
+      </text>
+      <text x={x - 4} y={top + 14 + barH + 26} className="tick">
+        margin = 1 (limit)
+      </text>
+      <text x={x - 4} y={top + 14 + barH + 38} className="tick">
+        hatched: not met
+      </text>
     </g>
   );
 }

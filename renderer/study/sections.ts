@@ -40,9 +40,4 @@ export type RunJob = <T>(
   finish: (r: Replies) => T,
 ) => Promise<T | null>;
 
-export type RunPoints = (
-  label: string,
-  s: Scenario,
-  list: readonly Overrides[],
-) => Promise<PointEvaluation[] | null>;
-
+export type RunPoints = (label: string, s: Scenario, list: readonly Overrides[]) => Promise<PointEvaluation[] | null>;

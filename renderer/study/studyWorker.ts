@@ -68,7 +68,10 @@ function handle(req: StudyRequest): void {
       const { scenario, plan, start, end } = req;
       const chunk = runMonteCarloChunk(scenario, plan, start, end, evaluateScenario, progress);
       const arrays = [...chunk.edgeDilution, ...chunk.margin, ...(chunk.requiredDilution ?? []), ...chunk.pass];
-      post({ id: req.id, kind: "monte-carlo", chunk }, arrays.map((a) => a.buffer));
+      post(
+        { id: req.id, kind: "monte-carlo", chunk },
+        arrays.map((a) => a.buffer),
+      );
       return;
     }
   }

@@ -29,11 +29,7 @@ export class StudyWorkerPool {
   }
 
   /** Runs tasks on up to `size` workers; `onProgress` gets the summed progress of every task. */
-  run(
-    tasks: readonly StudyTask[],
-    onProgress?: (done: number) => void,
-    maxWorkers = this.size,
-  ): Promise<Done[]> {
+  run(tasks: readonly StudyTask[], onProgress?: (done: number) => void, maxWorkers = this.size): Promise<Done[]> {
     const workers = this.ensure(Math.max(1, Math.min(maxWorkers, this.size, tasks.length)));
     return new Promise<Done[]>((resolve, reject) => {
       const results: Done[] = new Array(tasks.length);

@@ -17,16 +17,37 @@ export function ConfirmDialog({ request, onClose }: { request: ConfirmRequest; o
   const dialogRef = useModal<HTMLDivElement>(onClose, cancelRef);
   return (
     <div className="modal-backdrop">
-      <div className="modal" role="dialog" aria-modal="true" aria-labelledby="confirm-title" tabIndex={-1} ref={dialogRef}>
+      <div
+        className="modal"
+        role="dialog"
+        aria-modal="true"
+        aria-labelledby="confirm-title"
+        tabIndex={-1}
+        ref={dialogRef}
+      >
         <h2 id="confirm-title">{request.title}</h2>
         <p>{request.message}</p>
         <div className="button-row end">
           {request.extraLabel && request.onExtra ? (
-            <button type="button" className="primary" onClick={() => { onClose(); request.onExtra?.(); }}>
+            <button
+              type="button"
+              className="primary"
+              onClick={() => {
+                onClose();
+                request.onExtra?.();
+              }}
+            >
               {request.extraLabel}
             </button>
           ) : null}
-          <button type="button" className="danger" onClick={() => { onClose(); request.onConfirm(); }}>
+          <button
+            type="button"
+            className="danger"
+            onClick={() => {
+              onClose();
+              request.onConfirm();
+            }}
+          >
             {request.confirmLabel}
           </button>
           <button type="button" ref={cancelRef} onClick={onClose}>

@@ -6,13 +6,17 @@
  */
 import { useEffect, useRef, type RefObject } from "react";
 
-const FOCUSABLE = 'button:not([disabled]), [href], input:not([disabled]), select:not([disabled]), textarea:not([disabled]), [tabindex]:not([tabindex="-1"])';
+const FOCUSABLE =
+  'button:not([disabled]), [href], input:not([disabled]), select:not([disabled]), textarea:not([disabled]), [tabindex]:not([tabindex="-1"])';
 
 function focusables(root: HTMLElement): HTMLElement[] {
   return Array.from(root.querySelectorAll<HTMLElement>(FOCUSABLE));
 }
 
-export function useModal<T extends HTMLElement>(onClose: () => void, initialFocus?: RefObject<HTMLElement | null>): RefObject<T | null> {
+export function useModal<T extends HTMLElement>(
+  onClose: () => void,
+  initialFocus?: RefObject<HTMLElement | null>,
+): RefObject<T | null> {
   const ref = useRef<T | null>(null);
   const onCloseRef = useRef(onClose);
   onCloseRef.current = onClose;

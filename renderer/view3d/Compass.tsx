@@ -12,11 +12,20 @@ import { azimuthToEastNorth, worldToScene } from "./plumeGeometry";
  * Where a plan direction (degrees clockwise from north) points on screen, in degrees clockwise from
  * screen-up, seen from `camera` around `target`; null when the direction points at the viewer.
  */
-export function screenBearing(camera: Camera, target: Vector3, azimuth: number, width: number, height: number): number | null {
+export function screenBearing(
+  camera: Camera,
+  target: Vector3,
+  azimuth: number,
+  width: number,
+  height: number,
+): number | null {
   const dir = azimuthToEastNorth(azimuth);
   const step = Math.max(1e-3, camera.position.distanceTo(target) * 0.05);
   const a = target.clone().project(camera);
-  const b = target.clone().add(worldToScene({ x: dir.east, y: dir.north, z: 0 }).multiplyScalar(step)).project(camera);
+  const b = target
+    .clone()
+    .add(worldToScene({ x: dir.east, y: dir.north, z: 0 }).multiplyScalar(step))
+    .project(camera);
   const dx = (b.x - a.x) * width;
   const dy = (b.y - a.y) * height;
   if (Math.hypot(dx, dy) < 1e-6) return null;
@@ -30,14 +39,26 @@ export interface CompassProps {
 
 export const Compass = forwardRef<SVGSVGElement, CompassProps>(function Compass({ current, unitSystem }, ref) {
   const speed = current ? siToDisplay(current.speed, "speed", unitSystem) : null;
-  const label = current && speed ? `current ${formatNumber(speed.value, 3)} ${speed.unit} toward ${formatNumber(current.toward, 3)}°` : "still water";
+  const label =
+    current && speed
+      ? `current ${formatNumber(speed.value, 3)} ${speed.unit} toward ${formatNumber(current.toward, 3)}°`
+      : "still water";
   return (
     <div className="plume-compass" data-role="compass">
-      <svg ref={ref} viewBox="-34 -34 68 68" width="64" height="64" role="img" aria-label={`Compass: north arrow; ${label}`}>
+      <svg
+        ref={ref}
+        viewBox="-34 -34 68 68"
+        width="64"
+        height="64"
+        role="img"
+        aria-label={`Compass: north arrow; ${label}`}
+      >
         <circle r="24" className="compass-ring" />
         <g className="compass-north" style={{ transform: "rotate(var(--north, 0deg))" }}>
           <path d="M0 -22 L6 -4 L0 -8 L-6 -4 Z" />
-          <text y="-24" textAnchor="middle" className="compass-n">N</text>
+          <text y="-24" textAnchor="middle" className="compass-n">
+            N
+          </text>
         </g>
         {current ? (
           <g className="compass-current" style={{ transform: "rotate(var(--current, 0deg))" }}>
@@ -46,9 +67,7 @@ export const Compass = forwardRef<SVGSVGElement, CompassProps>(function Compass(
           </g>
         ) : null}
       </svg>
-      <span className="compass-label">
-        {label}
-      </span>
+      <span className="compass-label">{label}</span>
     </div>
   );
 });

@@ -8,7 +8,11 @@ import { formatNumber, siToDisplay, type UnitSystem } from "../../core/units";
 export interface LegendContent {
   readonly domain: DilutionDomain;
   readonly notes: readonly string[];
-  readonly drawn: { readonly spreadingLayer: boolean; readonly mixingZoneRadius: number; readonly exceedance: number | null };
+  readonly drawn: {
+    readonly spreadingLayer: boolean;
+    readonly mixingZoneRadius: number;
+    readonly exceedance: number | null;
+  };
   readonly unitSystem: UnitSystem;
 }
 
@@ -48,15 +52,23 @@ export function DilutionLegend({ content }: { content: LegendContent }) {
       </div>
       <div className="legend-key">
         {drawn.spreadingLayer ? (
-          <span data-key="layer"><i className="key-swatch layer" /> spreading layer (top)</span>
+          <span data-key="layer">
+            <i className="key-swatch layer" /> spreading layer (top)
+          </span>
         ) : null}
-        <span data-key="mixing-zone"><i className="key-line mz" /> mixing-zone edge, {distance(drawn.mixingZoneRadius, unitSystem)}</span>
+        <span data-key="mixing-zone">
+          <i className="key-line mz" /> mixing-zone edge, {distance(drawn.mixingZoneRadius, unitSystem)}
+        </span>
         {drawn.exceedance !== null ? (
-          <span data-key="exceedance"><i className="key-line exceed" /> limit exceeded out to {distance(drawn.exceedance, unitSystem)}</span>
+          <span data-key="exceedance">
+            <i className="key-line exceed" /> limit exceeded out to {distance(drawn.exceedance, unitSystem)}
+          </span>
         ) : null}
       </div>
       {notes.map((n) => (
-        <div className="legend-note" key={n}>{n}</div>
+        <div className="legend-note" key={n}>
+          {n}
+        </div>
       ))}
     </div>
   );

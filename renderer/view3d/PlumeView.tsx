@@ -3,7 +3,16 @@
  * legend with numbers, and renders only on demand (no animation loop) so it stays cheap on software WebGL.
  */
 import { useCallback, useEffect, useRef, useState } from "react";
-import { AmbientLight, DirectionalLight, HemisphereLight, PerspectiveCamera, Scene, Color, Vector3, WebGLRenderer } from "three";
+import {
+  AmbientLight,
+  DirectionalLight,
+  HemisphereLight,
+  PerspectiveCamera,
+  Scene,
+  Color,
+  Vector3,
+  WebGLRenderer,
+} from "three";
 import { OrbitControls } from "three/examples/jsm/controls/OrbitControls.js";
 import type { BrinefieldResult } from "../../core/result/contract";
 import type { Scenario } from "../../core/scenario/types";
@@ -51,7 +60,10 @@ function placeCamera(stage: Stage, preset: ViewPreset): void {
       // Looking across the jet (perpendicular to its heading), horizontally, at the nearest port's jet.
       const across = new Vector3(-heading.north, 0, -heading.east);
       const jets = content.jets;
-      const nearest = jets.centres.reduce((best, c) => (c.dot(across) > best.dot(across) ? c : best), jets.centres[0] ?? centre);
+      const nearest = jets.centres.reduce(
+        (best, c) => (c.dot(across) > best.dot(across) ? c : best),
+        jets.centres[0] ?? centre,
+      );
       target.copy(nearest);
       offset = across.multiplyScalar(jets.radius * fovFactor * 1.35);
       break;
@@ -111,7 +123,9 @@ export function PlumeView(props: PlumeViewProps) {
           canvas.dataset.northBearing = north.toFixed(1);
         }
         const flow = stage.content.current;
-        const towards = flow ? screenBearing(stage.camera, stage.controls.target, flow.toward, canvas.clientWidth, canvas.clientHeight) : null;
+        const towards = flow
+          ? screenBearing(stage.camera, stage.controls.target, flow.toward, canvas.clientWidth, canvas.clientHeight)
+          : null;
         if (towards !== null) compass.style.setProperty("--current", `${towards}deg`);
       }
       if (stage.content && !firstFrameSent.current) {
@@ -134,7 +148,10 @@ export function PlumeView(props: PlumeViewProps) {
     }
     renderer.setPixelRatio(Math.min(2, window.devicePixelRatio || 1));
     renderer.domElement.dataset.role = "plume-canvas";
-    renderer.domElement.setAttribute("aria-label", "3D view of the discharge: seabed, jets coloured by dilution, mixing zone");
+    renderer.domElement.setAttribute(
+      "aria-label",
+      "3D view of the discharge: seabed, jets coloured by dilution, mixing zone",
+    );
     renderer.domElement.setAttribute("role", "img");
     renderer.domElement.tabIndex = 0;
     host.appendChild(renderer.domElement);
@@ -195,7 +212,8 @@ export function PlumeView(props: PlumeViewProps) {
     stage.scene.add(content.group);
     stage.content = content;
     // A new document (or a very different scale) gets a fresh camera; edits keep the user's view.
-    const rescaled = previous !== null && (content.extent > previous.extent * 1.6 || content.extent < previous.extent / 1.6);
+    const rescaled =
+      previous !== null && (content.extent > previous.extent * 1.6 || content.extent < previous.extent / 1.6);
     const newDocument = placedForDocument.current !== documentKey;
     if (newDocument) presetRef.current = "perspective";
     if (!previous || rescaled || newDocument) placeCamera(stage, presetRef.current);
@@ -228,7 +246,9 @@ export function PlumeView(props: PlumeViewProps) {
     if (!canvas) return;
     const onKey = (e: KeyboardEvent) => {
       if (e.ctrlKey || e.metaKey || e.altKey) return;
-      const preset = ({ r: "perspective", s: "side", p: "plan", m: "overview" } as const)[e.key.toLowerCase() as "r" | "s" | "p" | "m"];
+      const preset = ({ r: "perspective", s: "side", p: "plan", m: "overview" } as const)[
+        e.key.toLowerCase() as "r" | "s" | "p" | "m"
+      ];
       if (preset) {
         e.preventDefault();
         choose(preset);
@@ -242,14 +262,30 @@ export function PlumeView(props: PlumeViewProps) {
     <div className={compact ? "plume-view compact" : "plume-view"}>
       {!compact ? (
         <div className="plume-toolbar" role="toolbar" aria-label="3D view">
-          <button type="button" onClick={() => choose("perspective")} title="Reset the view (R)">Reset</button>
-          <button type="button" onClick={() => choose("side")} title="Side view (S)">Side</button>
-          <button type="button" onClick={() => choose("plan")} title="Plan view (P)">Plan</button>
-          <button type="button" onClick={() => choose("overview")} title="The whole mixing zone and any area where the limit is exceeded (M)">Mixing zone</button>
+          <button type="button" onClick={() => choose("perspective")} title="Reset the view (R)">
+            Reset
+          </button>
+          <button type="button" onClick={() => choose("side")} title="Side view (S)">
+            Side
+          </button>
+          <button type="button" onClick={() => choose("plan")} title="Plan view (P)">
+            Plan
+          </button>
+          <button
+            type="button"
+            onClick={() => choose("overview")}
+            title="The whole mixing zone and any area where the limit is exceeded (M)"
+          >
+            Mixing zone
+          </button>
         </div>
       ) : null}
       <div className="plume-canvas-host" ref={hostRef} />
-      {failure ? <div className="plume-failure" role="alert">{failure}</div> : null}
+      {failure ? (
+        <div className="plume-failure" role="alert">
+          {failure}
+        </div>
+      ) : null}
       <Compass ref={compassRef} current={current} unitSystem={unitSystem} />
       {legend ? <DilutionLegend content={compact ? { ...legend, notes: [] } : legend} /> : null}
     </div>

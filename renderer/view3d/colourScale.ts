@@ -81,7 +81,16 @@ export function rampColour(t: number): Rgb {
 }
 
 export function rgbToHex(rgb: Rgb): string {
-  return "#" + rgb.map((c) => Math.round(Math.min(1, Math.max(0, c)) * 255).toString(16).padStart(2, "0")).join("");
+  return (
+    "#" +
+    rgb
+      .map((c) =>
+        Math.round(Math.min(1, Math.max(0, c)) * 255)
+          .toString(16)
+          .padStart(2, "0"),
+      )
+      .join("")
+  );
 }
 
 /** A dilution domain [low, high] on a log axis, widened to round numbers (1, 2, 5 × 10ⁿ). */
@@ -137,6 +146,9 @@ export function dilutionTicks(domain: DilutionDomain): number[] {
 
 /** CSS linear-gradient stops for a legend bar. */
 export function rampGradientCss(direction = "to right", steps = 16): string {
-  const stops = Array.from({ length: steps + 1 }, (_, i) => `${rgbToHex(rampColour(i / steps))} ${((i / steps) * 100).toFixed(1)}%`);
+  const stops = Array.from(
+    { length: steps + 1 },
+    (_, i) => `${rgbToHex(rampColour(i / steps))} ${((i / steps) * 100).toFixed(1)}%`,
+  );
   return `linear-gradient(${direction}, ${stops.join(", ")})`;
 }

@@ -110,7 +110,13 @@ export function tubeGeometry(input: TubeInput): BufferGeometry {
 }
 
 /** Height of the seabed (world z, m) at a plan point, for a plane bed through (0, 0, −depth). */
-export function seabedHeight(east: number, north: number, depth: number, slope: number, slopeAzimuthDeg: number): number {
+export function seabedHeight(
+  east: number,
+  north: number,
+  depth: number,
+  slope: number,
+  slopeAzimuthDeg: number,
+): number {
   const down = azimuthToEastNorth(slopeAzimuthDeg);
   return -depth - slope * (east * down.east + north * down.north);
 }
@@ -130,7 +136,11 @@ export function seabedGeometry(half: number, bed: BedSpec, divisions = 24): Buff
     for (let j = 0; j <= n; j++) {
       const east = -half + (2 * half * i) / n;
       const north = -half + (2 * half * j) / n;
-      const p = worldToScene({ x: east, y: north, z: seabedHeight(east, north, bed.depth, bed.slope, bed.slopeAzimuth) });
+      const p = worldToScene({
+        x: east,
+        y: north,
+        z: seabedHeight(east, north, bed.depth, bed.slope, bed.slopeAzimuth),
+      });
       positions.push(p.x, p.y, p.z);
     }
   }
@@ -174,12 +184,20 @@ export function seabedGridPositions(half: number, step: number, bed: BedSpec, li
  * Plan outline at distance `radius` from a straight diffuser of `length` m along `azimuthDeg` centred on
  * the origin (a circle for a single port, a stadium for a line). Closed: the last point repeats the first.
  */
-export function offsetOutline(radius: number, length: number, azimuthDeg: number, pointsPerHalf = 48): { east: number; north: number }[] {
+export function offsetOutline(
+  radius: number,
+  length: number,
+  azimuthDeg: number,
+  pointsPerHalf = 48,
+): { east: number; north: number }[] {
   const axis = azimuthToEastNorth(azimuthDeg);
   const half = Math.max(0, length) / 2;
   const out: { east: number; north: number }[] = [];
   const baseAngle = Math.atan2(axis.north, axis.east);
-  for (const [end, sign] of [[half, 1], [-half, -1]] as const) {
+  for (const [end, sign] of [
+    [half, 1],
+    [-half, -1],
+  ] as const) {
     const cx = axis.east * end;
     const cy = axis.north * end;
     for (let i = 0; i <= pointsPerHalf; i++) {
@@ -214,7 +232,9 @@ export function annulusGeometry(input: AnnulusInput): BufferGeometry {
   const geometry = new BufferGeometry();
   const n = input.distances.length;
   if (n < 2) return geometry;
-  const rings = input.distances.map((d) => offsetOutline(d, input.diffuserLength ?? 0, input.diffuserAzimuth ?? 0, half));
+  const rings = input.distances.map((d) =>
+    offsetOutline(d, input.diffuserLength ?? 0, input.diffuserAzimuth ?? 0, half),
+  );
   const segments = rings[0].length - 1;
   const positions = new Float32Array(n * (segments + 1) * 3);
   const colours = new Float32Array(n * (segments + 1) * 3);

@@ -202,7 +202,12 @@ export function buildPlumeScene(input: PlumeSceneInput): PlumeSceneOutput {
   const exceed = result.mixingZone.footprint.furthestExtent;
   const drawnExceedance = exceed > 0 && Number.isFinite(exceed) ? exceed : null;
   const outerRadius = Math.max(mzRadius, drawnExceedance ?? 0);
-  const extent = Math.max(outerRadius * 1.12 + (ports.length > 1 ? diffuserHalf : 0), reach * 1.6 + diffuserHalf, depth * 1.5, 10);
+  const extent = Math.max(
+    outerRadius * 1.12 + (ports.length > 1 ? diffuserHalf : 0),
+    reach * 1.6 + diffuserHalf,
+    depth * 1.5,
+    10,
+  );
 
   // Seabed and grid.
   const seabed = new Mesh(
@@ -217,7 +222,10 @@ export function buildPlumeScene(input: PlumeSceneInput): PlumeSceneOutput {
   const lift = Math.max(0.01, extent * 0.0008);
   const gridGeometry = track(new BufferGeometry());
   gridGeometry.setAttribute("position", new BufferAttribute(seabedGridPositions(extent, step, bed, lift), 3));
-  const grid = new LineSegments(gridGeometry, track(new LineBasicMaterial({ color: COLOURS.grid, transparent: true, opacity: 0.55 })));
+  const grid = new LineSegments(
+    gridGeometry,
+    track(new LineBasicMaterial({ color: COLOURS.grid, transparent: true, opacity: 0.55 })),
+  );
   grid.name = "distance-grid";
   group.add(grid);
   const labelHeight = extent * 0.02; // world-space lift of labels above what they mark
@@ -228,7 +236,13 @@ export function buildPlumeScene(input: PlumeSceneInput): PlumeSceneOutput {
     const east = k * step;
     const north = -step;
     const label = textSprite(`${formatNumber(Math.abs(k) * stepDisplay)} ${unitLabel}`, 0.85, "#4a4236", false);
-    label.position.copy(worldToScene({ x: east, y: north, z: seabedHeight(east, north, bed.depth, bed.slope, bed.slopeAzimuth) + labelHeight }));
+    label.position.copy(
+      worldToScene({
+        x: east,
+        y: north,
+        z: seabedHeight(east, north, bed.depth, bed.slope, bed.slopeAzimuth) + labelHeight,
+      }),
+    );
     trackSprite(label);
     group.add(label);
   }
@@ -236,17 +250,38 @@ export function buildPlumeScene(input: PlumeSceneInput): PlumeSceneOutput {
   // Water surface and the column's corner posts.
   const surface = new Mesh(
     track(new PlaneGeometry(extent * 2, extent * 2)),
-    track(new MeshBasicMaterial({ color: COLOURS.water, transparent: true, opacity: 0.12, side: DoubleSide, depthWrite: false })),
+    track(
+      new MeshBasicMaterial({
+        color: COLOURS.water,
+        transparent: true,
+        opacity: 0.12,
+        side: DoubleSide,
+        depthWrite: false,
+      }),
+    ),
   );
   surface.rotation.x = -Math.PI / 2;
   surface.name = "water-surface";
   group.add(surface);
   const postMaterial = track(new LineBasicMaterial({ color: COLOURS.water, transparent: true, opacity: 0.5 }));
-  const corners: [number, number][] = [[-extent, -extent], [extent, -extent], [extent, extent], [-extent, extent]];
+  const corners: [number, number][] = [
+    [-extent, -extent],
+    [extent, -extent],
+    [extent, extent],
+    [-extent, extent],
+  ];
   const rim = corners.map(([e, n]) => worldToScene({ x: e, y: n, z: 0 }));
   group.add(lineFrom([...rim, rim[0]], postMaterial));
   for (const [e, n] of corners) {
-    group.add(lineFrom([worldToScene({ x: e, y: n, z: 0 }), worldToScene({ x: e, y: n, z: seabedHeight(e, n, bed.depth, bed.slope, bed.slopeAzimuth) })], postMaterial));
+    group.add(
+      lineFrom(
+        [
+          worldToScene({ x: e, y: n, z: 0 }),
+          worldToScene({ x: e, y: n, z: seabedHeight(e, n, bed.depth, bed.slope, bed.slopeAzimuth) }),
+        ],
+        postMaterial,
+      ),
+    );
   }
 
   // Diffuser pipe, risers and ports.
@@ -258,7 +293,10 @@ export function buildPlumeScene(input: PlumeSceneInput): PlumeSceneOutput {
     const b = { x: axis.east * diffuser.length * 0.5, y: axis.north * diffuser.length * 0.5 };
     const pa = worldToScene({ ...a, z: seabedHeight(a.x, a.y, bed.depth, bed.slope, bed.slopeAzimuth) + portRadius });
     const pb = worldToScene({ ...b, z: seabedHeight(b.x, b.y, bed.depth, bed.slope, bed.slopeAzimuth) + portRadius });
-    const pipe = new Mesh(track(new CylinderGeometry(portRadius * 1.6, portRadius * 1.6, pa.distanceTo(pb), 12)), metal);
+    const pipe = new Mesh(
+      track(new CylinderGeometry(portRadius * 1.6, portRadius * 1.6, pa.distanceTo(pb), 12)),
+      metal,
+    );
     pipe.position.copy(pa).add(pb).multiplyScalar(0.5);
     pipe.quaternion.setFromUnitVectors(new Vector3(0, 1, 0), new Vector3().subVectors(pb, pa).normalize());
     pipe.name = "diffuser-pipe";
@@ -270,7 +308,10 @@ export function buildPlumeScene(input: PlumeSceneInput): PlumeSceneOutput {
     const top = worldToScene({ x: port.east, y: port.north, z: bedZ + diffuser.portHeight });
     const foot = worldToScene({ x: port.east, y: port.north, z: bedZ });
     if (diffuser.portHeight > 0) {
-      const riser = new Mesh(track(new CylinderGeometry(portRadius * 0.7, portRadius * 0.7, top.distanceTo(foot), 8)), metal);
+      const riser = new Mesh(
+        track(new CylinderGeometry(portRadius * 0.7, portRadius * 0.7, top.distanceTo(foot), 8)),
+        metal,
+      );
       riser.position.copy(top).add(foot).multiplyScalar(0.5);
       group.add(riser);
     }
@@ -296,27 +337,39 @@ export function buildPlumeScene(input: PlumeSceneInput): PlumeSceneOutput {
         const w = placePathPoint(p, port, turn);
         return worldToScene({ x: w.x, y: w.y, z: w.z + bedZ + diffuser.portHeight });
       });
-      const tube = new Mesh(track(tubeGeometry({ centreline, radii, colours, radialSegments: segments })), tubeMaterial);
+      const tube = new Mesh(
+        track(tubeGeometry({ centreline, radii, colours, radialSegments: segments })),
+        tubeMaterial,
+      );
       tube.name = "jet";
       group.add(tube);
     }
   } else {
     notes.push("No centreline from the integral method; jets are not drawn.");
   }
-  if (turned) notes.push("Ports at other azimuths show the computed jet turned to their azimuth (exact only in still water).");
+  if (turned)
+    notes.push("Ports at other azimuths show the computed jet turned to their azimuth (exact only in still water).");
 
   // Impact spots on the seabed.
   const impact = impactPoint(result, path);
   if (impact) {
     const spotMaterial = track(
-      new MeshBasicMaterial({ color: new Color(...colourOf(impact.dilution)), transparent: true, opacity: 0.85, side: DoubleSide, depthWrite: false }),
+      new MeshBasicMaterial({
+        color: new Color(...colourOf(impact.dilution)),
+        transparent: true,
+        opacity: 0.85,
+        side: DoubleSide,
+        depthWrite: false,
+      }),
     );
     const spotGeometry = track(new CircleGeometry(Math.max(impact.halfWidth, portRadius * 2), 40));
     for (const port of ports) {
       const w = placePathPoint(impact, port, port.azimuth - computedAzimuth);
       const spot = new Mesh(spotGeometry, spotMaterial);
       spot.rotation.x = -Math.PI / 2;
-      spot.position.copy(worldToScene({ x: w.x, y: w.y, z: seabedHeight(w.x, w.y, bed.depth, bed.slope, bed.slopeAzimuth) + lift * 3 }));
+      spot.position.copy(
+        worldToScene({ x: w.x, y: w.y, z: seabedHeight(w.x, w.y, bed.depth, bed.slope, bed.slopeAzimuth) + lift * 3 }),
+      );
       spot.name = "impact";
       group.add(spot);
     }
@@ -325,7 +378,10 @@ export function buildPlumeScene(input: PlumeSceneInput): PlumeSceneOutput {
   // Spreading layer: the top of the dense layer, coloured by dilution, out to the mixing-zone edge.
   const layer = series.distance
     .map((d, i) => ({ d, h: series.layerThickness[i], s: series.dilution[i] }))
-    .filter((p): p is { d: number; h: number; s: number } => p.h !== null && Number.isFinite(p.h) && p.d <= mzRadius * 1.0001 && p.d > 0);
+    .filter(
+      (p): p is { d: number; h: number; s: number } =>
+        p.h !== null && Number.isFinite(p.h) && p.d <= mzRadius * 1.0001 && p.d > 0,
+    );
   const layerDrawn = layer.length >= 2;
   if (layerDrawn) {
     const sheet = new Mesh(
@@ -339,7 +395,15 @@ export function buildPlumeScene(input: PlumeSceneInput): PlumeSceneOutput {
           diffuserAzimuth: diffuser.diffuserAzimuth,
         }),
       ),
-      track(new MeshLambertMaterial({ vertexColors: true, transparent: true, opacity: 0.32, side: DoubleSide, depthWrite: false })),
+      track(
+        new MeshLambertMaterial({
+          vertexColors: true,
+          transparent: true,
+          opacity: 0.32,
+          side: DoubleSide,
+          depthWrite: false,
+        }),
+      ),
     );
     sheet.name = "spreading-layer";
     group.add(sheet);
@@ -368,18 +432,34 @@ export function buildPlumeScene(input: PlumeSceneInput): PlumeSceneOutput {
             diffuserAzimuth: diffuser.diffuserAzimuth,
           }),
         ),
-        track(new MeshLambertMaterial({ vertexColors: true, transparent: true, opacity: 0.32, side: DoubleSide, depthWrite: false })),
+        track(
+          new MeshLambertMaterial({
+            vertexColors: true,
+            transparent: true,
+            opacity: 0.32,
+            side: DoubleSide,
+            depthWrite: false,
+          }),
+        ),
       );
       sheet.name = rf.kind === "trapped" ? "trapped-field" : "surface-field";
       group.add(sheet);
-      notes.push(rf.kind === "trapped" ? "The rising plume is trapped below the surface; the sheet shows its field at the trap level." : "The rising plume reaches the surface; the sheet shows its surface field.");
+      notes.push(
+        rf.kind === "trapped"
+          ? "The rising plume is trapped below the surface; the sheet shows its field at the trap level."
+          : "The rising plume reaches the surface; the sheet shows its surface field.",
+      );
     }
   }
 
   // Mixing-zone boundary and the distance where the governing limit is still exceeded.
   const outline = (radius: number) =>
     offsetOutline(radius, ports.length > 1 ? diffuser.length : 0, diffuser.diffuserAzimuth).map((p) =>
-      worldToScene({ x: p.east, y: p.north, z: seabedHeight(p.east, p.north, bed.depth, bed.slope, bed.slopeAzimuth) + lift * 6 }),
+      worldToScene({
+        x: p.east,
+        y: p.north,
+        z: seabedHeight(p.east, p.north, bed.depth, bed.slope, bed.slopeAzimuth) + lift * 6,
+      }),
     );
   const mzLine = lineFrom(outline(mzRadius), track(new LineBasicMaterial({ color: COLOURS.mixingZone, linewidth: 2 })));
   mzLine.name = "mixing-zone-edge";
@@ -387,7 +467,10 @@ export function buildPlumeScene(input: PlumeSceneInput): PlumeSceneOutput {
   // The edge's radius and the exceedance distance are named in the legend, not on the drawing, where a
   // label could run off the view or under its controls.
   if (drawnExceedance !== null) {
-    const ring = lineFrom(outline(drawnExceedance), track(new LineDashedMaterial({ color: COLOURS.exceedance, dashSize: extent * 0.02, gapSize: extent * 0.012 })));
+    const ring = lineFrom(
+      outline(drawnExceedance),
+      track(new LineDashedMaterial({ color: COLOURS.exceedance, dashSize: extent * 0.02, gapSize: extent * 0.012 })),
+    );
     ring.name = "limit-exceedance";
     group.add(ring);
   }
@@ -407,7 +490,9 @@ export function buildPlumeScene(input: PlumeSceneInput): PlumeSceneOutput {
       focusPoints.push(worldToScene({ x: w.x, y: w.y, z: w.z + portZ }));
     }
   }
-  const centre = focusPoints.reduce((acc, p) => acc.add(p), new Vector3()).multiplyScalar(1 / Math.max(1, focusPoints.length));
+  const centre = focusPoints
+    .reduce((acc, p) => acc.add(p), new Vector3())
+    .multiplyScalar(1 / Math.max(1, focusPoints.length));
   const radius = Math.max(depth * 0.6, ...focusPoints.map((p) => p.distanceTo(centre)), 2);
   const jetCentres = ports.map((port) => {
     const mid = path[Math.floor(path.length / 2)];

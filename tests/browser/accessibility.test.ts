@@ -29,13 +29,28 @@ function newestSource(dir: string): number {
 
 function ensureBuilt(): void {
   const index = join(dist, "index.html");
-  const sources = Math.max(newestSource(join(root, "renderer")), newestSource(join(root, "core")), newestSource(join(root, "demo-scenarios")));
+  const sources = Math.max(
+    newestSource(join(root, "renderer")),
+    newestSource(join(root, "core")),
+    newestSource(join(root, "demo-scenarios")),
+  );
   if (existsSync(index) && statSync(index).mtimeMs > sources) return;
-  const run = spawnSync(process.execPath, [join(root, "node_modules/vite/bin/vite.js"), "build", "--config", "renderer/vite.config.ts", "--logLevel", "error"], {
-    cwd: root,
-    encoding: "utf8",
-    timeout: 240_000,
-  });
+  const run = spawnSync(
+    process.execPath,
+    [
+      join(root, "node_modules/vite/bin/vite.js"),
+      "build",
+      "--config",
+      "renderer/vite.config.ts",
+      "--logLevel",
+      "error",
+    ],
+    {
+      cwd: root,
+      encoding: "utf8",
+      timeout: 240_000,
+    },
+  );
   if (run.status !== 0) throw new Error(`renderer build failed: ${run.stderr || run.stdout}`);
 }
 
@@ -58,7 +73,10 @@ async function contrastProblems(page: Page): Promise<ContrastProblem[]> {
     const parse = (text: string): Rgba | null => {
       const m = /rgba?\(([^)]+)\)/.exec(text);
       if (!m) return null;
-      const parts = m[1]!.split(/[\s,/]+/).filter(Boolean).map(Number);
+      const parts = m[1]!
+        .split(/[\s,/]+/)
+        .filter(Boolean)
+        .map(Number);
       return [parts[0]!, parts[1]!, parts[2]!, parts.length > 3 ? parts[3]! : 1];
     };
     const over = (top: Rgba, under: Rgba): Rgba => {
@@ -82,7 +100,8 @@ async function contrastProblems(page: Page): Promise<ContrastProblem[]> {
     const describe = (el: Element) => {
       const parts: string[] = [];
       for (let e: Element | null = el; e && parts.length < 3; e = e.parentElement) {
-        const cls = typeof e.className === "string" && e.className ? `.${e.className.trim().split(/\s+/).join(".")}` : "";
+        const cls =
+          typeof e.className === "string" && e.className ? `.${e.className.trim().split(/\s+/).join(".")}` : "";
         parts.unshift(`${e.tagName.toLowerCase()}${cls}`);
       }
       return parts.join(" > ");
@@ -103,7 +122,8 @@ async function contrastProblems(page: Page): Promise<ContrastProblem[]> {
       if (style.visibility !== "visible" || style.display === "none") continue;
       // Visible on screen only (scrolled-out text is checked when it is shown).
       const r = el.getBoundingClientRect();
-      if (r.width === 0 || r.height === 0 || r.bottom < 0 || r.right < 0 || r.top > innerHeight || r.left > innerWidth) continue;
+      if (r.width === 0 || r.height === 0 || r.bottom < 0 || r.right < 0 || r.top > innerHeight || r.left > innerWidth)
+        continue;
       let opacity = 1;
       for (let e: Element | null = el; e; e = e.parentElement) opacity *= Number(getComputedStyle(e).opacity);
       if (opacity < 0.05) continue;
@@ -131,8 +151,18 @@ async function contrastProblems(page: Page): Promise<ContrastProblem[]> {
       const needed = size >= 24 || (bold && size >= 18.66) ? 3 : 4.5;
       const value = ratio(front, back);
       if (value < needed - 0.005) {
-        const hex = (c: Rgba) => `#${c.slice(0, 3).map((v) => Math.round(v).toString(16).padStart(2, "0")).join("")}`;
-        problems.push({ text: text.slice(0, 40), where: describe(el), ratio: Math.round(value * 100) / 100, needed, colours: `${hex(front)} on ${hex(back)}` });
+        const hex = (c: Rgba) =>
+          `#${c
+            .slice(0, 3)
+            .map((v) => Math.round(v).toString(16).padStart(2, "0"))
+            .join("")}`;
+        problems.push({
+          text: text.slice(0, 40),
+          where: describe(el),
+          ratio: Math.round(value * 100) / 100,
+          needed,
+          colours: `${hex(front)} on ${hex(back)}`,
+        });
       }
     }
     return problems;
@@ -160,11 +190,16 @@ async function overlaps(page: Page, scope: string): Promise<string[]> {
         const s = getComputedStyle(p);
         if (/(auto|scroll|hidden)/.test(s.overflowY) || /(auto|scroll|hidden)/.test(s.overflowX)) {
           const c = p.getBoundingClientRect();
-          if (r.bottom <= c.top + 1 || r.top >= c.bottom - 1 || r.right <= c.left + 1 || r.left >= c.right - 1) clipped = true;
+          if (r.bottom <= c.top + 1 || r.top >= c.bottom - 1 || r.right <= c.left + 1 || r.left >= c.right - 1)
+            clipped = true;
         }
       }
       if (clipped || r.bottom < 0 || r.top > innerHeight) continue;
-      items.push({ el, r, name: `${el.tagName.toLowerCase()}${el.className && typeof el.className === "string" ? "." + el.className.split(" ")[0] : ""} "${(el.textContent || (el as HTMLInputElement).value || "").trim().slice(0, 24)}"` });
+      items.push({
+        el,
+        r,
+        name: `${el.tagName.toLowerCase()}${el.className && typeof el.className === "string" ? "." + el.className.split(" ")[0] : ""} "${(el.textContent || (el as HTMLInputElement).value || "").trim().slice(0, 24)}"`,
+      });
     }
     const out: string[] = [];
     for (let i = 0; i < items.length; i++) {
@@ -252,7 +287,9 @@ describe.each([
 
   it("has WCAG AA contrast on the Study tab and the start view", async () => {
     await page.click("[data-command=study]");
-    await expect.poll(() => page.locator(".study-workspace").textContent(), { timeout: 20_000 }).not.toMatch(/Loading study tools/);
+    await expect
+      .poll(() => page.locator(".study-workspace").textContent(), { timeout: 20_000 })
+      .not.toMatch(/Loading study tools/);
     await page.waitForTimeout(300);
     const study = await contrastProblems(page);
     await page.screenshot({ path: join(artifacts, `a11y-study-${width}.png`) });
@@ -298,13 +335,19 @@ describe("tabs", () => {
     expect(panelId, "the selected tab names its panel").toBeTruthy();
     const panel = page.locator(`#${panelId}`);
     expect(await panel.getAttribute("role"), "a tabpanel").toBe("tabpanel");
-    expect(await panel.getAttribute("aria-labelledby"), "labelled by the selected tab").toBe(await selected.getAttribute("id"));
+    expect(await panel.getAttribute("aria-labelledby"), "labelled by the selected tab").toBe(
+      await selected.getAttribute("id"),
+    );
     expect(await list.locator('[role=tab][tabindex="0"]').count(), "only the selected tab is in the Tab order").toBe(1);
   });
 
   it("move between chart tabs with the arrow keys, Home and End, wrapping at the ends", async () => {
-    const focusedName = () => page.evaluate(() => (document.activeElement?.getAttribute("role") === "tab" ? document.activeElement.textContent : null));
-    const selectedName = () => page.getByRole("tablist", { name: "Chart" }).locator('[aria-selected="true"]').textContent();
+    const focusedName = () =>
+      page.evaluate(() =>
+        document.activeElement?.getAttribute("role") === "tab" ? document.activeElement.textContent : null,
+      );
+    const selectedName = () =>
+      page.getByRole("tablist", { name: "Chart" }).locator('[aria-selected="true"]').textContent();
     await page.getByRole("tab", { name: "Side view" }).focus();
     await page.keyboard.press("ArrowRight");
     expect(await focusedName(), "focus moves right").toBe("Dilution vs distance");
@@ -329,7 +372,9 @@ describe("tabs", () => {
     await panel.waitFor();
     expect(await panel.locator("[data-role=caution]").count(), "the caution is in the Study panel").toBe(1);
     await page.keyboard.press("ArrowLeft");
-    expect(await page.getByRole("tab", { name: "Design" }).getAttribute("aria-selected"), "back to Design").toBe("true");
+    expect(await page.getByRole("tab", { name: "Design" }).getAttribute("aria-selected"), "back to Design").toBe(
+      "true",
+    );
     await page.locator('[role=tabpanel][aria-labelledby="view-tab-design"] [data-role=headline-table]').waitFor();
   });
 
@@ -343,7 +388,10 @@ describe("tabs", () => {
       await page.click("[data-command=chart-as-table]");
       const rows = page.locator(`[data-role=${table}] tbody tr`);
       expect(await rows.count(), `${tab}: rows of numbers`).toBeGreaterThan(3);
-      expect(await page.locator(`[data-role=${table}] th`).first().textContent(), `${tab}: units in the header`).toMatch(/\((m|ft)\)/);
+      expect(
+        await page.locator(`[data-role=${table}] th`).first().textContent(),
+        `${tab}: units in the header`,
+      ).toMatch(/\((m|ft)\)/);
       await page.click("[data-command=chart-as-table]");
     }
   });

@@ -30,13 +30,28 @@ function newestSource(dir: string): number {
 /** Builds the renderer unless dist/renderer is newer than every renderer, core and demo source. */
 function ensureBuilt(): void {
   const index = join(dist, "index.html");
-  const sources = Math.max(newestSource(join(root, "renderer")), newestSource(join(root, "core")), newestSource(join(root, "demo-scenarios")));
+  const sources = Math.max(
+    newestSource(join(root, "renderer")),
+    newestSource(join(root, "core")),
+    newestSource(join(root, "demo-scenarios")),
+  );
   if (existsSync(index) && statSync(index).mtimeMs > sources) return;
-  const run = spawnSync(process.execPath, [join(root, "node_modules/vite/bin/vite.js"), "build", "--config", "renderer/vite.config.ts", "--logLevel", "error"], {
-    cwd: root,
-    encoding: "utf8",
-    timeout: 240_000,
-  });
+  const run = spawnSync(
+    process.execPath,
+    [
+      join(root, "node_modules/vite/bin/vite.js"),
+      "build",
+      "--config",
+      "renderer/vite.config.ts",
+      "--logLevel",
+      "error",
+    ],
+    {
+      cwd: root,
+      encoding: "utf8",
+      timeout: 240_000,
+    },
+  );
   if (run.status !== 0) throw new Error(`renderer build failed: ${run.stderr || run.stdout}`);
 }
 
@@ -75,7 +90,13 @@ async function sampleCanvas(page: Page): Promise<CanvasSample> {
     for (let i = 0; i < data.length; i += 4) {
       if (Math.abs(data[i] - br) + Math.abs(data[i + 1] - bg) + Math.abs(data[i + 2] - bb) > 40) content++;
     }
-    return { width: source.width, height: source.height, contentFraction: content / (w * h), distinctColours: counts.size, grid };
+    return {
+      width: source.width,
+      height: source.height,
+      contentFraction: content / (w * h),
+      distinctColours: counts.size,
+      grid,
+    };
   });
 }
 
@@ -86,7 +107,10 @@ function meanDifference(a: CanvasSample, b: CanvasSample): number {
   return sum / n;
 }
 
-const demoFiles = () => readdirSync(join(root, "demo-scenarios")).filter((f) => f.endsWith(".json")).sort();
+const demoFiles = () =>
+  readdirSync(join(root, "demo-scenarios"))
+    .filter((f) => f.endsWith(".json"))
+    .sort();
 
 const cell = (page: Page, name: string) => page.locator(`[data-cell="${name}"]`);
 
@@ -118,11 +142,17 @@ afterAll(async () => {
 describe("the built app", () => {
   it("carries the Content-Security-Policy as a meta tag and runs under it without violations", async () => {
     const html = readFileSync(join(dist, "index.html"), "utf8");
-    expect(html, "index.html has the CSP meta tag").toMatch(/<meta http-equiv="Content-Security-Policy" content="default-src &#39;self&#39;|<meta http-equiv="Content-Security-Policy" content="default-src 'self'/);
+    expect(html, "index.html has the CSP meta tag").toMatch(
+      /<meta http-equiv="Content-Security-Policy" content="default-src &#39;self&#39;|<meta http-equiv="Content-Security-Policy" content="default-src 'self'/,
+    );
     expect(html, "no inline scripts").not.toMatch(/<script(?![^>]*\bsrc=)[^>]*>/);
     const head = /<head[^>]*>\s*(<[^>]*>)/i.exec(html)?.[1] ?? "";
-    expect(head, "the policy is the first tag of the head, before any script").toMatch(/^<meta http-equiv="Content-Security-Policy"/);
-    expect(html.indexOf("Content-Security-Policy"), "policy before the first script").toBeLessThan(html.indexOf("<script"));
+    expect(head, "the policy is the first tag of the head, before any script").toMatch(
+      /^<meta http-equiv="Content-Security-Policy"/,
+    );
+    expect(html.indexOf("Content-Security-Policy"), "policy before the first script").toBeLessThan(
+      html.indexOf("<script"),
+    );
     expect(consoleProblems, "no console errors or CSP violations while loading").toEqual([]);
   });
 
@@ -132,8 +162,14 @@ describe("the built app", () => {
     expect(await caution.textContent(), "the caution text from the result contract").toBe(CAUTION);
     expect(CAUTION.startsWith("Caution"), "the caution begins with the word Caution").toBe(true);
     expect(await page.locator("[data-role=verdict]").isVisible(), "verdict visible").toBe(true);
-    expect(await page.locator("[data-role=engine-status]").getAttribute("data-engine"), "core runs in the Web Worker").toBe("worker");
-    expect(await page.locator("[data-role=headline-table] thead th").count(), "a column per near-field method plus labels").toBeGreaterThanOrEqual(3);
+    expect(
+      await page.locator("[data-role=engine-status]").getAttribute("data-engine"),
+      "core runs in the Web Worker",
+    ).toBe("worker");
+    expect(
+      await page.locator("[data-role=headline-table] thead th").count(),
+      "a column per near-field method plus labels",
+    ).toBeGreaterThanOrEqual(3);
     await page.waitForTimeout(500);
     await page.screenshot({ path: join(artifacts, "app-main.png") });
   });
@@ -141,7 +177,9 @@ describe("the built app", () => {
   it("draws a 3D view that is not blank", async () => {
     const sample = await sampleCanvas(page);
     expect(sample.width, "canvas has a size").toBeGreaterThan(200);
-    expect(sample.contentFraction, "more than a third of the canvas differs from the clear colour").toBeGreaterThan(0.33);
+    expect(sample.contentFraction, "more than a third of the canvas differs from the clear colour").toBeGreaterThan(
+      0.33,
+    );
     expect(sample.distinctColours, "shaded geometry, not a flat fill").toBeGreaterThan(50);
   });
 
@@ -151,7 +189,9 @@ describe("the built app", () => {
     const before = await sampleCanvas(page);
     const angle = page.locator('input[data-path="diffuser.portAngle"]');
     await angle.fill("30");
-    await expect.poll(() => riseCell.textContent(), { message: "integral max rise changes", timeout: 15_000 }).not.toBe(riseBefore);
+    await expect
+      .poll(() => riseCell.textContent(), { message: "integral max rise changes", timeout: 15_000 })
+      .not.toBe(riseBefore);
     await page.waitForTimeout(400);
     const after = await sampleCanvas(page);
     expect(meanDifference(before, after), "mean grey-level change across the 3D view").toBeGreaterThan(1);
@@ -167,15 +207,25 @@ describe("the built app", () => {
     const error = page.locator(".field.has-error .field-error").first();
     await error.waitFor({ timeout: 15_000 });
     expect(await error.textContent(), "the message names the allowed range").toMatch(/0 to 90/);
-    expect(await page.locator("[data-role=engine-status]").textContent(), "status says the results shown are the last good ones").toMatch(/last good results/);
+    expect(
+      await page.locator("[data-role=engine-status]").textContent(),
+      "status says the results shown are the last good ones",
+    ).toMatch(/last good results/);
     expect(await riseCell.textContent(), "results still shown").toBe(good);
-    expect(await page.locator("[data-command=export-report]").isDisabled(), "no report pairing old results with new inputs").toBe(true);
+    expect(
+      await page.locator("[data-command=export-report]").isDisabled(),
+      "no report pairing old results with new inputs",
+    ).toBe(true);
     expect(await page.locator("[data-command=export-csv]").isDisabled(), "nor a CSV").toBe(true);
     await angle.scrollIntoViewIfNeeded();
     await page.screenshot({ path: join(artifacts, "app-inline-error.png") });
     await angle.fill("30");
-    await expect.poll(() => page.locator(".field.has-error").count(), { message: "error clears", timeout: 15_000 }).toBe(0);
-    await expect.poll(() => page.locator("[data-command=export-report]").isDisabled(), { message: "export is offered again" }).toBe(false);
+    await expect
+      .poll(() => page.locator(".field.has-error").count(), { message: "error clears", timeout: 15_000 })
+      .toBe(0);
+    await expect
+      .poll(() => page.locator("[data-command=export-report]").isDisabled(), { message: "export is offered again" })
+      .toBe(false);
   });
 
   it("saves the scenario as a download and opens it again by upload", async () => {
@@ -192,10 +242,16 @@ describe("the built app", () => {
     // Change it again, then open the saved file: the unsaved change is offered for discarding first.
     await page.locator('input[data-path="diffuser.portAngle"]').fill("45");
     await page.click("[data-command=open]");
-    const [chooser] = await Promise.all([page.waitForEvent("filechooser"), page.getByRole("button", { name: "Discard changes" }).click()]);
+    const [chooser] = await Promise.all([
+      page.waitForEvent("filechooser"),
+      page.getByRole("button", { name: "Discard changes" }).click(),
+    ]);
     await chooser.setFiles(saved);
     await expect
-      .poll(() => page.locator('input[data-path="diffuser.portAngle"]').inputValue(), { message: "the saved angle is back", timeout: 15_000 })
+      .poll(() => page.locator('input[data-path="diffuser.portAngle"]').inputValue(), {
+        message: "the saved angle is back",
+        timeout: 15_000,
+      })
       .toBe("30");
     expect(await page.locator(".doc-title .dirty-dot").count(), "a freshly opened file is clean").toBe(0);
   });
@@ -216,10 +272,17 @@ describe("the built app", () => {
   it("takes a receiving-water profile pasted from a spreadsheet", async () => {
     await page.getByRole("radio", { name: "Profile" }).click();
     await page.getByRole("button", { name: "Paste from spreadsheet…" }).click();
-    await page.locator("#profile-paste").fill("Depth (m)\tSalinity (g/kg)\tTemperature (degC)\n0\t38.0\t24\n6\t38.3\t22\n18\t38.6\t19");
+    await page
+      .locator("#profile-paste")
+      .fill("Depth (m)\tSalinity (g/kg)\tTemperature (degC)\n0\t38.0\t24\n6\t38.3\t22\n18\t38.6\t19");
     await page.getByRole("button", { name: "Use these rows" }).click();
     expect(await page.locator(".profile-table tbody tr").count(), "three rows").toBe(3);
-    await expect.poll(() => page.locator("[data-role=engine-status]").textContent(), { message: "runs with the profile", timeout: 15_000 }).toMatch(/Up to date/);
+    await expect
+      .poll(() => page.locator("[data-role=engine-status]").textContent(), {
+        message: "runs with the profile",
+        timeout: 15_000,
+      })
+      .toMatch(/Up to date/);
     await page.locator(".profile-table").scrollIntoViewIfNeeded();
     await page.screenshot({ path: join(artifacts, "app-profile.png") });
     await page.keyboard.press("Control+z");
@@ -228,7 +291,10 @@ describe("the built app", () => {
   });
 
   it("exports an HTML report with the caution and the 3D view embedded", async () => {
-    const [download] = await Promise.all([page.waitForEvent("download"), page.getByRole("button", { name: "Export report" }).click()]);
+    const [download] = await Promise.all([
+      page.waitForEvent("download"),
+      page.getByRole("button", { name: "Export report" }).click(),
+    ]);
     const path = join(artifacts, "app-report.html");
     await download.saveAs(path);
     const html = readFileSync(path, "utf8");
@@ -241,7 +307,9 @@ describe("the built app", () => {
     await page.click("[data-units=us]");
     const depthUnit = page.locator('input[data-path="ambient.depth"] + .unit');
     expect(await depthUnit.textContent(), "depth in feet").toBe("ft");
-    await expect.poll(() => cell(page, "integral:Impact distance").textContent(), { message: "results in feet" }).toMatch(/ft$/);
+    await expect
+      .poll(() => cell(page, "integral:Impact distance").textContent(), { message: "results in feet" })
+      .toMatch(/ft$/);
     await page.waitForTimeout(300);
     await page.screenshot({ path: join(artifacts, "app-us-units.png") });
     await page.click("[data-units=si]");
@@ -256,13 +324,16 @@ describe("the built app", () => {
     expect(await page.locator("[data-demo]").count(), "every bundled demo is offered").toBe(demoFiles().length);
     await page.screenshot({ path: join(artifacts, "app-start-view.png") });
     await page.keyboard.press("Escape");
-    await expect.poll(() => page.locator("[data-role=start-view]").count(), { message: "Escape closes the start view" }).toBe(0);
+    await expect
+      .poll(() => page.locator("[data-role=start-view]").count(), { message: "Escape closes the start view" })
+      .toBe(0);
   });
 
   it("keeps keyboard focus inside the start view and its question, and Escape closes only the front one", async () => {
     await page.click("[data-command=start]");
     await page.locator("[data-role=start-view]").waitFor();
-    const insideStart = () => page.evaluate(() => document.querySelector("[data-role=start-view]")?.contains(document.activeElement) ?? false);
+    const insideStart = () =>
+      page.evaluate(() => document.querySelector("[data-role=start-view]")?.contains(document.activeElement) ?? false);
     expect(await insideStart(), "focus moves into the start view when it opens").toBe(true);
     for (let i = 0; i < 25; i++) await page.keyboard.press("Tab");
     expect(await insideStart(), "Tab cycles within the start view, not the page behind it").toBe(true);
@@ -277,26 +348,42 @@ describe("the built app", () => {
     await question.waitFor();
     expect(await page.evaluate(() => document.activeElement?.textContent), "the safe choice has focus").toBe("Cancel");
     for (let i = 0; i < 7; i++) await page.keyboard.press("Tab");
-    expect(await question.evaluate((el) => el.contains(document.activeElement)), "Tab stays in the question").toBe(true);
+    expect(await question.evaluate((el) => el.contains(document.activeElement)), "Tab stays in the question").toBe(
+      true,
+    );
     await page.keyboard.press("Escape");
     expect(await question.count(), "Escape closes the question").toBe(0);
     expect(await page.locator("[data-role=start-view]").count(), "the start view behind it stays open").toBe(1);
     await page.keyboard.press("Escape");
-    await expect.poll(() => page.locator("[data-role=start-view]").count(), { message: "a second Escape closes the start view" }).toBe(0);
-    expect(await page.locator('input[data-path="description"]').inputValue(), "the edit is kept").toBe("edited before the question");
+    await expect
+      .poll(() => page.locator("[data-role=start-view]").count(), { message: "a second Escape closes the start view" })
+      .toBe(0);
+    expect(await page.locator('input[data-path="description"]').inputValue(), "the edit is kept").toBe(
+      "edited before the question",
+    );
     await page.keyboard.press("Control+z");
-    await expect.poll(() => page.locator(".doc-title .dirty-dot").count(), { message: "undone: the document is clean again" }).toBe(0);
+    await expect
+      .poll(() => page.locator(".doc-title .dirty-dot").count(), { message: "undone: the document is clean again" })
+      .toBe(0);
   });
 
   it("opens a scenario file dropped on the window", async () => {
-    const text = readFileSync(join(root, "demo-scenarios", demoFiles()[0]), "utf8").replace(/"name":\s*"[^"]*"/, '"name": "Dropped scenario"');
+    const text = readFileSync(join(root, "demo-scenarios", demoFiles()[0]), "utf8").replace(
+      /"name":\s*"[^"]*"/,
+      '"name": "Dropped scenario"',
+    );
     await page.evaluate((content: string) => {
       const transfer = new DataTransfer();
       transfer.items.add(new File([content], "dropped.json", { type: "application/json" }));
       window.dispatchEvent(new DragEvent("dragover", { dataTransfer: transfer, cancelable: true, bubbles: true }));
       window.dispatchEvent(new DragEvent("drop", { dataTransfer: transfer, cancelable: true, bubbles: true }));
     }, text);
-    await expect.poll(() => page.locator(".doc-title").textContent(), { message: "the dropped file is the document", timeout: 10_000 }).toMatch(/Dropped scenario/);
+    await expect
+      .poll(() => page.locator(".doc-title").textContent(), {
+        message: "the dropped file is the document",
+        timeout: 10_000,
+      })
+      .toMatch(/Dropped scenario/);
     await page.locator("[data-role=headline-table]").waitFor();
   });
 
@@ -304,18 +391,30 @@ describe("the built app", () => {
     await page.locator('input[data-path="name"]').fill("Edited before the drop");
     await page.locator('input[data-path="name"]').blur();
     const dropNamed = (name: string, content: string) =>
-      page.evaluate(({ name, content }: { name: string; content: string }) => {
-        const transfer = new DataTransfer();
-        transfer.items.add(new File([content], name));
-        window.dispatchEvent(new DragEvent("dragover", { dataTransfer: transfer, cancelable: true, bubbles: true }));
-        window.dispatchEvent(new DragEvent("drop", { dataTransfer: transfer, cancelable: true, bubbles: true }));
-      }, { name, content });
+      page.evaluate(
+        ({ name, content }: { name: string; content: string }) => {
+          const transfer = new DataTransfer();
+          transfer.items.add(new File([content], name));
+          window.dispatchEvent(new DragEvent("dragover", { dataTransfer: transfer, cancelable: true, bubbles: true }));
+          window.dispatchEvent(new DragEvent("drop", { dataTransfer: transfer, cancelable: true, bubbles: true }));
+        },
+        { name, content },
+      );
     await dropNamed("photo.png", "\u0089PNG\r\n\u001a\nnot a scenario");
-    await expect.poll(() => page.locator("[data-role=notice]").textContent(), { message: "the refusal is explained" }).toMatch(/photo\.png: .*not valid JSON/);
-    expect(await page.locator('[role="dialog"], [role="alertdialog"]').count(), "no unsaved-changes prompt for a file that cannot open").toBe(0);
-    expect(await page.locator('input[data-path="name"]').inputValue(), "the edited document stays").toBe("Edited before the drop");
+    await expect
+      .poll(() => page.locator("[data-role=notice]").textContent(), { message: "the refusal is explained" })
+      .toMatch(/photo\.png: .*not valid JSON/);
+    expect(
+      await page.locator('[role="dialog"], [role="alertdialog"]').count(),
+      "no unsaved-changes prompt for a file that cannot open",
+    ).toBe(0);
+    expect(await page.locator('input[data-path="name"]').inputValue(), "the edited document stays").toBe(
+      "Edited before the drop",
+    );
     await dropNamed("study.json", JSON.stringify({ format: "brinefield-study", version: 1 }));
-    await expect.poll(() => page.locator("[data-role=notice]").textContent(), { message: "another Brinefield format is named" }).toMatch(/study\.json: .*brinefield-study/);
+    await expect
+      .poll(() => page.locator("[data-role=notice]").textContent(), { message: "another Brinefield format is named" })
+      .toMatch(/study\.json: .*brinefield-study/);
     expect(await page.locator(".doc-title .dirty-dot").count(), "the edits are still unsaved").toBe(1);
     const textDropCancelled = await page.evaluate(() => {
       const transfer = new DataTransfer();
@@ -335,7 +434,9 @@ describe("the built app", () => {
     const recover = page.getByRole("button", { name: "Recover it" });
     await recover.waitFor({ timeout: 30_000 });
     await recover.click();
-    await expect.poll(() => page.locator('input[data-path="name"]').inputValue(), { message: "recovered name" }).toBe("Autosaved edit");
+    await expect
+      .poll(() => page.locator('input[data-path="name"]').inputValue(), { message: "recovered name" })
+      .toBe("Autosaved edit");
     expect(await page.locator(".doc-title .dirty-dot").count(), "recovered work is still unsaved").toBe(1);
     // Recovered work is unsaved work: it stays autosaved, so a crash right after recovering loses nothing.
     await page.reload();
@@ -347,9 +448,15 @@ describe("the built app", () => {
   it("mounts the study panel in the Study tab", async () => {
     await page.click("[data-command=study]");
     await expect
-      .poll(() => page.locator(".study-workspace").evaluate((el) => el.textContent ?? ""), { message: "study panel loaded", timeout: 20_000 })
+      .poll(() => page.locator(".study-workspace").evaluate((el) => el.textContent ?? ""), {
+        message: "study panel loaded",
+        timeout: 20_000,
+      })
       .not.toMatch(/Loading study tools/);
-    expect(await page.locator(".study-workspace [data-role=caution]").isVisible(), "caution stays visible on the Study tab").toBe(true);
+    expect(
+      await page.locator(".study-workspace [data-role=caution]").isVisible(),
+      "caution stays visible on the Study tab",
+    ).toBe(true);
     await page.waitForTimeout(500);
     await page.screenshot({ path: join(artifacts, "app-study-tab.png") });
     await page.click("[data-command=design]");
@@ -364,7 +471,10 @@ describe("the built app", () => {
     await page.fill("[data-field=claim-dilution]", "1.5");
     await page.click("[data-command=check-claim]");
     await panel.locator("[data-claim-verdict]").waitFor({ timeout: 30_000 });
-    expect(await panel.locator("[data-claim-verdict]").getAttribute("data-claim-verdict"), "1.5 is below every case's edge dilution").toBe("supported");
+    expect(
+      await panel.locator("[data-claim-verdict]").getAttribute("data-claim-verdict"),
+      "1.5 is below every case's edge dilution",
+    ).toBe("supported");
     expect(await panel.locator("svg[data-figure=claim-range-bar]").count(), "the range bar").toBe(1);
     expect(await panel.textContent(), "the caution").toContain("screening estimate");
     await panel.screenshot({ path: join(artifacts, "app-claim-panel.png") });
@@ -378,12 +488,22 @@ describe("the built app", () => {
     const before = await diameter();
     await page.click("[data-command=study]");
     await page.click("[data-study=design]", { timeout: 20_000 });
-    await expect.poll(() => page.locator("[data-command=study-design]").isDisabled(), { message: "scenario read", timeout: 30_000 }).toBe(false);
+    await expect
+      .poll(() => page.locator("[data-command=study-design]").isDisabled(), {
+        message: "scenario read",
+        timeout: 30_000,
+      })
+      .toBe(false);
     await page.locator(".study-form label", { hasText: "max ports" }).locator("input").fill("2");
     await page.click("[data-command=study-design]");
     await page.locator("[data-role=design-headline]").waitFor({ timeout: 120_000 });
-    expect(await page.locator("[data-role=design-rule]").textContent(), "the ranking rule is shown").toMatch(/fewest ports/);
-    expect(await page.locator("[data-command=apply-design]").count(), "the island-cove demo has passing designs with two ports").toBeGreaterThan(0);
+    expect(await page.locator("[data-role=design-rule]").textContent(), "the ranking rule is shown").toMatch(
+      /fewest ports/,
+    );
+    expect(
+      await page.locator("[data-command=apply-design]").count(),
+      "the island-cove demo has passing designs with two ports",
+    ).toBeGreaterThan(0);
     await page.locator("[data-command=apply-design]").first().click();
     await page.click("[data-command=design]");
     await page.locator("[data-role=headline-table]").waitFor();
@@ -400,11 +520,15 @@ describe("the built app", () => {
     }, text);
     const capture = await context.newPage();
     capture.on("console", (m) => {
-      if (m.type() === "error" || /Content Security Policy/i.test(m.text())) consoleProblems.push(`capture: ${m.text()}`);
+      if (m.type() === "error" || /Content Security Policy/i.test(m.text()))
+        consoleProblems.push(`capture: ${m.text()}`);
     });
     await capture.goto(`${server.url}?capture=3d`);
     await capture.waitForFunction(() => document.body.dataset.ready === "true", undefined, { timeout: 60_000 });
-    expect(await capture.locator(".inputs, [data-role=results]").count(), "no inputs or results on the capture route").toBe(0);
+    expect(
+      await capture.locator(".inputs, [data-role=results]").count(),
+      "no inputs or results on the capture route",
+    ).toBe(0);
     const sample = await sampleCanvas(capture);
     expect(sample.width, "canvas fills the window width").toBeGreaterThanOrEqual(1000);
     expect(sample.contentFraction, "capture is not blank").toBeGreaterThan(0.33);

@@ -42,9 +42,15 @@ describe("Print / PDF in the web build", () => {
     });
     const [report] = await Promise.all([context.waitForEvent("page"), page.click("[data-command=print-pdf]")]);
     await report.waitForLoadState("load");
-    expect(await report.locator("h1").first().textContent(), "the report's title").toMatch(/Brine outfall screening report/);
+    expect(await report.locator("h1").first().textContent(), "the report's title").toMatch(
+      /Brine outfall screening report/,
+    );
     expect(await report.textContent("body"), "the caution").toContain("Caution: screening estimate only");
-    await expect.poll(() => report.evaluate(() => (window as unknown as { __printed?: number }).__printed ?? 0), { message: "print() called" }).toBeGreaterThan(0);
+    await expect
+      .poll(() => report.evaluate(() => (window as unknown as { __printed?: number }).__printed ?? 0), {
+        message: "print() called",
+      })
+      .toBeGreaterThan(0);
     expect(await page.locator("[data-role=notice]").textContent(), "the app says what happened").toMatch(/Save as PDF/);
     await context.close();
   });

@@ -27,9 +27,24 @@ function newestSource(dir: string): number {
 
 function ensureBuilt(): void {
   const index = join(dist, "index.html");
-  const sources = Math.max(newestSource(join(root, "renderer")), newestSource(join(root, "core")), newestSource(join(root, "demo-scenarios")));
+  const sources = Math.max(
+    newestSource(join(root, "renderer")),
+    newestSource(join(root, "core")),
+    newestSource(join(root, "demo-scenarios")),
+  );
   if (existsSync(index) && statSync(index).mtimeMs > sources) return;
-  const run = spawnSync(process.execPath, [join(root, "node_modules/vite/bin/vite.js"), "build", "--config", "renderer/vite.config.ts", "--logLevel", "error"], { cwd: root, encoding: "utf8", timeout: 240_000 });
+  const run = spawnSync(
+    process.execPath,
+    [
+      join(root, "node_modules/vite/bin/vite.js"),
+      "build",
+      "--config",
+      "renderer/vite.config.ts",
+      "--logLevel",
+      "error",
+    ],
+    { cwd: root, encoding: "utf8", timeout: 240_000 },
+  );
   if (run.status !== 0) throw new Error(`renderer build failed: ${run.stderr || run.stdout}`);
 }
 
@@ -66,7 +81,10 @@ describe("ambient record in the app", () => {
     expect(summary).toMatch(/Plant intake 350 m/);
     expect(await page.locator("[data-role=verdict]").textContent()).toMatch(/record of 720 steps/);
     await page.locator("[data-command=chart-record]").click();
-    expect(await page.locator("[data-role=record-time-chart] svg").count(), "edge dilution and salinity increase against time").toBe(2);
+    expect(
+      await page.locator("[data-role=record-time-chart] svg").count(),
+      "edge dilution and salinity increase against time",
+    ).toBe(2);
     await page.locator("[data-command=chart-duration]").click();
     expect(await page.locator("[data-role=record-duration-chart] #record-duration-chart").count()).toBe(1);
     await page.screenshot({ path: join(artifacts, "app-record.png") });
@@ -82,15 +100,24 @@ describe("ambient record in the app", () => {
     await page.locator("[data-role=record-status][data-state=running]").waitFor({ timeout: 60_000 });
     await page.locator("[data-command=record-cancel]").click();
     await page.locator("[data-role=record-status][data-state=cancelled]").waitFor({ timeout: 30_000 });
-    expect(await page.locator("[data-role=verdict]").getAttribute("data-verdict"), "no verdict without the record").toBe("outside-scope");
+    expect(
+      await page.locator("[data-role=verdict]").getAttribute("data-verdict"),
+      "no verdict without the record",
+    ).toBe("outside-scope");
   }, 120_000);
 
   it("a pasted record is saved in the scenario and run", async () => {
     await page.locator("[data-command=record-paste]").click();
-    await page.locator("[data-role=record-paste-text]").fill("time (h),currentSpeed (m/s),currentDirection (deg)\n0,0.1,40\n1,0.3,220\n2,0.05,40\n");
+    await page
+      .locator("[data-role=record-paste-text]")
+      .fill("time (h),currentSpeed (m/s),currentDirection (deg)\n0,0.1,40\n1,0.3,220\n2,0.05,40\n");
     await page.locator("[data-command=record-use-paste]").click();
     await page.screenshot({ path: join(artifacts, "app-record-paste.png") });
-    await expect.poll(() => page.locator("[data-role=record-steps]").textContent(), { timeout: 30_000 }).toMatch(/3 steps/);
-    await expect.poll(() => page.locator("[data-role=record-summary]").textContent(), { timeout: 60_000 }).toMatch(/Ambient record: 3 steps/);
+    await expect
+      .poll(() => page.locator("[data-role=record-steps]").textContent(), { timeout: 30_000 })
+      .toMatch(/3 steps/);
+    await expect
+      .poll(() => page.locator("[data-role=record-summary]").textContent(), { timeout: 60_000 })
+      .toMatch(/Ambient record: 3 steps/);
   }, 120_000);
 });

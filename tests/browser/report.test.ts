@@ -46,7 +46,8 @@ function readPgm(path: string): Page {
 /** Fraction of pixels darker than `threshold` in rows [fromRow, toRow). */
 function inkFraction(p: Page, threshold: number, fromRow = 0, toRow = p.height): number {
   let ink = 0;
-  for (let y = fromRow; y < toRow; y++) for (let x = 0; x < p.width; x++) if (p.pixels[y * p.width + x]! < threshold) ink++;
+  for (let y = fromRow; y < toRow; y++)
+    for (let x = 0; x < p.width; x++) if (p.pixels[y * p.width + x]! < threshold) ink++;
   return ink / ((toRow - fromRow) * p.width);
 }
 
@@ -69,17 +70,25 @@ beforeAll(async () => {
   } catch (err) {
     captureProblem = err instanceof Error ? err.message : String(err);
   }
-  html = reportHtml(result, { scenarioFile: JSON.parse(text), scenarioText: text }, {
-    generatedAt: "2026-12-02T06:00:00Z",
-    ...(png ? { view3dPng: png } : { view3dNote: `the 3D view could not be rendered (${captureProblem})` }),
-  });
+  html = reportHtml(
+    result,
+    { scenarioFile: JSON.parse(text), scenarioText: text },
+    {
+      generatedAt: "2026-12-02T06:00:00Z",
+      ...(png ? { view3dPng: png } : { view3dNote: `the 3D view could not be rendered (${captureProblem})` }),
+    },
+  );
   pdf = await pdfFromHtml(html);
   writeFileSync(join(dir, "report.pdf"), pdf);
   execFileSync("pdftoppm", ["-gray", "-r", "40", join(dir, "report.pdf"), join(dir, "page")]);
-  const files = readdirSync(dir).filter((f) => f.endsWith(".pgm")).sort();
+  const files = readdirSync(dir)
+    .filter((f) => f.endsWith(".pgm"))
+    .sort();
   pages = files.map((f) => readPgm(join(dir, f)));
   pageTexts = pages.map((_, i) =>
-    execFileSync("pdftotext", ["-f", String(i + 1), "-l", String(i + 1), "-layout", join(dir, "report.pdf"), "-"], { encoding: "utf8" }),
+    execFileSync("pdftotext", ["-f", String(i + 1), "-l", String(i + 1), "-layout", join(dir, "report.pdf"), "-"], {
+      encoding: "utf8",
+    }),
   );
 }, 150_000);
 
@@ -145,7 +154,9 @@ describe("the report printed to PDF", () => {
       const covered = inkFraction(pages[page]!, 245);
       expect(covered, `page ${page + 1} is largely covered by the picture`).toBeGreaterThan(0.2);
     } else {
-      expect(html, "the report states the reason").toContain("No 3D view is included: the 3D view could not be rendered (");
+      expect(html, "the report states the reason").toContain(
+        "No 3D view is included: the 3D view could not be rendered (",
+      );
     }
   });
 });

@@ -35,13 +35,28 @@ function newestSource(dir: string): number {
 /** Builds the renderer unless dist/renderer is newer than every renderer, core and demo source. */
 function ensureBuilt(): void {
   const index = join(dist, "index.html");
-  const sources = Math.max(newestSource(join(root, "renderer")), newestSource(join(root, "core")), newestSource(join(root, "demo-scenarios")));
+  const sources = Math.max(
+    newestSource(join(root, "renderer")),
+    newestSource(join(root, "core")),
+    newestSource(join(root, "demo-scenarios")),
+  );
   if (existsSync(index) && statSync(index).mtimeMs > sources) return;
-  const run = spawnSync(process.execPath, [join(root, "node_modules/vite/bin/vite.js"), "build", "--config", "renderer/vite.config.ts", "--logLevel", "error"], {
-    cwd: root,
-    encoding: "utf8",
-    timeout: 240_000,
-  });
+  const run = spawnSync(
+    process.execPath,
+    [
+      join(root, "node_modules/vite/bin/vite.js"),
+      "build",
+      "--config",
+      "renderer/vite.config.ts",
+      "--logLevel",
+      "error",
+    ],
+    {
+      cwd: root,
+      encoding: "utf8",
+      timeout: 240_000,
+    },
+  );
   if (run.status !== 0) throw new Error(`renderer build failed: ${run.stderr || run.stdout}`);
 }
 
@@ -108,11 +123,16 @@ describe("a study as a document in the app", () => {
     await page.locator("[data-role=variant-editor]").waitFor({ timeout: 30_000 });
     expect(await page.locator("[data-role=doc-kind]").textContent(), "the title marks a study").toBe("Study");
     expect(await page.locator(".doc-title").textContent(), "the study's name").toContain("Island cove options");
-    expect(await page.locator("[data-variant]").evaluateAll((els) => els.map((e) => e.getAttribute("data-variant")))).toEqual(["deeper", "stronger current"]);
+    expect(
+      await page.locator("[data-variant]").evaluateAll((els) => els.map((e) => e.getAttribute("data-variant"))),
+    ).toEqual(["deeper", "stronger current"]);
     // The override is listed in words with its base value, not as a raw path.
     const changes = page.locator("[data-role=variant-changes]");
     expect(await changes.textContent(), "the change in words").toMatch(/water depth: 25 m \(base 18 m\)/);
-    expect(await page.locator('.variant-fields input[data-path="ambient.depth"]').inputValue(), "the Design tab's field shows the variant's value").toBe("25");
+    expect(
+      await page.locator('.variant-fields input[data-path="ambient.depth"]').inputValue(),
+      "the Design tab's field shows the variant's value",
+    ).toBe("25");
     expect(await page.locator(".doc-title .dirty-dot").count(), "a freshly opened study is clean").toBe(0);
   });
 
@@ -120,10 +140,15 @@ describe("a study as a document in the app", () => {
     await portCount().fill("4");
     await portCount().press("Tab");
     await page.locator('[data-change="diffuser.portCount"]').waitFor();
-    expect(await page.locator('[data-change="diffuser.portCount"]').textContent(), "named in words").toMatch(/ports: 4 \(base 2\)/);
+    expect(await page.locator('[data-change="diffuser.portCount"]').textContent(), "named in words").toMatch(
+      /ports: 4 \(base 2\)/,
+    );
     await page.click("[data-command=design]");
     await page.locator("[data-role=headline-table]").waitFor();
-    expect(await page.locator('input[data-path="diffuser.portCount"]').inputValue(), "the base scenario keeps its two ports").toBe("2");
+    expect(
+      await page.locator('input[data-path="diffuser.portCount"]').inputValue(),
+      "the base scenario keeps its two ports",
+    ).toBe("2");
     await page.click("[data-command=study]");
     await page.locator("[data-role=variant-editor]").waitFor();
     expect(await portCount().inputValue(), "the variant's edit survived the tab switch").toBe("4");
@@ -131,7 +156,9 @@ describe("a study as a document in the app", () => {
     expect(await page.locator(".doc-title .dirty-dot").count(), "the edit made the study unsaved").toBe(1);
 
     await page.click("[data-command=undo]");
-    await expect.poll(() => page.locator('[data-change="diffuser.portCount"]').count(), { message: "undo removes the edit" }).toBe(0);
+    await expect
+      .poll(() => page.locator('[data-change="diffuser.portCount"]').count(), { message: "undo removes the edit" })
+      .toBe(0);
     expect(await page.locator(".doc-title .dirty-dot").count(), "undoing to the opened study is clean").toBe(0);
     await page.click("[data-command=redo]");
     await expect.poll(() => portCount().inputValue(), { message: "redo brings it back" }).toBe("4");
@@ -144,12 +171,21 @@ describe("a study as a document in the app", () => {
     const text = readFileSync(path, "utf8");
     const { study, variants, overall } = compareStudyText(text);
     expect(study.format).toBe("brinefield-study");
-    expect(study.variants?.map((v) => v.name), "both variants").toEqual(["deeper", "stronger current"]);
-    expect(study.variants?.[0]?.overrides, "the edit is an override of the base").toEqual({ "ambient.depth": "25 m", "diffuser.portCount": 4 });
+    expect(
+      study.variants?.map((v) => v.name),
+      "both variants",
+    ).toEqual(["deeper", "stronger current"]);
+    expect(study.variants?.[0]?.overrides, "the edit is an override of the base").toEqual({
+      "ambient.depth": "25 m",
+      "diffuser.portCount": 4,
+    });
     const deeper = variants.find((v) => v.name === "deeper")!;
     expect(deeper.scenario?.diffuser.portCount, "compare reads four ports").toBe(4);
     expect(deeper.scenario?.ambient.depth, "and 25 m of water").toBe(25);
-    expect(overall.map((r) => r.variant), "one overall row per variant and the base").toEqual(["base", "deeper", "stronger current"]);
+    expect(
+      overall.map((r) => r.variant),
+      "one overall row per variant and the base",
+    ).toEqual(["base", "deeper", "stronger current"]);
     for (const r of overall) expect(["meets", "exceeds", "outside-scope"], `${r.variant} runs`).toContain(r.verdict);
   });
 
@@ -169,15 +205,22 @@ describe("a study as a document in the app", () => {
     const governing = page.locator("[data-role=compare-governing] li");
     expect(await governing.count(), "one line per variant and the base").toBe(3);
     const chains = await page.locator("[data-role=governing-chain]").allTextContents();
-    expect(chains.every((c) => /near field/.test(c)), `each names its method chain: ${chains.join(" | ")}`).toBe(true);
-    expect(await page.locator("svg[data-figure=compare-margins]").textContent(), "margin 1 marked").toMatch(/margin 1 = limit just met/);
+    expect(
+      chains.every((c) => /near field/.test(c)),
+      `each names its method chain: ${chains.join(" | ")}`,
+    ).toBe(true);
+    expect(await page.locator("svg[data-figure=compare-margins]").textContent(), "margin 1 marked").toMatch(
+      /margin 1 = limit just met/,
+    );
     const headers = await page.locator("[data-role=study-variants-table] th").allTextContents();
     expect(headers.length, "a chosen set of columns, not all of them").toBeLessThanOrEqual(8);
     expect(headers.join("|")).toMatch(/method chain to the edge/);
     // Every column is still there on demand.
     await page.locator(".compare-columns summary").click();
     await page.locator('[data-column="integralImpactDistance"]').check();
-    expect((await page.locator("[data-role=study-variants-table] th").allTextContents()).join("|")).toMatch(/integral impact distance \(m\)/);
+    expect((await page.locator("[data-role=study-variants-table] th").allTextContents()).join("|")).toMatch(
+      /integral impact distance \(m\)/,
+    );
     await page.locator('[data-column="integralImpactDistance"]').uncheck();
     // The table fits the screen: no horizontal overflow of the page.
     const overflow = await page.locator(".study-panel").evaluate((el) => el.scrollWidth - el.clientWidth);
@@ -199,24 +242,39 @@ describe("a study as a document in the app", () => {
     await page.click("[data-command=variant-open-as-scenario]");
     await page.locator("[data-role=headline-table]").waitFor({ timeout: 30_000 });
     expect(await page.locator("[data-role=doc-kind]").count(), "a scenario now").toBe(0);
-    expect(await page.locator('input[data-path="diffuser.portCount"]').inputValue(), "the variant's four ports").toBe("4");
+    expect(await page.locator('input[data-path="diffuser.portCount"]').inputValue(), "the variant's four ports").toBe(
+      "4",
+    );
     expect(await page.locator('input[data-path="ambient.depth"]').inputValue(), "in 25 m of water").toBe("25");
     expect(await page.locator(".doc-title").textContent(), "named after the variant").toContain("deeper");
   });
 
   it("refuses a study whose base scenario is a separate file, with a message that says what to do", async () => {
     const path = join(artifacts, "study-base-by-path.json");
-    writeFileSync(path, JSON.stringify({ format: "brinefield-study", version: 1, name: "by path", base: "site.json", variants: [] }));
+    writeFileSync(
+      path,
+      JSON.stringify({ format: "brinefield-study", version: 1, name: "by path", base: "site.json", variants: [] }),
+    );
     await page.click("[data-command=open]");
-    const [chooser] = await Promise.all([page.waitForEvent("filechooser"), page.getByRole("button", { name: "Discard changes" }).click()]);
+    const [chooser] = await Promise.all([
+      page.waitForEvent("filechooser"),
+      page.getByRole("button", { name: "Discard changes" }).click(),
+    ]);
     await chooser.setFiles(path);
-    await expect.poll(() => page.locator("[data-role=notice]").textContent(), { message: "the notice" }).toMatch(/base scenario by file \("site\.json"\).*brinefield compare/);
+    await expect
+      .poll(() => page.locator("[data-role=notice]").textContent(), { message: "the notice" })
+      .toMatch(/base scenario by file \("site\.json"\).*brinefield compare/);
   });
 
   it("draws a sweep with axis titles in words and units, readable ticks, a legend, a table and a CSV", async () => {
     await page.click("[data-command=study]");
     await page.click("[data-study=sweep]");
-    await expect.poll(() => page.locator("[data-command=study-sweep]").isDisabled(), { message: "scenario read", timeout: 30_000 }).toBe(false);
+    await expect
+      .poll(() => page.locator("[data-command=study-sweep]").isDisabled(), {
+        message: "scenario read",
+        timeout: 30_000,
+      })
+      .toBe(false);
     const steps = page.locator(".study-form").first().locator("label", { hasText: "steps" }).locator("input");
     await steps.fill("6");
     await page.click("[data-command=study-sweep]");
@@ -226,7 +284,11 @@ describe("a study as a document in the app", () => {
     expect(words, "x axis title in words with its unit").toContain("Current speed (m/s)");
     expect(words, "no raw paths on the chart").not.toMatch(/ambient\.currentSpeed/);
     // No two tick labels overprint.
-    const boxes = await chart.locator("text.tick").evaluateAll((els) => els.map((e) => e.getBoundingClientRect()).map((r) => ({ x: r.x, y: r.y, w: r.width, h: r.height })));
+    const boxes = await chart
+      .locator("text.tick")
+      .evaluateAll((els) =>
+        els.map((e) => e.getBoundingClientRect()).map((r) => ({ x: r.x, y: r.y, w: r.width, h: r.height })),
+      );
     for (let i = 0; i < boxes.length; i++) {
       for (let k = i + 1; k < boxes.length; k++) {
         const a = boxes[i]!;
@@ -235,7 +297,9 @@ describe("a study as a document in the app", () => {
         expect(overlap, `tick labels ${i} and ${k} overprint`).toBe(false);
       }
     }
-    expect(await page.locator(".chart-legend").textContent(), "legend").toMatch(/required dilution.*meets.*exceeds.*outside scope/);
+    expect(await page.locator(".chart-legend").textContent(), "legend").toMatch(
+      /required dilution.*meets.*exceeds.*outside scope/,
+    );
     await page.screenshot({ path: join(artifacts, "study-sweep-1440x900.png") });
     await page.click("[data-command=sweep-table]");
     expect(await page.locator("[data-role=sweep-table] tbody tr").count(), "one row per point").toBe(6);
@@ -245,7 +309,10 @@ describe("a study as a document in the app", () => {
     await download.saveAs(csvPath);
     const lines = readFileSync(csvPath, "utf8").split(/\r?\n/);
     expect(lines[0], "the caution first").toMatch(/^"?Caution:/);
-    expect(lines.find((l) => l.startsWith("ambient.currentSpeed")), "the columns of sweep --csv").toMatch(/^ambient\.currentSpeed,governingCase,edgeDilution,requiredDilution,margin,verdict/);
+    expect(
+      lines.find((l) => l.startsWith("ambient.currentSpeed")),
+      "the columns of sweep --csv",
+    ).toMatch(/^ambient\.currentSpeed,governingCase,edgeDilution,requiredDilution,margin,verdict/);
     await page.click("[data-command=sweep-chart]");
     await page.getByRole("button", { name: "Add second input" }).click();
     await page.locator(".study-form").nth(1).locator("label", { hasText: "steps" }).locator("input").fill("4");
@@ -264,7 +331,9 @@ describe("a study as a document in the app", () => {
   it("explains a Monte Carlo run in words, with percentages and the histogram's required line and axes", async () => {
     await page.click("[data-study=monte-carlo]");
     await page.locator(".study-form label", { hasText: "runs" }).locator("input").fill("120");
-    await expect.poll(() => page.locator("[data-command=study-monte-carlo]").isDisabled(), { timeout: 30_000 }).toBe(false);
+    await expect
+      .poll(() => page.locator("[data-command=study-monte-carlo]").isDisabled(), { timeout: 30_000 })
+      .toBe(false);
     await page.click("[data-command=study-monte-carlo]");
     const figure = page.locator("[data-role=monte-carlo-histogram] svg[data-figure=uncertainty-histogram]");
     await figure.waitFor({ timeout: 180_000 });
@@ -275,7 +344,9 @@ describe("a study as a document in the app", () => {
     const explained = await page.locator("[data-role=monte-carlo-explanations]").textContent();
     expect(explained).toContain(PERCENTILE_MEANING);
     expect(explained).toContain(REFUSED_MEANING);
-    expect(await page.locator("[data-role=study-exceedance]").textContent(), "chance as a percentage").toMatch(/chance of not meeting the limit (\d+(\.\d+)?|< 0\.1|> 99\.9) %/);
+    expect(await page.locator("[data-role=study-exceedance]").textContent(), "chance as a percentage").toMatch(
+      /chance of not meeting the limit (\d+(\.\d+)?|< 0\.1|> 99\.9) %/,
+    );
     await figure.scrollIntoViewIfNeeded();
     await page.screenshot({ path: join(artifacts, "study-monte-carlo-1440x900.png") });
     await page.setViewportSize({ width: 1280, height: 720 });
@@ -286,11 +357,19 @@ describe("a study as a document in the app", () => {
 
   it("opens a design-search row as a scenario", async () => {
     await page.click("[data-study=design]");
-    await expect.poll(() => page.locator("[data-command=study-design]").isDisabled(), { message: "scenario read", timeout: 30_000 }).toBe(false);
+    await expect
+      .poll(() => page.locator("[data-command=study-design]").isDisabled(), {
+        message: "scenario read",
+        timeout: 30_000,
+      })
+      .toBe(false);
     await page.locator(".study-form label", { hasText: "max ports" }).locator("input").fill("2");
     await page.click("[data-command=study-design]");
     await page.locator("[data-role=design-headline]").waitFor({ timeout: 120_000 });
-    expect(await page.locator("[data-command=design-open-as-scenario]").count(), "every listed design can be opened").toBeGreaterThan(0);
+    expect(
+      await page.locator("[data-command=design-open-as-scenario]").count(),
+      "every listed design can be opened",
+    ).toBeGreaterThan(0);
     await page.locator("[data-command=design-open-as-scenario]").first().click();
     // The open document (the variant opened earlier) has unsaved changes: asked first.
     await page.getByRole("button", { name: "Discard changes" }).click();

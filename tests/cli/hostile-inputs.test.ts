@@ -7,7 +7,18 @@
  */
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { spawnSync } from "node:child_process";
-import { chmodSync, mkdirSync, mkdtempSync, readFileSync, rmSync, statSync, symlinkSync, truncateSync, writeFileSync, readdirSync } from "node:fs";
+import {
+  chmodSync,
+  mkdirSync,
+  mkdtempSync,
+  readFileSync,
+  rmSync,
+  statSync,
+  symlinkSync,
+  truncateSync,
+  writeFileSync,
+  readdirSync,
+} from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { cliMain, nodeIO } from "../../core/cli/main";
@@ -35,7 +46,11 @@ async function cli(...argv: string[]): Promise<Outcome> {
 }
 
 function spawnCli(args: string[], timeout = 60_000) {
-  return spawnSync(process.execPath, [join(root, "core/cli/launcher.mjs"), ...args], { cwd: dir, encoding: "utf8", timeout });
+  return spawnSync(process.execPath, [join(root, "core/cli/launcher.mjs"), ...args], {
+    cwd: dir,
+    encoding: "utf8",
+    timeout,
+  });
 }
 
 const NO_STACK = /\n\s+at \S+ \(|Maximum call stack|internal error/;
@@ -60,23 +75,59 @@ const COMMANDS: Record<string, (file: string) => string[]> = {
 
 /** Hostile files: name, bytes, and what the refusal must say. */
 const FILES: { name: string; bytes: () => Uint8Array | string; says: RegExp }[] = [
-  { name: "utf16le-bom.json", bytes: () => Buffer.concat([Buffer.from([0xff, 0xfe]), Buffer.from(demo, "utf16le")]), says: /UTF-16.*save it as UTF-8/ },
-  { name: "utf16be-bom.json", bytes: () => Buffer.concat([Buffer.from([0xfe, 0xff]), Buffer.from(demo, "utf16le").swap16()]), says: /UTF-16.*save it as UTF-8/ },
+  {
+    name: "utf16le-bom.json",
+    bytes: () => Buffer.concat([Buffer.from([0xff, 0xfe]), Buffer.from(demo, "utf16le")]),
+    says: /UTF-16.*save it as UTF-8/,
+  },
+  {
+    name: "utf16be-bom.json",
+    bytes: () => Buffer.concat([Buffer.from([0xfe, 0xff]), Buffer.from(demo, "utf16le").swap16()]),
+    says: /UTF-16.*save it as UTF-8/,
+  },
   { name: "utf16le-nobom.json", bytes: () => Buffer.from(demo, "utf16le"), says: /UTF-16/ },
-  { name: "latin1.json", bytes: () => Buffer.from(demo.replace("Island cove", "Île cove"), "latin1"), says: /not UTF-8/ },
+  {
+    name: "latin1.json",
+    bytes: () => Buffer.from(demo.replace("Island cove", "Île cove"), "latin1"),
+    says: /not UTF-8/,
+  },
   { name: "empty.json", bytes: () => "", says: /is empty/ },
   { name: "spaces.json", bytes: () => " \n\t ", says: /is empty/ },
-  { name: "deep-arrays.json", bytes: () => "[".repeat(10_000) + "]".repeat(10_000), says: new RegExp(`nested more than ${MAX_JSON_DEPTH} levels`) },
-  { name: "deep-objects.json", bytes: () => '{"a":'.repeat(10_000) + "1" + "}".repeat(10_000), says: /nested more than/ },
-  { name: "deep-in-scenario.json", bytes: () => demo.replace('"name":', `"deep": ${"[".repeat(5000)}${"]".repeat(5000)}, "name":`), says: /nested more than/ },
-  { name: "dup-top.json", bytes: () => demo.replace('"name":', '"name": "first", "name":'), says: /name: is given twice/ },
-  { name: "dup-nested.json", bytes: () => demo.replace('"depth": "18 m"', '"depth": "18 m", "depth": "500 m"'), says: /ambient\.depth: is given twice/ },
+  {
+    name: "deep-arrays.json",
+    bytes: () => "[".repeat(10_000) + "]".repeat(10_000),
+    says: new RegExp(`nested more than ${MAX_JSON_DEPTH} levels`),
+  },
+  {
+    name: "deep-objects.json",
+    bytes: () => '{"a":'.repeat(10_000) + "1" + "}".repeat(10_000),
+    says: /nested more than/,
+  },
+  {
+    name: "deep-in-scenario.json",
+    bytes: () => demo.replace('"name":', `"deep": ${"[".repeat(5000)}${"]".repeat(5000)}, "name":`),
+    says: /nested more than/,
+  },
+  {
+    name: "dup-top.json",
+    bytes: () => demo.replace('"name":', '"name": "first", "name":'),
+    says: /name: is given twice/,
+  },
+  {
+    name: "dup-nested.json",
+    bytes: () => demo.replace('"depth": "18 m"', '"depth": "18 m", "depth": "500 m"'),
+    says: /ambient\.depth: is given twice/,
+  },
   { name: "not-json.json", bytes: () => "depth: 12 m\n", says: /not valid JSON/ },
   { name: "truncated.json", bytes: () => demo.slice(0, 200), says: /not valid JSON/ },
   { name: "array.json", bytes: () => "[1, 2, 3]", says: /format|scenario|study|object/i },
   { name: "null.json", bytes: () => "null", says: /format|scenario|study|object/i },
   { name: "number.json", bytes: () => "42", says: /format|scenario|study|object/i },
-  { name: "png.json", bytes: () => Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a, 0, 0, 0, 0x0d]), says: /UTF-16|not UTF-8|not valid JSON/ },
+  {
+    name: "png.json",
+    bytes: () => Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a, 0, 0, 0, 0x0d]),
+    says: /UTF-16|not UTF-8|not valid JSON/,
+  },
 ];
 
 beforeAll(() => {
@@ -89,7 +140,13 @@ beforeAll(() => {
   symlinkSync(at("nowhere.json"), at("dangling.json"));
   writeFileSync(at("bom.json"), "\ufeff" + demo);
   writeFileSync(at("mine.json"), demo);
-  const study = { format: "brinefield-study", version: 1, name: "bom study", base: "bom.json", variants: [{ name: "deeper", overrides: { "ambient.depth": "20 m" } }] };
+  const study = {
+    format: "brinefield-study",
+    version: 1,
+    name: "bom study",
+    base: "bom.json",
+    variants: [{ name: "deeper", overrides: { "ambient.depth": "20 m" } }],
+  };
   writeFileSync(at("bom-study.json"), "\ufeff" + JSON.stringify(study));
 });
 afterAll(() => {
@@ -175,25 +232,59 @@ describe("outputs that must not be written", () => {
 
 describe("hostile option sets", () => {
   const cases: { args: () => string[]; says: RegExp }[] = [
-    { args: () => ["sweep", at("mine.json"), "--vary", "ambient.depth=10:30:500", "--vary", "ambient.currentSpeed=0:1:500"], says: /250000 points is more than the 40,000/ },
-    { args: () => ["sweep", at("mine.json"), "--vary", "ambient.depth=10:30:501"], says: /steps must be a whole number from 1 to 500/ },
+    {
+      args: () => [
+        "sweep",
+        at("mine.json"),
+        "--vary",
+        "ambient.depth=10:30:500",
+        "--vary",
+        "ambient.currentSpeed=0:1:500",
+      ],
+      says: /250000 points is more than the 40,000/,
+    },
+    {
+      args: () => ["sweep", at("mine.json"), "--vary", "ambient.depth=10:30:501"],
+      says: /steps must be a whole number from 1 to 500/,
+    },
     { args: () => ["sweep", at("mine.json"), "--vary", "ambient.depth=10:30:0"], says: /steps must be a whole number/ },
-    { args: () => ["sweep", at("mine.json"), "--vary", "ambient.depth=10:30:2", "--vary", "ambient.depth=10:20:2"], says: /varied twice/ },
+    {
+      args: () => ["sweep", at("mine.json"), "--vary", "ambient.depth=10:30:2", "--vary", "ambient.depth=10:20:2"],
+      says: /varied twice/,
+    },
     { args: () => ["sweep", at("mine.json"), "--vary", "nonsense"], says: /must look like path=from:to:steps/ },
     { args: () => ["sweep", at("mine.json"), "--vary", "ambient.depth=Infinity:30:2"], says: /ambient\.depth/ },
     { args: () => ["sweep", at("mine.json"), "--vary", "no.such.path=1:2:2"], says: /no\.such\.path/ },
     { args: () => ["sweep", at("mine.json")], says: /give one or two --vary/ },
-    { args: () => ["sweep", at("mine.json"), "--vary", "ambient.depth=10:30:2", "--workers", "0"], says: /--workers 0 must be/ },
+    {
+      args: () => ["sweep", at("mine.json"), "--vary", "ambient.depth=10:30:2", "--workers", "0"],
+      says: /--workers 0 must be/,
+    },
     { args: () => ["uncertainty", at("mine.json"), "--runs", "0"], says: /--runs 0 must be a whole number/ },
-    { args: () => ["uncertainty", at("mine.json"), "--runs", "1e9"], says: /--runs 1e9 must be a whole number from 1 to 1000000/ },
+    {
+      args: () => ["uncertainty", at("mine.json"), "--runs", "1e9"],
+      says: /--runs 1e9 must be a whole number from 1 to 1000000/,
+    },
     { args: () => ["uncertainty", at("mine.json"), "--runs", "abc"], says: /--runs abc/ },
     { args: () => ["uncertainty", at("mine.json"), "--runs", "2.5"], says: /--runs 2.5/ },
     { args: () => ["uncertainty", at("mine.json"), "--seed=-1"], says: /--seed -1/ },
     { args: () => ["uncertainty", at("mine.json"), "--seed", "99999999999"], says: /--seed/ },
-    { args: () => ["report", at("mine.json"), "--no-3d", "--out", at("r.html"), "--uncertainty", "0"], says: /--uncertainty 0/ },
-    { args: () => ["report", at("mine.json"), "--no-3d", "--out", at("r.html"), "--uncertainty", "1000000"], says: /--uncertainty/ },
-    { args: () => ["check-claim", at("mine.json"), "--claimed-dilution=-5"], says: /--claimed-dilution -5 is not possible: a dilution is at least 1/ },
-    { args: () => ["check-claim", at("mine.json"), "--claimed-dilution", "abc"], says: /--claimed-dilution "abc" must be a number/ },
+    {
+      args: () => ["report", at("mine.json"), "--no-3d", "--out", at("r.html"), "--uncertainty", "0"],
+      says: /--uncertainty 0/,
+    },
+    {
+      args: () => ["report", at("mine.json"), "--no-3d", "--out", at("r.html"), "--uncertainty", "1000000"],
+      says: /--uncertainty/,
+    },
+    {
+      args: () => ["check-claim", at("mine.json"), "--claimed-dilution=-5"],
+      says: /--claimed-dilution -5 is not possible: a dilution is at least 1/,
+    },
+    {
+      args: () => ["check-claim", at("mine.json"), "--claimed-dilution", "abc"],
+      says: /--claimed-dilution "abc" must be a number/,
+    },
     { args: () => ["check-claim", at("mine.json"), "--claimed-dilution", "Infinity"], says: /--claimed-dilution/ },
     { args: () => ["check-claim", at("mine.json")], says: /--claimed-dilution is required/ },
     { args: () => ["check-claim", at("mine.json"), "--claimed-dilution", "30", "--at=-1"], says: /--at -1/ },
@@ -220,7 +311,13 @@ describe("prototype keys and non-decimal numbers", () => {
     });
   }
   it("refuses a prototype key as a study override path (exit 2 naming the path)", async () => {
-    const study = { format: "brinefield-study", version: 1, name: "proto study", base: "mine.json", variants: [{ name: "evil", overrides: { constructor: -100 } }] };
+    const study = {
+      format: "brinefield-study",
+      version: 1,
+      name: "proto study",
+      base: "mine.json",
+      variants: [{ name: "evil", overrides: { constructor: -100 } }],
+    };
     writeFileSync(at("proto-study.json"), JSON.stringify(study));
     expectRefused(await cli("compare", at("proto-study.json")), /constructor/, "study override constructor");
   });
@@ -229,18 +326,29 @@ describe("prototype keys and non-decimal numbers", () => {
     expectRefused(o, /--sort __proto__: no such column/, "compare --sort __proto__");
   });
   it("refuses a hex number in a sweep range and in the scenario (exit 2 naming the field)", async () => {
-    expectRefused(await cli("sweep", at("mine.json"), "--vary", "ambient.depth=0x1E:30:2"), /--vary ambient\.depth: "from" must be a decimal number/, "hex in --vary");
+    expectRefused(
+      await cli("sweep", at("mine.json"), "--vary", "ambient.depth=0x1E:30:2"),
+      /--vary ambient\.depth: "from" must be a decimal number/,
+      "hex in --vary",
+    );
     const raw = demoRaw();
     raw.ambient.depth = "0x1E";
     writeFileSync(at("hex-depth.json"), JSON.stringify(raw));
-    expectRefused(await cli("run", at("hex-depth.json")), /ambient\.depth: "0x1E" must be a decimal number/, "hex depth");
+    expectRefused(
+      await cli("run", at("hex-depth.json")),
+      /ambient\.depth: "0x1E" must be a decimal number/,
+      "hex depth",
+    );
   });
   const limitStrings: { edit: (l: Record<string, unknown>) => void; says: RegExp }[] = [
     { edit: (l) => (l.maxIncrease = "1e400"), says: /maxIncrease: "1e400" must be a finite number/ },
     { edit: (l) => (l.maxIncrease = "-2 g/kg"), says: /maxIncrease: "-2 g\/kg" must be a positive increase/ },
     { edit: (l) => (l.maxIncrease = "0 g/kg"), says: /maxIncrease: "0 g\/kg" must be a positive increase/ },
     { edit: (l) => (l.background = "-50 g/kg"), says: /background: "-50 g\/kg" must not be negative/ },
-    { edit: (l) => ((l.maxConcentration = -5), delete l.maxIncrease), says: /maxConcentration: -5 must be a positive concentration/ },
+    {
+      edit: (l) => ((l.maxConcentration = -5), delete l.maxIncrease),
+      says: /maxConcentration: -5 must be a positive concentration/,
+    },
   ];
   for (const c of limitStrings) {
     it(`refuses a limit edited as ${c.edit.toString().replace(/^\(l\) => /, "")}, as the numbers are refused`, async () => {
@@ -248,7 +356,10 @@ describe("prototype keys and non-decimal numbers", () => {
       c.edit(raw.mixingZone.limits[0]);
       const file = at(`limit-${limitStrings.indexOf(c)}.json`);
       writeFileSync(file, JSON.stringify(raw));
-      for (const args of [["run", file], ["report", file, "--no-3d", "--out", at("limit.html")]]) {
+      for (const args of [
+        ["run", file],
+        ["report", file, "--no-3d", "--out", at("limit.html")],
+      ]) {
         expectRefused(await cli(...args), c.says, `${args[0]} ${c.says}`);
       }
     });
@@ -270,14 +381,27 @@ describe("nonsense inside the scenario is refused naming the field", () => {
       edit: (r) => {
         delete r.ambient.salinity;
         delete r.ambient.temperature;
-        r.ambient.profile = [{ depth: 0, salinity: 38.5, temperature: 24 }, { depth: 500, salinity: 38.6, temperature: 20 }];
+        r.ambient.profile = [
+          { depth: 0, salinity: 38.5, temperature: 24 },
+          { depth: 500, salinity: 38.6, temperature: 20 },
+        ];
       },
       says: /ambient\.profile\.1\.depth: 500 is below the seabed/,
     },
-    { name: "ports 0.01 m apart and 0.2 m wide", edit: (r) => ((r.diffuser.portSpacing = 0.01), (r.diffuser.portDiameter = 0.2)), says: /diffuser\.portSpacing: 0\.01 must be at least the port diameter/ },
+    {
+      name: "ports 0.01 m apart and 0.2 m wide",
+      edit: (r) => ((r.diffuser.portSpacing = 0.01), (r.diffuser.portDiameter = 0.2)),
+      says: /diffuser\.portSpacing: 0\.01 must be at least the port diameter/,
+    },
     {
       name: "the same uncertainty path twice",
-      edit: (r) => (r.uncertainty = { inputs: [{ path: "ambient.salinity", distribution: "normal", sd: 0.5 }, { path: "ambient.salinity", distribution: "normal", sd: 1 }] }),
+      edit: (r) =>
+        (r.uncertainty = {
+          inputs: [
+            { path: "ambient.salinity", distribution: "normal", sd: 0.5 },
+            { path: "ambient.salinity", distribution: "normal", sd: 1 },
+          ],
+        }),
       says: /uncertainty\.inputs\.1\.path: "ambient\.salinity" is listed twice/,
     },
   ];
@@ -287,7 +411,11 @@ describe("nonsense inside the scenario is refused naming the field", () => {
       v.edit(raw);
       const file = at(`field-${v.name.replace(/\W+/g, "-")}.json`);
       writeFileSync(file, JSON.stringify(raw));
-      for (const args of [["run", file], ["check-claim", file, "--claimed-dilution", "30"], ["uncertainty", file, "--runs", "5", "--workers", "1"]]) {
+      for (const args of [
+        ["run", file],
+        ["check-claim", file, "--claimed-dilution", "30"],
+        ["uncertainty", file, "--runs", "5", "--workers", "1"],
+      ]) {
         expectRefused(await cli(...args), v.says, `${args[0]} ${v.name}`);
       }
     });
@@ -299,11 +427,17 @@ describe("control characters in user text never reach the terminal", () => {
     const raw = demoRaw();
     raw.name = "Evil\u001b[2J\u001b]0;pwned\u0007\rFAKE: meets\u009b31m name";
     writeFileSync(at("escape.json"), JSON.stringify(raw));
-    for (const args of [["run", at("escape.json")], ["run", at("escape.json"), "--json", "--no-path"], ["check-claim", at("escape.json"), "--claimed-dilution", "30"]]) {
+    for (const args of [
+      ["run", at("escape.json")],
+      ["run", at("escape.json"), "--json", "--no-path"],
+      ["check-claim", at("escape.json"), "--claimed-dilution", "30"],
+    ]) {
       const o = await cli(...args);
       expect(o.code, `${args.join(" ")} runs`).toBe(0);
       // eslint-disable-next-line no-control-regex -- the pattern matches control characters on purpose, to remove or refuse them
-      expect(o.out + o.err, `${args.join(" ")}: no ESC, CR, BEL or C1 control`).not.toMatch(/[\u001b\r\u0007\u0080-\u009f]/);
+      expect(o.out + o.err, `${args.join(" ")}: no ESC, CR, BEL or C1 control`).not.toMatch(
+        /[\u001b\r\u0007\u0080-\u009f]/,
+      );
     }
     const json = JSON.parse((await cli("run", at("escape.json"), "--json", "--no-path")).out);
     expect(json.scenarioName, "JSON keeps the C1 character as an escape, losslessly").toContain("\u009b31m");

@@ -11,7 +11,8 @@ import { join } from "node:path";
 
 const root = join(__dirname, "../..");
 const launcher = join(root, "core/cli/launcher.mjs");
-const cli = (...args: string[]) => spawnSync(process.execPath, [launcher, ...args], { cwd: root, encoding: "utf8", maxBuffer: 256 * 1024 * 1024 });
+const cli = (...args: string[]) =>
+  spawnSync(process.execPath, [launcher, ...args], { cwd: root, encoding: "utf8", maxBuffer: 256 * 1024 * 1024 });
 const DEMO = "demo-scenarios/tern-point.json";
 
 describe("run with an ambient record", () => {
@@ -19,19 +20,28 @@ describe("run with an ambient record", () => {
     const inScenario = cli("run", DEMO, "--json", "--no-path");
     expect(inScenario.status, inScenario.stderr).toBe(0);
     const a = JSON.parse(inScenario.stdout);
-    for (const k of ["steps", "meetsPercent", "edgeDilution", "worstStep", "longestExceedanceHours"]) expect(a.record, `record.${k}`).toHaveProperty(k);
-    for (const k of ["min", "p5", "p50", "p95"]) expect(typeof a.record.edgeDilution[k], `record.edgeDilution.${k}`).toBe("number");
-    for (const k of ["distance", "dilution", "salinityIncrease", "inDenseLayer", "method", "recirculation"]) expect(a.intake, `intake.${k}`).toHaveProperty(k);
-    for (const k of ["feedSalinity", "brineSalinity", "brineFlow"]) expect(typeof a.intake.recirculation[k], `intake.recirculation.${k}`).toBe("number");
+    for (const k of ["steps", "meetsPercent", "edgeDilution", "worstStep", "longestExceedanceHours"])
+      expect(a.record, `record.${k}`).toHaveProperty(k);
+    for (const k of ["min", "p5", "p50", "p95"])
+      expect(typeof a.record.edgeDilution[k], `record.edgeDilution.${k}`).toBe("number");
+    for (const k of ["distance", "dilution", "salinityIncrease", "inDenseLayer", "method", "recirculation"])
+      expect(a.intake, `intake.${k}`).toHaveProperty(k);
+    for (const k of ["feedSalinity", "brineSalinity", "brineFlow"])
+      expect(typeof a.intake.recirculation[k], `intake.recirculation.${k}`).toBe("number");
     expect(a.caution, "the caution says each step is quasi-steady").toMatch(/quasi-steady/);
-    expect(a.methods.some((m: { stage: string }) => m.stage === "record"), "methods name the record").toBe(true);
+    expect(
+      a.methods.some((m: { stage: string }) => m.stage === "record"),
+      "methods name the record",
+    ).toBe(true);
 
     // The same record as CSV, times in hours from the start, units in the header.
     const raw = JSON.parse(readFileSync(join(root, DEMO), "utf8"));
     const rec = raw.ambient.record;
     const t0 = Date.parse(rec.time[0]);
     const lines = ["time (h),currentSpeed (m/s),currentDirection (deg)"];
-    rec.time.forEach((t: string, i: number) => lines.push(`${(Date.parse(t) - t0) / 3600000},${rec.currentSpeed[i]},${rec.currentDirection[i]}`));
+    rec.time.forEach((t: string, i: number) =>
+      lines.push(`${(Date.parse(t) - t0) / 3600000},${rec.currentSpeed[i]},${rec.currentDirection[i]}`),
+    );
     const dir = mkdtempSync(join(tmpdir(), "brinefield-record-"));
     const csv = join(dir, "tide.csv");
     writeFileSync(csv, lines.join("\n") + "\n");
@@ -61,9 +71,14 @@ describe("run with an ambient record", () => {
     const dir = mkdtempSync(join(tmpdir(), "brinefield-record-"));
     const csv = join(dir, "year.csv");
     const lines = ["time (h),currentSpeed (m/s),currentDirection (deg)"];
-    for (let i = 0; i < 8760; i++) lines.push(`${i},${(0.3 * Math.abs(Math.sin((2 * Math.PI * i) / 12.42)) + 0.001 * (i % 7)).toFixed(4)},${(i * 7) % 360}`);
+    for (let i = 0; i < 8760; i++)
+      lines.push(
+        `${i},${(0.3 * Math.abs(Math.sin((2 * Math.PI * i) / 12.42)) + 0.001 * (i % 7)).toFixed(4)},${(i * 7) % 360}`,
+      );
     writeFileSync(csv, lines.join("\n") + "\n");
-    const child = spawn(process.execPath, [launcher, "run", DEMO, "--record", csv, "--json", "--workers", "2"], { cwd: root });
+    const child = spawn(process.execPath, [launcher, "run", DEMO, "--record", csv, "--json", "--workers", "2"], {
+      cwd: root,
+    });
     let stderr = "";
     child.stderr.on("data", (d) => (stderr += String(d)));
     const code = await new Promise<number | null>((resolve) => {

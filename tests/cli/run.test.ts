@@ -4,7 +4,8 @@ import { spawnSync } from "node:child_process";
 import { join } from "node:path";
 
 const root = join(__dirname, "../..");
-const cli = (...args: string[]) => spawnSync(process.execPath, [join(root, "core/cli/launcher.mjs"), ...args], { cwd: root, encoding: "utf8" });
+const cli = (...args: string[]) =>
+  spawnSync(process.execPath, [join(root, "core/cli/launcher.mjs"), ...args], { cwd: root, encoding: "utf8" });
 
 describe("brinefield command line", () => {
   it("explains every command and option with --help", () => {
@@ -19,7 +20,13 @@ describe("brinefield command line", () => {
     const r = cli("run", "demo-scenarios/island-cove.json");
     expect(r.status, r.stderr).toBe(0);
     expect(r.stdout.split("\n").slice(0, 3).join(" "), "caution first").toMatch(/Caution: screening estimate only/);
-    for (const label of ["Brine density at the port", "Port exit velocity", "Densimetric Froude number", "Impact dilution", "Mixing-zone edge"])
+    for (const label of [
+      "Brine density at the port",
+      "Port exit velocity",
+      "Densimetric Froude number",
+      "Impact dilution",
+      "Mixing-zone edge",
+    ])
       expect(r.stdout, `summary shows ${label}`).toContain(label);
   });
 
@@ -28,9 +35,13 @@ describe("brinefield command line", () => {
     expect(r.status, r.stderr).toBe(0);
     const j = JSON.parse(r.stdout);
     expect(j.format, "format").toBe("brinefield-result");
-    for (const k of ["discharge", "ambient", "reducedGravity"]) expect(typeof j.densities[k], `densities.${k}`).toBe("number");
+    for (const k of ["discharge", "ambient", "reducedGravity"])
+      expect(typeof j.densities[k], `densities.${k}`).toBe("number");
     for (const k of ["flow", "velocity", "froude"]) expect(typeof j.port[k], `port.${k}`).toBe("number");
-    expect(Array.isArray(j.warnings) && j.warnings.every((w: any) => w.code && w.severity && w.message), "warnings shape").toBe(true);
+    expect(
+      Array.isArray(j.warnings) && j.warnings.every((w: any) => w.code && w.severity && w.message),
+      "warnings shape",
+    ).toBe(true);
     expect(j.caution, "caution").toMatch(/^Caution/);
     expect(j.nearField.find((m: any) => m.method === "integral").path.length > 5, "integral path present").toBe(true);
   });

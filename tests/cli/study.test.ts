@@ -12,7 +12,12 @@ import { command as compare } from "../../core/cli/commands/compare";
 import { command as sweep } from "../../core/cli/commands/sweep";
 import { command as design } from "../../core/cli/commands/design";
 import { command as uncertainty } from "../../core/cli/commands/uncertainty";
-import { OUTSIDE_SCOPE_MEANING, PERCENTILE_MEANING, REFUSED_MEANING, WORST_CASE_MEANING } from "../../core/study/uncertainty-words";
+import {
+  OUTSIDE_SCOPE_MEANING,
+  PERCENTILE_MEANING,
+  REFUSED_MEANING,
+  WORST_CASE_MEANING,
+} from "../../core/study/uncertainty-words";
 import { parseScenario } from "../../core/scenario/parse";
 import { runScenario } from "../../core/pipeline";
 import { expandCases } from "../../core/study/cases";
@@ -48,7 +53,10 @@ function fakeIO(cores = 2) {
 beforeAll(() => {
   dir = mkdtempSync(join(tmpdir(), "brinefield-study-"));
   const raw = fourPortRaw();
-  raw.ambientCases = [{ name: "spring tide", currentSpeed: 0.3 }, { name: "neap tide", currentSpeed: 0.05 }];
+  raw.ambientCases = [
+    { name: "spring tide", currentSpeed: 0.3 },
+    { name: "neap tide", currentSpeed: 0.05 },
+  ];
   writeFileSync(join(dir, "site.json"), JSON.stringify(raw));
   writeFileSync(
     join(dir, "study.json"),
@@ -82,40 +90,44 @@ describe("brinefield uncertainty", () => {
       expect(typeof one.worstCase.edgeDilution[k], `worstCase.edgeDilution.${k}`).toBe("number");
     }
     expect(typeof one.worstCase.probabilityOfExceedance, "probabilityOfExceedance").toBe("number");
-    expect(one.cases.map((c: { name: string }) => c.name), "the stated conditions, each ambient case, slack water").toEqual([
-      "stated",
-      "spring tide",
-      "neap tide",
-      "slack water",
-    ]);
+    expect(
+      one.cases.map((c: { name: string }) => c.name),
+      "the stated conditions, each ambient case, slack water",
+    ).toEqual(["stated", "spring tide", "neap tide", "slack water"]);
     expect(one.usedDefaultSpreads, "no uncertainty block → default spreads").toBe(true);
     expect(one.notes.join(" "), "the output says default spreads were used").toMatch(/default spreads/);
     expect(typeof one.elapsedSeconds, "timing key ends in Seconds").toBe("number");
   });
 
-  it("explains the numbers in words and shows chances as percentages in text (JSON keeps fractions)", WORKERS, async () => {
-    const f = fakeIO();
-    expect(await uncertainty.run(["site.json", "--runs", "24", "--seed", "5", "--workers", "1"], f.io), f.err()).toBe(0);
-    const text = f.out();
-    expect(text, "what the percentiles mean").toContain(PERCENTILE_MEANING);
-    expect(text, "the per-run worst case").toContain(WORST_CASE_MEANING);
-    expect(text, "outside scope").toContain(OUTSIDE_SCOPE_MEANING);
-    expect(text, "refused").toContain(REFUSED_MEANING);
-    expect(text, "a percentage column").toMatch(/chance not meeting limit/);
-    expect(text, "the overall row as a percentage").toMatch(/overall \(per-run worst case\)[^\n]*\d+(\.\d+)? %/);
-    expect(text, "spreads with units").toMatch(/ambient salinity \(ambient\.salinity\): normal, mean [\d.]+ g\/kg, standard deviation 0\.5 g\/kg/);
-    const j = fakeIO();
-    await uncertainty.run(["site.json", "--runs", "24", "--seed", "5", "--workers", "1", "--json"], j.io);
-    const json = JSON.parse(j.out());
-    expect(json.worstCase.probabilityOfExceedance, "a fraction from 0 to 1 in JSON").toBeLessThanOrEqual(1);
-    expect(typeof json.clampedByInput, "clamped draws per input").toBe("object");
-  });
+  it(
+    "explains the numbers in words and shows chances as percentages in text (JSON keeps fractions)",
+    WORKERS,
+    async () => {
+      const f = fakeIO();
+      expect(await uncertainty.run(["site.json", "--runs", "24", "--seed", "5", "--workers", "1"], f.io), f.err()).toBe(
+        0,
+      );
+      const text = f.out();
+      expect(text, "what the percentiles mean").toContain(PERCENTILE_MEANING);
+      expect(text, "the per-run worst case").toContain(WORST_CASE_MEANING);
+      expect(text, "outside scope").toContain(OUTSIDE_SCOPE_MEANING);
+      expect(text, "refused").toContain(REFUSED_MEANING);
+      expect(text, "a percentage column").toMatch(/chance not meeting limit/);
+      expect(text, "the overall row as a percentage").toMatch(/overall \(per-run worst case\)[^\n]*\d+(\.\d+)? %/);
+      expect(text, "spreads with units").toMatch(
+        /ambient salinity \(ambient\.salinity\): normal, mean [\d.]+ g\/kg, standard deviation 0\.5 g\/kg/,
+      );
+      const j = fakeIO();
+      await uncertainty.run(["site.json", "--runs", "24", "--seed", "5", "--workers", "1", "--json"], j.io);
+      const json = JSON.parse(j.out());
+      expect(json.worstCase.probabilityOfExceedance, "a fraction from 0 to 1 in JSON").toBeLessThanOrEqual(1);
+      expect(typeof json.clampedByInput, "clamped draws per input").toBe("object");
+    },
+  );
 
   it("rejects a bad seed or run count, naming the option", WORKERS, async () => {
     const f = fakeIO();
-    await expect(uncertainty.run(["site.json", "--seed", "-3"], f.io), "negative seed").rejects.toThrow(
-      /--seed/,
-    );
+    await expect(uncertainty.run(["site.json", "--seed", "-3"], f.io), "negative seed").rejects.toThrow(/--seed/);
     await expect(uncertainty.run(["site.json", "--runs", "0"], f.io), "zero runs").rejects.toThrow(/--runs/);
   });
 });
@@ -128,27 +140,31 @@ describe("brinefield sweep", () => {
     const code = await sweep.run(args, f.io);
     expect(code, f.err()).toBe(0);
     const j = JSON.parse(f.out());
-    expect(j.points.map((p: Record<string, number>) => p["ambient.depth"]), "12, 21, 30 m").toEqual(
-      [12, 21, 30],
-    );
+    expect(
+      j.points.map((p: Record<string, number>) => p["ambient.depth"]),
+      "12, 21, 30 m",
+    ).toEqual([12, 21, 30]);
     for (const p of j.points) {
       expect(typeof p.edgeDilution, "edge dilution per point").toBe("number");
-      expect(
-        typeof p.equationOfState === "string" && p.equationOfState.length > 0,
-        "equation of state named",
-      ).toBe(true);
+      expect(typeof p.equationOfState === "string" && p.equationOfState.length > 0, "equation of state named").toBe(
+        true,
+      );
       expect(["spring tide", "neap tide", "slack water"], "governing case is one of the cases").toContain(
         p.governingCase,
       );
     }
     const text = f.files.get("out.csv")!;
     expect(text.startsWith('"Caution:'), "the CSV opens with the caution").toBe(true);
-    expect(text.split("\n")[0], "the first row names the scenario and its inputs hash").toMatch(/,scenario: .+,inputsHash: [0-9a-f]+/);
+    expect(text.split("\n")[0], "the first row names the scenario and its inputs hash").toMatch(
+      /,scenario: .+,inputsHash: [0-9a-f]+/,
+    );
     const csv = csvParse(text.replace(/^.*\n/, "")); // the table follows the caution row
     expect(csv.length, "one CSV row per point").toBe(3);
-    expect(csv.columns.slice(0, 3), "CSV columns: keys with units, as every Brinefield CSV").toEqual(
-      ["ambient.depth (m)", "governingCase", "edgeDilution (-)"],
-    );
+    expect(csv.columns.slice(0, 3), "CSV columns: keys with units, as every Brinefield CSV").toEqual([
+      "ambient.depth (m)",
+      "governingCase",
+      "edgeDilution (-)",
+    ]);
   });
 
   it("takes the inputs from a study file's sweep block when no --vary is given", WORKERS, async () => {
@@ -170,10 +186,9 @@ describe("brinefield sweep", () => {
 
   it("explains a malformed --vary", WORKERS, async () => {
     const f = fakeIO();
-    await expect(
-      sweep.run(["site.json", "--vary", "ambient.depth=5:10"], f.io),
-      "missing steps",
-    ).rejects.toThrow(/from:to:steps/);
+    await expect(sweep.run(["site.json", "--vary", "ambient.depth=5:10"], f.io), "missing steps").rejects.toThrow(
+      /from:to:steps/,
+    );
   });
 });
 
@@ -201,7 +216,8 @@ describe("brinefield design", () => {
       }
       // The diffuser block pasted into the scenario as it is reads and passes in every case.
       const parsed = parseScenario({ ...siteRaw, diffuser: d.diffuser });
-      if (!parsed.ok) throw new Error(`design #${d.rank} block refused: ${parsed.issues.map((i) => i.message).join("; ")}`);
+      if (!parsed.ok)
+        throw new Error(`design #${d.rank} block refused: ${parsed.issues.map((i) => i.message).join("; ")}`);
       for (const c of expandCases(parsed.scenario)) {
         const r = runScenario(c.scenario, { includePath: false });
         expect(r.compliance.pass, `design #${d.rank} passes in ${c.name}`).toBe(true);
@@ -210,31 +226,65 @@ describe("brinefield design", () => {
     }
   });
 
-  it("answers 'no design' with exit 0, says so on its first line after the caution and gives the nearest miss", WORKERS, async () => {
-    const strict = { ...JSON.parse(readFileSync(join(dir, "site.json"), "utf8")), mixingZone: { radius: 5, limits: [{ constituent: "salinity", maxIncrease: 0.05 }] } };
-    writeFileSync(join(dir, "strict.json"), JSON.stringify(strict));
-    const f = fakeIO();
-    const code = await design.run(["strict.json", "--max-ports", "3", "--diameter-steps", "2", "--angles", "60", "--workers", "1"], f.io);
-    expect(code, "an answer, not an error").toBe(0);
-    const body = f.out().split("\n").filter((l) => l.trim() !== "");
-    const afterCaution = body[body.findIndex((l, i) => i > 0 && /^─+$/.test(l)) + 1];
-    expect(body[0], "the caution opens the output").toMatch(/^─+$/);
-    expect(afterCaution, "first line after the caution says so").toMatch(/^No design meets every limit/);
-    expect(f.out(), "nearest miss shown").toContain("Nearest miss");
-    expect(f.out(), "caution").toContain("screening estimate");
-    const g = fakeIO();
-    expect(await design.run(["strict.json", "--max-ports", "3", "--diameter-steps", "2", "--angles", "60", "--json", "--workers", "1"], g.io), "JSON: exit 0").toBe(0);
-    const j = JSON.parse(g.out());
-    expect(j.designs, "empty list").toEqual([]);
-    expect(j.nearestMiss.toClose.length, "what would close it").toBeGreaterThan(0);
-    expect(j.nearestMiss.requiredMargin, "the required margin").toBe(1);
-  });
+  it(
+    "answers 'no design' with exit 0, says so on its first line after the caution and gives the nearest miss",
+    WORKERS,
+    async () => {
+      const strict = {
+        ...JSON.parse(readFileSync(join(dir, "site.json"), "utf8")),
+        mixingZone: { radius: 5, limits: [{ constituent: "salinity", maxIncrease: 0.05 }] },
+      };
+      writeFileSync(join(dir, "strict.json"), JSON.stringify(strict));
+      const f = fakeIO();
+      const code = await design.run(
+        ["strict.json", "--max-ports", "3", "--diameter-steps", "2", "--angles", "60", "--workers", "1"],
+        f.io,
+      );
+      expect(code, "an answer, not an error").toBe(0);
+      const body = f
+        .out()
+        .split("\n")
+        .filter((l) => l.trim() !== "");
+      const afterCaution = body[body.findIndex((l, i) => i > 0 && /^─+$/.test(l)) + 1];
+      expect(body[0], "the caution opens the output").toMatch(/^─+$/);
+      expect(afterCaution, "first line after the caution says so").toMatch(/^No design meets every limit/);
+      expect(f.out(), "nearest miss shown").toContain("Nearest miss");
+      expect(f.out(), "caution").toContain("screening estimate");
+      const g = fakeIO();
+      expect(
+        await design.run(
+          ["strict.json", "--max-ports", "3", "--diameter-steps", "2", "--angles", "60", "--json", "--workers", "1"],
+          g.io,
+        ),
+        "JSON: exit 0",
+      ).toBe(0);
+      const j = JSON.parse(g.out());
+      expect(j.designs, "empty list").toEqual([]);
+      expect(j.nearestMiss.toClose.length, "what would close it").toBeGreaterThan(0);
+      expect(j.nearestMiss.requiredMargin, "the required margin").toBe(1);
+    },
+  );
 
   it("refuses a search over the candidate cap with exit 2, naming the fields", async () => {
-    const big = { ...JSON.parse(readFileSync(join(dir, "site.json"), "utf8")), design: { portCounts: Array.from({ length: 200 }, (_, i) => i + 1), diameterSteps: 50, portAngles: [10, 20, 30, 40, 50, 60, 70, 80], spacingSteps: 20, minPortDiameter: 0.005, maxPortDiameter: 3, minExitVelocity: 0.1, maxExitVelocity: 30, maxLength: 5000 } };
+    const big = {
+      ...JSON.parse(readFileSync(join(dir, "site.json"), "utf8")),
+      design: {
+        portCounts: Array.from({ length: 200 }, (_, i) => i + 1),
+        diameterSteps: 50,
+        portAngles: [10, 20, 30, 40, 50, 60, 70, 80],
+        spacingSteps: 20,
+        minPortDiameter: 0.005,
+        maxPortDiameter: 3,
+        minExitVelocity: 0.1,
+        maxExitVelocity: 30,
+        maxLength: 5000,
+      },
+    };
     writeFileSync(join(dir, "big.json"), JSON.stringify(big));
     const run = design.run(["big.json", "--workers", "1"], fakeIO().io);
-    await expect(run, "over the cap").rejects.toThrow(/design\.diameterSteps.*design\.spacingSteps.*design\.portAngles/);
+    await expect(run, "over the cap").rejects.toThrow(
+      /design\.diameterSteps.*design\.spacingSteps.*design\.portAngles/,
+    );
     await run.catch((e: CliError) => expect(e.exitCode, "exit 2").toBe(2));
   });
 });
@@ -251,7 +301,10 @@ describe("brinefield compare", () => {
     expect(j.caution, "the caution in the JSON").toMatch(/^Caution: screening estimate only/);
     expect(j.rows.length, "3 variants × (stated + 2 cases + slack water + overall)").toBe(15);
     const margins = j.rows.map((r: { margin: number }) => r.margin);
-    expect([...margins].sort((a, b) => b - a), "sorted by descending margin").toEqual(margins);
+    expect(
+      [...margins].sort((a, b) => b - a),
+      "sorted by descending margin",
+    ).toEqual(margins);
     expect(csvParse(f.files.get("rows.csv")!.replace(/^.*\n/, "")).length, "CSV rows after the caution row").toBe(15);
   });
 
@@ -265,8 +318,6 @@ describe("brinefield compare", () => {
     };
     writeFileSync(join(dir, "bad-study.json"), JSON.stringify(bad));
     const f = fakeIO();
-    await expect(compare.run(["bad-study.json"], f.io), "missing overrides").rejects.toThrow(
-      /variants\.0\.overrides/,
-    );
+    await expect(compare.run(["bad-study.json"], f.io), "missing overrides").rejects.toThrow(/variants\.0\.overrides/);
   });
 });

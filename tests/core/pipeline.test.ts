@@ -24,9 +24,15 @@ describe("runScenario()", () => {
     expect(r.version, "version").toBe(1);
     expect(r.caution.startsWith("Caution"), "caution begins with the word Caution").toBe(true);
     expect(JSON.parse(JSON.stringify(r)), "round-trips through JSON").toEqual(JSON.parse(JSON.stringify(r)));
-    expect(r.nearField.map((m) => m.method), "both methods side by side").toEqual(["length-scale", "integral"]);
+    expect(
+      r.nearField.map((m) => m.method),
+      "both methods side by side",
+    ).toEqual(["length-scale", "integral"]);
     const rising = r.densities.discharge <= r.densities.ambient;
-    for (const m of r.nearField) expect(m.risingField !== undefined, `${m.method}: read as a rising plume exactly when lighter than the sea`).toBe(rising);
+    for (const m of r.nearField)
+      expect(m.risingField !== undefined, `${m.method}: read as a rising plume exactly when lighter than the sea`).toBe(
+        rising,
+      );
     const gp = (9.80665 * (r.densities.discharge - r.densities.ambient)) / r.densities.ambient;
     expect(Math.abs(r.densities.reducedGravity - gp) < 1e-9, "g′ = g(ρ0 − ρa)/ρa").toBe(true);
     const froude = r.port.velocity / Math.sqrt(Math.abs(r.densities.reducedGravity) * r.port.diameter);
@@ -35,7 +41,9 @@ describe("runScenario()", () => {
     for (const m of r.nearField) {
       if (m.impactDilution !== null) expect(m.impactDilution >= 1, `${m.method}: impact dilution ≥ 1`).toBe(true);
       if (m.nearFieldDilution !== null && m.impactDilution !== null)
-        expect(m.nearFieldDilution >= m.impactDilution, `${m.method}: near-field dilution ≥ impact dilution`).toBe(true);
+        expect(m.nearFieldDilution >= m.impactDilution, `${m.method}: near-field dilution ≥ impact dilution`).toBe(
+          true,
+        );
       expect(m.source.length > 10, `${m.method}: names its source`).toBe(true);
     }
     const edge = r.mixingZone.dilution;
@@ -43,12 +51,17 @@ describe("runScenario()", () => {
     const s = r.mixingZone.series;
     for (let i = 1; i < s.dilution.length; i++) {
       expect(s.distance[i]! >= s.distance[i - 1]!, "series distances ascend").toBe(true);
-      expect(s.dilution[i]! >= s.dilution[i - 1]! * (1 - 1e-9), `series dilution non-decreasing at ${s.distance[i]} m`).toBe(true);
+      expect(
+        s.dilution[i]! >= s.dilution[i - 1]! * (1 - 1e-9),
+        `series dilution non-decreasing at ${s.distance[i]} m`,
+      ).toBe(true);
     }
     for (const c of r.mixingZone.constituents) {
       const lo = Math.min(c.background, c.discharge) - 1e-9;
       const hi = Math.max(c.background, c.discharge) + 1e-9;
-      expect(c.concentration >= lo && c.concentration <= hi, `${c.constituent} between background and discharge`).toBe(true);
+      expect(c.concentration >= lo && c.concentration <= hi, `${c.constituent} between background and discharge`).toBe(
+        true,
+      );
     }
     expect(r.compliance.margin, "margin = edge ÷ required").toBeCloseTo(edge / r.compliance.requiredDilution, 9);
   });
@@ -59,7 +72,8 @@ describe("runScenario()", () => {
     const r = runScenario(scenarioOf(raw));
     expect(r.densities.reducedGravity, "lighter than the sea").toBeLessThan(0);
     expect(r.nearField.map((m) => m.method)).toEqual(["length-scale", "integral"]);
-    for (const m of r.nearField) expect(m.risingField?.kind, `${m.method} ends at the surface or a trap level`).toMatch(/^(surface|trapped)$/);
+    for (const m of r.nearField)
+      expect(m.risingField?.kind, `${m.method} ends at the surface or a trap level`).toMatch(/^(surface|trapped)$/);
     expect(["meets", "exceeds", "outside-scope"]).toContain(r.overall.verdict);
     expect(Number.isFinite(r.mixingZone.dilution) && r.mixingZone.dilution >= 1, "an edge dilution").toBe(true);
   });
@@ -69,16 +83,21 @@ describe("runScenario()", () => {
     const a = runScenario(s);
     const b = runScenario(s, { includePath: false });
     expect(b.mixingZone.dilution, "edge dilution independent of path output").toBe(a.mixingZone.dilution);
-    expect(b.nearField[1]!.impactDilution, "integral impact dilution independent of path output").toBe(a.nearField[1]!.impactDilution);
+    expect(b.nearField[1]!.impactDilution, "integral impact dilution independent of path output").toBe(
+      a.nearField[1]!.impactDilution,
+    );
   });
 
-  it.each(demos)("gives the same edge verdict in the lighter \"edge\" detail used by study loops (%s)", (file) => {
+  it.each(demos)('gives the same edge verdict in the lighter "edge" detail used by study loops (%s)', (file) => {
     const s = scenarioOf(load(file));
     const full = runScenario(s);
     const edge = runScenario(s, { includePath: false, detail: "edge" });
     expect(edge.mixingZone.dilution, "edge dilution").toBe(full.mixingZone.dilution);
     expect(edge.compliance, "compliance").toEqual(full.compliance);
-    expect(edge.nearField.map((m) => m.impactDilution), "near-field dilutions").toEqual(full.nearField.map((m) => m.impactDilution));
+    expect(
+      edge.nearField.map((m) => m.impactDilution),
+      "near-field dilutions",
+    ).toEqual(full.nearField.map((m) => m.impactDilution));
   });
 });
 
@@ -100,14 +119,10 @@ describe("a statically unstable ambient profile", () => {
     };
     delete unstable.ambientCases;
     const r = runScenario(scenarioOf(unstable));
-    expect(
-      r.warnings.find((w) => w.code === "ambient-statically-unstable")
-        ?.severity,
-      "a serious warning",
-    ).toBe("serious");
-    expect(r.compliance.verdict, "no verdict on an overturning column").toBe(
-      "outside-scope",
+    expect(r.warnings.find((w) => w.code === "ambient-statically-unstable")?.severity, "a serious warning").toBe(
+      "serious",
     );
+    expect(r.compliance.verdict, "no verdict on an overturning column").toBe("outside-scope");
     expect(
       r.compliance.scopeReasons.some((s) => /statically unstable/.test(s)),
       "the reason says why",
@@ -124,9 +139,7 @@ describe("a statically unstable ambient profile", () => {
       },
     };
     expect(
-      runScenario(scenarioOf(stable)).warnings.some(
-        (w) => w.code === "ambient-statically-unstable",
-      ),
+      runScenario(scenarioOf(stable)).warnings.some((w) => w.code === "ambient-statically-unstable"),
       "the stable column (swapped) raises nothing",
     ).toBe(false);
   });

@@ -25,8 +25,12 @@ describe("any valid scenario", () => {
     );
     // A core that refuses or sets aside everything would pass every per-scenario check: the generator
     // stays inside the dense-jet scope, so at most a tenth may be refused, and every verdict must occur.
-    expect(seen.refused <= RUNS / 10, `refused ${seen.refused} of ${RUNS} valid scenarios (at most a tenth allowed)`).toBe(true);
-    for (const v of ["meets", "exceeds", "outside-scope"] as const) expect(seen[v] > 0, `the verdict "${v}" occurs (${JSON.stringify(seen)})`).toBe(true);
+    expect(
+      seen.refused <= RUNS / 10,
+      `refused ${seen.refused} of ${RUNS} valid scenarios (at most a tenth allowed)`,
+    ).toBe(true);
+    for (const v of ["meets", "exceeds", "outside-scope"] as const)
+      expect(seen[v] > 0, `the verdict "${v}" occurs (${JSON.stringify(seen)})`).toBe(true);
   }, 300_000); // each scenario runs every ambient case; 1,000 of them take tens of seconds on a shared machine
 });
 
@@ -38,7 +42,8 @@ describe("any invalid scenario", () => {
     );
   });
   it("survives input that is not an object at all", () => {
-    for (const v of [null, 42, "text", [], true, undefined]) checkInvalidScenario(v, { what: "not an object", apply: () => {} });
+    for (const v of [null, 42, "text", [], true, undefined])
+      checkInvalidScenario(v, { what: "not an object", apply: () => {} });
     expect(true, "reached the end without throwing").toBe(true);
   });
 });

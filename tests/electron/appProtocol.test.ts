@@ -62,7 +62,14 @@ describe("the brinefield:// scheme", () => {
 
   it("recognises only its own host, without credentials or port", () => {
     expect(isAppUrl("brinefield://app/index.html"), "index").toBe(true);
-    for (const url of ["brinefield://other/index.html", "brinefield://app:1/x", "brinefield://u@app/x", "file:///x", "https://app/x", "nonsense"]) {
+    for (const url of [
+      "brinefield://other/index.html",
+      "brinefield://app:1/x",
+      "brinefield://u@app/x",
+      "file:///x",
+      "https://app/x",
+      "nonsense",
+    ]) {
       expect(isAppUrl(url), url).toBe(false);
     }
   });
@@ -122,7 +129,12 @@ describe("createAppProtocolHandler()", () => {
   });
 
   it("refuses other hosts and ports of the scheme and other schemes", async () => {
-    for (const url of ["brinefield://evil/index.html", "brinefield://app:8080/index.html", "file:///etc/passwd", "https://app/index.html"]) {
+    for (const url of [
+      "brinefield://evil/index.html",
+      "brinefield://app:8080/index.html",
+      "file:///etc/passwd",
+      "https://app/index.html",
+    ]) {
       const response = await get(url);
       expect(response.status, url).toBe(421);
       expectSecurityHeaders(response, url);

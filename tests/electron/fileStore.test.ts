@@ -120,7 +120,7 @@ describe("writeFileAtomic()", () => {
 describe("readJsonTextFile()", () => {
   it("returns the text of a UTF-8 JSON file, without a byte-order mark", async () => {
     const path = join(dir, "s.json");
-    await writeFile(path, "\ufeff{\"name\":\"Outfall A, 12 m ±\"}", "utf8");
+    await writeFile(path, '\ufeff{"name":"Outfall A, 12 m ±"}', "utf8");
     const result = await readJsonTextFile(path);
     expect(result, "read succeeds").toEqual({ ok: true, text: '{"name":"Outfall A, 12 m ±"}' });
   });
@@ -130,20 +130,14 @@ describe("readJsonTextFile()", () => {
     await writeFile(path, `"${"x".repeat(2048)}"`);
     const result = await readJsonTextFile(path, { maxBytes: 1024 });
     expect(result.ok, "refused").toBe(false);
-    expect(
-      !result.ok && result.message,
-      "message names actual and allowed size",
-    ).toMatch(/2 kB.*at most 1 kB/);
+    expect(!result.ok && result.message, "message names actual and allowed size").toMatch(/2 kB.*at most 1 kB/);
   });
 
   it("accepts a file exactly at the size limit", async () => {
     const path = join(dir, "edge.json");
     const text = `"${"y".repeat(1022)}"`;
     await writeFile(path, text);
-    expect(
-      (await readJsonTextFile(path, { maxBytes: 1024 })).ok,
-      "1024 bytes with a 1024-byte limit",
-    ).toBe(true);
+    expect((await readJsonTextFile(path, { maxBytes: 1024 })).ok, "1024 bytes with a 1024-byte limit").toBe(true);
   });
 
   it("reports a file that is not UTF-8 instead of crashing", async () => {

@@ -83,10 +83,7 @@ describe("isTrustedSender()", () => {
   it("rejects another window, a subframe, a web page and another local file", () => {
     expect(isTrustedSender({ ...good, webContentsId: 8 }, trusted()), "other webContents").toBe(false);
     expect(isTrustedSender({ ...good, isMainFrame: false }, trusted()), "subframe").toBe(false);
-    expect(
-      isTrustedSender({ ...good, frameUrl: "https://example.com/index.html" }, trusted()),
-      "https",
-    ).toBe(false);
+    expect(isTrustedSender({ ...good, frameUrl: "https://example.com/index.html" }, trusted()), "https").toBe(false);
     const other = pathToFileURL(join(dir, "Downloads", "index.html")).href;
     expect(isTrustedSender({ ...good, frameUrl: other }, trusted()), "a local file").toBe(false);
     const oldIndex = pathToFileURL(join(dir, "app", "dist", "renderer", "index.html")).href;
@@ -137,10 +134,7 @@ describe("parseHostRequest()", () => {
       [{ kind: "delete-everything" }, /unknown request kind/],
       [{ kind: "recent-files", path: "/etc/passwd" }, /unexpected field/],
       [{ kind: "open-path", path: "relative.json" }, /absolute/],
-      [
-        { kind: "save-file", path: "../up.json", text: "", suggestedName: "a", filters: [] },
-        /absolute or a bare/,
-      ],
+      [{ kind: "save-file", path: "../up.json", text: "", suggestedName: "a", filters: [] }, /absolute or a bare/],
       [{ kind: "open-path", path: 42 }, /path/],
       [{ kind: "open-path", path: `${join(dir, "a")}\0.json` }, /NUL/],
       [{ kind: "print-pdf", suggestedName: "../../evil" }, /folder/],
@@ -205,10 +199,10 @@ describe("createHostHandlers().handle()", () => {
     h.openAnswers.push(path);
     const opened = await handlers.handle(good, { kind: "open-scenario" });
     expect(opened, "opened response").toEqual({ kind: "opened", path, text: '{"name":"Outfall A"}' });
-    expect(
-      await handlers.handle(good, { kind: "recent-files" }),
-      "recent list",
-    ).toEqual({ kind: "recent", paths: [path] });
+    expect(await handlers.handle(good, { kind: "recent-files" }), "recent list").toEqual({
+      kind: "recent",
+      paths: [path],
+    });
     expect(h.recentChanges.at(-1), "menu told about the new list").toEqual([path]);
     const again = await handlers.handle(good, { kind: "open-path", path });
     expect(again.kind, "granted path reopens").toBe("opened");
@@ -257,7 +251,10 @@ describe("createHostHandlers().handle()", () => {
     expect(second.kind, "saved").toBe("saved");
     expect(h.saveDialogs.length, "no second dialog for a granted path").toBe(1);
     expect(await readFile(`${chosen}.json`, "utf8"), "new content").toBe('{"v":2}');
-    expect(h.saveResults.map((r) => r.kind), "close guard told of both saves").toEqual(["saved", "saved"]);
+    expect(
+      h.saveResults.map((r) => r.kind),
+      "close guard told of both saves",
+    ).toEqual(["saved", "saved"]);
   });
 
   it("asks where to save a dropped file that only has a name", async () => {
@@ -325,24 +322,23 @@ describe("createHostHandlers().handle()", () => {
 
   it("writes, reads and clears the autosave slot", async () => {
     const handlers = createHostHandlers(harness().deps);
-    expect(
-      await handlers.handle(good, { kind: "autosave-read" }),
-      "empty",
-    ).toEqual({ kind: "autosave", text: null, savedAt: null });
-    expect(
-      await handlers.handle(good, { kind: "autosave-write", text: '{"u":1}' }),
-      "write",
-    ).toEqual({ kind: "ok" });
+    expect(await handlers.handle(good, { kind: "autosave-read" }), "empty").toEqual({
+      kind: "autosave",
+      text: null,
+      savedAt: null,
+    });
+    expect(await handlers.handle(good, { kind: "autosave-write", text: '{"u":1}' }), "write").toEqual({ kind: "ok" });
     expect(await handlers.handle(good, { kind: "autosave-read" }), "read back").toEqual({
       kind: "autosave",
       text: '{"u":1}',
       savedAt: "1970-01-01T00:00:00.000Z",
     });
     expect(await handlers.handle(good, { kind: "autosave-clear" }), "clear").toEqual({ kind: "ok" });
-    expect(
-      await handlers.handle(good, { kind: "autosave-read" }),
-      "gone",
-    ).toEqual({ kind: "autosave", text: null, savedAt: null });
+    expect(await handlers.handle(good, { kind: "autosave-read" }), "gone").toEqual({
+      kind: "autosave",
+      text: null,
+      savedAt: null,
+    });
   });
 
   it("passes document state to main and a failing dependency becomes an error response", async () => {
@@ -354,10 +350,9 @@ describe("createHostHandlers().handle()", () => {
       },
     });
     h.saveAnswers.push(join(dir, "r.pdf"));
-    expect(
-      await handlers.handle(good, { kind: "set-document-state", dirty: true, title: "Outfall A" }),
-      "ok",
-    ).toEqual({ kind: "ok" });
+    expect(await handlers.handle(good, { kind: "set-document-state", dirty: true, title: "Outfall A" }), "ok").toEqual({
+      kind: "ok",
+    });
     expect(h.documentStates, "state forwarded").toEqual([{ dirty: true, title: "Outfall A" }]);
     const pdf = await handlers.handle(good, { kind: "print-pdf", suggestedName: "r.pdf" });
     expect(pdf.kind === "error" && pdf.message, "error response").toMatch(/renderer crashed/);

@@ -108,9 +108,6 @@ describe("checkedChannel()", () => {
   it("accepts brinefield: channels and refuses anything else", () => {
     expect(checkedChannel(IPC_INVOKE), "invoke channel").toBe(IPC_INVOKE);
     expect(IPC_MENU.startsWith(CHANNEL_PREFIX), "menu channel in namespace").toBe(true);
-    expect(
-      () => checkedChannel("ELECTRON_BROWSER_REQUIRE"),
-      "foreign channel",
-    ).toThrow(/outside brinefield:/);
+    expect(() => checkedChannel("ELECTRON_BROWSER_REQUIRE"), "foreign channel").toThrow(/outside brinefield:/);
   });
 });

@@ -37,27 +37,23 @@ function inputs(overrides: Partial<LaunchInputs> = {}): LaunchInputs {
 describe("decideLaunch()", () => {
   it("starts Electron when its binary is present and there is a display", () => {
     expect(decideLaunch(inputs()), "electron").toEqual({ kind: "electron", binary: installed.binaryPath });
-    expect(
-      decideLaunch(inputs({ platform: "win32", env: {} })),
-      "Windows needs no DISPLAY",
-    ).toMatchObject({ kind: "electron" });
-    expect(
-      decideLaunch(inputs({ env: { WAYLAND_DISPLAY: "wayland-0" } })),
-      "Wayland counts",
-    ).toMatchObject({ kind: "electron" });
+    expect(decideLaunch(inputs({ platform: "win32", env: {} })), "Windows needs no DISPLAY").toMatchObject({
+      kind: "electron",
+    });
+    expect(decideLaunch(inputs({ env: { WAYLAND_DISPLAY: "wayland-0" } })), "Wayland counts").toMatchObject({
+      kind: "electron",
+    });
   });
 
   it("falls back to the browser when the binary is missing and Node is too old to fetch it", () => {
     const plan = decideLaunch(inputs({ electron: notDownloaded, nodeVersion: "20.20.2" }));
     expect(plan.kind, "web fallback").toBe("web");
-    expect(
-      plan.kind === "web" && plan.reason,
-      "reason names this Node version",
-    ).toMatch(/Node \(20\.20\.2\) is too old/);
-    expect(
-      plan.kind === "web" && plan.hint,
-      "hint: Node ≥ 22.12 with internet fetches it",
-    ).toMatch(/Node ≥ 22\.12 and an internet/);
+    expect(plan.kind === "web" && plan.reason, "reason names this Node version").toMatch(
+      /Node \(20\.20\.2\) is too old/,
+    );
+    expect(plan.kind === "web" && plan.hint, "hint: Node ≥ 22.12 with internet fetches it").toMatch(
+      /Node ≥ 22\.12 and an internet/,
+    );
   });
 
   it("asks for a download when the binary is missing on a recent Node, and falls back once it failed", () => {
@@ -67,10 +63,9 @@ describe("decideLaunch()", () => {
     });
     const downloadFailure = "getaddrinfo ENOTFOUND github.com";
     const failed = decideLaunch(inputs({ electron: notDownloaded, downloadFailure }));
-    expect(
-      failed.kind === "web" && failed.reason,
-      "failure reason shown",
-    ).toMatch(/could not be downloaded \(getaddrinfo/);
+    expect(failed.kind === "web" && failed.reason, "failure reason shown").toMatch(
+      /could not be downloaded \(getaddrinfo/,
+    );
   });
 
   it("falls back for --web, a missing electron package and a headless Linux session", () => {
@@ -107,12 +102,20 @@ describe("planLaunch()", () => {
   });
 
   it("starts Electron after a successful download", async () => {
-    const plan = await planLaunch(inputs({ electron: notDownloaded }), async () => null, () => installed);
+    const plan = await planLaunch(
+      inputs({ electron: notDownloaded }),
+      async () => null,
+      () => installed,
+    );
     expect(plan, "electron").toEqual({ kind: "electron", binary: installed.binaryPath });
   });
 
   it("does not loop when the download reports success but no binary appears", async () => {
-    const plan = await planLaunch(inputs({ electron: notDownloaded }), async () => null, () => notDownloaded);
+    const plan = await planLaunch(
+      inputs({ electron: notDownloaded }),
+      async () => null,
+      () => notDownloaded,
+    );
     expect(plan.kind, "web").toBe("web");
   });
 });
@@ -127,23 +130,30 @@ describe("probeElectron()", () => {
   });
 
   it("reads path.txt like the electron package does, without downloading", async () => {
-    expect(
-      probeElectron(dir, {}),
-      "no path.txt yet",
-    ).toEqual({ packageDir: dir, binaryPath: null, binaryExists: false });
+    expect(probeElectron(dir, {}), "no path.txt yet").toEqual({
+      packageDir: dir,
+      binaryPath: null,
+      binaryExists: false,
+    });
     await writeFile(join(dir, "path.txt"), "electron");
     expect(probeElectron(dir, {}).binaryExists, "path.txt but no dist").toBe(false);
     await mkdir(join(dir, "dist"));
     await writeFile(join(dir, "dist", "electron"), "");
-    expect(
-      probeElectron(dir, {}),
-      "installed",
-    ).toEqual({ packageDir: dir, binaryPath: join(dir, "dist", "electron"), binaryExists: true });
+    expect(probeElectron(dir, {}), "installed").toEqual({
+      packageDir: dir,
+      binaryPath: join(dir, "dist", "electron"),
+      binaryExists: true,
+    });
   });
 
   it("honours ELECTRON_OVERRIDE_DIST_PATH and reports a missing package", () => {
     const env = { ELECTRON_OVERRIDE_DIST_PATH: "/opt/electron" };
-    const probe = probeElectron(dir, env, () => true, () => null);
+    const probe = probeElectron(
+      dir,
+      env,
+      () => true,
+      () => null,
+    );
     expect(probe.binaryPath, "override").toBe(join("/opt/electron", "electron"));
     expect(probeElectron(null, {}).packageDir, "not installed").toBeNull();
   });
@@ -167,16 +177,12 @@ describe("helpers", () => {
   });
 
   it("fallbackAfterExit() falls back only for an early failure", () => {
-    expect(
-      fallbackAfterExit({ code: 127, signal: null, elapsedMs: 300 }),
-      "missing libraries at start",
-    ).toBe(true);
+    expect(fallbackAfterExit({ code: 127, signal: null, elapsedMs: 300 }), "missing libraries at start").toBe(true);
     expect(fallbackAfterExit({ code: null, signal: null, elapsedMs: 10 }), "spawn error").toBe(true);
     expect(fallbackAfterExit({ code: 0, signal: null, elapsedMs: 300 }), "clean quit").toBe(false);
-    expect(
-      fallbackAfterExit({ code: 1, signal: null, elapsedMs: 60_000 }),
-      "late crash is not a start failure",
-    ).toBe(false);
+    expect(fallbackAfterExit({ code: 1, signal: null, elapsedMs: 60_000 }), "late crash is not a start failure").toBe(
+      false,
+    );
     expect(fallbackAfterExit({ code: null, signal: "SIGINT", elapsedMs: 300 }), "Ctrl+C").toBe(false);
   });
 
@@ -191,10 +197,7 @@ describe("helpers", () => {
       await writeFile(join(dir, "src", "node_modules", "b.js"), "");
       await utimes(join(dir, "src", "a.ts"), 1000, 1000);
       await utimes(join(dir, "src", "node_modules", "b.js"), 5000, 5000);
-      expect(
-        await newestSourceMtime([join(dir, "src"), join(dir, "absent")]),
-        "node_modules skipped",
-      ).toBe(1_000_000);
+      expect(await newestSourceMtime([join(dir, "src"), join(dir, "absent")]), "node_modules skipped").toBe(1_000_000);
     } finally {
       await rm(dir, { recursive: true, force: true });
     }

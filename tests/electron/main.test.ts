@@ -241,10 +241,9 @@ describe("electron/main.ts", () => {
     expect(file, "file:// cancelled").toHaveBeenCalledWith({ cancel: true });
     const headers = vi.fn();
     fake.state.headersReceived?.({ responseHeaders: {} }, headers);
-    expect(
-      headers.mock.calls[0][0].responseHeaders["Content-Security-Policy"],
-      "CSP",
-    ).toEqual([CONTENT_SECURITY_POLICY]);
+    expect(headers.mock.calls[0][0].responseHeaders["Content-Security-Policy"], "CSP").toEqual([
+      CONTENT_SECURITY_POLICY,
+    ]);
   });
 
   it("handles IPC only from its own window, and validates the payload", async () => {

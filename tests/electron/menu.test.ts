@@ -35,8 +35,7 @@ function byLabel(menu: MenuItemConstructorOptions[], label: string) {
   return found;
 }
 
-const click = (item: MenuItemConstructorOptions) =>
-  (item.click as unknown as () => void)();
+const click = (item: MenuItemConstructorOptions) => (item.click as unknown as () => void)();
 
 describe("buildMenuTemplate()", () => {
   it("has the File commands with their accelerators, each sending its MenuCommand", () => {
@@ -83,7 +82,10 @@ describe("buildMenuTemplate()", () => {
     const { template } = build({ isMac: true });
     expect(template[0].label, "app menu").toBe("Brinefield");
     const file = template.find((m) => m.label === "&File")!.submenu as MenuItemConstructorOptions[];
-    expect(file.some((i) => i.label === "Quit"), "no Quit in File").toBe(false);
+    expect(
+      file.some((i) => i.label === "Quit"),
+      "no Quit in File",
+    ).toBe(false);
   });
 
   it("recentLabel() shows the name, then the folder", () => {

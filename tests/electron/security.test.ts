@@ -83,10 +83,9 @@ describe("withSecurityHeaders()", () => {
     expect(out["content-security-policy"], "old policy removed").toBeUndefined();
     expect(out["X-Content-Type-Options"], "nosniff").toEqual(["nosniff"]);
     expect(out["Content-Type"], "other headers kept").toEqual(["text/html"]);
-    expect(
-      withSecurityHeaders(undefined)["Content-Security-Policy"],
-      "no headers at all",
-    ).toEqual([CONTENT_SECURITY_POLICY]);
+    expect(withSecurityHeaders(undefined)["Content-Security-Policy"], "no headers at all").toEqual([
+      CONTENT_SECURITY_POLICY,
+    ]);
   });
 });
 

@@ -84,10 +84,9 @@ describe("startWebServer()", () => {
     expect(js.status, "js found").toBe(200);
     expect(js.headers["content-type"], "js type").toBe("text/javascript; charset=utf-8");
     const wasm = await raw("/assets/core.wasm");
-    expect(
-      wasm.headers["content-type"],
-      "wasm type (needed by WebAssembly.instantiateStreaming)",
-    ).toBe("application/wasm");
+    expect(wasm.headers["content-type"], "wasm type (needed by WebAssembly.instantiateStreaming)").toBe(
+      "application/wasm",
+    );
   });
 
   it("refuses ../ traversal in raw and percent-encoded forms", async () => {
@@ -116,10 +115,7 @@ describe("startWebServer()", () => {
     const folder = await raw("/assets/");
     expect(folder.status, "folder").toBe(404);
     expect(folder.body, "no listing").not.toContain("app.js");
-    expect(
-      folder.headers["content-security-policy"],
-      "errors carry the CSP too",
-    ).toBe(CONTENT_SECURITY_POLICY);
+    expect(folder.headers["content-security-policy"], "errors carry the CSP too").toBe(CONTENT_SECURITY_POLICY);
   });
 
   it("answers only GET and HEAD", async () => {
@@ -154,18 +150,12 @@ describe("startWebServer()", () => {
 
 describe("resolveRequestPath()", () => {
   it("maps / to index.html and refuses NUL, backslashes, drive letters and bad escapes", () => {
-    expect(
-      resolveRequestPath("/srv/r", "/"),
-      "root",
-    ).toEqual({ ok: true, file: join("/srv/r", "index.html") });
+    expect(resolveRequestPath("/srv/r", "/"), "root").toEqual({ ok: true, file: join("/srv/r", "index.html") });
     expect(resolveRequestPath("/srv/r", "/a%00.js"), "NUL").toEqual({ ok: false, status: 400 });
     expect(resolveRequestPath("/srv/r", "/a\\..\\b"), "backslash").toEqual({ ok: false, status: 400 });
     expect(resolveRequestPath("/srv/r", "/C:/Windows/win.ini"), "drive").toEqual({ ok: false, status: 403 });
     expect(resolveRequestPath("/srv/r", "/%E0%A4%A"), "malformed escape").toEqual({ ok: false, status: 400 });
-    expect(
-      resolveRequestPath("/srv/r", "http://evil/x"),
-      "absolute-form target",
-    ).toEqual({ ok: false, status: 400 });
+    expect(resolveRequestPath("/srv/r", "http://evil/x"), "absolute-form target").toEqual({ ok: false, status: 400 });
   });
 });
 

@@ -16,6 +16,9 @@ describe("fuzz", () => {
     );
   });
   it(`invalid scenarios (${RUNS})`, () => {
-    fc.assert(fc.property(directDischargeFile, corruption, (raw, c) => checkInvalidScenario(raw, c)), { numRuns: RUNS });
+    fc.assert(
+      fc.property(directDischargeFile, corruption, (raw, c) => checkInvalidScenario(raw, c)),
+      { numRuns: RUNS },
+    );
   });
 });

@@ -8,7 +8,8 @@ import fc from "fast-check";
  * A double spread evenly over [min, max]. (fc.double favours tiny magnitudes such as 1e-89 and the
  * bounds themselves, which left most generated ports horizontal and most heights zero.)
  */
-const num = (min: number, max: number) => fc.integer({ min: 0, max: 1_000_000 }).map((i) => min + ((max - min) * i) / 1_000_000);
+const num = (min: number, max: number) =>
+  fc.integer({ min: 0, max: 1_000_000 }).map((i) => min + ((max - min) * i) / 1_000_000);
 
 /**
  * Names a user may type: markup, spreadsheet formulas, prototype keys, right-to-left and astral
@@ -63,9 +64,28 @@ export const validScenarioFile = fc
     stratified: fc.boolean(),
     stratDelta: num(0, 1.5),
     unitStrings: fc.boolean(),
-    plant: fc.option(fc.record({ recovery: num(0.3, 0.6), rejection: num(0.99, 1), blendFrac: fc.oneof(fc.constant(0), num(0, 0.5)) }), { nil: undefined }),
-    constituents: fc.array(fc.record({ concentration: num(0.01, 1000), backgroundFrac: num(0, 0.5), limitFrac: num(0.001, 0.5), absolute: fc.boolean() }), { maxLength: 3 }),
-    cases: fc.array(fc.record({ sFrac: num(0, 1), tFrac: num(0, 1), current: fc.option(num(0, 1.2), { nil: undefined }), weight: num(0, 10) }), { maxLength: 3 }),
+    plant: fc.option(
+      fc.record({ recovery: num(0.3, 0.6), rejection: num(0.99, 1), blendFrac: fc.oneof(fc.constant(0), num(0, 0.5)) }),
+      { nil: undefined },
+    ),
+    constituents: fc.array(
+      fc.record({
+        concentration: num(0.01, 1000),
+        backgroundFrac: num(0, 0.5),
+        limitFrac: num(0.001, 0.5),
+        absolute: fc.boolean(),
+      }),
+      { maxLength: 3 },
+    ),
+    cases: fc.array(
+      fc.record({
+        sFrac: num(0, 1),
+        tFrac: num(0, 1),
+        current: fc.option(num(0, 1.2), { nil: undefined }),
+        weight: num(0, 10),
+      }),
+      { maxLength: 3 },
+    ),
     options: fc.option(
       fc.record({
         nearFieldForEdge: fc.constantFrom("conservative", "length-scale", "integral"),
@@ -75,7 +95,10 @@ export const validScenarioFile = fc
       { nil: undefined },
     ),
     name: oddName,
-    constituentNames: fc.uniqueArray(oddName.filter((n) => !/^\s*(salinity|temperature)\s*$/i.test(n)), { minLength: 3, maxLength: 3, selector: (n) => n.trim().toLowerCase() }),
+    constituentNames: fc.uniqueArray(
+      oddName.filter((n) => !/^\s*(salinity|temperature)\s*$/i.test(n)),
+      { minLength: 3, maxLength: 3, selector: (n) => n.trim().toLowerCase() },
+    ),
     rising: fc.boolean(),
     deficitS: num(0, 30),
     warmth: num(0, 20),
@@ -96,7 +119,11 @@ export const validScenarioFile = fc
             { depth: v.depth, salinity: v.ambientS, temperature: v.ambientT },
           ],
         }
-      : { depth: v.unitStrings ? `${v.depth * 3.28084} ft` : v.depth, salinity: v.ambientS, temperature: v.unitStrings ? `${v.ambientT} degC` : v.ambientT };
+      : {
+          depth: v.unitStrings ? `${v.depth * 3.28084} ft` : v.depth,
+          salinity: v.ambientS,
+          temperature: v.unitStrings ? `${v.ambientT} degC` : v.ambientT,
+        };
     ambient.currentSpeed = v.current;
     ambient.currentDirection = v.currentDir;
     ambient.bedSlope = v.slope;
@@ -131,7 +158,11 @@ export const validScenarioFile = fc
     v.constituents.forEach((c, i) => {
       const bg = c.concentration * c.backgroundFrac;
       const allowed = (c.concentration - bg) * c.limitFrac;
-      limits.push(c.absolute ? { constituent: constituents[i]!.name, maxConcentration: bg + allowed } : { constituent: constituents[i]!.name, maxIncrease: allowed });
+      limits.push(
+        c.absolute
+          ? { constituent: constituents[i]!.name, maxConcentration: bg + allowed }
+          : { constituent: constituents[i]!.name, maxIncrease: allowed },
+      );
     });
     let discharge: Record<string, unknown>;
     let plant: Record<string, unknown> | undefined;
@@ -149,7 +180,16 @@ export const validScenarioFile = fc
         saltRejection: v.plant.rejection,
         feedTemperature: brineT,
         ...(v.plant.blendFrac > 0
-          ? { blending: [{ name: "seawater bypass", flow: brineFlow * v.plant.blendFrac, salinity: v.ambientS, temperature: v.ambientT }] }
+          ? {
+              blending: [
+                {
+                  name: "seawater bypass",
+                  flow: brineFlow * v.plant.blendFrac,
+                  salinity: v.ambientS,
+                  temperature: v.ambientT,
+                },
+              ],
+            }
           : {}),
       };
       discharge = constituents.length > 0 ? { constituents } : {};
@@ -189,16 +229,20 @@ export const directDischargeFile = validScenarioFile.filter((f) => !("plant" in 
 
 type Corruption = (o: any) => void;
 
-const setAt = (path: string[], value: unknown): Corruption => (o) => {
-  let cur = o;
-  for (const k of path.slice(0, -1)) cur = cur[k];
-  cur[path[path.length - 1]!] = value;
-};
-const deleteAt = (path: string[]): Corruption => (o) => {
-  let cur = o;
-  for (const k of path.slice(0, -1)) cur = cur[k];
-  delete cur[path[path.length - 1]!];
-};
+const setAt =
+  (path: string[], value: unknown): Corruption =>
+  (o) => {
+    let cur = o;
+    for (const k of path.slice(0, -1)) cur = cur[k];
+    cur[path[path.length - 1]!] = value;
+  };
+const deleteAt =
+  (path: string[]): Corruption =>
+  (o) => {
+    let cur = o;
+    for (const k of path.slice(0, -1)) cur = cur[k];
+    delete cur[path[path.length - 1]!];
+  };
 
 const requiredPaths = [
   ["ambient", "depth"],
@@ -233,20 +277,64 @@ function deep(n: number): unknown {
 export const corruption: fc.Arbitrary<{ what: string; apply: Corruption }> = fc.oneof(
   fc.constantFrom(...requiredPaths).map((p) => ({ what: `missing ${p.join(".")}`, apply: deleteAt(p) })),
   fc
-    .tuple(fc.constantFrom(...numericPaths), fc.constantFrom<unknown>(Number.NaN, Number.POSITIVE_INFINITY, -Infinity, 1e308, -1e308, "1e400 m", null, true, [], {}, "", "abc"))
+    .tuple(
+      fc.constantFrom(...numericPaths),
+      fc.constantFrom<unknown>(
+        Number.NaN,
+        Number.POSITIVE_INFINITY,
+        -Infinity,
+        1e308,
+        -1e308,
+        "1e400 m",
+        null,
+        true,
+        [],
+        {},
+        "",
+        "abc",
+      ),
+    )
     .map(([p, v]) => ({ what: `${p.join(".")} = ${String(v)}`, apply: setAt(p, v) })),
   fc
-    .tuple(fc.constantFrom(...numericPaths.slice(0, 7)), fc.constantFrom("3 furlongs", "12 parsecs", "5 kg", "20 widgets"))
+    .tuple(
+      fc.constantFrom(...numericPaths.slice(0, 7)),
+      fc.constantFrom("3 furlongs", "12 parsecs", "5 kg", "20 widgets"),
+    )
     .map(([p, v]) => ({ what: `${p.join(".")} = ${v}`, apply: setAt(p, v) })),
-  fc.constantFrom<unknown>("x", 2, 99, 0, -1, "1", null).map((v) => ({ what: `version ${String(v)}`, apply: setAt(["version"], v) })),
-  fc.constantFrom<unknown>("brinefield-result", "", 7, null).map((v) => ({ what: `format ${String(v)}`, apply: setAt(["format"], v) })),
+  fc
+    .constantFrom<unknown>("x", 2, 99, 0, -1, "1", null)
+    .map((v) => ({ what: `version ${String(v)}`, apply: setAt(["version"], v) })),
+  fc
+    .constantFrom<unknown>("brinefield-result", "", 7, null)
+    .map((v) => ({ what: `format ${String(v)}`, apply: setAt(["format"], v) })),
   fc.integer({ min: 600, max: 5000 }).map((n) => ({
     what: `profile of ${n} points`,
-    apply: setAt(["ambient"], { depth: 10, profile: Array.from({ length: n }, (_, i) => ({ depth: i * 0.01, salinity: 35, temperature: 15 })) }),
+    apply: setAt(["ambient"], {
+      depth: 10,
+      profile: Array.from({ length: n }, (_, i) => ({ depth: i * 0.01, salinity: 35, temperature: 15 })),
+    }),
   })),
-  fc.integer({ min: 50, max: 2000 }).map((n) => ({ what: `nesting ${n} deep`, apply: setAt(["diffuser", "risers"], deep(n)) })),
-  fc.string({ minLength: 1, maxLength: 12 }).filter((k) => /^[a-z]+$/i.test(k) && !["depth", "salinity", "temperature", "profile", "currentSpeed", "currentDirection", "bedSlope", "bedSlopeAzimuth"].includes(k)).map((k) => ({
-    what: `unknown field ambient.${k}`,
-    apply: setAt(["ambient", k], 1),
-  })),
+  fc
+    .integer({ min: 50, max: 2000 })
+    .map((n) => ({ what: `nesting ${n} deep`, apply: setAt(["diffuser", "risers"], deep(n)) })),
+  fc
+    .string({ minLength: 1, maxLength: 12 })
+    .filter(
+      (k) =>
+        /^[a-z]+$/i.test(k) &&
+        ![
+          "depth",
+          "salinity",
+          "temperature",
+          "profile",
+          "currentSpeed",
+          "currentDirection",
+          "bedSlope",
+          "bedSlopeAzimuth",
+        ].includes(k),
+    )
+    .map((k) => ({
+      what: `unknown field ambient.${k}`,
+      apply: setAt(["ambient", k], 1),
+    })),
 );

@@ -7,7 +7,8 @@ import { expect } from "vitest";
 export function assertInDelta(actual: unknown, expected: unknown, delta: number, message: string, path = ""): void {
   if (typeof expected === "number") {
     expect(typeof actual, `${message}${path}: expected a number`).toBe("number");
-    const ok = Math.abs((actual as number) - expected) <= delta || (Number.isNaN(expected) && Number.isNaN(actual as number));
+    const ok =
+      Math.abs((actual as number) - expected) <= delta || (Number.isNaN(expected) && Number.isNaN(actual as number));
     expect(ok, `${message}${path}: ${actual} is not within ${delta} of ${expected}`).toBe(true);
     return;
   }
@@ -18,7 +19,8 @@ export function assertInDelta(actual: unknown, expected: unknown, delta: number,
     return;
   }
   if (expected && typeof expected === "object") {
-    for (const [k, v] of Object.entries(expected)) assertInDelta((actual as Record<string, unknown>)?.[k], v, delta, message, `${path}.${k}`);
+    for (const [k, v] of Object.entries(expected))
+      assertInDelta((actual as Record<string, unknown>)?.[k], v, delta, message, `${path}.${k}`);
     return;
   }
   expect(actual, `${message}${path}`).toBe(expected);

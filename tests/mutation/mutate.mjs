@@ -16,9 +16,7 @@ const asked = process.argv.slice(2).map((a) => a.replace(/\/+$/, ""));
 const folders = asked.length > 0 ? asked : Object.keys(FOLDERS);
 for (const f of folders)
   if (!(f in FOLDERS)) {
-    console.error(
-      `unknown folder ${f}; known: ${Object.keys(FOLDERS).join(", ")}`,
-    );
+    console.error(`unknown folder ${f}; known: ${Object.keys(FOLDERS).join(", ")}`);
     process.exit(2);
   }
 
@@ -34,11 +32,11 @@ for (const folder of folders) {
     BRINEFIELD_PROPERTY_SHRINK: "0",
   };
   console.log(`\n=== ${folder} ===`);
-  const r = spawnSync(
-    process.execPath,
-    [stryker, "run", "tests/mutation/stryker.config.mjs"],
-    { cwd: root, env, stdio: "inherit" },
-  );
+  const r = spawnSync(process.execPath, [stryker, "run", "tests/mutation/stryker.config.mjs"], {
+    cwd: root,
+    env,
+    stdio: "inherit",
+  });
   if (r.status !== 0) {
     failed = true;
     lines.push(`${folder}: stryker exited ${r.status}`);
@@ -59,11 +57,8 @@ function score(file) {
   for (const f of Object.values(report.files))
     for (const m of f.mutants) {
       if (m.status === "Killed" || m.status === "Timeout") n.detected++;
-      else if (m.status === "Survived" || m.status === "NoCoverage")
-        n.undetected++;
+      else if (m.status === "Survived" || m.status === "NoCoverage") n.undetected++;
     }
   const total = n.detected + n.undetected;
-  return total === 0
-    ? "no mutants"
-    : `${Math.floor((100 * n.detected) / total)} % (${n.detected}/${total} mutants)`;
+  return total === 0 ? "no mutants" : `${Math.floor((100 * n.detected) / total)} % (${n.detected}/${total} mutants)`;
 }

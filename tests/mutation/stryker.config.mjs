@@ -7,10 +7,7 @@
 import { FOLDERS } from "./folders.mjs";
 
 const folder = process.env.BRINEFIELD_MUTATE_FOLDER ?? "";
-if (!(folder in FOLDERS))
-  throw new Error(
-    `BRINEFIELD_MUTATE_FOLDER must be one of ${Object.keys(FOLDERS).join(", ")}`,
-  );
+if (!(folder in FOLDERS)) throw new Error(`BRINEFIELD_MUTATE_FOLDER must be one of ${Object.keys(FOLDERS).join(", ")}`);
 const slug = folder.replace(/\//g, "-");
 
 /** @type {import('@stryker-mutator/api/core').PartialStrykerOptions} */

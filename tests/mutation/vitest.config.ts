@@ -8,13 +8,8 @@ import { fileURLToPath } from "node:url";
 import { dirname, resolve } from "node:path";
 
 const root = resolve(dirname(fileURLToPath(import.meta.url)), "../..");
-const include = (process.env.BRINEFIELD_MUTATE_TESTS ?? "")
-  .split(",")
-  .filter(Boolean);
-if (include.length === 0)
-  throw new Error(
-    "BRINEFIELD_MUTATE_TESTS is empty: run through `npm run mutate`",
-  );
+const include = (process.env.BRINEFIELD_MUTATE_TESTS ?? "").split(",").filter(Boolean);
+if (include.length === 0) throw new Error("BRINEFIELD_MUTATE_TESTS is empty: run through `npm run mutate`");
 
 export default defineConfig({
   root,

@@ -28,7 +28,11 @@ function imports(file: string): { spec: string; target: string | null; typeOnly:
   const out: { spec: string; target: string | null; typeOnly: boolean }[] = [];
   for (const m of text.matchAll(re)) {
     const spec = (m[3] ?? m[4])!;
-    out.push({ spec, typeOnly: Boolean(m[2]), target: spec.startsWith(".") ? relative(root, resolve(dirname(file), spec)) : null });
+    out.push({
+      spec,
+      typeOnly: Boolean(m[2]),
+      target: spec.startsWith(".") ? relative(root, resolve(dirname(file), spec)) : null,
+    });
   }
   return out;
 }
@@ -42,7 +46,8 @@ describe("layering", () => {
       for (const i of imports(f)) {
         if (i.target && !i.target.startsWith("core/")) bad.push(`${relative(root, f)} → ${i.spec}`);
         if (i.target?.startsWith("core/cli")) bad.push(`${relative(root, f)} → ${i.spec} (core/cli is an adapter)`);
-        if (!i.target && (NODE_BUILTINS.test(i.spec) || /^(three|d3$|react|electron|playwright)/.test(i.spec))) bad.push(`${relative(root, f)} → ${i.spec}`);
+        if (!i.target && (NODE_BUILTINS.test(i.spec) || /^(three|d3$|react|electron|playwright)/.test(i.spec)))
+          bad.push(`${relative(root, f)} → ${i.spec}`);
       }
     }
     expect(bad, "core must stay pure").toEqual([]);
@@ -62,7 +67,8 @@ describe("layering", () => {
     const bad: string[] = [];
     for (const f of files(join(root, "electron"))) {
       for (const i of imports(f)) {
-        if (i.target?.startsWith("core/") && !i.typeOnly && !i.target.startsWith("core/cli/node")) bad.push(`${relative(root, f)} → ${i.spec}`);
+        if (i.target?.startsWith("core/") && !i.typeOnly && !i.target.startsWith("core/cli/node"))
+          bad.push(`${relative(root, f)} → ${i.spec}`);
       }
     }
     expect(bad, "electron main stays thin").toEqual([]);
@@ -72,8 +78,10 @@ describe("layering", () => {
     const bad: string[] = [];
     for (const f of files(join(root, "core/cli/node"))) {
       for (const i of imports(f)) {
-        if (i.target && !i.target.startsWith("core/cli/node/") && i.target !== "core/scenario/jsonText") bad.push(`${relative(root, f)} → ${i.spec}`);
-        if (!i.target && !NODE_BUILTINS.test(i.spec) && i.spec !== "playwright-core") bad.push(`${relative(root, f)} → ${i.spec}`);
+        if (i.target && !i.target.startsWith("core/cli/node/") && i.target !== "core/scenario/jsonText")
+          bad.push(`${relative(root, f)} → ${i.spec}`);
+        if (!i.target && !NODE_BUILTINS.test(i.spec) && i.spec !== "playwright-core")
+          bad.push(`${relative(root, f)} → ${i.spec}`);
       }
     }
     expect(bad, "core/cli/node stays a thin Node layer").toEqual([]);
@@ -85,7 +93,8 @@ describe("layering", () => {
       for (const f of files(join(root, dir))) {
         const rel = relative(root, f);
         const nodeSide = rel.startsWith("core/cli/") || rel.startsWith("electron/");
-        for (const i of imports(f)) if (i.target?.startsWith("core/cli/node") && !nodeSide) bad.push(`${rel} → ${i.spec}`);
+        for (const i of imports(f))
+          if (i.target?.startsWith("core/cli/node") && !nodeSide) bad.push(`${rel} → ${i.spec}`);
       }
     }
     expect(bad, "the browser side and pure core never reach Node I/O").toEqual([]);

@@ -15,7 +15,8 @@ describe("demo scenarios, key outputs", () => {
       for (const [key, want] of Object.entries(row)) {
         const got = current[file]?.[key];
         const msg = `${file} ${key}: recorded ${String(want)}, now ${String(got)} — if intended, regenerate with npx tsx tests/regression/update-demo-key-outputs.ts`;
-        if (typeof want === "number" && typeof got === "number") expect(Math.abs(got - want) <= 1e-6 * Math.abs(want), msg).toBe(true);
+        if (typeof want === "number" && typeof got === "number")
+          expect(Math.abs(got - want) <= 1e-6 * Math.abs(want), msg).toBe(true);
         else expect(got, msg).toEqual(want);
       }
     });

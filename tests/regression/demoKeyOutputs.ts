@@ -16,7 +16,9 @@ export const RECORD_FILE = join(here, "demo-key-outputs.json");
 
 export function demoKeyOutputs(): Record<string, Record<string, number | string | boolean | null>> {
   const out: Record<string, Record<string, number | string | boolean | null>> = {};
-  for (const file of readdirSync(DEMO_DIR).filter((f) => f.endsWith(".json")).sort()) {
+  for (const file of readdirSync(DEMO_DIR)
+    .filter((f) => f.endsWith(".json"))
+    .sort()) {
     const parsed = parseScenario(JSON.parse(readFileSync(join(DEMO_DIR, file), "utf8")));
     if (!parsed.ok) throw new Error(`${file}: ${parsed.issues.map((i) => i.message).join("; ")}`);
     const r = runScenario(parsed.scenario);

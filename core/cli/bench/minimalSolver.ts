@@ -83,17 +83,26 @@ export function minimalImpactSolve(
     for (let i = 0; i < N; i++) tmp[i] = y[i] + h * ((44 / 45) * k1[i] - (56 / 15) * k2[i] + (32 / 9) * k3[i]);
     integralJetRhs(t + 0.8 * h, tmp, k4, params);
     for (let i = 0; i < N; i++) {
-      tmp[i] = y[i] + h * ((19372 / 6561) * k1[i] - (25360 / 2187) * k2[i] + (64448 / 6561) * k3[i] - (212 / 729) * k4[i]);
+      tmp[i] =
+        y[i] + h * ((19372 / 6561) * k1[i] - (25360 / 2187) * k2[i] + (64448 / 6561) * k3[i] - (212 / 729) * k4[i]);
     }
     integralJetRhs(t + (8 / 9) * h, tmp, k5, params);
     for (let i = 0; i < N; i++) {
       tmp[i] =
         y[i] +
-        h * ((9017 / 3168) * k1[i] - (355 / 33) * k2[i] + (46732 / 5247) * k3[i] + (49 / 176) * k4[i] - (5103 / 18656) * k5[i]);
+        h *
+          ((9017 / 3168) * k1[i] -
+            (355 / 33) * k2[i] +
+            (46732 / 5247) * k3[i] +
+            (49 / 176) * k4[i] -
+            (5103 / 18656) * k5[i]);
     }
     integralJetRhs(t + h, tmp, k6, params);
     for (let i = 0; i < N; i++) {
-      yn[i] = y[i] + h * ((35 / 384) * k1[i] + (500 / 1113) * k3[i] + (125 / 192) * k4[i] - (2187 / 6784) * k5[i] + (11 / 84) * k6[i]);
+      yn[i] =
+        y[i] +
+        h *
+          ((35 / 384) * k1[i] + (500 / 1113) * k3[i] + (125 / 192) * k4[i] - (2187 / 6784) * k5[i] + (11 / 84) * k6[i]);
     }
     integralJetRhs(t + h, yn, k7, params);
     evaluations += 6;
@@ -101,7 +110,12 @@ export function minimalImpactSolve(
     for (let i = 0; i < N; i++) {
       const e =
         h *
-        ((71 / 57600) * k1[i] - (71 / 16695) * k3[i] + (71 / 1920) * k4[i] - (17253 / 339200) * k5[i] + (22 / 525) * k6[i] - (1 / 40) * k7[i]);
+        ((71 / 57600) * k1[i] -
+          (71 / 16695) * k3[i] +
+          (71 / 1920) * k4[i] -
+          (17253 / 339200) * k5[i] +
+          (22 / 525) * k6[i] -
+          (1 / 40) * k7[i]);
       const a = Math.abs(y[i]);
       const b = Math.abs(yn[i]);
       const q = e / (atol[i] + rtol * (a > b ? a : b));

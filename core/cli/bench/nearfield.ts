@@ -89,11 +89,21 @@ function median(xs: readonly number[]): number {
 function studyCases(): { name: string; jet: JetSource; column: AmbientColumn }[] {
   return [
     { name: "bench case", jet: BENCH_JET, column: BENCH_COLUMN },
-    { name: "0.2 m/s cross-current", jet: BENCH_JET, column: { ...BENCH_COLUMN, currentSpeed: 0.2, currentDirection: 0 } },
+    {
+      name: "0.2 m/s cross-current",
+      jet: BENCH_JET,
+      column: { ...BENCH_COLUMN, currentSpeed: 0.2, currentDirection: 0 },
+    },
     {
       name: "stratified (1 kg/m³ over 20 m)",
       jet: BENCH_JET,
-      column: { ...BENCH_COLUMN, depths: [0, 8, 12, 20], densities: [1024.4, 1024.6, 1025.2, 1025.4], salinities: [34.3, 34.5, 35.2, 35.4], temperatures: [20, 20, 20, 20] },
+      column: {
+        ...BENCH_COLUMN,
+        depths: [0, 8, 12, 20],
+        densities: [1024.4, 1024.6, 1025.2, 1025.4],
+        salinities: [34.3, 34.5, 35.2, 35.4],
+        temperatures: [20, 20, 20, 20],
+      },
     },
   ];
 }
@@ -124,7 +134,10 @@ const STUDY_TOLERANCES = [1e-5, 1e-6, 3e-7, 1e-7, 3e-8, 1e-8];
 
 /** Error of the key outputs against a tight solve, per tolerance (absolute tolerance 1/100 of it, as the default). */
 export function integralAccuracyStudy(): AccuracyRow[] {
-  const cases = studyCases().map((c) => ({ ...c, ref: nearFieldIntegral(c.jet, c.column, { relTol: 1e-12, absTol: 1e-14, includePath: false }) }));
+  const cases = studyCases().map((c) => ({
+    ...c,
+    ref: nearFieldIntegral(c.jet, c.column, { relTol: 1e-12, absTol: 1e-14, includePath: false }),
+  }));
   return STUDY_TOLERANCES.map((relTol) => {
     let worst = 0;
     let evaluations = 0;
@@ -179,7 +192,8 @@ export function benchIntegral(): IntegralBench {
   const params = integralParamsFrom(BENCH_JET, BENCH_COLUMN);
   const y0 = integralInitialState(BENCH_JET, BENCH_COLUMN, params);
   const atol = benchAtol(y0, INTEGRAL_DEFAULT_ABS_TOL);
-  const minimal = () => minimalImpactSolve(params, y0, BENCH_JET.portHeight, INTEGRAL_DEFAULT_REL_TOL, atol, 0.1 * BENCH_JET.diameter, 100);
+  const minimal = () =>
+    minimalImpactSolve(params, y0, BENCH_JET.portHeight, INTEGRAL_DEFAULT_REL_TOL, atol, 0.1 * BENCH_JET.diameter, 100);
   const ours = () => nearFieldIntegral(BENCH_JET, BENCH_COLUMN);
   let sink = 0;
   for (let i = 0; i < 3000; i++) sink += (ours().impactDistance ?? 0) + minimal().s;
@@ -218,7 +232,10 @@ export function benchIntegral(): IntegralBench {
     tMax: sEnd,
   });
   const errorOf = (q: number, x: number) => Math.max(Math.abs(q / tight.y[IQ] - 1), Math.abs(x / tight.y[IX] - 1));
-  const integralError = errorOf((result.impactDilution ?? Number.NaN) / CENTRELINE_PROFILE_FACTOR * y0[IQ], result.impactDistance ?? Number.NaN);
+  const integralError = errorOf(
+    ((result.impactDilution ?? Number.NaN) / CENTRELINE_PROFILE_FACTOR) * y0[IQ],
+    result.impactDistance ?? Number.NaN,
+  );
 
   const yy = new Float64Array(INTEGRAL_DIM);
   const out = new Float64Array(INTEGRAL_DIM);
@@ -228,7 +245,8 @@ export function benchIntegral(): IntegralBench {
     return Array.from(out);
   };
   const y0List = Array.from(y0);
-  const solveRef = (tol: number) => solveODE(f, [0, sEnd], y0List, { tol, firstStep: 0.1 * BENCH_JET.diameter, maxIter: 1e6 });
+  const solveRef = (tol: number) =>
+    solveODE(f, [0, sEnd], y0List, { tol, firstStep: 0.1 * BENCH_JET.diameter, maxIter: 1e6 });
   const refErrorAt = (tol: number) => {
     const r = solveRef(tol);
     const last = r.y[r.y.length - 1]!;

@@ -42,22 +42,37 @@ export function benchRecordScenario(steps = RECORD_BENCH_STEPS): Scenario {
     name: "Record benchmark: a year of hourly tide",
     discharge: { flow: 0.25, salinity: 65, temperature: 22 },
     ambient: { depth: 15, salinity: 36, temperature: 20, record: { time, currentSpeed, currentDirection, depth } },
-    diffuser: { layout: "line", portCount: 4, portDiameter: 0.12, portAngle: 60, portHeight: 1, portSpacing: 5, portAzimuth: 130 },
-    mixingZone: { radius: 100, limits: [{ constituent: "salinity", maxIncrease: 2 }], timeCompliance: { percentOfTime: 95 } },
+    diffuser: {
+      layout: "line",
+      portCount: 4,
+      portDiameter: 0.12,
+      portAngle: 60,
+      portHeight: 1,
+      portSpacing: 5,
+      portAzimuth: 130,
+    },
+    mixingZone: {
+      radius: 100,
+      limits: [{ constituent: "salinity", maxIncrease: 2 }],
+      timeCompliance: { percentOfTime: 95 },
+    },
     intake: { distance: 300, bearing: 220, heightAboveSeabed: 3 },
   });
   if (!r.ok) throw new Error(`record benchmark scenario: ${r.issues.map((i) => i.message).join("; ")}`);
   return r.scenario;
 }
 
-export async function benchRecord(workers = Math.max(1, availableParallelism())): Promise<{ recordSteps: number; recordDistinctSteps: number; recordSeconds: number; recordWorkers: number }> {
+export async function benchRecord(
+  workers = Math.max(1, availableParallelism()),
+): Promise<{ recordSteps: number; recordDistinctSteps: number; recordSeconds: number; recordWorkers: number }> {
   const s = benchRecordScenario();
   const distinct = distinctStepIndices(s).length;
   let last = 0;
   const t0 = performance.now();
   const outcomes = await recordStepsOnWorkers(s, workers, (done) => (last = done));
   const recordSeconds = (performance.now() - t0) / 1000;
-  if (outcomes.length !== RECORD_BENCH_STEPS || last !== distinct) throw new Error(`record benchmark ran ${outcomes.length} of ${RECORD_BENCH_STEPS} steps`);
+  if (outcomes.length !== RECORD_BENCH_STEPS || last !== distinct)
+    throw new Error(`record benchmark ran ${outcomes.length} of ${RECORD_BENCH_STEPS} steps`);
   return { recordSteps: RECORD_BENCH_STEPS, recordDistinctSteps: distinct, recordSeconds, recordWorkers: workers };
 }
 

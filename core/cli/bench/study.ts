@@ -98,7 +98,8 @@ export async function benchStudy(): Promise<StudyBench> {
   const all = cores > 1 ? new StudyPool(cores) : one;
   try {
     const monteCarloOneCoreFirstRunSeconds = await timeMonteCarlo(one, s, p.plan);
-    const monteCarloAllCoresFirstRunSeconds = all === one ? monteCarloOneCoreFirstRunSeconds : await timeMonteCarlo(all, s, p.plan);
+    const monteCarloAllCoresFirstRunSeconds =
+      all === one ? monteCarloOneCoreFirstRunSeconds : await timeMonteCarlo(all, s, p.plan);
     // Steady state, interleaved with the control so that both see the same load.
     const controlOne = await timeControl(one, cores);
     const oneCore = await timeMonteCarlo(one, s, p.plan);
@@ -109,7 +110,11 @@ export async function benchStudy(): Promise<StudyBench> {
       { path: "diffuser.portDiameter", from: 0.08, to: 0.2, steps: 30 },
     ]);
     const t0 = performance.now();
-    const points = await pointsOnWorkers(s, grid.map((g) => g.overrides), cores);
+    const points = await pointsOnWorkers(
+      s,
+      grid.map((g) => g.overrides),
+      cores,
+    );
     const sweepSeconds = (performance.now() - t0) / 1000;
     if (points.length !== 900) throw new Error(`sweep ran ${points.length} of 900 points`);
     return {

@@ -64,7 +64,9 @@ export const command: CliCommand = {
       v >= 1 ? null : "is not possible: a dilution is at least 1 (1 is the undiluted brine at the port)",
     );
     if (claimed === undefined) throw new CliError(`brinefield ${NAME}: --claimed-dilution is required.`);
-    const at = numberOption(values.at, "at", NAME, (v) => (v > 0 ? null : "must be a distance in metres greater than 0"));
+    const at = numberOption(values.at, "at", NAME, (v) =>
+      v > 0 ? null : "must be a distance in metres greater than 0",
+    );
     const scenario = loadScenarioFile(positionals[0], io);
     const outcome = checkClaimOnScenario(scenario, claimed, at);
     if (!outcome.ok) {
@@ -74,8 +76,15 @@ export const command: CliCommand = {
     const check = outcome.check;
     if (values.json) {
       io.stdout(
-        jsonText(
-          { format: "brinefield-claim-check", version: 1, scenarioName: scenario.name, inputsHash: inputsHash(scenario), ...check, seriesEnd: outcome.seriesEnd, caution: CAUTION }),
+        jsonText({
+          format: "brinefield-claim-check",
+          version: 1,
+          scenarioName: scenario.name,
+          inputsHash: inputsHash(scenario),
+          ...check,
+          seriesEnd: outcome.seriesEnd,
+          caution: CAUTION,
+        }),
       );
       return 0;
     }
@@ -87,10 +96,18 @@ export const command: CliCommand = {
       `Method chains at ${fmt(check.distance)} m (dilution; low–high with the near-field method's stated scatter):`,
       textTable(
         ["case", "chain", "dilution", "low", "high", "gives the claim"],
-        check.chains.map((c) => [c.case, c.method, c.dilution, c.low, c.high, c.reproducesClaim ? (c.onlyWithinScatter ? "within scatter" : "yes") : "no"]),
+        check.chains.map((c) => [
+          c.case,
+          c.method,
+          c.dilution,
+          c.low,
+          c.high,
+          c.reproducesClaim ? (c.onlyWithinScatter ? "within scatter" : "yes") : "no",
+        ]),
       ),
     ];
-    if (check.assumptionsNeeded.length) lines.push("What the claim rests on:", ...check.assumptionsNeeded.map((a) => `  - ${a}`));
+    if (check.assumptionsNeeded.length)
+      lines.push("What the claim rests on:", ...check.assumptionsNeeded.map((a) => `  - ${a}`));
     lines.push("", CAUTION);
     io.stdout(lines.join("\n") + "\n");
     return 0;

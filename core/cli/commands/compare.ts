@@ -8,14 +8,7 @@ import { readArgs } from "../args";
 import { loadJsonFile } from "../load";
 import { parseScenario } from "../../scenario/parse";
 import { parseStudy } from "../../study/study-file";
-import {
-  columnsOf,
-  compareVariant,
-  flattenRow,
-  sortRows,
-  studyVariants,
-  type FlatRow,
-} from "../../study/compare";
+import { columnsOf, compareVariant, flattenRow, sortRows, studyVariants, type FlatRow } from "../../study/compare";
 import { describeCases, expandCases } from "../../study/cases";
 import { CAUTION } from "../../result/contract";
 import { withCaution } from "../../result/caution";
@@ -75,7 +68,11 @@ async function run(argv: readonly string[], io: CliIO): Promise<number> {
   if (runnable.length > 0) {
     const evaluations = runnable.reduce((n, sc) => n + expandCases(sc).length, 0);
     const heaviest = runnable.reduce((a, b) => (caseWorkUnits(b) > caseWorkUnits(a) ? b : a));
-    const tooMuch = workIssue(`a study of ${v.variants.length} variants with ${evaluations} ambient cases in all`, evaluations, heaviest);
+    const tooMuch = workIssue(
+      `a study of ${v.variants.length} variants with ${evaluations} ambient cases in all`,
+      evaluations,
+      heaviest,
+    );
     if (tooMuch) throw new CliError(`${path}: ${tooMuch}`);
   }
   const rows = v.variants.flatMap((x) => compareVariant(x, evaluateScenario));
@@ -89,9 +86,12 @@ async function run(argv: readonly string[], io: CliIO): Promise<number> {
     flat = sorted;
   }
   const columns = columnsOf(flat);
-  if (values.csv) await io.writeFile(values.csv, csvWithCaution(flatRowsCsv(flat, columns), undefined, { study: st.study.name }));
+  if (values.csv)
+    await io.writeFile(values.csv, csvWithCaution(flatRowsCsv(flat, columns), undefined, { study: st.study.name }));
   const notes = v.variants.map((x) =>
-    x.scenario ? `${x.name}: ${describeCases(expandCases(x.scenario), x.scenario)}` : `${x.name}: refused — ${(x.refused ?? []).join("; ")}`,
+    x.scenario
+      ? `${x.name}: ${describeCases(expandCases(x.scenario), x.scenario)}`
+      : `${x.name}: refused — ${(x.refused ?? []).join("; ")}`,
   );
   for (const r of rows) if (r.notes) notes.push(...r.notes.map((n) => `${r.variant}: ${n}`));
   const overallRows = rows.filter((r) => r.worstCase);
@@ -99,7 +99,16 @@ async function run(argv: readonly string[], io: CliIO): Promise<number> {
   const tally = `Variants: ${overallRows.length} — meets ${count("meets")}, exceeds ${count("exceeds")}, outside-scope ${count("outside-scope")}, refused ${count("refused")}.`;
   if (values.json) {
     const study = st.study.name;
-    const json = { format: "brinefield-compare", version: 1, caution: CAUTION, study, columns, rows: flat, notes, tally };
+    const json = {
+      format: "brinefield-compare",
+      version: 1,
+      caution: CAUTION,
+      study,
+      columns,
+      rows: flat,
+      notes,
+      tally,
+    };
     io.stdout(jsonText(json));
     return 0;
   }
@@ -118,11 +127,17 @@ async function run(argv: readonly string[], io: CliIO): Promise<number> {
     r.warnings as number | null,
     ...methodCols.map((c) => (r[c] ?? null) as number | null),
   ]);
-  const refusals = flat.filter((r) => r.verdict === "refused").map((r) => `Refused: ${String(r.variant)}: ${String(r.error)}`);
+  const refusals = flat
+    .filter((r) => r.verdict === "refused")
+    .map((r) => `Refused: ${String(r.variant)}: ${String(r.error)}`);
   const scope = flat
     .filter((r) => r.verdict === "outside-scope" && r.case === "overall")
     .map((r) => `Outside scope: ${String(r.variant)} (${String(r.governingCase)}): ${String(r.scopeReasons)}`);
-  io.stdout(withCaution(`Study: ${st.study.name}\n${tally}\n\n${textTable(headers, body)}\n${[...notes, ...scope, ...refusals].join("\n")}\n`));
+  io.stdout(
+    withCaution(
+      `Study: ${st.study.name}\n${tally}\n\n${textTable(headers, body)}\n${[...notes, ...scope, ...refusals].join("\n")}\n`,
+    ),
+  );
   return 0;
 }
 

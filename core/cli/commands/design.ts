@@ -7,16 +7,17 @@ import { readArgs } from "../args";
 import { loadJsonFile, formatIssues } from "../load";
 import { parseScenario } from "../../scenario/parse";
 import { describeCases, expandCases } from "../../study/cases";
-import { candidateOverrides, designConstraintsFrom, planDesignSearch, DESIGN_MAX_CANDIDATES, DESIGN_MAX_RUNS } from "../../study/design";
+import {
+  candidateOverrides,
+  designConstraintsFrom,
+  planDesignSearch,
+  DESIGN_MAX_CANDIDATES,
+  DESIGN_MAX_RUNS,
+} from "../../study/design";
 import { designOutcome } from "../../study/design-rank";
 import { textTable } from "../../study/table";
 import { formatNumber } from "../../units";
-import {
-  EXIT_CANCELLED,
-  pointsOnWorkers,
-  workersOption,
-  withProgress,
-} from "../workers/run-study";
+import { EXIT_CANCELLED, pointsOnWorkers, workersOption, withProgress } from "../workers/run-study";
 
 const NAME = "design";
 
@@ -67,7 +68,12 @@ Exit codes: 0 an answer (designs, or none with the nearest miss); 2 bad input or
 search over the cap; 130 cancelled.`;
 
 function list(v: string | undefined): string[] | undefined {
-  return v === undefined ? undefined : v.split(",").map((x) => x.trim()).filter((x) => x !== "");
+  return v === undefined
+    ? undefined
+    : v
+        .split(",")
+        .map((x) => x.trim())
+        .filter((x) => x !== "");
 }
 
 function int(v: string | undefined, flag: string): number | undefined {
@@ -112,8 +118,7 @@ async function run(argv: readonly string[], io: CliIO): Promise<number> {
     scenario = { ...scenario, options: { ...scenario.options, addSlackWater: false } };
   }
   // Plain numbers are SI; anything else (e.g. "5 m/s") is read with its unit by the constraint schema.
-  const num = (v: string | undefined) =>
-    v === undefined ? undefined : Number.isFinite(Number(v)) ? Number(v) : v;
+  const num = (v: string | undefined) => (v === undefined ? undefined : Number.isFinite(Number(v)) ? Number(v) : v);
   const flags = Object.fromEntries(
     Object.entries({
       minExitVelocity: num(values["min-velocity"]),
@@ -158,7 +163,20 @@ async function run(argv: readonly string[], io: CliIO): Promise<number> {
       `${formatNumber(c.minPortDiameter)}–${formatNumber(c.maxPortDiameter)} m for ${Math.min(...c.portCounts)}–${Math.max(...c.portCounts)} ports); ` +
       "widen design.minPortDiameter/maxPortDiameter, the velocity range or the port counts.";
     if (values.json) {
-      io.stdout(jsonText({ format: "brinefield-design", version: 1, scenarioName: scenario.name, headline, constraints: c, candidatesTried: 0, candidatesPassing: 0, designs: [], nearestMiss: null, caution: CAUTION }));
+      io.stdout(
+        jsonText({
+          format: "brinefield-design",
+          version: 1,
+          scenarioName: scenario.name,
+          headline,
+          constraints: c,
+          candidatesTried: 0,
+          candidatesPassing: 0,
+          designs: [],
+          nearestMiss: null,
+          caution: CAUTION,
+        }),
+      );
     } else {
       io.stdout(withCaution([headline, constraintsLine].join("\n") + "\n"));
     }
@@ -173,25 +191,24 @@ async function run(argv: readonly string[], io: CliIO): Promise<number> {
   const outcome = designOutcome(scenario, c, candidates, points, rawDiffuser);
   if (values.json) {
     io.stdout(
-      jsonText(
-        {
-          format: "brinefield-design",
-          version: 1,
-          scenarioName: scenario.name,
-          headline: outcome.headline,
-          rankingRule: outcome.rankingRule,
-          constraints: c,
-          ambientCases: cases.map((k) => k.name),
-          slackWaterAdded: cases.some((k) => k.addedSlackWater),
-          candidatesTried: outcome.candidatesTried,
-          candidatesPassing: outcome.candidatesPassing,
-          candidatesRefused: outcome.candidatesRefused,
-          designs: outcome.designs,
-          nearestMiss: outcome.nearestMiss,
-          notes: [casesNote, ...outcome.notes],
-          elapsedSeconds,
-          caution: outcome.caution,
-        }),
+      jsonText({
+        format: "brinefield-design",
+        version: 1,
+        scenarioName: scenario.name,
+        headline: outcome.headline,
+        rankingRule: outcome.rankingRule,
+        constraints: c,
+        ambientCases: cases.map((k) => k.name),
+        slackWaterAdded: cases.some((k) => k.addedSlackWater),
+        candidatesTried: outcome.candidatesTried,
+        candidatesPassing: outcome.candidatesPassing,
+        candidatesRefused: outcome.candidatesRefused,
+        designs: outcome.designs,
+        nearestMiss: outcome.nearestMiss,
+        notes: [casesNote, ...outcome.notes],
+        elapsedSeconds,
+        caution: outcome.caution,
+      }),
     );
     return 0;
   }
@@ -208,7 +225,9 @@ async function run(argv: readonly string[], io: CliIO): Promise<number> {
     const m = outcome.nearestMiss;
     out.push(
       `Nearest miss: ${m.design.portCount} port(s), diameter ${m.design.portDiameter} m, angle ${m.design.portAngle}°` +
-        (m.design.portCount > 1 ? `, spacing ${m.design.portSpacing} m (length ${formatNumber(m.design.length)} m)` : "") +
+        (m.design.portCount > 1
+          ? `, spacing ${m.design.portSpacing} m (length ${formatNumber(m.design.length)} m)`
+          : "") +
         `, exit velocity ${formatNumber(m.design.exitVelocity)} m/s; worst margin ${m.design.worstMargin.toFixed(2)} in case "${m.design.governingCase}".`,
       "Why it fails:",
       ...m.reasons.map((r) => `  - ${r}`),

@@ -11,4 +11,15 @@ import { command as schema } from "./schema";
 import { command as bench } from "./bench";
 import { command as validate } from "./validate";
 
-export const COMMANDS: readonly CliCommand[] = [run, checkClaim, compare, sweep, design, uncertainty, report, validate, schema, bench];
+export const COMMANDS: readonly CliCommand[] = [
+  run,
+  checkClaim,
+  compare,
+  sweep,
+  design,
+  uncertainty,
+  report,
+  validate,
+  schema,
+  bench,
+];

@@ -22,7 +22,16 @@ import { checkClaimOnScenario } from "../../compliance/claim-run";
 import type { ClaimCheck } from "../../compliance/claim";
 import { workIssue } from "../../study/budget";
 import { expandCases } from "../../study/cases";
-import { parseStudy, withRawOverride, planMonteCarlo, runMonteCarloChunk, summariseMonteCarlo, evaluateScenario, mergeMonteCarloChunks, histogram } from "../../study";
+import {
+  parseStudy,
+  withRawOverride,
+  planMonteCarlo,
+  runMonteCarloChunk,
+  summariseMonteCarlo,
+  evaluateScenario,
+  mergeMonteCarloChunks,
+  histogram,
+} from "../../study";
 import type { ReportUncertainty } from "../../report/uncertainty";
 
 const HELP = `Usage: brinefield report <scenario-or-study.json> [--out report.html] [--pdf report.pdf]
@@ -88,14 +97,24 @@ function readScenarioRaw(raw: unknown, where: string): Scenario {
 
 function monteCarlo(scenario: Scenario, runs: number, seed: number, io: CliIO): unknown {
   const caseCount = expandCases(scenario).length;
-  const tooMuch = workIssue(`--uncertainty ${runs} × ${caseCount} ambient case${caseCount === 1 ? "" : "s"}`, runs * caseCount, scenario);
+  const tooMuch = workIssue(
+    `--uncertainty ${runs} × ${caseCount} ambient case${caseCount === 1 ? "" : "s"}`,
+    runs * caseCount,
+    scenario,
+  );
   if (tooMuch) throw new CliError(`brinefield report: ${tooMuch}`);
   const planned = planMonteCarlo(scenario, runs, seed);
-  if (!planned.ok) throw new CliError(`brinefield report: the uncertainty run cannot start:\n${planned.issues.map((i) => `  - ${i.path}: ${i.message}`).join("\n")}`);
+  if (!planned.ok)
+    throw new CliError(
+      `brinefield report: the uncertainty run cannot start:\n${planned.issues.map((i) => `  - ${i.path}: ${i.message}`).join("\n")}`,
+    );
   io.stderr(`brinefield report: running ${runs} Monte Carlo runs (seed ${seed})…\n`);
   const chunk = runMonteCarloChunk(scenario, planned.plan, 0, runs, evaluateScenario);
   const merged = mergeMonteCarloChunks(planned.plan, [chunk]);
-  const uncertainty: ReportUncertainty = { summary: summariseMonteCarlo(planned.plan, [chunk]), histogram: histogram(merged.worstEdgeDilution, 30) };
+  const uncertainty: ReportUncertainty = {
+    summary: summariseMonteCarlo(planned.plan, [chunk]),
+    histogram: histogram(merged.worstEdgeDilution, 30),
+  };
   return uncertainty;
 }
 
@@ -121,19 +140,36 @@ export const command: CliCommand = {
       "report",
     );
     if (positionals.length !== 1) {
-      throw new CliError("brinefield report: give exactly one scenario or study file, e.g. `brinefield report demo-scenarios/island-cove.json --pdf report.pdf`");
+      throw new CliError(
+        "brinefield report: give exactly one scenario or study file, e.g. `brinefield report demo-scenarios/island-cove.json --pdf report.pdf`",
+      );
     }
     const inputPath = positionals[0]!;
-    const outputs = [values.out ?? defaultOut(inputPath), values.pdf, values.csv, values["series-csv"], values.json].filter((p): p is string => p !== undefined);
+    const outputs = [
+      values.out ?? defaultOut(inputPath),
+      values.pdf,
+      values.csv,
+      values["series-csv"],
+      values.json,
+    ].filter((p): p is string => p !== undefined);
     const clash = outputs.find((p, i) => outputs.findIndex((q) => resolve(io.cwd, q) === resolve(io.cwd, p)) !== i);
-    if (clash !== undefined) throw new CliError(`brinefield report: ${clash} is named for two outputs; give each output its own file`);
-    const runs = numberOption(values.uncertainty, "uncertainty", "report", (v) => (Number.isInteger(v) && v >= 1 && v <= 100_000 ? null : "must be a whole number from 1 to 100000"));
-    const seed = numberOption(values.seed, "seed", "report", (v) => (Number.isInteger(v) && v >= 0 && v <= 0xffffffff ? null : "must be a whole number from 0 to 4294967295")) ?? 1;
+    if (clash !== undefined)
+      throw new CliError(`brinefield report: ${clash} is named for two outputs; give each output its own file`);
+    const runs = numberOption(values.uncertainty, "uncertainty", "report", (v) =>
+      Number.isInteger(v) && v >= 1 && v <= 100_000 ? null : "must be a whole number from 1 to 100000",
+    );
+    const seed =
+      numberOption(values.seed, "seed", "report", (v) =>
+        Number.isInteger(v) && v >= 0 && v <= 0xffffffff ? null : "must be a whole number from 0 to 4294967295",
+      ) ?? 1;
     const claimed = numberOption(values["claimed-dilution"], "claimed-dilution", "report", (v) =>
       v >= 1 ? null : "is not possible: a dilution is at least 1 (1 is the undiluted brine at the port)",
     );
-    const at = numberOption(values.at, "at", "report", (v) => (v > 0 ? null : "must be a distance in metres greater than 0"));
-    if (at !== undefined && claimed === undefined) throw new CliError("brinefield report: --at needs --claimed-dilution N.");
+    const at = numberOption(values.at, "at", "report", (v) =>
+      v > 0 ? null : "must be a distance in metres greater than 0",
+    );
+    if (at !== undefined && claimed === undefined)
+      throw new CliError("brinefield report: --at needs --claimed-dilution N.");
     const { text, value: file } = loadJsonTextFile(inputPath, io);
     const format = file !== null && typeof file === "object" ? (file as { format?: unknown }).format : undefined;
     const want3d = !values["no-3d"];
@@ -148,8 +184,12 @@ export const command: CliCommand = {
       const parsed = parseStudy(file);
       if (!parsed.ok) throw new CliError(formatIssues(inputPath, parsed.issues));
       const study = parsed.study;
-      const baseRaw = typeof study.base === "string" ? loadJsonFile(resolve(io.cwd, dirname(inputPath), study.base), io) : study.base;
-      const list = [{ name: "base", description: undefined as string | undefined, overrides: {} as Record<string, unknown> }, ...(study.variants ?? [])];
+      const baseRaw =
+        typeof study.base === "string" ? loadJsonFile(resolve(io.cwd, dirname(inputPath), study.base), io) : study.base;
+      const list = [
+        { name: "base", description: undefined as string | undefined, overrides: {} as Record<string, unknown> },
+        ...(study.variants ?? []),
+      ];
       const variants: StudyReportVariant[] = list.map((v, i) => {
         const where = i === 0 ? `${inputPath} (base)` : `${inputPath} variants.${i - 1} (${v.name})`;
         let raw: unknown = baseRaw;
@@ -159,10 +199,22 @@ export const command: CliCommand = {
           throw new CliError(`${where}: ${err instanceof Error ? err.message : String(err)}`);
         }
         const scenario = readScenarioRaw(raw, where);
-        return { name: v.name, description: v.description, overrides: v.overrides, scenarioFile: raw, result: runScenario(scenario) };
+        return {
+          name: v.name,
+          description: v.description,
+          overrides: v.overrides,
+          scenarioFile: raw,
+          result: runScenario(scenario),
+        };
       });
-      if (runs !== undefined) io.stderr("brinefield report: --uncertainty applies to scenarios only; run it per scenario for a study's variants.\n");
-      if (claimed !== undefined) throw new CliError("brinefield report: --claimed-dilution applies to scenarios only; report the variant's scenario to check a claim.");
+      if (runs !== undefined)
+        io.stderr(
+          "brinefield report: --uncertainty applies to scenarios only; run it per scenario for a study's variants.\n",
+        );
+      if (claimed !== undefined)
+        throw new CliError(
+          "brinefield report: --claimed-dilution applies to scenarios only; report the variant's scenario to check a claim.",
+        );
       let pngs: (string | undefined)[] | undefined;
       let note: string | undefined = want3d ? undefined : "it was turned off (--no-3d)";
       if (want3d) {
@@ -189,11 +241,18 @@ export const command: CliCommand = {
       let claim: ClaimCheck | undefined;
       if (claimed !== undefined) {
         const outcome = checkClaimOnScenario(scenario, claimed, at);
-        if (!outcome.ok) throw new CliError(`brinefield report: ${outcome.field === "at" ? "--at" : "--claimed-dilution"}: ${outcome.message}`);
+        if (!outcome.ok)
+          throw new CliError(
+            `brinefield report: ${outcome.field === "at" ? "--at" : "--claimed-dilution"}: ${outcome.message}`,
+          );
         claim = outcome.check;
       }
       const shot = want3d ? await tryCapture3d(text, io) : { note: "it was turned off (--no-3d)" };
-      html = reportHtml(result, { scenarioFile: file, scenarioText: text }, { view3dPng: shot.png, view3dNote: shot.note, uncertainty, claim, generatedAt });
+      html = reportHtml(
+        result,
+        { scenarioFile: file, scenarioText: text },
+        { view3dPng: shot.png, view3dNote: shot.note, uncertainty, claim, generatedAt },
+      );
       about = aboutResult(result);
       csv = resultCsv(result);
       series = seriesCsv(result);

@@ -38,10 +38,18 @@ its path); 70 an internal error; 130 cancelled.`,
   async run(argv, io) {
     const { values, positionals } = readArgs(
       argv,
-      { json: { type: "boolean" }, "no-path": { type: "boolean" }, record: { type: "string" }, workers: { type: "string" } },
+      {
+        json: { type: "boolean" },
+        "no-path": { type: "boolean" },
+        record: { type: "string" },
+        workers: { type: "string" },
+      },
       "run",
     );
-    if (positionals.length !== 1) throw new CliError("brinefield run: give exactly one scenario file, e.g. `brinefield run demo-scenarios/island-cove.json`");
+    if (positionals.length !== 1)
+      throw new CliError(
+        "brinefield run: give exactly one scenario file, e.g. `brinefield run demo-scenarios/island-cove.json`",
+      );
     const path = positionals[0]!;
     const workers = workersOption(values.workers, io, "run");
     // Ctrl-C before the worker threads start (reading a long record, the stated conditions) also cancels.
@@ -54,39 +62,48 @@ its path); 70 an internal error; 130 cancelled.`,
       process.removeListener("SIGINT", onSigint);
     }
     async function runCommand(): Promise<number> {
-    let raw = loadJsonTextFile(path, io).value;
-    if (values.record !== undefined) {
-      const csv = recordFromCsv(io.readFile(values.record), values.record);
-      if (!csv.ok) throw new CliError(csv.message);
-      if (raw === null || typeof raw !== "object" || Array.isArray(raw)) throw new CliError(`${path}: must hold a scenario object`);
-      const r = raw as Record<string, unknown>;
-      const ambient = r.ambient && typeof r.ambient === "object" && !Array.isArray(r.ambient) ? (r.ambient as Record<string, unknown>) : {};
-      raw = { ...r, ambient: { ...ambient, record: csv.record } };
-    }
-    const parsed = parseScenario(raw);
-    if (!parsed.ok) throw new CliError(formatIssues(values.record !== undefined ? `${path} with ${values.record}` : path, parsed.issues));
-    const scenario = parsed.scenario;
-    const includePath = !values["no-path"];
-    // Distinct steps (new water) are what costs time: repeated water is computed once.
-    const distinctSteps = scenario.ambient.record ? distinctStepIndices(scenario).length : 0;
-    let result;
-    if (distinctSteps >= RECORD_STEPS_FOR_WORKERS) {
-      const top = runAmbientCase(scenario, { includePath });
-      await new Promise((r) => setImmediate(r)); // let a pending Ctrl-C arrive
+      let raw = loadJsonTextFile(path, io).value;
+      if (values.record !== undefined) {
+        const csv = recordFromCsv(io.readFile(values.record), values.record);
+        if (!csv.ok) throw new CliError(csv.message);
+        if (raw === null || typeof raw !== "object" || Array.isArray(raw))
+          throw new CliError(`${path}: must hold a scenario object`);
+        const r = raw as Record<string, unknown>;
+        const ambient =
+          r.ambient && typeof r.ambient === "object" && !Array.isArray(r.ambient)
+            ? (r.ambient as Record<string, unknown>)
+            : {};
+        raw = { ...r, ambient: { ...ambient, record: csv.record } };
+      }
+      const parsed = parseScenario(raw);
+      if (!parsed.ok)
+        throw new CliError(
+          formatIssues(values.record !== undefined ? `${path} with ${values.record}` : path, parsed.issues),
+        );
+      const scenario = parsed.scenario;
+      const includePath = !values["no-path"];
+      // Distinct steps (new water) are what costs time: repeated water is computed once.
+      const distinctSteps = scenario.ambient.record ? distinctStepIndices(scenario).length : 0;
+      let result;
+      if (distinctSteps >= RECORD_STEPS_FOR_WORKERS) {
+        const top = runAmbientCase(scenario, { includePath });
+        await new Promise((r) => setImmediate(r)); // let a pending Ctrl-C arrive
+        if (cancelled) {
+          io.stderr("Cancelled: no results.\n");
+          return EXIT_CANCELLED;
+        }
+        const done = await withProgress(io, "Record steps", distinctSteps, (onProgress) =>
+          recordStepsOnWorkers(scenario, workers, onProgress),
+        );
+        if (!done) return EXIT_CANCELLED;
+        result = withRecord(scenario, top, done.value);
+      } else result = runScenario(scenario, { includePath });
       if (cancelled) {
         io.stderr("Cancelled: no results.\n");
         return EXIT_CANCELLED;
       }
-      const done = await withProgress(io, "Record steps", distinctSteps, (onProgress) => recordStepsOnWorkers(scenario, workers, onProgress));
-      if (!done) return EXIT_CANCELLED;
-      result = withRecord(scenario, top, done.value);
-    } else result = runScenario(scenario, { includePath });
-    if (cancelled) {
-      io.stderr("Cancelled: no results.\n");
-      return EXIT_CANCELLED;
-    }
-    io.stdout(values.json ? jsonText(result) : summaryText(scenario, result));
-    return 0;
+      io.stdout(values.json ? jsonText(result) : summaryText(scenario, result));
+      return 0;
     }
   },
 };

@@ -26,12 +26,7 @@ import {
 } from "../../study/sweep";
 import { textTable } from "../../study/table";
 import { formatNumber } from "../../units";
-import {
-  EXIT_CANCELLED,
-  pointsOnWorkers,
-  workersOption,
-  withProgress,
-} from "../workers/run-study";
+import { EXIT_CANCELLED, pointsOnWorkers, workersOption, withProgress } from "../workers/run-study";
 
 const NAME = "sweep";
 
@@ -121,11 +116,20 @@ async function run(argv: readonly string[], io: CliIO): Promise<number> {
   const caseCount = expandCases(scenario).length;
   const tooMuch =
     sweepPointsIssue(pointCount) ??
-    workIssue(`a sweep of ${pointCount} points × ${caseCount} ambient case${caseCount === 1 ? "" : "s"}`, pointCount * caseCount, scenario);
+    workIssue(
+      `a sweep of ${pointCount} points × ${caseCount} ambient case${caseCount === 1 ? "" : "s"}`,
+      pointCount * caseCount,
+      scenario,
+    );
   if (tooMuch) throw new CliError(`brinefield ${NAME}: ${tooMuch}`);
   const grid = sweepGrid(axes);
   const done = await withProgress(io, "Sweep", grid.length, (onProgress) =>
-    pointsOnWorkers(scenario, grid.map((g) => g.overrides), workers, onProgress),
+    pointsOnWorkers(
+      scenario,
+      grid.map((g) => g.overrides),
+      workers,
+      onProgress,
+    ),
   );
   if (!done) return EXIT_CANCELLED;
   const { value: points, elapsedSeconds } = done;
@@ -136,11 +140,20 @@ async function run(argv: readonly string[], io: CliIO): Promise<number> {
   const blend = axes.some((a) => a.path === "plant.blendRatio") ? blendSignChange(scenario) : null;
   const counts = sweepCounts(rows);
   const casesNote = describeCases(expandCases(scenario), scenario);
-  const keptNotes = keptValueNotes(scenario, axes.map((a) => a.path));
+  const keptNotes = keptValueNotes(
+    scenario,
+    axes.map((a) => a.path),
+  );
   const tally = `Points: ${rows.length} — meets ${counts.meets}, exceeds ${counts.exceeds}, outside-scope ${counts["outside-scope"]}, refused ${counts.refused}.`;
   const { columns: cols, records: flat } = sweepRecords(axes, rows);
   if (values.csv) {
-    await io.writeFile(values.csv, csvWithCaution(flatRowsCsv(flat as Record<string, unknown>[], cols), undefined, { scenario: scenario.name, inputsHash: inputsHash(scenario) }));
+    await io.writeFile(
+      values.csv,
+      csvWithCaution(flatRowsCsv(flat as Record<string, unknown>[], cols), undefined, {
+        scenario: scenario.name,
+        inputsHash: inputsHash(scenario),
+      }),
+    );
   }
   const crossingText = crossings.map((c) => {
     const [a, b] = c.between;
@@ -163,23 +176,22 @@ async function run(argv: readonly string[], io: CliIO): Promise<number> {
   if (blend && blend.signChanges.length > 0) signText.push(`Blend: ${blend.note}`);
   if (values.json) {
     io.stdout(
-      jsonText(
-        {
-          format: "brinefield-sweep",
-          version: 1,
-          caution: CAUTION,
-          scenarioName: scenario.name,
-          tally,
-          axes,
-          points: flat,
-          equationOfStateCrossings: crossings,
-          buoyancySignChanges: signChanges,
-          ...(blend ? { blendSignChangeRatio: blend.signChangeRatio, blendSignChanges: blend.signChanges } : {}),
-          counts,
-          noPointMeets: counts.meets === 0,
-          notes: [casesNote, ...keptNotes, ...crossingText, ...signText],
-          elapsedSeconds,
-        }),
+      jsonText({
+        format: "brinefield-sweep",
+        version: 1,
+        caution: CAUTION,
+        scenarioName: scenario.name,
+        tally,
+        axes,
+        points: flat,
+        equationOfStateCrossings: crossings,
+        buoyancySignChanges: signChanges,
+        ...(blend ? { blendSignChangeRatio: blend.signChangeRatio, blendSignChanges: blend.signChanges } : {}),
+        counts,
+        noPointMeets: counts.meets === 0,
+        notes: [casesNote, ...keptNotes, ...crossingText, ...signText],
+        elapsedSeconds,
+      }),
     );
     return 0;
   }
@@ -226,9 +238,16 @@ async function run(argv: readonly string[], io: CliIO): Promise<number> {
 
 /** Points that meet every limit, that do not, and that could not be computed (counted apart). */
 /** Points per verdict; "refused" points broke a scenario rule and were not computed. */
-function sweepCounts(rows: readonly { verdict: string }[]): Record<"meets" | "exceeds" | "outside-scope" | "refused", number> {
+function sweepCounts(
+  rows: readonly { verdict: string }[],
+): Record<"meets" | "exceeds" | "outside-scope" | "refused", number> {
   const count = (v: string) => rows.filter((r) => r.verdict === v).length;
-  return { meets: count("meets"), exceeds: count("exceeds"), "outside-scope": count("outside-scope"), refused: count("refused") };
+  return {
+    meets: count("meets"),
+    exceeds: count("exceeds"),
+    "outside-scope": count("outside-scope"),
+    refused: count("refused"),
+  };
 }
 
 export const command: CliCommand = {

@@ -18,12 +18,7 @@ import {
   percentText,
   verdictCountsSentence,
 } from "../../study/uncertainty-words";
-import {
-  EXIT_CANCELLED,
-  monteCarloOnWorkers,
-  workersOption,
-  withProgress,
-} from "../workers/run-study";
+import { EXIT_CANCELLED, monteCarloOnWorkers, workersOption, withProgress } from "../workers/run-study";
 
 const NAME = "uncertainty";
 const DEFAULT_RUNS = 1000;
@@ -99,7 +94,11 @@ async function run(argv: readonly string[], io: CliIO): Promise<number> {
   const workers = Math.min(workersOption(values.workers, io, NAME), runs);
   const scenario = loadScenarioFile(positionals[0]!, io);
   const caseCount = expandCases(scenario).length;
-  const tooMuch = workIssue(`--runs ${runs} × ${caseCount} ambient case${caseCount === 1 ? "" : "s"}`, runs * caseCount, scenario);
+  const tooMuch = workIssue(
+    `--runs ${runs} × ${caseCount} ambient case${caseCount === 1 ? "" : "s"}`,
+    runs * caseCount,
+    scenario,
+  );
   if (tooMuch) throw new CliError(`brinefield ${NAME}: ${tooMuch}`);
   const planned = planMonteCarlo(scenario, runs, seed);
   if (!planned.ok) {
@@ -115,30 +114,32 @@ async function run(argv: readonly string[], io: CliIO): Promise<number> {
   const summary = summariseMonteCarlo(plan, chunks);
   const casesNote = [
     describeCases(expandCases(scenario), scenario),
-    ...keptValueNotes(scenario, plan.distributions.map((d) => d.path)),
+    ...keptValueNotes(
+      scenario,
+      plan.distributions.map((d) => d.path),
+    ),
   ].join(" ");
   if (values.json) {
     io.stdout(
-      jsonText(
-        {
-          format: "brinefield-uncertainty",
-          version: 1,
-          caution: CAUTION,
-          scenarioName: scenario.name,
-          runs: summary.runs,
-          seed: summary.seed,
-          usedDefaultSpreads: summary.usedDefaultSpreads,
-          inputs: plan.distributions,
-          notes: [...summary.notes, casesNote],
-          cases: summary.cases.map(statsJson),
-          worstCase: statsJson(summary.worstCase),
-          noRunMeets: summary.worstCase.meetingRuns === 0,
-          clampedSamples: summary.clampedSamples,
-          clampedByInput: summary.clampedByInput,
-          firstError: summary.firstError,
-          workers,
-          elapsedSeconds,
-        }),
+      jsonText({
+        format: "brinefield-uncertainty",
+        version: 1,
+        caution: CAUTION,
+        scenarioName: scenario.name,
+        runs: summary.runs,
+        seed: summary.seed,
+        usedDefaultSpreads: summary.usedDefaultSpreads,
+        inputs: plan.distributions,
+        notes: [...summary.notes, casesNote],
+        cases: summary.cases.map(statsJson),
+        worstCase: statsJson(summary.worstCase),
+        noRunMeets: summary.worstCase.meetingRuns === 0,
+        clampedSamples: summary.clampedSamples,
+        clampedByInput: summary.clampedByInput,
+        firstError: summary.firstError,
+        workers,
+        elapsedSeconds,
+      }),
     );
     return 0;
   }
@@ -171,7 +172,23 @@ async function run(argv: readonly string[], io: CliIO): Promise<number> {
     s.verdicts.refused,
   ]);
   out.push("Dilution at the mixing-zone edge (× — parts of mixed water per part of brine):");
-  out.push(textTable(["case", "P5", "P50", "P95", "margin P5", "chance not meeting limit", "meets", "exceeds", "outside-scope", "refused"], rows));
+  out.push(
+    textTable(
+      [
+        "case",
+        "P5",
+        "P50",
+        "P95",
+        "margin P5",
+        "chance not meeting limit",
+        "meets",
+        "exceeds",
+        "outside-scope",
+        "refused",
+      ],
+      rows,
+    ),
+  );
   out.push("", "What these mean:");
   for (const e of UNCERTAINTY_EXPLANATIONS) out.push(`  ${e}`);
   const clamped = clampedSentences(summary);
@@ -179,7 +196,8 @@ async function run(argv: readonly string[], io: CliIO): Promise<number> {
     out.push("", "Clamped inputs (a drawn value outside the field's physical bounds is set to the nearest bound):");
     for (const c of clamped) out.push(`  ${c}`);
   }
-  if (summary.firstError) out.push(`Some draws were refused (they break a scenario rule); first: ${summary.firstError}`);
+  if (summary.firstError)
+    out.push(`Some draws were refused (they break a scenario rule); first: ${summary.firstError}`);
   io.stdout(withCaution(out.join("\n") + "\n"));
   return 0;
 }

@@ -52,7 +52,10 @@ function isMissing(err: unknown): boolean {
 }
 
 /** The file the bytes will land in, and what is there now (null: nothing yet). Throws when refused. */
-async function resolveTarget(targetPath: string, notOneOf: readonly FileIdentity[]): Promise<{ target: string; existing: Stats | null }> {
+async function resolveTarget(
+  targetPath: string,
+  notOneOf: readonly FileIdentity[],
+): Promise<{ target: string; existing: Stats | null }> {
   const requested = resolve(targetPath);
   let target = requested;
   let link: Stats | null = null;
@@ -103,7 +106,11 @@ export async function writeFileAtomic(
   try {
     // 0o666 less the umask for a new file, as any program creates files; an existing file's bits are
     // set exactly below (the umask would otherwise narrow them).
-    handle = await fsp.open(temp, fsConstants.O_CREAT | fsConstants.O_EXCL | fsConstants.O_WRONLY, existing ? 0o600 : 0o666);
+    handle = await fsp.open(
+      temp,
+      fsConstants.O_CREAT | fsConstants.O_EXCL | fsConstants.O_WRONLY,
+      existing ? 0o600 : 0o666,
+    );
     created = true;
     await handle.writeFile(data);
     if (existing && platform !== "win32") await handle.chmod(existing.mode & 0o777);

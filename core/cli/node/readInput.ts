@@ -32,7 +32,8 @@ export function notRegularFileReason(st: Stats): string | null {
   if (st.isDirectory()) return "is a folder, not a file";
   if (st.isFIFO()) return "is a pipe, not a regular file; Brinefield reads regular files only";
   if (st.isSocket()) return "is a socket, not a regular file; Brinefield reads regular files only";
-  if (st.isCharacterDevice() || st.isBlockDevice()) return "is a device, not a regular file; Brinefield reads regular files only";
+  if (st.isCharacterDevice() || st.isBlockDevice())
+    return "is a device, not a regular file; Brinefield reads regular files only";
   return "is not a regular file";
 }
 

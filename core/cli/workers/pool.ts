@@ -80,7 +80,13 @@ export class StudyPool {
           results[m.id] = m;
           const t = tasks[m.id]!;
           progress[m.id] =
-            t.kind === "monte-carlo" ? t.end - t.start : t.kind === "points" ? t.overrides.length : t.kind === "record-steps" ? t.indices.length : 1;
+            t.kind === "monte-carlo"
+              ? t.end - t.start
+              : t.kind === "points"
+                ? t.overrides.length
+                : t.kind === "record-steps"
+                  ? t.indices.length
+                  : 1;
           report();
           finished++;
           if (finished === tasks.length) resolve(results);

@@ -13,10 +13,13 @@ let port: number;
 
 function get(path: string, host?: string, method = "GET"): Promise<number> {
   return new Promise((resolve, reject) => {
-    const req = request({ host: "127.0.0.1", port, path, method, headers: { Host: host ?? `127.0.0.1:${port}` } }, (res) => {
-      res.resume();
-      res.on("end", () => resolve(res.statusCode ?? 0));
-    });
+    const req = request(
+      { host: "127.0.0.1", port, path, method, headers: { Host: host ?? `127.0.0.1:${port}` } },
+      (res) => {
+        res.resume();
+        res.on("end", () => resolve(res.statusCode ?? 0));
+      },
+    );
     req.on("error", reject);
     req.end();
   });

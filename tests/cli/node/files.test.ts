@@ -1,7 +1,17 @@
 /** The one reader and the one writer of every Brinefield file (core/cli/node/): what they refuse and keep. */
 import { afterEach, beforeEach, describe, expect, it } from "vitest";
 import { spawnSync } from "node:child_process";
-import { chmodSync, lstatSync, mkdtempSync, readFileSync, readdirSync, rmSync, statSync, symlinkSync, writeFileSync } from "node:fs";
+import {
+  chmodSync,
+  lstatSync,
+  mkdtempSync,
+  readFileSync,
+  readdirSync,
+  rmSync,
+  statSync,
+  symlinkSync,
+  writeFileSync,
+} from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { readInputFile, readInputFileSync, writeFileAtomic } from "../../../core/cli/node";
@@ -44,7 +54,9 @@ describe("writeFileAtomic()", () => {
     expect(statSync("/dev/null").isCharacterDevice(), "still a device").toBe(true);
     await expect(writeFileAtomic(dir, "x"), "folder").rejects.toThrow(/is a folder/);
     symlinkSync(join(dir, "nowhere"), join(dir, "dangling"));
-    await expect(writeFileAtomic(join(dir, "dangling"), "x"), "dangling link").rejects.toThrow(/symbolic link to a missing file/);
+    await expect(writeFileAtomic(join(dir, "dangling"), "x"), "dangling link").rejects.toThrow(
+      /symbolic link to a missing file/,
+    );
     expect(lstatSync(join(dir, "dangling")).isSymbolicLink(), "link left as it was").toBe(true);
     expect(readdirSync(dir), "no temporary file").toEqual(["dangling"]);
   });
@@ -53,7 +65,10 @@ describe("writeFileAtomic()", () => {
     writeFileSync(input, "scenario");
     const read = readInputFileSync(input);
     if (!read.ok) throw new Error(read.message);
-    await expect(writeFileAtomic(join(dir, ".", "mine.json"), "html", { notOneOf: [read.identity] }), "same file").rejects.toThrow(/one of this command's input files/);
+    await expect(
+      writeFileAtomic(join(dir, ".", "mine.json"), "html", { notOneOf: [read.identity] }),
+      "same file",
+    ).rejects.toThrow(/one of this command's input files/);
     expect(readFileSync(input, "utf8"), "input untouched").toBe("scenario");
   });
   it("keeps the exact permission bits of the file it replaces, whatever the umask", async () => {

@@ -108,7 +108,8 @@ describe("ambient.basin through the pipeline", () => {
   it("refuses a basin without exactly one of flushingTime and exchangeFlow, naming the field", () => {
     const both = parseScenario(lagoon({ volume: 1e7, flushingTime: 86400, exchangeFlow: 3 }));
     expect(both.ok).toBe(false);
-    if (!both.ok) expect(both.issues.map((i) => i.message).join("\n")).toMatch(/^ambient\.basin: .*exactly one of flushingTime/m);
+    if (!both.ok)
+      expect(both.issues.map((i) => i.message).join("\n")).toMatch(/^ambient\.basin: .*exactly one of flushingTime/m);
     const bad = parseScenario(lagoon({ volume: "-3 m^3", flushingTime: "2 days" }));
     expect(bad.ok).toBe(false);
     if (!bad.ok) expect(bad.issues.map((i) => i.message).join("\n")).toMatch(/ambient\.basin\.volume/);
@@ -126,7 +127,11 @@ describe("the report names the box-model assumption", () => {
     expect(text).toMatch(/no stratification/);
     expect(text).toMatch(/complete mixing/);
     expect(text).toMatch(/C<sub>natural<\/sub> \+ allowed increase − C<sub>raised<\/sub>/);
-    const open = reportHtml(runScenario(scenarioOf(lagoon())), { scenarioFile: lagoon() }, { generatedAt: "2026-12-03T00:00:00Z" });
+    const open = reportHtml(
+      runScenario(scenarioOf(lagoon())),
+      { scenarioFile: lagoon() },
+      { generatedAt: "2026-12-03T00:00:00Z" },
+    );
     expect(open).not.toMatch(/id="basin"/);
   });
 });

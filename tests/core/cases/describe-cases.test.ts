@@ -9,7 +9,10 @@ import { fourPortRaw, scenarioFrom } from "../study/fixtures";
 describe("describeCases", () => {
   it("quotes each case name so a comma inside a name cannot be read as two cases", () => {
     const raw = fourPortRaw() as Record<string, any>;
-    raw.ambientCases = [{ name: "Slack water, summer", currentSpeed: 0 }, { name: "Storm", currentSpeed: 0.4 }];
+    raw.ambientCases = [
+      { name: "Slack water, summer", currentSpeed: 0 },
+      { name: "Storm", currentSpeed: 0.4 },
+    ];
     const s = scenarioFrom(raw);
     const text = describeCases(expandCases(s), s);
     expect(text).toContain("“Slack water, summer”");

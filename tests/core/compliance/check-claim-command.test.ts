@@ -55,13 +55,22 @@ describe("brinefield check-claim", () => {
         expect(c.assumptions.length, "and its assumptions").toBeGreaterThan(0);
       }
     }
-    expect((await json([demo, "--claimed-dilution", "100000", "--json"])).body.verdict, "no chain reaches 100 000").toBe("not-supported");
-    expect((await json([demo, "--claimed-dilution", "1.5", "--json"])).body.verdict, "every case dilutes more than 1.5").toBe("supported");
+    expect(
+      (await json([demo, "--claimed-dilution", "100000", "--json"])).body.verdict,
+      "no chain reaches 100 000",
+    ).toBe("not-supported");
+    expect(
+      (await json([demo, "--claimed-dilution", "1.5", "--json"])).body.verdict,
+      "every case dilutes more than 1.5",
+    ).toBe("supported");
   });
 
   it("covers the stated conditions, every listed case and slack water (unless turned off)", async () => {
     const { body } = await json([demo, "--claimed-dilution", "60", "--json"]);
-    expect(body.cases.map((c: { name: string }) => c.name), "sandy shelf's cases").toEqual(["stated", "Flood tide", "Ebb tide", "Late-summer warm water", "slack water"]);
+    expect(
+      body.cases.map((c: { name: string }) => c.name),
+      "sandy shelf's cases",
+    ).toEqual(["stated", "Flood tide", "Ebb tide", "Late-summer warm water", "slack water"]);
     const raw = JSON.parse(readFileSync(demo, "utf8"));
     raw.options = { addSlackWater: false };
     const off = casesForOverall(scenarioOf(raw)).map((c) => c.name);
@@ -83,7 +92,9 @@ describe("brinefield check-claim", () => {
     const { body } = await json([demo, "--claimed-dilution", "60", "--json"]);
     const s = scenarioOf(JSON.parse(readFileSync(demo, "utf8")));
     expect(body.conservativeCase, "a listed case governs").toBe("Late-summer warm water");
-    expect(body.conservativeDilution, "below the stated conditions' edge dilution").toBeLessThan(runScenario(s).mixingZone.dilution);
+    expect(body.conservativeDilution, "below the stated conditions' edge dilution").toBeLessThan(
+      runScenario(s).mixingZone.dilution,
+    );
   });
 
   it("says which chains reproduce a claim that falls between chains", async () => {
@@ -111,19 +122,26 @@ describe("brinefield check-claim", () => {
         expect(e.message, `${args.join(" ")}: names the option`).toMatch(/--(at|claimed-dilution)/);
       });
     }
-    await command.run([demo, "--claimed-dilution", "60", "--at", "20000"], fakeIO()).catch((e: CliError) =>
-      expect(e.message, "says where the series ends").toMatch(/ends at 300 m/),
-    );
+    await command
+      .run([demo, "--claimed-dilution", "60", "--at", "20000"], fakeIO())
+      .catch((e: CliError) => expect(e.message, "says where the series ends").toMatch(/ends at 300 m/));
     await expect(command.run([demo], fakeIO()), "required option").rejects.toBeInstanceOf(CliError);
   });
 
   it("checks at a distance inside the series (no extrapolation, the same code as the edge)", async () => {
     const { body } = await json([demo, "--claimed-dilution", "30", "--at", "300", "--json"]);
     expect(body.distance, "as asked").toBe(300);
-    const s = scenarioOf({ ...JSON.parse(readFileSync(demo, "utf8")), ambientCases: [], options: { addSlackWater: false } });
+    const s = scenarioOf({
+      ...JSON.parse(readFileSync(demo, "utf8")),
+      ambientCases: [],
+      options: { addSlackWater: false },
+    });
     const far = runScenario({ ...s, mixingZone: { ...s.mixingZone, radius: 300 } });
     const stated = body.cases.find((c: { name: string }) => c.name === "stated");
-    expect(stated.edgeDilution, "the stated case equals run with the radius at 300 m").toBeCloseTo(far.mixingZone.dilution, 9);
+    expect(stated.edgeDilution, "the stated case equals run with the radius at 300 m").toBeCloseTo(
+      far.mixingZone.dilution,
+      9,
+    );
   });
 
   it("prints the verdict word on its first line, a table of chains and the caution", async () => {

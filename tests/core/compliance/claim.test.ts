@@ -30,8 +30,22 @@ function resultFixture(current = 0): BrinefieldResult {
     multiport: b.multiport,
     mixingZone: b.mixingZone,
     compliance: b.compliance,
-    cases: [{ name: "stated", kind: "stated", edgeDilution: b.mixingZone.dilution, verdict: b.compliance.verdict, margin: b.compliance.margin, scopeReasons: [] }],
-    overall: { governingCase: "stated", verdict: b.compliance.verdict, margin: b.compliance.margin, edgeDilution: b.mixingZone.dilution },
+    cases: [
+      {
+        name: "stated",
+        kind: "stated",
+        edgeDilution: b.mixingZone.dilution,
+        verdict: b.compliance.verdict,
+        margin: b.compliance.margin,
+        scopeReasons: [],
+      },
+    ],
+    overall: {
+      governingCase: "stated",
+      verdict: b.compliance.verdict,
+      margin: b.compliance.margin,
+      edgeDilution: b.mixingZone.dilution,
+    },
     warnings: b.warnings,
     methods: b.methods,
   };
@@ -52,7 +66,10 @@ describe("checkClaimFromCases() — supported, plausible or not supported", () =
     expect(ls.dilution, "length-scale chain 2.6 F (Roberts et al. 1997)").toBeCloseTo(LENGTH_SCALE, 9);
     expect(ls.low, "length-scale low end 2.6 F × 1.06/1.6").toBeCloseTo(LENGTH_SCALE * (1.06 / 1.6), 9);
     expect(c.conservativeDilution, "lowest edge dilution = the integral chain").toBeCloseTo(INTEGRAL, 9);
-    expect(c.range, "central values of the chains").toEqual([c.chains[0]!.dilution < c.chains[1]!.dilution ? c.chains[0]!.dilution : c.chains[1]!.dilution, Math.max(c.chains[0]!.dilution, c.chains[1]!.dilution)]);
+    expect(c.range, "central values of the chains").toEqual([
+      c.chains[0]!.dilution < c.chains[1]!.dilution ? c.chains[0]!.dilution : c.chains[1]!.dilution,
+      Math.max(c.chains[0]!.dilution, c.chains[1]!.dilution),
+    ]);
   });
 
   it("'supported' at or below the conservative value, within 0.1 %", () => {
@@ -75,10 +92,17 @@ describe("checkClaimFromCases() — supported, plausible or not supported", () =
     expect(integral.onlyWithinScatter, "30 > central 21.2").toBe(true);
     const c40 = check(40);
     expect(c40.verdict, "40 ≤ 52").toBe("plausible");
-    expect(c40.chains.filter((x) => x.reproducesClaim).map((x) => x.nearFieldMethod), "only the length-scale chain gives 40").toEqual(["length-scale"]);
+    expect(
+      c40.chains.filter((x) => x.reproducesClaim).map((x) => x.nearFieldMethod),
+      "only the length-scale chain gives 40",
+    ).toEqual(["length-scale"]);
     expect(c40.summary, "names the reproducing chain").toContain("length-scale");
-    expect(c40.summary, "does not name the integral chain as reproducing it").not.toMatch(/least that much: [^.]*integral/);
-    expect(c40.assumptionsNeeded.join(" "), "states the chain's assumptions").toContain("Roberts, Ferrier & Daviero 1997");
+    expect(c40.summary, "does not name the integral chain as reproducing it").not.toMatch(
+      /least that much: [^.]*integral/,
+    );
+    expect(c40.assumptionsNeeded.join(" "), "states the chain's assumptions").toContain(
+      "Roberts, Ferrier & Daviero 1997",
+    );
   });
 
   it("'not-supported' above every chain, scatter included", () => {
@@ -92,11 +116,20 @@ describe("checkClaimFromCases() — supported, plausible or not supported", () =
     const lowest = Math.min(current.result.mixingZone.dilution, stated.result.mixingZone.dilution);
     expect(c.conservativeDilution, "lowest of the two cases' edge dilutions").toBe(lowest);
     expect(new Set(c.chains.map((x) => x.case)), "chains of both cases").toEqual(new Set(["flood", "stated"]));
-    expect(c.chains.some((x) => x.farField === "passive-diffusion"), "the current adds passive-diffusion chains").toBe(true);
+    expect(
+      c.chains.some((x) => x.farField === "passive-diffusion"),
+      "the current adds passive-diffusion chains",
+    ).toBe(true);
   });
 
   it("splits chain names into the near-field method and what carries it on", () => {
-    expect(chainParts("integral + passive-diffusion"), "two-stage chain").toEqual({ nearFieldMethod: "integral", farField: "passive-diffusion" });
-    expect(chainParts("length-scale (jet crosses the edge)"), "edge inside the jet").toEqual({ nearFieldMethod: "length-scale", farField: "jet" });
+    expect(chainParts("integral + passive-diffusion"), "two-stage chain").toEqual({
+      nearFieldMethod: "integral",
+      farField: "passive-diffusion",
+    });
+    expect(chainParts("length-scale (jet crosses the edge)"), "edge inside the jet").toEqual({
+      nearFieldMethod: "length-scale",
+      farField: "jet",
+    });
   });
 });

@@ -57,15 +57,22 @@ describe("complianceFromEdgeDilution() — verdict per constituent and governing
   });
 
   it("fails with a clear reason when a limit is at or below background", () => {
-    const bad = scenarioFixture({ mixingZone: { radius: 100, limits: [{ constituent: "salinity", maxConcentration: 33, unit: "g/kg" }] } });
+    const bad = scenarioFixture({
+      mixingZone: { radius: 100, limits: [{ constituent: "salinity", maxConcentration: 33, unit: "g/kg" }] },
+    });
     const a = complianceFromEdgeDilution(bad, 1000, 33.5, 20);
     expect(a.compliance.pass, "no dilution can meet it").toBe(false);
     expect(a.compliance.constituents[0].limit, "explained").toContain("can never be met");
-    expect(a.warnings.map((w) => w.code), "serious warning").toContain("limit-below-background");
+    expect(
+      a.warnings.map((w) => w.code),
+      "serious warning",
+    ).toContain("limit-below-background");
   });
 
   it("uses a limit's own background when given", () => {
-    const own = scenarioFixture({ mixingZone: { radius: 100, limits: [{ constituent: "salinity", maxIncrease: 2, unit: "g/kg", background: 35 }] } });
+    const own = scenarioFixture({
+      mixingZone: { radius: 100, limits: [{ constituent: "salinity", maxIncrease: 2, unit: "g/kg", background: 35 }] },
+    });
     const a = complianceFromEdgeDilution(own, 20, 33.5, 20);
     expect(a.compliance.requiredDilution, "(70 − 35)/2 = 17.5, from the definition").toBeCloseTo(17.5, 12);
   });
@@ -74,6 +81,9 @@ describe("complianceFromEdgeDilution() — verdict per constituent and governing
     const none = scenarioFixture({ mixingZone: { radius: 100, limits: [] } });
     const a = complianceFromEdgeDilution(none, 5, 33.5, 20);
     expect(a.compliance.governingConstituent, "nothing to govern").toBe("none");
-    expect(a.warnings.map((w) => w.code), "said so").toContain("no-limits");
+    expect(
+      a.warnings.map((w) => w.code),
+      "said so",
+    ).toContain("no-limits");
   });
 });

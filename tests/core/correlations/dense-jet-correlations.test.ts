@@ -113,8 +113,12 @@ describe("laiLee2012CoefficientsAtAngle()", () => {
   });
 
   it("tabulates only traced angles", () => {
-    expect(LAI_LEE_2012_RISE.map((p) => p.angle), "only 15° and 60° were traced").toEqual([15, 60]);
-    for (const p of LAI_LEE_2012_RISE) expect(p.value.provenance, "cites the paper").toMatch(/Lai & Lee \(2012\).*abstract/);
+    expect(
+      LAI_LEE_2012_RISE.map((p) => p.angle),
+      "only 15° and 60° were traced",
+    ).toEqual([15, 60]);
+    for (const p of LAI_LEE_2012_RISE)
+      expect(p.value.provenance, "cites the paper").toMatch(/Lai & Lee \(2012\).*abstract/);
   });
 });
 

@@ -28,7 +28,13 @@ describe("viscosityFromST()", () => {
 
   it("warns outside its fitted range and not inside it", () => {
     expect(viscosityFromSTValidityIssues(60, 20), "inside: no warning").toEqual([]);
-    expect(viscosityFromSTValidityIssues(170, 20).map((w) => w.code), "salinity above 150 g/kg").toEqual(["viscosity-salinity-range"]);
-    expect(viscosityFromSTValidityIssues(35, -3).map((w) => w.code), "temperature below 0 °C").toEqual(["viscosity-temperature-range"]);
+    expect(
+      viscosityFromSTValidityIssues(170, 20).map((w) => w.code),
+      "salinity above 150 g/kg",
+    ).toEqual(["viscosity-salinity-range"]);
+    expect(
+      viscosityFromSTValidityIssues(35, -3).map((w) => w.code),
+      "temperature below 0 °C",
+    ).toEqual(["viscosity-temperature-range"]);
   });
 });

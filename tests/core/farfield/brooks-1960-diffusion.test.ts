@@ -10,7 +10,10 @@ import { erf } from "../../../core/farfield/erf";
 describe("brooksDilutionFromDistance() — Brooks (1960) 4/3-law centreline dilution (as reproduced in Fischer et al. 1979 ch. 9, from memory)", () => {
   it("reduces to 1 at small distance (closed form: erf(∞) = 1)", () => {
     expect(brooksDilutionFromDistance({ distance: 0, initialWidth: 20, currentSpeed: 0.1 }), "x = 0").toBe(1);
-    expect(brooksDilutionFromDistance({ distance: 1e-3, initialWidth: 20, currentSpeed: 0.1 }), "x → 0").toBeCloseTo(1, 9);
+    expect(brooksDilutionFromDistance({ distance: 1e-3, initialWidth: 20, currentSpeed: 0.1 }), "x → 0").toBeCloseTo(
+      1,
+      9,
+    );
   });
 
   it("grows with distance and approaches the published large-x form S ≈ (√π/2)·√(((1+2βx/3b)³−1)/1.5)", () => {
@@ -39,13 +42,18 @@ describe("brooksDilutionFromDistance() — Brooks (1960) 4/3-law centreline dilu
 
   it("credits no dilution and warns when there is no current (degenerate input)", () => {
     expect(brooksDilutionFromDistance({ distance: 100, initialWidth: 10, currentSpeed: 0 }), "no transport").toBe(1);
-    const codes = brooksDilutionFromDistanceValidityIssues({ distance: 100, initialWidth: 10, currentSpeed: 0 }).map((w) => w.code);
+    const codes = brooksDilutionFromDistanceValidityIssues({ distance: 100, initialWidth: 10, currentSpeed: 0 }).map(
+      (w) => w.code,
+    );
     expect(codes, "the stagnant case is flagged").toContain("brooks-no-current");
   });
 
   it("widens the field as (1 + 2βx/3b)^{3/2}, starting from its initial width", () => {
     expect(brooksWidthFromDistance({ distance: 0, initialWidth: 12, currentSpeed: 0.1 }), "b(0) = b").toBe(12);
-    expect(brooksWidthFromDistance({ distance: 300, initialWidth: 12, currentSpeed: 0.1 }), "wider downstream").toBeGreaterThan(12);
+    expect(
+      brooksWidthFromDistance({ distance: 300, initialWidth: 12, currentSpeed: 0.1 }),
+      "wider downstream",
+    ).toBeGreaterThan(12);
   });
 
   it("uses α_ε = 0.01 cm^(2/3)/s by default (Fischer et al. 1979 ch. 9, from memory)", () => {

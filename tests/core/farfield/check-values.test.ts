@@ -15,13 +15,19 @@ import required from "../../check-values/required-dilution.json";
 interface CheckTable {
   name: string;
   function: string;
-  cases: { inputs: number[]; expected: number; tolerance: { absolute?: number; relative?: number }; provenance: string }[];
+  cases: {
+    inputs: number[];
+    expected: number;
+    tolerance: { absolute?: number; relative?: number };
+    provenance: string;
+  }[];
   skip: { reason: string }[];
 }
 
 const implementations: Record<string, (...args: number[]) => number> = {
   entrainmentFromRichardson: (ri) => entrainmentFromRichardson(ri),
-  brooksDilutionFromDistance: (x, b, u) => brooksDilutionFromDistance({ distance: x, initialWidth: b, currentSpeed: u }),
+  brooksDilutionFromDistance: (x, b, u) =>
+    brooksDilutionFromDistance({ distance: x, initialWidth: b, currentSpeed: u }),
   linePlumeDilutionFromFlux: (q, g, z) => linePlumeDilutionFromFlux(q, g, z),
   requiredDilutionFromLimit: (cd, cb, cl) => requiredDilutionFromLimit(cd, cb, cl),
 };

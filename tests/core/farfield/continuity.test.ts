@@ -12,7 +12,9 @@ import { parseScenario } from "../../../core/scenario/parse";
 import { runScenario } from "../../../core/pipeline";
 
 const demoDir = join(dirname(fileURLToPath(import.meta.url)), "../../../demo-scenarios");
-const demos = readdirSync(demoDir).filter((f) => f.endsWith(".json")).sort();
+const demos = readdirSync(demoDir)
+  .filter((f) => f.endsWith(".json"))
+  .sort();
 
 /** A sloping bed (slope 0.1), three 0.25 m ports in 20 m of water — the steep-slope case. */
 const slopingBed = {
@@ -20,8 +22,25 @@ const slopingBed = {
   version: 1,
   name: "sloping bed",
   discharge: { flow: "0.5 m^3/s", salinity: "70 g/kg", temperature: "20 degC" },
-  ambient: { depth: "20 m", salinity: "35 g/kg", temperature: "20 degC", currentSpeed: 0, currentDirection: 90, bedSlope: 0.1, bedSlopeAzimuth: 90 },
-  diffuser: { layout: "line", portCount: 3, portDiameter: "0.25 m", portAngle: 60, portHeight: "1 m", portSpacing: "5 m", portAzimuth: 90, diffuserAzimuth: 0 },
+  ambient: {
+    depth: "20 m",
+    salinity: "35 g/kg",
+    temperature: "20 degC",
+    currentSpeed: 0,
+    currentDirection: 90,
+    bedSlope: 0.1,
+    bedSlopeAzimuth: 90,
+  },
+  diffuser: {
+    layout: "line",
+    portCount: 3,
+    portDiameter: "0.25 m",
+    portAngle: 60,
+    portHeight: "1 m",
+    portSpacing: "5 m",
+    portAzimuth: 90,
+    diffuserAzimuth: 0,
+  },
   mixingZone: { radius: "100 m", limits: [{ constituent: "salinity", maxIncrease: "2 g/kg" }] },
 };
 
@@ -29,7 +48,10 @@ type Raw = Record<string, any>;
 const cases: [string, Raw][] = [
   ...demos.map((f) => [f, JSON.parse(readFileSync(join(demoDir, f), "utf8"))] as [string, Raw]),
   ["sloping bed 0.1", slopingBed],
-  ["sloping bed 0.1, current across the slope", { ...slopingBed, ambient: { ...slopingBed.ambient, currentDirection: 0 } }],
+  [
+    "sloping bed 0.1, current across the slope",
+    { ...slopingBed, ambient: { ...slopingBed.ambient, currentDirection: 0 } },
+  ],
 ];
 
 function runAt(raw: Raw, currentSpeed: number) {
@@ -46,7 +68,10 @@ describe("edge dilution as the current goes to zero", () => {
       for (const u of [0.001, 0.002]) {
         const slow = runAt(raw, u);
         const rel = slow.mixingZone.dilution / still.mixingZone.dilution;
-        expect(Math.abs(rel - 1), `${name}: edge at ${u} m/s vs still water (${slow.mixingZone.dilution.toFixed(1)} vs ${still.mixingZone.dilution.toFixed(1)})`).toBeLessThan(0.1);
+        expect(
+          Math.abs(rel - 1),
+          `${name}: edge at ${u} m/s vs still water (${slow.mixingZone.dilution.toFixed(1)} vs ${still.mixingZone.dilution.toFixed(1)})`,
+        ).toBeLessThan(0.1);
         for (const alt of slow.mixingZone.alternatives) {
           const nfMethod = alt.method.split(" ")[0];
           const stillAlt = still.mixingZone.alternatives.find((a) => a.method.startsWith(nfMethod));
@@ -66,7 +91,10 @@ describe("far-field chains in a 0.3 m/s current", () => {
       const d = r.mixingZone.alternatives.map((a) => a.dilution);
       expect(d.length, "at least one chain").toBeGreaterThan(0);
       const spread = Math.max(...d) / Math.min(...d);
-      expect(spread, `${name}: ${r.mixingZone.alternatives.map((a) => `${a.method} ${a.dilution.toFixed(1)}`).join("; ")}`).toBeLessThanOrEqual(4);
+      expect(
+        spread,
+        `${name}: ${r.mixingZone.alternatives.map((a) => `${a.method} ${a.dilution.toFixed(1)}`).join("; ")}`,
+      ).toBeLessThanOrEqual(4);
     });
   }
 });

@@ -6,10 +6,7 @@
  */
 import { describe, expect, it } from "vitest";
 import { beyondNearField } from "../../../core/farfield/stage";
-import {
-  spreadingLayerFromNearFieldEnd,
-  type SpreadingLayerInput,
-} from "../../../core/farfield/gravity-current";
+import { spreadingLayerFromNearFieldEnd, type SpreadingLayerInput } from "../../../core/farfield/gravity-current";
 import { beyondInputFixture, scenarioFixture } from "./fixtures";
 
 const layer: SpreadingLayerInput = {

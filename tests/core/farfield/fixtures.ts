@@ -15,13 +15,15 @@ export const D = 0.2; // m port diameter
 export const F = 20; // densimetric Froude number
 export const DF = D * F; // 4 m
 
-export function scenarioFixture(over: {
-  discharge?: Partial<Scenario["discharge"]>;
-  ambient?: Partial<Scenario["ambient"]>;
-  diffuser?: Partial<Scenario["diffuser"]>;
-  mixingZone?: Partial<Scenario["mixingZone"]>;
-  options?: Partial<Scenario["options"]>;
-} = {}): Scenario {
+export function scenarioFixture(
+  over: {
+    discharge?: Partial<Scenario["discharge"]>;
+    ambient?: Partial<Scenario["ambient"]>;
+    diffuser?: Partial<Scenario["diffuser"]>;
+    mixingZone?: Partial<Scenario["mixingZone"]>;
+    options?: Partial<Scenario["options"]>;
+  } = {},
+): Scenario {
   return {
     format: "brinefield-scenario",
     version: 1,
@@ -158,7 +160,10 @@ export function portFixture(scenario: Scenario): PortResult {
 
 export function beyondInputFixture(scenario: Scenario, nearField?: NearFieldMethodResult[]): BeyondInput {
   const jet = jetFixture();
-  const s: Scenario = { ...scenario, discharge: { ...scenario.discharge, flow: jet.flow * Math.max(1, scenario.diffuser.portCount) } };
+  const s: Scenario = {
+    ...scenario,
+    discharge: { ...scenario.discharge, flow: jet.flow * Math.max(1, scenario.diffuser.portCount) },
+  };
   return {
     scenario: s,
     jet,

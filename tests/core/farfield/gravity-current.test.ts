@@ -31,7 +31,10 @@ describe("spreadingLayerFromNearFieldEnd() — dense layer beyond the near field
       for (let i = 0; i < s.distance.length; i += 25) {
         const flux = s.velocity[i] * s.thickness[i] * s.width[i] * (excess / s.dilution[i]);
         const rel = Math.abs(flux / (input.dischargeFlow * excess) - 1);
-        expect(rel, `salt flux at ${s.distance[i].toFixed(1)} m (slope ${input.bedSlope}, current ${input.currentSpeed})`).toBeLessThan(1e-3);
+        expect(
+          rel,
+          `salt flux at ${s.distance[i].toFixed(1)} m (slope ${input.bedSlope}, current ${input.currentSpeed})`,
+        ).toBeLessThan(1e-3);
       }
     }
   });
@@ -62,7 +65,8 @@ describe("spreadingLayerFromNearFieldEnd() — dense layer beyond the near field
 
   it("never loses dilution along the way (entrainment only adds water)", () => {
     const s = spreadingLayerFromNearFieldEnd({ ...base, currentSpeed: 0.3, bedSlope: 0.03 });
-    for (let i = 1; i < s.dilution.length; i++) expect(s.dilution[i], `step ${i}`).toBeGreaterThanOrEqual(s.dilution[i - 1]);
+    for (let i = 1; i < s.dilution.length; i++)
+      expect(s.dilution[i], `step ${i}`).toBeGreaterThanOrEqual(s.dilution[i - 1]);
   });
 
   it("handles a neutral discharge (g′ = 0) and zero span without NaN", () => {
@@ -119,7 +123,10 @@ describe("spreadingLayerFromNearFieldEnd() — entrainment from the layer's own 
     for (const bedSlope of [0, 0.02, 0.1]) {
       const still = spreadingLayerFromNearFieldEnd({ ...base, bedSlope });
       const slow = spreadingLayerFromNearFieldEnd({ ...base, bedSlope, currentSpeed: 0.002 });
-      expect(slow.switchDistance, `a 2 mm/s current cannot carry the layer off within range (slope ${bedSlope})`).toBeNull();
+      expect(
+        slow.switchDistance,
+        `a 2 mm/s current cannot carry the layer off within range (slope ${bedSlope})`,
+      ).toBeNull();
       const rel = Math.abs(last(slow.dilution) / last(still.dilution) - 1);
       expect(rel, `edge of the range, slope ${bedSlope}`).toBeLessThan(0.01);
     }

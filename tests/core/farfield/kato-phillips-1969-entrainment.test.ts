@@ -17,7 +17,10 @@ describe("bedEntrainmentFromRichardson() — Kato & Phillips (1969) u_e/u* = 2.5
     expect(bedEntrainmentFromRichardson(NaN), "undefined input").toBe(0);
   });
   it("warns below the guard and not inside the range", () => {
-    expect(bedEntrainmentFromRichardsonValidityIssues(3).map((w) => w.code), "Ri* = 3").toEqual(["bed-entrainment-weakly-stratified"]);
+    expect(
+      bedEntrainmentFromRichardsonValidityIssues(3).map((w) => w.code),
+      "Ri* = 3",
+    ).toEqual(["bed-entrainment-weakly-stratified"]);
     expect(bedEntrainmentFromRichardsonValidityIssues(30), "Ri* = 30").toEqual([]);
   });
 });

@@ -10,10 +10,10 @@ describe("beyondNearField() — from the near field to the mixing-zone edge", ()
     const out = beyondNearField(beyondInputFixture(scenarioFixture()));
     expect(out.mixingZone.nearFieldMethod, "integral: S_i = 1.06 F < length-scale S_n = 2.6 F").toBe("integral");
     expect(out.mixingZone.edgeInsideNearField, "edge at 100 m is beyond 9 dF = 36 m").toBe(false);
-    expect(out.mixingZone.alternatives.map((a) => a.method), "both chains reported").toEqual([
-      "length-scale + gravity-current",
-      "integral + gravity-current",
-    ]);
+    expect(
+      out.mixingZone.alternatives.map((a) => a.method),
+      "both chains reported",
+    ).toEqual(["length-scale + gravity-current", "integral + gravity-current"]);
   });
 
   it("uses the requested near-field method when options.nearFieldForEdge names it", () => {
@@ -26,33 +26,56 @@ describe("beyondNearField() — from the near field to the mixing-zone edge", ()
 
   it("uses the jet's own dilution where the edge lies inside the near field, and says so", () => {
     const out = beyondNearField(
-      beyondInputFixture(scenarioFixture({ mixingZone: { radius: 20, limits: [] }, options: { nearFieldForEdge: "length-scale" } })),
+      beyondInputFixture(
+        scenarioFixture({ mixingZone: { radius: 20, limits: [] }, options: { nearFieldForEdge: "length-scale" } }),
+      ),
     );
     expect(out.mixingZone.edgeInsideNearField, "20 m < x_n = 36 m").toBe(true);
     // Interpolated between impact (2.4 dF, 1.6 F) and near-field end (9 dF, 2.6 F): Roberts et al. 1997 (from memory).
     const t = (20 - 2.4 * DF) / (9 * DF - 2.4 * DF);
-    expect(out.mixingZone.dilution, "linear between the published points").toBeCloseTo(1.6 * F + t * (2.6 * F - 1.6 * F), 6);
-    expect(out.warnings.map((w) => w.code), "a readable note").toContain("edge-inside-near-field");
+    expect(out.mixingZone.dilution, "linear between the published points").toBeCloseTo(
+      1.6 * F + t * (2.6 * F - 1.6 * F),
+      6,
+    );
+    expect(
+      out.warnings.map((w) => w.code),
+      "a readable note",
+    ).toContain("edge-inside-near-field");
   });
 
   it("reports gravity current and Brooks (1960) passive diffusion in a current and keeps the lower by default", () => {
-    const out = beyondNearField(beyondInputFixture(scenarioFixture({ ambient: { currentSpeed: 0.2, currentDirection: 90 } })));
+    const out = beyondNearField(
+      beyondInputFixture(scenarioFixture({ ambient: { currentSpeed: 0.2, currentDirection: 90 } })),
+    );
     const alts = out.mixingZone.alternatives.filter((a) => a.method.startsWith(out.mixingZone.nearFieldMethod));
     expect(alts.length, "two far-field methods for the chosen near field").toBe(2);
-    expect(out.mixingZone.dilution, "conservative: the lower of the two").toBeCloseTo(Math.min(...alts.map((a) => a.dilution)), 9);
-    expect(out.methods.map((m) => m.name), "Brooks is listed among the methods").toContain("passive lateral diffusion");
+    expect(out.mixingZone.dilution, "conservative: the lower of the two").toBeCloseTo(
+      Math.min(...alts.map((a) => a.dilution)),
+      9,
+    );
+    expect(
+      out.methods.map((m) => m.name),
+      "Brooks is listed among the methods",
+    ).toContain("passive lateral diffusion");
   });
 
   it("follows options.farField when the user asks for passive diffusion", () => {
     const out = beyondNearField(
-      beyondInputFixture(scenarioFixture({ ambient: { currentSpeed: 0.2 }, options: { farField: "passive-diffusion" } })),
+      beyondInputFixture(
+        scenarioFixture({ ambient: { currentSpeed: 0.2 }, options: { farField: "passive-diffusion" } }),
+      ),
     );
     expect(out.mixingZone.method, "the chain names Brooks").toContain("Brooks (1960)");
   });
 
   it("multiplies near-field and far-field dilutions: S(x) = S_n × S_ff (Fischer et al. 1979 ch. 9, from memory)", () => {
     const out = beyondNearField(
-      beyondInputFixture(scenarioFixture({ ambient: { currentSpeed: 0.2 }, options: { farField: "passive-diffusion", nearFieldForEdge: "length-scale" } })),
+      beyondInputFixture(
+        scenarioFixture({
+          ambient: { currentSpeed: 0.2 },
+          options: { farField: "passive-diffusion", nearFieldForEdge: "length-scale" },
+        }),
+      ),
     );
     const series = out.mixingZone.series;
     const iStart = series.stage.indexOf("spreading-layer");
@@ -63,7 +86,8 @@ describe("beyondNearField() — from the near field to the mixing-zone edge", ()
   it("produces a consistent series: distances ascending, salinity increase = discharge excess ÷ dilution", () => {
     const out = beyondNearField(beyondInputFixture(scenarioFixture()));
     const s = out.mixingZone.series;
-    for (let i = 1; i < s.distance.length; i++) expect(s.distance[i], `distance ${i}`).toBeGreaterThanOrEqual(s.distance[i - 1]);
+    for (let i = 1; i < s.distance.length; i++)
+      expect(s.distance[i], `distance ${i}`).toBeGreaterThanOrEqual(s.distance[i - 1]);
     for (let i = 0; i < s.distance.length; i++) {
       expect(s.salinityIncrease[i] * s.dilution[i], `ΔS·S at ${s.distance[i]} m`).toBeCloseTo(70 - 33.5, 9);
       if (s.stage[i] === "jet") expect(s.layerThickness[i], "no layer inside the jet").toBeNull();
@@ -81,7 +105,11 @@ describe("beyondNearField() — from the near field to the mixing-zone edge", ()
 
   it("maps the seabed footprint where the governing limit is exceeded", () => {
     const tight = beyondNearField(
-      beyondInputFixture(scenarioFixture({ mixingZone: { radius: 100, limits: [{ constituent: "salinity", maxIncrease: 1, unit: "g/kg" }] } })),
+      beyondInputFixture(
+        scenarioFixture({
+          mixingZone: { radius: 100, limits: [{ constituent: "salinity", maxIncrease: 1, unit: "g/kg" }] },
+        }),
+      ),
     );
     expect(tight.compliance.pass, "needs 36.5, gets 21.2").toBe(false);
     expect(tight.mixingZone.footprint.furthestExtent, "exceeded past the edge").toBeGreaterThan(100);
@@ -100,7 +128,10 @@ describe("beyondNearField() — from the near field to the mixing-zone edge", ()
     const broken = { ...integralFixture(), impactDistance: null, returnDistance: null, impactDilution: null };
     const out = beyondNearField(beyondInputFixture(scenarioFixture(), [broken]));
     expect(out.mixingZone.dilution, "undiluted").toBe(1);
-    expect(out.warnings.map((w) => w.code), "serious warning").toContain("edge-dilution-undiluted");
+    expect(
+      out.warnings.map((w) => w.code),
+      "serious warning",
+    ).toContain("edge-dilution-undiluted");
   });
 
   it("leaves a single port's near field unchanged", () => {

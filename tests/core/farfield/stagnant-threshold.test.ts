@@ -25,6 +25,7 @@ describe("beyondNearField() with a vanishing current", () => {
     const tiny = run(5e-324);
     expect(tiny.mixingZone.dilution, "edge dilution as in stagnant water").toBe(still.mixingZone.dilution);
     const d = tiny.mixingZone.series.dilution;
-    for (let i = 1; i < d.length; i++) expect(d[i]! >= d[i - 1]! * (1 - 1e-9), `non-decreasing at point ${i}`).toBe(true);
+    for (let i = 1; i < d.length; i++)
+      expect(d[i]! >= d[i - 1]! * (1 - 1e-9), `non-decreasing at point ${i}`).toBe(true);
   });
 });

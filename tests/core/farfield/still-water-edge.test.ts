@@ -35,7 +35,10 @@ describe("still-water 60° single port, deep water, 100 m mixing zone", () => {
       expect(s / F, `edge ${s.toFixed(1)} = ${(s / F).toFixed(2)} F ≤ 4.0 F`).toBeLessThanOrEqual(4.0);
       const d = r.mixingZone.alternatives.map((a) => a.dilution);
       expect(d.length, "both near-field methods reach the edge").toBeGreaterThanOrEqual(2);
-      expect(Math.max(...d) / Math.min(...d), r.mixingZone.alternatives.map((a) => `${a.method} ${a.dilution.toFixed(1)}`).join("; ")).toBeLessThanOrEqual(2);
+      expect(
+        Math.max(...d) / Math.min(...d),
+        r.mixingZone.alternatives.map((a) => `${a.method} ${a.dilution.toFixed(1)}`).join("; "),
+      ).toBeLessThanOrEqual(2);
     });
   }
 
@@ -44,7 +47,14 @@ describe("still-water 60° single port, deep water, 100 m mixing zone", () => {
       const steep = run(0.18, angle).nearField.find((m) => m.method === "length-scale")!;
       const at60 = run(0.18, 60).nearField.find((m) => m.method === "length-scale")!;
       expect(steep.available, "not available").toBe(false);
-      for (const f of ["maxRiseHeight", "returnDistance", "impactDistance", "impactDilution", "nearFieldDistance", "nearFieldDilution"] as const) {
+      for (const f of [
+        "maxRiseHeight",
+        "returnDistance",
+        "impactDistance",
+        "impactDilution",
+        "nearFieldDistance",
+        "nearFieldDilution",
+      ] as const) {
         expect(steep[f], `${f} at ${angle}° is not the 60° value ${String(at60[f])}`).not.toEqual(at60[f]);
       }
     });

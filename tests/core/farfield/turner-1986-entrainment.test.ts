@@ -29,7 +29,10 @@ describe("entrainmentFromRichardson() — Turner (1986) E(Ri) with the Ellison &
 
   it("warns, without throwing, for a negative (unstable) Richardson number and uses E(0)", () => {
     const issues = entrainmentFromRichardsonValidityIssues(-0.3);
-    expect(issues.map((w) => w.code), "a structured warning names the problem").toContain("entrainment-richardson-negative");
+    expect(
+      issues.map((w) => w.code),
+      "a structured warning names the problem",
+    ).toContain("entrainment-richardson-negative");
     expect(entrainmentFromRichardson(-0.3), "clamped to Ri = 0").toBeCloseTo(0.08, 12);
     expect(entrainmentFromRichardsonValidityIssues(0.3), "no warning inside the fitted range").toEqual([]);
   });

@@ -13,7 +13,8 @@ import { intakeFromSeries, bearingDifference } from "../../../core/intake/intake
 import { recirculationFromPlant } from "../../../core/intake/recirculation";
 import { scenarioWith } from "../record/fixtures";
 
-const run = (ambient: Record<string, unknown>, intake: Record<string, unknown>) => runScenario(scenarioWith({ ambient, intake }), { includePath: false });
+const run = (ambient: Record<string, unknown>, intake: Record<string, unknown>) =>
+  runScenario(scenarioWith({ ambient, intake }), { includePath: false });
 
 describe("intake: dilution and salinity increase", () => {
   it("an intake at the diffuser centre sees the near-field dilution", () => {
@@ -52,7 +53,8 @@ describe("intake: dilution and salinity increase", () => {
     };
     const g0 = 0.25;
     // Front speeds: √2·√(0.25/20·1) = 0.158; /30·0.8 → 0.115; /40·0.5 → 0.079; /50·0.4 → 0.063 m/s.
-    const at = (distance: number, speed: number) => intakeFromSeries({ distance, bearing: 180, heightAboveSeabed: 2 }, series, { speed, direction: 0 }, g0);
+    const at = (distance: number, speed: number) =>
+      intakeFromSeries({ distance, bearing: 180, heightAboveSeabed: 2 }, series, { speed, direction: 0 }, g0);
     expect(at(30, 0.1).upstreamReach, "arrested between 20 m (0.115 m/s) and 40 m (0.079 m/s)").toBe(20);
     expect(at(30, 0.1).salinityIncrease).toBe(0);
     expect(at(15, 0.1).dilution).toBeCloseTo(25, 12);
@@ -63,7 +65,11 @@ describe("intake: dilution and salinity increase", () => {
   });
 
   it("the study path gives the intake the same figures and folds its limit into the verdict", () => {
-    const s = scenarioWith({ ambient: { currentSpeed: 0.1 }, intake: { distance: 50, bearing: 90, heightAboveSeabed: 1, maxSalinityIncrease: 0.01 }, options: { addSlackWater: true } });
+    const s = scenarioWith({
+      ambient: { currentSpeed: 0.1 },
+      intake: { distance: 50, bearing: 90, heightAboveSeabed: 1, maxSalinityIncrease: 0.01 },
+      options: { addSlackWater: true },
+    });
     const r = runScenario(s, { includePath: false });
     const study = evaluateCases(s, evaluateScenario);
     expect(r.intake!.verdict).toBe("exceeds");
@@ -76,7 +82,11 @@ describe("intake: dilution and salinity increase", () => {
 describe("intake: plant balance with the brine drawn back in", () => {
   it("matches a hand calculation", () => {
     const plant = { productFlow: 0.5, recovery: 0.45, feedSalinity: 37, saltRejection: 0.997, feedTemperature: 22 };
-    const s = scenarioWith({ plant, ambient: { salinity: 37 }, intake: { distance: 0, bearing: 0, heightAboveSeabed: 1 } });
+    const s = scenarioWith({
+      plant,
+      ambient: { salinity: 37 },
+      intake: { distance: 0, bearing: 0, heightAboveSeabed: 1 },
+    });
     // Hand calculation: brine/feed k = (1 − r·(1 − rejection))/(1 − r) = (1 − 0.45·0.003)/0.55 = 1.8157273
     // Steady feed S_f = 37 + (k·S_f − 37)/D  ⇒  S_f = (37 − 37/D)/(1 − k/D); D = 20: S_f = 35.15/0.90921364 = 38.659...
     const k = (1 - 0.45 * 0.003) / 0.55;

@@ -24,7 +24,10 @@ describe("linePlumeDilutionFromFlux() — S_m = 0.27 b^{1/3} z/q (Fischer et al.
   });
 
   it("flags heights within five source lengths q^{2/3}/b^{1/3}", () => {
-    expect(linePlumeDilutionFromFluxValidityIssues(1, 0.1, 0.5).map((w) => w.code), "close to the source").toContain("line-plume-near-source");
+    expect(
+      linePlumeDilutionFromFluxValidityIssues(1, 0.1, 0.5).map((w) => w.code),
+      "close to the source",
+    ).toContain("line-plume-near-source");
     expect(linePlumeDilutionFromFluxValidityIssues(0.01, 0.3, 20), "far from the source").toEqual([]);
   });
 });

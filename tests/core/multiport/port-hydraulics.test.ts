@@ -41,25 +41,49 @@ describe("portFlowsAndHydraulics() — flow split, exit velocity, Froude number,
   });
 
   it("falls back to an equal split, with a warning, when the split does not match the ports", () => {
-    const scenario = scenarioFixture({ diffuser: { layout: "line", portCount: 3, portSpacing: 4, length: 8, flowSplit: [0.5, 0.5] } });
+    const scenario = scenarioFixture({
+      diffuser: { layout: "line", portCount: 3, portSpacing: 4, length: 8, flowSplit: [0.5, 0.5] },
+    });
     const h = portFlowsAndHydraulics({ scenario, ...densities });
-    expect(h.ports.map((p) => p.flow / scenario.discharge.flow), "equal thirds").toEqual([1 / 3, 1 / 3, 1 / 3]);
-    expect(h.warnings.map((w) => w.code), "the user is told").toContain("flow-split-ignored");
+    expect(
+      h.ports.map((p) => p.flow / scenario.discharge.flow),
+      "equal thirds",
+    ).toEqual([1 / 3, 1 / 3, 1 / 3]);
+    expect(
+      h.warnings.map((w) => w.code),
+      "the user is told",
+    ).toContain("flow-split-ignored");
   });
 
   it("counts rosette ports as risers × ports per riser", () => {
     const scenario = scenarioFixture({
-      diffuser: { layout: "rosette", portCount: 8, risers: { count: 2, portsPerRiser: 4, spacing: 20, portAzimuths: [0, 90, 180, 270] } },
+      diffuser: {
+        layout: "rosette",
+        portCount: 8,
+        risers: { count: 2, portsPerRiser: 4, spacing: 20, portAzimuths: [0, 90, 180, 270] },
+      },
     });
     expect(portCountFromDiffuser(scenario), "2 × 4").toBe(8);
   });
 
   it("gives a lighter discharge its Froude number on |g′| and a neutral one an infinite Froude number, never NaN", () => {
-    const light = portFlowsAndHydraulics({ scenario: scenarioFixture(), dischargeDensity: 1020, ambientDensity: 1023.5 });
-    const dense = portFlowsAndHydraulics({ scenario: scenarioFixture(), dischargeDensity: 1027, ambientDensity: 1023.5 });
+    const light = portFlowsAndHydraulics({
+      scenario: scenarioFixture(),
+      dischargeDensity: 1020,
+      ambientDensity: 1023.5,
+    });
+    const dense = portFlowsAndHydraulics({
+      scenario: scenarioFixture(),
+      dischargeDensity: 1027,
+      ambientDensity: 1023.5,
+    });
     // Same |Δρ| = 3.5 kg/m³ either way; g′ differs only through the reference density (ambient in both).
     expect(light.port.froude, "rising: U/√(|g′|·d)").toBeCloseTo(dense.port.froude, 9);
-    const neutral = portFlowsAndHydraulics({ scenario: scenarioFixture(), dischargeDensity: 1023.5, ambientDensity: 1023.5 });
+    const neutral = portFlowsAndHydraulics({
+      scenario: scenarioFixture(),
+      dischargeDensity: 1023.5,
+      ambientDensity: 1023.5,
+    });
     expect(neutral.port.froude, "no densimetric Froude number").toBe(Infinity);
   });
 });

@@ -13,31 +13,22 @@ import {
   integralParamsFrom,
   nearFieldIntegral,
 } from "../../../core/nearfield/integral";
-import {
-  IB,
-  IC,
-  INTEGRAL_DIM,
-  IMX,
-  IMY,
-  IQ,
-  IX,
-  IY,
-  IZ,
-  integralJetRhs,
-} from "../../../core/nearfield/integralRhs";
+import { IB, IC, INTEGRAL_DIM, IMX, IMY, IQ, IX, IY, IZ, integralJetRhs } from "../../../core/nearfield/integralRhs";
 import { integrateAdaptive } from "../../../core/ode/adaptive";
 import { stepperDormandPrince45 } from "../../../core/ode/dormandPrince45";
 import type { AmbientColumn, JetSource, PathSink } from "../../../core/nearfield/types";
 
 /** mathjs ships `solveODE` (Dormand–Prince RK45) but its type declarations omit it. */
-const solveODE = (mathjs as unknown as {
-  solveODE: (
-    f: (t: number, y: number[]) => number[],
-    tspan: [number, number],
-    y0: number[],
-    options: { tol: number; firstStep: number; maxIter: number },
-  ) => { t: number[]; y: number[][] };
-}).solveODE;
+const solveODE = (
+  mathjs as unknown as {
+    solveODE: (
+      f: (t: number, y: number[]) => number[],
+      tspan: [number, number],
+      y0: number[],
+      options: { tol: number; firstStep: number; maxIter: number },
+    ) => { t: number[]; y: number[][] };
+  }
+).solveODE;
 
 const G = 9.80665;
 
@@ -61,7 +52,6 @@ function jetFor(over: Partial<JetSource> & { froude?: number } = {}): JetSource 
     ...over,
   };
 }
-
 
 /** Collects every sample the model emits. */
 function collectingSink() {
@@ -195,16 +185,23 @@ describe("nearFieldIntegral(): classical limits", () => {
       expect(rel(ucU * (x / d), cv.velocityConstant), `velocity decay constant at x/d = ${xd} (±10 %)`).toBeLessThan(
         cv.relTol,
       );
-      expect(rel((1 / row[5]) * (x / d), cv.concentrationConstant), `concentration constant at x/d = ${xd}`).toBeLessThan(
-        cv.relTol,
-      );
+      expect(
+        rel((1 / row[5]) * (x / d), cv.concentrationConstant),
+        `concentration constant at x/d = ${xd}`,
+      ).toBeLessThan(cv.relTol);
     }
   });
 
   it("pure-plume limit: μ = 0.15 B^{1/3} z^{5/3} and g′_c = 11 B^{2/3} z^{−5/3} (Fischer et al. 1979 — from memory, ±15 %)", () => {
     const cv = checkValues.purePlume;
     // A lazy light source pointing up: F ≈ 0.3, so z ≫ l_M within metres.
-    const jet = jetFor({ diameter: 0.2, velocity: 0.1, reducedGravity: -0.5, froude: 0.1 / Math.sqrt(0.5 * 0.2), angle: 90 });
+    const jet = jetFor({
+      diameter: 0.2,
+      velocity: 0.1,
+      reducedGravity: -0.5,
+      froude: 0.1 / Math.sqrt(0.5 * 0.2),
+      angle: 90,
+    });
     const sink = collectingSink();
     const r = nearFieldIntegral(jet, uniformColumn(1000), { sink, maxLength: 160, relTol: 1e-9 });
     const B = jet.flow * 0.5;
@@ -212,16 +209,20 @@ describe("nearFieldIntegral(): classical limits", () => {
       const row = sink.rows.find((rr) => rr[3] >= z)!;
       const zz = row[3];
       const q = (row[5] / CENTRELINE_PROFILE_FACTOR) * jet.flow;
-      expect(rel(q, cv.volumeFluxConstant * B ** (1 / 3) * zz ** (5 / 3)), `plume volume flux at z = ${z} m`).toBeLessThan(
-        cv.relTol,
-      );
+      expect(
+        rel(q, cv.volumeFluxConstant * B ** (1 / 3) * zz ** (5 / 3)),
+        `plume volume flux at z = ${z} m`,
+      ).toBeLessThan(cv.relTol);
       const gc = 0.5 / row[5];
       expect(
         rel(gc, cv.centrelineBuoyancyConstant * B ** (2 / 3) * zz ** (-5 / 3)),
         `plume centreline reduced gravity at z = ${z} m`,
       ).toBeLessThan(cv.relTol);
     }
-    expect(r.warnings.some((w) => w.code === "integral-positively-buoyant"), "a light discharge is flagged").toBe(true);
+    expect(
+      r.warnings.some((w) => w.code === "integral-positively-buoyant"),
+      "a light discharge is flagged",
+    ).toBe(true);
   });
 });
 
@@ -252,7 +253,9 @@ describe("nearFieldIntegral(): inclined dense jets in stagnant water vs laborato
   }
 
   it("rise height increases with angle from 15° to 60° (Lai & Lee 2012: 0.44 → 2.08, CONFIRMED)", () => {
-    const h = [15, 30, 45, 60].map((a) => nearFieldIntegral(jetFor({ angle: a, froude: 30 }), uniformColumn(200)).maxRiseHeight!);
+    const h = [15, 30, 45, 60].map(
+      (a) => nearFieldIntegral(jetFor({ angle: a, froude: 30 }), uniformColumn(200)).maxRiseHeight!,
+    );
     for (let i = 1; i < h.length; i++) expect(h[i], "monotonic in angle").toBeGreaterThan(h[i - 1]);
   });
 
@@ -268,10 +271,13 @@ describe("nearFieldIntegral(): inclined dense jets in stagnant water vs laborato
 
   it("states its impact-dilution bias by angle against Lai & Lee's (2012) 1.06 F over 38°–60°, and widens the range by it", () => {
     const r = nearFieldIntegral(jetFor({ angle: 45, froude: 30 }), uniformColumn(200));
-    for (const a of [38, 45, 52, 60]) expect(r.bias, `bias quotes ${a}°`).toMatch(new RegExp(`${a}°: \\d\\.\\d\\d·F \\(ratio \\d\\.\\d\\d\\)`));
+    for (const a of [38, 45, 52, 60])
+      expect(r.bias, `bias quotes ${a}°`).toMatch(new RegExp(`${a}°: \\d\\.\\d\\d·F \\(ratio \\d\\.\\d\\d\\)`));
     const ratios = [...r.bias.matchAll(/ratio (\d\.\d\d)\)/g)].map((m) => Number(m[1]));
     expect(ratios.length, "four laboratory angles").toBe(4);
-    expect(ratios[0], "the model under-predicts more at 38° than at 60° (confirmed comparison)").toBeLessThan(ratios[3]);
+    expect(ratios[0], "the model under-predicts more at 38° than at 60° (confirmed comparison)").toBeLessThan(
+      ratios[3],
+    );
     const high = r.dilutionRange![1] / r.impactDilution!;
     expect(high, "high end = computed ÷ the ratio at 45°").toBeCloseTo(1 / ratios[1], 1);
   });
@@ -280,10 +286,19 @@ describe("nearFieldIntegral(): inclined dense jets in stagnant water vs laborato
     const jet = jetFor({ angle: 60, froude: 25 });
     const r = nearFieldIntegral(jet, uniformColumn(20));
     expect(r.nearFieldDilution, "S_n = S_i × 2.6/1.6").toBeCloseTo(r.impactDilution! * (2.6 / 1.6), 10);
-    expect(r.nearFieldDistance, "x_n = x_i + (9.0 − 2.4)·d·F").toBeCloseTo(r.impactDistance! + 6.6 * jet.diameter * jet.froude, 10);
-    expect(r.impactDilutionFluxAveraged! / r.impactDilution!, "flux-averaged ÷ centreline = (1 + λ²)/λ²").toBeCloseTo(2.44 / 1.44, 6);
+    expect(r.nearFieldDistance, "x_n = x_i + (9.0 − 2.4)·d·F").toBeCloseTo(
+      r.impactDistance! + 6.6 * jet.diameter * jet.froude,
+      10,
+    );
+    expect(r.impactDilutionFluxAveraged! / r.impactDilution!, "flux-averaged ÷ centreline = (1 + λ²)/λ²").toBeCloseTo(
+      2.44 / 1.44,
+      6,
+    );
     expect(r.fluxAveragingFactor, "the factor is stated").toBeCloseTo(2.44 / 1.44, 12);
-    expect(r.entrainedFlow, "entrained flow on the flux-averaged basis").toBeCloseTo(jet.flow * (r.impactDilutionFluxAveraged! - 1), 9);
+    expect(r.entrainedFlow, "entrained flow on the flux-averaged basis").toBeCloseTo(
+      jet.flow * (r.impactDilutionFluxAveraged! - 1),
+      9,
+    );
   });
 });
 
@@ -296,8 +311,14 @@ describe("nearFieldIntegral(): currents, geometry and output plumbing", () => {
   });
 
   it("is invariant under rotating both the port azimuth and the current direction (DERIVED)", () => {
-    const a = nearFieldIntegral(jetFor({ azimuth: 90 }), uniformColumn(20, { currentSpeed: 0.15, currentDirection: 30 }));
-    const b = nearFieldIntegral(jetFor({ azimuth: 200 }), uniformColumn(20, { currentSpeed: 0.15, currentDirection: 140 }));
+    const a = nearFieldIntegral(
+      jetFor({ azimuth: 90 }),
+      uniformColumn(20, { currentSpeed: 0.15, currentDirection: 30 }),
+    );
+    const b = nearFieldIntegral(
+      jetFor({ azimuth: 200 }),
+      uniformColumn(20, { currentSpeed: 0.15, currentDirection: 140 }),
+    );
     // Equal to the integration tolerance (round-off in sin/cos changes the step sequence).
     expect(rel(b.impactDistance!, a.impactDistance!), "same plan distance").toBeLessThan(1e-6);
     expect(rel(b.impactDilution!, a.impactDilution!), "same dilution").toBeLessThan(1e-6);
@@ -319,8 +340,14 @@ describe("nearFieldIntegral(): currents, geometry and output plumbing", () => {
 
   it("warns when the jet reaches the surface in shallow water", () => {
     const r = nearFieldIntegral(jetFor(), uniformColumn(3));
-    expect(r.warnings.map((w) => w.code), "surface warning").toContain("jet-reaches-surface");
-    expect(r.events!.some((e) => e.kind === "surface-contact"), "surface event").toBe(true);
+    expect(
+      r.warnings.map((w) => w.code),
+      "surface warning",
+    ).toContain("jet-reaches-surface");
+    expect(
+      r.events!.some((e) => e.kind === "surface-contact"),
+      "surface event",
+    ).toBe(true);
   });
 
   it("reports lower-edge seabed contact before centreline impact", () => {
@@ -339,8 +366,14 @@ describe("nearFieldIntegral(): currents, geometry and output plumbing", () => {
     };
     const jet = jetFor({ angle: 90, velocity: 1, reducedGravity: -0.02, froude: 1 / Math.sqrt(0.02 * 0.2) });
     const r = nearFieldIntegral(jet, col);
-    expect(r.warnings.map((w) => w.code), "trap warning").toContain("jet-trapped");
-    expect(r.events!.some((e) => e.kind === "trapped"), "trapped event").toBe(true);
+    expect(
+      r.warnings.map((w) => w.code),
+      "trap warning",
+    ).toContain("jet-trapped");
+    expect(
+      r.events!.some((e) => e.kind === "trapped"),
+      "trapped event",
+    ).toBe(true);
     expect(r.impactDistance, "no seabed impact").toBeNull();
   });
 });
@@ -389,15 +422,24 @@ describe("nearFieldIntegral(): guards and degenerate inputs", () => {
 
   it("the step limit produces a warning, not a hang", () => {
     const r = nearFieldIntegral(jetFor(), uniformColumn(20), { maxSteps: 3 });
-    expect(r.warnings.map((w) => w.code), "step-limit warning").toContain("integral-step-limit");
-    expect(r.events!.some((e) => e.kind === "step-limit"), "step-limit event").toBe(true);
+    expect(
+      r.warnings.map((w) => w.code),
+      "step-limit warning",
+    ).toContain("integral-step-limit");
+    expect(
+      r.events!.some((e) => e.kind === "step-limit"),
+      "step-limit event",
+    ).toBe(true);
     expect(r.impactDistance, "no impact within 3 steps").toBeNull();
   });
 
   it("a vertical dense fountain stalls with a warning instead of failing", () => {
     const r = nearFieldIntegral(jetFor({ angle: 90 }), uniformColumn(50));
     expect(r.maxRiseHeight!, "a finite fountain height").toBeGreaterThan(0);
-    expect(r.warnings.some((w) => w.code === "jet-momentum-exhausted" || w.code === "integral-step-underflow"), "stall flagged").toBe(true);
+    expect(
+      r.warnings.some((w) => w.code === "jet-momentum-exhausted" || w.code === "integral-step-underflow"),
+      "stall flagged",
+    ).toBe(true);
   });
 
   it("invalid geometry returns a serious warning instead of throwing", () => {

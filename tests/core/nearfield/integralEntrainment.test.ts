@@ -27,7 +27,9 @@ describe("entrainmentLeeCheung1990Alpha()", () => {
       // closure in terms of ΔU, g′, b: choose b = 1, g′ = 1, ΔU = √F_T²
       alpha = entrainmentLeeCheung1990Alpha(Math.sqrt(fT2), 0, 1, 1, 1);
     }
-    expect(Math.abs(alpha / Math.SQRT2 - 0.0833), "plume coefficient within Fischer et al.'s ±0.0042").toBeLessThan(0.0042);
+    expect(Math.abs(alpha / Math.SQRT2 - 0.0833), "plume coefficient within Fischer et al.'s ±0.0042").toBeLessThan(
+      0.0042,
+    );
   });
 
   it("adds no plume term when buoyancy opposes the motion (rising limb of a dense jet)", () => {
@@ -39,7 +41,10 @@ describe("entrainmentLeeCheung1990Alpha()", () => {
 
   it("damps shear entrainment in co-flow but never amplifies it in counter-flow", () => {
     const still = entrainmentLeeCheung1990Alpha(1, 0, 0, 0, 0.1);
-    expect(entrainmentLeeCheung1990Alpha(1, 0.2, 0, 0, 0.1), "co-flow: divided by 1 + 5·0.2 = 2").toBeCloseTo(still / 2, 12);
+    expect(entrainmentLeeCheung1990Alpha(1, 0.2, 0, 0, 0.1), "co-flow: divided by 1 + 5·0.2 = 2").toBeCloseTo(
+      still / 2,
+      12,
+    );
     expect(entrainmentLeeCheung1990Alpha(1, -0.2, 0, 0, 0.1), "counter-flow: unchanged").toBeCloseTo(still, 12);
   });
 });
@@ -65,7 +70,10 @@ describe("entrainmentLeeCheung1990Rate()", () => {
 
 describe("entrainmentLeeCheung1990ValidityIssues()", () => {
   it("is silent inside the validated range (60°, F = 20, no current)", () => {
-    expect(entrainmentLeeCheung1990ValidityIssues({ froude: 20, angleDeg: 60, currentSpeed: 0, velocity: 4 }), "no issues").toEqual([]);
+    expect(
+      entrainmentLeeCheung1990ValidityIssues({ froude: 20, angleDeg: 60, currentSpeed: 0, velocity: 4 }),
+      "no issues",
+    ).toEqual([]);
   });
 
   it("flags Froude number, angle and weak crossflow with ranges and sources", () => {
@@ -119,7 +127,9 @@ describe("nearFieldIntegral(): maximum-rise event", () => {
       const tz = (rows[i + 1][3] - rows[i - 1][3]) / ds;
       best = Math.max(best, rows[i][3] + rows[i][4] * Math.sqrt(Math.max(0, 1 - tz * tz)));
     }
-    expect(r.maxRiseHeight!, "event edge ≥ every sampled edge (to finite-difference accuracy)").toBeGreaterThan(best - 1e-4);
+    expect(r.maxRiseHeight!, "event edge ≥ every sampled edge (to finite-difference accuracy)").toBeGreaterThan(
+      best - 1e-4,
+    );
     expect(r.maxRiseHeight! - best, "and sampled edges come close to it").toBeLessThan(5e-3);
   });
 });

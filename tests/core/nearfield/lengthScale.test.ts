@@ -9,7 +9,6 @@ import fc from "fast-check";
 import { nearFieldLengthScale } from "../../../core/nearfield/lengthScale";
 import type { AmbientColumn, JetSource } from "../../../core/nearfield/types";
 
-
 /** A jet with the given d, F and angle; U = 4 m/s unless given, ambient 1025 kg/m³, port at the bed. */
 const makeJet = (p: JetOptions = {}): JetSource => denseJet({ azimuth: 90, portHeight: 0, ...p });
 
@@ -52,10 +51,16 @@ describe("nearFieldLengthScale() at 60° in stagnant water", () => {
   it("headlines the conservative 60° values: S_i = 1.06 F (Lai & Lee 2012), rise 2.2 dF (Roberts et al. 1997, higher)", () => {
     expect(r.impactDilution, "S_i = 1.06 F, the lower of 1.06 F and 1.6 F").toBeCloseTo(1.06 * 25, 10);
     expect(r.maxRiseHeight, "y_t = 2.2 dF, the higher of 2.08 and 2.2").toBeCloseTo(2.2 * dF, 10);
-    expect(r.returnDistance, "x_i = 2.4 dF, the only traced return distance (Roberts et al. 1997)").toBeCloseTo(2.4 * dF, 10);
+    expect(r.returnDistance, "x_i = 2.4 dF, the only traced return distance (Roberts et al. 1997)").toBeCloseTo(
+      2.4 * dF,
+      10,
+    );
     expect(r.impactDistance, "port on the bed: impact = return").toBeCloseTo(2.4 * dF, 10);
     expect(r.nearFieldDistance, "x_n = 9.0 dF (Roberts et al. 1997)").toBeCloseTo(9.0 * dF, 10);
-    expect(r.nearFieldDilution, "S_n = 1.06 F × 2.6/1.6, below Roberts' own 2.6 F").toBeCloseTo(1.06 * 25 * (2.6 / 1.6), 10);
+    expect(r.nearFieldDilution, "S_n = 1.06 F × 2.6/1.6, below Roberts' own 2.6 F").toBeCloseTo(
+      1.06 * 25 * (2.6 / 1.6),
+      10,
+    );
   });
 
   it("lies inside the 60° oracle bands (rise 1.9–2.4 dF: Lai & Lee 2012, Roberts et al. 1997; S_i/F 1.0–1.7)", () => {
@@ -131,9 +136,22 @@ describe("nearFieldLengthScale() between and outside tabulated angles", () => {
       expect(r.notAvailableReason, "reason names the covered angles").toMatch(/15°–60°/);
       const w = r.warnings.find((x) => x.code === "angle-outside-studied-range");
       expect(w?.message, "quotes the angle and the range").toMatch(new RegExp(`${angle}\\.0°.*15°–60°`));
-      for (const f of ["maxRiseHeight", "maxRiseDistance", "returnDistance", "impactDistance", "impactDilution", "nearFieldDistance", "nearFieldDilution", "maxRiseDilution", "entrainedFlow", "dilutionRange", "impactDilutionFluxAveraged"] as const) {
+      for (const f of [
+        "maxRiseHeight",
+        "maxRiseDistance",
+        "returnDistance",
+        "impactDistance",
+        "impactDilution",
+        "nearFieldDistance",
+        "nearFieldDilution",
+        "maxRiseDilution",
+        "entrainedFlow",
+        "dilutionRange",
+        "impactDilutionFluxAveraged",
+      ] as const) {
         expect(r[f] ?? null, `${f} is null at ${angle}°`).toBeNull();
-        if (at60[f] !== null && at60[f] !== undefined) expect(r[f], `${f} differs from its 60° value`).not.toEqual(at60[f]);
+        if (at60[f] !== null && at60[f] !== undefined)
+          expect(r[f], `${f} differs from its 60° value`).not.toEqual(at60[f]);
       }
       expect(r.notes?.join(" "), "notes say why").toMatch(/Not available/);
     });
@@ -228,7 +246,10 @@ describe("nearFieldLengthScale() ambient checks", () => {
 
   it("flags stratification, and warns when it is strong across the rise", () => {
     const weak = nearFieldLengthScale(makeJet(), makeColumn({ densities: [1024.9, 1025] }));
-    expect(weak.warnings.map((w) => w.code), "info only").toEqual(["ambient-stratified"]);
+    expect(
+      weak.warnings.map((w) => w.code),
+      "info only",
+    ).toEqual(["ambient-stratified"]);
     const strong = nearFieldLengthScale(makeJet(), makeColumn({ densities: [1020, 1025] }));
     const w = strong.warnings.find((x) => x.code === "stratification-affects-jet");
     expect(w, "strong stratification warned").toBeDefined();

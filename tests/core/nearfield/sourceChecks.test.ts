@@ -55,6 +55,9 @@ describe("jetSourceWarnings()", () => {
 
   it("leaves the exit-velocity band to the port stage, so one fact gives one warning", () => {
     const all = jetSourceWarnings(makeJet({ U: 7 }), makeColumn(30)).map((w) => w.message);
-    expect(all.filter((m) => /exit velocity/i.test(m)), "no exit-velocity warning here").toEqual([]);
+    expect(
+      all.filter((m) => /exit velocity/i.test(m)),
+      "no exit-velocity warning here",
+    ).toEqual([]);
   });
 });

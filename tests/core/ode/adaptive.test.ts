@@ -50,7 +50,10 @@ describe("integrateAdaptive()", () => {
     const r = integrateAdaptive(st, osc, {}, 0, Float64Array.of(0, 1), opts({ tMax: 4.25 * Math.PI }), events);
     const up = r.events.filter((e) => e.index === 0).map((e) => e.t);
     const both = r.events.filter((e) => e.index === 1).map((e) => e.t);
-    expect(up.length, "upward sin crossings in (0, 4.25π]: 2π and 4π (t = 0 starts on the surface, not a crossing)").toBe(2);
+    expect(
+      up.length,
+      "upward sin crossings in (0, 4.25π]: 2π and 4π (t = 0 starts on the surface, not a crossing)",
+    ).toBe(2);
     expect(Math.abs(up[0] - 2 * Math.PI), "first upward crossing at 2π").toBeLessThan(1e-8);
     expect(both.length, "cos crossings at π/2, 3π/2, 5π/2, 7π/2").toBe(4);
     for (let i = 1; i < r.events.length; i++) {
@@ -99,11 +102,29 @@ describe("integrateAdaptive() at a kink of the right-hand side and with slope ev
     out[0] = Math.cos(t) + (t > 1 ? 3 * (t - 1) : 0);
   };
   const exact = Math.sin(3) + 6;
-  const kinkOpts = { rtol: 1e-6, atol: Float64Array.of(1e-6), h0: 0.37, hMin: 1e-14, hMax: 0.7, maxSteps: 10000, tMax: 3 };
+  const kinkOpts = {
+    rtol: 1e-6,
+    atol: Float64Array.of(1e-6),
+    h0: 0.37,
+    hMin: 1e-14,
+    hMax: 0.7,
+    maxSteps: 10000,
+    tMax: 3,
+  };
 
   it("ends a step at a restart event's predicted crossing and restarts there: accurate, no rejected step", () => {
-    const restart: OdeEvent<object>[] = [{ fn: (t) => t - 1, direction: 1, terminal: false, restart: true, rate: () => 1 }];
-    const withRestart = integrateAdaptive(stepperDormandPrince45(kink, 1), kink, {}, 0, Float64Array.of(0), kinkOpts, restart);
+    const restart: OdeEvent<object>[] = [
+      { fn: (t) => t - 1, direction: 1, terminal: false, restart: true, rate: () => 1 },
+    ];
+    const withRestart = integrateAdaptive(
+      stepperDormandPrince45(kink, 1),
+      kink,
+      {},
+      0,
+      Float64Array.of(0),
+      kinkOpts,
+      restart,
+    );
     const plain = integrateAdaptive(stepperDormandPrince45(kink, 1), kink, {}, 0, Float64Array.of(0), kinkOpts);
     expect(Math.abs(withRestart.y[0] - exact), "y(3) to the requested accuracy").toBeLessThan(2e-6);
     expect(withRestart.rejected, "no rejected step with the restart at t = 1").toBe(0);

@@ -37,7 +37,9 @@ describe("stepperDormandPrince45()", () => {
     const e2 = fixedStepError(0.05);
     const order = Math.log2(e1 / e2);
     expect(order, "observed order from halving h (Dormand & Prince 1980: order 5)").toBeGreaterThan(4.6);
-    expect(order, "observed order must not exceed ~5 by much (a wrong tableau often shows order 1–4)").toBeLessThan(5.6);
+    expect(order, "observed order must not exceed ~5 by much (a wrong tableau often shows order 1–4)").toBeLessThan(
+      5.6,
+    );
     expect(e2, "absolute error at t = 1 with h = 0.05").toBeLessThan(1e-8);
   });
 

@@ -80,29 +80,39 @@ describe("densitySharqawyNayarValidityIssues()", () => {
   });
   it("notes the wider accuracy band for brine above 56 g/kg under pressure", () => {
     const issues = densitySharqawyNayarValidityIssues(70, 25, 50, "discharge");
-    expect(issues.map((w) => w.code), "info on extrapolated compressibility").toEqual(["nayar-2016-pressure-extrapolated"]);
+    expect(
+      issues.map((w) => w.code),
+      "info on extrapolated compressibility",
+    ).toEqual(["nayar-2016-pressure-extrapolated"]);
     expect(issues[0].severity, "informational").toBe("info");
   });
   it("warns at 130 g/kg (above the 120 g/kg of Nayar 2016) and seriously at 170 g/kg (above 160 g/kg of Sharqawy 2010)", () => {
-    expect(densitySharqawyNayarValidityIssues(130, 25, 0, "discharge").map((w) => w.code), "130 g/kg").toEqual([
-      "nayar-2016-salinity-out-of-range",
-    ]);
+    expect(
+      densitySharqawyNayarValidityIssues(130, 25, 0, "discharge").map((w) => w.code),
+      "130 g/kg",
+    ).toEqual(["nayar-2016-salinity-out-of-range"]);
     const issues = densitySharqawyNayarValidityIssues(170, 25, 0, "discharge");
-    expect(issues.map((w) => w.code), "170 g/kg").toContain("sharqawy-2010-salinity-out-of-range");
+    expect(
+      issues.map((w) => w.code),
+      "170 g/kg",
+    ).toContain("sharqawy-2010-salinity-out-of-range");
     expect(issues.find((w) => w.code === "sharqawy-2010-salinity-out-of-range")?.severity, "serious").toBe("serious");
   });
   it("accepts 95 °C (inside 0–100 °C) but flags 130 °C, where P0 would be the saturation pressure", () => {
     expect(densitySharqawyNayarValidityIssues(35, 95, 0, "discharge"), "95 °C in range").toEqual([]);
-    expect(densitySharqawyNayarValidityIssues(35, 130, 0, "discharge").map((w) => w.code), "130 °C").toEqual([
-      "nayar-2016-temperature-above-boiling",
-    ]);
+    expect(
+      densitySharqawyNayarValidityIssues(35, 130, 0, "discharge").map((w) => w.code),
+      "130 °C",
+    ).toEqual(["nayar-2016-temperature-above-boiling"]);
   });
   it("warns beyond 12 MPa and for negative pressure", () => {
-    expect(densitySharqawyNayarValidityIssues(35, 10, 1500, "ambient").map((w) => w.code), "deep").toEqual([
-      "nayar-2016-pressure-out-of-range",
-    ]);
-    expect(densitySharqawyNayarValidityIssues(35, 10, -1, "ambient").map((w) => w.code), "negative").toEqual([
-      "nayar-2016-pressure-out-of-range",
-    ]);
+    expect(
+      densitySharqawyNayarValidityIssues(35, 10, 1500, "ambient").map((w) => w.code),
+      "deep",
+    ).toEqual(["nayar-2016-pressure-out-of-range"]);
+    expect(
+      densitySharqawyNayarValidityIssues(35, 10, -1, "ambient").map((w) => w.code),
+      "negative",
+    ).toEqual(["nayar-2016-pressure-out-of-range"]);
   });
 });

@@ -50,7 +50,8 @@ describe("properties check-value tables", () => {
         it(`case ${index + 1}: ${table.function}(${c.inputs.join(", ")}) ≈ ${c.expected}`, () => {
           const got = implementations[table.function](...c.inputs);
           const allowed =
-            c.tolerance.absolute ?? (c.tolerance.relative !== undefined ? c.tolerance.relative * Math.abs(c.expected) : 0);
+            c.tolerance.absolute ??
+            (c.tolerance.relative !== undefined ? c.tolerance.relative * Math.abs(c.expected) : 0);
           expect(allowed, "every case needs a tolerance").toBeGreaterThan(0);
           expect(Math.abs(got - c.expected), `${c.provenance} — got ${got}`).toBeLessThanOrEqual(allowed);
         });

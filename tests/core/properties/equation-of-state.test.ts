@@ -33,16 +33,18 @@ describe("equationOfStateFor()", () => {
     const eos = equationOfStateFor([35, 36], [95, 20]);
     expect(eos.info.name, "salinity rule decides").toBe("TEOS-10");
     expect(eos.info.reason, "reason notes the hot water").toContain("95 °C");
-    expect(eos.validityIssues(36, 95, 0, "discharge").map((w) => w.code), "95 °C flagged").toEqual([
-      "teos10-temperature-out-of-range",
-    ]);
+    expect(
+      eos.validityIssues(36, 95, 0, "discharge").map((w) => w.code),
+      "95 °C flagged",
+    ).toEqual(["teos10-temperature-out-of-range"]);
   });
 
   it("flags 130 g/kg through the brine correlation's validityIssues()", () => {
     const eos = equationOfStateFor([130, 35], [25, 20]);
-    expect(eos.validityIssues(130, 25, 0, "discharge").map((w) => w.code), "130 g/kg").toEqual([
-      "nayar-2016-salinity-out-of-range",
-    ]);
+    expect(
+      eos.validityIssues(130, 25, 0, "discharge").map((w) => w.code),
+      "130 g/kg",
+    ).toEqual(["nayar-2016-salinity-out-of-range"]);
   });
 
   it("falls back to the brine correlation for a non-finite salinity (TEOS-10 cannot vouch for it)", () => {

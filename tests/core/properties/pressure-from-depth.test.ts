@@ -13,7 +13,9 @@ import grid from "../../reference/teos10-grid.json";
 describe("pressureFromDepth()", () => {
   it("agrees with gsw.p_from_z to 0.05 dbar for 0–1000 m at latitudes 0–90° (source: python3-gsw)", () => {
     for (const [depth, latitude, p] of grid.pressure.rows as number[][]) {
-      expect(Math.abs(pressureFromDepth(depth, latitude) - p), `depth ${depth} m, latitude ${latitude}°`).toBeLessThan(0.05);
+      expect(Math.abs(pressureFromDepth(depth, latitude) - p), `depth ${depth} m, latitude ${latitude}°`).toBeLessThan(
+        0.05,
+      );
     }
   });
 
@@ -41,8 +43,14 @@ describe("pressureFromDepth()", () => {
   });
 
   it("warns for a negative depth or an impossible latitude", () => {
-    expect(pressureFromDepthValidityIssues(-5).map((w) => w.code), "negative depth").toEqual(["depth-out-of-range"]);
-    expect(pressureFromDepthValidityIssues(10, 120).map((w) => w.code), "latitude").toEqual(["latitude-out-of-range"]);
+    expect(
+      pressureFromDepthValidityIssues(-5).map((w) => w.code),
+      "negative depth",
+    ).toEqual(["depth-out-of-range"]);
+    expect(
+      pressureFromDepthValidityIssues(10, 120).map((w) => w.code),
+      "latitude",
+    ).toEqual(["latitude-out-of-range"]);
     expect(pressureFromDepthValidityIssues(10, 30), "in range").toEqual([]);
   });
 });

@@ -31,7 +31,9 @@ describe("absoluteSalinityFromPractical()", () => {
   });
   it("notes Practical Salinity outside the PSS-78 range 2–42", () => {
     expect(absoluteSalinityFromPracticalValidityIssues(35), "in range").toEqual([]);
-    expect(absoluteSalinityFromPracticalValidityIssues(70)[0]?.code, "brine given as SP").toBe("practical-salinity-out-of-range");
+    expect(absoluteSalinityFromPracticalValidityIssues(70)[0]?.code, "brine given as SP").toBe(
+      "practical-salinity-out-of-range",
+    );
   });
 });
 
@@ -47,7 +49,10 @@ describe("salinityFromTds()", () => {
       expect(salinityFromTds(tdsFromSalinity(s, 18, 30), 18, 30), `S ${s}`).toBeCloseTo(s, 9);
     }
     const s = 35;
-    expect(salinityFromTds(tdsFromSalinity(s, 10, 0, densityTeos10), 10, 0, densityTeos10), "TEOS-10 density").toBeCloseTo(s, 9);
+    expect(
+      salinityFromTds(tdsFromSalinity(s, 10, 0, densityTeos10), 10, 0, densityTeos10),
+      "TEOS-10 density",
+    ).toBeCloseTo(s, 9);
   });
   it("gives about 35.2 g/kg for standard seawater's ≈ 36 000 mg/L at 25 °C", () => {
     // 35.16504 g/kg × 1023.3 kg/m³ ≈ 35 985 mg/L (DERIVED from the EOS-80 check value 1023.34306 kg/m³).

@@ -97,7 +97,9 @@ describe("propertiesFromScenario()", () => {
       { depth: 30, salinity: 35.5, temperature: 14 },
     ];
     const stage = propertiesFromScenario(scenario({ depth: 25, portHeight: 2, profile }));
-    expect(stage.column.depths, "profile points inside the column, port at 23 m, seabed at 25 m").toEqual([0, 10, 23, 25]);
+    expect(stage.column.depths, "profile points inside the column, port at 23 m, seabed at 25 m").toEqual([
+      0, 10, 23, 25,
+    ]);
     expect(stage.column.depth, "water depth").toBe(25);
     expect(stage.column.currentSpeed, "current passed through").toBe(0.1);
     expect(stage.column.densities.length, "one density per depth").toBe(4);
@@ -112,7 +114,10 @@ describe("propertiesFromScenario()", () => {
     const at = profileAtDepth(profile, 20);
     expect(at.salinity, "halfway between 35 and 35.5").toBeCloseTo(35.25, 12);
     expect(at.temperature, "halfway between 18 and 14").toBeCloseTo(16, 12);
-    expect(profileAtDepth(profile, 50), "held constant below the last point").toEqual({ salinity: 35.5, temperature: 14 });
+    expect(profileAtDepth(profile, 50), "held constant below the last point").toEqual({
+      salinity: 35.5,
+      temperature: 14,
+    });
     const stage = propertiesFromScenario(scenario({ depth: 25, portHeight: 2, profile }));
     const i = stage.column.depths.indexOf(23);
     expect(stage.column.salinities[i], "port-depth salinity").toBeCloseTo(35 + (13 / 20) * 0.5, 12);
@@ -137,16 +142,25 @@ describe("propertiesFromScenario()", () => {
     const stage = propertiesFromScenario(scenario({ salinity: 130, temperature: 25 }));
     const codes = stage.warnings.map((w) => w.code);
     expect(codes, "130 g/kg discharge flagged").toContain("nayar-2016-salinity-out-of-range");
-    expect(stage.warnings.every((w) => w.stage === "properties"), "stage tag").toBe(true);
+    expect(
+      stage.warnings.every((w) => w.stage === "properties"),
+      "stage tag",
+    ).toBe(true);
     const hot = propertiesFromScenario(scenario({ salinity: 40, temperature: 95 }));
-    expect(hot.warnings.map((w) => w.code), "95 °C under TEOS-10").toContain("teos10-temperature-out-of-range");
+    expect(
+      hot.warnings.map((w) => w.code),
+      "95 °C under TEOS-10",
+    ).toContain("teos10-temperature-out-of-range");
     const calm = propertiesFromScenario(scenario({ salinity: 40, temperature: 25 }));
     expect(calm.warnings, "nothing to say in range").toEqual([]);
   });
 
   it("clamps a port placed above the water surface and warns", () => {
     const stage = propertiesFromScenario(scenario({ depth: 5, portHeight: 8 }));
-    expect(stage.warnings.map((w) => w.code), "port outside the column").toContain("port-outside-water-column");
+    expect(
+      stage.warnings.map((w) => w.code),
+      "port outside the column",
+    ).toContain("port-outside-water-column");
     expect(stage.column.depths[0], "port clamped to the surface").toBe(0);
   });
 });
@@ -160,23 +174,13 @@ describe("a statically unstable ambient column", () => {
   ];
 
   it("is a serious properties warning with the density drop when warm water lies under cold", () => {
-    const r = propertiesFromScenario(
-      scenario({ profile: column(20), portHeight: 0.5, salinity: 40 }),
-    );
-    expect(r.eos.info.name, "TEOS-10 chosen for these salinities").toBe(
-      "TEOS-10",
-    );
+    const r = propertiesFromScenario(scenario({ profile: column(20), portHeight: 0.5, salinity: 40 }));
+    expect(r.eos.info.name, "TEOS-10 chosen for these salinities").toBe("TEOS-10");
     const w = r.warnings.find((x) => x.code === "ambient-statically-unstable");
     expect(w, "warning raised").toBeDefined();
-    expect(
-      w!.severity,
-      "serious, not info: it makes the case outside-scope",
-    ).toBe("serious");
+    expect(w!.severity, "serious, not info: it makes the case outside-scope").toBe("serious");
     expect(w!.stage, "properties stage").toBe("properties");
-    expect(
-      w!.value!,
-      "drop ≈ 1026.915 − 1024.726 = 2.189 kg/m³ (python3-gsw)",
-    ).toBeCloseTo(2.189, 2);
+    expect(w!.value!, "drop ≈ 1026.915 − 1024.726 = 2.189 kg/m³ (python3-gsw)").toBeCloseTo(2.189, 2);
     expect(w!.message, "names the depths").toMatch(/20 m depth .* 0 m above/);
   });
 
@@ -196,14 +200,8 @@ describe("a statically unstable ambient column", () => {
       staticInstability([0, 10, 20, 30], [1026, 1025.99, 1025.98, 1025.97]),
       "three 0.01 steps = 0.03 kg/m³",
     ).toEqual({ drop: expect.closeTo(0.03, 9), upperDepth: 0, lowerDepth: 30 });
-    expect(
-      staticInstability([0, 10, 20], [1025, 1026, 1027]),
-      "density rising with depth is stable",
-    ).toBeNull();
-    expect(
-      staticInstability([0, 10, 20], [1025, 1025.5, 1025.47]),
-      "0.03 kg/m³ below the 10 m water",
-    ).toEqual({
+    expect(staticInstability([0, 10, 20], [1025, 1026, 1027]), "density rising with depth is stable").toBeNull();
+    expect(staticInstability([0, 10, 20], [1025, 1025.5, 1025.47]), "0.03 kg/m³ below the 10 m water").toEqual({
       drop: expect.closeTo(0.03, 9),
       upperDepth: 10,
       lowerDepth: 20,

@@ -51,11 +51,17 @@ describe("densityTeos10ValidityIssues()", () => {
   });
   it("warns at 70 g/kg and at 95 °C, naming the water, the value and the range", () => {
     const salty = densityTeos10ValidityIssues(70, 20, 0, "discharge");
-    expect(salty.map((w) => w.code), "salinity warning").toEqual(["teos10-salinity-out-of-range"]);
+    expect(
+      salty.map((w) => w.code),
+      "salinity warning",
+    ).toEqual(["teos10-salinity-out-of-range"]);
     expect(salty[0].range, "range carried").toEqual([0, 42]);
     expect(salty[0].parameter, "parameter path").toBe("discharge.salinity");
     const hot = densityTeos10ValidityIssues(35, 95, 0, "discharge");
-    expect(hot.map((w) => w.code), "temperature warning").toEqual(["teos10-temperature-out-of-range"]);
+    expect(
+      hot.map((w) => w.code),
+      "temperature warning",
+    ).toEqual(["teos10-temperature-out-of-range"]);
     expect(hot[0].value, "value carried").toBe(95);
   });
   it("reports non-finite inputs instead of throwing", () => {

@@ -21,13 +21,23 @@ import { scenarioWith, parseIssues } from "./fixtures";
 const hours = (n: number) => Array.from({ length: n }, (_, i) => `${i} h`);
 
 function steady(currentSpeed: number, currentDirection = 90, mixingZone?: Record<string, unknown>) {
-  return runScenario(scenarioWith({ ambient: { currentSpeed, currentDirection }, ...(mixingZone ? { mixingZone } : {}) }), { includePath: false });
+  return runScenario(
+    scenarioWith({ ambient: { currentSpeed, currentDirection }, ...(mixingZone ? { mixingZone } : {}) }),
+    { includePath: false },
+  );
 }
 
 describe("ambient record: steps as quasi-steady states", () => {
   it("a record whose every step is identical gives the steady result", () => {
     const s = steady(0.2, 45);
-    const r = runScenario(scenarioWith({ ambient: { record: { time: hours(5), currentSpeed: [0.2, 0.2, 0.2, 0.2, 0.2], currentDirection: [45, 45, 45, 45, 45] } } }), { includePath: false });
+    const r = runScenario(
+      scenarioWith({
+        ambient: {
+          record: { time: hours(5), currentSpeed: [0.2, 0.2, 0.2, 0.2, 0.2], currentDirection: [45, 45, 45, 45, 45] },
+        },
+      }),
+      { includePath: false },
+    );
     const rec = r.record!;
     expect(rec.steps).toBe(5);
     for (const k of ["min", "p5", "p50", "p95"] as const) expect(rec.edgeDilution[k], k).toBe(s.mixingZone.dilution);
@@ -51,7 +61,10 @@ describe("ambient record: steps as quasi-steady states", () => {
       runScenario(
         scenarioWith({
           ambient: { record: { time: hours(6), currentSpeed: speeds, currentDirection: speeds.map(() => 90) } },
-          mixingZone: { limits: [{ constituent: "salinity", maxIncrease }], ...(percentOfTime ? { timeCompliance: { percentOfTime } } : {}) },
+          mixingZone: {
+            limits: [{ constituent: "salinity", maxIncrease }],
+            ...(percentOfTime ? { timeCompliance: { percentOfTime } } : {}),
+          },
         }),
         { includePath: false },
       );
@@ -78,19 +91,39 @@ describe("ambient record: steps as quasi-steady states", () => {
     const speeds = [0, 0.05, 0.1, 0.2, 0.3, 0.5, 0.8, 0.02, 0.15, 0.4];
     const times = [0, 1, 2, 4, 5, 6, 9, 10, 11, 12].map((h) => h * 3600);
     const durations = [1, 1, 2, 1, 1, 3, 1, 1, 1, 1];
-    expect(stepDurations(times).map((s) => s / 3600), "durations: until the next step; the last repeats the one before").toEqual(durations);
+    expect(
+      stepDurations(times).map((s) => s / 3600),
+      "durations: until the next step; the last repeats the one before",
+    ).toEqual(durations);
     const limits = [{ constituent: "salinity", maxIncrease: 0.45 }];
     const verdicts = speeds.map((u) => steady(u, 90, { limits }).compliance.verdict);
     expect(new Set(verdicts).size, "the record mixes verdicts").toBeGreaterThan(1);
-    const hand = (100 * durations.reduce((a, d, i) => a + (verdicts[i] === "meets" ? d : 0), 0)) / durations.reduce((a, b) => a + b, 0);
-    const r = runScenario(scenarioWith({ ambient: { record: { time: times, currentSpeed: speeds, currentDirection: speeds.map(() => 90) } }, mixingZone: { limits } }), { includePath: false });
+    const hand =
+      (100 * durations.reduce((a, d, i) => a + (verdicts[i] === "meets" ? d : 0), 0)) /
+      durations.reduce((a, b) => a + b, 0);
+    const r = runScenario(
+      scenarioWith({
+        ambient: { record: { time: times, currentSpeed: speeds, currentDirection: speeds.map(() => 90) } },
+        mixingZone: { limits },
+      }),
+      { includePath: false },
+    );
     expect(r.record!.meetsPercent).toBeCloseTo(hand, 10);
     expect(r.record!.series.verdict).toEqual(verdicts);
   });
 
   it("a step whose water breaks a rule is refused, counted as not meeting and reported apart", () => {
     const r = runScenario(
-      scenarioWith({ ambient: { record: { time: hours(4), currentSpeed: [0.2, 0.2, 0.2, 0.2], currentDirection: [90, 90, 90, 90], depth: [15, 15, 1.05, 15] } } }),
+      scenarioWith({
+        ambient: {
+          record: {
+            time: hours(4),
+            currentSpeed: [0.2, 0.2, 0.2, 0.2],
+            currentDirection: [90, 90, 90, 90],
+            depth: [15, 15, 1.05, 15],
+          },
+        },
+      }),
       { includePath: false },
     );
     const rec = r.record!;
@@ -131,8 +164,18 @@ describe("ambient record: steps as quasi-steady states", () => {
 
   it("times may be seconds, durations with a unit or ISO 8601 date-times, with the same result", () => {
     const speeds = [0.1, 0.3, 0.2];
-    const forms = [[0, 1800, 7200], ["0 min", "30 min", "2 h"], ["2031-03-01T00:00:00Z", "2031-03-01T00:30:00Z", "2031-03-01T04:00+02:00"]];
-    const recs = forms.map((time) => runScenario(scenarioWith({ ambient: { record: { time, currentSpeed: speeds, currentDirection: [90, 90, 90] } } }), { includePath: false }).record!);
+    const forms = [
+      [0, 1800, 7200],
+      ["0 min", "30 min", "2 h"],
+      ["2031-03-01T00:00:00Z", "2031-03-01T00:30:00Z", "2031-03-01T04:00+02:00"],
+    ];
+    const recs = forms.map(
+      (time) =>
+        runScenario(
+          scenarioWith({ ambient: { record: { time, currentSpeed: speeds, currentDirection: [90, 90, 90] } } }),
+          { includePath: false },
+        ).record!,
+    );
     for (const r of recs) {
       expect(r.series.time).toEqual([0, 1800, 7200]);
       expect(r.edgeDilution).toEqual(recs[0]!.edgeDilution);
@@ -143,11 +186,27 @@ describe("ambient record: steps as quasi-steady states", () => {
   });
 
   it("names the field for a bad record", () => {
-    expect(parseIssues({ ambient: { record: { time: [0, 3600, 3600], currentSpeed: [0.1, 0.1, 0.1], currentDirection: [0, 0, 0] } } }).join()).toMatch(/ambient\.record\.time\.2.*strictly increasing/);
-    expect(parseIssues({ ambient: { record: { time: [0, 3600], currentSpeed: [0.1], currentDirection: [0, 0] } } }).join()).toMatch(/ambient\.record\.currentSpeed.*one value per time/);
-    expect(parseIssues({ ambient: { record: { time: [0, "1 h"], currentSpeed: [0.1, 9], currentDirection: [0, 0] } } }).join()).toMatch(/ambient\.record\.currentSpeed\.1/);
-    expect(parseIssues({ ambient: { record: { time: [0, "2031-03-01T00:00Z"], currentSpeed: [0.1, 0.1], currentDirection: [0, 0] } } }).join()).toMatch(/ambient\.record\.time\.1.*same way/);
-    expect(parseIssues({ mixingZone: { timeCompliance: { percentOfTime: 0 } } }).join()).toMatch(/mixingZone\.timeCompliance\.percentOfTime/);
+    expect(
+      parseIssues({
+        ambient: { record: { time: [0, 3600, 3600], currentSpeed: [0.1, 0.1, 0.1], currentDirection: [0, 0, 0] } },
+      }).join(),
+    ).toMatch(/ambient\.record\.time\.2.*strictly increasing/);
+    expect(
+      parseIssues({ ambient: { record: { time: [0, 3600], currentSpeed: [0.1], currentDirection: [0, 0] } } }).join(),
+    ).toMatch(/ambient\.record\.currentSpeed.*one value per time/);
+    expect(
+      parseIssues({
+        ambient: { record: { time: [0, "1 h"], currentSpeed: [0.1, 9], currentDirection: [0, 0] } },
+      }).join(),
+    ).toMatch(/ambient\.record\.currentSpeed\.1/);
+    expect(
+      parseIssues({
+        ambient: { record: { time: [0, "2031-03-01T00:00Z"], currentSpeed: [0.1, 0.1], currentDirection: [0, 0] } },
+      }).join(),
+    ).toMatch(/ambient\.record\.time\.1.*same way/);
+    expect(parseIssues({ mixingZone: { timeCompliance: { percentOfTime: 0 } } }).join()).toMatch(
+      /mixingZone\.timeCompliance\.percentOfTime/,
+    );
   });
 
   it("time-weighted percentiles without interpolation", () => {
@@ -164,7 +223,11 @@ describe("ambient record from CSV", () => {
     const r = recordFromCsv("time (h),currentSpeed (knot),currentDirection (deg)\n0,0.5,90\n1.5,1,270\n");
     expect(r.ok).toBe(true);
     if (!r.ok) return;
-    expect(r.record).toEqual({ time: ["0 h", "1.5 h"], currentSpeed: ["0.5 knot", "1 knot"], currentDirection: ["90 deg", "270 deg"] });
+    expect(r.record).toEqual({
+      time: ["0 h", "1.5 h"],
+      currentSpeed: ["0.5 knot", "1 knot"],
+      currentDirection: ["90 deg", "270 deg"],
+    });
     expect(r.rows).toBe(2);
   });
   it("refuses an unknown column or a short row, naming it", () => {

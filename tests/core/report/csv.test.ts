@@ -31,7 +31,9 @@ describe("resultCsv()", () => {
     for (const { name, json } of results) {
       const rows = csvParse(resultCsv(json));
       expect(rows.columns, `${name}: columns`).toEqual([...RESULT_CSV_COLUMNS]);
-      expect(rows.length, `${name}: row count`).toBe(json.nearField.length + json.mixingZone.constituents.length + json.cases.length + 1);
+      expect(rows.length, `${name}: row count`).toBe(
+        json.nearField.length + json.mixingZone.constituents.length + json.cases.length + 1,
+      );
       const overall = rows.find((r) => r.section === "overall")!;
       expect(overall.verdict, `${name}: overall verdict as run --json`).toBe(json.overall.verdict);
       expect(back(overall["margin (-)"]), `${name}: overall margin as run --json`).toBe(at6(json.overall.margin));
@@ -53,9 +55,15 @@ describe("resultCsv()", () => {
         expect(back(row["returnDistance (m)"]), `${name} ${m.method}: return distance`).toBe(at6(m.returnDistance));
         expect(back(row["impactDistance (m)"]), `${name} ${m.method}: impact distance`).toBe(at6(m.impactDistance));
         expect(back(row["impactDilution (-)"]), `${name} ${m.method}: impact dilution`).toBe(at6(m.impactDilution));
-        expect(back(row["impactDilutionLow (-)"]), `${name} ${m.method}: range low`).toBe(at6(m.dilutionRange?.[0] ?? null));
-        expect(back(row["impactDilutionHigh (-)"]), `${name} ${m.method}: range high`).toBe(at6(m.dilutionRange?.[1] ?? null));
-        expect(back(row["nearFieldDilution (-)"]), `${name} ${m.method}: near-field dilution`).toBe(at6(m.nearFieldDilution));
+        expect(back(row["impactDilutionLow (-)"]), `${name} ${m.method}: range low`).toBe(
+          at6(m.dilutionRange?.[0] ?? null),
+        );
+        expect(back(row["impactDilutionHigh (-)"]), `${name} ${m.method}: range high`).toBe(
+          at6(m.dilutionRange?.[1] ?? null),
+        );
+        expect(back(row["nearFieldDilution (-)"]), `${name} ${m.method}: near-field dilution`).toBe(
+          at6(m.nearFieldDilution),
+        );
         expect(back(row["entrainedFlow (m3/s)"]), `${name} ${m.method}: entrained flow`).toBe(at6(m.entrainedFlow));
       });
     }
@@ -68,10 +76,16 @@ describe("resultCsv()", () => {
         const row = rows[i]!;
         const check = json.compliance.constituents.find((k) => k.constituent === c.constituent);
         expect(row.name, `${name}: constituent order`).toBe(c.constituent);
-        expect(back(row["edgeDilution (-)"]), `${name} ${c.constituent}: edge dilution`).toBe(at6(json.mixingZone.dilution));
-        expect(back(row["edgeConcentration (see unit)"]), `${name} ${c.constituent}: concentration`).toBe(at6(c.concentration));
+        expect(back(row["edgeDilution (-)"]), `${name} ${c.constituent}: edge dilution`).toBe(
+          at6(json.mixingZone.dilution),
+        );
+        expect(back(row["edgeConcentration (see unit)"]), `${name} ${c.constituent}: concentration`).toBe(
+          at6(c.concentration),
+        );
         expect(back(row["edgeIncrease (see unit)"]), `${name} ${c.constituent}: increase`).toBe(at6(c.increase));
-        expect(back(row["requiredDilution (-)"]), `${name} ${c.constituent}: required dilution`).toBe(at6(check?.requiredDilution ?? null));
+        expect(back(row["requiredDilution (-)"]), `${name} ${c.constituent}: required dilution`).toBe(
+          at6(check?.requiredDilution ?? null),
+        );
         expect(back(row["margin (-)"]), `${name} ${c.constituent}: margin`).toBe(at6(check?.margin ?? null));
         expect(row.pass, `${name} ${c.constituent}: verdict`).toBe(check ? String(check.pass) : "");
       });
@@ -96,7 +110,9 @@ describe("seriesCsv()", () => {
       rows.forEach((row, i) => {
         expect(back(row["distance (m)"]), `${name}: distance ${i}`).toBe(at6(s.distance[i]));
         expect(back(row["dilution (-)"]), `${name}: dilution ${i}`).toBe(at6(s.dilution[i]));
-        expect(back(row["salinityIncrease (g/kg)"]), `${name}: salinity increase ${i}`).toBe(at6(s.salinityIncrease[i]));
+        expect(back(row["salinityIncrease (g/kg)"]), `${name}: salinity increase ${i}`).toBe(
+          at6(s.salinityIncrease[i]),
+        );
         expect(back(row["layerThickness (m)"]), `${name}: layer thickness ${i}`).toBe(at6(s.layerThickness[i] ?? null));
         expect(row.stage, `${name}: stage ${i}`).toBe(s.stage[i]);
       });
@@ -112,7 +128,11 @@ describe("studyResultCsv()", () => {
     for (const v of variants) {
       const mine = rows.filter((r) => r.variant === v.name && r.section === "near-field");
       expect(mine.length, `${v.name}: one row per method`).toBe(v.result.nearField.length);
-      mine.forEach((row, i) => expect(back(row["impactDilution (-)"]), `${v.name}: impact dilution`).toBe(at6(v.result.nearField[i]!.impactDilution)));
+      mine.forEach((row, i) =>
+        expect(back(row["impactDilution (-)"]), `${v.name}: impact dilution`).toBe(
+          at6(v.result.nearField[i]!.impactDilution),
+        ),
+      );
     }
   });
 });
@@ -121,7 +141,7 @@ describe("CSV cells are never run as spreadsheet formulas", () => {
   // Neutralising with a leading single quote: common practice for CSV meant for spreadsheets, no source.
   it("puts a quote before text starting with =, +, -, @, tab or carriage return", async () => {
     const { csvSafeCell } = await import("../../../core/report/csv");
-    for (const text of ["=1+2", "+SUM(A1)", "-2+3", "@cmd", "\tx", "\rx", "=HYPERLINK(\"http://x\")"]) {
+    for (const text of ["=1+2", "+SUM(A1)", "-2+3", "@cmd", "\tx", "\rx", '=HYPERLINK("http://x")']) {
       expect(csvSafeCell(text), `neutralised: ${JSON.stringify(text)}`).toBe(`'${text}`);
     }
   });
@@ -165,6 +185,9 @@ describe("one CSV convention for every export", () => {
     const { json } = results[0]!;
     const first = csvParseRows(csvWithCaution(seriesCsv(json), json.caution, aboutResult(json)))[0]!;
     expect(first[0]!.startsWith("Caution"), "caution first").toBe(true);
-    expect(first.slice(1), "what it was computed from").toEqual([`scenario: ${json.scenarioName}`, `inputsHash: ${json.inputsHash}`]);
+    expect(first.slice(1), "what it was computed from").toEqual([
+      `scenario: ${json.scenarioName}`,
+      `inputsHash: ${json.inputsHash}`,
+    ]);
   });
 });

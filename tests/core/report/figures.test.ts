@@ -4,7 +4,14 @@
  * (no methods, an empty series) still give a valid figure.
  */
 import { describe, expect, it } from "vitest";
-import { linearTicks, logTicks, sideViewSvg, sideViewKeyPoints, sideViewPath, dilutionChartSvg } from "../../../core/report";
+import {
+  linearTicks,
+  logTicks,
+  sideViewSvg,
+  sideViewKeyPoints,
+  sideViewPath,
+  dilutionChartSvg,
+} from "../../../core/report";
 import { sideViewScales } from "../../../core/report/figures";
 import type { NearFieldMethodResult } from "../../../core/nearfield/types";
 import type { MixingZoneResult } from "../../../core/result/contract";
@@ -49,7 +56,13 @@ function mz(over: Partial<MixingZoneResult> = {}): MixingZoneResult {
     constituents: [],
     layerThickness: 1,
     footprint: { area: 0, furthestExtent: 0 },
-    series: { distance: [0, 10, 50, 100, 150], dilution: [1, 20, 50, 80, 100], salinityIncrease: [30, 1.5, 0.6, 0.4, 0.3], layerThickness: [null, 2, 1.5, 1, 0.9], stage: ["jet", "jet", "spreading-layer", "spreading-layer", "passive-diffusion"] },
+    series: {
+      distance: [0, 10, 50, 100, 150],
+      dilution: [1, 20, 50, 80, 100],
+      salinityIncrease: [30, 1.5, 0.6, 0.4, 0.3],
+      layerThickness: [null, 2, 1.5, 1, 0.9],
+      stage: ["jet", "jet", "spreading-layer", "spreading-layer", "passive-diffusion"],
+    },
     notModelled: [],
     ...over,
   };
@@ -58,7 +71,9 @@ function mz(over: Partial<MixingZoneResult> = {}): MixingZoneResult {
 describe("linearTicks() and logTicks()", () => {
   it("gives 1-2-5 steps covering the range", () => {
     expect(linearTicks(0, 10, 5), "0..10 in steps of 2").toEqual([0, 2, 4, 6, 8, 10]);
-    expect(linearTicks(0, 0.9, 5), "step 0.18 rounds up to 0.2; decimal steps without float noise").toEqual([0, 0.2, 0.4, 0.6, 0.8]);
+    expect(linearTicks(0, 0.9, 5), "step 0.18 rounds up to 0.2; decimal steps without float noise").toEqual([
+      0, 0.2, 0.4, 0.6, 0.8,
+    ]);
     expect(logTicks(1, 120), "1-2-5 per decade").toEqual([1, 2, 5, 10, 20, 50, 100]);
   });
 
@@ -76,7 +91,10 @@ describe("sideViewSvg()", () => {
 
   it("draws only the key points a length-scale method reports (no invented maximum location)", () => {
     const keys = sideViewKeyPoints(lengthScale, 1);
-    expect(keys.map((k) => k.kind), "return and impact only: max-rise distance is unknown").toEqual(["return", "impact"]);
+    expect(
+      keys.map((k) => k.kind),
+      "return and impact only: max-rise distance is unknown",
+    ).toEqual(["return", "impact"]);
     const svg = sideViewSvg({ nearField: [lengthScale], depth: 10, portHeight: 1, portAngle: 60 });
     expect(svg, "level line for the rise").toContain('stroke-dasharray="2 3"');
     expect(svg, "legend explains it").toContain("dotted level = maximum rise of the upper edge");
@@ -131,9 +149,24 @@ describe("dilutionChartSvg()", () => {
   });
 
   it("uses a linear axis for a narrow range and survives an empty series", () => {
-    const narrow = dilutionChartSvg({ mixingZone: mz({ dilution: 3, series: { distance: [0, 100], dilution: [2, 3], salinityIncrease: [1, 1], layerThickness: [null, null], stage: ["jet", "jet"] } }), requiredDilution: null });
+    const narrow = dilutionChartSvg({
+      mixingZone: mz({
+        dilution: 3,
+        series: {
+          distance: [0, 100],
+          dilution: [2, 3],
+          salinityIncrease: [1, 1],
+          layerThickness: [null, null],
+          stage: ["jet", "jet"],
+        },
+      }),
+      requiredDilution: null,
+    });
     expect(narrow, "linear").not.toContain("(log scale)");
-    const empty = dilutionChartSvg({ mixingZone: mz({ series: { distance: [], dilution: [], salinityIncrease: [], layerThickness: [], stage: [] } }), requiredDilution: 10 });
+    const empty = dilutionChartSvg({
+      mixingZone: mz({ series: { distance: [], dilution: [], salinityIncrease: [], layerThickness: [], stage: [] } }),
+      requiredDilution: 10,
+    });
     expect(empty, "valid svg").toMatch(/<\/svg>$/);
     expect(empty, "no NaN coordinates").not.toContain("NaN");
   });

@@ -35,7 +35,11 @@ describe("the citation table", () => {
 describe("sourceCites()", () => {
   it("matches first author and year in the usual ways of writing them", () => {
     const roberts = byKey("Roberts, Ferrier & Daviero 1997");
-    for (const s of ["Roberts, Ferrier & Daviero (1997)", "Roberts et al. 1997", "Roberts et al. (1997), J. Hydraulic Eng."]) {
+    for (const s of [
+      "Roberts, Ferrier & Daviero (1997)",
+      "Roberts et al. 1997",
+      "Roberts et al. (1997), J. Hydraulic Eng.",
+    ]) {
       expect(sourceCites(s, roberts), s).toBe(true);
     }
     expect(sourceCites("Roberts & Toms (1987)", roberts), "another Roberts paper").toBe(false);
@@ -44,11 +48,15 @@ describe("sourceCites()", () => {
   it("does not take a co-author for a first author", () => {
     expect(sourceCites("Lai & Lee (2012)", byKey("Lee 2012")), "Lee is second author here").toBe(false);
     expect(sourceCites("Lai & Lee (2012)", byKey("Lai & Lee 2012")), "Lai is first author").toBe(true);
-    expect(sourceCites("Ellison & Turner (1959)", byKey("Turner 1966")), "Turner second author, other year").toBe(false);
+    expect(sourceCites("Ellison & Turner (1959)", byKey("Turner 1966")), "Turner second author, other year").toBe(
+      false,
+    );
   });
 
   it("ignores accents and finds works by alias", () => {
-    expect(sourceCites("Sanchez-Lizaso et al. (2008)", byKey("Sánchez-Lizaso et al. 2008")), "accent folded").toBe(true);
+    expect(sourceCites("Sanchez-Lizaso et al. (2008)", byKey("Sánchez-Lizaso et al. 2008")), "accent folded").toBe(
+      true,
+    );
     expect(sourceCites("TEOS-10 Gibbs function", byKey("IOC, SCOR & IAPSO 2010")), "TEOS-10 alias").toBe(true);
   });
 });
@@ -60,7 +68,10 @@ describe("referencesFromSources()", () => {
       "Roberts, Ferrier & Daviero (1997)",
       "Brooks (1960) 4/3-law lateral diffusion, as reproduced in Fischer et al. (1979) ch. 9",
     ]);
-    expect(references.map((r) => r.key), "works found").toEqual([
+    expect(
+      references.map((r) => r.key),
+      "works found",
+    ).toEqual([
       "Roberts, Ferrier & Daviero 1997",
       "Lai & Lee 2012",
       "Fischer et al. 1979",
@@ -77,6 +88,9 @@ describe("referencesFromSources()", () => {
       "",
       "common practice, no source (about 2–6 m/s)",
     ]);
-    expect(uncited, "kept once each, empties dropped").toEqual(["common practice, no source (about 2–6 m/s)", "Lai & Lee (2012) and Nobody (1888)"]);
+    expect(uncited, "kept once each, empties dropped").toEqual([
+      "common practice, no source (about 2–6 m/s)",
+      "Lai & Lee (2012) and Nobody (1888)",
+    ]);
   });
 });

@@ -6,7 +6,16 @@
 import { describe, expect, it, beforeAll } from "vitest";
 import { readFileSync } from "node:fs";
 import { basename } from "node:path";
-import { reportHtml, REPORT_SECTIONS, reportNumber, reportValue, escapeHtml, referencesFromSources, resultSources, secondaryQuotationsFor } from "../../../core/report";
+import {
+  reportHtml,
+  REPORT_SECTIONS,
+  reportNumber,
+  reportValue,
+  escapeHtml,
+  referencesFromSources,
+  resultSources,
+  secondaryQuotationsFor,
+} from "../../../core/report";
 import { CAUTION, type BrinefieldResult } from "../../../core/result/contract";
 import { parseScenario } from "../../../core/scenario/parse";
 import { runScenario } from "../../../core/pipeline";
@@ -29,7 +38,12 @@ beforeAll(async () => {
   for (const path of demos) {
     const text = readFileSync(path, "utf8");
     const json = await runJson(path);
-    rendered.push({ name: basename(path), text, json, html: reportHtml(json, { scenarioFile: JSON.parse(text), scenarioText: text }, { generatedAt: GENERATED_AT }) });
+    rendered.push({
+      name: basename(path),
+      text,
+      json,
+      html: reportHtml(json, { scenarioFile: JSON.parse(text), scenarioText: text }, { generatedAt: GENERATED_AT }),
+    });
   }
 });
 
@@ -60,23 +74,37 @@ describe("reportHtml() on the demo scenarios", () => {
   it("prints the permitting caution on the first page (before any result) and in the footer repeated on every page", () => {
     for (const r of rendered) {
       // A record adds its quasi-steady sentence after the contract's caution.
-      expect(r.json.caution.startsWith(CAUTION) && (r.json.record ? r.json.caution.length > CAUTION.length : r.json.caution === CAUTION), "the result carries the contract's caution").toBe(true);
+      expect(
+        r.json.caution.startsWith(CAUTION) &&
+          (r.json.record ? r.json.caution.length > CAUTION.length : r.json.caution === CAUTION),
+        "the result carries the contract's caution",
+      ).toBe(true);
       const caution = escapeHtml(CAUTION);
-      const first = r.html.indexOf(`<div class="caution" id="caution">${r.json.record ? escapeHtml(r.json.caution) : caution}</div>`);
+      const first = r.html.indexOf(
+        `<div class="caution" id="caution">${r.json.record ? escapeHtml(r.json.caution) : caution}</div>`,
+      );
       expect(first, `${r.name}: caution block present`).toBeGreaterThan(-1);
       expect(first, `${r.name}: caution before the summary`).toBeLessThan(r.html.indexOf('<section id="summary"'));
-      expect(r.html, `${r.name}: fixed footer with the caution`).toContain(`<div class="print-footer" id="print-footer">${caution}`);
-      expect(r.html, `${r.name}: the footer is fixed in print so Chromium repeats it per page`).toMatch(/\.print-footer \{[^}]*position: fixed/);
+      expect(r.html, `${r.name}: fixed footer with the caution`).toContain(
+        `<div class="print-footer" id="print-footer">${caution}`,
+      );
+      expect(r.html, `${r.name}: the footer is fixed in print so Chromium repeats it per page`).toMatch(
+        /\.print-footer \{[^}]*position: fixed/,
+      );
     }
   });
 
   it("states title, date, program version and inputs hash", () => {
     for (const r of rendered) {
       expect(r.html, `${r.name}: title`).toContain("<h1>Brine outfall screening report</h1>");
-      expect(r.html, `${r.name}: scenario name as subtitle`).toContain(`<p class="subtitle">${escapeHtml(r.json.scenarioName)}</p>`);
+      expect(r.html, `${r.name}: scenario name as subtitle`).toContain(
+        `<p class="subtitle">${escapeHtml(r.json.scenarioName)}</p>`,
+      );
       expect(r.html, `${r.name}: date`).toContain('<dd id="generated-at">2026-12-02 06:00:00 UTC</dd>');
       expect(r.html, `${r.name}: version`).toContain(`<span id="program-version">${r.json.program.version}</span>`);
-      expect(r.html, `${r.name}: inputs hash`).toContain(`<span class="hash" id="inputs-hash">${r.json.inputsHash}</span>`);
+      expect(r.html, `${r.name}: inputs hash`).toContain(
+        `<span class="hash" id="inputs-hash">${r.json.inputsHash}</span>`,
+      );
     }
   });
 
@@ -121,14 +149,20 @@ describe("reportHtml() on the demo scenarios", () => {
   it("reports the equation of state, the multiport regime, each constituent at the edge and the verdict", () => {
     for (const r of rendered) {
       expect(r.html, `${r.name}: equation of state`).toContain(escapeHtml(r.json.densities.equationOfState.name));
-      expect(r.html, `${r.name}: multiport regime`).toContain(`<strong>Regime:</strong> ${escapeHtml(r.json.multiport.regime)}`);
+      expect(r.html, `${r.name}: multiport regime`).toContain(
+        `<strong>Regime:</strong> ${escapeHtml(r.json.multiport.regime)}`,
+      );
       const constituents = tableById(r.html, "constituents-table")!;
       r.json.mixingZone.constituents.forEach((c, i) => {
         expect(constituents, `${r.name}: row for ${c.constituent}`).toContain(`<td>${escapeHtml(c.constituent)}</td>`);
-        expect(constituents, `${r.name}: concentration at the edge of ${c.constituent}`).toContain(`data-path="mixingZone.constituents.${i}.concentration"`);
+        expect(constituents, `${r.name}: concentration at the edge of ${c.constituent}`).toContain(
+          `data-path="mixingZone.constituents.${i}.concentration"`,
+        );
       });
       const badge = r.json.compliance.pass ? "MEETS LIMIT" : "EXCEEDS LIMIT";
-      expect(r.html, `${r.name}: verdict badge agrees with compliance.pass`).toContain(`<div class="badge">${badge}</div>`);
+      expect(r.html, `${r.name}: verdict badge agrees with compliance.pass`).toContain(
+        `<div class="badge">${badge}</div>`,
+      );
     }
   });
 
@@ -141,12 +175,17 @@ describe("reportHtml() on the demo scenarios", () => {
 
   it("draws both figures as inline SVG and gives full references for the methods used", () => {
     for (const r of rendered) {
-      expect(r.html, `${r.name}: side view`).toMatch(/<figure id="figure-side-view"><svg xmlns="http:\/\/www\.w3\.org\/2000\/svg"/);
+      expect(r.html, `${r.name}: side view`).toMatch(
+        /<figure id="figure-side-view"><svg xmlns="http:\/\/www\.w3\.org\/2000\/svg"/,
+      );
       expect(r.html, `${r.name}: dilution chart`).toMatch(/<figure id="figure-dilution"><svg /);
-      expect(r.html, `${r.name}: edge marked in the chart`).toContain(`mixing-zone edge ${reportNumber(r.json.mixingZone.radius)} m`);
+      expect(r.html, `${r.name}: edge marked in the chart`).toContain(
+        `mixing-zone edge ${reportNumber(r.json.mixingZone.radius)} m`,
+      );
       const { references } = referencesFromSources(resultSources(r.json));
       expect(references.length, `${r.name}: the methods cite tabled works`).toBeGreaterThan(3);
-      for (const ref of references) expect(r.html, `${r.name}: citation ${ref.key}`).toContain(escapeHtml(ref.citation));
+      for (const ref of references)
+        expect(r.html, `${r.name}: citation ${ref.key}`).toContain(escapeHtml(ref.citation));
     }
   });
 
@@ -162,7 +201,8 @@ describe("reportHtml() on the demo scenarios", () => {
   });
 
   it("carries no provenance tags in result strings or report text", () => {
-    const tag = /from memory|secondary source|\bSECONDARY\b|\bCONFIRMED\b|FROM MEMORY|reference\s+sheet|low confidence/i;
+    const tag =
+      /from memory|secondary source|\bSECONDARY\b|\bCONFIRMED\b|FROM MEMORY|reference\s+sheet|low confidence/i;
     for (const r of rendered) {
       const withoutStatement = r.html.replace(/<p id="secondary-quotations">[\s\S]*?<\/p>/, "");
       expect(withoutStatement, `${r.name}: report text`).not.toMatch(tag);
@@ -198,12 +238,23 @@ describe("reportHtml() options", () => {
     if (!parsed.ok) throw new Error("demo scenario must read");
     const result = runScenario(parsed.scenario);
     // A 1×1 transparent PNG (the smallest valid file), base64.
-    const png = "data:image/png;base64,iVBORw0KGgoAAAANSUhEUgAAAAEAAAABCAYAAAAfFcSJAAAADUlEQVR42mNkYPhfDwAChwGA60e6kgAAAABJRU5ErkJggg==";
+    const png =
+      "data:image/png;base64,iVBORw0KGgoAAAANSUhEUgAAAAEAAAABCAYAAAAfFcSJAAAADUlEQVR42mNkYPhfDwAChwGA60e6kgAAAABJRU5ErkJggg==";
     const withImage = reportHtml(result, { scenarioFile: raw }, { view3dPng: png, generatedAt: GENERATED_AT });
-    expect(withImage, "image embedded").toContain(`<img alt="Rendered 3D view of the diffuser and plume" src="${png}">`);
-    const remote = reportHtml(result, { scenarioFile: raw }, { view3dPng: "https://example.org/x.png", generatedAt: GENERATED_AT });
+    expect(withImage, "image embedded").toContain(
+      `<img alt="Rendered 3D view of the diffuser and plume" src="${png}">`,
+    );
+    const remote = reportHtml(
+      result,
+      { scenarioFile: raw },
+      { view3dPng: "https://example.org/x.png", generatedAt: GENERATED_AT },
+    );
     expect(remote, "remote image refused").not.toContain("example.org");
-    const noted = reportHtml(result, { scenarioFile: raw }, { view3dNote: "the renderer could not be built", generatedAt: GENERATED_AT });
+    const noted = reportHtml(
+      result,
+      { scenarioFile: raw },
+      { view3dNote: "the renderer could not be built", generatedAt: GENERATED_AT },
+    );
     expect(noted, "reason printed").toContain("No 3D view is included: the renderer could not be built.");
   });
 
@@ -212,21 +263,35 @@ describe("reportHtml() options", () => {
     if (!parsed.ok) throw new Error("demo scenario must read");
     const planned = planMonteCarlo(parsed.scenario, 12, 7);
     if (!planned.ok) throw new Error("plan must succeed");
-    const summary = summariseMonteCarlo(planned.plan, [runMonteCarloChunk(parsed.scenario, planned.plan, 0, 12, evaluateScenario)]);
-    const html = reportHtml(runScenario(parsed.scenario), { scenarioFile: raw }, { uncertainty: summary, generatedAt: GENERATED_AT });
+    const summary = summariseMonteCarlo(planned.plan, [
+      runMonteCarloChunk(parsed.scenario, planned.plan, 0, 12, evaluateScenario),
+    ]);
+    const html = reportHtml(
+      runScenario(parsed.scenario),
+      { scenarioFile: raw },
+      { uncertainty: summary, generatedAt: GENERATED_AT },
+    );
     const section = /<section id="uncertainty">[\s\S]*?<\/section>/.exec(html)![0];
     expect(section, "the per-run worst-case row").toContain("overall (per-run worst case)");
     for (const k of ["p5", "p50", "p95"] as const) {
-      expect(section, `worst-case ${k}`).toContain(`<td class="num">${reportNumber(summary.worstCase.edgeDilution[k])}</td>`);
+      expect(section, `worst-case ${k}`).toContain(
+        `<td class="num">${reportNumber(summary.worstCase.edgeDilution[k])}</td>`,
+      );
     }
-    expect(section, "run count").toContain(`<td class="num">${reportNumber(summary.worstCase.edgeDilution.count)}</td>`);
+    expect(section, "run count").toContain(
+      `<td class="num">${reportNumber(summary.worstCase.edgeDilution.count)}</td>`,
+    );
   });
 
   it("still reports the result when the file cannot be read back as a scenario (inputs as entered only)", () => {
     const parsed = parseScenario(raw);
     if (!parsed.ok) throw new Error("demo scenario must read");
     const result = runScenario(parsed.scenario);
-    const html = reportHtml(result, { scenarioFile: { ...raw, format: "something-else" } }, { generatedAt: GENERATED_AT });
+    const html = reportHtml(
+      result,
+      { scenarioFile: { ...raw, format: "something-else" } },
+      { generatedAt: GENERATED_AT },
+    );
     expect(html, "fallback inputs table").toContain("the file could not be re-read, so SI values are not shown");
     expect(tracedNumbers(html).length, "results still traced").toBeGreaterThan(40);
   });
@@ -275,7 +340,11 @@ describe("the inputs hash in the report", () => {
 describe("report appendix: how the methods compare with published experiments", () => {
   it("prints the validation table with sources, ratios and bands, the same numbers as brinefield validate", async () => {
     const { validationTable } = await import("../../../core/validation");
-    const html = reportHtml(runScenario((parseScenario(JSON.parse(readFileSync(demos[0]!, "utf8"))) as any).scenario), { scenarioFile: JSON.parse(readFileSync(demos[0]!, "utf8")) }, { generatedAt: GENERATED_AT });
+    const html = reportHtml(
+      runScenario((parseScenario(JSON.parse(readFileSync(demos[0]!, "utf8"))) as any).scenario),
+      { scenarioFile: JSON.parse(readFileSync(demos[0]!, "utf8")) },
+      { generatedAt: GENERATED_AT },
+    );
     expect(html, "appendix title").toContain("Appendix: How the methods compare with published experiments");
     const table = validationTable();
     const rows = html.split('<table id="validation-table">')[1]!.split("</table>")[0]!.match(/<tr>/g)!.length - 1;
@@ -290,7 +359,9 @@ describe("densities", () => {
     const { densityNumber } = await import("../../../core/report");
     expect(densityNumber(1025.3127), "six significant figures here").toBe("1025.31");
     for (const r of rendered) {
-      expect(r.html, `${r.name}: brine density`).toContain(`data-path="densities.discharge">${r.json.densities.discharge.toFixed(2)}</td>`);
+      expect(r.html, `${r.name}: brine density`).toContain(
+        `data-path="densities.discharge">${r.json.densities.discharge.toFixed(2)}</td>`,
+      );
     }
   });
 });

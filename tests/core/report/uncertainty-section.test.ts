@@ -12,7 +12,13 @@ import { CLAIM_VERDICT_TEXT } from "../../../core/report/claim";
 import { parseScenario } from "../../../core/scenario/parse";
 import { runScenario } from "../../../core/pipeline";
 import { checkClaimOnScenario } from "../../../core/compliance/claim-run";
-import { histogram, mergeMonteCarloChunks, planMonteCarlo, runMonteCarloChunk, summariseMonteCarlo } from "../../../core/study";
+import {
+  histogram,
+  mergeMonteCarloChunks,
+  planMonteCarlo,
+  runMonteCarloChunk,
+  summariseMonteCarlo,
+} from "../../../core/study";
 import {
   MARGIN_MEANING,
   OUTSIDE_SCOPE_MEANING,
@@ -42,7 +48,13 @@ function uniformCurrentStudy(runs: number): ReportUncertainty {
   });
   const planned = planMonteCarlo(s, runs, 17);
   if (!planned.ok) throw new Error("plan");
-  const chunk = runMonteCarloChunk(s, planned.plan, 0, runs, identityEvaluator(0.1, (x) => x.ambient.currentSpeed));
+  const chunk = runMonteCarloChunk(
+    s,
+    planned.plan,
+    0,
+    runs,
+    identityEvaluator(0.1, (x) => x.ambient.currentSpeed),
+  );
   const merged = mergeMonteCarloChunks(planned.plan, [chunk]);
   return { summary: summariseMonteCarlo(planned.plan, [chunk]), histogram: histogram(merged.worstEdgeDilution, 20) };
 }
@@ -57,7 +69,14 @@ describe("the report's uncertainty section", () => {
   const section = sectionOf(html, "uncertainty");
 
   it("explains in words what P5/P50/P95, the per-run worst case, the chance, outside-scope and refused runs mean", () => {
-    for (const sentence of [PERCENTILE_MEANING, WORST_CASE_MEANING, PROBABILITY_MEANING, OUTSIDE_SCOPE_MEANING, REFUSED_MEANING, MARGIN_MEANING]) {
+    for (const sentence of [
+      PERCENTILE_MEANING,
+      WORST_CASE_MEANING,
+      PROBABILITY_MEANING,
+      OUTSIDE_SCOPE_MEANING,
+      REFUSED_MEANING,
+      MARGIN_MEANING,
+    ]) {
       expect(section, sentence.slice(0, 40)).toContain(escapeHtml(sentence));
     }
     expect(section, "no raw dump of flattened keys").not.toMatch(/ · edge dilution|worst case · /);
@@ -69,7 +88,9 @@ describe("the report's uncertainty section", () => {
     expect(Math.abs(w.probabilityOfExceedance - 0.5), "closed form 50 %").toBeLessThan(0.03);
     expect(section, "the percentage").toContain(`>${percentText(w.probabilityOfExceedance)}<`);
     expect(percentText(w.probabilityOfExceedance), "written as percent").toMatch(/^\d+(\.\d+)? %$/);
-    expect(section, "the fraction stays a data attribute only").toContain(`data-probability="${w.probabilityOfExceedance}"`);
+    expect(section, "the fraction stays a data attribute only").toContain(
+      `data-probability="${w.probabilityOfExceedance}"`,
+    );
   });
 
   it("says which input was clamped and how often (closed form: a quarter of the draws are below 0)", () => {
@@ -78,13 +99,17 @@ describe("the report's uncertainty section", () => {
     const sentences = clampedSentences(u.summary);
     expect(sentences, "one sentence for the one clamped input").toHaveLength(1);
     expect(sentences[0], "names the input in words, the count and the bounds with units").toMatch(
-      new RegExp(`^current speed \\(ambient\\.currentSpeed\\): ${n} of 4000 draws \\(\\d+(\\.\\d+)? %\\) fell outside 0–5 m/s`),
+      new RegExp(
+        `^current speed \\(ambient\\.currentSpeed\\): ${n} of 4000 draws \\(\\d+(\\.\\d+)? %\\) fell outside 0–5 m/s`,
+      ),
     );
     expect(section, "in the report").toContain(escapeHtml(sentences[0]!));
   });
 
   it("lists the spreads with their units", () => {
-    expect(section, "uniform spread in m/s").toContain("current speed (ambient.currentSpeed): uniform from -0.1 m/s to 0.3 m/s");
+    expect(section, "uniform spread in m/s").toContain(
+      "current speed (ambient.currentSpeed): uniform from -0.1 m/s to 0.3 m/s",
+    );
   });
 
   it("draws the histogram with labelled axes and the required-dilution line where it belongs", () => {
@@ -120,9 +145,14 @@ describe("the report's uncertainty section", () => {
   });
 
   it("keeps the explanation when the report is given the summary alone", () => {
-    const alone = sectionOf(reportHtml(result, { scenarioFile: demo }, { uncertainty: u.summary, generatedAt: GENERATED_AT }), "uncertainty");
+    const alone = sectionOf(
+      reportHtml(result, { scenarioFile: demo }, { uncertainty: u.summary, generatedAt: GENERATED_AT }),
+      "uncertainty",
+    );
     expect(alone).toContain(escapeHtml(PERCENTILE_MEANING));
-    expect(alone, "worst-case P5").toContain(`<td class="num">${reportNumber(u.summary.worstCase.edgeDilution.p5)}</td>`);
+    expect(alone, "worst-case P5").toContain(
+      `<td class="num">${reportNumber(u.summary.worstCase.edgeDilution.p5)}</td>`,
+    );
   });
 });
 
@@ -132,12 +162,21 @@ describe("the report's claim section", () => {
   if (!parsed.ok) throw new Error("demo must read");
   const outcome = checkClaimOnScenario(parsed.scenario, 60, 150);
   if (!outcome.ok) throw new Error(outcome.message);
-  const section = sectionOf(reportHtml(runScenario(parsed.scenario), { scenarioFile: demo }, { claim: outcome.check, generatedAt: GENERATED_AT }), "claim");
+  const section = sectionOf(
+    reportHtml(
+      runScenario(parsed.scenario),
+      { scenarioFile: demo },
+      { claim: outcome.check, generatedAt: GENERATED_AT },
+    ),
+    "claim",
+  );
 
   it("exists with its verdict in words, the explanation of the verdicts and the range bar", () => {
     expect(section, "verdict sentence").toContain(escapeHtml(CLAIM_VERDICT_TEXT[outcome.check.verdict]));
     expect(section, "the check's own summary").toContain(escapeHtml(outcome.check.summary));
-    expect(section, "what each verdict means").toContain("Verdicts: supported — at or below the conservative value (within 0.1 %); plausible");
+    expect(section, "what each verdict means").toContain(
+      "Verdicts: supported — at or below the conservative value (within 0.1 %); plausible",
+    );
     expect(section, "the figure's caption explains dots, bars and lines").toContain("Each method chain's dilution at");
     expect(section, "range bar").toContain('data-figure="claim-range-bar"');
   });

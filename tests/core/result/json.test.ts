@@ -8,11 +8,7 @@ import { spawnSync } from "node:child_process";
 import { mkdtempSync, readFileSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
-import {
-  jsonText,
-  jsonRangeReplacer,
-  rangeBoundJson,
-} from "../../../core/result/json";
+import { jsonText, jsonRangeReplacer, rangeBoundJson } from "../../../core/result/json";
 import { parseScenario } from "../../../core/scenario/parse";
 import { runScenario } from "../../../core/pipeline";
 
@@ -20,9 +16,7 @@ const root = join(__dirname, "../../..");
 
 /** The sandy-shelf demo with one wide, slow port: densimetric Froude number well under 20. */
 function slowPortFile(): Record<string, any> {
-  const raw = JSON.parse(
-    readFileSync(join(root, "demo-scenarios/sandy-shelf.json"), "utf8"),
-  );
+  const raw = JSON.parse(readFileSync(join(root, "demo-scenarios/sandy-shelf.json"), "utf8"));
   raw.diffuser = {
     layout: "single",
     portCount: 1,
@@ -40,8 +34,7 @@ function ranges(v: unknown, key = "", out: unknown[][] = []): unknown[][] {
   if (Array.isArray(v)) {
     if (key === "range" || key.endsWith("Range")) out.push(v);
     else v.forEach((x) => ranges(x, key, out));
-  } else if (v && typeof v === "object")
-    for (const [k, x] of Object.entries(v)) ranges(x, k, out);
+  } else if (v && typeof v === "object") for (const [k, x] of Object.entries(v)) ranges(x, k, out);
   return out;
 }
 
@@ -63,15 +56,12 @@ describe("jsonText()", () => {
     });
     expect(text.endsWith("}\n"), "one final newline").toBe(true);
     expect(rangeBoundJson(Number.NaN), "NaN named").toBe("NaN");
-    expect(jsonRangeReplacer("range", "text"), "non-arrays untouched").toBe(
-      "text",
-    );
+    expect(jsonRangeReplacer("range", "text"), "non-arrays untouched").toBe("text");
   });
 
   it("keeps the Froude-number range of a slow port explicit in a result", () => {
     const parsed = parseScenario(slowPortFile());
-    if (!parsed.ok)
-      throw new Error(parsed.issues.map((i) => i.message).join("; "));
+    if (!parsed.ok) throw new Error(parsed.issues.map((i) => i.message).join("; "));
     const r = runScenario(parsed.scenario);
     expect(
       r.warnings.some((w) => w.range && !Number.isFinite(w.range[1])),
@@ -79,10 +69,7 @@ describe("jsonText()", () => {
     ).toBe(true);
     const all = ranges(JSON.parse(jsonText(r)));
     expect(all.length > 0, "ranges present").toBe(true);
-    for (const g of all)
-      expect(g.includes(null), `no null bound in ${JSON.stringify(g)}`).toBe(
-        false,
-      );
+    for (const g of all) expect(g.includes(null), `no null bound in ${JSON.stringify(g)}`).toBe(false);
     expect(
       all.some((g) => g.includes("Infinity")),
       "Infinity written out",
@@ -93,17 +80,13 @@ describe("jsonText()", () => {
     const dir = mkdtempSync(join(tmpdir(), "brinefield-json-"));
     const file = join(dir, "slow.json");
     writeFileSync(file, JSON.stringify(slowPortFile()));
-    const out = spawnSync(
-      process.execPath,
-      [join(root, "core/cli/launcher.mjs"), "run", file, "--json"],
-      { cwd: root, encoding: "utf8" },
-    );
+    const out = spawnSync(process.execPath, [join(root, "core/cli/launcher.mjs"), "run", file, "--json"], {
+      cwd: root,
+      encoding: "utf8",
+    });
     expect(out.status, out.stderr).toBe(0);
     const all = ranges(JSON.parse(out.stdout));
-    for (const g of all)
-      expect(g.includes(null), `no null bound in ${JSON.stringify(g)}`).toBe(
-        false,
-      );
+    for (const g of all) expect(g.includes(null), `no null bound in ${JSON.stringify(g)}`).toBe(false);
     expect(
       all.some((g) => g.includes("Infinity")),
       "Infinity written out",

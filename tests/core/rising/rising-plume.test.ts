@@ -15,7 +15,12 @@
 import { describe, it, expect } from "vitest";
 import { risingIntegral } from "../../../core/rising/integral";
 import { risingLengthScale } from "../../../core/rising/length-scale";
-import { roundJetDilution, roundPlumeDilution, roundSourceFluxes, trapHeightFromStratification } from "../../../core/rising/plume-laws";
+import {
+  roundJetDilution,
+  roundPlumeDilution,
+  roundSourceFluxes,
+  trapHeightFromStratification,
+} from "../../../core/rising/plume-laws";
 import type { AmbientColumn, JetSource, PathPoint } from "../../../core/nearfield/types";
 import { parseScenario } from "../../../core/scenario/parse";
 import { runScenario } from "../../../core/pipeline";
@@ -31,7 +36,15 @@ function column(depth: number, n: number, currentSpeed = 0): AmbientColumn {
     depths.push(d);
     densities.push(1025 * (1 + (n * n * (d - depth)) / G));
   }
-  return { depth, depths, densities, salinities: depths.map(() => 35), temperatures: depths.map(() => 20), currentSpeed, currentDirection: 0 };
+  return {
+    depth,
+    depths,
+    densities,
+    salinities: depths.map(() => 35),
+    temperatures: depths.map(() => 20),
+    currentSpeed,
+    currentDirection: 0,
+  };
 }
 
 function verticalJet(d: number, u: number, gPrime: number, portHeight = 0.5): JetSource {
@@ -114,20 +127,23 @@ describe("integral model, rising: the same equations meet the classical limits",
     expect(r.impactDilution).toBeNull();
   });
 
-  it.each([0.01, 0.02])("traps below the surface in linear stratification N = %s s⁻¹ at 3.8·(B/N³)^(1/4) ± 10 % (Morton, Taylor & Turner 1956)", (n) => {
-    const jet = verticalJet(0.5, 0.05, -0.2);
-    const r = risingIntegral(jet, column(200, n));
-    const b = Math.abs(jet.reducedGravity) * jet.flow;
-    const ratio = r.maxRiseHeight! / Math.pow(b / n ** 3, 0.25);
-    expect(r.risingField.kind).toBe("trapped");
-    expect(ratio).toBeGreaterThan(3.8 * 0.9);
-    expect(ratio).toBeLessThan(3.8 * 1.1);
-    // The trap level (buoyancy vanishes) lies below the maximum rise, at roughly three-quarters of it.
-    const trap = r.risingField.trapHeight!;
-    expect(r.events!.some((e) => e.kind === "neutral-buoyancy")).toBe(true);
-    expect(trap / r.maxRiseHeight!).toBeGreaterThan(0.6);
-    expect(trap / r.maxRiseHeight!).toBeLessThan(0.85);
-  });
+  it.each([0.01, 0.02])(
+    "traps below the surface in linear stratification N = %s s⁻¹ at 3.8·(B/N³)^(1/4) ± 10 % (Morton, Taylor & Turner 1956)",
+    (n) => {
+      const jet = verticalJet(0.5, 0.05, -0.2);
+      const r = risingIntegral(jet, column(200, n));
+      const b = Math.abs(jet.reducedGravity) * jet.flow;
+      const ratio = r.maxRiseHeight! / Math.pow(b / n ** 3, 0.25);
+      expect(r.risingField.kind).toBe("trapped");
+      expect(ratio).toBeGreaterThan(3.8 * 0.9);
+      expect(ratio).toBeLessThan(3.8 * 1.1);
+      // The trap level (buoyancy vanishes) lies below the maximum rise, at roughly three-quarters of it.
+      const trap = r.risingField.trapHeight!;
+      expect(r.events!.some((e) => e.kind === "neutral-buoyancy")).toBe(true);
+      expect(trap / r.maxRiseHeight!).toBeGreaterThan(0.6);
+      expect(trap / r.maxRiseHeight!).toBeLessThan(0.85);
+    },
+  );
 
   it("the length-scale method gives the same trap height law and agrees with the integral model within 15 %", () => {
     const jet = verticalJet(0.5, 0.05, -0.2);
@@ -148,12 +164,25 @@ function warmBlend(over: { ports?: number; spacing?: number; profile?: boolean }
     name: "Warm blend",
     discharge: { flow: 1.2, salinity: 41, temperature: 33 },
     ambient: over.profile
-      ? { depth: 40, profile: [{ depth: 0, salinity: 37, temperature: 27 }, { depth: 40, salinity: 38.5, temperature: 14 }], currentSpeed: 0.15 }
+      ? {
+          depth: 40,
+          profile: [
+            { depth: 0, salinity: 37, temperature: 27 },
+            { depth: 40, salinity: 38.5, temperature: 14 },
+          ],
+          currentSpeed: 0.15,
+        }
       : { depth: 20, salinity: 37, temperature: 20, currentSpeed: 0.15 },
     diffuser: over.ports
       ? { portCount: over.ports, portDiameter: 0.3, portAngle: 90, portHeight: 1, portSpacing: over.spacing ?? 5 }
       : { portCount: 1, portDiameter: 0.5, portAngle: 90, portHeight: 1 },
-    mixingZone: { radius: 100, limits: [{ constituent: "salinity", maxIncrease: 1 }, { constituent: "temperature", maxIncrease: 2 }] },
+    mixingZone: {
+      radius: 100,
+      limits: [
+        { constituent: "salinity", maxIncrease: 1 },
+        { constituent: "temperature", maxIncrease: 2 },
+      ],
+    },
   };
 }
 function scenarioOf(raw: unknown) {

@@ -43,7 +43,10 @@ describe("parseScenario()", () => {
     expect(r.ok, "psu salinity parses").toBe(true);
     if (!r.ok) return;
     assertRelative(r.scenario.ambient.profile[0]!.salinity, 35.16504, 1e-12, "35 psu → 35.16504 g/kg");
-    expect(r.scenario.conversions.some((c) => c.includes("practical salinity")), "the conversion is reported").toBe(true);
+    expect(
+      r.scenario.conversions.some((c) => c.includes("practical salinity")),
+      "the conversion is reported",
+    ).toBe(true);
   });
 
   it("converts total dissolved solids in mg/L through density and says so", () => {
@@ -55,30 +58,60 @@ describe("parseScenario()", () => {
     // g/kg = (mg/L)/(kg/m³); brine near 1050 kg/m³ → about 64.8 g/kg (definition of the units).
     const s = r.scenario.discharge.salinity;
     expect(s > 63 && s < 66.5, `68000 mg/L should be about 64–66 g/kg, got ${s}`).toBe(true);
-    expect(r.scenario.conversions.some((c) => c.includes("total dissolved solids")), "the conversion is reported").toBe(true);
+    expect(
+      r.scenario.conversions.some((c) => c.includes("total dissolved solids")),
+      "the conversion is reported",
+    ).toBe(true);
   });
 
   it("rejects bad inputs with the path, the value given and what is expected", () => {
     const cases: [string, (o: any) => void, RegExp][] = [
-      ["negative diameter", (o) => (o.diffuser.portDiameter = "-0.2 m"), /^diffuser\.portDiameter: "-0\.2 m" must be a port diameter from/],
+      [
+        "negative diameter",
+        (o) => (o.diffuser.portDiameter = "-0.2 m"),
+        /^diffuser\.portDiameter: "-0\.2 m" must be a port diameter from/,
+      ],
       ["missing field", (o) => delete o.diffuser.portDiameter, /^diffuser\.portDiameter: is missing/],
       ["wrong type", (o) => (o.diffuser.portAngle = true), /^diffuser\.portAngle: true must be/],
-      ["unknown unit", (o) => (o.discharge.flow = "3 furlongs"), /^discharge\.flow: "3 furlongs" has a unit Brinefield does not know/],
+      [
+        "unknown unit",
+        (o) => (o.discharge.flow = "3 furlongs"),
+        /^discharge\.flow: "3 furlongs" has a unit Brinefield does not know/,
+      ],
       ["negative flow", (o) => (o.discharge.flow = -1), /^discharge\.flow: -1 must be a positive total brine flow/],
       ["angle out of range", (o) => (o.diffuser.portAngle = 120), /^diffuser\.portAngle: 120 must be a port angle/],
-      ["depth smaller than port height", (o) => (o.ambient.depth = 1), /^diffuser\.portHeight: 1\.5 must leave the port below the surface/],
+      [
+        "depth smaller than port height",
+        (o) => (o.ambient.depth = 1),
+        /^diffuser\.portHeight: 1\.5 must leave the port below the surface/,
+      ],
       ["NaN", (o) => (o.discharge.flow = Number.NaN), /^discharge\.flow: NaN must be/],
-      ["absurd port count", (o) => (o.diffuser.portCount = 1e308), /^diffuser\.portCount: 1e\+308 must be a whole number of ports from 1 to 1000/],
+      [
+        "absurd port count",
+        (o) => (o.diffuser.portCount = 1e308),
+        /^diffuser\.portCount: 1e\+308 must be a whole number of ports from 1 to 1000/,
+      ],
       ["misspelt field", (o) => (o.diffuser.portDiamter = 0.2), /^diffuser\.portDiamter: 0\.2 is not a field/],
       ["wrong unit kind", (o) => (o.ambient.depth = "3 kg"), /^ambient\.depth: "3 kg" is not a length/],
-      ["unknown constituent in a limit", (o) => (o.mixingZone.limits[0].constituent = "boron"), /^mixingZone\.limits\.0\.constituent: "boron"/],
-      ["flow split of the wrong length", (o) => (o.diffuser.flowSplit = [1, 2]), /^diffuser\.flowSplit: "2 values" must list one share per port \(24\)/],
+      [
+        "unknown constituent in a limit",
+        (o) => (o.mixingZone.limits[0].constituent = "boron"),
+        /^mixingZone\.limits\.0\.constituent: "boron"/,
+      ],
+      [
+        "flow split of the wrong length",
+        (o) => (o.diffuser.flowSplit = [1, 2]),
+        /^diffuser\.flowSplit: "2 values" must list one share per port \(24\)/,
+      ],
     ];
     for (const [what, mutate, pattern] of cases) {
       const raw = shelf();
       mutate(raw);
       const ms = messages(raw);
-      expect(ms.some((m) => pattern.test(m)), `${what}: got ${JSON.stringify(ms)}`).toBe(true);
+      expect(
+        ms.some((m) => pattern.test(m)),
+        `${what}: got ${JSON.stringify(ms)}`,
+      ).toBe(true);
     }
   });
 
@@ -118,9 +151,12 @@ describe("parseScenario()", () => {
     const reordered = Object.fromEntries(Object.entries(shelf()).reverse());
     const changed = shelf();
     changed.diffuser.portAngle = 45;
-    const [h, hRenamed, hReordered, hChanged] = [a, parseScenario(renamed), parseScenario(reordered), parseScenario(changed)].map((r) =>
-      r.ok ? inputsHash(r.scenario) : "",
-    );
+    const [h, hRenamed, hReordered, hChanged] = [
+      a,
+      parseScenario(renamed),
+      parseScenario(reordered),
+      parseScenario(changed),
+    ].map((r) => (r.ok ? inputsHash(r.scenario) : ""));
     expect(hRenamed, "renaming keeps the hash").toBe(h);
     expect(hReordered, "key order keeps the hash").toBe(h);
     expect(hChanged, "a changed angle changes the hash").not.toBe(h);
@@ -128,7 +164,9 @@ describe("parseScenario()", () => {
 
   it("keeps the exported JSON Schema file in step with the schema", () => {
     const onDisk = JSON.parse(readFileSync(join(root, "core/scenario/scenario.schema.json"), "utf8"));
-    expect(onDisk, "run `npx brinefield schema --out core/scenario/scenario.schema.json`").toEqual(scenarioJsonSchema());
+    expect(onDisk, "run `npx brinefield schema --out core/scenario/scenario.schema.json`").toEqual(
+      scenarioJsonSchema(),
+    );
   });
 
   it("freezes the normalised scenario", () => {

@@ -3,7 +3,13 @@ import { describe, expect, it } from "vitest";
 import { readFileSync } from "node:fs";
 import { join } from "node:path";
 import { parseScenario } from "../../../core/scenario/parse";
-import { caseWorkUnits, MAX_SWEEP_POINTS, MAX_WORK_UNITS, sweepPointsIssue, workIssue } from "../../../core/study/budget";
+import {
+  caseWorkUnits,
+  MAX_SWEEP_POINTS,
+  MAX_WORK_UNITS,
+  sweepPointsIssue,
+  workIssue,
+} from "../../../core/study/budget";
 import { MAX_RUNS, planMonteCarlo } from "../../../core/study/montecarlo";
 
 const raw = () => JSON.parse(readFileSync(join(__dirname, "../../../demo-scenarios/island-cove.json"), "utf8"));
@@ -26,7 +32,11 @@ describe("work caps", () => {
     const heavy = scenario((r) => {
       delete r.ambient.salinity;
       delete r.ambient.temperature;
-      r.ambient.profile = Array.from({ length: 500 }, (_, i) => ({ depth: (18 * i) / 499, salinity: 38.5, temperature: 24 - 0.01 * i }));
+      r.ambient.profile = Array.from({ length: 500 }, (_, i) => ({
+        depth: (18 * i) / 499,
+        salinity: 38.5,
+        temperature: 24 - 0.01 * i,
+      }));
       r.diffuser.portCount = 12;
     });
     expect(caseWorkUnits(heavy) / caseWorkUnits(plain), "heavy/plain").toBeGreaterThan(20);

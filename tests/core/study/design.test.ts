@@ -11,7 +11,13 @@ import {
   type DesignCandidate,
   type DesignConstraints,
 } from "../../../core/study/design";
-import { designOutcome, designDiffuserBlock, judgeDesign, shortList, compareDesigns } from "../../../core/study/design-rank";
+import {
+  designOutcome,
+  designDiffuserBlock,
+  judgeDesign,
+  shortList,
+  compareDesigns,
+} from "../../../core/study/design-rank";
 import { NOMINAL_SIZES_DN } from "../../../core/study/nominal-sizes";
 import { evaluatePoint } from "../../../core/study/evaluate-point";
 import { evaluateScenario } from "../../../core/study/evaluate";
@@ -31,7 +37,14 @@ describe("designCandidates()", () => {
   const s = scenarioFrom(fourPortRaw());
 
   it("keeps every candidate inside the velocity range, the diameter limits and the maximum length", () => {
-    const c = constraints(s, { minExitVelocity: "3 m/s", maxExitVelocity: 5, maxLength: 40, maxPorts: 8, minPortDiameter: 0.1, maxPortDiameter: "250 mm" });
+    const c = constraints(s, {
+      minExitVelocity: "3 m/s",
+      maxExitVelocity: 5,
+      maxLength: 40,
+      maxPorts: 8,
+      minPortDiameter: 0.1,
+      maxPortDiameter: "250 mm",
+    });
     const list = designCandidates(s, c);
     expect(list.length, "some candidates").toBeGreaterThan(20);
     for (const d of list) {
@@ -39,7 +52,9 @@ describe("designCandidates()", () => {
       const v = s.discharge.flow / d.portCount / ((Math.PI * d.portDiameter ** 2) / 4);
       expect(exitVelocity(s.discharge.flow, d.portCount, d.portDiameter, 1), "continuity").toBeCloseTo(v, 12);
       expect(v >= 3 - 1e-9 && v <= 5 + 1e-9, `velocity ${v} within 3–5 m/s`).toBe(true);
-      expect(d.portDiameter >= 0.1 && d.portDiameter <= 0.25, `diameter ${d.portDiameter} within 0.1–0.25 m`).toBe(true);
+      expect(d.portDiameter >= 0.1 && d.portDiameter <= 0.25, `diameter ${d.portDiameter} within 0.1–0.25 m`).toBe(
+        true,
+      );
       expect(d.length <= 40, `length ${d.length} ≤ 40 m`).toBe(true);
       if (d.portCount > 1) expect(d.portSpacing, "ports do not overlap").toBeGreaterThan(d.portDiameter);
     }
@@ -93,7 +108,13 @@ describe("designCandidates()", () => {
     expect(plan.ok, "refused").toBe(false);
     if (plan.ok) return;
     expect(plan.count, "far over the cap").toBeGreaterThan(DESIGN_MAX_CANDIDATES);
-    for (const f of ["design.maxPorts", "design.diameterSteps", "design.spacingSteps", "design.portAngles", "design.portHeights"]) {
+    for (const f of [
+      "design.maxPorts",
+      "design.diameterSteps",
+      "design.spacingSteps",
+      "design.portAngles",
+      "design.portHeights",
+    ]) {
       expect(plan.message, `names ${f}`).toContain(f);
     }
     const small = planDesignSearch(s, constraints(s, { maxPorts: 4 }), 3);
@@ -112,7 +133,10 @@ describe("designCandidates()", () => {
 
 describe("design search (against the pipeline)", () => {
   const raw = fourPortRaw();
-  raw.ambientCases = [{ name: "spring tide", currentSpeed: 0.35 }, { name: "neap tide", currentSpeed: 0.05 }];
+  raw.ambientCases = [
+    { name: "spring tide", currentSpeed: 0.35 },
+    { name: "neap tide", currentSpeed: 0.05 },
+  ];
   const s = scenarioFrom(raw);
   const c = constraints(s, { maxPorts: 6, maxLength: 30, diameterSteps: 3, spacingSteps: 2 });
   const candidates = designCandidates(s, c);
@@ -122,7 +146,9 @@ describe("design search (against the pipeline)", () => {
 
   it("orders the short list by the stated rule: fewest ports, shortest, velocity nearest mid-band, margin", () => {
     expect(outcome.designs.length, "more than one design passes in this example").toBeGreaterThan(1);
-    expect(outcome.rankingRule, "the rule is stated").toMatch(/fewest ports.*shortest diffuser.*middle of the allowed band/);
+    expect(outcome.rankingRule, "the rule is stated").toMatch(
+      /fewest ports.*shortest diffuser.*middle of the allowed band/,
+    );
     const order = compareDesigns(c);
     for (let i = 1; i < outcome.ranked.length; i++) {
       expect(order(outcome.ranked[i - 1]!, outcome.ranked[i]!), `#${i} before #${i + 1}`).toBeLessThanOrEqual(0);
@@ -139,8 +165,12 @@ describe("design search (against the pipeline)", () => {
     for (const a of list) {
       for (const b of list) {
         if (a === b) continue;
-        const same = a.candidate.portCount === b.candidate.portCount && a.candidate.portDiameter === b.candidate.portDiameter && a.candidate.portAngle === b.candidate.portAngle;
-        if (same && a.rank < b.rank) expect(b.worstMargin, `#${b.rank} is a longer #${a.rank} with more margin`).toBeGreaterThan(a.worstMargin);
+        const same =
+          a.candidate.portCount === b.candidate.portCount &&
+          a.candidate.portDiameter === b.candidate.portDiameter &&
+          a.candidate.portAngle === b.candidate.portAngle;
+        if (same && a.rank < b.rank)
+          expect(b.worstMargin, `#${b.rank} is a longer #${a.rank} with more margin`).toBeGreaterThan(a.worstMargin);
       }
     }
   });
@@ -150,7 +180,10 @@ describe("design search (against the pipeline)", () => {
       const parsed = parseScenario({ ...raw, diffuser: d.diffuser });
       if (!parsed.ok) throw new Error(`design #${d.rank}: ${parsed.issues.map((i) => i.message).join("; ")}`);
       const cases = expandCases(parsed.scenario);
-      expect(cases.map((k) => k.name), "the stated conditions, spring, neap and slack water").toEqual(["stated", "spring tide", "neap tide", "slack water"]);
+      expect(
+        cases.map((k) => k.name),
+        "the stated conditions, spring, neap and slack water",
+      ).toEqual(["stated", "spring tide", "neap tide", "slack water"]);
       let worst = Infinity;
       for (const k of cases) {
         const r = runScenario(k.scenario);
@@ -162,7 +195,15 @@ describe("design search (against the pipeline)", () => {
   });
 
   it("a single-port design's block has no spacing and round-trips through the scenario format", () => {
-    const single: DesignCandidate = { portCount: 1, portDiameter: 0.2, portAngle: 60, portSpacing: 0, portHeight: 1, length: 0, exitVelocity: exitVelocity(0.25, 1, 0.2, 1) };
+    const single: DesignCandidate = {
+      portCount: 1,
+      portDiameter: 0.2,
+      portAngle: 60,
+      portSpacing: 0,
+      portHeight: 1,
+      length: 0,
+      exitVelocity: exitVelocity(0.25, 1, 0.2, 1),
+    };
     const block = designDiffuserBlock(single, s, raw.diffuser);
     expect(block.layout, "single layout").toBe("single");
     expect("portSpacing" in block, "no portSpacing for one port").toBe(false);
@@ -175,7 +216,10 @@ describe("design search (against the pipeline)", () => {
   });
 
   it("gives no design but the nearest miss, with what would close it, when nothing can meet the limit", () => {
-    const strictRaw: Record<string, unknown> = { ...fourPortRaw(), mixingZone: { radius: 5, limits: [{ constituent: "salinity", maxIncrease: 0.05 }] } };
+    const strictRaw: Record<string, unknown> = {
+      ...fourPortRaw(),
+      mixingZone: { radius: 5, limits: [{ constituent: "salinity", maxIncrease: 0.05 }] },
+    };
     const strict = scenarioFrom(strictRaw);
     const cs = constraints(strict, { maxPorts: 3, diameterSteps: 2 });
     const cands = designCandidates(strict, cs);
@@ -188,6 +232,9 @@ describe("design search (against the pipeline)", () => {
     const best = Math.max(...pts.map((p) => p.cases[p.worst]!.summary.margin));
     expect(m.design.worstMargin, "the highest margin of all candidates").toBe(best);
     expect(m.dilutionShortfall, "shortfall = required margin ÷ margin").toBeCloseTo(1 / best, 12);
-    expect(m.toClose.map((t) => t.field), "at the port-count bound").toContain("design.maxPorts");
+    expect(
+      m.toClose.map((t) => t.field),
+      "at the port-count bound",
+    ).toContain("design.maxPorts");
   });
 });

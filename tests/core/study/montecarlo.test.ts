@@ -38,7 +38,12 @@ describe("Monte Carlo — closed-form cases (identity-like output)", () => {
       { path: "ambient.currentSpeed", distribution: "uniform", min: 0.1, max: 0.5 },
     ]);
     const pl = plan(s, 20_000, 11);
-    const r = run(s, pl, identityEvaluator(0.2, (x) => x.ambient.currentSpeed), 1);
+    const r = run(
+      s,
+      pl,
+      identityEvaluator(0.2, (x) => x.ambient.currentSpeed),
+      1,
+    );
     assertInDelta(
       [r.cases[0]!.edgeDilution.p5, r.cases[0]!.edgeDilution.p50, r.cases[0]!.edgeDilution.p95],
       [0.12, 0.3, 0.48],
@@ -57,7 +62,12 @@ describe("Monte Carlo — closed-form cases (identity-like output)", () => {
       { path: "discharge.salinity", distribution: "normal", mean: 65, sd: 1.5 },
     ]);
     const pl = plan(s, 20_000, 3);
-    const r = run(s, pl, identityEvaluator(66, (x) => x.discharge.salinity), 1);
+    const r = run(
+      s,
+      pl,
+      identityEvaluator(66, (x) => x.discharge.salinity),
+      1,
+    );
     const e = r.cases[0]!.edgeDilution;
     assertInDelta([e.p5, e.p50, e.p95], [62.5327, 65, 67.4673], 0.05, "percentiles of a normal input");
     // P(X < 66) = Φ((66 − 65)/1.5) = Φ(0.6667) = 0.7475 (NormalDist().cdf).
@@ -70,7 +80,12 @@ describe("Monte Carlo — closed-form cases (identity-like output)", () => {
     const s = withUncertainty({ options: { addSlackWater: false } }, [
       { path: "ambient.currentSpeed", distribution: "lognormal", median: 0.1, gsd: 2 },
     ]);
-    const r = run(s, plan(s, 20_000, 5), identityEvaluator(1, (x) => x.ambient.currentSpeed), 1);
+    const r = run(
+      s,
+      plan(s, 20_000, 5),
+      identityEvaluator(1, (x) => x.ambient.currentSpeed),
+      1,
+    );
     const e = r.cases[0]!.edgeDilution;
     assertInDelta([e.p5, e.p50, e.p95], [0.031981, 0.1, 0.31268], 0.0045, "percentiles of a lognormal input");
   });
@@ -81,7 +96,12 @@ describe("Monte Carlo — closed-form cases (identity-like output)", () => {
     const s = withUncertainty({ options: { addSlackWater: false } }, [
       { path: "discharge.flow", distribution: "triangular", min: 0.2, mode: 0.25, max: 0.3 },
     ]);
-    const r = run(s, plan(s, 20_000, 8), identityEvaluator(1, (x) => x.discharge.flow), 1);
+    const r = run(
+      s,
+      plan(s, 20_000, 8),
+      identityEvaluator(1, (x) => x.discharge.flow),
+      1,
+    );
     const e = r.cases[0]!.edgeDilution;
     const expected = [0.215811, 0.25, 0.284189];
     assertInDelta([e.p5, e.p50, e.p95], expected, 0.0012, "percentiles of a triangular input");
@@ -151,15 +171,16 @@ describe("Monte Carlo — against the pipeline", () => {
     const pl = plan(s, 5, 77);
     const r = run(s, pl, evaluateScenario, 2);
     const cases = expandCases(s);
-    expect(r.cases.map((c) => c.name), "cases in order, slack water added").toEqual(cases.map((c) => c.name));
+    expect(
+      r.cases.map((c) => c.name),
+      "cases in order, slack water added",
+    ).toEqual(cases.map((c) => c.name));
     cases.forEach((c, i) => {
       const det = evaluateScenario(c.scenario);
       const e = r.cases[i]!.edgeDilution;
       const d = det.edgeDilution;
       expect([e.p5, e.p50, e.p95], `${c.name}: every run equals the deterministic run`).toEqual([d, d, d]);
-      expect(r.cases[i]!.probabilityOfExceedance, `case ${c.name}: exceedance is 0 or 1`).toBe(
-        det.pass ? 0 : 1,
-      );
+      expect(r.cases[i]!.probabilityOfExceedance, `case ${c.name}: exceedance is 0 or 1`).toBe(det.pass ? 0 : 1);
     });
   });
 
@@ -168,7 +189,10 @@ describe("Monte Carlo — against the pipeline", () => {
     const pl = plan(s, 3, 1);
     expect(pl.usedDefaultSpreads, "defaults used").toBe(true);
     expect(pl.notes[0], "the note says defaults were used").toMatch(/default spreads/);
-    expect(pl.distributions.map((d) => d.path), "the five default inputs").toEqual([
+    expect(
+      pl.distributions.map((d) => d.path),
+      "the five default inputs",
+    ).toEqual([
       "ambient.currentSpeed",
       "ambient.salinity",
       "ambient.temperature",
@@ -186,7 +210,10 @@ describe("Monte Carlo — against the pipeline", () => {
       seen.push(x.ambient.currentDirection);
       return identityEvaluator(1, () => 1)(x);
     });
-    expect(seen.every((d) => d >= 0 && d < 360), "directions stay in [0, 360)").toBe(true);
+    expect(
+      seen.every((d) => d >= 0 && d < 360),
+      "directions stay in [0, 360)",
+    ).toBe(true);
     // Half of U(340, 380) lies past 360° and wraps to [0, 20): about 200 of 400 draws (binomial sd 10).
     const wrapped = seen.filter((d) => d < 20).length;
     expect(Math.abs(wrapped - 200), `wrapped draws ${wrapped}`).toBeLessThan(50);
@@ -211,7 +238,10 @@ describe("Monte Carlo — equation of state", () => {
     const summary = run(s, pl, evaluateScenario, 2);
     const names = Object.keys(summary.equationsOfState).sort();
     expect(names, "both equations of state were used").toEqual(["Sharqawy 2010 + Nayar 2016", "TEOS-10"]);
-    expect(summary.notes.some((n) => /equation of state changes between runs/.test(n)), "a note says so").toBe(true);
+    expect(
+      summary.notes.some((n) => /equation of state changes between runs/.test(n)),
+      "a note says so",
+    ).toBe(true);
   });
 
   it("adds no note when every run uses one equation of state", () => {
@@ -220,6 +250,9 @@ describe("Monte Carlo — equation of state", () => {
     ]);
     const summary = run(s, plan(s, 10, 5), evaluateScenario, 1);
     expect(Object.keys(summary.equationsOfState).length, "one equation").toBe(1);
-    expect(summary.notes.some((n) => /equation of state changes/.test(n)), "no crossing note").toBe(false);
+    expect(
+      summary.notes.some((n) => /equation of state changes/.test(n)),
+      "no crossing note",
+    ).toBe(false);
   });
 });

@@ -17,12 +17,8 @@ describe("withOverrides()", () => {
       "diffuser.portCount": 6,
     });
     expect(patched.ambient, "ambient and its two-point profile follow the overrides").toEqual(reread.ambient);
-    expect(patched.diffuser.flowSplit, "equal split over the new port count").toEqual(
-      reread.diffuser.flowSplit,
-    );
-    expect(patched.diffuser.length, "length follows port count × spacing").toBeCloseTo(
-      reread.diffuser.length, 12,
-    );
+    expect(patched.diffuser.flowSplit, "equal split over the new port count").toEqual(reread.diffuser.flowSplit);
+    expect(patched.diffuser.length, "length follows port count × spacing").toBeCloseTo(reread.diffuser.length, 12);
   });
 
   it("keeps nominal and effective diameters consistent through the contraction coefficient", () => {
@@ -54,9 +50,10 @@ describe("withOverrides()", () => {
     ];
     const s = scenarioFrom(raw);
     const p = withOverrides(s, { "ambient.salinity": 37, "ambient.temperature": 17 });
-    expect(p.ambient.profile.map((q) => q.salinity), "salinity shifted by +1 g/kg at every depth").toEqual(
-      [36, 37],
-    );
+    expect(
+      p.ambient.profile.map((q) => q.salinity),
+      "salinity shifted by +1 g/kg at every depth",
+    ).toEqual([36, 37]);
     expect(
       p.ambient.profile.map((q) => q.temperature),
       "temperature shifted by −1 °C at every depth",
@@ -71,13 +68,26 @@ describe("withOverrides()", () => {
 
   it("applies an ambient override to the stated ambient and every case that does not set the field, leaving the input untouched", () => {
     const raw = fourPortRaw();
-    raw.ambientCases = [{ name: "spring", currentSpeed: 0.3 }, { name: "neap", currentSpeed: 0.05 }, { name: "deep", depth: 30 }];
+    raw.ambientCases = [
+      { name: "spring", currentSpeed: 0.3 },
+      { name: "neap", currentSpeed: 0.05 },
+      { name: "deep", depth: 30 },
+    ];
     const s = scenarioFrom(raw);
     const p = withOverrides(s, { "ambient.currentSpeed": 0.2, "ambient.depth": 12 });
     expect(p.ambient.currentSpeed, "the stated conditions take the override").toBe(0.2);
-    expect(p.ambientCases.map((c) => c.currentSpeed), "cases that set their current keep it; the others follow").toEqual([0.3, 0.05, 0.2]);
-    expect(p.ambientCases.map((c) => c.depth), "only the case that sets its depth keeps it").toEqual([12, 12, 30]);
-    expect(s.ambientCases.map((c) => c.currentSpeed), "the original is unchanged").toEqual([0.3, 0.05, s.ambient.currentSpeed]);
+    expect(
+      p.ambientCases.map((c) => c.currentSpeed),
+      "cases that set their current keep it; the others follow",
+    ).toEqual([0.3, 0.05, 0.2]);
+    expect(
+      p.ambientCases.map((c) => c.depth),
+      "only the case that sets its depth keeps it",
+    ).toEqual([12, 12, 30]);
+    expect(
+      s.ambientCases.map((c) => c.currentSpeed),
+      "the original is unchanged",
+    ).toEqual([0.3, 0.05, s.ambient.currentSpeed]);
     expect(Object.isFrozen(p.diffuser), "the result is frozen like a parsed scenario").toBe(true);
   });
 
@@ -102,12 +112,15 @@ describe("withOverrides()", () => {
 
   it("rejects unknown paths and out-of-range or fractional values, naming the path", () => {
     expect(() => withOverrides(base, { "ambient.colour": 1 }), "unknown path").toThrow(/ambient\.colour/);
-    expect(() => withOverrides(base, { "diffuser.portCount": 2.5 }), "fractional count, in the file reader's words").toThrow(
-      "diffuser.portCount: 2.5 must be a whole number of ports from 1 to 1000",
-    );
+    expect(
+      () => withOverrides(base, { "diffuser.portCount": 2.5 }),
+      "fractional count, in the file reader's words",
+    ).toThrow("diffuser.portCount: 2.5 must be a whole number of ports from 1 to 1000");
     for (const key of ["constructor", "__proto__", "toString", "hasOwnProperty"]) {
       expect(() => withOverrides(base, { [key]: -100 }), `${key} is not a path`).toThrow(OverrideError);
-      expect(() => withOverrides(base, { [key]: -100 }), `${key} is named`).toThrow(`${key}: is not a path that can be varied`);
+      expect(() => withOverrides(base, { [key]: -100 }), `${key} is named`).toThrow(
+        `${key}: is not a path that can be varied`,
+      );
     }
     expect(() => withOverrides(base, { "ambient.currentSpeed": -1 }), "negative current").toThrow(
       /ambient\.currentSpeed/,

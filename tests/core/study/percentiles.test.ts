@@ -23,9 +23,11 @@ describe("quantile() — Hyndman & Fan definition 7", () => {
   it("returns a repeated value exactly (no rounding from interpolation)", () => {
     const x = new Array<number>(101).fill(0.1 + 0.2);
     const s = percentileSummary(x);
-    expect([s.p5, s.p50, s.p95], "a constant sample's percentiles are the constant").toEqual(
-      [0.1 + 0.2, 0.1 + 0.2, 0.1 + 0.2],
-    );
+    expect([s.p5, s.p50, s.p95], "a constant sample's percentiles are the constant").toEqual([
+      0.1 + 0.2,
+      0.1 + 0.2,
+      0.1 + 0.2,
+    ]);
   });
 
   it("drops NaN values and reports the count used", () => {

@@ -11,8 +11,20 @@ describe("Xoshiro128 (xoshiro128**)", () => {
     const seqA = Array.from({ length: 20 }, () => a.nextUint32());
     const seqB = Array.from({ length: 20 }, () => b.nextUint32());
     expect(seqA, "same seed and stream give the same sequence").toEqual(seqB);
-    const c = Array.from({ length: 20 }, ((r) => () => r.nextUint32())(new Xoshiro128(42, 8)));
-    const d = Array.from({ length: 20 }, ((r) => () => r.nextUint32())(new Xoshiro128(43, 7)));
+    const c = Array.from(
+      { length: 20 },
+      (
+        (r) => () =>
+          r.nextUint32()
+      )(new Xoshiro128(42, 8)),
+    );
+    const d = Array.from(
+      { length: 20 },
+      (
+        (r) => () =>
+          r.nextUint32()
+      )(new Xoshiro128(43, 7)),
+    );
     expect(c, "a different stream gives a different sequence").not.toEqual(seqA);
     expect(d, "a different seed gives a different sequence").not.toEqual(seqA);
   });

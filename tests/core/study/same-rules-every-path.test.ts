@@ -40,7 +40,13 @@ function withField(path: string, value: unknown, raw: Raw = fourPortRaw()): Raw 
 }
 
 function studyOf(base: Raw, overrides: Record<string, unknown>) {
-  const parsed = parseStudy({ format: "brinefield-study", version: 1, name: "t", base, variants: [{ name: "broken", overrides }] });
+  const parsed = parseStudy({
+    format: "brinefield-study",
+    version: 1,
+    name: "t",
+    base,
+    variants: [{ name: "broken", overrides }],
+  });
   if (!parsed.ok) throw new Error(parsed.issues.map((i) => i.message).join("; "));
   const v = studyVariants(parsed.study, base, parseScenario);
   if (!v.ok) throw new Error(v.issues.map((i) => i.message).join("; "));
@@ -70,7 +76,10 @@ describe("the same broken input gets the same message from every path, never a p
       const broken = variants.find((v) => v.name === "broken")!;
       expect(broken.refused, "study variant refused with run's messages").toEqual(messages);
       const rows = compareVariant(broken, evaluateScenario);
-      expect(rows.map((r) => r.verdict), "one refused row").toEqual(["refused"]);
+      expect(
+        rows.map((r) => r.verdict),
+        "one refused row",
+      ).toEqual(["refused"]);
       expect(flattenRow(rows[0]!).error, "the row carries the message").toBe(messages.join("; "));
     });
   }
@@ -83,7 +92,8 @@ describe("the same broken input gets the same message from every path, never a p
     if (!planned.ok) throw new Error("plan");
     const chunk = runMonteCarloChunk(s, planned.plan, 0, 20, evaluateScenario);
     const drawn = samplesForRun(planned.plan, 0)[0]!;
-    for (const m of runMessages(withField("ambient.depth", drawn))) expect(chunk.firstError, "run 0's message").toContain(m);
+    for (const m of runMessages(withField("ambient.depth", drawn)))
+      expect(chunk.firstError, "run 0's message").toContain(m);
     const summary = summariseMonteCarlo(planned.plan, [chunk]);
     expect(summary.worstCase.verdicts.refused, "every draw refused").toBe(20);
     expect(summary.worstCase.verdicts.meets, "never a pass").toBe(0);
@@ -95,7 +105,10 @@ describe("the same broken input gets the same message from every path, never a p
 
   it("a design candidate with a 5 mm port or a port at the surface: refused with run's message", () => {
     const c = defaultConstraints(base);
-    for (const [field, value] of [["portDiameter", 0.005], ["portHeight", 15]] as const) {
+    for (const [field, value] of [
+      ["portDiameter", 0.005],
+      ["portHeight", 15],
+    ] as const) {
       const candidate: DesignCandidate = {
         portCount: 4,
         portDiameter: 0.12,
@@ -109,7 +122,8 @@ describe("the same broken input gets the same message from every path, never a p
       const p = evaluatePoint(base, candidateOverrides(candidate), evaluateScenario);
       const verdict = judgeDesign(candidate, p, c);
       expect(verdict.ok, `${field} ${value}: never kept`).toBe(false);
-      for (const m of runMessages(withField(`diffuser.${field}`, value))) expect(verdict.reasons.join(" "), `${field}: run's message`).toContain(m);
+      for (const m of runMessages(withField(`diffuser.${field}`, value)))
+        expect(verdict.reasons.join(" "), `${field}: run's message`).toContain(m);
     }
   });
 
@@ -117,7 +131,9 @@ describe("the same broken input gets the same message from every path, never a p
     const raw = fourPortRaw();
     raw.ambientCases = [{ name: "low water", depth: 0.8 }];
     const messages = runMessages(raw);
-    expect(messages.join(" "), "names the case's depth").toMatch(/^ambientCases\.0\.depth: 0\.8 must leave the port below the surface in ambient case "low water"/);
+    expect(messages.join(" "), "names the case's depth").toMatch(
+      /^ambientCases\.0\.depth: 0\.8 must leave the port below the surface in ambient case "low water"/,
+    );
     const okRaw = fourPortRaw();
     okRaw.ambientCases = [{ name: "low water", depth: 12 }];
     const broken = studyOf(okRaw, { "ambientCases.0.depth": 0.8 }).find((v) => v.name === "broken")!;
@@ -132,7 +148,10 @@ describe("the same broken input gets the same message from every path, never a p
       expect(sortRows([{ variant: "a", margin: 1 }], key), `--sort ${key} is no column`).toBeNull();
     }
     const t0 = Date.now();
-    expect(() => studyOf(fourPortRaw(), { "mixingZone.limits.99999999.maxIncrease": 1 }), "index beyond the array").toThrow(
+    expect(
+      () => studyOf(fourPortRaw(), { "mixingZone.limits.99999999.maxIncrease": 1 }),
+      "index beyond the array",
+    ).toThrow(
       /^variants\.0 \(broken\): mixingZone\.limits\.99999999\.maxIncrease: index 99999999 is beyond mixingZone\.limits, which has 1 entry/,
     );
     expect(Date.now() - t0, "refused without building the array").toBeLessThan(2000);
@@ -148,7 +167,13 @@ describe("two sites whose ambient cases set their own water", () => {
     { name: "storm", currentSpeed: 0.6 },
   ];
   const siteB = { "ambient.depth": 30, "ambient.currentSpeed": 0.3, "ambient.temperature": 12 };
-  const parsed = parseStudy({ format: "brinefield-study", version: 1, name: "two sites", base, variants: [{ name: "site B", overrides: siteB }] });
+  const parsed = parseStudy({
+    format: "brinefield-study",
+    version: 1,
+    name: "two sites",
+    base,
+    variants: [{ name: "site B", overrides: siteB }],
+  });
   if (!parsed.ok) throw new Error("study");
   const v = studyVariants(parsed.study, base, parseScenario);
   if (!v.ok) throw new Error("variants");
@@ -157,11 +182,17 @@ describe("two sites whose ambient cases set their own water", () => {
 
   it("gives different rows for different sites, in every case that does not set the changed field", () => {
     for (const c of ["stated", "summer", "storm", "slack water"]) {
-      expect(row("site B", c).summary!.edgeDilution, `${c}: site B differs from site A`).not.toBe(row("base", c).summary!.edgeDilution);
+      expect(row("site B", c).summary!.edgeDilution, `${c}: site B differs from site A`).not.toBe(
+        row("base", c).summary!.edgeDilution,
+      );
     }
     const notes = row("site B", "overall").notes ?? [];
-    expect(notes.join(" "), "says the summer case keeps its own temperature").toMatch(/Case "summer" keeps its own value, set in ambientCases, for ambient\.temperature/);
-    expect(notes.join(" "), "and the storm its own current").toMatch(/Case "storm" keeps its own value, set in ambientCases, for ambient\.currentSpeed/);
+    expect(notes.join(" "), "says the summer case keeps its own temperature").toMatch(
+      /Case "summer" keeps its own value, set in ambientCases, for ambient\.temperature/,
+    );
+    expect(notes.join(" "), "and the storm its own current").toMatch(
+      /Case "storm" keeps its own value, set in ambientCases, for ambient\.currentSpeed/,
+    );
   });
 
   it("compare, the report and run agree on the same inputs", () => {
@@ -169,18 +200,23 @@ describe("two sites whose ambient cases set their own water", () => {
       const r = runScenario(variant.scenario!);
       for (const k of r.cases) {
         const cr = row(variant.name, k.name);
-        expect(cr.summary!.edgeDilution, `${variant.name}/${k.name}: compare's edge dilution is run's`).toBe(k.edgeDilution);
+        expect(cr.summary!.edgeDilution, `${variant.name}/${k.name}: compare's edge dilution is run's`).toBe(
+          k.edgeDilution,
+        );
         expect(cr.verdict, `${variant.name}/${k.name}: same verdict`).toBe(k.verdict);
       }
       const o = row(variant.name, "overall");
-      expect([o.governingCase, o.verdict, o.summary!.margin], `${variant.name}: compare's overall row is run's overall`).toEqual([
-        r.overall.governingCase,
-        r.overall.verdict,
-        r.overall.margin,
-      ]);
+      expect(
+        [o.governingCase, o.verdict, o.summary!.margin],
+        `${variant.name}: compare's overall row is run's overall`,
+      ).toEqual([r.overall.governingCase, r.overall.verdict, r.overall.margin]);
       const html = reportHtml(r, { scenarioFile: null });
-      expect(html, `${variant.name}: the report's headline verdict is run's overall`).toContain(`data-verdict="${r.overall.verdict}"`);
-      expect(html, `${variant.name}: the report names the governing case and its margin`).toContain(`${r.overall.governingCase}</strong>, margin <strong data-path="overall.margin">${reportNumber(r.overall.margin)}`);
+      expect(html, `${variant.name}: the report's headline verdict is run's overall`).toContain(
+        `data-verdict="${r.overall.verdict}"`,
+      );
+      expect(html, `${variant.name}: the report names the governing case and its margin`).toContain(
+        `${r.overall.governingCase}</strong>, margin <strong data-path="overall.margin">${reportNumber(r.overall.margin)}`,
+      );
     }
   });
 });

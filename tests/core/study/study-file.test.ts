@@ -64,9 +64,10 @@ describe("studyVariants() and compareVariant()", () => {
     if (!parsed.ok) throw new Error("study should parse");
     const v = studyVariants(parsed.study, study.base, parseScenario);
     if (!v.ok) throw new Error(v.issues.map((i) => i.message).join("; "));
-    expect(v.variants.map((x) => x.name), "base first, then the variants").toEqual(
-      ["base", "deeper", "six ports"],
-    );
+    expect(
+      v.variants.map((x) => x.name),
+      "base first, then the variants",
+    ).toEqual(["base", "deeper", "six ports"]);
     expect(v.variants[1]!.scenario!.ambient.depth, "25 m").toBe(25);
     expect(v.variants[1]!.scenario!.ambientCases[0]!.depth, "the case inherits the variant's depth").toBe(25);
     expect(v.variants[2]!.scenario!.diffuser.length, "6 ports × 5 m spacing → 25 m").toBe(25);
@@ -83,18 +84,30 @@ describe("studyVariants() and compareVariant()", () => {
     expect(bad.scenario, "no scenario to compute").toBeNull();
     expect(bad.refused!.join(" "), "the path named").toMatch(/^diffuser\.portCount: 0 must be a whole number of ports/);
     const rows = compareVariant(bad, evaluateScenario);
-    expect(rows.map((r) => r.verdict), "one refused row, never a pass").toEqual(["refused"]);
+    expect(
+      rows.map((r) => r.verdict),
+      "one refused row, never a pass",
+    ).toEqual(["refused"]);
   });
 
   it("refuses override paths that are not own fields of the scenario format, or indices beyond the array", () => {
-    for (const path of ["constructor", "__proto__.x", "ambient.toString", "ambient.hasOwnProperty", "mixingZone.limits.99999999.maxIncrease", "ambient.colour"]) {
+    for (const path of [
+      "constructor",
+      "__proto__.x",
+      "ambient.toString",
+      "ambient.hasOwnProperty",
+      "mixingZone.limits.99999999.maxIncrease",
+      "ambient.colour",
+    ]) {
       const study = good();
       study.variants[1]!.overrides = { [path]: 1 } as never;
       const parsed = parseStudy(study);
       if (!parsed.ok) continue; // the study schema itself refuses some of these
       const v = studyVariants(parsed.study, study.base, parseScenario);
       expect(v.ok, `${path} refused`).toBe(false);
-      expect(v.ok ? "" : v.issues[0]!.message, `${path}: variant and path named`).toContain(`variants.1 (six ports): ${path}:`);
+      expect(v.ok ? "" : v.issues[0]!.message, `${path}: variant and path named`).toContain(
+        `variants.1 (six ports): ${path}:`,
+      );
     }
   });
 
@@ -104,7 +117,10 @@ describe("studyVariants() and compareVariant()", () => {
     const v = studyVariants(parsed.study, good().base, parseScenario);
     if (!v.ok) throw new Error("variants should parse");
     const rows = v.variants.flatMap((x) => compareVariant(x, evaluateScenario));
-    expect(rows.map((r) => `${r.variant}/${r.case}`), "stated, slack water, overall per variant").toEqual([
+    expect(
+      rows.map((r) => `${r.variant}/${r.case}`),
+      "stated, slack water, overall per variant",
+    ).toEqual([
       "base/stated",
       "base/slack water",
       "base/overall",
@@ -128,9 +144,7 @@ describe("studyVariants() and compareVariant()", () => {
     );
     const sorted = sortRows(flat, "-margin")!;
     for (let i = 1; i < sorted.length; i++) {
-      expect((sorted[i - 1]!.margin as number) >= (sorted[i]!.margin as number), "descending margin").toBe(
-        true,
-      );
+      expect((sorted[i - 1]!.margin as number) >= (sorted[i]!.margin as number), "descending margin").toBe(true);
     }
     expect(sortRows(flat, "nonsense"), "unknown column").toBeNull();
   });

@@ -66,11 +66,13 @@ describe("fractions as percentages", () => {
 
 describe("a scenario written in the trade's units", () => {
   const root = join(__dirname, "../../..");
-  const base = () => JSON.parse(readFileSync(join(root, "demo-scenarios", "island-cove.json"), "utf8")) as Record<string, any>;
+  const base = () =>
+    JSON.parse(readFileSync(join(root, "demo-scenarios", "island-cove.json"), "utf8")) as Record<string, any>;
 
   it("accepts 150000 m3/d product flow at 45 % recovery and gives the same brine as SI numbers", () => {
     // A large plant needs a long diffuser: 20 ports of 0.25 m keep the exit velocity near 2 m/s.
-    const bigDiffuser = (raw: Record<string, any>) => Object.assign(raw.diffuser, { portCount: 20, portDiameter: 0.25, portSpacing: 6 });
+    const bigDiffuser = (raw: Record<string, any>) =>
+      Object.assign(raw.diffuser, { portCount: 20, portDiameter: 0.25, portSpacing: 6 });
     const typed = base();
     bigDiffuser(typed);
     typed.plant.productFlow = "150000 m3/d";
@@ -89,7 +91,12 @@ describe("a scenario written in the trade's units", () => {
     // Brine flow Qb = Qp (1 − r)/r (plant mass balance, common practice, no source).
     assertRelative(a.scenario.discharge.flow, ((150_000 / DAY) * 0.55) / 0.45, 1e-12, "brine flow from the plant");
     assertRelative(a.scenario.discharge.flow, b.scenario.discharge.flow, 1e-12, "same brine flow either way");
-    assertRelative(a.scenario.discharge.salinity, b.scenario.discharge.salinity, 1e-12, "same brine salinity either way");
+    assertRelative(
+      a.scenario.discharge.salinity,
+      b.scenario.discharge.salinity,
+      1e-12,
+      "same brine salinity either way",
+    );
   });
 
   it("accepts 40 MLD as a brine flow", () => {

@@ -20,12 +20,18 @@ describe("validationTable()", () => {
       expect(["original", "quoted"], "mark").toContain(p.mark);
       expect(p.ratio, "ratio = model ÷ published").toBeCloseTo(p.model / p.published, 12);
     }
-    expect(table.points.filter((p) => p.mark === "original").length, "points read in Lai & Lee (2012)").toBeGreaterThanOrEqual(8);
+    expect(
+      table.points.filter((p) => p.mark === "original").length,
+      "points read in Lai & Lee (2012)",
+    ).toBeGreaterThanOrEqual(8);
   });
 
   it("covers every published point with at least the integral model", () => {
     for (const p of PUBLISHED_LAB_POINTS) {
-      const hit = table.points.find((q) => q.method === "integral" && q.quantity === p.quantity && q.angle === p.angle && q.published === p.published);
+      const hit = table.points.find(
+        (q) =>
+          q.method === "integral" && q.quantity === p.quantity && q.angle === p.angle && q.published === p.published,
+      );
       expect(hit, `${p.quantity} ${p.published} at ${p.angle}° (${p.source})`).toBeDefined();
     }
   });
@@ -34,8 +40,14 @@ describe("validationTable()", () => {
     expect(validationBand("integral", "maxRiseHeight"), "rise").toEqual([0.75, 1.0]);
     expect(validationBand("integral", "maxRiseDilution"), "dilution at maximum rise").toEqual([0.55, 0.85]);
     expect(validationBand("integral", "impactDilution"), "impact dilution under-predicted").toEqual([0.55, 1.0]);
-    expect(validationBand("length-scale", "impactDilution"), "conservative headline never above a published value").toEqual([0.6, 1.0]);
-    expect(validationBand("length-scale", "maxRiseHeight"), "conservative headline never below a published rise").toEqual([1.0, 1.1]);
+    expect(
+      validationBand("length-scale", "impactDilution"),
+      "conservative headline never above a published value",
+    ).toEqual([0.6, 1.0]);
+    expect(
+      validationBand("length-scale", "maxRiseHeight"),
+      "conservative headline never below a published rise",
+    ).toEqual([1.0, 1.1]);
   });
 
   for (const p of table.points) {
@@ -47,7 +59,10 @@ describe("validationTable()", () => {
   }
 
   it("the integral model's impact dilution falls short of Lai & Lee's 1.06 F more at 38° than at 60° (the stated angle dependence)", () => {
-    const at = (a: number) => table.points.find((p) => p.method === "integral" && p.quantity === "impactDilution" && p.angle === a && p.published === 1.06)!;
+    const at = (a: number) =>
+      table.points.find(
+        (p) => p.method === "integral" && p.quantity === "impactDilution" && p.angle === a && p.published === 1.06,
+      )!;
     expect(at(38).ratio, "38° below 60°").toBeLessThan(at(60).ratio);
   });
 });

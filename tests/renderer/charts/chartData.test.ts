@@ -1,6 +1,11 @@
 /** Chart series are core's arrays in display units; nothing is recomputed. */
 import { describe, expect, it } from "vitest";
-import { distanceSeries, riseMarkers, salinityIncreaseLimit, trajectorySeries } from "../../../renderer/charts/chartData";
+import {
+  distanceSeries,
+  riseMarkers,
+  salinityIncreaseLimit,
+  trajectorySeries,
+} from "../../../renderer/charts/chartData";
 import { csvParseRows } from "d3-dsv";
 import { CAUTION } from "../../../core/result/contract";
 import { csvWithCaution, seriesCsv } from "../../../renderer/exports";
@@ -32,18 +37,25 @@ describe("riseMarkers()", () => {
     const impacts = riseMarkers(result, scenario, "si").filter((m) => m.label === "impact");
     const expected = result.nearField.filter((m) => m.impactDistance !== null).length;
     expect(impacts.length, "an impact marker per method that gives one").toBe(expected);
-    expect(impacts.every((m) => m.value === 0), "impact is on the bed").toBe(true);
+    expect(
+      impacts.every((m) => m.value === 0),
+      "impact is on the bed",
+    ).toBe(true);
   });
 });
 
 describe("distanceSeries() and seriesCsv()", () => {
   it("carries the mixing-zone series point for point", () => {
     const s = distanceSeries(result, "si");
-    expect(s.length, "same length as core's series").toBe(result.mixingZone.series.distance.filter((_, i) => result.mixingZone.series.dilution[i] > 0).length);
+    expect(s.length, "same length as core's series").toBe(
+      result.mixingZone.series.distance.filter((_, i) => result.mixingZone.series.dilution[i] > 0).length,
+    );
   });
   it("writes CSV with the same column keys as the CLI and the units in the header", () => {
     const csv = seriesCsv(result, "us");
-    expect(csv.split("\n")[0], "header").toBe("distance (ft),dilution (-),salinityIncrease (g/kg),layerThickness (ft),stage");
+    expect(csv.split("\n")[0], "header").toBe(
+      "distance (ft),dilution (-),salinityIncrease (g/kg),layerThickness (ft),stage",
+    );
     expect(csv.trim().split("\n").length, "a row per point").toBe(result.mixingZone.series.distance.length + 1);
   });
 });
@@ -61,7 +73,10 @@ describe("salinityIncreaseLimit()", () => {
     expect(salinityIncreaseLimit(result), "blank scenario allows 2 g/kg").toBe(2);
   });
   it("is null when there is no salinity limit", () => {
-    expect(salinityIncreaseLimit({ ...result, compliance: { ...result.compliance, constituents: [] } }), "no limit").toBeNull();
+    expect(
+      salinityIncreaseLimit({ ...result, compliance: { ...result.compliance, constituents: [] } }),
+      "no limit",
+    ).toBeNull();
   });
   it("follows the stricter of two salinity limits, as the verdict does", () => {
     // Blank scenario: discharge 70 g/kg into 38 g/kg water. "at most 2 above background" and "at most 39"
@@ -85,7 +100,7 @@ describe("salinityIncreaseLimit()", () => {
 });
 
 describe("csvWithCaution()", () => {
-  it("puts the result's caution, beginning \"Caution\", in the first row as one cell before the table", () => {
+  it('puts the result\'s caution, beginning "Caution", in the first row as one cell before the table', () => {
     const text = csvWithCaution(seriesCsv(result, "si"), result.caution);
     const rows = csvParseRows(text);
     expect(rows[0], "one cell holding the whole caution").toEqual([result.caution]);

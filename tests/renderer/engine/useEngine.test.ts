@@ -5,11 +5,26 @@
 import { readFileSync, readdirSync } from "node:fs";
 import { join } from "node:path";
 import { describe, expect, it } from "vitest";
-import { applyResponse, exportBlocked, issuesByPath, nextRequest, type EngineState } from "../../../renderer/engine/useEngine";
+import {
+  applyResponse,
+  exportBlocked,
+  issuesByPath,
+  nextRequest,
+  type EngineState,
+} from "../../../renderer/engine/useEngine";
 import { runFile, withoutPathPrefix } from "../../../renderer/engine/runFile";
 import { blankScenario } from "../../../renderer/state/scenarioState";
 
-const empty: EngineState = { result: null, scenario: null, issues: [], error: null, stale: false, running: true, ms: null, inWorker: true };
+const empty: EngineState = {
+  result: null,
+  scenario: null,
+  issues: [],
+  error: null,
+  stale: false,
+  running: true,
+  ms: null,
+  inWorker: true,
+};
 
 describe("runFile()", () => {
   it("runs a valid scenario through core and returns the result with the centreline path", () => {
@@ -25,8 +40,14 @@ describe("runFile()", () => {
     const response = runFile(1, file);
     expect(response.ok, "bad angle fails").toBe(false);
     if (response.ok) return;
-    expect(response.issues.map((i) => i.path), "issue at the field's path").toContain("diffuser.portAngle");
-    expect(response.issues.every((i) => !i.message.startsWith(`${i.path}: `)), "field messages do not repeat the path").toBe(true);
+    expect(
+      response.issues.map((i) => i.path),
+      "issue at the field's path",
+    ).toContain("diffuser.portAngle");
+    expect(
+      response.issues.every((i) => !i.message.startsWith(`${i.path}: `)),
+      "field messages do not repeat the path",
+    ).toBe(true);
   });
   it("reports a file that is not a scenario at all", () => {
     const response = runFile(1, "not an object");
@@ -86,10 +107,14 @@ describe("withoutPathPrefix() and issuesByPath()", () => {
     expect(run.ok, "a port above the surface is refused").toBe(false);
     if (run.ok) return;
     const byDepth = issuesByPath(run.issues, "ambient.depth");
-    expect(byDepth.get("ambient.depth")?.join(" "), "on the depth the user typed").toMatch(/^port height above the seabed 2 m: must leave the port below the surface/);
+    expect(byDepth.get("ambient.depth")?.join(" "), "on the depth the user typed").toMatch(
+      /^port height above the seabed 2 m: must leave the port below the surface/,
+    );
     expect(byDepth.has("diffuser.portHeight"), "not also on the port height").toBe(false);
     const byHeight = issuesByPath(run.issues, "diffuser.portHeight");
-    expect(byHeight.get("diffuser.portHeight")?.join(" "), "on the port height when that was typed").toMatch(/^2 must leave the port below the surface/);
+    expect(byHeight.get("diffuser.portHeight")?.join(" "), "on the port height when that was typed").toMatch(
+      /^2 must leave the port below the surface/,
+    );
     const unrelated = issuesByPath(run.issues, "mixingZone.radius");
     expect(unrelated.has("diffuser.portHeight"), "an unrelated edit leaves it at home").toBe(true);
   });

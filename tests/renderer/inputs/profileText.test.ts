@@ -23,9 +23,13 @@ describe("parseProfileText()", () => {
     expect(parsed.rows[0], "decimal comma read").toEqual({ depth: 0, salinity: 38.2, temperature: 24.5 });
   });
   it("names what is wrong: a missing column, a short row, a non-number", () => {
-    expect(parseProfileText("depth,salinity\n0,38").errors[0], "missing temperature column").toMatch(/no "temperature" column/);
+    expect(parseProfileText("depth,salinity\n0,38").errors[0], "missing temperature column").toMatch(
+      /no "temperature" column/,
+    );
     expect(parseProfileText("0,38,20\n10,38").errors, "short row").toContain("row 2 has 2 columns, expected 3");
-    expect(parseProfileText("0,38,20\n10,x,19").errors, "not a number").toContain('row 2: salinity "x" is not a number');
+    expect(parseProfileText("0,38,20\n10,x,19").errors, "not a number").toContain(
+      'row 2: salinity "x" is not a number',
+    );
   });
   it("needs at least two rows", () => {
     expect(parseProfileText("0,38,20").errors, "one row").toContain("a profile needs at least two rows");

@@ -25,7 +25,10 @@ describe("displayText()", () => {
   });
   it("converts a stored value with its own unit", () => {
     expect(displayText("8 in", "smallLength", "si"), "8 in = 0.2032 m").toBe("0.2032");
-    expect(displayText("0.5 knot", "speed", "si"), "0.5 kn = 926 m / 3600 s = 0.2572 m/s (1 kn = 1852 m/h, exact)").toBe("0.2572");
+    expect(
+      displayText("0.5 knot", "speed", "si"),
+      "0.5 kn = 926 m / 3600 s = 0.2572 m/s (1 kn = 1852 m/h, exact)",
+    ).toBe("0.2572");
   });
   it("shows unreadable stored text as it is, so the user sees what is wrong", () => {
     expect(displayText("12 parsecs per fortnight", "speed", "si"), "kept verbatim").toBe("12 parsecs per fortnight");
@@ -86,17 +89,38 @@ describe("fieldView(): values stay in the unit they were entered in, with SI bes
     expect(v.beside, "5000/86400 m³/s beside").toBe("= 0.05787 m³/s");
   });
   it("keeps MLD, L/s and percent", () => {
-    expect(fieldView("40 MLD", "flow", "si"), "40 MLD = 40 000 m³ / 86 400 s").toMatchObject({ text: "40", unit: "MLD", beside: "= 0.463 m³/s" });
-    expect(fieldView("300 L/s", "flow", "si"), "300 L/s").toMatchObject({ text: "300", unit: "L/s", beside: "= 0.3 m³/s" });
-    expect(fieldView("45 %", "ratio", "si"), "45 % recovery").toMatchObject({ text: "45", unit: "%", beside: "= 0.45" });
+    expect(fieldView("40 MLD", "flow", "si"), "40 MLD = 40 000 m³ / 86 400 s").toMatchObject({
+      text: "40",
+      unit: "MLD",
+      beside: "= 0.463 m³/s",
+    });
+    expect(fieldView("300 L/s", "flow", "si"), "300 L/s").toMatchObject({
+      text: "300",
+      unit: "L/s",
+      beside: "= 0.3 m³/s",
+    });
+    expect(fieldView("45 %", "ratio", "si"), "45 % recovery").toMatchObject({
+      text: "45",
+      unit: "%",
+      beside: "= 0.45",
+    });
   });
   it("lets values in the SI unit or the chosen system's unit follow the unit system", () => {
-    expect(fieldView("18 m", "length", "us"), "18 m shown in feet with US units, SI beside").toMatchObject({ unit: "ft", beside: "= 18 m" });
-    expect(fieldView("12 MGD", "flow", "us"), "MGD is the US flow unit; 12 MGD = 0.5258 m³/s").toMatchObject({ text: "12", unit: "MGD", beside: "= 0.5258 m³/s" });
+    expect(fieldView("18 m", "length", "us"), "18 m shown in feet with US units, SI beside").toMatchObject({
+      unit: "ft",
+      beside: "= 18 m",
+    });
+    expect(fieldView("12 MGD", "flow", "us"), "MGD is the US flow unit; 12 MGD = 0.5258 m³/s").toMatchObject({
+      text: "12",
+      unit: "MGD",
+      beside: "= 0.5258 m³/s",
+    });
     expect(fieldView(0.5, "flow", "si"), "a plain number").toMatchObject({ text: "0.5", unit: "m³/s", beside: null });
   });
   it("shows the US unit beside as well when US units are chosen", () => {
-    expect(fieldView("40 MLD", "flow", "us").beside, "SI and MGD (40 MLD = 10.567 MGD)").toBe("= 0.463 m³/s = 10.57 MGD");
+    expect(fieldView("40 MLD", "flow", "us").beside, "SI and MGD (40 MLD = 10.567 MGD)").toBe(
+      "= 0.463 m³/s = 10.57 MGD",
+    );
   });
 });
 

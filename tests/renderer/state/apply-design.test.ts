@@ -9,13 +9,27 @@ import { parseScenario } from "../../../core/scenario/parse";
 import { designDiffuserBlock } from "../../../core/study/design-rank";
 import { exitVelocity } from "../../../core/study/design";
 
-const cove = JSON.parse(readFileSync(fileURLToPath(new URL("../../../demo-scenarios/island-cove.json", import.meta.url)), "utf8"));
+const cove = JSON.parse(
+  readFileSync(fileURLToPath(new URL("../../../demo-scenarios/island-cove.json", import.meta.url)), "utf8"),
+);
 
 describe("applyDesign", () => {
   const parsed = parseScenario(cove);
   if (!parsed.ok) throw new Error("demo must parse");
   const s = parsed.scenario;
-  const single = designDiffuserBlock({ portCount: 1, portDiameter: 0.155, portAngle: 45, portSpacing: 0, portHeight: 1, length: 0, exitVelocity: exitVelocity(s.discharge.flow, 1, 0.155, 1) }, s, cove.diffuser);
+  const single = designDiffuserBlock(
+    {
+      portCount: 1,
+      portDiameter: 0.155,
+      portAngle: 45,
+      portSpacing: 0,
+      portHeight: 1,
+      length: 0,
+      exitVelocity: exitVelocity(s.discharge.flow, 1, 0.155, 1),
+    },
+    s,
+    cove.diffuser,
+  );
 
   it("replaces the two-port line with a single port, leaving no spacing behind, and the result reads", () => {
     const next = applyDesign.perform(documentFromFile(cove), { diffuser: single });

@@ -1,6 +1,13 @@
 /** Undo and redo over document states, with keystrokes in one field merged into one step. */
 import { describe, expect, it } from "vitest";
-import { historyPush, historyRedo, historyReplace, historyStart, historyUndo, HISTORY_LIMIT } from "../../../renderer/state/history";
+import {
+  historyPush,
+  historyRedo,
+  historyReplace,
+  historyStart,
+  historyUndo,
+  HISTORY_LIMIT,
+} from "../../../renderer/state/history";
 import { setField } from "../../../renderer/state/actions";
 import { blankScenario, documentFromFile, getAtPath } from "../../../renderer/state/scenarioState";
 
@@ -42,7 +49,10 @@ describe("history", () => {
   });
 
   it("keeps the document's current location across undo (saving elsewhere is not undone)", () => {
-    const h = historyReplace(edit(historyStart(start), "name", "x", 0), { ...edit(historyStart(start), "name", "x", 0).present, path: "moved.json" });
+    const h = historyReplace(edit(historyStart(start), "name", "x", 0), {
+      ...edit(historyStart(start), "name", "x", 0).present,
+      path: "moved.json",
+    });
     expect(historyUndo(h).present.path, "path kept").toBe("moved.json");
   });
 

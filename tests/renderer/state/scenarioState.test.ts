@@ -48,12 +48,18 @@ describe("updateScenario()", () => {
   });
 
   it("merges objects key by key, replaces arrays whole, and deletes keys set to undefined", () => {
-    const merged = mergePatch({ a: { b: 1, c: 2 }, list: [1, 2, 3], gone: true }, { a: { c: 5 }, list: [9], gone: undefined });
+    const merged = mergePatch(
+      { a: { b: 1, c: 2 }, list: [1, 2, 3], gone: true },
+      { a: { c: 5 }, list: [9], gone: undefined },
+    );
     expect(merged, "deep merge").toEqual({ a: { b: 1, c: 5 }, list: [9] });
   });
 
   it("keeps the document plain JSON (survives a save and reopen unchanged)", () => {
-    const state = updateScenario(documentFromFile(blankScenario()), { name: "Round trip", diffuser: { portDiameter: "8 in" } });
+    const state = updateScenario(documentFromFile(blankScenario()), {
+      name: "Round trip",
+      diffuser: { portDiameter: "8 in" },
+    });
     expect(JSON.parse(serialiseScenario(state.file)), "saved text parses back to the same object").toEqual(state.file);
     expect(serialiseScenario(state.file).endsWith("\n"), "files end with a newline").toBe(true);
   });
@@ -67,7 +73,9 @@ describe("paths", () => {
   });
   it("builds a patch that changes one array element and keeps its siblings and other keys", () => {
     const patched = mergePatch(file, patchAtPath(file, "ambient.profile.1.depth", 12));
-    expect(patched, "only the one value changed").toEqual({ ambient: { profile: [{ depth: 0 }, { depth: 12, salinity: 38 }] } });
+    expect(patched, "only the one value changed").toEqual({
+      ambient: { profile: [{ depth: 0 }, { depth: 12, salinity: 38 }] },
+    });
     expect(file.ambient.profile[1].depth, "the source is not mutated").toBe(10);
   });
 });
@@ -98,7 +106,12 @@ describe("actions", () => {
     expect((getAtPath(added.file, "ambient.profile") as unknown[]).length, "one more row").toBe(3);
     const removed = removeArrayItem.perform(added, { path: "ambient.profile", index: 0 });
     expect(getAtPath(removed.file, "ambient.profile.0.depth"), "the first row is gone").toBe(15);
-    const replaced = replaceProfile.perform(removed, { rows: [{ depth: 0, salinity: 37, temperature: 20 }, { depth: "30 ft", salinity: 38, temperature: 18 }] });
+    const replaced = replaceProfile.perform(removed, {
+      rows: [
+        { depth: 0, salinity: 37, temperature: 20 },
+        { depth: "30 ft", salinity: 38, temperature: 18 },
+      ],
+    });
     expect(getAtPath(replaced.file, "ambient.profile.1.depth"), "rows replaced whole").toBe("30 ft");
   });
 
@@ -126,7 +139,10 @@ describe("actions", () => {
   });
 
   it("appendArrayItem adds a limit", () => {
-    const s = appendArrayItem.perform(start, { path: "mixingZone.limits", item: { constituent: "temperature", maxIncrease: 1, unit: "degC" } });
+    const s = appendArrayItem.perform(start, {
+      path: "mixingZone.limits",
+      item: { constituent: "temperature", maxIncrease: 1, unit: "degC" },
+    });
     expect(getAtPath(s.file, "mixingZone.limits.1.constituent"), "second limit").toBe("temperature");
   });
 });
@@ -149,9 +165,10 @@ describe("documents the actions produce are valid scenarios for core", () => {
 
 describe("suggestedFileName()", () => {
   it("makes a portable file name from the scenario name", () => {
-    expect(suggestedFileName({ name: "Sandy shelf — large plant / 24 ports" }), "punctuation dropped, spaces to dashes").toBe(
-      "sandy-shelf-large-plant-24-ports.brinefield.json",
-    );
+    expect(
+      suggestedFileName({ name: "Sandy shelf — large plant / 24 ports" }),
+      "punctuation dropped, spaces to dashes",
+    ).toBe("sandy-shelf-large-plant-24-ports.brinefield.json");
     expect(suggestedFileName({}), "unnamed scenario").toBe("untitled-scenario.brinefield.json");
   });
 });

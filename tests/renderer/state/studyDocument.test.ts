@@ -46,7 +46,9 @@ describe("study documents", () => {
     const text = serialiseDocument(doc);
     const st = parseStudy(JSON.parse(text));
     if (!st.ok) throw new Error(st.issues.map((i) => i.message).join("; "));
-    expect(st.study.sweep, "the sweep block survives").toEqual({ vary: [{ path: "ambient.currentSpeed", from: 0, to: 0.5, steps: 3 }] });
+    expect(st.study.sweep, "the sweep block survives").toEqual({
+      vary: [{ path: "ambient.currentSpeed", from: 0, to: 0.5, steps: 3 }],
+    });
     const v = studyVariants(st.study, st.study.base, parseScenario);
     if (!v.ok) throw new Error("variants");
     expect(v.variants.map((x) => [x.name, x.scenario?.ambient.depth])).toEqual([
@@ -82,7 +84,9 @@ describe("study documents", () => {
   });
 
   it("refuse a study whose base is a separate file, and anything that is neither scenario nor study", () => {
-    const byPath = documentFromText(JSON.stringify({ format: "brinefield-study", version: 1, name: "x", base: "site.json" }));
+    const byPath = documentFromText(
+      JSON.stringify({ format: "brinefield-study", version: 1, name: "x", base: "site.json" }),
+    );
     expect(byPath.ok).toBe(false);
     const other = documentFromText(JSON.stringify({ format: "something" }));
     expect(!other.ok && other.message).toMatch(/not a Brinefield scenario.*"brinefield-study"/);

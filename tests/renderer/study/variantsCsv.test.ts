@@ -7,17 +7,27 @@ import { csvColumnName, variantsCsv } from "../../../renderer/study/variantsCsv"
 
 const rows: FlatRow[] = [
   {
-    variant: "base", case: "worst case", edgeDilution: 40.5,
-    integralMaxRise: 6.25, integralImpactDistance: 10.2, integralImpactDilution: 43.3, verdict: "pass",
+    variant: "base",
+    case: "worst case",
+    edgeDilution: 40.5,
+    integralMaxRise: 6.25,
+    integralImpactDistance: 10.2,
+    integralImpactDilution: 43.3,
+    verdict: "pass",
   },
   {
-    variant: "more ports", case: "worst case", edgeDilution: null,
-    integralMaxRise: 5.5, integralImpactDistance: null, integralImpactDilution: 30, verdict: "error",
+    variant: "more ports",
+    case: "worst case",
+    edgeDilution: null,
+    integralMaxRise: 5.5,
+    integralImpactDistance: null,
+    integralImpactDilution: 30,
+    verdict: "error",
   },
 ];
 
 describe("variantsCsv()", () => {
-  it("opens with the caution, beginning \"Caution\", in its first cell, and names the study", () => {
+  it('opens with the caution, beginning "Caution", in its first cell, and names the study', () => {
     expect(csvParseRows(variantsCsv(rows))[0], "the caution row").toEqual([CAUTION]);
     const table = csvParseRows(variantsCsv(rows, undefined, "Cove options"));
     expect(table[0], "the caution row with the study").toEqual([CAUTION, "study: Cove options"]);
@@ -39,6 +49,6 @@ describe("variantsCsv()", () => {
   it("writes the numbers as core gave them (metres) and empty cells for missing values", () => {
     const table = csvParseRows(variantsCsv(rows));
     expect(table[2], "first row").toEqual(["base", "worst case", "40.5", "6.25", "10.2", "43.3", "pass"]);
-    expect(table[3][2], "a missing edge dilution is an empty cell, not \"null\"").toBe("");
+    expect(table[3][2], 'a missing edge dilution is an empty cell, not "null"').toBe("");
   });
 });

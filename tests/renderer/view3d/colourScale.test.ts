@@ -57,7 +57,11 @@ describe("OKLab (Ottosson 2020)", () => {
   it("inverts its forward transform to the precision of the published matrices", () => {
     // The published forward and inverse matrices are each rounded to 10 digits from slightly different
     // derivations; inverting one numerically reproduces the other only to about 1e-4 (checked with numpy).
-    for (const rgb of [[0.2, 0.4, 0.6], [0.9, 0.1, 0.3], [0.05, 0.05, 0.05]] as const) {
+    for (const rgb of [
+      [0.2, 0.4, 0.6],
+      [0.9, 0.1, 0.3],
+      [0.05, 0.05, 0.05],
+    ] as const) {
       const [L, a, b] = linearSrgbToOklab(rgb[0], rgb[1], rgb[2]);
       const back = oklabToLinearSrgb(L, a, b);
       back.forEach((c, i) => expect(Math.abs(c - rgb[i]), `channel ${i} of ${rgb.join(",")}`).toBeLessThan(1e-4));

@@ -72,7 +72,9 @@ describe("tubeGeometry()", () => {
         const v = new Vector3().fromBufferAttribute(pos, i * ring + j);
         const offset = v.clone().sub(centreline[i]);
         expect(offset.length(), `radius at point ${i}, vertex ${j}`).toBeCloseTo(radii[i], 5);
-        expect(Math.abs(offset.dot(tangent)) / radii[i], `vertex ${j} of ring ${i} lies across the path`).toBeLessThan(1e-5);
+        expect(Math.abs(offset.dot(tangent)) / radii[i], `vertex ${j} of ring ${i} lies across the path`).toBeLessThan(
+          1e-5,
+        );
       }
     }
   });
@@ -111,7 +113,16 @@ describe("tubeGeometry()", () => {
 
   it("handles a vertical jet (tangent parallel to the up axis)", () => {
     const up = [new Vector3(0, 0, 0), new Vector3(0, 1, 0), new Vector3(0, 2, 0)];
-    const g = tubeGeometry({ centreline: up, radii: [0.5, 0.5, 0.5], colours: [[1, 1, 1], [1, 1, 1], [1, 1, 1]], radialSegments: 8 });
+    const g = tubeGeometry({
+      centreline: up,
+      radii: [0.5, 0.5, 0.5],
+      colours: [
+        [1, 1, 1],
+        [1, 1, 1],
+        [1, 1, 1],
+      ],
+      radialSegments: 8,
+    });
     const p = g.getAttribute("position");
     for (let k = 0; k < p.count; k++) {
       const v = new Vector3().fromBufferAttribute(p, k);
@@ -122,12 +133,24 @@ describe("tubeGeometry()", () => {
 
   it("merges repeated points and returns empty geometry for fewer than two distinct points", () => {
     const p = new Vector3(1, 2, 3);
-    const single = tubeGeometry({ centreline: [p, p.clone(), p.clone()], radii: [1, 1, 1], colours: [[0, 0, 0], [0, 0, 0], [0, 0, 0]] });
+    const single = tubeGeometry({
+      centreline: [p, p.clone(), p.clone()],
+      radii: [1, 1, 1],
+      colours: [
+        [0, 0, 0],
+        [0, 0, 0],
+        [0, 0, 0],
+      ],
+    });
     expect(single.getAttribute("position"), "no buffers for a point").toBeUndefined();
     const repeated = tubeGeometry({
       centreline: [new Vector3(0, 0, 0), new Vector3(0, 0, 0), new Vector3(1, 0, 0)],
       radii: [1, 1, 1],
-      colours: [[0, 0, 0], [0, 0, 0], [0, 0, 0]],
+      colours: [
+        [0, 0, 0],
+        [0, 0, 0],
+        [0, 0, 0],
+      ],
       radialSegments: 4,
     });
     expect(repeated.getAttribute("position").count, "the duplicate start point is dropped").toBe(2 * 5);
@@ -175,7 +198,17 @@ describe("offsetOutline()", () => {
 describe("annulusGeometry()", () => {
   it("lifts the sheet by the given height above the sloping bed", () => {
     const bed = { depth: 10, slope: 0.02, slopeAzimuth: 90 };
-    const g = annulusGeometry({ distances: [5, 10, 20], heights: [3, 2, 1], colours: [[0, 0, 0], [0, 0, 0], [0, 0, 0]], bed, pointsPerHalf: 8 });
+    const g = annulusGeometry({
+      distances: [5, 10, 20],
+      heights: [3, 2, 1],
+      colours: [
+        [0, 0, 0],
+        [0, 0, 0],
+        [0, 0, 0],
+      ],
+      bed,
+      pointsPerHalf: 8,
+    });
     const p = g.getAttribute("position");
     const perRing = p.count / 3;
     for (let k = 0; k < p.count; k++) {
@@ -183,7 +216,10 @@ describe("annulusGeometry()", () => {
       const east = p.getX(k);
       const north = -p.getZ(k);
       expect(Math.hypot(east, north), `vertex ${k} at its ring's distance`).toBeCloseTo([5, 10, 20][ringIndex], 4);
-      expect(p.getY(k) - seabedHeight(east, north, 10, 0.02, 90), `vertex ${k} height above bed`).toBeCloseTo([3, 2, 1][ringIndex], 4);
+      expect(p.getY(k) - seabedHeight(east, north, 10, 0.02, 90), `vertex ${k} height above bed`).toBeCloseTo(
+        [3, 2, 1][ringIndex],
+        4,
+      );
     }
   });
 });

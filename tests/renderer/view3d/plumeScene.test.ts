@@ -55,14 +55,18 @@ describe("buildPlumeScene()", () => {
           const t = Math.max(-half, Math.min(half, east * axis.east + north * axis.north));
           const d = Math.hypot(east - t * axis.east, north - t * axis.north);
           // Buffers are 32-bit floats: agreement to a part in a million.
-          expect(Math.abs(d - scenario.mixingZone.radius) / scenario.mixingZone.radius, `edge point ${k}`).toBeLessThan(1e-6);
+          expect(Math.abs(d - scenario.mixingZone.radius) / scenario.mixingZone.radius, `edge point ${k}`).toBeLessThan(
+            1e-6,
+          );
         }
       });
 
       it("spans the colour scale over the jet's dilutions", () => {
         const path = result.nearField.find((m) => m.method === "integral")?.path ?? [];
         const max = Math.max(...path.map((p) => p.dilution));
-        expect(built.domain.low, "scale starts at or below the port dilution").toBeLessThanOrEqual(Math.max(1, path[0].dilution));
+        expect(built.domain.low, "scale starts at or below the port dilution").toBeLessThanOrEqual(
+          Math.max(1, path[0].dilution),
+        );
         expect(built.domain.high, "scale reaches the largest jet dilution").toBeGreaterThanOrEqual(max);
       });
 
@@ -70,7 +74,10 @@ describe("buildPlumeScene()", () => {
         const c = built.focus.centre;
         expect([c.x, c.y, c.z].every(Number.isFinite), "finite focus").toBe(true);
         expect(built.focus.radius, "positive focus radius").toBeGreaterThan(0);
-        expect(built.jets.centres.every((p: Vector3) => p.y < 0), "jet centres under water").toBe(true);
+        expect(
+          built.jets.centres.every((p: Vector3) => p.y < 0),
+          "jet centres under water",
+        ).toBe(true);
       });
 
       it("releases its GPU resources without error", () => {

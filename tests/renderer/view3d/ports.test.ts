@@ -21,12 +21,23 @@ const base: DiffuserInput = {
 describe("portPlacements()", () => {
   it("spaces a line of ports evenly along the diffuser axis, centred on the diffuser", () => {
     const ports = portPlacements(base);
-    expect(ports.map((p) => Math.round(p.north * 1e9) / 1e9), "north positions for a north-pointing axis").toEqual([-20, -10, 0, 10, 20]);
-    expect(ports.every((p) => Math.abs(p.east) < 1e-9), "all on the axis").toBe(true);
-    expect(ports.every((p) => p.azimuth === 90), "all point along the port azimuth").toBe(true);
+    expect(
+      ports.map((p) => Math.round(p.north * 1e9) / 1e9),
+      "north positions for a north-pointing axis",
+    ).toEqual([-20, -10, 0, 10, 20]);
+    expect(
+      ports.every((p) => Math.abs(p.east) < 1e-9),
+      "all on the axis",
+    ).toBe(true);
+    expect(
+      ports.every((p) => p.azimuth === 90),
+      "all point along the port azimuth",
+    ).toBe(true);
   });
   it("puts a single port at the origin", () => {
-    expect(portPlacements({ ...base, layout: "single", portCount: 1 }), "one port").toEqual([{ east: 0, north: 0, azimuth: 90 }]);
+    expect(portPlacements({ ...base, layout: "single", portCount: 1 }), "one port").toEqual([
+      { east: 0, north: 0, azimuth: 90 },
+    ]);
   });
   it("places rosette ports on each riser with the riser's azimuths", () => {
     const ports = portPlacements({
@@ -39,7 +50,10 @@ describe("portPlacements()", () => {
     expect(ports.length, "2 risers × 4 ports").toBe(8);
     expect(ports[0].east, "first riser 15 m west of centre").toBeCloseTo(-15, 9);
     expect(ports[7].east, "second riser 15 m east").toBeCloseTo(15, 9);
-    expect(ports.slice(0, 4).map((p) => p.azimuth), "azimuths around a riser").toEqual([0, 90, 180, 270]);
+    expect(
+      ports.slice(0, 4).map((p) => p.azimuth),
+      "azimuths around a riser",
+    ).toEqual([0, 90, 180, 270]);
   });
 });
 
@@ -50,6 +64,15 @@ describe("pathStartAzimuth()", () => {
   });
   it("falls back for a vertical start or an empty path", () => {
     expect(pathStartAzimuth([], 42), "empty").toBe(42);
-    expect(pathStartAzimuth([{ s: 0, x: 0, y: 0 }, { s: 1, x: 0, y: 0 }], 42), "vertical").toBe(42);
+    expect(
+      pathStartAzimuth(
+        [
+          { s: 0, x: 0, y: 0 },
+          { s: 1, x: 0, y: 0 },
+        ],
+        42,
+      ),
+      "vertical",
+    ).toBe(42);
   });
 });

@@ -102,9 +102,13 @@ export async function benchBrowser(root = defaultRoot()): Promise<BrowserBench> 
         loads.push((await page.evaluate("window.__firstResultMs")) as number);
       }
       // Let the first screen settle (3D view, charts) before timing edits.
-      await page.waitForFunction(`/Up to date/.test(document.querySelector('[data-role="engine-status"]')?.textContent ?? "")`, null, {
-        timeout: 30_000,
-      });
+      await page.waitForFunction(
+        `/Up to date/.test(document.querySelector('[data-role="engine-status"]')?.textContent ?? "")`,
+        null,
+        {
+          timeout: 30_000,
+        },
+      );
       await page.waitForTimeout(500);
       const edits: number[] = [];
       for (const angle of ANGLES) {

@@ -83,10 +83,16 @@ export function rendererBuildIsStale(root: string): boolean {
 /** Builds the renderer with vite (the project's `npm run build`), with a time limit. */
 export function buildRenderer(root: string, timeoutMs = 120_000): Promise<void> {
   const config = join(root, "renderer/vite.config.ts");
-  if (!existsSync(config)) return Promise.reject(new Capture3dError("the renderer has no vite configuration (renderer/vite.config.ts), so it cannot be built"));
+  if (!existsSync(config))
+    return Promise.reject(
+      new Capture3dError("the renderer has no vite configuration (renderer/vite.config.ts), so it cannot be built"),
+    );
   const vite = join(root, "node_modules/vite/bin/vite.js");
   return new Promise((resolvePromise, reject) => {
-    const child = spawn(process.execPath, [vite, "build", "--config", config, "--logLevel", "error"], { cwd: root, stdio: ["ignore", "ignore", "pipe"] });
+    const child = spawn(process.execPath, [vite, "build", "--config", config, "--logLevel", "error"], {
+      cwd: root,
+      stdio: ["ignore", "ignore", "pipe"],
+    });
     let stderr = "";
     child.stderr.on("data", (d: Buffer) => {
       stderr = (stderr + d.toString()).slice(-4000);
@@ -102,7 +108,12 @@ export function buildRenderer(root: string, timeoutMs = 120_000): Promise<void> 
     child.on("exit", (code) => {
       clearTimeout(timer);
       if (code === 0 && existsSync(join(root, "dist/renderer/index.html"))) resolvePromise();
-      else reject(new Capture3dError(`the renderer build failed${stderr ? `: ${stderr.trim().split("\n").slice(-3).join(" ")}` : ""}`));
+      else
+        reject(
+          new Capture3dError(
+            `the renderer build failed${stderr ? `: ${stderr.trim().split("\n").slice(-3).join(" ")}` : ""}`,
+          ),
+        );
     });
   });
 }
@@ -148,7 +159,11 @@ export function serveStatic(dir: string): Promise<{ server: Server; url: string 
         res.writeHead(404).end();
         return;
       }
-      res.writeHead(200, { "Content-Type": CONTENT_TYPES[extname(file)] ?? "application/octet-stream", "Cache-Control": "no-store", "X-Content-Type-Options": "nosniff" });
+      res.writeHead(200, {
+        "Content-Type": CONTENT_TYPES[extname(file)] ?? "application/octet-stream",
+        "Cache-Control": "no-store",
+        "X-Content-Type-Options": "nosniff",
+      });
       res.end(req.method === "HEAD" ? undefined : readFileSync(file));
     } catch {
       if (!res.headersSent) res.writeHead(500);

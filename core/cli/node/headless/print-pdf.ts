@@ -7,7 +7,13 @@ import { writeFileAtomic } from "../atomicWrite";
 import { withChromium } from "./chromium";
 
 /** The options every Brinefield PDF is printed with: tagged (accessible, ISO 14289 structure) and with an outline. */
-export const PDF_OPTIONS = { printBackground: true, preferCSSPageSize: true, format: "A4", tagged: true, outline: true } as const;
+export const PDF_OPTIONS = {
+  printBackground: true,
+  preferCSSPageSize: true,
+  format: "A4",
+  tagged: true,
+  outline: true,
+} as const;
 
 /** Renders `html` to PDF bytes (A4 from the document's @page rule, backgrounds printed, tagged, with an outline). */
 export async function pdfFromHtml(html: string): Promise<Uint8Array> {
