@@ -49,23 +49,7 @@ function rowsHtml(file: unknown, rows: readonly InputRow[]): RawHtml {
 }
 
 function table(caption: string, body: RawHtml): RawHtml {
-  return html`<table class="inputs">
-    <caption>
-      ${caption}
-    </caption>
-    <thead>
-      <tr>
-        <th>Input</th>
-        <th>Field</th>
-        <th>As entered</th>
-        <th>SI value used</th>
-        <th>SI unit</th>
-      </tr>
-    </thead>
-    <tbody>
-      ${body}
-    </tbody>
-  </table>`;
+  return html`<table class="inputs"><caption>${caption}</caption><thead><tr><th>Input</th><th>Field</th><th>As entered</th><th>SI value used</th><th>SI unit</th></tr></thead><tbody>${body}</tbody></table>`;
 }
 
 /** All inputs tables for a read scenario. */
@@ -88,32 +72,10 @@ export function inputsHtml(file: unknown, s: Scenario): RawHtml {
   if (d.constituents.length > 0) {
     const rows = d.constituents.map(
       (c, i) =>
-        html`<tr>
-          <td>${c.name}</td>
-          <td class="path">discharge.constituents.${String(i)}</td>
-          <td class="num">${reportNumber(c.concentration)}</td>
-          <td class="num">${reportNumber(c.background)}</td>
-          <td>${c.unit}</td>
-        </tr>`,
+        html`<tr><td>${c.name}</td><td class="path">discharge.constituents.${String(i)}</td><td class="num">${reportNumber(c.concentration)}</td><td class="num">${reportNumber(c.background)}</td><td>${c.unit}</td></tr>`,
     );
     parts.push(
-      html`<table class="inputs">
-        <caption>
-          Constituents in the discharge (kept in the unit entered)
-        </caption>
-        <thead>
-          <tr>
-            <th>Constituent</th>
-            <th>Field</th>
-            <th>In the discharge</th>
-            <th>Background</th>
-            <th>Unit</th>
-          </tr>
-        </thead>
-        <tbody>
-          ${join(rows)}
-        </tbody>
-      </table>`,
+      html`<table class="inputs"><caption>Constituents in the discharge (kept in the unit entered)</caption><thead><tr><th>Constituent</th><th>Field</th><th>In the discharge</th><th>Background</th><th>Unit</th></tr></thead><tbody>${join(rows)}</tbody></table>`,
     );
   }
   if (s.plant) {
@@ -190,36 +152,10 @@ export function inputsHtml(file: unknown, s: Scenario): RawHtml {
   if (s.ambientCases.length > 0) {
     const rows = s.ambientCases.map((c) => {
       const b = c.profile[c.profile.length - 1]!;
-      return html`<tr>
-        <td>${c.name}</td>
-        <td class="num">${reportNumber(c.weight)}</td>
-        <td class="num">${reportNumber(c.depth)}</td>
-        <td class="num">${reportNumber(b.salinity)}</td>
-        <td class="num">${reportNumber(b.temperature)}</td>
-        <td class="num">${reportNumber(c.currentSpeed)}</td>
-        <td class="num">${reportNumber(c.currentDirection)}</td>
-      </tr>`;
+      return html`<tr><td>${c.name}</td><td class="num">${reportNumber(c.weight)}</td><td class="num">${reportNumber(c.depth)}</td><td class="num">${reportNumber(b.salinity)}</td><td class="num">${reportNumber(b.temperature)}</td><td class="num">${reportNumber(c.currentSpeed)}</td><td class="num">${reportNumber(c.currentDirection)}</td></tr>`;
     });
     parts.push(
-      html`<table class="inputs">
-        <caption>
-          Further ambient cases (SI; seabed values)
-        </caption>
-        <thead>
-          <tr>
-            <th>Case</th>
-            <th>Weight</th>
-            <th>Depth (m)</th>
-            <th>Salinity (g/kg)</th>
-            <th>Temperature (°C)</th>
-            <th>Current (m/s)</th>
-            <th>Direction (°)</th>
-          </tr>
-        </thead>
-        <tbody>
-          ${join(rows)}
-        </tbody>
-      </table>`,
+      html`<table class="inputs"><caption>Further ambient cases (SI; seabed values)</caption><thead><tr><th>Case</th><th>Weight</th><th>Depth (m)</th><th>Salinity (g/kg)</th><th>Temperature (°C)</th><th>Current (m/s)</th><th>Direction (°)</th></tr></thead><tbody>${join(rows)}</tbody></table>`,
     );
   }
   const f = s.diffuser;
@@ -263,35 +199,10 @@ export function inputsHtml(file: unknown, s: Scenario): RawHtml {
         : l.maxConcentration !== undefined
           ? `concentration ≤ ${reportNumber(l.maxConcentration)}`
           : "—";
-    return html`<tr>
-      <td>${l.constituent}</td>
-      <td class="entered">${entered}</td>
-      <td>${used}</td>
-      <td>${l.unit}</td>
-      <td>${l.background !== undefined ? reportNumber(l.background) : "ambient"}</td>
-      <td>${l.basis ?? "—"}</td>
-    </tr>`;
+    return html`<tr><td>${l.constituent}</td><td class="entered">${entered}</td><td>${used}</td><td>${l.unit}</td><td>${l.background !== undefined ? reportNumber(l.background) : "ambient"}</td><td>${l.basis ?? "—"}</td></tr>`;
   });
   parts.push(
-    html`<table class="inputs">
-      <caption>
-        Mixing zone: radius ${reportNumber(s.mixingZone.radius)} m (entered:
-        ${asEntered(valueAtPath(file, "mixingZone.radius"))})
-      </caption>
-      <thead>
-        <tr>
-          <th>Limit on</th>
-          <th>As entered</th>
-          <th>Used</th>
-          <th>Unit</th>
-          <th>Background</th>
-          <th>Basis</th>
-        </tr>
-      </thead>
-      <tbody>
-        ${join(limitRows)}
-      </tbody>
-    </table>`,
+    html`<table class="inputs"><caption>Mixing zone: radius ${reportNumber(s.mixingZone.radius)} m (entered: ${asEntered(valueAtPath(file, "mixingZone.radius"))})</caption><thead><tr><th>Limit on</th><th>As entered</th><th>Used</th><th>Unit</th><th>Background</th><th>Basis</th></tr></thead><tbody>${join(limitRows)}</tbody></table>`,
   );
   const optionRows: InputRow[] = [
     {
@@ -312,40 +223,17 @@ export function inputsHtml(file: unknown, s: Scenario): RawHtml {
   if (s.uncertainty && s.uncertainty.inputs.length > 0) {
     const rows = s.uncertainty.inputs.map(
       (u) =>
-        html`<tr>
-          <td class="path">${u.path}</td>
-          <td>${u.distribution}</td>
-          <td>
-            ${Object.entries(u.params)
-              .map(([k, v]) => `${k} = ${reportNumber(v)}`)
-              .join(", ")}
-          </td>
-        </tr>`,
+        html`<tr><td class="path">${u.path}</td><td>${u.distribution}</td><td>${Object.entries(u.params)
+          .map(([k, v]) => `${k} = ${reportNumber(v)}`)
+          .join(", ")}</td></tr>`,
     );
     parts.push(
-      html`<table class="inputs">
-        <caption>
-          Uncertain inputs (SI parameters)
-        </caption>
-        <thead>
-          <tr>
-            <th>Input</th>
-            <th>Distribution</th>
-            <th>Parameters</th>
-          </tr>
-        </thead>
-        <tbody>
-          ${join(rows)}
-        </tbody>
-      </table>`,
+      html`<table class="inputs"><caption>Uncertain inputs (SI parameters)</caption><thead><tr><th>Input</th><th>Distribution</th><th>Parameters</th></tr></thead><tbody>${join(rows)}</tbody></table>`,
     );
   }
   if (s.conversions.length > 0) {
     parts.push(
-      html`<p class="note"><strong>Conversions applied while reading the file:</strong></p>
-        <ul class="conversions">
-          ${join(s.conversions.map((c) => html`<li>${c}</li>`))}
-        </ul>`,
+      html`<p class="note"><strong>Conversions applied while reading the file:</strong></p><ul class="conversions">${join(s.conversions.map((c) => html`<li>${c}</li>`))}</ul>`,
     );
   }
   return join(parts);
@@ -358,27 +246,9 @@ export function rawInputsHtml(file: unknown): RawHtml {
     if (v !== null && typeof v === "object") {
       for (const [k, child] of Object.entries(v as Record<string, unknown>)) walk(child, path ? `${path}.${k}` : k);
     } else {
-      rows.push(
-        html`<tr>
-          <td class="path">${path}</td>
-          <td class="entered">${asEntered(v)}</td>
-        </tr>`,
-      );
+      rows.push(html`<tr><td class="path">${path}</td><td class="entered">${asEntered(v)}</td></tr>`);
     }
   };
   walk(file, "");
-  return html`<table class="inputs">
-    <caption>
-      Inputs as entered (the file could not be re-read, so SI values are not shown)
-    </caption>
-    <thead>
-      <tr>
-        <th>Field</th>
-        <th>As entered</th>
-      </tr>
-    </thead>
-    <tbody>
-      ${join(rows)}
-    </tbody>
-  </table>`;
+  return html`<table class="inputs"><caption>Inputs as entered (the file could not be re-read, so SI values are not shown)</caption><thead><tr><th>Field</th><th>As entered</th></tr></thead><tbody>${join(rows)}</tbody></table>`;
 }

@@ -29,40 +29,12 @@ export function recordHtml(result: BrinefieldResult): RawHtml {
     ["Longest unbroken period not meeting", `${reportNumber(rec.longestExceedanceHours)} h`],
   ];
   return html`<p>${rule}</p>
-    <p class="note">${rec.note}</p>
-    <table id="record-table">
-      <tbody>
-        ${join(
-          rows.map(
-            ([k, v]) =>
-              html`<tr>
-                <th>${k}</th>
-                <td>${v}</td>
-              </tr>`,
-          ),
-        )}
-      </tbody>
-    </table>
-    ${rec.refusals.length ? html`<p class="note">Refused steps: ${rec.refusals.join(" ")}</p>` : html``}
-    <figure>
-      ${raw(recordDilutionSvg(rec))}
-      <figcaption>
-        Edge dilution against time with the required dilution; periods not meeting the limit shaded.
-      </figcaption>
-    </figure>
-    <figure>
-      ${raw(recordIncreaseSvg(rec))}
-      <figcaption>
-        Salinity increase at the mixing-zone edge against time with the allowed increase; periods not meeting the limit
-        shaded.
-      </figcaption>
-    </figure>
-    <figure>
-      ${raw(recordDurationSvg(rec))}
-      <figcaption>
-        Duration curve: edge dilution against the percentage of the record's time it is equalled or exceeded.
-      </figcaption>
-    </figure>`;
+<p class="note">${rec.note}</p>
+<table id="record-table"><tbody>${join(rows.map(([k, v]) => html`<tr><th>${k}</th><td>${v}</td></tr>`))}</tbody></table>
+${rec.refusals.length ? html`<p class="note">Refused steps: ${rec.refusals.join(" ")}</p>` : html``}
+<figure>${raw(recordDilutionSvg(rec))}<figcaption>Edge dilution against time with the required dilution; periods not meeting the limit shaded.</figcaption></figure>
+<figure>${raw(recordIncreaseSvg(rec))}<figcaption>Salinity increase at the mixing-zone edge against time with the allowed increase; periods not meeting the limit shaded.</figcaption></figure>
+<figure>${raw(recordDurationSvg(rec))}<figcaption>Duration curve: edge dilution against the percentage of the record's time it is equalled or exceeded.</figcaption></figure>`;
 }
 
 export function intakeHtml(result: BrinefieldResult): RawHtml {
@@ -96,18 +68,6 @@ export function intakeHtml(result: BrinefieldResult): RawHtml {
       "Intake limit",
       `${reportNumber(k.maxSalinityIncrease)} g/kg: ${k.verdict} (judged increase ${reportNumber(k.judgedSalinityIncrease)} g/kg)`,
     ]);
-  return html`<table id="intake-table">
-      <tbody>
-        ${join(
-          rows.map(
-            ([a, b]) =>
-              html`<tr>
-                <th>${a}</th>
-                <td>${b}</td>
-              </tr>`,
-          ),
-        )}
-      </tbody>
-    </table>
-    <p class="note">${k.source}</p>`;
+  return html`<table id="intake-table"><tbody>${join(rows.map(([a, b]) => html`<tr><th>${a}</th><td>${b}</td></tr>`))}</tbody></table>
+<p class="note">${k.source}</p>`;
 }

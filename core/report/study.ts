@@ -32,29 +32,15 @@ export interface StudyReportInput {
 
 function cell(v: StudyReportVariant, i: number, path: string): RawHtml {
   const value = valueAtPath(v.result, path);
-  return html`<td class="num" data-path="variants.${String(i)}.${path}">
-    ${typeof value === "number" ? reportNumber(value) : "—"}
-  </td>`;
+  return html`<td class="num" data-path="variants.${String(i)}.${path}">${typeof value === "number" ? reportNumber(value) : "—"}</td>`;
 }
 
 /** Side-by-side comparison of every variant's key results. */
 export function studyComparisonHtml(variants: readonly StudyReportVariant[]): RawHtml {
   const methods = [...new Set(variants.flatMap((v) => v.result.nearField.map((m) => m.method)))];
-  const head = html`<tr>
-    <th>Variant</th>
-    <th>Changes from the base</th>
-    ${join(
-      methods.map(
-        (m) =>
-          html`<th class="num">S impact (${m})</th>
-            <th class="num">Max rise (${m}), m</th>`,
-      ),
-    )}
-    <th class="num">S at edge</th>
-    <th class="num">S required</th>
-    <th class="num">Margin</th>
-    <th>Verdict</th>
-  </tr>`;
+  const head = html`<tr><th>Variant</th><th>Changes from the base</th>${join(
+    methods.map((m) => html`<th class="num">S impact (${m})</th><th class="num">Max rise (${m}), m</th>`),
+  )}<th class="num">S at edge</th><th class="num">S required</th><th class="num">Margin</th><th>Verdict</th></tr>`;
   const rows = variants.map((v, i) => {
     const changes = Object.entries(v.overrides)
       .map(([k, val]) => `${k} = ${typeof val === "string" ? val : JSON.stringify(val)}`)
@@ -62,32 +48,13 @@ export function studyComparisonHtml(variants: readonly StudyReportVariant[]): Ra
     const perMethod = methods.map((m) => {
       const j = v.result.nearField.findIndex((x) => x.method === m);
       return j < 0
-        ? html`<td class="num">—</td>
-            <td class="num">—</td>`
+        ? html`<td class="num">—</td><td class="num">—</td>`
         : join([cell(v, i, `nearField.${j}.impactDilution`), cell(v, i, `nearField.${j}.maxRiseHeight`)]);
     });
     const o = v.result.overall;
-    return html`<tr>
-      <td><a href="#v${String(i)}-summary">${v.name}</a></td>
-      <td class="path">${changes || "—"}</td>
-      ${join(perMethod)}${cell(v, i, "mixingZone.dilution")}${cell(v, i, "compliance.requiredDilution")}${cell(v, i, "compliance.margin")}
-      <td class="${verdictStyle(o.verdict).cls}">
-        ${o.verdict} (${o.governingCase}, margin ${reportNumber(o.margin)})
-      </td>
-    </tr>`;
+    return html`<tr><td><a href="#v${String(i)}-summary">${v.name}</a></td><td class="path">${changes || "—"}</td>${join(perMethod)}${cell(v, i, "mixingZone.dilution")}${cell(v, i, "compliance.requiredDilution")}${cell(v, i, "compliance.margin")}<td class="${verdictStyle(o.verdict).cls}">${o.verdict} (${o.governingCase}, margin ${reportNumber(o.margin)})</td></tr>`;
   });
-  return html`<table id="comparison-table">
-    <caption>
-      Comparison of the variants: numbers for the stated conditions; verdict over every ambient case (governing case,
-      margin)
-    </caption>
-    <thead>
-      ${head}
-    </thead>
-    <tbody>
-      ${join(rows)}
-    </tbody>
-  </table>`;
+  return html`<table id="comparison-table"><caption>Comparison of the variants: numbers for the stated conditions; verdict over every ambient case (governing case, margin)</caption><thead>${head}</thead><tbody>${join(rows)}</tbody></table>`;
 }
 
 /** Complete printable report for a study: comparison, then one section per variant. */
@@ -100,21 +67,11 @@ export function studyReportHtml(
   // One identifier for the whole study: the variants' input hashes in order.
   const studyHash = hashText(study.variants.map((v) => `${v.name}:${v.result.inputsHash}`).join("|")).slice(0, 12);
   const sections: RawHtml[] = [
-    html`<section id="study">
-      <h2>The study</h2>
-      <p><strong>Study:</strong> ${study.name}</p>
-      ${study.description ? html`<p>${study.description}</p>` : html``}
-      <p>
-        ${String(study.variants.length)} scenario${study.variants.length === 1 ? "" : "s"}: the base and its variants,
-        each run for its stated ambient. Inputs hash per variant:
-        ${join(
-          study.variants.map(
-            (v, i) => html`${i > 0 ? ", " : ""}${v.name} <span class="hash">${v.result.inputsHash}</span>`,
-          ),
-        )}.
-      </p>
-      ${studyComparisonHtml(study.variants)}
-    </section>`,
+    html`<section id="study"><h2>The study</h2><p><strong>Study:</strong> ${study.name}</p>${study.description ? html`<p>${study.description}</p>` : html``}<p>${String(study.variants.length)} scenario${study.variants.length === 1 ? "" : "s"}: the base and its variants, each run for its stated ambient. Inputs hash per variant: ${join(
+      study.variants.map(
+        (v, i) => html`${i > 0 ? ", " : ""}${v.name} <span class="hash">${v.result.inputsHash}</span>`,
+      ),
+    )}.</p>${studyComparisonHtml(study.variants)}</section>`,
   ];
   study.variants.forEach((v, i) => {
     const prefix = `v${i}-`;
@@ -125,10 +82,7 @@ export function studyReportHtml(
       prefix,
     );
     sections.push(
-      html`<section class="variant page-break" id="variant-${String(i)}">
-        <h2 class="variant-title">Variant ${String(i + 1)} of ${String(study.variants.length)}: ${v.name}</h2>
-        ${v.description ? html`<p>${v.description}</p>` : html``}${body}
-      </section>`,
+      html`<section class="variant page-break" id="variant-${String(i)}"><h2 class="variant-title">Variant ${String(i + 1)} of ${String(study.variants.length)}: ${v.name}</h2>${v.description ? html`<p>${v.description}</p>` : html``}${body}</section>`,
     );
   });
   const scenarioAppendix = appendixHtml(

@@ -84,56 +84,19 @@ function rawListingHtml(value: unknown): RawHtml {
   if (summaries.length > 0) {
     const rows = summaries.map(
       (s) =>
-        html`<tr>
-          <td>${s.path}</td>
-          ${join(
-            ["p5", "p50", "p95", "mean", "min", "max", "count"].map(
-              (k) => html`<td class="num">${reportNumber(s.values[k])}</td>`,
-            ),
-          )}
-        </tr>`,
+        html`<tr><td>${s.path}</td>${join(
+          ["p5", "p50", "p95", "mean", "min", "max", "count"].map(
+            (k) => html`<td class="num">${reportNumber(s.values[k])}</td>`,
+          ),
+        )}</tr>`,
     );
     parts.push(
-      html`<table>
-        <caption>
-          Percentiles of the outputs
-        </caption>
-        <thead>
-          <tr>
-            <th>Output</th>
-            <th class="num">P5</th>
-            <th class="num">P50</th>
-            <th class="num">P95</th>
-            <th class="num">Mean</th>
-            <th class="num">Min</th>
-            <th class="num">Max</th>
-            <th class="num">Runs</th>
-          </tr>
-        </thead>
-        <tbody>
-          ${join(rows)}
-        </tbody>
-      </table>`,
+      html`<table><caption>Percentiles of the outputs</caption><thead><tr><th>Output</th><th class="num">P5</th><th class="num">P50</th><th class="num">P95</th><th class="num">Mean</th><th class="num">Min</th><th class="num">Max</th><th class="num">Runs</th></tr></thead><tbody>${join(rows)}</tbody></table>`,
     );
   }
   if (facts.length > 0) {
     parts.push(
-      html`<table>
-        <caption>
-          Run facts
-        </caption>
-        <tbody>
-          ${join(
-            facts.map(
-              ([k, v]) =>
-                html`<tr>
-                  <td>${k}</td>
-                  <td>${v}</td>
-                </tr>`,
-            ),
-          )}
-        </tbody>
-      </table>`,
+      html`<table><caption>Run facts</caption><tbody>${join(facts.map(([k, v]) => html`<tr><td>${k}</td><td>${v}</td></tr>`))}</tbody></table>`,
     );
   }
   if (parts.length === 0)
@@ -292,20 +255,7 @@ export function uncertaintyHistogramSvg(
 
 function statsRow(s: MonteCarloStats): RawHtml {
   const name = s.name === "overall" ? "overall (per-run worst case)" : s.name;
-  return html`<tr>
-    <td>${name}</td>
-    <td class="num">${reportNumber(s.edgeDilution.p5)}</td>
-    <td class="num">${reportNumber(s.edgeDilution.p50)}</td>
-    <td class="num">${reportNumber(s.edgeDilution.p95)}</td>
-    <td class="num">${reportNumber(s.margin.p5)}</td>
-    <td class="num" data-probability="${String(s.probabilityOfExceedance)}">
-      ${percentText(s.probabilityOfExceedance)}
-    </td>
-    <td class="num">${String(s.verdicts.meets)}</td>
-    <td class="num">${String(s.verdicts.exceeds)}</td>
-    <td class="num">${String(s.verdicts["outside-scope"])}</td>
-    <td class="num">${String(s.verdicts.refused)}</td>
-  </tr>`;
+  return html`<tr><td>${name}</td><td class="num">${reportNumber(s.edgeDilution.p5)}</td><td class="num">${reportNumber(s.edgeDilution.p50)}</td><td class="num">${reportNumber(s.edgeDilution.p95)}</td><td class="num">${reportNumber(s.margin.p5)}</td><td class="num" data-probability="${String(s.probabilityOfExceedance)}">${percentText(s.probabilityOfExceedance)}</td><td class="num">${String(s.verdicts.meets)}</td><td class="num">${String(s.verdicts.exceeds)}</td><td class="num">${String(s.verdicts["outside-scope"])}</td><td class="num">${String(s.verdicts.refused)}</td></tr>`;
 }
 
 function summaryHtml(summary: MonteCarloSummary, bins: ReportUncertainty["histogram"] | null): RawHtml {
@@ -313,71 +263,17 @@ function summaryHtml(summary: MonteCarloSummary, bins: ReportUncertainty["histog
   const clamped = clampedSentences(summary);
   const svg = bins ? uncertaintyHistogramSvg(bins, w) : "";
   const reqVaries = w.requiredDilution && w.requiredDilution.p95 > w.requiredDilution.p5;
-  return html`<p data-role="uncertainty-headline">
-      <b>${headlineSentence(w, w.requiredDilution?.p50 ?? null)}</b> ${verdictCountsSentence(w, summary.runs)}
-    </p>
-    <p class="note">
-      ${String(summary.runs)} runs, seed ${String(summary.seed)} (the same seed gives the same numbers on any machine).
-    </p>
-    ${
-      svg
-        ? html`<figure>
-            ${raw(svg)}
-            <figcaption>
-              Dilution at the mixing-zone edge in each run's worst case (bars: number of runs), with P5, P50 and P95
-              dashed and the required dilution in
-              red${reqVaries ? html` (the shaded band is its P5–P95 range: it follows the drawn salinities; each run is judged against its own)` : html``}.
-              Runs to the right of the red line meet the limit.
-            </figcaption>
-          </figure>`
-        : html``
-    }
-    <table>
-      <caption>
-        Dilution at the mixing-zone edge per ambient case (×); chance of not meeting the limit as a percentage
-      </caption>
-      <thead>
-        <tr>
-          <th>Case</th>
-          <th class="num">P5</th>
-          <th class="num">P50</th>
-          <th class="num">P95</th>
-          <th class="num">Margin P5</th>
-          <th class="num">Chance not meeting limit</th>
-          <th class="num">Meets</th>
-          <th class="num">Exceeds</th>
-          <th class="num">Outside scope</th>
-          <th class="num">Refused</th>
-        </tr>
-      </thead>
-      <tbody>
-        ${join([...summary.cases, w].map(statsRow))}
-      </tbody>
-    </table>
-    <h3>What these numbers mean</h3>
-    <ul data-role="uncertainty-explanations">
-      ${join([...UNCERTAINTY_EXPLANATIONS, MARGIN_MEANING].map((e) => html`<li>${e}</li>`))}
-    </ul>
-    <h3>Uncertain inputs</h3>
-    <ul>
-      ${join(summary.notes.map((n) => html`<li>${n}</li>`))}
-    </ul>
-    ${
-      clamped.length > 0
-        ? html`<h3>Clamped inputs</h3>
-            <p>
-              A drawn value outside a field's physical bounds is set to the nearest bound; many clamped draws mean the
-              spread is wider than the field allows.
-            </p>
-            <ul data-role="uncertainty-clamped">
-              ${join(clamped.map((c) => html`<li>${c}</li>`))}
-            </ul>`
-        : html`<p class="note">No drawn value fell outside its field's physical bounds.</p>`
-    }
-    ${summary.firstError ? html`<p class="note">First refused draw: ${summary.firstError}</p>` : html``}
-    <p class="note">
-      The JSON output of \`brinefield uncertainty --json\` keeps probabilities as fractions from 0 to 1.
-    </p>`;
+  return html`<p data-role="uncertainty-headline"><b>${headlineSentence(w, w.requiredDilution?.p50 ?? null)}</b> ${verdictCountsSentence(w, summary.runs)}</p>
+<p class="note">${String(summary.runs)} runs, seed ${String(summary.seed)} (the same seed gives the same numbers on any machine).</p>
+${svg ? html`<figure>${raw(svg)}<figcaption>Dilution at the mixing-zone edge in each run's worst case (bars: number of runs), with P5, P50 and P95 dashed and the required dilution in red${reqVaries ? html` (the shaded band is its P5–P95 range: it follows the drawn salinities; each run is judged against its own)` : html``}. Runs to the right of the red line meet the limit.</figcaption></figure>` : html``}
+<table><caption>Dilution at the mixing-zone edge per ambient case (×); chance of not meeting the limit as a percentage</caption><thead><tr><th>Case</th><th class="num">P5</th><th class="num">P50</th><th class="num">P95</th><th class="num">Margin P5</th><th class="num">Chance not meeting limit</th><th class="num">Meets</th><th class="num">Exceeds</th><th class="num">Outside scope</th><th class="num">Refused</th></tr></thead><tbody>${join([...summary.cases, w].map(statsRow))}</tbody></table>
+<h3>What these numbers mean</h3>
+<ul data-role="uncertainty-explanations">${join([...UNCERTAINTY_EXPLANATIONS, MARGIN_MEANING].map((e) => html`<li>${e}</li>`))}</ul>
+<h3>Uncertain inputs</h3>
+<ul>${join(summary.notes.map((n) => html`<li>${n}</li>`))}</ul>
+${clamped.length > 0 ? html`<h3>Clamped inputs</h3><p>A drawn value outside a field's physical bounds is set to the nearest bound; many clamped draws mean the spread is wider than the field allows.</p><ul data-role="uncertainty-clamped">${join(clamped.map((c) => html`<li>${c}</li>`))}</ul>` : html`<p class="note">No drawn value fell outside its field's physical bounds.</p>`}
+${summary.firstError ? html`<p class="note">First refused draw: ${summary.firstError}</p>` : html``}
+<p class="note">The JSON output of \`brinefield uncertainty --json\` keeps probabilities as fractions from 0 to 1.</p>`;
 }
 
 export function uncertaintyHtml(value: unknown): RawHtml {
