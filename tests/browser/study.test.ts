@@ -312,7 +312,9 @@ describe("a study as a document in the app", () => {
     expect(
       lines.find((l) => l.startsWith("ambient.currentSpeed")),
       "the columns of sweep --csv",
-    ).toMatch(/^ambient\.currentSpeed,governingCase,edgeDilution,requiredDilution,margin,verdict/);
+    ).toMatch(
+      /^ambient\.currentSpeed \(m\/s\),governingCase,edgeDilution \(-\),requiredDilution \(-\),margin \(-\),verdict/,
+    );
     await page.click("[data-command=sweep-chart]");
     await page.getByRole("button", { name: "Add second input" }).click();
     await page.locator(".study-form").nth(1).locator("label", { hasText: "steps" }).locator("input").fill("4");
