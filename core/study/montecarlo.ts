@@ -170,8 +170,11 @@ export function runMonteCarloChunk(
       const why = err instanceof Error ? err.message : String(err);
       firstError ??= `run ${start + k}: ${why}`;
     }
+    // A record's refused steps are left out of e.cases: then match the cases by name, not by position.
+    const aligned = e !== null && e.cases.length === nc;
+    const byName = e !== null && !aligned ? new Map(e.cases.map((x) => [x.name, x.summary])) : null;
     for (let c = 0; c < nc; c++) {
-      const s = e?.cases[c]?.summary;
+      const s = aligned ? e!.cases[c]!.summary : byName?.get(plan.caseNames[c]!);
       if (s) eos[s.equationOfState] = (eos[s.equationOfState] ?? 0) + 1;
       edge[c]![k] = s ? s.edgeDilution : Number.NaN;
       margin[c]![k] = s ? s.margin : Number.NaN;

@@ -30,4 +30,43 @@ describe("linePlumeDilutionFromFlux() — S_m = 0.27 b^{1/3} z/q (Fischer et al.
     ).toContain("line-plume-near-source");
     expect(linePlumeDilutionFromFluxValidityIssues(0.01, 0.3, 20), "far from the source").toEqual([]);
   });
+
+  it("puts the near-source limit at exactly five source lengths, l_q = q^{2/3}/b^{1/3} with b = |g′|·q (dimensional analysis)", () => {
+    // q = 0.2 m²/s, g′ = 0.5 m/s²: b = 0.1 m³/s³, l_q = 0.2^{2/3}/0.1^{1/3} = 0.73681 m, 5·l_q = 3.6840 m.
+    const fiveLq = (5 * Math.pow(0.2, 2 / 3)) / Math.cbrt(0.1);
+    expect(fiveLq).toBeCloseTo(3.684, 3);
+    const below = linePlumeDilutionFromFluxValidityIssues(0.2, 0.5, fiveLq * 0.99);
+    expect(below, "just inside five source lengths").toHaveLength(1);
+    expect(linePlumeDilutionFromFluxValidityIssues(0.2, 0.5, fiveLq * 1.01), "just beyond").toEqual([]);
+    expect(
+      linePlumeDilutionFromFluxValidityIssues(0.2, -0.5, fiveLq * 0.99),
+      "the sign of g′ does not matter",
+    ).toHaveLength(1);
+    const w = below[0]!;
+    expect(w.severity, "a rough estimate, not a refusal").toBe("info");
+    expect(w.parameter).toBe("height");
+    expect(w.value).toBeCloseTo(fiveLq * 0.99, 12);
+    expect(w.range?.[0], "the range starts at 5·l_q").toBeCloseTo(fiveLq, 12);
+    expect(w.range?.[1]).toBe(Infinity);
+    expect(w.stage).toBe("multiport");
+    expect(w.source).toMatch(/Fischer et al\. \(1979\)/);
+    expect(w.message, "names the height and the limit in metres").toContain(
+      "3.65 m is under five source lengths (3.68 m)",
+    );
+  });
+
+  it("gives no near-source warning when the flux or the buoyancy is zero (nothing to scale by)", () => {
+    expect(linePlumeDilutionFromFluxValidityIssues(0.2, 0, 0.01), "no buoyancy").toEqual([]);
+    expect(linePlumeDilutionFromFluxValidityIssues(0, 0.5, 0.01), "no flow").toEqual([]);
+    expect(linePlumeDilutionFromFluxValidityIssues(-0.2, 0.5, 0.01), "negative flow").toEqual([]);
+  });
+
+  it("returns the formula's value, S = 0.27·(g′q)^{1/3}·z/q, for a worked case (Fischer et al. 1979, coefficient from memory)", () => {
+    // q = 0.05 m²/s, g′ = 0.3 m/s², z = 10 m: b = 0.015, b^{1/3} = 0.246621, S = 0.27·0.246621·10/0.05 = 13.3175.
+    expect(linePlumeDilutionFromFlux(0.05, 0.3, 10)).toBeCloseTo(13.3175, 3);
+    expect(linePlumeDilutionFromFlux(0.05, -0.3, 10), "dense or buoyant: same magnitude").toBeCloseTo(13.3175, 3);
+    expect(linePlumeDilutionFromFlux(0.05, 0.3, 10, 0.38), "the mean coefficient").toBeCloseTo(18.7431, 3);
+    expect(linePlumeDilutionFromFlux(0.05, 0.3, -10), "negative height").toBe(1);
+    expect(linePlumeDilutionFromFlux(0.05, 0, 10), "no buoyancy").toBe(1);
+  });
 });

@@ -12,6 +12,7 @@ import { evaluateScenario } from "../../../core/study/evaluate";
 import { evaluatePoint } from "../../../core/study/evaluate-point";
 import { withOverrides } from "../../../core/study/overrides";
 import { expandCases } from "../../../core/cases";
+import { planMonteCarlo, runMonteCarloChunk, VERDICT_CODE } from "../../../core/study/montecarlo";
 import { stepDurations } from "../../../core/record/steps";
 import { weightedQuantile, valueExceededFor } from "../../../core/record/summary";
 import { recordFromCsv } from "../../../core/record/csv";
@@ -235,5 +236,34 @@ describe("ambient record from CSV", () => {
     expect(!a.ok && a.message).toMatch(/column 2 "speed \(m\/s\)"/);
     const b = recordFromCsv("time,currentSpeed,currentDirection\n0,1\n");
     expect(!b.ok && b.message).toMatch(/line 2 has 2 cells/);
+  });
+});
+
+describe("Monte Carlo over a record with a refused step", () => {
+  it("keeps each step's numbers under its own name: the refused step is refused in every run, the others unchanged", () => {
+    const record = (depth: number[]) =>
+      scenarioWith({
+        ambient: {
+          record: { time: hours(4), currentSpeed: [0.1, 0.2, 0.2, 0.3], currentDirection: [90, 90, 90, 90], depth },
+        },
+      });
+    const withRefused = record([15, 15, 1.05, 15]);
+    const allValid = record([15, 15, 15, 15]);
+    const chunk = (s: ReturnType<typeof record>) => {
+      const p = planMonteCarlo(s, 3, 7);
+      if (!p.ok) throw new Error(p.issues.map((i) => i.message).join("; "));
+      expect(p.plan.caseNames, "one case per step").toHaveLength(4);
+      return runMonteCarloChunk(s, p.plan, 0, 3, evaluateScenario);
+    };
+    const a = chunk(withRefused);
+    const b = chunk(allValid);
+    for (let k = 0; k < 3; k++) {
+      expect(a.pass[2]![k], `run ${k}: the 1.05 m step is refused`).toBe(VERDICT_CODE.refused);
+      expect(a.edgeDilution[2]![k]).toBeNaN();
+      for (const step of [0, 1, 3]) {
+        expect(a.edgeDilution[step]![k], `run ${k}, step ${step}: its own dilution`).toBe(b.edgeDilution[step]![k]);
+        expect(a.pass[step]![k]).toBe(b.pass[step]![k]);
+      }
+    }
   });
 });
