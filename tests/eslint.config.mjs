@@ -43,7 +43,15 @@ const CORE_FORBIDDEN = [
 
 export default tseslint.config(
   {
-    ignores: ["node_modules/**", "dist/**", "release/**", "test-artifacts/**", "**/*.d.mts", "tests/mutation/.stryker-tmp/**", "tests/mutation/.reports/**"],
+    ignores: [
+      "node_modules/**",
+      "dist/**",
+      "release/**",
+      "test-artifacts/**",
+      "**/*.d.mts",
+      "tests/mutation/.stryker-tmp/**",
+      "tests/mutation/.reports/**",
+    ],
   },
   {
     files: ["**/*.{ts,tsx,mts,mjs,cjs}"],
