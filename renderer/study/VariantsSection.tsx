@@ -128,8 +128,10 @@ export function VariantsSection({
       );
   };
   const exportCsv = () => {
-    void exportFile("brinefield-variants.csv", variantsCsv(rows), [{ name: "CSV", extensions: ["csv"] }]).catch(
-      (error: unknown) => setProblem(`Could not export: ${error instanceof Error ? error.message : String(error)}`),
+    void exportFile("brinefield-variants.csv", variantsCsv(rows, undefined, (compared?.study ?? study)?.name), [
+      { name: "CSV", extensions: ["csv"] },
+    ]).catch((error: unknown) =>
+      setProblem(`Could not export: ${error instanceof Error ? error.message : String(error)}`),
     );
   };
   const openVariant = () => {

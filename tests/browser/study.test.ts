@@ -232,6 +232,14 @@ describe("a study as a document in the app", () => {
     await page.screenshot({ path: join(artifacts, "study-compare-1280x720.png") });
     const overflowSmall = await page.locator(".study-panel").evaluate((el) => el.scrollWidth - el.clientWidth);
     expect(overflowSmall, "nor at 1280×720").toBeLessThanOrEqual(1);
+    const [csvDownload] = await Promise.all([
+      page.waitForEvent("download"),
+      page.click("[data-command=study-compare-csv]"),
+    ]);
+    const comparePath = join(artifacts, "study-compare.csv");
+    await csvDownload.saveAs(comparePath);
+    const first = readFileSync(comparePath, "utf8").split(/\r?\n/)[0]!;
+    expect(first, "the caution, then the study's name, as compare --csv writes it").toMatch(/^"?Caution:.*,study: \S/);
     await page.locator("[data-role=variant-editor]").scrollIntoViewIfNeeded();
     await page.screenshot({ path: join(artifacts, "study-variant-1280x720.png") });
     await page.setViewportSize({ width: 1440, height: 900 });
