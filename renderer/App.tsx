@@ -17,7 +17,7 @@ import * as host from "./platform/host";
 import { ResultsPanel } from "./results/ResultsPanel";
 import { useRecordRun } from "./record/useRecordRun";
 import { RecordIntakeSection } from "./inputs/RecordIntakeSection";
-import { RecordChart, RecordStatus, RecordSummary } from "./record/RecordPanel";
+import { RecordChart, RecordStatus, RecordSummary, RecordTable } from "./record/RecordPanel";
 import { ClaimPanel } from "./results/ClaimPanel";
 import { applyDesign, type Action } from "./state/actions";
 import {
@@ -117,7 +117,9 @@ export function App() {
     [engineRun, recordRun.result, recordRun.running],
   );
   const hasRecord = Boolean(engineRun.scenario?.ambient.record);
-  const chartTabs = useTabs<ChartTab>("chart", hasRecord ? RECORD_CHART_TABS : CHART_TABS, chart, setChart);
+  // The record tabs leave with the record: a removed record shows the trajectory again.
+  const shownChart: ChartTab = !hasRecord && (chart === "record" || chart === "duration") ? "trajectory" : chart;
+  const chartTabs = useTabs<ChartTab>("chart", hasRecord ? RECORD_CHART_TABS : CHART_TABS, shownChart, setChart);
   const docRef = useRef(doc);
   docRef.current = doc;
   const flash = useCallback((message: string) => {
@@ -675,18 +677,22 @@ export function App() {
                 </div>
                 <div className="chart-body" {...chartTabs.panel}>
                   {result && scenario ? (
-                    chart === "trajectory" ? (
+                    shownChart === "trajectory" ? (
                       chartAsTable ? (
                         <TrajectoryTable result={result} scenario={scenario} unitSystem={unitSystem} />
                       ) : (
                         <TrajectoryChart result={result} scenario={scenario} unitSystem={unitSystem} />
                       )
-                    ) : chart === "record" || chart === "duration" ? (
-                      <RecordChart result={result} kind={chart === "record" ? "time" : "duration"} />
+                    ) : shownChart === "record" || shownChart === "duration" ? (
+                      chartAsTable ? (
+                        <RecordTable result={result} />
+                      ) : (
+                        <RecordChart result={result} kind={shownChart === "record" ? "time" : "duration"} />
+                      )
                     ) : chartAsTable ? (
-                      <DistanceTable result={result} unitSystem={unitSystem} quantity={chart} />
+                      <DistanceTable result={result} unitSystem={unitSystem} quantity={shownChart} />
                     ) : (
-                      <DistanceChart result={result} unitSystem={unitSystem} quantity={chart} />
+                      <DistanceChart result={result} unitSystem={unitSystem} quantity={shownChart} />
                     )
                   ) : null}
                 </div>

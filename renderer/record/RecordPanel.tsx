@@ -64,3 +64,41 @@ export function RecordChart({ result, kind }: { result: BrinefieldResult; kind: 
     <div className="chart record-chart" data-role={`record-${kind}-chart`} dangerouslySetInnerHTML={{ __html: svg }} />
   );
 }
+
+/** The record's series as a table: one row per step, the numbers the time chart draws. */
+export function RecordTable({ result }: { result: BrinefieldResult }) {
+  const rec = result.record;
+  if (!rec) return <div className="placeholder">The record has not been computed yet.</div>;
+  const s = rec.series;
+  const num = (v: number | null | undefined, digits = 4) =>
+    v === null || v === undefined ? "—" : formatNumber(v, digits);
+  return (
+    <div className="chart-table" data-role="record-table">
+      <table>
+        <caption>Ambient record, one row per step (time from the first step)</caption>
+        <thead>
+          <tr>
+            <th scope="col">Time (h)</th>
+            <th scope="col">Edge dilution (×)</th>
+            <th scope="col">Required dilution (×)</th>
+            <th scope="col">Salinity increase at the edge (g/kg)</th>
+            <th className="text" scope="col">
+              Verdict
+            </th>
+          </tr>
+        </thead>
+        <tbody>
+          {s.time.map((t, i) => (
+            <tr key={i}>
+              <td>{formatNumber(t / 3600, 4)}</td>
+              <td>{num(s.edgeDilution[i])}</td>
+              <td>{num(s.requiredDilution[i])}</td>
+              <td>{num(s.salinityIncrease[i], 3)}</td>
+              <td className="text">{s.verdict[i]}</td>
+            </tr>
+          ))}
+        </tbody>
+      </table>
+    </div>
+  );
+}

@@ -93,12 +93,21 @@ describe("ambient record in the app", () => {
 
   it("Cancel stops the record and leaves no verdict over it", async () => {
     await page.locator("[data-command=record-restart], [data-command=record-remove]").first().waitFor();
-    // Any edit re-runs the record; cancel it while it runs.
+    // Any edit re-runs the record; cancel it while it runs. A fast machine finishes the 720 steps in a few
+    // seconds, so the click is made in the page the moment the Cancel button appears.
+    await page.evaluate(() => {
+      const observer = new MutationObserver(() => {
+        const cancel = document.querySelector<HTMLButtonElement>("[data-command=record-cancel]");
+        if (cancel) {
+          observer.disconnect();
+          cancel.click();
+        }
+      });
+      observer.observe(document.body, { subtree: true, childList: true });
+    });
     const depth = page.getByLabel("Water depth at diffuser");
     await depth.fill("16.5");
     await depth.press("Enter");
-    await page.locator("[data-role=record-status][data-state=running]").waitFor({ timeout: 60_000 });
-    await page.locator("[data-command=record-cancel]").click();
     await page.locator("[data-role=record-status][data-state=cancelled]").waitFor({ timeout: 30_000 });
     expect(
       await page.locator("[data-role=verdict]").getAttribute("data-verdict"),
@@ -120,4 +129,23 @@ describe("ambient record in the app", () => {
       .poll(() => page.locator("[data-role=record-summary]").textContent(), { timeout: 60_000 })
       .toMatch(/Ambient record: 3 steps/);
   }, 120_000);
+
+  it("shows the record as a table, one row per step, and removing it takes its chart tabs away", async () => {
+    await page.locator("[data-command=chart-record]").click();
+    await page.locator("[data-command=chart-as-table]").click();
+    await expect.poll(() => page.locator("[data-role=record-table] tbody tr").count(), { timeout: 30_000 }).toBe(3);
+    expect(await page.locator("[data-role=record-table] th").first().textContent()).toBe("Time (h)");
+    expect(await page.locator("[data-role=record-table] tbody tr").nth(1).locator("td").first().textContent()).toBe(
+      "1",
+    );
+    await page.locator("[data-command=chart-as-table]").click();
+    await page.locator("[data-command=chart-duration]").click();
+    await page.locator("[data-command=record-remove]").click();
+    await expect.poll(() => page.locator("[data-command=chart-duration]").count(), { timeout: 30_000 }).toBe(0);
+    expect(await page.locator("[data-role=record-duration-chart]").count(), "no record chart left").toBe(0);
+    expect(
+      await page.locator("[role=tablist][aria-label=Chart] [aria-selected=true]").textContent(),
+      "the side view (trajectory) tab is selected",
+    ).toBe("Side view");
+  }, 60_000);
 });

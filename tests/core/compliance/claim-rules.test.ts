@@ -18,7 +18,7 @@ function fake(
   chains: Chain[],
   opts: {
     edge?: number;
-    ranges?: Record<string, [number, number] | null>;
+    ranges?: Record<string, readonly [number, number] | null>;
     impact?: Record<string, number | null>;
     merge?: number;
   } = {},
