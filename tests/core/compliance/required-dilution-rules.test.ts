@@ -167,3 +167,89 @@ describe("complianceFromEdgeDilution() — one verdict per limit, the smallest m
     expect(w.parameter).toBe("mixingZone.limits");
   });
 });
+
+describe("complianceFromEdgeDilution() in an enclosed basin — the edge dilutes toward the raised background", () => {
+  // Well-mixed box (Officer 1976 ch. 5; Fischer et al. 1979 ch. 7, from memory): Δ = Q_d·(C_d − C_n)/Q_e.
+  // Q_d = 0.1 m³/s, C_d = 70, C_n = 33.5 g/kg, Q_e = 10 m³/s → Δ = 0.365 g/kg, raised background 33.865 g/kg.
+  const basinScenario = (limits: LimitInput[]) =>
+    scenarioFixture({
+      ambient: { basin: { volume: 1e6, exchangeFlow: 10 } },
+      mixingZone: { radius: 100, limits },
+    });
+
+  it("requires (C_d − C_raised)/(C_natural + allowed − C_raised) and reports both backgrounds", () => {
+    const a = complianceFromEdgeDilution(
+      basinScenario([{ constituent: "salinity", maxIncrease: 2, unit: "g/kg" }]),
+      30,
+      33.5,
+      20,
+    );
+    const required = (70 - 33.865) / (33.5 + 2 - 33.865);
+    expect(a.compliance.requiredDilution).toBeCloseTo(required, 9);
+    expect(a.compliance.margin).toBeCloseTo(30 / required, 9);
+    expect(a.compliance.pass).toBe(true);
+    expect(a.compliance.constituents[0]!.limit).toBe(
+      "salinity at most 2 g/kg above background 33.5 g/kg; background raised by the basin build-up to 33.87 g/kg",
+    );
+    const sal = a.constituents[0]!;
+    expect(sal.background, "the water around the outfall").toBeCloseTo(33.865, 9);
+    expect(sal.naturalBackground).toBe(33.5);
+    expect(sal.concentration).toBeCloseTo(33.865 + (70 - 33.865) / 30, 9);
+    expect(sal.increase, "above the natural background").toBeCloseTo(33.865 + (70 - 33.865) / 30 - 33.5, 9);
+    const t = a.constituents[1]!;
+    expect(t.background, "no temperature excess, no build-up").toBe(20);
+    expect(a.basin).toMatchObject({ exchangeFlow: 10, volume: 1e6, flushingTime: 1e5, naturalBackground: 33.5 });
+    expect(a.basin!.backgroundIncrease).toBeCloseTo(0.365, 12);
+    expect(a.basin!.raisedBackground).toBeCloseTo(33.865, 12);
+    expect(a.basin!.timeTo95Percent, "(V/Q_e)·ln 20").toBeCloseTo(1e5 * Math.log(20), 6);
+    expect(a.basin!.constituents.map((c) => c.constituent)).toEqual(["salinity", "temperature"]);
+    const w = a.warnings.find((x) => x.code === "basin-background-raised")!;
+    expect(w.severity).toBe("info");
+    expect(w.parameter).toBe("ambient.basin");
+    expect(w.value).toBeCloseTo(0.365, 12);
+    expect(w.message).toMatch(
+      /^Enclosed basin: a well-mixed box model raises the salinity background by 0\.365 g\/kg \(to 33\.87 g\/kg; 95 % of it within 3\.47 days; exchange flow 10 m³\/s\)\. /,
+    );
+    expect(w.message).toContain(
+      "required dilution = (C_discharge − C_raised)/(C_natural + allowed increase − C_raised)",
+    );
+  });
+
+  it("can never meet a limit between the natural and the raised background, and says the basin is why", () => {
+    const a = complianceFromEdgeDilution(
+      basinScenario([{ constituent: "salinity", maxConcentration: 33.8, unit: "g/kg" }]),
+      1e4,
+      33.5,
+      20,
+    );
+    expect(a.compliance.pass).toBe(false);
+    expect(a.compliance.requiredDilution).toBe(Infinity);
+    expect(a.compliance.constituents[0]!.limit).toBe(
+      "salinity at most 33.8 g/kg: can never be met — the limit 33.8 g/kg is at or below the background 33.87 raised by the basin build-up",
+    );
+    const w = a.warnings.find((x) => x.code === "limit-below-background")!;
+    expect(w.message).toBe(
+      "The salinity limit (33.8 g/kg) is at or below the background raised by the basin build-up (33.87); no dilution meets it.",
+    );
+    expect(w.parameter).toBe("ambient.basin");
+    const open = complianceFromEdgeDilution(
+      withLimits([{ constituent: "salinity", maxConcentration: 33.8, unit: "g/kg" }]),
+      1e4,
+      33.5,
+      20,
+    );
+    expect(open.compliance.pass, "the same limit in open water is met").toBe(true);
+  });
+
+  it("builds up from a limit's own natural background when it gives one", () => {
+    const a = complianceFromEdgeDilution(
+      basinScenario([{ constituent: "salinity", maxIncrease: 2, unit: "g/kg", background: 35 }]),
+      30,
+      33.5,
+      20,
+    );
+    // Δ = 0.1·(70 − 35)/10 = 0.35 → raised 35.35; S_req = (70 − 35.35)/(35 + 2 − 35.35).
+    expect(a.basin!.backgroundIncrease).toBeCloseTo(0.35, 12);
+    expect(a.compliance.requiredDilution).toBeCloseTo((70 - 35.35) / (37 - 35.35), 9);
+  });
+});
