@@ -3,7 +3,6 @@
  * (psu, TDS) to Absolute Salinity, uniform ambient to a two-point profile, defaults, cross-field rules.
  * Every problem is reported as an issue with the path, the value given and what is expected.
  */
-import { create, unitDependencies, createUnitDependencies } from "mathjs";
 import type {
   AmbientCase,
   AmbientCaseField,
@@ -19,18 +18,10 @@ import type {
 import type { SalinityValue, ScenarioFileParsed } from "./schema";
 import { blendingAtRatio, brineFlowFromPlant, brineFromPlant } from "./plant";
 import { absoluteSalinityFromPractical, salinityFromTds } from "../properties";
-import { formatNumber } from "../units";
+import { convertUnit, formatNumber } from "../units";
 import { issue, type ScenarioIssue } from "./issue";
 import { scenarioRuleIssues } from "./rules";
 import { normaliseRecord } from "../record/normalise";
-
-// mathjs units, created on first use: study worker threads run scenarios that are already normalised.
-let mathUnits: ReturnType<typeof create> | null = null;
-
-function math(): ReturnType<typeof create> {
-  mathUnits ??= create({ unitDependencies, createUnitDependencies });
-  return mathUnits;
-}
 
 export { issue, type ScenarioIssue } from "./issue";
 export { MAX_EXIT_VELOCITY } from "./rules";
@@ -233,7 +224,7 @@ function limitValueInUnit(
   }
   try {
     const target = key === "temperature" ? "degC" : unit;
-    const converted = math().unit(value, u).toNumber(target);
+    const converted = convertUnit(value, u, target);
     if (Number.isFinite(converted)) {
       ctx.conversions.push(`${path}: ${raw} → ${formatNumber(converted)} ${target}`);
       return converted;
