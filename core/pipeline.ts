@@ -31,7 +31,11 @@ import { DENSE_SOURCE_CODES, risingScopeReasons } from "./rising/scope";
 import { portFlowsAndHydraulics, type PortHydraulics } from "./multiport/port-hydraulics";
 import { multiportFromNearField, MERGING_SOURCE } from "./multiport/merging";
 import { complianceFromEdgeDilution, type ComplianceAssessment } from "./compliance/required-dilution";
-import { viscosityFromST, SHARQAWY_2010_VISCOSITY_SOURCE } from "./correlations/sharqawy-2010-viscosity";
+import {
+  viscosityFromST,
+  viscosityFromSTValidityIssues,
+  SHARQAWY_2010_VISCOSITY_SOURCE,
+} from "./correlations/sharqawy-2010-viscosity";
 import {
   CAUTION,
   RESULT_FORMAT,
@@ -72,13 +76,21 @@ export interface RunOptions {
  * with the brine's own viscosity; its warnings cover each port's exit velocity.
  */
 export function portFromScenario(scenario: Scenario, props: PropertiesStage): PortHydraulics {
-  const nu = viscosityFromST(scenario.discharge.salinity, scenario.discharge.temperature) / props.dischargeDensity;
-  return portFlowsAndHydraulics({
+  const { salinity, temperature } = scenario.discharge;
+  const nu = viscosityFromST(salinity, temperature) / props.dischargeDensity;
+  const hydraulics = portFlowsAndHydraulics({
     scenario,
     dischargeDensity: props.dischargeDensity,
     ambientDensity: props.ambientDensityAtPort,
     kinematicViscosity: nu,
   });
+  // The viscosity fit's own range (Sharqawy et al. 2010: 0–150 g/kg, 0–180 °C) is checked where it is used.
+  const viscosityWarnings = viscosityFromSTValidityIssues(salinity, temperature).map((w) => ({
+    ...w,
+    parameter: `discharge.${w.parameter}`,
+    stage: "port",
+  }));
+  return { ...hydraulics, warnings: [...hydraulics.warnings, ...viscosityWarnings] };
 }
 
 /** Builds the jet of the mean port. */
