@@ -25,7 +25,10 @@
  */
 import { warning, type ResultWarning } from "../warnings";
 import {
+  emptyNearFieldHeadline,
+  NEAR_FIELD_HEADLINE_FIELDS,
   nullNearFieldResult,
+  type NearFieldHeadlineField,
   type AmbientColumn,
   type JetSource,
   type NearFieldMethodResult,
@@ -191,16 +194,7 @@ export function nearFieldLengthScale(jet: JetSource, column: AmbientColumn): Nea
 
   // Headline: where datasets disagree, the value less favourable to the verdict (lower dilution, higher
   // rise, longer reach); every dataset's own values stay in `variants` and the range shows the spread.
-  const top: Record<HeadlineField, number | null> = {
-    maxRiseHeight: null,
-    maxRiseDistance: null,
-    returnDistance: null,
-    impactDistance: null,
-    impactDilution: null,
-    nearFieldDistance: null,
-    nearFieldDilution: null,
-    maxRiseDilution: null,
-  };
+  const top: Record<HeadlineField, number | null> = emptyNearFieldHeadline();
   const from: Partial<Record<HeadlineField, string>> = {};
   for (const f of HEADLINE_FIELDS) {
     const lower = DILUTION_FIELDS.has(f);
@@ -299,25 +293,8 @@ export function nearFieldLengthScale(jet: JetSource, column: AmbientColumn): Nea
   };
 }
 
-type HeadlineField =
-  | "maxRiseHeight"
-  | "maxRiseDistance"
-  | "returnDistance"
-  | "impactDistance"
-  | "impactDilution"
-  | "nearFieldDistance"
-  | "nearFieldDilution"
-  | "maxRiseDilution";
-const HEADLINE_FIELDS: readonly HeadlineField[] = [
-  "maxRiseHeight",
-  "maxRiseDistance",
-  "returnDistance",
-  "impactDistance",
-  "impactDilution",
-  "nearFieldDistance",
-  "nearFieldDilution",
-  "maxRiseDilution",
-];
+type HeadlineField = NearFieldHeadlineField;
+const HEADLINE_FIELDS = NEAR_FIELD_HEADLINE_FIELDS;
 const DILUTION_FIELDS: ReadonlySet<HeadlineField> = new Set(["impactDilution", "nearFieldDilution", "maxRiseDilution"]);
 
 const BIAS =
