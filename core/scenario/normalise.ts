@@ -11,15 +11,15 @@ import type {
   ConstituentInput,
   DiffuserInput,
   LimitInput,
-  ProfilePoint,
   Scenario,
   UncertainInput,
 } from "./types";
-import type { SalinityValue, ScenarioFileParsed } from "./schema";
+import type { ScenarioFileParsed } from "./schema";
 import { blendingAtRatio, brineFlowFromPlant, brineFromPlant } from "./plant";
-import { absoluteSalinityFromPractical, salinityFromTds } from "../properties";
-import { convertUnit, formatNumber } from "../units";
-import { issue, type ScenarioIssue } from "./issue";
+import { formatNumber } from "../units";
+import { issue, type NormaliseContext, type ScenarioIssue } from "./issue";
+import { buildProfile, resolveSalinity, type RawAmbientLike } from "./normalise-ambient";
+import { parseLimitValue } from "./normalise-limits";
 import { scenarioRuleIssues } from "./rules";
 import { normaliseRecord } from "../record/normalise";
 
@@ -34,207 +34,7 @@ export function defaultDiffuserAzimuth(portAzimuth: number): number {
 /** Default salt rejection of seawater RO membranes when not given (common practice, no source). */
 export const DEFAULT_SALT_REJECTION = 0.997;
 
-type Ctx = { issues: ScenarioIssue[]; conversions: string[] };
-
-function resolveSalinity(s: SalinityValue, temperature: number, path: string, ctx: Ctx): number {
-  if (s.basis === "absolute") return s.value;
-  if (s.basis === "practical") {
-    const sa = absoluteSalinityFromPractical(s.value);
-    ctx.conversions.push(
-      `${path}: ${String(s.raw)} practical salinity → ${formatNumber(sa)} g/kg Absolute Salinity (TEOS-10 reference-composition factor 35.16504/35)`,
-    );
-    return sa;
-  }
-  const sa = salinityFromTds(s.value, temperature, 0);
-  ctx.conversions.push(
-    `${path}: ${String(s.raw)} total dissolved solids → ${formatNumber(sa)} g/kg (divided by the solution's density at ${formatNumber(temperature)} °C, atmospheric pressure)`,
-  );
-  return sa;
-}
-
-interface RawAmbientLike {
-  depth?: number;
-  salinity?: SalinityValue;
-  temperature?: number;
-  profile?: { depth: number; salinity: SalinityValue; temperature: number }[];
-  currentSpeed?: number;
-  currentDirection?: number;
-}
-
-function buildProfile(
-  a: RawAmbientLike,
-  depth: number,
-  path: string,
-  ctx: Ctx,
-): { profile: ProfilePoint[]; uniform: boolean } | null {
-  if (a.profile && (a.salinity !== undefined || a.temperature !== undefined)) {
-    ctx.issues.push(
-      issue(
-        `${path}.profile`,
-        "(profile and uniform values)",
-        "give either a profile or uniform salinity and temperature, not both",
-      ),
-    );
-    return null;
-  }
-  if (a.profile) {
-    const pts = a.profile.map((p, i) => ({
-      depth: p.depth,
-      temperature: p.temperature,
-      salinity: resolveSalinity(p.salinity, p.temperature, `${path}.profile.${i}.salinity`, ctx),
-    }));
-    const below = pts.findIndex((p) => p.depth > depth);
-    if (below >= 0) {
-      ctx.issues.push(
-        issue(
-          `${path}.profile.${below}.depth`,
-          pts[below]!.depth,
-          `is below the seabed (the water is ${formatNumber(depth)} m deep)`,
-          [`${path}.depth`],
-        ),
-      );
-      return null;
-    }
-    pts.sort((p, q) => p.depth - q.depth);
-    for (let i = 1; i < pts.length; i++) {
-      if (pts[i]!.depth === pts[i - 1]!.depth) {
-        ctx.issues.push(issue(`${path}.profile`, pts[i]!.depth, "lists the same depth twice; each depth once"));
-        return null;
-      }
-    }
-    if (pts[0]!.depth > 0) {
-      ctx.conversions.push(
-        `${path}.profile: extended from ${formatNumber(pts[0]!.depth)} m up to the surface with the shallowest point's values`,
-      );
-      pts.unshift({ ...pts[0]!, depth: 0 });
-    }
-    const last = pts[pts.length - 1]!;
-    if (last.depth < depth) {
-      ctx.conversions.push(
-        `${path}.profile: extended from ${formatNumber(last.depth)} m down to the seabed at ${formatNumber(depth)} m with the deepest point's values`,
-      );
-      pts.push({ ...last, depth });
-    }
-    return {
-      profile: pts,
-      uniform: pts.every((p) => p.salinity === pts[0]!.salinity && p.temperature === pts[0]!.temperature),
-    };
-  }
-  if (a.salinity === undefined) {
-    ctx.issues.push(issue(`${path}.salinity`, undefined, "expected the ambient salinity (g/kg) or a profile"));
-    return null;
-  }
-  if (a.temperature === undefined) {
-    ctx.issues.push(issue(`${path}.temperature`, undefined, "expected the ambient temperature (°C) or a profile"));
-    return null;
-  }
-  const s = resolveSalinity(a.salinity, a.temperature, `${path}.salinity`, ctx);
-  return {
-    profile: [
-      { depth: 0, salinity: s, temperature: a.temperature },
-      { depth, salinity: s, temperature: a.temperature },
-    ],
-    uniform: true,
-  };
-}
-
-/** Which value of a limit is read: the allowed increase, the allowed concentration or the background. */
-type LimitField = "maxIncrease" | "maxConcentration" | "background";
-
-/** Number-like text that is not a plain decimal (hex, octal, binary): refused rather than guessed. */
-const NON_DECIMAL = /^\s*[-+]?0[xob]/i;
-
-/**
- * A limit value, written as a number or as a string with a unit, converted to the constituent's unit and
- * then put through the same finite, sign and range checks whichever way it was written.
- */
-function parseLimitValue(
-  raw: number | string | undefined,
-  constituent: string,
-  unit: string,
-  field: LimitField,
-  path: string,
-  ctx: Ctx,
-): number | undefined {
-  if (raw === undefined) return undefined;
-  const value = limitValueInUnit(raw, constituent, unit, field === "maxIncrease", path, ctx);
-  if (value === undefined) return undefined;
-  const problem = limitValueProblem(value, constituent, unit, field);
-  if (problem) {
-    ctx.issues.push(issue(path, raw, problem));
-    return undefined;
-  }
-  return value;
-}
-
-/** Null when the value is acceptable for the field, else what is expected. */
-function limitValueProblem(value: number, constituent: string, unit: string, field: LimitField): string | null {
-  if (!Number.isFinite(value) || Math.abs(value) > 1e9)
-    return `must be a finite number (in ${unit}) of at most 1e9 in size`;
-  if (field === "maxIncrease") {
-    if (value === 0) return "must be a positive increase (a zero increase can never be met)";
-    if (value < 0) return `must be a positive increase (in ${unit})`;
-    return null;
-  }
-  if (constituent === "temperature") {
-    // Seawater and brine temperatures: the scenario's own bounds (-2 to 60 °C); a limit may sit up to 100 °C.
-    const hi = field === "background" ? 60 : 100;
-    return value < -2 || value > hi ? `must be a temperature from -2 to ${hi} °C` : null;
-  }
-  if (field === "background") return value < 0 ? `must not be negative (a background concentration, in ${unit})` : null;
-  // An absolute limit of zero or below can never be met by dilution.
-  return value <= 0 ? `must be a positive concentration (in ${unit}); a limit of zero or less can never be met` : null;
-}
-
-function limitValueInUnit(
-  raw: number | string,
-  constituent: string,
-  unit: string,
-  isIncrease: boolean,
-  path: string,
-  ctx: Ctx,
-): number | undefined {
-  if (typeof raw === "number") return raw;
-  if (NON_DECIMAL.test(raw)) {
-    ctx.issues.push(
-      issue(
-        path,
-        raw,
-        `must be a decimal number with an optional unit (in ${unit}); hex, octal and binary forms are not accepted`,
-      ),
-    );
-    return undefined;
-  }
-  const m = /^\s*([-+]?(?:\d+\.?\d*|\.\d+)(?:e[-+]?\d+)?)\s*(.*)$/i.exec(raw);
-  if (!m) {
-    ctx.issues.push(issue(path, raw, `must be a number with an optional unit (in ${unit})`));
-    return undefined;
-  }
-  const value = Number(m[1]);
-  const u = m[2]!.trim();
-  if (u === "" || u === unit) return value;
-  const key = constituent.toLowerCase();
-  // Practical-salinity values and increments both scale by the reference-composition factor (linear).
-  if (key === "salinity" && /^(psu|pss)$/i.test(u)) return absoluteSalinityFromPractical(value);
-  if (key === "salinity" && /^(g\/kg|ppt|‰)$/i.test(u)) return value;
-  if (key === "temperature" && isIncrease) {
-    // A temperature increase is a difference: 1 °F of difference is 5/9 K (exact).
-    if (/^(degF|°F|F)$/i.test(u)) return (value * 5) / 9;
-    if (/^(degC|°C|C|K)$/i.test(u)) return value;
-  }
-  try {
-    const target = key === "temperature" ? "degC" : unit;
-    const converted = convertUnit(value, u, target);
-    if (Number.isFinite(converted)) {
-      ctx.conversions.push(`${path}: ${raw} → ${formatNumber(converted)} ${target}`);
-      return converted;
-    }
-  } catch {
-    // fall through to the message below
-  }
-  ctx.issues.push(issue(path, raw, `has a unit that cannot be converted to the constituent's unit (${unit})`));
-  return undefined;
-}
+type Ctx = NormaliseContext;
 
 function basinFrom(b: { volume: number; flushingTime?: number; exchangeFlow?: number }, ctx: Ctx): BasinInput {
   if ((b.flushingTime === undefined) === (b.exchangeFlow === undefined))
