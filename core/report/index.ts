@@ -1,14 +1,10 @@
-export {
-  reportHtml,
-  reportBody,
-  documentHtml,
-  appendixHtml,
-  questionAsked,
-  resultCell,
-  resultSources,
-  REPORT_SECTIONS,
-} from "./html";
-export type { ReportInput, ReportOptions, DocumentHead } from "./html";
+export { reportHtml, reportBody, appendixHtml, REPORT_SECTIONS } from "./html";
+export type { ReportInput, ReportOptions } from "./html";
+export { documentHtml } from "./document";
+export type { DocumentHead } from "./document";
+export { questionAsked } from "./verdict-sections";
+export { resultCell } from "./section-parts";
+export { resultSources } from "./provenance";
 export { resultCsv, seriesCsv, studyResultCsv, studySeriesCsv, RESULT_CSV_COLUMNS, SERIES_CSV_COLUMNS } from "./csv";
 export { reportNumber, reportValue, densityNumber, reportPercent, escapeHtml, REPORT_SIGNIFICANT } from "./format";
 export {
