@@ -1,7 +1,8 @@
 /** The report's methods table and reference list, from the sources the result cites. */
 import type { BrinefieldResult } from "../result/contract";
 import { html, join, type RawHtml } from "./format";
-import { referencesFromSources, secondaryQuotationsFor, type Reference } from "./references";
+import { referencesFromSources, secondaryQuotationsFor } from "./reference-lookup";
+import type { Reference } from "./reference-entry";
 
 /** Every source string the result cites, for the reference list. */
 export function resultSources(result: BrinefieldResult): string[] {
