@@ -15,7 +15,7 @@
  */
 import type { Scenario } from "./scenario/types";
 import { inputsHash } from "./scenario/hash";
-import { propertiesFromScenario, type PropertiesStage } from "./properties";
+import { propertiesFromScenario } from "./properties";
 import type { AmbientColumn, JetSource, NearFieldMethodResult, PathSink } from "./nearfield/types";
 import { nearFieldLengthScale } from "./nearfield/lengthScale";
 import { nearFieldIntegral } from "./nearfield/integral";
@@ -28,14 +28,9 @@ import { risingFarFieldStage, risingFootprintStage } from "./rising/stage";
 import { risingMultiport, RISING_MERGING_SOURCE, type RisingMethod } from "./rising/merging";
 import { blendSignChange } from "./rising/blend";
 import { DENSE_SOURCE_CODES, risingScopeReasons } from "./rising/scope";
-import { portFlowsAndHydraulics, type PortHydraulics } from "./multiport/port-hydraulics";
 import { multiportFromNearField, MERGING_SOURCE } from "./multiport/merging";
 import { complianceFromEdgeDilution, type ComplianceAssessment } from "./compliance/required-dilution";
-import {
-  viscosityFromST,
-  viscosityFromSTValidityIssues,
-  SHARQAWY_2010_VISCOSITY_SOURCE,
-} from "./correlations/sharqawy-2010-viscosity";
+import { SHARQAWY_2010_VISCOSITY_SOURCE } from "./correlations/sharqawy-2010-viscosity";
 import {
   CAUTION,
   RESULT_FORMAT,
@@ -47,7 +42,6 @@ import {
   type DensitiesResult,
   type MixingZoneResult,
   type MultiportResult,
-  type PortResult,
 } from "./result/contract";
 import { complianceWithScope, scopeReasons } from "./compliance/scope";
 import { expandCases, overallFromCases, runCases } from "./cases";
@@ -57,6 +51,7 @@ import { runRecordSteps } from "./record/run";
 import { withIntakeCases, withRecord } from "./record/result";
 import { caseDetail, summaryWithIntake } from "./intake/summary";
 import { intakeFromResult } from "./intake/intake";
+import { portFromScenario, jetFromScenario } from "./multiport/port-stage";
 
 export interface RunOptions {
   /** Include the integral model's path in the result (default true; Monte Carlo turns it off). */
@@ -69,46 +64,6 @@ export interface RunOptions {
    * physics, less output).
    */
   readonly detail?: "full" | "edge";
-}
-
-/**
- * Port flows, velocity, Froude and Reynolds numbers for every port under the flow split (core/multiport),
- * with the brine's own viscosity; its warnings cover each port's exit velocity.
- */
-export function portFromScenario(scenario: Scenario, props: PropertiesStage): PortHydraulics {
-  const { salinity, temperature } = scenario.discharge;
-  const nu = viscosityFromST(salinity, temperature) / props.dischargeDensity;
-  const hydraulics = portFlowsAndHydraulics({
-    scenario,
-    dischargeDensity: props.dischargeDensity,
-    ambientDensity: props.ambientDensityAtPort,
-    kinematicViscosity: nu,
-  });
-  // The viscosity fit's own range (Sharqawy et al. 2010: 0–150 g/kg, 0–180 °C) is checked where it is used.
-  const viscosityWarnings = viscosityFromSTValidityIssues(salinity, temperature).map((w) => ({
-    ...w,
-    parameter: `discharge.${w.parameter}`,
-    stage: "port",
-  }));
-  return { ...hydraulics, warnings: [...hydraulics.warnings, ...viscosityWarnings] };
-}
-
-/** Builds the jet of the mean port. */
-export function jetFromScenario(scenario: Scenario, props: PropertiesStage, port: PortResult): JetSource {
-  const d = scenario.diffuser;
-  return {
-    diameter: d.portDiameter,
-    flow: port.flow,
-    velocity: port.velocity,
-    density: props.dischargeDensity,
-    salinity: scenario.discharge.salinity,
-    temperature: scenario.discharge.temperature,
-    angle: d.portAngle,
-    azimuth: d.portAzimuth,
-    portHeight: d.portHeight,
-    reducedGravity: props.reducedGravity,
-    froude: port.froude,
-  };
 }
 
 function dedupe(ws: readonly ResultWarning[]): ResultWarning[] {

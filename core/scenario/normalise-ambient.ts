@@ -1,9 +1,10 @@
 /**
  * Part of normalising a scenario (normalise.ts): salinity bases (psu, TDS) to Absolute Salinity and the
- * ambient (uniform or a profile) to a sorted, checked profile.
+ * ambient (uniform or a profile) to a sorted, checked profile; the stated ambient and the ambient cases.
  */
-import type { ProfilePoint } from "./types";
-import type { SalinityValue } from "./schema";
+import type { AmbientCase, AmbientCaseField, AmbientInput, BasinInput, ProfilePoint } from "./types";
+import type { SalinityValue, ScenarioFileParsed } from "./schema";
+import { normaliseRecord } from "../record/normalise";
 import { absoluteSalinityFromPractical, salinityFromTds } from "../properties";
 import { formatNumber } from "../units";
 import { issue, type NormaliseContext as Ctx } from "./issue";
@@ -108,4 +109,96 @@ export function buildProfile(
     ],
     uniform: true,
   };
+}
+
+/** The stated ambient: its profile, current, bed slope, basin and record. Null (with issues) when unusable. */
+export function ambientFromFile(f: ScenarioFileParsed, ctx: Ctx): AmbientInput | null {
+  const a = f.ambient;
+  const depth = a.depth;
+  const prof = buildProfile(a as RawAmbientLike, depth, "ambient", ctx);
+  const ambient: AmbientInput | null = prof && {
+    depth,
+    profile: prof.profile,
+    uniform: prof.uniform,
+    currentSpeed: num(a.currentSpeed, 0),
+    currentDirection: num(a.currentDirection, 0),
+    bedSlope: num(a.bedSlope, 0),
+    bedSlopeAzimuth: num(a.bedSlopeAzimuth, 0),
+    ...(a.basin ? { basin: basinFrom(a.basin, ctx) } : {}),
+  };
+  if (ambient && a.record) {
+    // One note for the whole column: the conversions themselves follow resolveSalinity.
+    const quiet: Ctx = { issues: ctx.issues, conversions: [] };
+    const rec = normaliseRecord(a.record, ambient.profile[ambient.profile.length - 1]!.temperature, (sv, t) =>
+      resolveSalinity(sv, t, "ambient.record.salinity", quiet),
+    );
+    ctx.issues.push(...rec.issues);
+    ctx.conversions.push(...rec.notes);
+    if (rec.record) (ambient as { record?: AmbientInput["record"] }).record = rec.record;
+  }
+  return ambient;
+}
+
+function basinFrom(b: { volume: number; flushingTime?: number; exchangeFlow?: number }, ctx: Ctx): BasinInput {
+  if ((b.flushingTime === undefined) === (b.exchangeFlow === undefined))
+    ctx.issues.push(
+      issue(
+        "ambient.basin",
+        "(basin)",
+        'must give exactly one of flushingTime (s, e.g. "10 days") or exchangeFlow (m³/s) beside the volume',
+      ),
+    );
+  return b.flushingTime !== undefined
+    ? { volume: b.volume, flushingTime: b.flushingTime }
+    : { volume: b.volume, exchangeFlow: b.exchangeFlow };
+}
+
+function num(v: number | undefined, fallback: number): number {
+  return v === undefined ? fallback : v;
+}
+
+/** The ambient cases: each the stated ambient with the fields it sets. */
+export function ambientCasesFromFile(f: ScenarioFileParsed, ambient: AmbientInput | null, ctx: Ctx): AmbientCase[] {
+  const ambientCases: AmbientCase[] = [];
+  (f.ambientCases ?? []).forEach((c, i) => {
+    if (!ambient) return;
+    const cd = c.depth ?? ambient.depth;
+    const hasOwnWater = c.profile !== undefined || c.salinity !== undefined || c.temperature !== undefined;
+    let profile = ambient.profile.map((p) => ({ ...p }));
+    let uniform = ambient.uniform;
+    if (hasOwnWater) {
+      const base = ambient.profile[0]!;
+      const own: RawAmbientLike = c.profile
+        ? { profile: c.profile }
+        : {
+            salinity: c.salinity ?? { basis: "absolute", value: base.salinity, raw: base.salinity },
+            temperature: c.temperature ?? base.temperature,
+          };
+      const pr = buildProfile(own, cd, `ambientCases.${i}`, ctx);
+      if (!pr) return;
+      profile = pr.profile;
+      uniform = pr.uniform;
+    } else if (cd !== ambient.depth) {
+      const last = profile[profile.length - 1]!;
+      if (last.depth < cd) profile.push({ ...last, depth: cd });
+    }
+    const sets: AmbientCaseField[] = [];
+    if (c.depth !== undefined) sets.push("depth");
+    if (c.salinity !== undefined || c.profile !== undefined) sets.push("salinity");
+    if (c.temperature !== undefined || c.profile !== undefined) sets.push("temperature");
+    if (c.currentSpeed !== undefined) sets.push("currentSpeed");
+    if (c.currentDirection !== undefined) sets.push("currentDirection");
+    ambientCases.push({
+      ...ambient,
+      name: c.name,
+      weight: c.weight ?? 1,
+      sets,
+      depth: cd,
+      profile,
+      uniform,
+      currentSpeed: c.currentSpeed ?? ambient.currentSpeed,
+      currentDirection: c.currentDirection ?? ambient.currentDirection,
+    });
+  });
+  return ambientCases;
 }

@@ -5,6 +5,8 @@
 import { absoluteSalinityFromPractical } from "../properties";
 import { convertUnit, formatNumber } from "../units";
 import { issue, type NormaliseContext as Ctx } from "./issue";
+import type { ConstituentInput, LimitInput } from "./types";
+import type { ScenarioFileParsed } from "./schema";
 
 /** Which value of a limit is read: the allowed increase, the allowed concentration or the background. */
 type LimitField = "maxIncrease" | "maxConcentration" | "background";
@@ -102,4 +104,45 @@ function limitValueInUnit(
   }
   ctx.issues.push(issue(path, raw, `has a unit that cannot be converted to the constituent's unit (${unit})`));
   return undefined;
+}
+
+/** The mixing zone's limits, each in its constituent's unit; problems are added to the issues. */
+export function limitsFromFile(
+  f: ScenarioFileParsed,
+  constituents: readonly ConstituentInput[],
+  ctx: Ctx,
+): LimitInput[] {
+  const limits: LimitInput[] = [];
+  f.mixingZone.limits.forEach((l, i) => {
+    const path = `mixingZone.limits.${i}`;
+    const key = l.constituent.toLowerCase();
+    const c = constituents.find((x) => x.name.toLowerCase() === key);
+    if (key !== "salinity" && key !== "temperature" && !c) {
+      ctx.issues.push(
+        issue(
+          `${path}.constituent`,
+          l.constituent,
+          `must be "salinity", "temperature" or a name listed under discharge.constituents`,
+        ),
+      );
+      return;
+    }
+    const unit = key === "salinity" ? "g/kg" : key === "temperature" ? "degC" : c!.unit;
+    if ((l.maxIncrease === undefined) === (l.maxConcentration === undefined)) {
+      ctx.issues.push(issue(path, l.constituent, "must give exactly one of maxIncrease or maxConcentration"));
+      return;
+    }
+    const inc = parseLimitValue(l.maxIncrease, key, unit, "maxIncrease", `${path}.maxIncrease`, ctx);
+    const abs = parseLimitValue(l.maxConcentration, key, unit, "maxConcentration", `${path}.maxConcentration`, ctx);
+    const bg = parseLimitValue(l.background, key, unit, "background", `${path}.background`, ctx);
+    limits.push({
+      constituent: key === "salinity" || key === "temperature" ? key : c!.name,
+      unit,
+      ...(inc !== undefined ? { maxIncrease: inc } : {}),
+      ...(abs !== undefined ? { maxConcentration: abs } : {}),
+      ...(bg !== undefined ? { background: bg } : {}),
+      ...(l.basis ? { basis: l.basis } : {}),
+    });
+  });
+  return limits;
 }
