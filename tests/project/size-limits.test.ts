@@ -25,7 +25,6 @@ const LONG_FUNCTIONS_TO_SPLIT: Readonly<Record<string, number>> = {
   "core/cli/commands/sweep.ts#run": 153,
   "core/cli/commands/uncertainty.ts#run": 131,
   "core/cli/summary.ts#summaryText": 195,
-  "core/compliance/required-dilution.ts#complianceFromEdgeDilution": 136,
   "core/multiport/merging.ts#multiportFromNearField": 137,
   "core/nearfield/integral.ts#nearFieldIntegral": 155,
   "core/nearfield/integralResult.ts#assembleIntegralResult": 242,
