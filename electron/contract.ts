@@ -57,8 +57,39 @@ export type MenuCommand =
   | "units-si"
   | "units-us";
 
+type Reply<K extends HostResponse["kind"]> = Extract<HostResponse, { kind: K }>;
+
+/**
+ * Each request kind paired with the replies main sends to it. Any request may also be answered with
+ * `{kind: "error"}`; any other reply is a broken contract, reported as an error on both sides (never
+ * read as "cancelled").
+ */
+export const HOST_REPLY_KINDS = {
+  "open-scenario": ["opened", "cancelled"],
+  "open-path": ["opened"],
+  "save-file": ["saved", "cancelled"],
+  "export-file": ["saved", "cancelled"],
+  "print-pdf": ["saved", "cancelled"],
+  "recent-files": ["recent"],
+  "autosave-write": ["ok"],
+  "autosave-read": ["autosave"],
+  "autosave-clear": ["ok"],
+  "set-document-state": ["ok"],
+} as const satisfies { readonly [K in HostRequest["kind"]]: readonly HostResponse["kind"][] };
+
+export type HostRequestKind = HostRequest["kind"];
+/** The request of one kind. */
+export type HostRequestOf<K extends HostRequestKind> = Extract<HostRequest, { kind: K }>;
+/** The replies a request of kind K can get, "error" included. */
+export type HostReplyTo<K extends HostRequestKind> = Reply<(typeof HOST_REPLY_KINDS)[K][number]> | Reply<"error">;
+
+/** True when `response` is one of the replies a request of kind `kind` can get. */
+export function isReplyTo<K extends HostRequestKind>(kind: K, response: HostResponse): response is HostReplyTo<K> {
+  return response.kind === "error" || (HOST_REPLY_KINDS[kind] as readonly string[]).includes(response.kind);
+}
+
 export interface BrinefieldHost {
-  invoke(request: HostRequest): Promise<HostResponse>;
+  invoke<K extends HostRequestKind>(request: HostRequestOf<K>): Promise<HostReplyTo<K>>;
   /** `path` is set only for "open-recent" (additive: listeners may ignore it). */
   onMenu(listener: (command: MenuCommand, path?: string) => void): () => void;
   readonly platform: string;

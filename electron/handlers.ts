@@ -8,7 +8,7 @@
  * (open) or a Save dialog (save), so a compromised page cannot read or clobber arbitrary files.
  */
 import { dirname, extname, isAbsolute, join, resolve } from "node:path";
-import type { FileFilter, HostRequest, HostResponse } from "./contract";
+import { isReplyTo, type FileFilter, type HostRequest, type HostResponse } from "./contract";
 import {
   MAX_SCENARIO_BYTES,
   type AutosaveStore,
@@ -287,6 +287,11 @@ export function createHostHandlers(deps: HostHandlerDeps): HostHandlers {
         const detail = error instanceof Error ? error.message.split("\n")[0] : String(error);
         const message = `The app could not complete “${parsed.request.kind}”: ${detail}`;
         response = { kind: "error", message };
+      }
+      const replyKind: string = response.kind;
+      if (!isReplyTo(parsed.request.kind, response)) {
+        log(`reply "${replyKind}" does not answer "${parsed.request.kind}"`);
+        response = { kind: "error", message: `The app gave no valid reply to “${parsed.request.kind}”.` };
       }
       if (parsed.request.kind === "save-file") deps.onSaveResult?.(response);
       return response;

@@ -5,7 +5,15 @@
  * renderer an `ipcRenderer`, an `IpcRendererEvent` or any other Electron object.
  */
 import { IPC_INVOKE, IPC_MENU } from "./contract";
-import type { BrinefieldHost, HostRequest, HostResponse, MenuCommand } from "./contract";
+import {
+  isReplyTo,
+  type BrinefieldHost,
+  type HostReplyTo,
+  type HostRequestKind,
+  type HostRequestOf,
+  type HostResponse,
+  type MenuCommand,
+} from "./contract";
 
 export const CHANNEL_PREFIX = "brinefield:";
 
@@ -54,11 +62,11 @@ export function createHostBridge(ipc: BridgeIpc, platform: string): BrinefieldHo
   const invokeChannel = checkedChannel(IPC_INVOKE);
   const menuChannel = checkedChannel(IPC_MENU);
   const host: BrinefieldHost = {
-    async invoke(request: HostRequest): Promise<HostResponse> {
+    async invoke<K extends HostRequestKind>(request: HostRequestOf<K>): Promise<HostReplyTo<K>> {
       try {
         const response = await ipc.invoke(invokeChannel, request);
-        if (isHostResponse(response)) return response;
-        return { kind: "error", message: "The host sent no valid response." };
+        if (isHostResponse(response) && isReplyTo(request.kind, response)) return response;
+        return { kind: "error", message: `The host sent no valid reply to “${String(request.kind)}”.` };
       } catch (error) {
         // Structured-clone failures and a closed channel surface here; the renderer sees one message.
         const message = error instanceof Error ? error.message.split("\n")[0] : "IPC failed";

@@ -181,55 +181,8 @@ export function complianceFromEdgeDilution(
   });
   const verdicts: ConstituentCompliance[] = [];
   for (const limit of scenario.mixingZone.limits) {
-    const source = sources.find((s) => s.name.toLowerCase() === limit.constituent.toLowerCase());
-    if (!source) {
-      warnings.push(
-        warning(
-          "limit-constituent-unknown",
-          "serious",
-          `Limit on "${limit.constituent}" names no known constituent; it was not checked.`,
-          {
-            parameter: "mixingZone.limits",
-            stage: "compliance",
-          },
-        ),
-      );
-      continue;
-    }
-    const lim = limitFor({ ...source, background: limit.background ?? source.background }, limit);
-    // With a basin the limit stays relative to the natural background while the water carries the raised
-    // one: S_req = (C_d − C_raised)/(C_natural + allowed − C_raised).
-    const dilutesToward = basin ? raisedOf(source.name, lim.background) : lim.background;
-    const required = requiredDilutionFromLimit(source.discharge, dilutesToward, lim.absolute);
-    const pass = Number.isFinite(required) && edgeDilution >= required;
-    const margin = Number.isFinite(required) ? edgeDilution / required : 0;
-    let text = lim.text;
-    if (!Number.isFinite(required)) {
-      text += `: can never be met — the limit ${lim.absolute} ${limit.unit} is at or below the background ${formatNumber(dilutesToward)}${basin ? " raised by the basin build-up" : ""}`;
-      warnings.push(
-        warning(
-          "limit-below-background",
-          "serious",
-          basin
-            ? `The ${source.name} limit (${formatNumber(lim.absolute)} ${limit.unit}) is at or below the background raised by the basin build-up (${formatNumber(dilutesToward)}); no dilution meets it.`
-            : `The ${source.name} limit (${lim.absolute} ${limit.unit}) is at or below background (${lim.background}); no dilution meets it.`,
-          { parameter: basin ? "ambient.basin" : "mixingZone.limits", value: lim.absolute, stage: "compliance" },
-        ),
-      );
-    } else if (required === 1) {
-      text += ": met by the undiluted discharge";
-    }
-    if (basin && Number.isFinite(required))
-      text += `; background raised by the basin build-up to ${formatNumber(dilutesToward)} ${unitSymbol(limit.unit)}`;
-    verdicts.push({
-      constituent: source.name,
-      unit: limit.unit,
-      requiredDilution: required,
-      edgeDilution,
-      pass,
-      margin,
-      limit: text,
-    });
+    const v = limitVerdict({ limit, sources, edgeDilution, basin, raisedOf, warnings });
+    if (v) verdicts.push(v);
   }
   if (!verdicts.length) {
     warnings.push(
@@ -266,5 +219,67 @@ export function complianceFromEdgeDilution(
     constituents,
     warnings,
     ...(basin ? { basin } : {}),
+  };
+}
+
+/** One limit's verdict at the edge (null, with a warning, when it names no known constituent). */
+function limitVerdict(input: {
+  readonly limit: LimitInput;
+  readonly sources: readonly ConstituentSource[];
+  readonly edgeDilution: number;
+  readonly basin: BasinResult | null;
+  /** The raised background of a constituent with a basin, else the fallback. */
+  readonly raisedOf: (name: string, fallback: number) => number;
+  readonly warnings: ResultWarning[];
+}): ConstituentCompliance | null {
+  const { limit, sources, edgeDilution, basin, raisedOf, warnings } = input;
+  const source = sources.find((s) => s.name.toLowerCase() === limit.constituent.toLowerCase());
+  if (!source) {
+    warnings.push(
+      warning(
+        "limit-constituent-unknown",
+        "serious",
+        `Limit on "${limit.constituent}" names no known constituent; it was not checked.`,
+        {
+          parameter: "mixingZone.limits",
+          stage: "compliance",
+        },
+      ),
+    );
+    return null;
+  }
+  const lim = limitFor({ ...source, background: limit.background ?? source.background }, limit);
+  // With a basin the limit stays relative to the natural background while the water carries the raised
+  // one: S_req = (C_d − C_raised)/(C_natural + allowed − C_raised).
+  const dilutesToward = basin ? raisedOf(source.name, lim.background) : lim.background;
+  const required = requiredDilutionFromLimit(source.discharge, dilutesToward, lim.absolute);
+  const pass = Number.isFinite(required) && edgeDilution >= required;
+  const margin = Number.isFinite(required) ? edgeDilution / required : 0;
+  let text = lim.text;
+  if (!Number.isFinite(required)) {
+    text += `: can never be met — the limit ${lim.absolute} ${limit.unit} is at or below the background ${formatNumber(dilutesToward)}${basin ? " raised by the basin build-up" : ""}`;
+    warnings.push(
+      warning(
+        "limit-below-background",
+        "serious",
+        basin
+          ? `The ${source.name} limit (${formatNumber(lim.absolute)} ${limit.unit}) is at or below the background raised by the basin build-up (${formatNumber(dilutesToward)}); no dilution meets it.`
+          : `The ${source.name} limit (${lim.absolute} ${limit.unit}) is at or below background (${lim.background}); no dilution meets it.`,
+        { parameter: basin ? "ambient.basin" : "mixingZone.limits", value: lim.absolute, stage: "compliance" },
+      ),
+    );
+  } else if (required === 1) {
+    text += ": met by the undiluted discharge";
+  }
+  if (basin && Number.isFinite(required))
+    text += `; background raised by the basin build-up to ${formatNumber(dilutesToward)} ${unitSymbol(limit.unit)}`;
+  return {
+    constituent: source.name,
+    unit: limit.unit,
+    requiredDilution: required,
+    edgeDilution,
+    pass,
+    margin,
+    limit: text,
   };
 }

@@ -4,6 +4,46 @@
  * the Brooks (1960) field width.
  */
 import { dilutionFromProfile, type JetProfile } from "./jet-series";
+import { warning, type ResultWarning } from "../warnings";
+import type { FootprintResult } from "../result/contract";
+import type { GoverningLayer } from "./stage";
+
+export interface FootprintStageInput {
+  /** The far-field stage's governing chain (null: nothing reached the seabed, no footprint). */
+  readonly governing: GoverningLayer | null;
+  /** The compliance stage's governing required dilution. */
+  readonly requiredDilution: number;
+  /** "edge" runs leave the footprint empty (the edge verdict does not read it). */
+  readonly detail?: "full" | "edge";
+}
+
+/**
+ * The footprint stage: the seabed area below the governing required dilution along the governing chain,
+ * with a warning when the limit is still exceeded at the end of the computed range.
+ */
+export function footprintStage(input: FootprintStageInput): { footprint: FootprintResult; warnings: ResultWarning[] } {
+  const g = input.governing;
+  if (!g || input.detail === "edge") return { footprint: { area: 0, furthestExtent: 0 }, warnings: [] };
+  const footprint = footprintFromLayer(
+    { profile: g.profile, impactDistance: g.impactDistance, nearFieldEnd: g.nearFieldEnd },
+    g.layer,
+    input.requiredDilution,
+  );
+  const warnings: ResultWarning[] = [];
+  if (footprint.furthestExtent >= g.range * 0.999) {
+    warnings.push(
+      warning(
+        "footprint-beyond-range",
+        "warning",
+        `The governing limit is still exceeded at ${footprint.furthestExtent.toFixed(0)} m, the end of the computed range; the footprint is larger than reported.`,
+        {
+          stage: "far-field",
+        },
+      ),
+    );
+  }
+  return { footprint, warnings };
+}
 
 export interface FootprintJet {
   readonly profile: JetProfile;

@@ -1,5 +1,5 @@
-export { beyondNearField, NOT_MODELLED } from "./stage";
-export type { BeyondInput, BeyondOutput } from "./stage";
+export { farFieldStage, NOT_MODELLED, STAGNANT_CURRENT } from "./stage";
+export type { FarFieldInput, FarFieldOutput, GoverningLayer } from "./stage";
 export {
   entrainmentFromRichardson,
   entrainmentFromRichardsonValidityIssues,
@@ -32,5 +32,5 @@ export type { SpreadingLayerInput, SpreadingLayerSeries } from "./gravity-curren
 export { jetProfileFromNearField, dilutionFromProfile, nearFieldEndFromResult } from "./jet-series";
 export type { JetProfile } from "./jet-series";
 export { erf } from "./erf";
-export { footprintFromLayer } from "./footprint";
+export { footprintFromLayer, footprintStage } from "./footprint";
 export type { FootprintJet, FootprintLayer } from "./footprint";

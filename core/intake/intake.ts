@@ -28,6 +28,7 @@
 import type { IntakeInput, Scenario } from "../scenario/types";
 import type { SeriesResult } from "../result/contract";
 import { GRAVITY } from "../multiport";
+import { interpolateLinear } from "../interpolate";
 
 /** Front Froude number c/√(g′h) of a gravity current in deep water (Benjamin 1968; value from memory). */
 export const FRONT_FROUDE_DEEP = Math.SQRT2;
@@ -51,17 +52,6 @@ export interface IntakeSample {
   readonly upstreamReach: number | null;
   /** Background salinity the increase is counted from (seabed water), g/kg; set by intakeFromResult. */
   readonly background?: number;
-}
-
-function interpolate(xs: readonly number[], ys: readonly number[], x: number): number {
-  if (x <= xs[0]!) return ys[0]!;
-  for (let i = 1; i < xs.length; i++) {
-    if (x <= xs[i]!) {
-      const t = (x - xs[i - 1]!) / (xs[i]! - xs[i - 1]!);
-      return ys[i - 1]! + t * (ys[i]! - ys[i - 1]!);
-    }
-  }
-  return ys[ys.length - 1]!;
 }
 
 /** Layer thickness at x (nearest computed value at or before x; null inside the jet or where not computed). */
@@ -136,11 +126,15 @@ export function intakeFromSeries(
   }
   if (r <= r0) return reached(s0, "near field: the dilution the jet hands to the seabed layer", upstreamReach);
   if (u === 0)
-    return reached(interpolate(series.distance, series.dilution, r), "slack water: layer spreading radially", null);
+    return reached(
+      interpolateLinear(series.distance, series.dilution, r),
+      "slack water: layer spreading radially",
+      null,
+    );
   if (upstreamReach === null) {
     const up = bearingDifference(intake.bearing, current.direction) > 90;
     return reached(
-      interpolate(series.distance, series.dilution, r),
+      interpolateLinear(series.distance, series.dilution, r),
       up
         ? "upstream, front not arrested within the computed layer: taken to reach the intake"
         : "downstream or across: layer drifting with the current",
@@ -149,7 +143,7 @@ export function intakeFromSeries(
   }
   if (r <= upstreamReach)
     return reached(
-      interpolate(series.distance, series.dilution, r),
+      interpolateLinear(series.distance, series.dilution, r),
       "upstream, within the layer's arrested front",
       upstreamReach,
     );

@@ -321,7 +321,7 @@ export function nearFieldIntegral(
     } finally {
       sink?.end();
     }
-    result = assembleIntegralResult(
+    result = assembleIntegralResult({
       jet,
       column,
       params,
@@ -334,7 +334,7 @@ export function nearFieldIntegral(
       path,
       maxSteps,
       maxLength,
-    );
+    });
   } finally {
     if (usingShared) stepperBusy = false;
   }

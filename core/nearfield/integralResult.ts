@@ -61,21 +61,30 @@ function planDistance(y: Float64Array): number {
   return Math.hypot(y[IX], y[IY]);
 }
 
+/** What one run of the integral model left to assemble its result from. */
+export interface IntegralRunOutcome {
+  readonly jet: JetSource;
+  readonly column: AmbientColumn;
+  readonly params: IntegralParams;
+  readonly run: AdaptiveResult;
+  /** The events the run hit (impact, maximum rise, …), in order. */
+  readonly log: EventLog;
+  /** Why the run stopped early, if it did: the jet became a passive layer or was trapped. */
+  readonly stopKind: "passive-layer" | "trapped" | null;
+  /** Discharge volume flux of the port, m³/s. */
+  readonly q0: number;
+  /** Exit velocity, m/s. */
+  readonly u0: number;
+  readonly includePath: boolean;
+  readonly path: IntegralPathBuffer;
+  readonly maxSteps: number;
+  /** Arc length at which the integration stops, m. */
+  readonly maxLength: number;
+}
+
 /** Turns the integrator's run into the method result: events, warnings, numbers, notes. */
-export function assembleIntegralResult(
-  jet: JetSource,
-  column: AmbientColumn,
-  params: IntegralParams,
-  run: AdaptiveResult,
-  log: EventLog,
-  stopKind: "passive-layer" | "trapped" | null,
-  q0: number,
-  u0: number,
-  includePath: boolean,
-  path: IntegralPathBuffer,
-  maxSteps: number,
-  maxLength: number,
-): NearFieldMethodResult {
+export function assembleIntegralResult(outcome: IntegralRunOutcome): NearFieldMethodResult {
+  const { jet, column, params, run, log, stopKind, q0, u0, includePath, path, maxSteps, maxLength } = outcome;
   const warnings: ResultWarning[] = [];
   const notes: string[] = [];
   const events: NearFieldEvent[] = [];

@@ -135,6 +135,24 @@ export interface PathSink {
   end(): void;
 }
 
+/** The headline numbers every near-field method reports (null where a method has none). */
+export const NEAR_FIELD_HEADLINE_FIELDS = [
+  "maxRiseHeight",
+  "maxRiseDistance",
+  "returnDistance",
+  "impactDistance",
+  "impactDilution",
+  "nearFieldDistance",
+  "nearFieldDilution",
+  "maxRiseDilution",
+] as const;
+export type NearFieldHeadlineField = (typeof NEAR_FIELD_HEADLINE_FIELDS)[number];
+
+/** Every headline field, null. */
+export function emptyNearFieldHeadline(): Record<NearFieldHeadlineField, number | null> {
+  return Object.fromEntries(NEAR_FIELD_HEADLINE_FIELDS.map((f) => [f, null])) as Record<NearFieldHeadlineField, null>;
+}
+
 /**
  * A method's result with every number null (inputs it cannot run with, so "not available"), to be
  * completed by the caller. `reason` says why (default: the bias text).
@@ -151,14 +169,7 @@ export function nullNearFieldResult(
     source,
     available: false,
     notAvailableReason: reason ?? bias,
-    maxRiseHeight: null,
-    maxRiseDistance: null,
-    returnDistance: null,
-    impactDistance: null,
-    impactDilution: null,
-    nearFieldDistance: null,
-    nearFieldDilution: null,
-    maxRiseDilution: null,
+    ...(emptyNearFieldHeadline() as Record<NearFieldHeadlineField, null>),
     dilutionRange: null,
     impactDilutionFluxAveraged: null,
     nearFieldDilutionFluxAveraged: null,

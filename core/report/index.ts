@@ -1,24 +1,16 @@
-export {
-  reportHtml,
-  reportBody,
-  documentHtml,
-  appendixHtml,
-  questionAsked,
-  resultCell,
-  resultSources,
-  REPORT_SECTIONS,
-} from "./html";
-export type { ReportInput, ReportOptions, DocumentHead } from "./html";
+export { reportHtml, reportBody, appendixHtml, REPORT_SECTIONS } from "./html";
+export type { ReportInput, ReportOptions } from "./html";
+export { documentHtml } from "./document";
+export type { DocumentHead } from "./document";
+export { questionAsked } from "./verdict-sections";
+export { resultCell } from "./section-parts";
+export { resultSources } from "./provenance";
 export { resultCsv, seriesCsv, studyResultCsv, studySeriesCsv, RESULT_CSV_COLUMNS, SERIES_CSV_COLUMNS } from "./csv";
 export { reportNumber, reportValue, densityNumber, reportPercent, escapeHtml, REPORT_SIGNIFICANT } from "./format";
-export {
-  REFERENCES,
-  SECONDARY_QUOTATIONS,
-  referencesFromSources,
-  secondaryQuotationsFor,
-  sourceCites,
-} from "./references";
-export type { Reference, CollectedReferences, SecondaryQuotation } from "./references";
+export { REFERENCES } from "./references";
+export type { Reference } from "./references";
+export { SECONDARY_QUOTATIONS, referencesFromSources, secondaryQuotationsFor, sourceCites } from "./reference-lookup";
+export type { CollectedReferences, SecondaryQuotation } from "./reference-lookup";
 export { sideViewSvg, dilutionChartSvg, sideViewPath, sideViewKeyPoints, linearTicks, logTicks } from "./figures";
 export { valueAtPath, asEntered } from "./inputs";
 export { studyReportHtml, studyComparisonHtml } from "./study";

@@ -108,8 +108,17 @@ export interface SeriesResult {
   readonly salinityIncrease: readonly number[];
   /** Dense-layer thickness, m (null inside the jet). */
   readonly layerThickness: readonly (number | null)[];
-  /** Stage at each point: "jet", "spreading-layer", "passive-diffusion". */
-  readonly stage: readonly string[];
+  /** Stage at each point. */
+  readonly stage: readonly SeriesStage[];
+}
+
+/** The stage a point of the dilution series lies in. */
+export type SeriesStage = "jet" | "spreading-layer" | "passive-diffusion";
+
+/** Seabed area where the governing limit is exceeded. */
+export interface FootprintResult {
+  readonly area: number; // m² of seabed where the governing limit is exceeded
+  readonly furthestExtent: number; // m from the diffuser
 }
 
 export interface MixingZoneResult {
@@ -121,10 +130,7 @@ export interface MixingZoneResult {
   readonly alternatives: readonly { readonly method: string; readonly dilution: number }[];
   readonly constituents: readonly ConstituentAtEdge[];
   readonly layerThickness: number | null; // m at the edge
-  readonly footprint: {
-    readonly area: number; // m² of seabed where the governing limit is exceeded
-    readonly furthestExtent: number; // m from the diffuser
-  };
+  readonly footprint: FootprintResult;
   readonly series: SeriesResult;
   readonly notModelled: readonly string[];
 }

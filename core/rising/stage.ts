@@ -1,7 +1,8 @@
 /**
- * Stage "beyond the near field" for a rising plume: multiport merging (./merging.ts), the surface or
- * trapped field carried to the mixing-zone edge by passive lateral diffusion in the current (Brooks
- * 1960, 4/3 law), and compliance there exactly as for dense discharges (core/compliance).
+ * The far-field and footprint stages for a rising plume (core/pipeline.ts calls them after the rising
+ * multiport stage, ./merging.ts): the surface or trapped field carried to the mixing-zone edge by passive
+ * lateral diffusion in the current (Brooks 1960, 4/3 law); compliance there is the same stage as for dense
+ * discharges (core/compliance).
  *
  * Chain: the field dilution S_f where the plume reaches the surface or its trap level, then
  * S(x) = S_f × S_Brooks(x − x_f) (multiplicative, Fischer et al. 1979, from memory), the field's start
@@ -17,9 +18,8 @@
  */
 import type { Scenario } from "../scenario/types";
 import type { AmbientColumn, JetSource } from "../nearfield/types";
-import type { DensitiesResult, MixingZoneResult, PortResult, SeriesResult } from "../result/contract";
+import type { FootprintResult, SeriesResult, SeriesStage } from "../result/contract";
 import { warning, type ResultWarning } from "../warnings";
-import { complianceFromEdgeDilution } from "../compliance/required-dilution";
 import { dilutionFromProfile, jetProfileFromNearField } from "../farfield/jet-series";
 import {
   BROOKS_1960_SOURCE,
@@ -27,27 +27,57 @@ import {
   brooksDilutionInField,
   brooksFieldFromInput,
 } from "../farfield/brooks-1960-diffusion";
-import { STAGNANT_CURRENT, notModelledFor, type BeyondOutput } from "../farfield/stage";
+import { notModelledFor, type FarFieldMixingZone } from "../farfield/stage";
+import { STAGNANT_CURRENT } from "../farfield/chains";
 import { portCountFromDiffuser } from "../multiport/port-hydraulics";
-import { risingMultiport, RISING_MERGING_SOURCE, type RisingMethod } from "./merging";
+import type { RisingMethod } from "./merging";
 import { interpolateLinear as interpolate } from "../interpolate";
 
-export interface RisingBeyondInput {
+export interface RisingFarFieldInput {
   readonly scenario: Scenario;
   readonly jet: JetSource;
   readonly column: AmbientColumn;
-  readonly densities: DensitiesResult;
-  readonly port: PortResult;
+  /** The rising multiport stage's methods (after merging). */
   readonly methods: readonly RisingMethod[];
   readonly detail?: "full" | "edge";
 }
 
+export interface RisingFarFieldOutput {
+  readonly mixingZone: FarFieldMixingZone;
+  /** Background salinity (g/kg) and temperature (°C) at the level where the field spreads. */
+  readonly background: { readonly salinity: number; readonly temperature: number };
+  readonly warnings: ResultWarning[];
+  readonly methods: { stage: string; name: string; source: string }[];
+}
+
 const degToRad = (d: number) => (d * Math.PI) / 180;
 
-export function risingBeyond(input: RisingBeyondInput): BeyondOutput {
+/** What every method's chain of one scenario shares: the edge, the current and the diffuser's extent. */
+interface RisingContext {
+  readonly radius: number;
+  readonly u: number;
+  readonly crossLength: number;
+  readonly diffuserLength: number;
+  readonly reducedGravity: number;
+}
+
+const speedOf = (ctx: RisingContext, m: RisingMethod) => Math.max(ctx.u, fieldSpreadingSpeed(m, ctx.reducedGravity));
+
+// Carried by the current, the field is as wide as the diffuser seen across the current; spreading on its
+// own, it spreads from the whole diffuser length.
+const widthOf = (ctx: RisingContext, m: RisingMethod) =>
+  2 * m.field.halfWidth + (ctx.u >= fieldSpreadingSpeed(m, ctx.reducedGravity) ? ctx.crossLength : ctx.diffuserLength);
+
+function edgeDilutionOf(ctx: RisingContext, m: RisingMethod): number {
+  if (ctx.radius <= m.field.distance) return dilutionFromProfile(jetProfileFromNearField(m.nf), ctx.radius);
+  const field = brooksFieldFromInput({ initialWidth: widthOf(ctx, m), currentSpeed: speedOf(ctx, m) });
+  return m.field.dilution * brooksDilutionInField(field, ctx.radius - m.field.distance);
+}
+
+/** The rising plume's far-field stage. Never throws for out-of-range physics; returns warnings instead. */
+export function risingFarFieldStage(input: RisingFarFieldInput): RisingFarFieldOutput {
   const { scenario, jet, column } = input;
   const warnings: ResultWarning[] = [];
-  const mp = risingMultiport(scenario, jet, input.methods);
   const radius = scenario.mixingZone.radius;
   const u = column.currentSpeed < STAGNANT_CURRENT ? 0 : column.currentSpeed;
   const d = scenario.diffuser;
@@ -55,54 +85,20 @@ export function risingBeyond(input: RisingBeyondInput): BeyondOutput {
   const diffuserLength = n > 1 ? Math.max(d.length, 0) : 0;
   const crossLength =
     u > 0 ? diffuserLength * Math.abs(Math.sin(degToRad(d.diffuserAzimuth - column.currentDirection))) : diffuserLength;
-  const opts = scenario.options;
-  if (opts.farField === "gravity-current") {
+  const ctx: RisingContext = { radius, u, crossLength, diffuserLength, reducedGravity: jet.reducedGravity };
+  if (scenario.options.farField === "gravity-current") {
     warnings.push(
       warning(
         "rising-no-dense-layer",
         "info",
         "The discharge rises: there is no spreading dense layer; the field at the surface or trap level was carried by passive diffusion.",
-        {
-          parameter: "options.farField",
-          stage: "far-field",
-        },
+        { parameter: "options.farField", stage: "far-field" },
       ),
     );
   }
 
-  const usable = mp.methods.filter((m) => m.nf.available && m.field.kind !== "none");
-  const speedOf = (m: RisingMethod) => Math.max(u, fieldSpreadingSpeed(m, jet.reducedGravity));
-  // Carried by the current, the field is as wide as the diffuser seen across the current; spreading on its
-  // own, it spreads from the whole diffuser length.
-  const widthOf = (m: RisingMethod) =>
-    2 * m.field.halfWidth + (u >= fieldSpreadingSpeed(m, jet.reducedGravity) ? crossLength : diffuserLength);
-  const edgeOf = (m: RisingMethod): number => {
-    if (radius <= m.field.distance) return dilutionFromProfile(jetProfileFromNearField(m.nf), radius);
-    const field = brooksFieldFromInput({ initialWidth: widthOf(m), currentSpeed: speedOf(m) });
-    return m.field.dilution * brooksDilutionInField(field, radius - m.field.distance);
-  };
-  let chosen: RisingMethod | undefined;
-  if (opts.nearFieldForEdge !== "conservative") {
-    chosen = usable.find((m) => m.nf.method === opts.nearFieldForEdge);
-    if (!chosen && usable.length) {
-      warnings.push(
-        warning(
-          "near-field-choice-unavailable",
-          "warning",
-          `Near-field method "${opts.nearFieldForEdge}" gave no result; the more conservative available method was used.`,
-          {
-            parameter: "options.nearFieldForEdge",
-            stage: "far-field",
-          },
-        ),
-      );
-    }
-  }
-  chosen ??= usable.reduce<RisingMethod | undefined>(
-    (lo, m) => (lo === undefined || edgeOf(m) < edgeOf(lo) ? m : lo),
-    undefined,
-  );
-
+  const usable = input.methods.filter((m) => m.nf.available && m.field.kind !== "none");
+  const chosen = governingMethod(ctx, scenario, usable, warnings);
   const full = input.detail !== "edge";
   const alternatives = full
     ? usable.map((m) => ({
@@ -110,20 +106,22 @@ export function risingBeyond(input: RisingBeyondInput): BeyondOutput {
           radius <= m.field.distance
             ? `${m.nf.method} (plume crosses the edge)`
             : `${m.nf.method} ${m.field.kind} field + passive-diffusion`,
-        dilution: edgeOf(m),
+        dilution: edgeDilutionOf(ctx, m),
       }))
     : [];
 
   // Background at the level where the field spreads (surface or trap level).
   const fieldDepth = chosen ? Math.max(0, column.depth - d.portHeight - chosen.field.height) : column.depth;
-  const bgSalinity = interpolate(column.depths, column.salinities, fieldDepth);
-  const bgTemperature = interpolate(column.depths, column.temperatures, fieldDepth);
+  const background = {
+    salinity: interpolate(column.depths, column.salinities, fieldDepth),
+    temperature: interpolate(column.depths, column.temperatures, fieldDepth),
+  };
   let edgeDilution = 1;
   let edgeInside = false;
   let series: SeriesResult = {
     distance: [0],
     dilution: [1],
-    salinityIncrease: [scenario.discharge.salinity - bgSalinity],
+    salinityIncrease: [scenario.discharge.salinity - background.salinity],
     layerThickness: [null],
     stage: ["jet"],
   };
@@ -133,71 +131,26 @@ export function risingBeyond(input: RisingBeyondInput): BeyondOutput {
         "edge-dilution-undiluted",
         "serious",
         "No near-field method reached the surface or a trap level; the edge dilution is taken as 1 (undiluted).",
-        {
-          stage: "far-field",
-        },
+        { stage: "far-field" },
       ),
     );
   } else {
-    edgeDilution = edgeOf(chosen);
+    edgeDilution = edgeDilutionOf(ctx, chosen);
     edgeInside = radius <= chosen.field.distance;
-    if (edgeInside) {
-      warnings.push(
-        warning(
-          "edge-inside-near-field",
-          "info",
-          `The mixing-zone edge (${radius} m) lies inside the rising plume's near field (ends at ${chosen.field.distance.toFixed(1)} m); the plume's own dilution there is used.`,
-          {
-            parameter: "mixingZone.radius",
-            value: radius,
-            stage: "far-field",
-          },
-        ),
-      );
-    }
-    const c = fieldSpreadingSpeed(chosen, jet.reducedGravity);
-    if (c > u && !edgeInside) {
-      warnings.push(
-        warning(
-          "rising-field-own-spreading",
-          "info",
-          `The ${chosen.field.kind === "surface" ? "surface" : "trapped"} field spreads faster (${c.toPrecision(2)} m/s, ${chosen.field.kind === "surface" ? "√(g′h)" : "N·h"}) than the current carries it (${u.toPrecision(2)} m/s): passive diffusion is taken over the time it needs to spread to the edge at that speed (judgement, no source).`,
-          { stage: "far-field" },
-        ),
-      );
-    }
-    warnings.push(
-      ...brooksDilutionFromDistanceValidityIssues({
-        distance: radius,
-        initialWidth: widthOf(chosen),
-        currentSpeed: speedOf(chosen),
-      }),
-    );
+    warnings.push(...chosenFieldWarnings(ctx, chosen, edgeInside));
     if (full)
       series = risingSeries(
         chosen,
         Math.max(2 * radius, 1.2 * chosen.field.distance, 1),
-        scenario.discharge.salinity - bgSalinity,
-        speedOf(chosen),
-        widthOf(chosen),
+        scenario.discharge.salinity - background.salinity,
+        speedOf(ctx, chosen),
+        widthOf(ctx, chosen),
       );
   }
 
-  const assessment = complianceFromEdgeDilution(scenario, edgeDilution, bgSalinity, bgTemperature);
-  warnings.push(...assessment.warnings);
-  // Where the governing limit is exceeded: up to the furthest series point below the required dilution;
-  // the area is that of a circle of that radius (an upper bound for a field drifting with the current).
-  let furthest = 0;
-  const req = assessment.compliance.requiredDilution;
-  for (let i = 0; i < series.distance.length; i++)
-    if (series.dilution[i]! < req) furthest = Math.max(furthest, series.distance[i]!);
-  const footprint = full
-    ? { area: Math.PI * furthest * furthest, furthestExtent: furthest }
-    : { area: 0, furthestExtent: 0 };
-
   const nfName = chosen ? chosen.nf.method : "none";
   const fieldLabel = chosen?.field.kind === "trapped" ? "trapped field" : "surface field";
-  const mixingZone: MixingZoneResult = {
+  const mixingZone: FarFieldMixingZone = {
     radius,
     dilution: edgeDilution,
     method: edgeInside
@@ -206,9 +159,7 @@ export function risingBeyond(input: RisingBeyondInput): BeyondOutput {
     nearFieldMethod: nfName,
     edgeInsideNearField: edgeInside,
     alternatives,
-    constituents: assessment.constituents,
     layerThickness: null,
-    footprint,
     series,
     notModelled: [
       ...notModelledFor(scenario).filter((t) => !/dense layer|stratification beyond/i.test(t)),
@@ -217,36 +168,103 @@ export function risingBeyond(input: RisingBeyondInput): BeyondOutput {
     ],
   };
   const methods = [
-    { stage: "multiport", name: "rising-plume merging and line-plume limit", source: RISING_MERGING_SOURCE },
     {
       stage: "far-field",
       name: "passive lateral diffusion of the surface or trapped field",
       source: `${BROOKS_1960_SOURCE}; carried by the current or by the field's own spreading speed, whichever is faster (judgement, no source)`,
     },
-    {
-      stage: "compliance",
-      name: "required dilution",
-      source: "S_req = (C_d − C_b)/(C_limit − C_b), from the definition of dilution",
-    },
-    ...(assessment.basin
-      ? [{ stage: "background", name: assessment.basin.method, source: assessment.basin.source }]
-      : []),
   ];
-  return {
-    multiport: mp.multiport,
-    nearField: mp.methods.map((m) => m.nf),
-    mixingZone,
-    compliance: assessment.compliance,
-    warnings,
-    methods,
-    ...(assessment.basin ? { basin: assessment.basin } : {}),
-  };
+  return { mixingZone, background, warnings, methods };
+}
+
+/**
+ * The method carried to the edge: the one `options.nearFieldForEdge` names, or the one giving the lower
+ * edge dilution (also when the named one gave no result, with a warning).
+ */
+function governingMethod(
+  ctx: RisingContext,
+  scenario: Scenario,
+  usable: readonly RisingMethod[],
+  warnings: ResultWarning[],
+): RisingMethod | undefined {
+  const opts = scenario.options;
+  let chosen: RisingMethod | undefined;
+  if (opts.nearFieldForEdge !== "conservative") {
+    chosen = usable.find((m) => m.nf.method === opts.nearFieldForEdge);
+    if (!chosen && usable.length) {
+      warnings.push(
+        warning(
+          "near-field-choice-unavailable",
+          "warning",
+          `Near-field method "${opts.nearFieldForEdge}" gave no result; the more conservative available method was used.`,
+          { parameter: "options.nearFieldForEdge", stage: "far-field" },
+        ),
+      );
+    }
+  }
+  return (chosen ??= usable.reduce<RisingMethod | undefined>(
+    (lo, m) => (lo === undefined || edgeDilutionOf(ctx, m) < edgeDilutionOf(ctx, lo) ? m : lo),
+    undefined,
+  ));
+}
+
+/** The governing method's warnings: edge inside the plume, the field's own spreading, Brooks's range. */
+function chosenFieldWarnings(ctx: RisingContext, chosen: RisingMethod, edgeInside: boolean): ResultWarning[] {
+  const { radius, u } = ctx;
+  const warnings: ResultWarning[] = [];
+  if (edgeInside) {
+    warnings.push(
+      warning(
+        "edge-inside-near-field",
+        "info",
+        `The mixing-zone edge (${radius} m) lies inside the rising plume's near field (ends at ${chosen.field.distance.toFixed(1)} m); the plume's own dilution there is used.`,
+        { parameter: "mixingZone.radius", value: radius, stage: "far-field" },
+      ),
+    );
+  }
+  const c = fieldSpreadingSpeed(chosen, ctx.reducedGravity);
+  if (c > u && !edgeInside) {
+    warnings.push(
+      warning(
+        "rising-field-own-spreading",
+        "info",
+        `The ${chosen.field.kind === "surface" ? "surface" : "trapped"} field spreads faster (${c.toPrecision(2)} m/s, ${chosen.field.kind === "surface" ? "√(g′h)" : "N·h"}) than the current carries it (${u.toPrecision(2)} m/s): passive diffusion is taken over the time it needs to spread to the edge at that speed (judgement, no source).`,
+        { stage: "far-field" },
+      ),
+    );
+  }
+  warnings.push(
+    ...brooksDilutionFromDistanceValidityIssues({
+      distance: radius,
+      initialWidth: widthOf(ctx, chosen),
+      currentSpeed: speedOf(ctx, chosen),
+    }),
+  );
+  return warnings;
+}
+
+/**
+ * The rising plume's footprint stage: where the governing limit is exceeded — up to the furthest series
+ * point below the required dilution; the area is that of a circle of that radius (an upper bound for a
+ * field drifting with the current). "edge" runs leave it empty.
+ */
+export function risingFootprintStage(input: {
+  readonly series: SeriesResult;
+  readonly requiredDilution: number;
+  readonly detail?: "full" | "edge";
+}): { footprint: FootprintResult; warnings: ResultWarning[] } {
+  if (input.detail === "edge") return { footprint: { area: 0, furthestExtent: 0 }, warnings: [] };
+  const { series, requiredDilution: req } = input;
+  let furthest = 0;
+  for (let i = 0; i < series.distance.length; i++)
+    if (series.dilution[i]! < req) furthest = Math.max(furthest, series.distance[i]!);
+  return { footprint: { area: Math.PI * furthest * furthest, furthestExtent: furthest }, warnings: [] };
 }
 
 function risingSeries(m: RisingMethod, xEnd: number, excess: number, u: number, width: number): SeriesResult {
   const distance: number[] = [];
   const dilution: number[] = [];
-  const stage: string[] = [];
+  const stage: SeriesStage[] = [];
   const profile = jetProfileFromNearField(m.nf);
   const n = 40;
   for (let i = 0; i < n; i++) {

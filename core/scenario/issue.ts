@@ -26,3 +26,9 @@ export function issue(path: string, value: unknown, expectation: string, related
     ...(related && related.length ? { related } : {}),
   };
 }
+
+/** What normalising collects on the way: the issues found and the unit conversions made. */
+export interface NormaliseContext {
+  readonly issues: ScenarioIssue[];
+  readonly conversions: string[];
+}

@@ -55,29 +55,9 @@ const EXIT_VELOCITY_FIELDS = [
 export function scenarioRuleIssues(s: Scenario): ScenarioIssue[] {
   const out: ScenarioIssue[] = [];
   const d = s.diffuser;
-  const B = FIELD_BOUNDS;
 
   // --- field bounds (the same declaration the file schema is built from) --------------------------------
-  ambientBounds(out, s.ambient, "ambient", false);
-  s.ambientCases.forEach((c, i) => ambientBounds(out, c, `ambientCases.${i}`, true));
-  if (!s.plant) {
-    checkBound(out, "discharge.flow", B["discharge.flow"], s.discharge.flow);
-    checkBound(out, "discharge.salinity", B["discharge.salinity"], s.discharge.salinity);
-    checkBound(out, "discharge.temperature", B["discharge.temperature"], s.discharge.temperature);
-  }
-  const diffuserFields: [BoundedPath, number][] = [
-    ["diffuser.portCount", d.portCount],
-    ["diffuser.portDiameter", d.portDiameterNominal],
-    ["diffuser.portAngle", d.portAngle],
-    ["diffuser.portHeight", d.portHeight],
-    ["diffuser.portAzimuth", d.portAzimuth],
-    ["diffuser.diffuserAzimuth", d.diffuserAzimuth],
-    ["diffuser.length", d.length],
-  ];
-  for (const [path, v] of diffuserFields) checkBound(out, path, B[path], v);
-  if (d.layout !== "single" && d.portCount > 1 && d.portSpacing !== 0)
-    checkBound(out, "diffuser.portSpacing", B["diffuser.portSpacing"], d.portSpacing);
-  checkBound(out, "mixingZone.radius", B["mixingZone.radius"], s.mixingZone.radius);
+  fieldBoundIssues(out, s);
   if (out.length > 0) return out;
 
   // --- port layout ----------------------------------------------------------------------------------------
@@ -178,4 +158,30 @@ export function scenarioRuleIssues(s: Scenario): ScenarioIssue[] {
       );
   });
   return out;
+}
+
+/** Every bounded field of the normalised scenario within its declared bounds (FIELD_BOUNDS). */
+function fieldBoundIssues(out: ScenarioIssue[], s: Scenario): void {
+  const d = s.diffuser;
+  const B = FIELD_BOUNDS;
+  ambientBounds(out, s.ambient, "ambient", false);
+  s.ambientCases.forEach((c, i) => ambientBounds(out, c, `ambientCases.${i}`, true));
+  if (!s.plant) {
+    checkBound(out, "discharge.flow", B["discharge.flow"], s.discharge.flow);
+    checkBound(out, "discharge.salinity", B["discharge.salinity"], s.discharge.salinity);
+    checkBound(out, "discharge.temperature", B["discharge.temperature"], s.discharge.temperature);
+  }
+  const diffuserFields: [BoundedPath, number][] = [
+    ["diffuser.portCount", d.portCount],
+    ["diffuser.portDiameter", d.portDiameterNominal],
+    ["diffuser.portAngle", d.portAngle],
+    ["diffuser.portHeight", d.portHeight],
+    ["diffuser.portAzimuth", d.portAzimuth],
+    ["diffuser.diffuserAzimuth", d.diffuserAzimuth],
+    ["diffuser.length", d.length],
+  ];
+  for (const [path, v] of diffuserFields) checkBound(out, path, B[path], v);
+  if (d.layout !== "single" && d.portCount > 1 && d.portSpacing !== 0)
+    checkBound(out, "diffuser.portSpacing", B["diffuser.portSpacing"], d.portSpacing);
+  checkBound(out, "mixingZone.radius", B["mixingZone.radius"], s.mixingZone.radius);
 }

@@ -20,22 +20,10 @@ export { summariseResult, worstIndex } from "./summary";
 export type { CaseSummary, Evaluator, MethodSummary } from "./summary";
 export { evaluatePoint, evaluatePoints, worstSummary } from "./evaluate-point";
 export type { PointEvaluation } from "./evaluate-point";
-export {
-  planMonteCarlo,
-  runMonteCarloChunk,
-  splitRuns,
-  summariseMonteCarlo,
-  mergeMonteCarloChunks,
-  samplesForRun,
-  histogram,
-} from "./montecarlo";
-export type {
-  MonteCarloPlan,
-  MonteCarloChunk,
-  MonteCarloSummary,
-  MonteCarloStats,
-  MonteCarloSamples,
-} from "./montecarlo";
+export { planMonteCarlo, runMonteCarloChunk, splitRuns, samplesForRun } from "./montecarlo";
+export type { MonteCarloPlan, MonteCarloChunk } from "./montecarlo";
+export { summariseMonteCarlo, mergeMonteCarloChunks, histogram } from "./montecarlo-summary";
+export type { MonteCarloSummary, MonteCarloStats, MonteCarloSamples } from "./montecarlo-summary";
 export { parseSweepAxis, axisFromParts, axisValues, sweepGrid, sweepRows, eosCrossings } from "./sweep";
 export type { SweepAxis, SweepRow, SweepGridPoint, EosCrossing } from "./sweep";
 export {

@@ -8,5 +8,6 @@ export {
   siLabel,
   matchPracticalSalinity,
   matchTds,
+  convertUnit,
 } from "./units";
 export type { QuantityKind, UnitSystem, QuantityParse } from "./units";

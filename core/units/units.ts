@@ -30,6 +30,14 @@ function math(): ReturnType<typeof create> {
   return m;
 }
 
+/**
+ * `value` in `from` expressed in `to`, with the one units instance of core (trade units included).
+ * Throws when mathjs does not know a unit or the two are not of one kind.
+ */
+export function convertUnit(value: number, from: string, to: string): number {
+  return math().unit(value, from).toNumber(to);
+}
+
 /** Kinds of quantity the scenario format uses, with their SI unit and a US customary display unit. */
 export const QUANTITY_KINDS = {
   length: { si: "m", us: "ft", label: "length" },

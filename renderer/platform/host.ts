@@ -4,7 +4,16 @@
  * links and localStorage. Components call these functions and never look at `window.brinefieldHost`.
  */
 import { decodeInputBytes, MAX_INPUT_BYTES, tooLargeMessage } from "../../core/scenario/jsonText";
-import type { BrinefieldHost, FileFilter, HostRequest, HostResponse, MenuCommand } from "../../electron/contract";
+import {
+  isReplyTo,
+  type BrinefieldHost,
+  type FileFilter,
+  type HostReplyTo,
+  type HostRequestKind,
+  type HostRequestOf,
+  type HostResponse,
+  type MenuCommand,
+} from "../../electron/contract";
 
 export type { MenuCommand };
 
@@ -33,12 +42,17 @@ export function isDesktop(): boolean {
   return electronHost() !== null;
 }
 
-async function invoke(request: HostRequest): Promise<HostResponse> {
+/** Sends one request; resolves with one of the replies its kind can get, and throws on "error". */
+async function invoke<K extends HostRequestKind>(
+  request: HostRequestOf<K>,
+): Promise<Exclude<HostReplyTo<K>, { kind: "error" }>> {
   const host = electronHost();
   if (!host) throw new Error("No desktop host");
-  const response = await host.invoke(request);
+  const response: HostResponse = await host.invoke(request);
   if (response.kind === "error") throw new Error(response.message);
-  return response;
+  // The preload checks the pairing too; a reply of another kind is a broken contract, not a cancellation.
+  if (!isReplyTo(request.kind, response)) throw new Error(`Unexpected reply “${response.kind}” to “${request.kind}”.`);
+  return response as Exclude<HostReplyTo<K>, { kind: "error" }>;
 }
 
 // ---- web fallbacks -------------------------------------------------------------------------------

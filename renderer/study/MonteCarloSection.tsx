@@ -4,14 +4,13 @@ import { expandCases } from "../../core/study/cases";
 import { useState } from "react";
 import type { Scenario } from "../../core/scenario/types";
 import { formatNumber } from "../../core/units";
+import { planMonteCarlo, splitRuns } from "../../core/study/montecarlo";
 import {
   histogram,
   mergeMonteCarloChunks,
-  planMonteCarlo,
-  splitRuns,
   summariseMonteCarlo,
   type MonteCarloSummary,
-} from "../../core/study/montecarlo";
+} from "../../core/study/montecarlo-summary";
 import { MonteCarloHistogram } from "./charts";
 import {
   MARGIN_MEANING,

@@ -12,7 +12,7 @@ import type { Overrides } from "../../core/study/overrides";
 import { splitRuns } from "../../core/study/montecarlo";
 import { describeCases, expandCases } from "../../core/study/cases";
 import type { PointEvaluation } from "../../core/study/evaluate-point";
-import type { StudyTask } from "./messages";
+import type { StudyTask } from "../../core/study/worker-protocol";
 import { StudyCancelled, StudyWorkerPool, sharedStudyPool } from "./workerPool";
 import type { Replies } from "./sections";
 import { VariantsSection } from "./VariantsSection";

@@ -29,7 +29,7 @@ import {
   type StudyPart,
   type StudyVariantDoc,
 } from "../state/studyDocument";
-import type { StudyTask } from "./messages";
+import type { StudyTask } from "../../core/study/worker-protocol";
 import type { RunJob } from "./sections";
 import { variantsCsv } from "./variantsCsv";
 import { CompareView } from "./CompareView";

@@ -3,7 +3,7 @@ import type { Scenario } from "../../core/scenario/types";
 import { siToDisplay, type UnitSystem } from "../../core/units";
 import { OVERRIDE_PATHS, type Overrides } from "../../core/study/overrides";
 import type { PointEvaluation } from "../../core/study/evaluate-point";
-import type { StudyTask } from "./messages";
+import type { StudyTask } from "../../core/study/worker-protocol";
 import type { StudyWorkerPool } from "./workerPool";
 import type { AxisDisplay } from "./charts";
 

@@ -4,7 +4,7 @@
  * `cancel()` terminates the workers at once; the pool starts fresh ones for the next job. Between jobs the
  * workers stay alive (`sharedStudyPool`), so later studies run on warm workers.
  */
-import type { StudyReply, StudyTask } from "./messages";
+import type { StudyDone, StudyReply, StudyTask } from "../../core/study/worker-protocol";
 
 export class StudyCancelled extends Error {
   constructor() {
@@ -12,8 +12,6 @@ export class StudyCancelled extends Error {
     this.name = "StudyCancelled";
   }
 }
-
-type Done = Exclude<StudyReply, { kind: "progress" } | { kind: "error" }>;
 
 export class StudyWorkerPool {
   private workers: Worker[] = [];
@@ -29,10 +27,10 @@ export class StudyWorkerPool {
   }
 
   /** Runs tasks on up to `size` workers; `onProgress` gets the summed progress of every task. */
-  run(tasks: readonly StudyTask[], onProgress?: (done: number) => void, maxWorkers = this.size): Promise<Done[]> {
+  run(tasks: readonly StudyTask[], onProgress?: (done: number) => void, maxWorkers = this.size): Promise<StudyDone[]> {
     const workers = this.ensure(Math.max(1, Math.min(maxWorkers, this.size, tasks.length)));
-    return new Promise<Done[]>((resolve, reject) => {
-      const results: Done[] = new Array(tasks.length);
+    return new Promise<StudyDone[]>((resolve, reject) => {
+      const results: StudyDone[] = new Array(tasks.length);
       const progress = new Array<number>(tasks.length).fill(0);
       let next = 0;
       let finished = 0;

@@ -143,4 +143,17 @@ describe("a statically unstable ambient profile", () => {
       "the stable column (swapped) raises nothing",
     ).toBe(false);
   });
+
+  it("checks the viscosity fit's range where the port stage uses it (Sharqawy et al. 2010: 0–150 g/kg)", () => {
+    const raw = load(demos[0]!);
+    const at = (salinity: number) => {
+      const file = { ...raw, discharge: { flow: 0.1, salinity, temperature: 25 } };
+      delete (file as { plant?: unknown }).plant;
+      return runScenario(scenarioOf(file)).warnings.filter((w) => w.code === "viscosity-salinity-range");
+    };
+    const outside = at(155);
+    expect(outside.length, "155 g/kg is outside the fit").toBe(1);
+    expect(outside[0]!.parameter, "names the field").toBe("discharge.salinity");
+    expect(at(70), "70 g/kg is inside").toEqual([]);
+  });
 });

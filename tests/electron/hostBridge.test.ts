@@ -44,9 +44,18 @@ describe("createHostBridge()", () => {
   it("sends requests on the brinefield:invoke channel with the request as the only argument", async () => {
     const fake = fakeIpc();
     const host = createHostBridge(fake.ipc, "linux");
-    const response = await host.invoke({ kind: "recent-files" });
+    const response = await host.invoke({ kind: "autosave-clear" });
     expect(response, "response passed back").toEqual({ kind: "ok" });
-    expect(fake.invoked, "one call").toEqual([{ channel: IPC_INVOKE, args: [{ kind: "recent-files" }] }]);
+    expect(fake.invoked, "one call").toEqual([{ channel: IPC_INVOKE, args: [{ kind: "autosave-clear" }] }]);
+  });
+
+  it("passes back only the replies a request's kind can get: another kind is an error, never a cancellation", async () => {
+    const host = createHostBridge(fakeIpc(() => ({ kind: "cancelled" })).ipc, "linux");
+    const wrong = await host.invoke({ kind: "recent-files" });
+    expect(wrong.kind, "cancelled is no reply to recent-files").toBe("error");
+    expect(wrong.kind === "error" && wrong.message, "names the request").toMatch(/recent-files/);
+    const right = await host.invoke({ kind: "open-scenario" });
+    expect(right, "cancelled answers open-scenario").toEqual({ kind: "cancelled" });
   });
 
   it("turns an IPC failure or a malformed reply into an error response", async () => {

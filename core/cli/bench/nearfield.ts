@@ -31,6 +31,7 @@ import { integrateAdaptive } from "../../ode/adaptive";
 import { stepperDormandPrince45 } from "../../ode/dormandPrince45";
 import type { AmbientColumn, JetSource, NearFieldMethodResult } from "../../nearfield/types";
 import { minimalImpactSolve } from "./minimalSolver";
+import { STANDARD_GRAVITY } from "../../constants";
 
 type SolveODE = (
   f: (t: number, y: number[]) => number[],
@@ -53,7 +54,7 @@ function solveODE(...args: Parameters<SolveODE>): ReturnType<SolveODE> {
   return solveODEInstance(...args);
 }
 
-const G = 9.80665;
+const G = STANDARD_GRAVITY;
 
 export const BENCH_JET: JetSource = {
   diameter: 0.2,

@@ -4,8 +4,8 @@
  * terminates every worker (Ctrl-C), and pending runs reject with `CancelledError`.
  */
 import { Worker } from "node:worker_threads";
-import type { WorkerReply, WorkerTask } from "./protocol";
-import { STUDY_WORKER_TAG } from "./protocol";
+import { studyTaskSize, type StudyReply, type StudyRequest, type StudyTask } from "../../study/worker-protocol";
+import { STUDY_WORKER_TAG } from "./worker";
 
 export class CancelledError extends Error {
   constructor() {
@@ -13,8 +13,6 @@ export class CancelledError extends Error {
     this.name = "CancelledError";
   }
 }
-
-type TaskBody<T extends WorkerTask = WorkerTask> = T extends unknown ? Omit<T, "id"> : never;
 
 /** Where a worker starts: the bundle itself, or the source entry through tsx. */
 function workerSource(): { url: URL; execArgv?: string[] } {
@@ -43,10 +41,10 @@ export class StudyPool {
    * Runs every task; `onProgress(totalDone)` sums the progress of all tasks (in the tasks' own units).
    * Resolves with the replies in task order.
    */
-  run(tasks: readonly TaskBody[], onProgress?: (done: number) => void): Promise<WorkerReply[]> {
+  run(tasks: readonly StudyTask[], onProgress?: (done: number) => void): Promise<StudyReply[]> {
     if (this.cancelled) return Promise.reject(new CancelledError());
     return new Promise((resolve, reject) => {
-      const results: WorkerReply[] = new Array(tasks.length);
+      const results: StudyReply[] = new Array(tasks.length);
       const progress = new Array<number>(tasks.length).fill(0);
       let next = 0;
       let finished = 0;
@@ -62,12 +60,12 @@ export class StudyPool {
         if (failed) return;
         if (next >= tasks.length) return;
         const id = next++;
-        w.postMessage({ ...tasks[id], id } as WorkerTask);
+        w.postMessage({ ...tasks[id]!, id } satisfies StudyRequest);
       };
       for (const w of this.workers) {
         w.removeAllListeners("message");
         w.removeAllListeners("error");
-        w.on("message", (m: WorkerReply) => {
+        w.on("message", (m: StudyReply) => {
           if (m.kind === "progress") {
             progress[m.id] = m.done;
             report();
@@ -78,15 +76,7 @@ export class StudyPool {
             return;
           }
           results[m.id] = m;
-          const t = tasks[m.id]!;
-          progress[m.id] =
-            t.kind === "monte-carlo"
-              ? t.end - t.start
-              : t.kind === "points"
-                ? t.overrides.length
-                : t.kind === "record-steps"
-                  ? t.indices.length
-                  : 1;
+          progress[m.id] = studyTaskSize(tasks[m.id]!);
           report();
           finished++;
           if (finished === tasks.length) resolve(results);

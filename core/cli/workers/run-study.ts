@@ -83,7 +83,7 @@ export async function monteCarloOnPool(
     onProgress,
   );
   return replies.map((r) => {
-    if (r.kind !== "monte-carlo-done") throw new Error("unexpected worker reply");
+    if (r.kind !== "monte-carlo") throw new Error("unexpected worker reply");
     return r.chunk;
   });
 }
@@ -102,7 +102,7 @@ export async function pointsOnWorkers(
       onProgress,
     );
     return replies.flatMap((r) => {
-      if (r.kind !== "points-done") throw new Error("unexpected worker reply");
+      if (r.kind !== "points") throw new Error("unexpected worker reply");
       return r.points;
     });
   });
@@ -131,7 +131,7 @@ export async function recordStepsOnWorkers(
     });
     let k = 0;
     for (const r of replies) {
-      if (r.kind !== "record-steps-done") throw new Error("unexpected worker reply");
+      if (r.kind !== "record-steps") throw new Error("unexpected worker reply");
       for (const o of r.outcomes) computed.set(distinct[k++]!, o);
     }
   }

@@ -7,14 +7,14 @@
  */
 import { describe, expect, it } from "vitest";
 import { checkClaimFromCases, CLAIM_TOLERANCE, chainParts, type ClaimCaseResult } from "../../../core/compliance/claim";
-import { beyondNearField } from "../../../core/farfield/stage";
+import { stagesAfterNearField } from "../../../core/pipeline";
 import { CAUTION, RESULT_FORMAT, RESULT_VERSION, type BrinefieldResult } from "../../../core/result/contract";
-import { beyondInputFixture, F, scenarioFixture } from "../farfield/fixtures";
+import { beyondInputFixture, F, portFixture, scenarioFixture } from "../farfield/fixtures";
 
 /** A result assembled from the far-field stage with the fixture near fields. */
 function resultFixture(current = 0): BrinefieldResult {
   const input = beyondInputFixture(scenarioFixture({ ambient: { currentSpeed: current } }));
-  const b = beyondNearField(input);
+  const b = stagesAfterNearField(input);
   return {
     format: RESULT_FORMAT,
     version: RESULT_VERSION,
@@ -25,7 +25,7 @@ function resultFixture(current = 0): BrinefieldResult {
     conversions: [],
     discharge: { flow: input.scenario.discharge.flow, salinity: 70, temperature: 20, fromPlant: false },
     densities: input.densities,
-    port: input.port,
+    port: portFixture(input.scenario),
     nearField: b.nearField,
     multiport: b.multiport,
     mixingZone: b.mixingZone,

@@ -1,11 +1,11 @@
 /**
- * The lighter "edge" detail of beyondNearField() (used by study loops) stops far-field series just past
+ * The lighter "edge" detail of stagesAfterNearField() (used by study loops) stops far-field series just past
  * the mixing-zone edge. These checks pin that it is the same computation, only shorter: the spreading
  * layer's shortened series is the leading part of the full one, and the stage gives the same edge
  * numbers and the same warnings as the full detail (exact equality, no tolerance).
  */
 import { describe, expect, it } from "vitest";
-import { beyondNearField } from "../../../core/farfield/stage";
+import { stagesAfterNearField } from "../../../core/pipeline";
 import { spreadingLayerFromNearFieldEnd, type SpreadingLayerInput } from "../../../core/farfield/gravity-current";
 import { beyondInputFixture, scenarioFixture } from "./fixtures";
 
@@ -42,7 +42,7 @@ describe("spreadingLayerFromNearFieldEnd() with stopDistance", () => {
   });
 });
 
-describe("beyondNearField() in edge detail", () => {
+describe("stagesAfterNearField() in edge detail", () => {
   const variants: [string, Parameters<typeof scenarioFixture>[0]][] = [
     ["still water", {}],
     ["current", { ambient: { currentSpeed: 0.2 } }],
@@ -62,8 +62,8 @@ describe("beyondNearField() in edge detail", () => {
 
   it.each(variants)("gives the full detail's edge numbers and warnings (%s)", (_name, over) => {
     const input = beyondInputFixture(scenarioFixture(over));
-    const full = beyondNearField(input);
-    const edge = beyondNearField({ ...input, detail: "edge" });
+    const full = stagesAfterNearField(input);
+    const edge = stagesAfterNearField({ ...input, detail: "edge" });
     const { alternatives: _a, series: _s, footprint: _f, ...fullEdge } = full.mixingZone;
     const { alternatives: _b, series: _t, footprint: _g, ...edgeEdge } = edge.mixingZone;
     expect(edgeEdge, "mixing-zone edge: dilution, method, layer thickness, constituents").toEqual(fullEdge);
@@ -75,7 +75,7 @@ describe("beyondNearField() in edge detail", () => {
 
   it("covers a layer that is thick for the depth inside the mixing zone", () => {
     const input = beyondInputFixture(scenarioFixture(variants[7]![1]));
-    const codes = beyondNearField({ ...input, detail: "edge" }).warnings.map((w) => w.code);
+    const codes = stagesAfterNearField({ ...input, detail: "edge" }).warnings.map((w) => w.code);
     expect(codes, "shallow water, large flow: layer-thickness warning").toContain("layer-thick-for-depth");
   });
 });

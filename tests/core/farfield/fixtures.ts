@@ -9,7 +9,7 @@
 import type { Scenario } from "../../../core/scenario/types";
 import type { AmbientColumn, JetSource, NearFieldMethodResult } from "../../../core/nearfield/types";
 import type { DensitiesResult, PortResult } from "../../../core/result/contract";
-import type { BeyondInput } from "../../../core/farfield/stage";
+import type { AfterNearFieldInput } from "../../../core/pipeline";
 
 export const D = 0.2; // m port diameter
 export const F = 20; // densimetric Froude number
@@ -158,7 +158,7 @@ export function portFixture(scenario: Scenario): PortResult {
   };
 }
 
-export function beyondInputFixture(scenario: Scenario, nearField?: NearFieldMethodResult[]): BeyondInput {
+export function beyondInputFixture(scenario: Scenario, nearField?: NearFieldMethodResult[]): AfterNearFieldInput {
   const jet = jetFixture();
   const s: Scenario = {
     ...scenario,
@@ -170,6 +170,5 @@ export function beyondInputFixture(scenario: Scenario, nearField?: NearFieldMeth
     column: columnFixture(s),
     nearField: nearField ?? [lengthScaleFixture(), integralFixture()],
     densities: densitiesFixture(),
-    port: portFixture(s),
   };
 }

@@ -1,13 +1,13 @@
 /**
- * beyondNearField() with hand-built near-field results (see fixtures.ts for their published sources).
+ * stagesAfterNearField() with hand-built near-field results (see fixtures.ts for their published sources).
  */
 import { describe, expect, it } from "vitest";
-import { beyondNearField } from "../../../core/farfield/stage";
+import { stagesAfterNearField } from "../../../core/pipeline";
 import { beyondInputFixture, DF, F, integralFixture, lengthScaleFixture, scenarioFixture } from "./fixtures";
 
-describe("beyondNearField() — from the near field to the mixing-zone edge", () => {
+describe("stagesAfterNearField() — from the near field to the mixing-zone edge", () => {
   it("carries the more conservative (lower) near-field dilution to the edge by default and says which", () => {
-    const out = beyondNearField(beyondInputFixture(scenarioFixture()));
+    const out = stagesAfterNearField(beyondInputFixture(scenarioFixture()));
     expect(out.mixingZone.nearFieldMethod, "integral: S_i = 1.06 F < length-scale S_n = 2.6 F").toBe("integral");
     expect(out.mixingZone.edgeInsideNearField, "edge at 100 m is beyond 9 dF = 36 m").toBe(false);
     expect(
@@ -17,7 +17,9 @@ describe("beyondNearField() — from the near field to the mixing-zone edge", ()
   });
 
   it("uses the requested near-field method when options.nearFieldForEdge names it", () => {
-    const out = beyondNearField(beyondInputFixture(scenarioFixture({ options: { nearFieldForEdge: "length-scale" } })));
+    const out = stagesAfterNearField(
+      beyondInputFixture(scenarioFixture({ options: { nearFieldForEdge: "length-scale" } })),
+    );
     expect(out.mixingZone.nearFieldMethod, "as requested").toBe("length-scale");
     // Flat bed, still water: the layer beyond 9 dF entrains nothing (Ri ≥ 0.8, Ellison & Turner 1959),
     // so the edge dilution is the Roberts et al. (1997) near-field dilution 2.6 F (from memory).
@@ -25,7 +27,7 @@ describe("beyondNearField() — from the near field to the mixing-zone edge", ()
   });
 
   it("uses the jet's own dilution where the edge lies inside the near field, and says so", () => {
-    const out = beyondNearField(
+    const out = stagesAfterNearField(
       beyondInputFixture(
         scenarioFixture({ mixingZone: { radius: 20, limits: [] }, options: { nearFieldForEdge: "length-scale" } }),
       ),
@@ -44,7 +46,7 @@ describe("beyondNearField() — from the near field to the mixing-zone edge", ()
   });
 
   it("reports gravity current and Brooks (1960) passive diffusion in a current and keeps the lower by default", () => {
-    const out = beyondNearField(
+    const out = stagesAfterNearField(
       beyondInputFixture(scenarioFixture({ ambient: { currentSpeed: 0.2, currentDirection: 90 } })),
     );
     const alts = out.mixingZone.alternatives.filter((a) => a.method.startsWith(out.mixingZone.nearFieldMethod));
@@ -60,7 +62,7 @@ describe("beyondNearField() — from the near field to the mixing-zone edge", ()
   });
 
   it("follows options.farField when the user asks for passive diffusion", () => {
-    const out = beyondNearField(
+    const out = stagesAfterNearField(
       beyondInputFixture(
         scenarioFixture({ ambient: { currentSpeed: 0.2 }, options: { farField: "passive-diffusion" } }),
       ),
@@ -69,7 +71,7 @@ describe("beyondNearField() — from the near field to the mixing-zone edge", ()
   });
 
   it("multiplies near-field and far-field dilutions: S(x) = S_n × S_ff (Fischer et al. 1979 ch. 9, from memory)", () => {
-    const out = beyondNearField(
+    const out = stagesAfterNearField(
       beyondInputFixture(
         scenarioFixture({
           ambient: { currentSpeed: 0.2 },
@@ -84,7 +86,7 @@ describe("beyondNearField() — from the near field to the mixing-zone edge", ()
   });
 
   it("produces a consistent series: distances ascending, salinity increase = discharge excess ÷ dilution", () => {
-    const out = beyondNearField(beyondInputFixture(scenarioFixture()));
+    const out = stagesAfterNearField(beyondInputFixture(scenarioFixture()));
     const s = out.mixingZone.series;
     for (let i = 1; i < s.distance.length; i++)
       expect(s.distance[i], `distance ${i}`).toBeGreaterThanOrEqual(s.distance[i - 1]);
@@ -96,7 +98,7 @@ describe("beyondNearField() — from the near field to the mixing-zone edge", ()
   });
 
   it("checks salinity against 2 ppt over 33.5 g/kg: required dilution 18.25 ((70 − 33.5)/2, arithmetic)", () => {
-    const out = beyondNearField(beyondInputFixture(scenarioFixture()));
+    const out = stagesAfterNearField(beyondInputFixture(scenarioFixture()));
     expect(out.compliance.requiredDilution, "(70 − 33.5)/2").toBeCloseTo(18.25, 12);
     expect(out.compliance.pass, "1.06 F = 21.2 ≥ 18.25").toBe(true);
     const salinity = out.mixingZone.constituents.find((c) => c.constituent === "salinity")!;
@@ -104,7 +106,7 @@ describe("beyondNearField() — from the near field to the mixing-zone edge", ()
   });
 
   it("maps the seabed footprint where the governing limit is exceeded", () => {
-    const tight = beyondNearField(
+    const tight = stagesAfterNearField(
       beyondInputFixture(
         scenarioFixture({
           mixingZone: { radius: 100, limits: [{ constituent: "salinity", maxIncrease: 1, unit: "g/kg" }] },
@@ -114,19 +116,19 @@ describe("beyondNearField() — from the near field to the mixing-zone edge", ()
     expect(tight.compliance.pass, "needs 36.5, gets 21.2").toBe(false);
     expect(tight.mixingZone.footprint.furthestExtent, "exceeded past the edge").toBeGreaterThan(100);
     expect(tight.mixingZone.footprint.area, "a non-zero area").toBeGreaterThan(0);
-    const loose = beyondNearField(beyondInputFixture(scenarioFixture()));
+    const loose = stagesAfterNearField(beyondInputFixture(scenarioFixture()));
     expect(loose.mixingZone.footprint.furthestExtent, "exceedance ends before the edge").toBeLessThan(100);
   });
 
   it("states what is not modelled", () => {
-    const out = beyondNearField(beyondInputFixture(scenarioFixture()));
+    const out = stagesAfterNearField(beyondInputFixture(scenarioFixture()));
     const text = out.mixingZone.notModelled.join(" ");
     for (const word of ["build-up", "Tidal reversal", "intake"]) expect(text, `mentions ${word}`).toContain(word);
   });
 
   it("falls back to an undiluted edge with a serious warning when no near-field method reached an end point", () => {
     const broken = { ...integralFixture(), impactDistance: null, returnDistance: null, impactDilution: null };
-    const out = beyondNearField(beyondInputFixture(scenarioFixture(), [broken]));
+    const out = stagesAfterNearField(beyondInputFixture(scenarioFixture(), [broken]));
     expect(out.mixingZone.dilution, "undiluted").toBe(1);
     expect(
       out.warnings.map((w) => w.code),
@@ -135,7 +137,7 @@ describe("beyondNearField() — from the near field to the mixing-zone edge", ()
   });
 
   it("leaves a single port's near field unchanged", () => {
-    const out = beyondNearField(beyondInputFixture(scenarioFixture()));
+    const out = stagesAfterNearField(beyondInputFixture(scenarioFixture()));
     expect(out.multiport.regime, "single port").toBe("single-port");
     expect(out.nearField[0], "same object, no adjustment").toEqual(lengthScaleFixture());
   });

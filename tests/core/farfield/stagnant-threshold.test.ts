@@ -19,7 +19,7 @@ function run(u: number) {
   return runScenario(p.scenario);
 }
 
-describe("beyondNearField() with a vanishing current", () => {
+describe("stagesAfterNearField() with a vanishing current", () => {
   it("gives the stagnant result for a current of 5e-324 m/s, with dilution never falling along the series", () => {
     const still = run(0);
     const tiny = run(5e-324);

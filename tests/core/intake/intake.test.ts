@@ -12,6 +12,7 @@ import { evaluateScenario } from "../../../core/study/evaluate";
 import { intakeFromSeries, bearingDifference } from "../../../core/intake/intake";
 import { recirculationFromPlant } from "../../../core/intake/recirculation";
 import { scenarioWith } from "../record/fixtures";
+import type { SeriesStage } from "../../../core/result/contract";
 
 const run = (ambient: Record<string, unknown>, intake: Record<string, unknown>) =>
   runScenario(scenarioWith({ ambient, intake }), { includePath: false });
@@ -49,7 +50,7 @@ describe("intake: dilution and salinity increase", () => {
       dilution: [1, 20, 30, 40, 50],
       salinityIncrease: [30, 1.5, 1, 0.75, 0.6],
       layerThickness: [null, 1, 0.8, 0.5, 0.4],
-      stage: ["jet", "spreading-layer", "spreading-layer", "spreading-layer", "spreading-layer"],
+      stage: ["jet", "spreading-layer", "spreading-layer", "spreading-layer", "spreading-layer"] as SeriesStage[],
     };
     const g0 = 0.25;
     // Front speeds: √2·√(0.25/20·1) = 0.158; /30·0.8 → 0.115; /40·0.5 → 0.079; /50·0.4 → 0.063 m/s.

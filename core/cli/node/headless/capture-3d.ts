@@ -1,18 +1,18 @@
 /**
  * Capturing the app's 3D view as a PNG for the report. The built renderer (dist/renderer) is served on
- * 127.0.0.1 by a small static server; Chromium opens `?capture=3d` with the scenario text placed in
+ * 127.0.0.1 by the shared static server (../staticServer.ts); Chromium opens `?capture=3d` with the scenario text placed in
  * `window.__brinefieldCapture` by an init script, waits until the renderer sets
  * `document.body.dataset.ready = "true"`, and takes a screenshot. Builds the renderer first when the
  * build is missing or older than its sources. Throws `Capture3dError` with a readable reason otherwise,
  * so callers can leave the image out and say why.
  */
-import { createServer, type Server } from "node:http";
-import { existsSync, readFileSync, readdirSync, statSync } from "node:fs";
-import { extname, join, normalize, resolve, sep, dirname } from "node:path";
+import type { Server } from "node:http";
+import { existsSync, readdirSync, statSync } from "node:fs";
+import { join, resolve, sep, dirname } from "node:path";
 import { fileURLToPath } from "node:url";
 import { spawn } from "node:child_process";
-import type { AddressInfo } from "node:net";
 import { withChromium } from "./chromium";
+import { startStaticServer } from "../staticServer";
 
 export class Capture3dError extends Error {
   constructor(message: string) {
@@ -42,22 +42,6 @@ export interface Capture3dOptions {
   readonly height?: number;
   readonly deviceScaleFactor?: number;
 }
-
-const CONTENT_TYPES: Readonly<Record<string, string>> = {
-  ".html": "text/html; charset=utf-8",
-  ".js": "text/javascript; charset=utf-8",
-  ".mjs": "text/javascript; charset=utf-8",
-  ".css": "text/css; charset=utf-8",
-  ".json": "application/json",
-  ".svg": "image/svg+xml",
-  ".png": "image/png",
-  ".jpg": "image/jpeg",
-  ".ico": "image/x-icon",
-  ".wasm": "application/wasm",
-  ".woff2": "font/woff2",
-  ".woff": "font/woff",
-  ".txt": "text/plain; charset=utf-8",
-};
 
 function newestMtime(dir: string, skip: (p: string) => boolean): number {
   let newest = 0;
@@ -119,65 +103,14 @@ export function buildRenderer(root: string, timeoutMs = 120_000): Promise<void> 
 }
 
 /**
- * Serves `dir` read-only on 127.0.0.1 at a free port, for the headless browser only: GET and HEAD,
- * the Host header must name this server (so a page elsewhere cannot reach it by DNS rebinding), a
- * malformed path ("/%zz"), NUL, backslash or anything outside the folder is refused, and no request can
- * throw inside the handler (a throw there would end the whole process).
+ * Serves `dir` read-only on 127.0.0.1 at a free port, for the headless browser only, with the shared
+ * static server (../staticServer.ts): GET and HEAD, the Host header must name this server (so a page
+ * elsewhere cannot reach it by DNS rebinding), malformed paths, NUL, backslash or anything outside the
+ * folder refused, and no request can throw inside the handler.
  */
-export function serveStatic(dir: string): Promise<{ server: Server; url: string }> {
-  const base = resolve(dir);
-  let allowedHosts: readonly string[] = [];
-  const server = createServer((req, res) => {
-    try {
-      if (req.method !== "GET" && req.method !== "HEAD") {
-        res.writeHead(405, { Allow: "GET, HEAD" }).end();
-        return;
-      }
-      if (!allowedHosts.includes(String(req.headers.host ?? "").toLowerCase())) {
-        res.writeHead(421).end();
-        return;
-      }
-      let pathname: string;
-      try {
-        pathname = decodeURIComponent(new URL(req.url ?? "/", "http://127.0.0.1").pathname);
-      } catch {
-        res.writeHead(400).end();
-        return;
-      }
-      if (pathname.includes("\0") || pathname.includes("\\")) {
-        res.writeHead(400).end();
-        return;
-      }
-      let file = normalize(join(base, pathname));
-      // Refuse anything outside the served folder (path traversal).
-      if (file !== base && !file.startsWith(base + sep)) {
-        res.writeHead(403).end();
-        return;
-      }
-      if (existsSync(file) && statSync(file).isDirectory()) file = join(file, "index.html");
-      if (!existsSync(file) || !statSync(file).isFile()) {
-        res.writeHead(404).end();
-        return;
-      }
-      res.writeHead(200, {
-        "Content-Type": CONTENT_TYPES[extname(file)] ?? "application/octet-stream",
-        "Cache-Control": "no-store",
-        "X-Content-Type-Options": "nosniff",
-      });
-      res.end(req.method === "HEAD" ? undefined : readFileSync(file));
-    } catch {
-      if (!res.headersSent) res.writeHead(500);
-      res.end();
-    }
-  });
-  return new Promise((resolvePromise, reject) => {
-    server.once("error", reject);
-    server.listen(0, "127.0.0.1", () => {
-      const { port } = server.address() as AddressInfo;
-      allowedHosts = [`127.0.0.1:${port}`, `localhost:${port}`];
-      resolvePromise({ server, url: `http://127.0.0.1:${port}/` });
-    });
-  });
+export async function serveStatic(dir: string): Promise<{ server: Server; url: string }> {
+  const started = await startStaticServer({ root: dir, port: 0, fallbackToFreePort: false });
+  return { server: started.server, url: started.url };
 }
 
 /**
