@@ -14,7 +14,7 @@
  */
 import { MAX_MONTE_CARLO_RUNS } from "./budget";
 import type { Scenario } from "../scenario/types";
-import { expandCases } from "./cases";
+import { expandCases } from "../cases";
 import type { StudyVerdict } from "../result/contract";
 import {
   DEFAULT_SPREADS_NOTE,

@@ -7,7 +7,7 @@ import type { Scenario } from "../../core/scenario/types";
 import { formatNumber, siToDisplay, type UnitSystem } from "../../core/units";
 import { candidateOverrides, designConstraintsFrom, planDesignSearch } from "../../core/study/design";
 import { designOutcome, type DesignOutcome } from "../../core/study/design-rank";
-import { expandCases } from "../../core/study/cases";
+import { expandCases } from "../../core/cases";
 import type { RunPoints } from "./sections";
 import { isPlainObject, scenarioName, type ScenarioFile } from "../state/scenarioState";
 

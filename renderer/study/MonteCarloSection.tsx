@@ -1,6 +1,6 @@
 /** Study tab, Monte Carlo: edge dilution percentiles and the probability of not meeting the limit. */
 import { workIssue } from "../../core/study/budget";
-import { expandCases } from "../../core/study/cases";
+import { expandCases } from "../../core/cases";
 import { useState } from "react";
 import type { Scenario } from "../../core/scenario/types";
 import { formatNumber } from "../../core/units";

@@ -10,7 +10,7 @@ import type { Scenario } from "../../core/scenario/types";
 import type { UnitSystem } from "../../core/units";
 import type { Overrides } from "../../core/study/overrides";
 import { splitRuns } from "../../core/study/montecarlo";
-import { describeCases, expandCases } from "../../core/study/cases";
+import { describeCases, expandCases } from "../../core/cases";
 import type { PointEvaluation } from "../../core/study/evaluate-point";
 import type { StudyTask } from "../../core/study/worker-protocol";
 import { StudyCancelled, StudyWorkerPool, sharedStudyPool } from "./workerPool";

@@ -1,6 +1,6 @@
 /** Study tab, sweep: one input (line chart) or two (heat map of the margin with the limit contour). */
 import { sweepPointsIssue, workIssue } from "../../core/study/budget";
-import { expandCases } from "../../core/study/cases";
+import { expandCases } from "../../core/cases";
 import { useState } from "react";
 import type { Scenario } from "../../core/scenario/types";
 import { formatNumber, siToDisplay, type UnitSystem } from "../../core/units";

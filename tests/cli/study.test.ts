@@ -20,7 +20,7 @@ import {
 } from "../../core/study/uncertainty-words";
 import { parseScenario } from "../../core/scenario/parse";
 import { runScenario } from "../../core/pipeline";
-import { expandCases } from "../../core/study/cases";
+import { expandCases } from "../../core/cases";
 import { fourPortRaw } from "../core/study/fixtures";
 
 let dir = "";

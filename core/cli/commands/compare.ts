@@ -9,7 +9,7 @@ import { loadJsonFile } from "../load";
 import { parseScenario } from "../../scenario/parse";
 import { parseStudy } from "../../study/study-file";
 import { columnsOf, compareVariant, flattenRow, sortRows, studyVariants, type FlatRow } from "../../study/compare";
-import { describeCases, expandCases } from "../../study/cases";
+import { describeCases, expandCases } from "../../cases";
 import { CAUTION } from "../../result/contract";
 import { withCaution } from "../../result/caution";
 import { evaluateScenario } from "../../study/evaluate";

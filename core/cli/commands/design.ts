@@ -6,7 +6,7 @@ import { CliError, type CliCommand, type CliIO } from "../command";
 import { readArgs } from "../args";
 import { loadJsonFile, formatIssues } from "../load";
 import { parseScenario } from "../../scenario/parse";
-import { describeCases, expandCases } from "../../study/cases";
+import { describeCases, expandCases } from "../../cases";
 import {
   candidateOverrides,
   designConstraintsFrom,

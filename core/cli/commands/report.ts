@@ -21,7 +21,7 @@ import type { StudyReportVariant } from "../../report";
 import { checkClaimOnScenario } from "../../compliance/claim-run";
 import type { ClaimCheck } from "../../compliance/claim";
 import { workIssue } from "../../study/budget";
-import { expandCases } from "../../study/cases";
+import { expandCases } from "../../cases";
 import {
   parseStudy,
   withRawOverride,

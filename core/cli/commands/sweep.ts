@@ -10,7 +10,7 @@ import { formatIssues, loadJsonFile } from "../load";
 import { parseScenario } from "../../scenario/parse";
 import { blendSignChange } from "../../rising/blend";
 import type { Scenario } from "../../scenario/types";
-import { describeCases, expandCases, keptValueNotes } from "../../study/cases";
+import { describeCases, expandCases, keptValueNotes } from "../../cases";
 import { CAUTION } from "../../result/contract";
 import { withCaution } from "../../result/caution";
 import { parseStudy } from "../../study/study-file";

@@ -5,7 +5,7 @@ import { readArgs } from "../args";
 import { loadScenarioFile } from "../load";
 import { MAX_RUNS, planMonteCarlo, summariseMonteCarlo, type MonteCarloStats } from "../../study/montecarlo";
 import { workIssue } from "../../study/budget";
-import { describeCases, expandCases, keptValueNotes } from "../../study/cases";
+import { describeCases, expandCases, keptValueNotes } from "../../cases";
 import { CAUTION } from "../../result/contract";
 import { withCaution } from "../../result/caution";
 import { seedFromText } from "../../study/random";

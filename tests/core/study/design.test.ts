@@ -21,7 +21,7 @@ import {
 import { NOMINAL_SIZES_DN } from "../../../core/study/nominal-sizes";
 import { evaluatePoint } from "../../../core/study/evaluate-point";
 import { evaluateScenario } from "../../../core/study/evaluate";
-import { expandCases } from "../../../core/study/cases";
+import { expandCases } from "../../../core/cases";
 import { runScenario } from "../../../core/pipeline";
 import { parseScenario } from "../../../core/scenario/parse";
 import type { Scenario } from "../../../core/scenario/types";

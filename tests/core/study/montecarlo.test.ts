@@ -7,7 +7,7 @@ import {
   type MonteCarloPlan,
 } from "../../../core/study/montecarlo";
 import { evaluateScenario } from "../../../core/study/evaluate";
-import { expandCases } from "../../../core/study/cases";
+import { expandCases } from "../../../core/cases";
 import type { Scenario } from "../../../core/scenario/types";
 import type { Evaluator } from "../../../core/study/summary";
 import { fourPortRaw, identityEvaluator, scenarioFrom } from "./fixtures";
