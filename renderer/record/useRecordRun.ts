@@ -42,7 +42,13 @@ export function useRecordRun(scenario: Scenario | null, pendingResult: Brinefiel
 
   useEffect(() => {
     if (!pending || !scenario || !pendingResult) {
-      setState((s) => (s.result || s.running ? { ...s, result: null, running: false } : s));
+      // Nothing to run on the workers (no record, or one short enough for the engine): clear every trace
+      // of an earlier run, so a cancelled or failed long record does not speak for the new one.
+      setState((s) =>
+        s.result || s.running || s.cancelled || s.error !== null || s.seconds !== null
+          ? { result: null, running: false, done: 0, total: 0, cancelled: false, error: null, seconds: null }
+          : s,
+      );
       return;
     }
     const cores = Math.max(1, Math.min(8, navigator.hardwareConcurrency || 2));

@@ -128,6 +128,10 @@ describe("ambient record in the app", () => {
     await expect
       .poll(() => page.locator("[data-role=record-summary]").textContent(), { timeout: 60_000 })
       .toMatch(/Ambient record: 3 steps/);
+    expect(
+      await page.locator("[data-role=record-status]").count(),
+      "the cancelled long record's status does not stay beside the short record's verdict",
+    ).toBe(0);
   }, 120_000);
 
   it("shows the record as a table, one row per step, and removing it takes its chart tabs away", async () => {
@@ -138,6 +142,8 @@ describe("ambient record in the app", () => {
     expect(await page.locator("[data-role=record-table] tbody tr").nth(1).locator("td").first().textContent()).toBe(
       "1",
     );
+    await page.locator("[data-role=record-table]").scrollIntoViewIfNeeded();
+    await page.screenshot({ path: join(artifacts, "app-record-table.png") });
     await page.locator("[data-command=chart-as-table]").click();
     await page.locator("[data-command=chart-duration]").click();
     await page.locator("[data-command=record-remove]").click();
