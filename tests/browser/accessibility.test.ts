@@ -7,52 +7,16 @@
  */
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import type { Browser, Page } from "playwright-core";
-import { spawnSync } from "node:child_process";
-import { existsSync, mkdirSync, readdirSync, statSync } from "node:fs";
+import { mkdirSync } from "node:fs";
 import { dirname, join, resolve } from "node:path";
 import { fileURLToPath } from "node:url";
 import { launchChromium } from "../../core/cli/node/headless/chromium";
 import { serveDirectory, type StaticServer } from "../renderer/support/staticServer";
+import { ensureWebBuilt, WEB_DIST } from "./support/web-build";
 
 const root = resolve(dirname(fileURLToPath(import.meta.url)), "../..");
-const dist = join(root, "dist/renderer");
+const dist = WEB_DIST;
 const artifacts = join(root, "test-artifacts");
-
-function newestSource(dir: string): number {
-  let newest = 0;
-  for (const entry of readdirSync(dir, { withFileTypes: true })) {
-    const p = join(dir, entry.name);
-    newest = Math.max(newest, entry.isDirectory() ? newestSource(p) : statSync(p).mtimeMs);
-  }
-  return newest;
-}
-
-function ensureBuilt(): void {
-  const index = join(dist, "index.html");
-  const sources = Math.max(
-    newestSource(join(root, "renderer")),
-    newestSource(join(root, "core")),
-    newestSource(join(root, "demo-scenarios")),
-  );
-  if (existsSync(index) && statSync(index).mtimeMs > sources) return;
-  const run = spawnSync(
-    process.execPath,
-    [
-      join(root, "node_modules/vite/bin/vite.js"),
-      "build",
-      "--config",
-      "renderer/vite.config.ts",
-      "--logLevel",
-      "error",
-    ],
-    {
-      cwd: root,
-      encoding: "utf8",
-      timeout: 240_000,
-    },
-  );
-  if (run.status !== 0) throw new Error(`renderer build failed: ${run.stderr || run.stdout}`);
-}
 
 interface ContrastProblem {
   readonly text: string;
@@ -224,7 +188,7 @@ let server: StaticServer;
 let browser: Browser;
 
 beforeAll(async () => {
-  ensureBuilt();
+  ensureWebBuilt();
   mkdirSync(artifacts, { recursive: true });
   server = await serveDirectory(dist);
   browser = await launchChromium();
