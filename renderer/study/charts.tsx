@@ -135,24 +135,14 @@ export function SweepLineChart({ rows, axis }: { rows: readonly SweepRow[]; axis
           </svg>{" "}
           required dilution
         </li>
-        <li>
-          <svg width="10" height="10" aria-hidden="true">
-            <VerdictMark x={5} y={5} verdict="meets" />
-          </svg>{" "}
-          meets
-        </li>
-        <li>
-          <svg width="10" height="10" aria-hidden="true">
-            <VerdictMark x={5} y={5} verdict="exceeds" />
-          </svg>{" "}
-          exceeds
-        </li>
-        <li>
-          <svg width="10" height="10" aria-hidden="true">
-            <VerdictMark x={5} y={5} verdict="outside-scope" />
-          </svg>{" "}
-          outside scope
-        </li>
+        {(["meets", "exceeds", "outside-scope"] as const).map((verdict) => (
+          <li key={verdict}>
+            <svg width="10" height="10" aria-hidden="true">
+              <VerdictMark x={5} y={5} verdict={verdict} />
+            </svg>{" "}
+            {verdict.replace("-", " ")}
+          </li>
+        ))}
       </ul>
     </div>
   );
