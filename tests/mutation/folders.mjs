@@ -1,15 +1,35 @@
 /**
  * Mutation-testing plan, folder by folder: each core folder is mutated on its own with a fast test set
- * (its own unit tests plus the property test at a reduced count). The slow generators (fuzz project,
- * hostile-input suite, study and report suites, browser tests) are deliberately not in any set.
+ * (its own unit tests, the suites that check its rules or published values through the pipeline, and the
+ * property test at a reduced count). The slow generators (fuzz project, study and report suites, browser
+ * tests, the hostile-input suite, which starts real command-line processes) are deliberately not in
+ * any set: the scenario reader's rules are checked in-process by tests/core/scenario/.
  */
 export const PROPERTY = "tests/core/properties-based.test.ts";
 
 export const FOLDERS = {
-  "core/scenario": ["tests/core/scenario/**/*.test.ts", PROPERTY],
+  "core/scenario": [
+    "tests/core/scenario/**/*.test.ts",
+    "tests/core/validation/**/*.test.ts",
+    "tests/core/units/**/*.test.ts",
+    "tests/core/study/study-file.test.ts",
+    "tests/core/study/same-rules-every-path.test.ts",
+    PROPERTY,
+  ],
   "core/compliance": ["tests/core/compliance/**/*.test.ts", PROPERTY],
-  "core/nearfield": ["tests/core/nearfield/**/*.test.ts", PROPERTY],
-  "core/farfield": ["tests/core/farfield/**/*.test.ts", PROPERTY],
+  "core/nearfield": [
+    "tests/core/nearfield/**/*.test.ts",
+    "tests/core/correlations/**/*.test.ts",
+    "tests/core/rising/**/*.test.ts",
+    "tests/core/pipeline.test.ts",
+    PROPERTY,
+  ],
+  "core/farfield": [
+    "tests/core/farfield/**/*.test.ts",
+    "tests/core/basin/**/*.test.ts",
+    "tests/core/pipeline.test.ts",
+    PROPERTY,
+  ],
   "core/multiport": ["tests/core/multiport/**/*.test.ts", PROPERTY],
   "core/properties": ["tests/core/properties/**/*.test.ts", PROPERTY],
   "core/correlations": ["tests/core/correlations/**/*.test.ts", PROPERTY],

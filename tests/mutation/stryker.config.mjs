@@ -14,7 +14,7 @@ const slug = folder.replace(/\//g, "-");
 export default {
   testRunner: "vitest",
   vitest: { configFile: "tests/mutation/vitest.config.ts", related: false },
-  plugins: ["@stryker-mutator/vitest-runner"],
+  plugins: ["@stryker-mutator/vitest-runner", "./tests/mutation/live-reporter.mjs"],
   // BRINEFIELD_MUTATE_FILES (comma-separated, inside the folder) narrows a run to some files of the folder.
   mutate: process.env.BRINEFIELD_MUTATE_FILES
     ? process.env.BRINEFIELD_MUTATE_FILES.split(",").map((f) => f.trim())
@@ -35,14 +35,13 @@ export default {
     "test-artifacts",
     "renderer",
     "electron",
-    "core/cli/node",
     "tests/browser",
     "tests/renderer",
     "tests/electron",
     "tests/mutation/.incremental",
     "tests/mutation/.reports",
   ],
-  reporters: ["clear-text", "progress", "json"],
+  reporters: ["clear-text", "progress", "json", "live"],
   jsonReporter: { fileName: `tests/mutation/.reports/${slug}.json` },
   clearTextReporter: {
     allowEmojis: false,
