@@ -1,7 +1,7 @@
 /**
  * Near-field Method 2: the integral (entrainment) jet model.
  *
- * Integrates the round buoyant-jet conservation equations (./integralRhs) with the Lee & Cheung
+ * Integrates the round buoyant-jet conservation equations (./integral-rhs) with the Lee & Cheung
  * (1990) entrainment closure, adaptive Dormand–Prince 5(4) and event location, from the port to
  * the point where the centreline reaches the seabed. Profiles are top-hat; the result reports the
  * CENTRELINE (minimum) dilution, converted from the flux-average (top-hat) dilution by the Gaussian
@@ -13,7 +13,7 @@
  * the max(1, ·) floor of the centreline dilution near the port).
  */
 import { EventLog, integrateAdaptive, type AdaptiveResult, type EventSet, type EventSpec } from "../ode/adaptive";
-import { stepperDormandPrince45 } from "../ode/dormandPrince45";
+import { stepperDormandPrince45 } from "../ode/dormand-prince-45";
 import type { Stepper } from "../ode/stepper";
 import {
   IB,
@@ -32,9 +32,9 @@ import {
   upperEdgeSlope,
   verticalHalfExtent,
   type IntegralParams,
-} from "./integralRhs";
-import { IntegralPathBuffer } from "./integralPath";
-import { assembleIntegralResult, invalidIntegralResult } from "./integralResult";
+} from "./integral-rhs";
+import { IntegralPathBuffer } from "./integral-path";
+import { assembleIntegralResult, invalidIntegralResult } from "./integral-result";
 import {
   EV_IMPACT,
   EV_MAX_RISE,
@@ -47,14 +47,14 @@ import {
   EV_ENTRAINMENT_SWITCH,
   integralInitialState,
   integralParamsFrom,
-} from "./integralSetup";
+} from "./integral-setup";
 import type { AmbientColumn, JetSource, NearFieldMethodResult, PathSink } from "./types";
 import {
   integralBiasByAngle,
   integralBiasRatioAtAngle,
   integralBiasStatement,
   type IntegralBiasPoint,
-} from "./integralBias";
+} from "./integral-bias";
 
 export {
   CENTRELINE_PROFILE_FACTOR,
@@ -64,7 +64,7 @@ export {
   centrelineDilution,
   integralInitialState,
   integralParamsFrom,
-} from "./integralSetup";
+} from "./integral-setup";
 
 export interface IntegralOptions {
   sink?: PathSink;
@@ -92,7 +92,7 @@ const scratchDy = new Float64Array(INTEGRAL_DIM);
 const sharedAtol = new Float64Array(INTEGRAL_DIM);
 const sharedLog = new EventLog(INTEGRAL_DIM);
 
-/** The model's events, by index EV_… of ./integralSetup. */
+/** The model's events, by index EV_… of ./integral-setup. */
 const SPECS: EventSpec[] = [];
 SPECS[EV_RETURN] = { direction: -1, terminal: false };
 SPECS[EV_SEABED_EDGE] = { direction: -1, terminal: false };
@@ -346,7 +346,7 @@ let computingBias = false;
 const statementByAngle = new Map<number, string>();
 
 /**
- * Adds the angle-dependent bias statement and dilution range (see integralBias.ts) to the result just
+ * Adds the angle-dependent bias statement and dilution range (see integral-bias.ts) to the result just
  * assembled (a fresh object, so it is completed in place); never recurses twice.
  */
 function withAngleBias(result: NearFieldMethodResult, jet: JetSource): NearFieldMethodResult {

@@ -3,10 +3,10 @@
  * warnings (stage "integral"), the documented bias and the dilution range, the decimated path.
  */
 import { warning, type ResultWarning } from "../warnings";
-import { entrainmentLeeCheung1990ValidityIssues } from "../correlations/entrainmentLeeCheung1990";
+import { entrainmentLeeCheung1990ValidityIssues } from "../correlations/lee-cheung-1990-entrainment";
 import type { AdaptiveResult, EventLog } from "../ode/adaptive";
-import { INTEGRAL_DIM, IQ, IX, IY, IZ, verticalHalfExtent, type IntegralParams } from "./integralRhs";
-import type { IntegralPathBuffer } from "./integralPath";
+import { INTEGRAL_DIM, IQ, IX, IY, IZ, verticalHalfExtent, type IntegralParams } from "./integral-rhs";
+import type { IntegralPathBuffer } from "./integral-path";
 import {
   CENTRELINE_PROFILE_FACTOR,
   DILUTION_BIAS_FACTOR,
@@ -20,9 +20,9 @@ import {
   INTEGRAL_BIAS,
   INTEGRAL_SOURCE,
   centrelineDilution,
-} from "./integralSetup";
+} from "./integral-setup";
 import { ROBERTS_1997_NEAR_FIELD_GROWTH } from "../correlations/roberts-1997-inclined-dense-jet";
-import { FLUX_AVERAGING_FACTOR } from "./fluxAveraging";
+import { FLUX_AVERAGING_FACTOR } from "./flux-averaging";
 import {
   nullNearFieldResult,
   type AmbientColumn,

@@ -37,9 +37,9 @@ import {
 import type { DenseJetCoefficients, DenseJetDataset } from "../correlations/dense-jet-dataset";
 import { clampAngle } from "../correlations/dense-jet-dataset";
 import { ROBERTS_1997_DATASET, ROBERTS_1997_NEAR_FIELD_GROWTH } from "../correlations/roberts-1997-inclined-dense-jet";
-import { FLUX_AVERAGING_FACTOR, fluxAveragedFromCentreline } from "./fluxAveraging";
+import { FLUX_AVERAGING_FACTOR, fluxAveragedFromCentreline } from "./flux-averaging";
 import { LAI_LEE_2012_DATASET, LAI_LEE_2012_MAX_RISE_DILUTION } from "../correlations/lai-lee-2012-inclined-dense-jet";
-import { currentIssues, stratificationIssues } from "./lengthScaleChecks";
+import { currentIssues, stratificationIssues } from "./length-scale-checks";
 
 /** Datasets held; the headline takes, quantity by quantity, the less favourable of those covering the angle. */
 export const LENGTH_SCALE_DATASETS: readonly DenseJetDataset[] = [LAI_LEE_2012_DATASET, ROBERTS_1997_DATASET];
