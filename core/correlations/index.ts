@@ -28,7 +28,7 @@ export {
   entrainmentLeeCheung1990Alpha,
   entrainmentLeeCheung1990Rate,
   entrainmentLeeCheung1990ValidityIssues,
-} from "./entrainmentLeeCheung1990";
+} from "./lee-cheung-1990-entrainment";
 export {
   SHARQAWY_2010_VISCOSITY_SOURCE,
   viscosityFromST,

@@ -20,7 +20,7 @@ import {
   brooksWidthInField,
   FOUR_THIRDS_LAW_COEFFICIENT,
 } from "./brooks-1960-diffusion";
-import { FLUX_AVERAGING_FACTOR } from "../nearfield/fluxAveraging";
+import { FLUX_AVERAGING_FACTOR } from "../nearfield/flux-averaging";
 
 export type FarMethod = "gravity-current" | "passive-diffusion";
 

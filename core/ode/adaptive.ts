@@ -21,6 +21,7 @@
  */
 import type { OdeRhs, Stepper } from "./stepper";
 import { OdeEvent, EventSpec, EventSet, eventSetFrom, EventHit, EventLog } from "./events";
+import { locateRoot } from "./locate-root";
 
 export { EventLog } from "./events";
 export type { OdeEvent, EventSpec, EventSet } from "./events";
@@ -114,28 +115,14 @@ export function integrateAdaptive<P>(
   onStep?: StepCallback,
 ): AdaptiveResult {
   const events: EventSet<P> = isEventSet(eventList) ? eventList : eventSetFrom(eventList);
-  const specs = events.specs;
   void rhs; // the stepper holds the right-hand side; kept in the signature for readability at call sites
-  const n = stepper.dim;
   const { rtol, atol, hMin, hMax, maxSteps, tMax } = options;
-  const ne = specs.length;
-  // Scratch vectors: the previous run's, when it has finished and the sizes match (no allocation per solve).
-  let ws = spare;
-  if (ws && ws.n === n && ws.ne === ne) spare = null;
-  else ws = newWorkspace(n, ne);
-  const { yNew, yTry, dyTry, gOld, gNew, rateOld, rateNow, gTry } = ws;
-  rateOld.fill(Number.NaN);
-  const hits: EventHit[] = [];
-  const log = options.eventLog;
-  log?.reset();
+  const ne = events.specs.length;
+  const run = startRun(stepper, params, events, options.eventLog);
+  const { ws } = run;
+  const { yNew, yTry, gOld } = ws;
   const exponent = -1 / (stepper.errorOrder + 1);
   let tCapped = Number.NaN; // t of the last kink prediction (once per accepted point, not per attempt)
-  let hasRestart = false;
-  let anySlope = false;
-  for (let e = 0; e < ne; e++) {
-    if (specs[e].restart && events.rates) hasRestart = true;
-    if (specs[e].slope) anySlope = true;
-  }
 
   stepper.reset(t0, y0, params);
   const evaluations0 = stepper.evaluations;
@@ -155,7 +142,7 @@ export function integrateAdaptive<P>(
       steps,
       rejected,
       evaluations: stepper.evaluations - evaluations0,
-      events: hits,
+      events: run.hits,
     };
   };
 
@@ -164,17 +151,9 @@ export function integrateAdaptive<P>(
     if (t >= tMax) return finish("t-max", t, stepper.y);
     if (steps >= maxSteps) return finish("max-steps", t, stepper.y);
     if (t + h > tMax) h = tMax - t;
-    if (hasRestart && t !== tCapped) {
-      events.rates!(t, stepper.y, params, stepper.f, rateNow);
-      arrivedAt = -1;
-      h = capAtKink(specs, gOld, rateNow, h, hMin, rateOld, t - tCapped);
+    if (run.hasRestart && t !== tCapped) {
+      h = capStepAtKinks(run, t, h, hMin, t - tCapped);
       tCapped = t;
-      if (arrivedAt >= 0) {
-        // The crossing is at this point: record it and consume it; the next step starts on the kink.
-        if (log) log.push(arrivedAt, t, stepper.y);
-        else hits.push({ index: arrivedAt, t, y: Float64Array.from(stepper.y) });
-        gOld[arrivedAt] = 0;
-      }
     }
     const err = stepper.attempt(h, yNew, atol, rtol);
     if (err > 1) {
@@ -194,59 +173,133 @@ export function integrateAdaptive<P>(
     lastRejected = false;
     h = Math.min(hUsed * factor, hMax);
 
-    // Events in this step, earliest first; stop at the first terminal one, cut the step at a restart.
-    let stop = STOP_NONE;
-    let stopT = 0;
-    let stopIndex = -1;
-    if (ne > 0) {
-      events.values(tNew, stepper.y, params, stepper.f, gNew);
-      let stepHits: StepCrossing[] | null = null; // allocated only when a crossing occurs
-      for (let e = 0; e < ne; e++) {
-        const a = gOld[e];
-        const b = gNew[e];
-        const dir = specs[e].direction;
-        const down = a > 0 && b <= 0;
-        const up = a < 0 && b >= 0;
-        if ((dir <= 0 && down) || (dir >= 0 && up)) {
-          const theta = locateRoot(stepper, events, e, anySlope, params, t, hUsed, a, b, yTry, dyTry, gTry);
-          (stepHits ??= []).push({ index: e, t: t + theta * hUsed, theta });
-        }
-      }
-      if (stepHits) {
-        if (stepHits.length > 1) stepHits.sort((p, q) => p.t - q.t);
-        for (const hit of stepHits) {
-          stepper.interpolate(hit.theta, yTry);
-          if (log) log.push(hit.index, hit.t, yTry);
-          else hits.push({ index: hit.index, t: hit.t, y: Float64Array.from(yTry) });
-          if (specs[hit.index].terminal) {
-            stop = STOP_TERMINAL;
-          } else if (specs[hit.index].restart && hit.t < tNew - 1e-12 * Math.max(1, Math.abs(tNew))) {
-            // A restart inside the step (not at its end): later crossings of this step are found again.
-            stop = STOP_RESTART;
-          }
-          if (stop !== STOP_NONE) {
-            stopT = hit.t;
-            stopIndex = hit.index;
-            break;
-          }
-        }
-      }
-      if (stop !== STOP_RESTART) gOld.set(gNew);
-    }
+    const stop = ne > 0 ? eventsInStep(run, t, hUsed, tNew) : STOP_NONE;
     if (stop === STOP_TERMINAL) {
-      onStep?.(stopT, yTry);
-      return finish("event", stopT, yTry);
+      onStep?.(run.stopT, yTry);
+      return finish("event", run.stopT, yTry);
     }
     if (stop === STOP_RESTART) {
+      const stopT = run.stopT;
       stepper.reset(stopT, yTry, params);
       events.values(stopT, stepper.y, params, stepper.f, gOld);
-      gOld[stopIndex] = 0; // the crossing is consumed: g must leave zero again to count
+      gOld[run.stopIndex] = 0; // the crossing is consumed: g must leave zero again to count
       if (onStep && onStep(stopT, stepper.y) === false) return finish("callback", stopT, stepper.y);
       continue;
     }
     if (onStep && onStep(tNew, stepper.y) === false) return finish("callback", tNew, stepper.y);
     if (h < hMin) return finish("step-underflow", tNew, stepper.y);
   }
+}
+
+/** What one run shares with its helpers: the stepper and events, scratch vectors, where hits go, the last stop. */
+interface AdaptiveRun<P> {
+  readonly stepper: Stepper<P>;
+  readonly events: EventSet<P>;
+  readonly params: P;
+  readonly ws: Workspace;
+  /** Event hits, when no `eventLog` was given. */
+  readonly hits: EventHit[];
+  readonly log: EventLog | undefined;
+  /** Some restart event has a rate (dg/dt) to predict its crossing from. */
+  readonly hasRestart: boolean;
+  /** Some event needs the slope of the solution during its root search. */
+  readonly anySlope: boolean;
+  /** t and event index of the crossing that stopped or cut the last step (set by eventsInStep). */
+  stopT: number;
+  stopIndex: number;
+}
+
+/** Takes the scratch vectors (the previous run's, when it has finished and the sizes match: no allocation per solve). */
+function startRun<P>(stepper: Stepper<P>, params: P, events: EventSet<P>, log: EventLog | undefined): AdaptiveRun<P> {
+  const specs = events.specs;
+  const n = stepper.dim;
+  const ne = specs.length;
+  let ws = spare;
+  if (ws && ws.n === n && ws.ne === ne) spare = null;
+  else ws = newWorkspace(n, ne);
+  ws.rateOld.fill(Number.NaN);
+  log?.reset();
+  let hasRestart = false;
+  let anySlope = false;
+  for (let e = 0; e < ne; e++) {
+    if (specs[e].restart && events.rates) hasRestart = true;
+    if (specs[e].slope) anySlope = true;
+  }
+  return { stepper, events, params, ws, hits: [], log, hasRestart, anySlope, stopT: 0, stopIndex: -1 };
+}
+
+/** Records an event hit: in the event log when the run has one, else as a copy in `hits`. */
+function recordHit<P>(run: AdaptiveRun<P>, index: number, t: number, y: Float64Array): void {
+  if (run.log) run.log.push(index, t, y);
+  else run.hits.push({ index, t, y: Float64Array.from(y) });
+}
+
+/**
+ * Caps the next step at the predicted crossing of a restart event (see capAtKink); a crossing the current
+ * point has already reached is recorded and consumed here, so the next step starts on the kink.
+ */
+function capStepAtKinks<P>(run: AdaptiveRun<P>, t: number, h: number, hMin: number, hPrev: number): number {
+  const { stepper, ws } = run;
+  run.events.rates!(t, stepper.y, run.params, stepper.f, ws.rateNow);
+  arrivedAt = -1;
+  const capped = capAtKink(run.events.specs, ws.gOld, ws.rateNow, h, hMin, ws.rateOld, hPrev);
+  if (arrivedAt >= 0) {
+    recordHit(run, arrivedAt, t, stepper.y);
+    ws.gOld[arrivedAt] = 0;
+  }
+  return capped;
+}
+
+/**
+ * Events crossed in the step just accepted (from t over hUsed to tNew), located on the dense output and
+ * recorded earliest first, stopping at the first terminal one or at a restart inside the step. Returns
+ * STOP_NONE, STOP_TERMINAL or STOP_RESTART; for a stop, its t and index are in `run.stopT`/`run.stopIndex`
+ * and its state in `ws.yTry`.
+ */
+function eventsInStep<P>(run: AdaptiveRun<P>, t: number, hUsed: number, tNew: number): number {
+  const { stepper, events, params, ws } = run;
+  const { gOld, gNew } = ws;
+  const specs = events.specs;
+  events.values(tNew, stepper.y, params, stepper.f, gNew);
+  let stepHits: StepCrossing[] | null = null; // allocated only when a crossing occurs
+  for (let e = 0; e < specs.length; e++) {
+    const a = gOld[e];
+    const b = gNew[e];
+    const dir = specs[e].direction;
+    const down = a > 0 && b <= 0;
+    const up = a < 0 && b >= 0;
+    if ((dir <= 0 && down) || (dir >= 0 && up)) {
+      const theta = locateRoot(stepper, events, e, run.anySlope, params, t, hUsed, a, b, ws.yTry, ws.dyTry, ws.gTry);
+      (stepHits ??= []).push({ index: e, t: t + theta * hUsed, theta });
+    }
+  }
+  const stop = stepHits ? recordCrossings(run, stepHits, tNew) : STOP_NONE;
+  if (stop !== STOP_RESTART) gOld.set(gNew);
+  return stop;
+}
+
+/** Records a step's crossings in order of t until the first that stops the run or cuts the step; returns which. */
+function recordCrossings<P>(run: AdaptiveRun<P>, stepHits: StepCrossing[], tNew: number): number {
+  const specs = run.events.specs;
+  const yTry = run.ws.yTry;
+  if (stepHits.length > 1) stepHits.sort((p, q) => p.t - q.t);
+  for (const hit of stepHits) {
+    run.stepper.interpolate(hit.theta, yTry);
+    recordHit(run, hit.index, hit.t, yTry);
+    let stop = STOP_NONE;
+    if (specs[hit.index].terminal) {
+      stop = STOP_TERMINAL;
+    } else if (specs[hit.index].restart && hit.t < tNew - 1e-12 * Math.max(1, Math.abs(tNew))) {
+      // A restart inside the step (not at its end): later crossings of this step are found again.
+      stop = STOP_RESTART;
+    }
+    if (stop !== STOP_NONE) {
+      run.stopT = hit.t;
+      run.stopIndex = hit.index;
+      return stop;
+    }
+  }
+  return STOP_NONE;
 }
 
 /** Set by capAtKink: index of a restart event whose crossing the current point has reached, else −1. */
@@ -314,53 +367,4 @@ function capAtKink(
 
 function isEventSet<P>(x: readonly OdeEvent<P>[] | EventSet<P>): x is EventSet<P> {
   return !Array.isArray(x);
-}
-
-/**
- * Illinois (modified regula falsi) search for θ in (0, 1] on the dense output of the last
- * accepted step. Returns the bracket end on the "after" side, so the reported state has crossed.
- */
-function locateRoot<P>(
-  stepper: Stepper<P>,
-  events: EventSet<P>,
-  index: number,
-  slope: boolean,
-  params: P,
-  t: number,
-  h: number,
-  gA: number,
-  gB: number,
-  scratch: Float64Array,
-  scratchDy: Float64Array,
-  gTry: Float64Array,
-): number {
-  if (gB === 0) return 1;
-  let a = 0;
-  let b = 1;
-  let fa = gA;
-  let fb = gB;
-  let side = 0;
-  const tol = (1e-12 * Math.max(1, Math.abs(t))) / Math.abs(h);
-  for (let it = 0; it < 200 && b - a > tol; it++) {
-    let m = (a * fb - b * fa) / (fb - fa);
-    // Bisect if the secant point is not strictly inside the bracket (flat or non-finite g).
-    if (!(m > a && m < b)) m = 0.5 * (a + b);
-    stepper.interpolate(m, scratch);
-    if (slope) stepper.interpolateDerivative(m, scratchDy);
-    events.values(t + m * h, scratch, params, slope ? scratchDy : undefined, gTry, index);
-    const fm = gTry[index];
-    if (fm === 0) return m;
-    if (fm * fb < 0) {
-      a = m;
-      fa = fm;
-      if (side === -1) fb *= 0.5;
-      side = -1;
-    } else {
-      b = m;
-      fb = fm;
-      if (side === 1) fa *= 0.5;
-      side = 1;
-    }
-  }
-  return b;
 }

@@ -1,7 +1,7 @@
 /**
  * The live validation table: every published laboratory point held (published-lab-points.ts) against what
  * each near-field method gives in the laboratory configuration (one round port on the bed, stagnant,
- * unstratified deep water, F = 30; see core/nearfield/integralBias.ts), with the ratio model ÷ published and
+ * unstratified deep water, F = 30; see core/nearfield/integral-bias.ts), with the ratio model ÷ published and
  * whether it lies in the method's stated bias band.
  *
  * Bands (the stated bias of each method, as ratios model ÷ published):
@@ -15,8 +15,8 @@
  *   of the datasets); distances 0.80–1.20 (judgement).
  */
 import { nearFieldIntegral } from "../nearfield/integral";
-import { nearFieldLengthScale } from "../nearfield/lengthScale";
-import { laboratoryJet, INTEGRAL_BIAS_FROUDE } from "../nearfield/integralBias";
+import { nearFieldLengthScale } from "../nearfield/length-scale";
+import { laboratoryJet, INTEGRAL_BIAS_FROUDE } from "../nearfield/integral-bias";
 import type { NearFieldMethodName, NearFieldMethodResult } from "../nearfield/types";
 import { PUBLISHED_LAB_POINTS, type ValidationQuantity } from "./published-lab-points";
 

@@ -26,10 +26,6 @@ const LONG_FUNCTIONS_TO_SPLIT: Readonly<Record<string, number>> = {
   "core/cli/commands/uncertainty.ts#run": 131,
   "core/cli/summary.ts#summaryText": 195,
   "core/multiport/merging.ts#multiportFromNearField": 137,
-  "core/nearfield/integral.ts#nearFieldIntegral": 155,
-  "core/nearfield/integralResult.ts#assembleIntegralResult": 242,
-  "core/nearfield/lengthScale.ts#nearFieldLengthScale": 154,
-  "core/ode/adaptive.ts#integrateAdaptive": 145,
   "core/report/figures.ts#sideViewSvg": 138,
   "core/report/inputs.ts#inputsHtml": 281,
 };

@@ -9,7 +9,7 @@
  * Tableau: Dormand & Prince (1980), J. Comput. Appl. Math. 6(1):19–26, RK5(4)7M; dense output of
  * Hairer, Nørsett & Wanner (1993), Solving ODEs I, §II.6.
  */
-import { IQ, IZ, IMZ, INTEGRAL_DIM, integralJetRhs, type IntegralParams } from "../../nearfield/integralRhs";
+import { IQ, IZ, IMZ, INTEGRAL_DIM, integralJetRhs, type IntegralParams } from "../../nearfield/integral-rhs";
 
 const N = INTEGRAL_DIM;
 const y = new Float64Array(N);

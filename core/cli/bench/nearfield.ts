@@ -25,10 +25,10 @@ import {
   integralParamsFrom,
   nearFieldIntegral,
 } from "../../nearfield/integral";
-import { IB, IC, IMX, IMY, IMZ, INTEGRAL_DIM, IQ, IX, IY, IZ, integralJetRhs } from "../../nearfield/integralRhs";
-import { CENTRELINE_PROFILE_FACTOR } from "../../nearfield/integralSetup";
+import { IB, IC, IMX, IMY, IMZ, INTEGRAL_DIM, IQ, IX, IY, IZ, integralJetRhs } from "../../nearfield/integral-rhs";
+import { CENTRELINE_PROFILE_FACTOR } from "../../nearfield/integral-setup";
 import { integrateAdaptive } from "../../ode/adaptive";
-import { stepperDormandPrince45 } from "../../ode/dormandPrince45";
+import { stepperDormandPrince45 } from "../../ode/dormand-prince-45";
 import type { AmbientColumn, JetSource, NearFieldMethodResult } from "../../nearfield/types";
 import { minimalImpactSolve } from "./minimalSolver";
 import { STANDARD_GRAVITY } from "../../constants";

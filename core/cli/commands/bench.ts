@@ -7,7 +7,7 @@ import { readArgs } from "../args";
 import { ACCURACY_BUDGET, benchIntegral, BENCH_JET, BENCH_COLUMN } from "../bench/nearfield";
 import { INTEGRAL_DEFAULT_REL_TOL } from "../../nearfield/integral";
 import { benchStudy, describeStudyBench } from "../bench/study";
-import { nearFieldLengthScale } from "../../nearfield/lengthScale";
+import { nearFieldLengthScale } from "../../nearfield/length-scale";
 import { benchRecord, describeRecordBench } from "../bench/record";
 
 function medianMicros(fn: () => void, rounds = 9, perRound = 2000): number {

@@ -1,6 +1,6 @@
 /**
  * Specification of core/nearfield/integral.ts (near-field Method 2, the integral jet model) and
- * its right-hand side core/nearfield/integralRhs.ts. Every check value names its source; the
+ * its right-hand side core/nearfield/integral-rhs.ts. Every check value names its source; the
  * published laboratory bands live in tests/check-values/entrainment-lee-cheung-1990.json.
  */
 import { describe, expect, it } from "vitest";
@@ -13,9 +13,9 @@ import {
   integralParamsFrom,
   nearFieldIntegral,
 } from "../../../core/nearfield/integral";
-import { IB, IC, INTEGRAL_DIM, IMX, IMY, IQ, IX, IY, IZ, integralJetRhs } from "../../../core/nearfield/integralRhs";
+import { IB, IC, INTEGRAL_DIM, IMX, IMY, IQ, IX, IY, IZ, integralJetRhs } from "../../../core/nearfield/integral-rhs";
 import { integrateAdaptive } from "../../../core/ode/adaptive";
-import { stepperDormandPrince45 } from "../../../core/ode/dormandPrince45";
+import { stepperDormandPrince45 } from "../../../core/ode/dormand-prince-45";
 import type { AmbientColumn, JetSource, PathSink } from "../../../core/nearfield/types";
 
 /** mathjs ships `solveODE` (Dormand–Prince RK45) but its type declarations omit it. */

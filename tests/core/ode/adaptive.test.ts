@@ -4,7 +4,7 @@
  */
 import { describe, expect, it } from "vitest";
 import { integrateAdaptive, type OdeEvent } from "../../../core/ode/adaptive";
-import { stepperDormandPrince45 } from "../../../core/ode/dormandPrince45";
+import { stepperDormandPrince45 } from "../../../core/ode/dormand-prince-45";
 
 const osc = (_t: number, y: Float64Array, out: Float64Array) => {
   out[0] = y[1];

@@ -6,7 +6,7 @@
 import { describe, expect, it } from "vitest";
 import { denseJet, type JetOptions } from "../../helpers/jets";
 import fc from "fast-check";
-import { nearFieldLengthScale } from "../../../core/nearfield/lengthScale";
+import { nearFieldLengthScale } from "../../../core/nearfield/length-scale";
 import type { AmbientColumn, JetSource } from "../../../core/nearfield/types";
 
 /** A jet with the given d, F and angle; U = 4 m/s unless given, ambient 1025 kg/m³, port at the bed. */

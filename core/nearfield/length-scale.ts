@@ -37,9 +37,9 @@ import {
 import type { DenseJetCoefficients, DenseJetDataset } from "../correlations/dense-jet-dataset";
 import { clampAngle } from "../correlations/dense-jet-dataset";
 import { ROBERTS_1997_DATASET, ROBERTS_1997_NEAR_FIELD_GROWTH } from "../correlations/roberts-1997-inclined-dense-jet";
-import { FLUX_AVERAGING_FACTOR, fluxAveragedFromCentreline } from "./fluxAveraging";
+import { FLUX_AVERAGING_FACTOR, fluxAveragedFromCentreline } from "./flux-averaging";
 import { LAI_LEE_2012_DATASET, LAI_LEE_2012_MAX_RISE_DILUTION } from "../correlations/lai-lee-2012-inclined-dense-jet";
-import { currentIssues, stratificationIssues } from "./lengthScaleChecks";
+import { currentIssues, stratificationIssues } from "./length-scale-checks";
 
 /** Datasets held; the headline takes, quantity by quantity, the less favourable of those covering the angle. */
 export const LENGTH_SCALE_DATASETS: readonly DenseJetDataset[] = [LAI_LEE_2012_DATASET, ROBERTS_1997_DATASET];
@@ -130,8 +130,8 @@ function emptyResult(warnings: ResultWarning[], why: string): NearFieldMethodRes
   };
 }
 
-/** Length-scale (Method 1) near-field estimate for one round dense jet. */
-export function nearFieldLengthScale(jet: JetSource, column: AmbientColumn): NearFieldMethodResult {
+/** The not-available result for a discharge the laws do not describe (not a dense jet, not upward), else null. */
+function notADenseUpwardJet(jet: JetSource): NearFieldMethodResult | null {
   const stage = "length-scale";
   if (!isDenseJet(jet)) {
     const why =
@@ -151,42 +151,46 @@ export function nearFieldLengthScale(jet: JetSource, column: AmbientColumn): Nea
     });
     return emptyResult([w], why);
   }
+  return null;
+}
 
+/**
+ * The not-available result for an angle no dataset held covers: values at an angle come only from data
+ * that can be cited for that angle, so another angle's numbers are not returned in their place.
+ */
+function angleNotCovered(jet: JetSource): NearFieldMethodResult {
   const [aLo, aHi] = LENGTH_SCALE_ANGLE_RANGE;
-  const entries = LENGTH_SCALE_DATASETS.flatMap((dataset) => {
-    const coefficients = dataset.coefficientsAtAngle(jet.angle);
-    return coefficients ? [{ dataset, coefficients }] : [];
-  });
-  if (entries.length === 0) {
-    // Values at an angle come only from data that can be cited for that angle: another angle's numbers
-    // are not returned in their place.
-    const why =
-      `no published laboratory dataset held covers a ${jet.angle.toFixed(1)}° port (the cited datasets ` +
-      `cover ${aLo}°–${aHi}°); another angle's numbers are not used in their place`;
-    const w = warning(
-      "angle-outside-studied-range",
-      "warning",
-      `No length-scale estimate: discharge angle ${jet.angle.toFixed(1)}° is outside the ${aLo}°–${aHi}° ` +
-        `covered by the published datasets held. ${jet.angle > aHi ? "Steeper" : "Flatter"} jets behave ` +
-        `differently, so no other angle's values are used.`,
-      { parameter: "angle", value: jet.angle, range: [aLo, aHi], stage },
-    );
-    return emptyResult([w], why);
-  }
+  const why =
+    `no published laboratory dataset held covers a ${jet.angle.toFixed(1)}° port (the cited datasets ` +
+    `cover ${aLo}°–${aHi}°); another angle's numbers are not used in their place`;
+  const w = warning(
+    "angle-outside-studied-range",
+    "warning",
+    `No length-scale estimate: discharge angle ${jet.angle.toFixed(1)}° is outside the ${aLo}°–${aHi}° ` +
+      `covered by the published datasets held. ${jet.angle > aHi ? "Steeper" : "Flatter"} jets behave ` +
+      `differently, so no other angle's values are used.`,
+    { parameter: "angle", value: jet.angle, range: [aLo, aHi], stage: "length-scale" },
+  );
+  return emptyResult([w], why);
+}
 
-  const warnings: ResultWarning[] = [];
-  const notes: string[] = [];
-  for (const e of entries) {
-    warnings.push(...e.dataset.validityIssues({ angle: jet.angle, froude: jet.froude }));
-  }
-  warnings.push(...currentIssues(jet, column, notes));
-  warnings.push(...stratificationIssues(jet, column, Math.max(0, ...publishedRiseHeights(jet).map((r) => r.height))));
+/** Each dataset's own dimensional values, with its label. */
+interface OwnValues {
+  readonly label: string;
+  readonly values: Dimensional;
+}
 
-  const own = entries.map((e) => ({ label: e.dataset.label, values: toDimensional(e, jet) }));
-  for (const e of entries) notes.push(...e.coefficients.notes);
+/** Headline values and, for each, the dataset (or derivation) it came from. */
+interface Headline {
+  readonly top: Record<HeadlineField, number | null>;
+  readonly from: Partial<Record<HeadlineField, string>>;
+}
 
-  // Headline: where datasets disagree, the value less favourable to the verdict (lower dilution, higher
-  // rise, longer reach); every dataset's own values stay in `variants` and the range shows the spread.
+/**
+ * Headline: where datasets disagree, the value less favourable to the verdict (lower dilution, higher
+ * rise, longer reach); every dataset's own values stay in `variants` and the range shows the spread.
+ */
+function conservativeHeadline(own: readonly OwnValues[]): Headline {
   const top: Record<HeadlineField, number | null> = emptyNearFieldHeadline();
   const from: Partial<Record<HeadlineField, string>> = {};
   for (const f of HEADLINE_FIELDS) {
@@ -201,27 +205,73 @@ export function nearFieldLengthScale(jet: JetSource, column: AmbientColumn): Nea
       }
     }
   }
-  // Mixing between impact and the end of the near field: a dataset that gives the impact dilution but no
-  // near-field end is carried there with the growth Roberts et al. (1997) measured from impact to the
-  // near-field end; the conservative headline takes the lower of that and any measured value.
-  if (top.impactDilution !== null) {
-    const grown = top.impactDilution * ROBERTS_1997_NEAR_FIELD_GROWTH.dilution;
-    if (top.nearFieldDilution === null || grown < top.nearFieldDilution) {
-      notes.push(
-        `nearFieldDilution = impact dilution ${top.impactDilution.toFixed(1)} × ` +
-          `${ROBERTS_1997_NEAR_FIELD_GROWTH.dilution.toFixed(3)}, the growth from impact to the end of the ` +
-          `near field in Roberts et al. (1997) (S_n/S_i = 2.6/1.6)` +
-          (top.nearFieldDilution === null ? "." : `, lower than the measured ${top.nearFieldDilution.toFixed(1)}.`),
-      );
-      top.nearFieldDilution = grown;
-      from.nearFieldDilution = `${from.impactDilution} impact dilution with the Roberts et al. (1997) growth`;
-    }
-    if (top.nearFieldDistance === null && top.impactDistance !== null) {
-      top.nearFieldDistance =
-        top.impactDistance + ROBERTS_1997_NEAR_FIELD_GROWTH.spreadLength * jet.diameter * jet.froude;
-      from.nearFieldDistance = `impact distance + ${ROBERTS_1997_NEAR_FIELD_GROWTH.spreadLength.toFixed(1)}·d·F (Roberts et al. 1997)`;
-    }
+  return { top, from };
+}
+
+/**
+ * Mixing between impact and the end of the near field: a dataset that gives the impact dilution but no
+ * near-field end is carried there with the growth Roberts et al. (1997) measured from impact to the
+ * near-field end; the conservative headline takes the lower of that and any measured value. Updates
+ * `headline` in place and notes what it did.
+ */
+function carryImpactToNearFieldEnd(headline: Headline, jet: JetSource, notes: string[]): void {
+  const { top, from } = headline;
+  if (top.impactDilution === null) return;
+  const grown = top.impactDilution * ROBERTS_1997_NEAR_FIELD_GROWTH.dilution;
+  if (top.nearFieldDilution === null || grown < top.nearFieldDilution) {
+    notes.push(
+      `nearFieldDilution = impact dilution ${top.impactDilution.toFixed(1)} × ` +
+        `${ROBERTS_1997_NEAR_FIELD_GROWTH.dilution.toFixed(3)}, the growth from impact to the end of the ` +
+        `near field in Roberts et al. (1997) (S_n/S_i = 2.6/1.6)` +
+        (top.nearFieldDilution === null ? "." : `, lower than the measured ${top.nearFieldDilution.toFixed(1)}.`),
+    );
+    top.nearFieldDilution = grown;
+    from.nearFieldDilution = `${from.impactDilution} impact dilution with the Roberts et al. (1997) growth`;
   }
+  if (top.nearFieldDistance === null && top.impactDistance !== null) {
+    top.nearFieldDistance =
+      top.impactDistance + ROBERTS_1997_NEAR_FIELD_GROWTH.spreadLength * jet.diameter * jet.froude;
+    from.nearFieldDistance = `impact distance + ${ROBERTS_1997_NEAR_FIELD_GROWTH.spreadLength.toFixed(1)}·d·F (Roberts et al. 1997)`;
+  }
+}
+
+/** The impact dilutions' spread over the datasets, or null (with a note) when fewer than two give one. */
+function impactDilutionRange(own: readonly OwnValues[], notes: string[]): readonly [number, number] | null {
+  const dilutions = own.map((v) => v.values.impactDilution).filter((v): v is number => v !== null);
+  const dilutionRange: readonly [number, number] | null =
+    dilutions.length >= 2 ? [Math.min(...dilutions), Math.max(...dilutions)] : null;
+  if (dilutionRange === null) {
+    notes.push(
+      "No dilution range: fewer than two datasets give an impact dilution here and no published scatter " + "is known.",
+    );
+  }
+  return dilutionRange;
+}
+
+/** Length-scale (Method 1) near-field estimate for one round dense jet. */
+export function nearFieldLengthScale(jet: JetSource, column: AmbientColumn): NearFieldMethodResult {
+  const notApplicable = notADenseUpwardJet(jet);
+  if (notApplicable) return notApplicable;
+  const entries = LENGTH_SCALE_DATASETS.flatMap((dataset) => {
+    const coefficients = dataset.coefficientsAtAngle(jet.angle);
+    return coefficients ? [{ dataset, coefficients }] : [];
+  });
+  if (entries.length === 0) return angleNotCovered(jet);
+
+  const warnings: ResultWarning[] = [];
+  const notes: string[] = [];
+  for (const e of entries) {
+    warnings.push(...e.dataset.validityIssues({ angle: jet.angle, froude: jet.froude }));
+  }
+  warnings.push(...currentIssues(jet, column, notes));
+  warnings.push(...stratificationIssues(jet, column, Math.max(0, ...publishedRiseHeights(jet).map((r) => r.height))));
+
+  const own = entries.map((e) => ({ label: e.dataset.label, values: toDimensional(e, jet) }));
+  for (const e of entries) notes.push(...e.coefficients.notes);
+
+  const headline = conservativeHeadline(own);
+  carryImpactToNearFieldEnd(headline, jet, notes);
+  const { top, from } = headline;
   const used = [...new Set(Object.values(from))];
   if (own.length > 1) {
     notes.push(
@@ -239,15 +289,7 @@ export function nearFieldLengthScale(jet: JetSource, column: AmbientColumn): Nea
         `level is continued as a straight line at the discharge angle (an upper bound on the added distance).`,
     );
   }
-
-  const dilutions = own.map((v) => v.values.impactDilution).filter((v): v is number => v !== null);
-  const dilutionRange: readonly [number, number] | null =
-    dilutions.length >= 2 ? [Math.min(...dilutions), Math.max(...dilutions)] : null;
-  if (dilutionRange === null) {
-    notes.push(
-      "No dilution range: fewer than two datasets give an impact dilution here and no published scatter " + "is known.",
-    );
-  }
+  const dilutionRange = impactDilutionRange(own, notes);
 
   const source =
     own.length === 1

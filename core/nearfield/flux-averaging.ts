@@ -12,7 +12,7 @@
  * @returns flux-averaged dilution, dimensionless, or null for null input
  * Validity: self-similar round jets and plumes; not the undiluted core of the first few diameters.
  */
-import { CENTRELINE_PROFILE_FACTOR } from "./integralSetup";
+import { CENTRELINE_PROFILE_FACTOR } from "./integral-setup";
 
 /** Flux-averaged ÷ centreline dilution, (1 + λ²)/λ² with λ = 1.2 (DERIVED from Fischer et al. 1979). */
 export const FLUX_AVERAGING_FACTOR = 1 / CENTRELINE_PROFILE_FACTOR;

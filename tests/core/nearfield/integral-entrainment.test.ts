@@ -1,6 +1,6 @@
 /**
  * Specification of the entrainment closure used by the integral jet model,
- * core/correlations/entrainmentLeeCheung1990.ts (Lee & Cheung 1990, top-hat form).
+ * core/correlations/lee-cheung-1990-entrainment.ts (Lee & Cheung 1990, top-hat form).
  */
 import { describe, expect, it } from "vitest";
 import {
@@ -8,7 +8,7 @@ import {
   entrainmentLeeCheung1990Alpha,
   entrainmentLeeCheung1990Rate,
   entrainmentLeeCheung1990ValidityIssues,
-} from "../../../core/correlations/entrainmentLeeCheung1990";
+} from "../../../core/correlations/lee-cheung-1990-entrainment";
 import { nearFieldIntegral } from "../../../core/nearfield/integral";
 
 describe("entrainmentLeeCheung1990Alpha()", () => {

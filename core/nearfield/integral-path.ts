@@ -4,8 +4,8 @@
  * immutable `PathPoint[]` for the result.
  */
 import type { PathPoint } from "./types";
-import { IQ, IX, IY, IZ, radiusFromState, verticalHalfExtent } from "./integralRhs";
-import { centrelineDilution } from "./integralSetup";
+import { IQ, IX, IY, IZ, radiusFromState, verticalHalfExtent } from "./integral-rhs";
+import { centrelineDilution } from "./integral-setup";
 
 /** At most this many points in the result's path (the sink still receives every step). */
 export const PATH_POINTS = 200;

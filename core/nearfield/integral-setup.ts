@@ -2,8 +2,8 @@
  * Set-up of the integral jet model: source and bias statements, the Gaussian profile factor for
  * centreline dilution, RHS parameters from the ambient column, and the state at the port.
  */
-import { ENTRAINMENT_LEE_CHEUNG_1990_SOURCE } from "../correlations/entrainmentLeeCheung1990";
-import { IB, IC, INTEGRAL_DIM, IMX, IMY, IMZ, IQ, type IntegralParams } from "./integralRhs";
+import { ENTRAINMENT_LEE_CHEUNG_1990_SOURCE } from "../correlations/lee-cheung-1990-entrainment";
+import { IB, IC, INTEGRAL_DIM, IMX, IMY, IMZ, IQ, type IntegralParams } from "./integral-rhs";
 import type { AmbientColumn, JetSource } from "./types";
 import { STANDARD_GRAVITY } from "../constants";
 import { interpolateLinear } from "../interpolate";

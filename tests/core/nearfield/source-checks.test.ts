@@ -3,7 +3,7 @@
  */
 import { describe, expect, it } from "vitest";
 import { denseJet, uniformColumn, type JetOptions } from "../../helpers/jets";
-import { jetSourceWarnings } from "../../../core/nearfield/sourceChecks";
+import { jetSourceWarnings } from "../../../core/nearfield/source-checks";
 import type { AmbientColumn, JetSource } from "../../../core/nearfield/types";
 
 const makeJet = (p: JetOptions = {}): JetSource => denseJet({ azimuth: 0, portHeight: 1, ...p });

@@ -1,7 +1,7 @@
 /**
  * Conservation equations of a round buoyant jet in 3-D, in flux form along the centreline arc
  * length s, with the Lee & Cheung (1990) entrainment closure (core/correlations/
- * entrainmentLeeCheung1990.ts). Top-hat profiles, Boussinesq, steady, ambient current uniform
+ * lee-cheung-1990-entrainment.ts). Top-hat profiles, Boussinesq, steady, ambient current uniform
  * with depth, ambient density and salinity varying with depth.
  *
  * Frame: origin at the port centre, x east, y north, z up (m above the port). The ambient current
@@ -25,7 +25,10 @@
  * (1990): entrained fluid brings the ambient momentum u_a·â; the buoyancy force per unit length
  * is π b² g′ (top-hat). Standard for integral jet models (e.g. Fischer et al. 1979, ch. 9).
  */
-import { entrainmentLeeCheung1990Alpha, entrainmentLeeCheung1990Rate } from "../correlations/entrainmentLeeCheung1990";
+import {
+  entrainmentLeeCheung1990Alpha,
+  entrainmentLeeCheung1990Rate,
+} from "../correlations/lee-cheung-1990-entrainment";
 
 export const IX = 0;
 export const IY = 1;

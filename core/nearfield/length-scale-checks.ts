@@ -1,5 +1,5 @@
 /**
- * Applicability checks of the length-scale method (lengthScale.ts): the current (crossflow Froude number,
+ * Applicability checks of the length-scale method (length-scale.ts): the current (crossflow Froude number,
  * Lai & Lee 2013; weak current, Abessi & Roberts 2016) and stratification across the jet's rise.
  */
 import { warning, type ResultWarning } from "../warnings";

@@ -4,7 +4,7 @@
  */
 import { warning, type ResultWarning } from "../warnings";
 import type { AmbientColumn, JetSource } from "./types";
-import { publishedRiseHeights } from "./lengthScale";
+import { publishedRiseHeights } from "./length-scale";
 import { SHARQAWY_2010_VISCOSITY_SOURCE, viscosityFromST } from "../correlations/sharqawy-2010-viscosity";
 
 /** Port Reynolds number below which laboratory jet laws are doubtful. */

@@ -1,11 +1,11 @@
 /**
- * Specification of core/ode/dormandPrince45.ts: a 5th-order step with a 4th-order error
+ * Specification of core/ode/dormand-prince-45.ts: a 5th-order step with a 4th-order error
  * estimate and a 4th-order dense output. Checked on problems with closed-form solutions
  * (exact solutions: DERIVED); the orders are those stated by Dormand & Prince (1980) and
  * Hairer, Nørsett & Wanner (1993, §II.5–II.6).
  */
 import { describe, expect, it } from "vitest";
-import { stepperDormandPrince45 } from "../../../core/ode/dormandPrince45";
+import { stepperDormandPrince45 } from "../../../core/ode/dormand-prince-45";
 
 type P = { k: number };
 // y' = k·y, exact y = e^{k t}
