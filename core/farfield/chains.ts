@@ -33,6 +33,9 @@ export interface FarSeries {
   switchDistance: number | null;
   /** Passive chain only: where passive diffusion took over from the drifting layer (null if it never did). */
   handOverDistance?: number | null;
+  /** Ri handed to E(Ri) and Ri* handed to the bed-stirred law at each point (Infinity where neither is used). */
+  richardson: number[];
+  bedRichardson: number[];
 }
 
 export interface Chain {
@@ -205,6 +208,8 @@ function integrateFar(
     thickness: gc.thickness,
     width: gc.width,
     switchDistance: gc.switchDistance,
+    richardson: gc.richardson,
+    bedRichardson: gc.bedRichardson,
   };
 }
 
@@ -225,6 +230,8 @@ function passiveFromLayer(ctx: FarContext, c: Chain, gc: FarSeries): FarSeries {
     width: [],
     switchDistance: gc.switchDistance,
     handOverDistance: gc.distance[k],
+    richardson: [],
+    bedRichardson: [],
   };
   for (let i = 0; i < gc.distance.length; i++) {
     const r = gc.distance[i];
@@ -233,8 +240,13 @@ function passiveFromLayer(ctx: FarContext, c: Chain, gc: FarSeries): FarSeries {
       out.dilution.push(gc.dilution[i]);
       out.thickness.push(gc.thickness[i]);
       out.width.push(gc.width[i]);
+      out.richardson.push(gc.richardson[i]);
+      out.bedRichardson.push(gc.bedRichardson[i]);
       continue;
     }
+    // Past the hand-over neither entrainment law is used.
+    out.richardson.push(Infinity);
+    out.bedRichardson.push(Infinity);
     const x = r - gc.distance[k];
     out.dilution.push(gc.dilution[k] * brooksDilutionInField(field, x));
     out.thickness.push(gc.thickness[k]); // Brooks (1960) assumes no vertical mixing: thickness stays at its start value
@@ -269,6 +281,8 @@ export function truncateSeries(f: FarSeries, xEnd: number): FarSeries {
     width: [],
     switchDistance: f.switchDistance,
     handOverDistance: f.handOverDistance,
+    richardson: [],
+    bedRichardson: [],
   };
   for (let i = 0; i < f.distance.length; i++) {
     if (f.distance[i] > xEnd) {
@@ -277,6 +291,8 @@ export function truncateSeries(f: FarSeries, xEnd: number): FarSeries {
         out.dilution.push(interpolateLinear(f.distance, f.dilution, xEnd));
         out.thickness.push(interpolateLinear(f.distance, f.thickness, xEnd));
         out.width.push(interpolateLinear(f.distance, f.width, xEnd));
+        out.richardson.push(f.richardson[i]);
+        out.bedRichardson.push(f.bedRichardson[i]);
       }
       break;
     }
@@ -284,6 +300,8 @@ export function truncateSeries(f: FarSeries, xEnd: number): FarSeries {
     out.dilution.push(f.dilution[i]);
     out.thickness.push(f.thickness[i]);
     out.width.push(f.width[i]);
+    out.richardson.push(f.richardson[i]);
+    out.bedRichardson.push(f.bedRichardson[i]);
   }
   return out;
 }

@@ -33,8 +33,17 @@
  *   dw/dx = 2·√(g′h)/u (front Froude number 1, judgement). Because the switch needs the layer's own speed to
  *   fall to u, a vanishing current never switches within reach and the result tends to the stagnant one.
  */
-import { entrainmentFromRichardson, TURNER_1986_SOURCE } from "./turner-1986-entrainment";
-import { bedEntrainmentFromRichardson, KATO_PHILLIPS_1969_SOURCE } from "./kato-phillips-1969-entrainment";
+import type { ResultWarning } from "../warnings";
+import {
+  entrainmentFromRichardson,
+  entrainmentFromRichardsonValidityIssues,
+  TURNER_1986_SOURCE,
+} from "./turner-1986-entrainment";
+import {
+  bedEntrainmentFromRichardson,
+  bedEntrainmentFromRichardsonValidityIssues,
+  KATO_PHILLIPS_1969_SOURCE,
+} from "./kato-phillips-1969-entrainment";
 
 export const DEFAULT_BED_DRAG = 0.0025; // common practice, no source
 export const SPREADING_LAYER_SOURCE =
@@ -89,6 +98,8 @@ export interface SpreadingLayerSeries {
   readonly entrainment: number[];
   /** Total entrainment velocity across the layer's top (shear + bed-stirred), m/s. */
   readonly entrainmentVelocity: number[];
+  /** Stirring Richardson number Ri* the bed-stirred entrainment was evaluated at (Infinity where none). */
+  readonly bedRichardson: number[];
 }
 
 /** Normal-flow Richardson number of a layer on a slope: root of Ri = (C_D + E(Ri))/tanβ (Infinity if flat). */
@@ -131,11 +142,13 @@ interface LayerState {
   e: number;
   /** Total entrainment velocity across the top (shear + bed-stirred), m/s. */
   we: number;
+  /** Ri* of the bed-stirred entrainment (Infinity where there is none). */
+  riBed: number;
 }
 
 // Module-scope scratch for the integration (the function is not re-entrant across threads' shared memory,
 // and JavaScript runs it to completion, so one set serves every call).
-const scratchState: LayerState = { h: 0, v: 0, vOwn: 0, ri: 0, e: 0, we: 0 };
+const scratchState: LayerState = { h: 0, v: 0, vOwn: 0, ri: 0, e: 0, we: 0, riBed: Infinity };
 const scratchParams: LayerParams = {
   buoyancyFlux: 0,
   u: 0,
@@ -157,6 +170,7 @@ function layerStateInto(st: LayerState, p: LayerParams, advected: boolean, q: nu
     st.ri = Infinity;
     st.e = 0;
     st.we = 0;
+    st.riBed = Infinity;
     return;
   }
   if (advected) {
@@ -171,7 +185,8 @@ function layerStateInto(st: LayerState, p: LayerParams, advected: boolean, q: nu
   st.ri = p.riOwn;
   st.e = p.eOwn;
   // Bed-stirred part: zero without a current (u* = 0), so the stagnant limit is continuous.
-  const bed = p.ustar > 0 ? p.ustar * bedEntrainmentFromRichardson((gp * st.h * p.cosb) / p.ustar2) : 0;
+  st.riBed = p.ustar > 0 ? (gp * st.h * p.cosb) / p.ustar2 : Infinity;
+  const bed = p.ustar > 0 ? p.ustar * bedEntrainmentFromRichardson(st.riBed) : 0;
   st.we = st.e * st.vOwn + bed;
 }
 
@@ -212,6 +227,7 @@ export function spreadingLayerFromNearFieldEnd(input: SpreadingLayerInput): Spre
     richardson: [] as number[],
     entrainment: [] as number[],
     entrainmentVelocity: [] as number[],
+    bedRichardson: [] as number[],
   };
   // Records the layer at (r, q), first switching it to advected if the radial layer has slowed to the
   // current. Returns the width there; `st` is left holding the recorded state.
@@ -240,6 +256,7 @@ export function spreadingLayerFromNearFieldEnd(input: SpreadingLayerInput): Spre
     out.richardson.push(st.ri);
     out.entrainment.push(st.e);
     out.entrainmentVelocity.push(st.we);
+    out.bedRichardson.push(st.riBed);
     return w;
   };
   let r = r0;
@@ -282,4 +299,27 @@ export function spreadingLayerFromNearFieldEnd(input: SpreadingLayerInput): Spre
     w = record(r, q);
   }
   return out;
+}
+
+/** The part of a spreading-layer series a result reads: Ri handed to E(Ri) and Ri* handed to the bed law. */
+export interface SpreadingLayerRichardson {
+  readonly distance: readonly number[];
+  readonly richardson: readonly number[];
+  readonly bedRichardson: readonly number[];
+}
+
+/**
+ * Range checks of the two entrainment laws over the points of a layer series up to and including the
+ * first at or past `edgeDistance` (the points the edge value is read from, the same in edge-only and
+ * full runs): one warning per code, at the value farthest outside the law's range. Never throws.
+ */
+export function spreadingLayerValidityIssues(series: SpreadingLayerRichardson, edgeDistance: number): ResultWarning[] {
+  let ri = Infinity;
+  let riBed = Infinity;
+  for (let i = 0; i < series.distance.length; i++) {
+    ri = Math.min(ri, series.richardson[i]);
+    riBed = Math.min(riBed, series.bedRichardson[i]);
+    if (series.distance[i] >= edgeDistance) break;
+  }
+  return [...entrainmentFromRichardsonValidityIssues(ri), ...bedEntrainmentFromRichardsonValidityIssues(riBed)];
 }

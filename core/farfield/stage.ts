@@ -15,7 +15,7 @@ import type { AmbientColumn, NearFieldMethodResult } from "../nearfield/types";
 import type { DensitiesResult, MixingZoneResult, SeriesResult } from "../result/contract";
 import { warning, type ResultWarning } from "../warnings";
 import { interpolateLinear } from "../interpolate";
-import { SPREADING_LAYER_SOURCE } from "./gravity-current";
+import { SPREADING_LAYER_SOURCE, spreadingLayerValidityIssues } from "./gravity-current";
 import { BROOKS_1960_SOURCE, brooksDilutionFromDistanceValidityIssues } from "./brooks-1960-diffusion";
 import { TURNER_1986_SOURCE } from "./turner-1986-entrainment";
 import { KATO_PHILLIPS_1969_SOURCE } from "./kato-phillips-1969-entrainment";
@@ -150,6 +150,7 @@ export function farFieldStage(input: FarFieldInput): FarFieldOutput {
       // Where the method gives no thickness at the edge (the layer has become passive), say so with null.
       layerAtEdge = Number.isFinite(h) ? h : null;
       warnings.push(...thinLayerWarnings(far, radius, layerAtEdge, scenario.ambient.depth));
+      warnings.push(...spreadingLayerValidityIssues(far, radius));
     }
     if (full) series = seriesFromChain(chain, truncateSeries(far, xEnd), farMethod, excess);
   }

@@ -12,7 +12,7 @@ import type { DensitiesResult } from "../result/contract";
 import type { ProfilePoint, Scenario } from "../scenario/types";
 import { warning, type ResultWarning } from "../warnings";
 import { equationOfStateFor, type EquationOfState } from "./equation-of-state";
-import { pressureFromDepth } from "./pressure-from-depth";
+import { pressureFromDepth, pressureFromDepthValidityIssues } from "./pressure-from-depth";
 import { STANDARD_GRAVITY } from "../constants";
 import { interpolateLinear } from "../interpolate";
 
@@ -64,7 +64,8 @@ export function profileAtDepth(
  */
 export function propertiesFromScenario(scenario: Scenario): PropertiesStage {
   const { ambient, discharge, diffuser } = scenario;
-  const warnings: ResultWarning[] = [];
+  // The range warnings of the salinity conversions made while reading the file come first.
+  const warnings: ResultWarning[] = [...(scenario.conversionWarnings ?? [])];
   const waterDepth = ambient.depth;
   const profile = ambient.profile;
 
@@ -103,6 +104,9 @@ export function propertiesFromScenario(scenario: Scenario): PropertiesStage {
 
   const pressures = depths.map((d) => pressureFromDepth(d));
   const portPressure = pressureFromDepth(portDepth);
+  // Every depth converted above lies in [0, waterDepth] (the port's depth is clamped into it), so the
+  // deepest (the seabed) is the worst for the depth check; the latitude is the default one.
+  warnings.push(...pressureFromDepthValidityIssues(waterDepth));
   // The column carries potential densities referenced to the port's pressure: a column of uniform
   // salinity and temperature is then neutral (no spurious "stratification" from compressibility), and the
   // jet's buoyancy compares like with like. In-situ values are reported as ambientSurface/ambientBottom.

@@ -89,7 +89,7 @@ export function hashText(text: string): string {
 
 /** Hash of everything that affects results: the normalised scenario without its display name. */
 export function inputsHash(s: Scenario): string {
-  const { name: _name, description: _d, conversions: _c, ...rest } = s;
+  const { name: _name, description: _d, conversions: _c, conversionWarnings: _w, ...rest } = s;
   // Which fields a case sets itself matters to later overrides, not to this scenario's results.
   const physics = { ...rest, ambientCases: rest.ambientCases.map(({ sets: _s, ...c }) => c) };
   const h = new Fnv64();

@@ -1,3 +1,5 @@
+import type { ResultWarning } from "../warnings";
+
 /** A problem with a scenario, naming the path, the value given and what is expected. */
 export interface ScenarioIssue {
   /** Dotted path in the scenario file, e.g. "diffuser.portDiameter" or "ambient.profile.2.depth". */
@@ -27,8 +29,28 @@ export function issue(path: string, value: unknown, expectation: string, related
   };
 }
 
-/** What normalising collects on the way: the issues found and the unit conversions made. */
+/**
+ * What normalising collects on the way: the issues found, the unit conversions made and the range
+ * warnings of the conversion formulas used (one per code and field, the value farthest outside its range).
+ */
 export interface NormaliseContext {
   readonly issues: ScenarioIssue[];
   readonly conversions: string[];
+  readonly warnings?: ResultWarning[];
+}
+
+/** Adds a conversion's range warnings for the field at `path`, keeping the worst value per code and field. */
+export function addConversionWarnings(ctx: NormaliseContext, path: string, found: readonly ResultWarning[]): void {
+  if (!ctx.warnings) return;
+  for (const w of found) {
+    const named: ResultWarning = { ...w, parameter: path, message: `${path}: ${w.message}` };
+    const at = ctx.warnings.findIndex((o) => o.code === w.code && o.parameter === path);
+    if (at < 0) ctx.warnings.push(named);
+    else if (distanceOutside(named) > distanceOutside(ctx.warnings[at]!)) ctx.warnings[at] = named;
+  }
+}
+
+function distanceOutside(w: ResultWarning): number {
+  if (w.value === undefined || !w.range) return 0;
+  return Math.max(w.range[0] - w.value, w.value - w.range[1]);
 }

@@ -5,20 +5,27 @@
 import type { AmbientCase, AmbientCaseField, AmbientInput, BasinInput, ProfilePoint } from "./types";
 import type { SalinityValue, ScenarioFileParsed } from "./schema";
 import { normaliseRecord } from "../record/normalise";
-import { absoluteSalinityFromPractical, salinityFromTds } from "../properties";
+import {
+  absoluteSalinityFromPractical,
+  absoluteSalinityFromPracticalValidityIssues,
+  salinityFromTds,
+  salinityFromTdsValidityIssues,
+} from "../properties";
 import { formatNumber } from "../units";
-import { issue, type NormaliseContext as Ctx } from "./issue";
+import { addConversionWarnings, issue, type NormaliseContext as Ctx } from "./issue";
 
 export function resolveSalinity(s: SalinityValue, temperature: number, path: string, ctx: Ctx): number {
   if (s.basis === "absolute") return s.value;
   if (s.basis === "practical") {
     const sa = absoluteSalinityFromPractical(s.value);
+    addConversionWarnings(ctx, path, absoluteSalinityFromPracticalValidityIssues(s.value));
     ctx.conversions.push(
       `${path}: ${String(s.raw)} practical salinity → ${formatNumber(sa)} g/kg Absolute Salinity (TEOS-10 reference-composition factor 35.16504/35)`,
     );
     return sa;
   }
   const sa = salinityFromTds(s.value, temperature, 0);
+  addConversionWarnings(ctx, path, salinityFromTdsValidityIssues(s.value));
   ctx.conversions.push(
     `${path}: ${String(s.raw)} total dissolved solids → ${formatNumber(sa)} g/kg (divided by the solution's density at ${formatNumber(temperature)} °C, atmospheric pressure)`,
   );
@@ -128,7 +135,7 @@ export function ambientFromFile(f: ScenarioFileParsed, ctx: Ctx): AmbientInput |
   };
   if (ambient && a.record) {
     // One note for the whole column: the conversions themselves follow resolveSalinity.
-    const quiet: Ctx = { issues: ctx.issues, conversions: [] };
+    const quiet: Ctx = { issues: ctx.issues, conversions: [], ...(ctx.warnings ? { warnings: ctx.warnings } : {}) };
     const rec = normaliseRecord(a.record, ambient.profile[ambient.profile.length - 1]!.temperature, (sv, t) =>
       resolveSalinity(sv, t, "ambient.record.salinity", quiet),
     );

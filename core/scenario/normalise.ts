@@ -20,7 +20,7 @@ export { DEFAULT_SALT_REJECTION } from "./normalise-discharge";
 type Ctx = NormaliseContext;
 
 export function normaliseScenario(f: ScenarioFileParsed): { scenario: Scenario | null; issues: ScenarioIssue[] } {
-  const ctx: Ctx = { issues: [], conversions: [] };
+  const ctx: Ctx = { issues: [], conversions: [], warnings: [] };
   const discharge = dischargeFromFile(f, ctx);
   const constituents = constituentsFromFile(f, ctx);
   const ambient = ambientFromFile(f, ctx);
@@ -57,6 +57,7 @@ export function normaliseScenario(f: ScenarioFileParsed): { scenario: Scenario |
     },
     ...(uncertainty ? { uncertainty } : {}),
     conversions: ctx.conversions,
+    ...(ctx.warnings?.length ? { conversionWarnings: ctx.warnings } : {}),
   };
   const broken = scenarioRuleIssues(scenario);
   if (broken.length > 0) return { scenario: null, issues: broken };

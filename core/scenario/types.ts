@@ -5,6 +5,7 @@
  */
 
 import type { BasinInput } from "../basin/box-model";
+import type { ResultWarning } from "../warnings";
 export type { BasinInput } from "../basin/box-model";
 
 export interface ProfilePoint {
@@ -211,4 +212,9 @@ export interface Scenario {
   readonly uncertainty?: { readonly inputs: readonly UncertainInput[] };
   /** Human-readable notes on conversions applied while reading the file. */
   readonly conversions: readonly string[];
+  /**
+   * Range warnings of the conversion formulas used while reading the file (practical salinity and TDS to
+   * g/kg); absent when there are none. The properties stage hands them on with its own warnings.
+   */
+  readonly conversionWarnings?: readonly ResultWarning[];
 }
