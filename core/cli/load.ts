@@ -4,7 +4,7 @@
  * duplicate keys). File errors and scenario issues become CliErrors (exit code 2).
  */
 import { parseScenario } from "../scenario/parse";
-import { parseJsonText } from "../scenario/jsonText";
+import { parseJsonText } from "../scenario/json-text";
 import type { Scenario } from "../scenario/types";
 import { CliError, type CliIO } from "./command";
 

@@ -1,7 +1,7 @@
 /**
  * Benchmark of the integral jet model (near-field Method 2): median microseconds per solve of the
  * exact `nearFieldIntegral` code path the app uses (default tolerances, path included), timed in
- * alternating batches with a minimal hand-written solver of the same equations (./minimalSolver), so
+ * alternating batches with a minimal hand-written solver of the same equations (./minimal-solver), so
  * both see the same machine load; the accuracy study behind the default tolerance; and mathjs
  * `solveODE` on the same right-hand side at equal accuracy.
  *
@@ -30,7 +30,7 @@ import { CENTRELINE_PROFILE_FACTOR } from "../../nearfield/integralSetup";
 import { integrateAdaptive } from "../../ode/adaptive";
 import { stepperDormandPrince45 } from "../../ode/dormandPrince45";
 import type { AmbientColumn, JetSource, NearFieldMethodResult } from "../../nearfield/types";
-import { minimalImpactSolve } from "./minimalSolver";
+import { minimalImpactSolve } from "./minimal-solver";
 import { STANDARD_GRAVITY } from "../../constants";
 
 type SolveODE = (
