@@ -34,94 +34,46 @@ export interface MinimalSolve {
   readonly evaluations: number;
 }
 
+/** What a solve starts from and how tightly it steps (`atol` and `rtol` as in `nearFieldIntegral`). */
+export interface MinimalSolveInput {
+  readonly params: IntegralParams;
+  /** Initial state. */
+  readonly y0: Float64Array;
+  /** Port height above the seabed, m. */
+  readonly portHeight: number;
+  readonly rtol: number;
+  readonly atol: Float64Array;
+  /** First step, m of arc length. */
+  readonly h0: number;
+  /** Largest step, m of arc length. */
+  readonly hMax: number;
+}
+
+/** Controller memory across steps, module scope like the vectors (a solve allocates nothing). */
+const control = { rateOld: Number.NaN, hPrev: 0 };
+
 /**
- * Solves from the state y0 to the seabed (z = −portHeight) and returns the impact point. `atol` and
- * `rtol` as in `nearFieldIntegral`. Impact located by bisection on the cubic Hermite interpolant of z.
+ * Solves from the state y0 to the seabed (z = −portHeight) and returns the impact point. Impact located
+ * by bisection on the cubic Hermite interpolant of z.
  */
-export function minimalImpactSolve(
-  params: IntegralParams,
-  y0: Float64Array,
-  portHeight: number,
-  rtol: number,
-  atol: Float64Array,
-  h0: number,
-  hMax: number,
-): MinimalSolve {
+export function minimalImpactSolve(input: MinimalSolveInput): MinimalSolve {
+  const { params, y0, portHeight, rtol, atol, hMax } = input;
   y.set(y0);
   integralJetRhs(0, y, k1, params);
   let evaluations = 1;
   let t = 0;
-  let h = h0;
+  let h = input.h0;
   let steps = 0;
   let lastRejected = false;
-  let rateOld = Number.NaN;
-  let hPrev = 0;
+  control.rateOld = Number.NaN;
+  control.hPrev = 0;
   let capped = false;
   for (let guard = 0; guard < 100000; guard++) {
-    if (!capped && y[IMZ] > 0 && k1[IMZ] < 0) {
-      // Same kink handling as the model: end the step at the predicted top (quadratic in M_z).
-      const g = y[IMZ];
-      const rate = k1[IMZ];
-      let reach = -g / rate;
-      if (hPrev > 0 && rateOld === rateOld) {
-        const c = (rate - rateOld) / hPrev;
-        const disc = rate * rate - 2 * c * g;
-        if (c !== 0 && disc >= 0) {
-          const r2 = (2 * -g) / (rate - Math.sqrt(disc));
-          if (r2 > 0) reach = r2;
-        }
-      }
-      rateOld = rate;
-      reach *= 1.001;
-      if (reach < h) h = reach;
-    }
+    if (!capped && y[IMZ] > 0 && k1[IMZ] < 0) h = stepCappedAtPredictedTop(h);
     capped = true;
-    for (let i = 0; i < N; i++) tmp[i] = y[i] + h * 0.2 * k1[i];
-    integralJetRhs(t + 0.2 * h, tmp, k2, params);
-    for (let i = 0; i < N; i++) tmp[i] = y[i] + h * ((3 / 40) * k1[i] + (9 / 40) * k2[i]);
-    integralJetRhs(t + 0.3 * h, tmp, k3, params);
-    for (let i = 0; i < N; i++) tmp[i] = y[i] + h * ((44 / 45) * k1[i] - (56 / 15) * k2[i] + (32 / 9) * k3[i]);
-    integralJetRhs(t + 0.8 * h, tmp, k4, params);
-    for (let i = 0; i < N; i++) {
-      tmp[i] =
-        y[i] + h * ((19372 / 6561) * k1[i] - (25360 / 2187) * k2[i] + (64448 / 6561) * k3[i] - (212 / 729) * k4[i]);
-    }
-    integralJetRhs(t + (8 / 9) * h, tmp, k5, params);
-    for (let i = 0; i < N; i++) {
-      tmp[i] =
-        y[i] +
-        h *
-          ((9017 / 3168) * k1[i] -
-            (355 / 33) * k2[i] +
-            (46732 / 5247) * k3[i] +
-            (49 / 176) * k4[i] -
-            (5103 / 18656) * k5[i]);
-    }
-    integralJetRhs(t + h, tmp, k6, params);
-    for (let i = 0; i < N; i++) {
-      yn[i] =
-        y[i] +
-        h *
-          ((35 / 384) * k1[i] + (500 / 1113) * k3[i] + (125 / 192) * k4[i] - (2187 / 6784) * k5[i] + (11 / 84) * k6[i]);
-    }
-    integralJetRhs(t + h, yn, k7, params);
+    dormandPrinceStep(t, h, params);
     evaluations += 6;
-    let sum = 0;
-    for (let i = 0; i < N; i++) {
-      const e =
-        h *
-        ((71 / 57600) * k1[i] -
-          (71 / 16695) * k3[i] +
-          (71 / 1920) * k4[i] -
-          (17253 / 339200) * k5[i] +
-          (22 / 525) * k6[i] -
-          (1 / 40) * k7[i]);
-      const a = Math.abs(y[i]);
-      const b = Math.abs(yn[i]);
-      const q = e / (atol[i] + rtol * (a > b ? a : b));
-      sum += q * q;
-    }
-    const err = Math.sqrt(sum / N);
+    const err = errorNorm(h, rtol, atol);
     if (!(err <= 1)) {
       lastRejected = true;
       h *= Math.max(0.2, 0.9 * Math.pow(err, -0.2));
@@ -129,23 +81,13 @@ export function minimalImpactSolve(
     }
     steps++;
     capped = false;
-    hPrev = h;
+    control.hPrev = h;
     if (y[IMZ] > 0 && yn[IMZ] <= 0 && yn[IZ] + portHeight > 0) {
       // Crossed the top: restart there (Hermite interpolation of every component).
-      let lo = 0;
-      let hi = 1;
-      for (let it = 0; it < 60; it++) {
-        const m = 0.5 * (lo + hi);
-        if (hermite(y[IMZ], yn[IMZ], h * k1[IMZ], h * k7[IMZ], m) > 0) lo = m;
-        else hi = m;
-      }
+      const hi = crossingFraction(y[IMZ], yn[IMZ], h * k1[IMZ], h * k7[IMZ]);
       if (hi < 1 - 1e-12) {
-        for (let i = 0; i < N; i++) tmp[i] = hermite(y[i], yn[i], h * k1[i], h * k7[i], hi);
-        y.set(tmp);
-        t += hi * h;
-        integralJetRhs(t, y, k1, params);
+        t = restartAt(t, h, hi, params);
         evaluations++;
-        rateOld = Number.NaN;
         lastRejected = false;
         continue;
       }
@@ -154,20 +96,16 @@ export function minimalImpactSolve(
     const zNew = yn[IZ] + portHeight;
     if (zOld > 0 && zNew <= 0 && y[IMZ] < 0) {
       // Cubic Hermite on z (values and slopes at both ends), bisected to the crossing; Q likewise.
-      const dz0 = h * k1[IZ];
-      const dz1 = h * k7[IZ];
-      let lo = 0;
-      let hi = 1;
-      for (let it = 0; it < 60; it++) {
-        const m = 0.5 * (lo + hi);
-        if (hermite(zOld, zNew, dz0, dz1, m) > 0) lo = m;
-        else hi = m;
-      }
-      const th = hi;
-      const q = hermite(y[IQ], yn[IQ], h * k1[IQ], h * k7[IQ], th);
-      const x = hermite(y[0], yn[0], h * k1[0], h * k7[0], th);
-      const yy = hermite(y[1], yn[1], h * k1[1], h * k7[1], th);
-      return { s: t + th * h, fluxRatio: q / y0[IQ], x, yNorth: yy, steps, evaluations };
+      const th = crossingFraction(zOld, zNew, h * k1[IZ], h * k7[IZ]);
+      const fluxRatio = interpolated(IQ, h, th) / y0[IQ];
+      return {
+        s: t + th * h,
+        fluxRatio,
+        x: interpolated(0, h, th),
+        yNorth: interpolated(1, h, th),
+        steps,
+        evaluations,
+      };
     }
     y.set(yn);
     k1.set(k7);
@@ -178,6 +116,107 @@ export function minimalImpactSolve(
     h = Math.min(h * factor, hMax);
   }
   return { s: t, fluxRatio: Number.NaN, x: Number.NaN, yNorth: Number.NaN, steps, evaluations };
+}
+
+/**
+ * Same kink handling as the model: while the jet still rises and slows, the step is cut to end just past
+ * the predicted top (where M_z reaches zero, quadratic in M_z when the last rate is known).
+ */
+function stepCappedAtPredictedTop(h: number): number {
+  const g = y[IMZ];
+  const rate = k1[IMZ];
+  const { rateOld, hPrev } = control;
+  let reach = -g / rate;
+  if (hPrev > 0 && rateOld === rateOld) {
+    const c = (rate - rateOld) / hPrev;
+    const disc = rate * rate - 2 * c * g;
+    if (c !== 0 && disc >= 0) {
+      const r2 = (2 * -g) / (rate - Math.sqrt(disc));
+      if (r2 > 0) reach = r2;
+    }
+  }
+  control.rateOld = rate;
+  reach *= 1.001;
+  return reach < h ? reach : h;
+}
+
+/** One Dormand–Prince 5(4) step of size h from (t, y, k1): stages k2…k7 and the 5th-order state yn. */
+function dormandPrinceStep(t: number, h: number, params: IntegralParams): void {
+  for (let i = 0; i < N; i++) tmp[i] = y[i] + h * 0.2 * k1[i];
+  integralJetRhs(t + 0.2 * h, tmp, k2, params);
+  for (let i = 0; i < N; i++) tmp[i] = y[i] + h * ((3 / 40) * k1[i] + (9 / 40) * k2[i]);
+  integralJetRhs(t + 0.3 * h, tmp, k3, params);
+  for (let i = 0; i < N; i++) tmp[i] = y[i] + h * ((44 / 45) * k1[i] - (56 / 15) * k2[i] + (32 / 9) * k3[i]);
+  integralJetRhs(t + 0.8 * h, tmp, k4, params);
+  for (let i = 0; i < N; i++) {
+    tmp[i] =
+      y[i] + h * ((19372 / 6561) * k1[i] - (25360 / 2187) * k2[i] + (64448 / 6561) * k3[i] - (212 / 729) * k4[i]);
+  }
+  integralJetRhs(t + (8 / 9) * h, tmp, k5, params);
+  for (let i = 0; i < N; i++) {
+    tmp[i] =
+      y[i] +
+      h *
+        ((9017 / 3168) * k1[i] -
+          (355 / 33) * k2[i] +
+          (46732 / 5247) * k3[i] +
+          (49 / 176) * k4[i] -
+          (5103 / 18656) * k5[i]);
+  }
+  integralJetRhs(t + h, tmp, k6, params);
+  for (let i = 0; i < N; i++) {
+    yn[i] =
+      y[i] +
+      h * ((35 / 384) * k1[i] + (500 / 1113) * k3[i] + (125 / 192) * k4[i] - (2187 / 6784) * k5[i] + (11 / 84) * k6[i]);
+  }
+  integralJetRhs(t + h, yn, k7, params);
+}
+
+/** RMS of the embedded error estimate of the last step, scaled by atol + rtol·max(|y|, |yn|). */
+function errorNorm(h: number, rtol: number, atol: Float64Array): number {
+  let sum = 0;
+  for (let i = 0; i < N; i++) {
+    const e =
+      h *
+      ((71 / 57600) * k1[i] -
+        (71 / 16695) * k3[i] +
+        (71 / 1920) * k4[i] -
+        (17253 / 339200) * k5[i] +
+        (22 / 525) * k6[i] -
+        (1 / 40) * k7[i]);
+    const a = Math.abs(y[i]);
+    const b = Math.abs(yn[i]);
+    const q = e / (atol[i] + rtol * (a > b ? a : b));
+    sum += q * q;
+  }
+  return Math.sqrt(sum / N);
+}
+
+/** Fraction of the step (0…1) where a quantity going from positive to not positive crosses zero, bisected. */
+function crossingFraction(p0: number, p1: number, m0: number, m1: number): number {
+  let lo = 0;
+  let hi = 1;
+  for (let it = 0; it < 60; it++) {
+    const m = 0.5 * (lo + hi);
+    if (hermite(p0, p1, m0, m1, m) > 0) lo = m;
+    else hi = m;
+  }
+  return hi;
+}
+
+/** Moves the state to fraction `th` of the last step, refreshes k1 there and returns the new arc length. */
+function restartAt(t: number, h: number, th: number, params: IntegralParams): number {
+  for (let i = 0; i < N; i++) tmp[i] = interpolated(i, h, th);
+  y.set(tmp);
+  const tNew = t + th * h;
+  integralJetRhs(tNew, y, k1, params);
+  control.rateOld = Number.NaN;
+  return tNew;
+}
+
+/** Component i of the state at fraction `th` of the last step of size h (cubic Hermite, k1 and k7 slopes). */
+function interpolated(i: number, h: number, th: number): number {
+  return hermite(y[i], yn[i], h * k1[i], h * k7[i], th);
 }
 
 function hermite(p0: number, p1: number, m0: number, m1: number, s: number): number {

@@ -193,8 +193,16 @@ export function benchIntegral(): IntegralBench {
   const params = integralParamsFrom(BENCH_JET, BENCH_COLUMN);
   const y0 = integralInitialState(BENCH_JET, BENCH_COLUMN, params);
   const atol = benchAtol(y0, INTEGRAL_DEFAULT_ABS_TOL);
-  const minimal = () =>
-    minimalImpactSolve(params, y0, BENCH_JET.portHeight, INTEGRAL_DEFAULT_REL_TOL, atol, 0.1 * BENCH_JET.diameter, 100);
+  const minimalInput = {
+    params,
+    y0,
+    portHeight: BENCH_JET.portHeight,
+    rtol: INTEGRAL_DEFAULT_REL_TOL,
+    atol,
+    h0: 0.1 * BENCH_JET.diameter,
+    hMax: 100,
+  };
+  const minimal = () => minimalImpactSolve(minimalInput);
   const ours = () => nearFieldIntegral(BENCH_JET, BENCH_COLUMN);
   let sink = 0;
   for (let i = 0; i < 3000; i++) sink += (ours().impactDistance ?? 0) + minimal().s;
