@@ -13,6 +13,11 @@ export function formatIssues(path: string, issues: readonly { message: string }[
   return `${path}: ${n} problem${n === 1 ? "" : "s"} in the scenario:\n${issues.map((i) => `  - ${i.message}`).join("\n")}`;
 }
 
+/** Issues with a field path, one "  - path: message" line each. */
+export function pathIssueLines(issues: readonly { path: string; message: string }[]): string {
+  return issues.map((i) => `  - ${i.path}: ${i.message}`).join("\n");
+}
+
 /** Reads a JSON file of any kind (scenario, study) and returns its text and value. */
 export function loadJsonTextFile(path: string, io: CliIO): { text: string; value: unknown } {
   const text = io.readFile(path);
