@@ -165,7 +165,8 @@ export function intakeFromResult(
   },
 ): IntakeSample | null {
   if (!scenario.intake) return null;
-  const g0 = (STANDARD_GRAVITY * (result.densities.discharge - result.densities.ambientBottom)) / result.densities.ambientBottom;
+  const g0 =
+    (STANDARD_GRAVITY * (result.densities.discharge - result.densities.ambientBottom)) / result.densities.ambientBottom;
   const series = result.mixingZone.series;
   const sample = intakeFromSeries(
     scenario.intake,
