@@ -13,7 +13,7 @@ export interface CliIO {
    * `writeFile` refuses to overwrite it.
    */
   readFile(path: string): string;
-  /** Writes atomically (see core/cli/node/atomicWrite.ts); throws CliError when the output is refused or fails. */
+  /** Writes atomically (see core/cli/node/atomic-write.ts); throws CliError when the output is refused or fails. */
   writeFile(path: string, data: string | Uint8Array): Promise<void> | void;
   /** True when stdout is an interactive terminal (progress bars only then). */
   readonly isTTY: boolean;

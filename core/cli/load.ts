@@ -4,13 +4,18 @@
  * duplicate keys). File errors and scenario issues become CliErrors (exit code 2).
  */
 import { parseScenario } from "../scenario/parse";
-import { parseJsonText } from "../scenario/jsonText";
+import { parseJsonText } from "../scenario/json-text";
 import type { Scenario } from "../scenario/types";
 import { CliError, type CliIO } from "./command";
 
 export function formatIssues(path: string, issues: readonly { message: string }[]): string {
   const n = issues.length;
   return `${path}: ${n} problem${n === 1 ? "" : "s"} in the scenario:\n${issues.map((i) => `  - ${i.message}`).join("\n")}`;
+}
+
+/** Issues with a field path, one "  - path: message" line each. */
+export function pathIssueLines(issues: readonly { path: string; message: string }[]): string {
+  return issues.map((i) => `  - ${i.path}: ${i.message}`).join("\n");
 }
 
 /** Reads a JSON file of any kind (scenario, study) and returns its text and value. */

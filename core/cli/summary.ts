@@ -32,11 +32,35 @@ function table(rows: string[][]): string {
 }
 
 export function summaryText(s: Scenario, r: BrinefieldResult): string {
-  const out: string[] = [];
   const rule = "─".repeat(96);
-  out.push(rule, wrap(r.caution), rule, "");
-  out.push(`Brinefield ${r.program.version} — screening summary: ${r.scenarioName}   (inputs ${r.inputsHash})`, "");
+  return (
+    [
+      rule,
+      wrap(r.caution),
+      rule,
+      "",
+      `Brinefield ${r.program.version} — screening summary: ${r.scenarioName}   (inputs ${r.inputsHash})`,
+      "",
+      ...inputLines(s, r),
+      ...densityAndPortLines(r),
+      ...nearFieldLines(r),
+      ...mixingZoneLines(r),
+      ...blendAndBasinLines(r),
+      ...complianceLines(r),
+      ...intakeLines(r),
+      ...ambientCaseLines(r),
+      ...warningLines(r),
+      "",
+      rule,
+      wrap(r.caution),
+      rule,
+    ].join("\n") + "\n"
+  );
+}
 
+/** The inputs in SI, and the unit conversions applied to them. */
+function inputLines(s: Scenario, r: BrinefieldResult): string[] {
+  const out: string[] = [];
   out.push("Inputs (SI)");
   const d = s.diffuser;
   const a = s.ambient;
@@ -71,7 +95,12 @@ export function summaryText(s: Scenario, r: BrinefieldResult): string {
     out.push("", "Conversions applied");
     for (const c of r.conversions) out.push(wrap(`- ${c}`, 96, "  "));
   }
+  return out;
+}
 
+/** Densities, reduced gravity and the port's exit conditions. */
+function densityAndPortLines(r: BrinefieldResult): string[] {
+  const out: string[] = [];
   out.push("", "Densities and port (" + r.densities.equationOfState.name + ")");
   out.push(
     table([
@@ -85,7 +114,12 @@ export function summaryText(s: Scenario, r: BrinefieldResult): string {
     ]),
   );
   out.push(wrap(`Equation of state: ${r.densities.equationOfState.reason}`, 96, "  "));
+  return out;
+}
 
+/** Each near-field method's key distances and dilutions side by side, with its source, bias and notes. */
+function nearFieldLines(r: BrinefieldResult): string[] {
+  const out: string[] = [];
   if (r.nearField.length) {
     out.push("", "Near field, per port (centreline dilutions; distances in plan from the port)");
     const m = r.nearField;
@@ -120,7 +154,12 @@ export function summaryText(s: Scenario, r: BrinefieldResult): string {
       for (const note of x.notes ?? []) out.push(wrap(`Note: ${note}`, 96, "    "));
     }
   }
+  return out;
+}
 
+/** The multiport regime, and dilution, constituents and footprint at the mixing-zone edge. */
+function mixingZoneLines(r: BrinefieldResult): string[] {
+  const out: string[] = [];
   if (r.multiport) {
     out.push("", `Multiport: ${r.multiport.regime}${r.multiport.merged ? " (merged)" : ""} — ${r.multiport.reason}`);
   }
@@ -158,6 +197,12 @@ export function summaryText(s: Scenario, r: BrinefieldResult): string {
         );
     }
   }
+  return out;
+}
+
+/** The blend note and the enclosed basin's raised background. */
+function blendAndBasinLines(r: BrinefieldResult): string[] {
+  const out: string[] = [];
   if (r.blend) {
     out.push("", wrap(`Blend: ${r.blend.note}`, 96, "  "));
   }
@@ -175,6 +220,12 @@ export function summaryText(s: Scenario, r: BrinefieldResult): string {
       wrap(`Assumption: ${b.limits}`, 96, "  "),
     );
   }
+  return out;
+}
+
+/** The verdict under the stated conditions, per constituent. */
+function complianceLines(r: BrinefieldResult): string[] {
+  const out: string[] = [];
   if (r.compliance) {
     const c = r.compliance;
     out.push(
@@ -196,7 +247,12 @@ export function summaryText(s: Scenario, r: BrinefieldResult): string {
       ]),
     );
   }
-  out.push(...intakeLines(r));
+  return out;
+}
+
+/** The ambient record, or the listed ambient cases and the overall verdict. */
+function ambientCaseLines(r: BrinefieldResult): string[] {
+  const out: string[] = [];
   if (r.record) out.push(...recordLines(r));
   else if (r.cases?.length) {
     const o = r.overall;
@@ -214,6 +270,12 @@ export function summaryText(s: Scenario, r: BrinefieldResult): string {
       `OVERALL VERDICT: ${o.verdict} — governing case: ${o.governingCase} (edge dilution ${n(o.edgeDilution)}, margin ${n(o.margin)})`,
     );
   }
+  return out;
+}
+
+/** The warnings and what is not modelled. */
+function warningLines(r: BrinefieldResult): string[] {
+  const out: string[] = [];
   if (r.warnings.length) {
     out.push("", `Warnings (${r.warnings.length})`);
     for (const w of r.warnings)
@@ -223,6 +285,5 @@ export function summaryText(s: Scenario, r: BrinefieldResult): string {
     out.push("", "Not modelled");
     for (const x of r.mixingZone.notModelled) out.push(wrap(`- ${x}`, 96, "  "));
   }
-  out.push("", rule, wrap(r.caution), rule);
-  return out.join("\n") + "\n";
+  return out;
 }

@@ -7,7 +7,7 @@
 import type { Scenario } from "../scenario/types";
 import type { AmbientColumn, NearFieldMethodResult } from "../nearfield/types";
 import type { DensitiesResult, SeriesResult, SeriesStage } from "../result/contract";
-import { STANDARD_GRAVITY as GRAVITY } from "../constants";
+import { STANDARD_GRAVITY } from "../constants";
 import { interpolateLinear } from "../interpolate";
 import { warning, type ResultWarning } from "../warnings";
 import { portCountFromDiffuser } from "../multiport/port-hydraulics";
@@ -93,7 +93,7 @@ export function farContextFromInput(input: FarContextInput): FarContext {
     scenario,
     radius: scenario.mixingZone.radius,
     u,
-    gBottom: (GRAVITY * (densities.discharge - densities.ambientBottom)) / densities.ambientBottom,
+    gBottom: (STANDARD_GRAVITY * (densities.discharge - densities.ambientBottom)) / densities.ambientBottom,
     diffuserLength,
     crossLength:
       u > 0

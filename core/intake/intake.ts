@@ -27,7 +27,7 @@
  */
 import type { IntakeInput, Scenario } from "../scenario/types";
 import type { SeriesResult } from "../result/contract";
-import { GRAVITY } from "../multiport";
+import { STANDARD_GRAVITY } from "../constants";
 import { interpolateLinear } from "../interpolate";
 
 /** Front Froude number c/√(g′h) of a gravity current in deep water (Benjamin 1968; value from memory). */
@@ -165,7 +165,8 @@ export function intakeFromResult(
   },
 ): IntakeSample | null {
   if (!scenario.intake) return null;
-  const g0 = (GRAVITY * (result.densities.discharge - result.densities.ambientBottom)) / result.densities.ambientBottom;
+  const g0 =
+    (STANDARD_GRAVITY * (result.densities.discharge - result.densities.ambientBottom)) / result.densities.ambientBottom;
   const series = result.mixingZone.series;
   const sample = intakeFromSeries(
     scenario.intake,

@@ -2,7 +2,6 @@ export {
   portFlowsAndHydraulics,
   portCountFromDiffuser,
   flowFractionsFromScenario,
-  GRAVITY,
   SEAWATER_KINEMATIC_VISCOSITY,
   USUAL_EXIT_VELOCITY,
 } from "./port-hydraulics";

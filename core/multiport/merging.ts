@@ -230,100 +230,146 @@ function regimeFor(
 export function multiportFromNearField(input: MultiportInput): MultiportAssessment {
   const { scenario, jet, nearField } = input;
   const n = portCountFromDiffuser(scenario);
-  const warnings: ResultWarning[] = [];
-  const dF = jet.diameter * jet.froude;
-  if (n <= 1) {
-    return {
-      multiport: {
-        regime: "single-port",
-        merged: false,
-        portsUsed: 1,
-        reason: "One port: no neighbouring jets.",
-        spacingRatio: null,
-        dilutionFactor: 1,
-        source: MERGING_SOURCE,
-      },
-      nearField: [...nearField],
-      perMethod: [],
-      warnings,
-    };
-  }
-  const perMethod: MethodMerging[] = [];
-  const adjusted: NearFieldMethodResult[] = [];
-  const ph = scenario.diffuser.portHeight;
-  for (const nf of nearField) {
-    const widths = jetWidthsFromNearField(nf, ph);
-    if (!widths || nf.impactDilution === null) {
-      perMethod.push({
-        method: nf.method,
-        regime: "unknown",
-        factor: 1,
-        widths,
-        spacingAtMaxRise: NaN,
-        spacingAtImpact: NaN,
-        lineDilution: null,
-      });
-      adjusted.push(nf);
-      continue;
-    }
-    const sTop = neighbourSpacingAtDistance(scenario, widths.maxRiseDistance);
-    const sImp = neighbourSpacingAtDistance(scenario, widths.impactDistance);
-    const length = mergedLineLength(scenario, widths.maxRiseDistance);
-    const q = scenario.discharge.flow / length;
-    const lineDilution = linePlumeDilutionFromFlux(q, jet.reducedGravity, widths.fallHeight);
-    warnings.push(...linePlumeDilutionFromFluxValidityIssues(q, jet.reducedGravity, widths.fallHeight));
-    const mergedFactor = Math.min(1, lineDilution / nf.impactDilution);
-    const { regime, factor } = regimeFor(widths, 1, sTop, sImp, mergedFactor);
-    const sensitivity = MERGING_WIDTH_DEFINITIONS.map((d) => ({
-      method: nf.method,
-      definition: d.definition,
-      widthFactor: d.widthFactor,
-      ...regimeFor(widths, d.widthFactor, sTop, sImp, mergedFactor),
-    }));
-    perMethod.push({
-      method: nf.method,
-      regime,
-      factor,
-      widths,
-      spacingAtMaxRise: sTop,
-      spacingAtImpact: sImp,
-      lineDilution,
-      sensitivity,
-    });
-    const note =
-      `Multiport ${regime}: dilutions after maximum rise multiplied by ${factor.toFixed(3)} ` +
-      `(line-plume dilution ${lineDilution.toFixed(1)} vs single-jet impact dilution ${nf.impactDilution.toFixed(1)}).`;
-    adjusted.push(scaleMethod(nf, factor, note, jet.flow));
-  }
+  if (n <= 1) return singlePortAssessment(nearField);
+  const each = nearField.map((nf) => methodMergingFromNearField(scenario, jet, nf));
+  const perMethod = each.map((m) => m.merging);
+  const warnings: ResultWarning[] = each.flatMap((m) => m.warnings);
   const known = perMethod.filter((m) => m.regime !== "unknown");
   const worst = known.reduce<MethodMerging | null>((w, m) => (w === null || m.factor < w.factor ? m : w), null);
-  const regimeRank = ["independent", "partially-merged", "merged-line-source"];
-  const regime = known.length
-    ? known.map((m) => m.regime).sort((a, b) => regimeRank.indexOf(b) - regimeRank.indexOf(a))[0]
-    : "unknown";
-  const spacing =
-    scenario.diffuser.layout === "rosette" && scenario.diffuser.risers
-      ? scenario.diffuser.risers.spacing
-      : scenario.diffuser.portSpacing;
-  const parts = known.map(
-    (m) =>
-      `${m.method}: jet width ${m.widths!.widthAtMaxRise.toFixed(2)} m at max rise vs spacing ` +
-      `${fmt(m.spacingAtMaxRise)} m, ${m.widths!.widthAtImpact.toFixed(2)} m at impact vs ${fmt(m.spacingAtImpact)} m ` +
-      `→ ${m.regime}, factor ${m.factor.toFixed(3)}`,
-  );
+  const regime = mostMergedRegime(known);
   if (!known.length) {
     warnings.push(
       warning(
         "multiport-merging-unknown",
         "warning",
         "No near-field method gave jet widths; merging was not assessed.",
-        {
-          stage: "multiport",
-        },
+        { stage: "multiport" },
       ),
     );
   }
+  const dF = jet.diameter * jet.froude;
+  const spacing =
+    scenario.diffuser.layout === "rosette" && scenario.diffuser.risers
+      ? scenario.diffuser.risers.spacing
+      : scenario.diffuser.portSpacing;
   const sensitivity = known.flatMap((m) => m.sensitivity ?? []);
+  return {
+    multiport: {
+      regime,
+      merged: regime === "merged-line-source",
+      portsUsed: n,
+      reason: mergingReason({ known, sensitivity, dF, spacing }),
+      spacingRatio: dF > 0 && Number.isFinite(dF) ? spacing / dF : null,
+      dilutionFactor: worst ? worst.factor : 1,
+      mergingSensitivity: sensitivity.map(({ method, definition, widthFactor, regime, factor }) => ({
+        method,
+        definition,
+        widthFactor,
+        regime,
+        dilutionFactor: factor,
+      })),
+      source: `${MERGING_SOURCE}; ${LINE_PLUME_SOURCE}`,
+    },
+    nearField: each.map((m) => m.adjusted),
+    perMethod,
+    warnings,
+  };
+}
+
+/** One port: no neighbouring jets, the near-field results unchanged. */
+function singlePortAssessment(nearField: readonly NearFieldMethodResult[]): MultiportAssessment {
+  return {
+    multiport: {
+      regime: "single-port",
+      merged: false,
+      portsUsed: 1,
+      reason: "One port: no neighbouring jets.",
+      spacingRatio: null,
+      dilutionFactor: 1,
+      source: MERGING_SOURCE,
+    },
+    nearField: [...nearField],
+    perMethod: [],
+    warnings: [],
+  };
+}
+
+/**
+ * The merging decision of one near-field method (regime, factor, its sensitivity to the jet-width
+ * definition) and that method's result with the dilutions after maximum rise scaled by the factor.
+ */
+function methodMergingFromNearField(
+  scenario: Scenario,
+  jet: JetSource,
+  nf: NearFieldMethodResult,
+): { merging: MethodMerging; adjusted: NearFieldMethodResult; warnings: ResultWarning[] } {
+  const widths = jetWidthsFromNearField(nf, scenario.diffuser.portHeight);
+  if (!widths || nf.impactDilution === null) {
+    const merging: MethodMerging = {
+      method: nf.method,
+      regime: "unknown",
+      factor: 1,
+      widths,
+      spacingAtMaxRise: NaN,
+      spacingAtImpact: NaN,
+      lineDilution: null,
+    };
+    return { merging, adjusted: nf, warnings: [] };
+  }
+  const sTop = neighbourSpacingAtDistance(scenario, widths.maxRiseDistance);
+  const sImp = neighbourSpacingAtDistance(scenario, widths.impactDistance);
+  const length = mergedLineLength(scenario, widths.maxRiseDistance);
+  const q = scenario.discharge.flow / length;
+  const lineDilution = linePlumeDilutionFromFlux(q, jet.reducedGravity, widths.fallHeight);
+  const warnings = linePlumeDilutionFromFluxValidityIssues(q, jet.reducedGravity, widths.fallHeight);
+  const mergedFactor = Math.min(1, lineDilution / nf.impactDilution);
+  const { regime, factor } = regimeFor(widths, 1, sTop, sImp, mergedFactor);
+  const sensitivity = MERGING_WIDTH_DEFINITIONS.map((d) => ({
+    method: nf.method,
+    definition: d.definition,
+    widthFactor: d.widthFactor,
+    ...regimeFor(widths, d.widthFactor, sTop, sImp, mergedFactor),
+  }));
+  const merging: MethodMerging = {
+    method: nf.method,
+    regime,
+    factor,
+    widths,
+    spacingAtMaxRise: sTop,
+    spacingAtImpact: sImp,
+    lineDilution,
+    sensitivity,
+  };
+  const note =
+    `Multiport ${regime}: dilutions after maximum rise multiplied by ${factor.toFixed(3)} ` +
+    `(line-plume dilution ${lineDilution.toFixed(1)} vs single-jet impact dilution ${nf.impactDilution.toFixed(1)}).`;
+  return { merging, adjusted: scaleMethod(nf, factor, note, jet.flow), warnings: [...warnings] };
+}
+
+/** The most merged regime of the methods that could be assessed ("unknown" when none could). */
+function mostMergedRegime(known: readonly MethodMerging[]): string {
+  const regimeRank = ["independent", "partially-merged", "merged-line-source"];
+  return known.length
+    ? known.map((m) => m.regime).sort((a, b) => regimeRank.indexOf(b) - regimeRank.indexOf(a))[0]!
+    : "unknown";
+}
+
+/** Why the regime was chosen: widths against spacings per method, the width-definition check, s/(dF). */
+function mergingReason(input: {
+  readonly known: readonly MethodMerging[];
+  readonly sensitivity: readonly MergingSensitivity[];
+  /** Port diameter × densimetric Froude number, m. */
+  readonly dF: number;
+  /** Spacing of ports (or risers of a rosette), m. */
+  readonly spacing: number;
+}): string {
+  const { known, sensitivity, dF, spacing } = input;
+  const parts = known.map(
+    (m) =>
+      `${m.method}: jet width ${m.widths!.widthAtMaxRise.toFixed(2)} m at max rise vs spacing ` +
+      `${fmt(m.spacingAtMaxRise)} m, ${m.widths!.widthAtImpact.toFixed(2)} m at impact vs ${fmt(m.spacingAtImpact)} m ` +
+      `→ ${m.regime}, factor ${m.factor.toFixed(3)}`,
+  );
   const changes = sensitivity.filter(
     (x) => x.widthFactor !== 1 && x.regime !== known.find((m) => m.method === x.method)?.regime,
   );
@@ -336,33 +382,13 @@ export function multiportFromNearField(input: MultiportInput): MultiportAssessme
           .join("; ")}.`
       : " The decision is the same with jet widths ÷√2 or ×√2 (other common width definitions)."
     : "";
-  const reason =
+  return (
     (parts.length ? parts.join("; ") + "." : "Merging not assessed.") +
     sensitivityText +
     ` s/(dF) = ${dF > 0 && Number.isFinite(dF) ? (spacing / dF).toFixed(2) : "n/a"} reported for comparison only: ` +
     "no published dense-jet threshold in s/(dF) (Abessi & Roberts 2014) could be cited, so the geometric " +
-    "criterion was used.";
-  return {
-    multiport: {
-      regime,
-      merged: regime === "merged-line-source",
-      portsUsed: n,
-      reason,
-      spacingRatio: dF > 0 && Number.isFinite(dF) ? spacing / dF : null,
-      dilutionFactor: worst ? worst.factor : 1,
-      mergingSensitivity: sensitivity.map(({ method, definition, widthFactor, regime, factor }) => ({
-        method,
-        definition,
-        widthFactor,
-        regime,
-        dilutionFactor: factor,
-      })),
-      source: `${MERGING_SOURCE}; ${LINE_PLUME_SOURCE}`,
-    },
-    nearField: adjusted,
-    perMethod,
-    warnings,
-  };
+    "criterion was used."
+  );
 }
 
 function fmt(v: number): string {

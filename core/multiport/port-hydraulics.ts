@@ -13,8 +13,6 @@ import type { PortResult } from "../result/contract";
 import { warning, type ResultWarning } from "../warnings";
 import { STANDARD_GRAVITY, USUAL_EXIT_VELOCITY, USUAL_EXIT_VELOCITY_TEXT } from "../constants";
 
-/** Standard gravity, m/s² (core/constants.ts). */
-export const GRAVITY = STANDARD_GRAVITY;
 /** Kinematic viscosity of seawater near 20 °C, m²/s (handbook value, from memory). */
 export const SEAWATER_KINEMATIC_VISCOSITY = 1.05e-6;
 export { USUAL_EXIT_VELOCITY };
@@ -86,7 +84,7 @@ export function portFlowsAndHydraulics(input: PortHydraulicsInput): PortHydrauli
   const n = fractions.length;
   const area = (Math.PI * d.portDiameter * d.portDiameter) / 4;
   const nominalArea = (Math.PI * d.portDiameterNominal * d.portDiameterNominal) / 4;
-  const gPrime = (GRAVITY * (input.dischargeDensity - input.ambientDensity)) / input.ambientDensity;
+  const gPrime = (STANDARD_GRAVITY * (input.dischargeDensity - input.ambientDensity)) / input.ambientDensity;
   // F = U/√(|g′|·d) for either sign of buoyancy (a rising discharge has g′ < 0); a neutral discharge has
   // no densimetric Froude number: infinity rather than NaN.
   const froudeOf = (u: number) => (gPrime !== 0 ? u / Math.sqrt(Math.abs(gPrime) * d.portDiameter) : Infinity);
@@ -94,7 +92,7 @@ export function portFlowsAndHydraulics(input: PortHydraulicsInput): PortHydrauli
   const ports: SinglePortHydraulics[] = fractions.map((f, index) => {
     const flow = scenario.discharge.flow * f;
     const velocity = flow / area;
-    const headLoss = cd && cd > 0 ? Math.pow(flow / (cd * nominalArea), 2) / (2 * GRAVITY) : null;
+    const headLoss = cd && cd > 0 ? Math.pow(flow / (cd * nominalArea), 2) / (2 * STANDARD_GRAVITY) : null;
     return { index, flow, velocity, froude: froudeOf(velocity), headLoss };
   });
   // One warning for all ports outside the usual range (a long diffuser would otherwise repeat it per port).

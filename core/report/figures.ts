@@ -138,20 +138,34 @@ export function sideViewScales(
 }
 
 /** Side view: seabed, surface, port, each method's centreline or key points, maximum rise and impact. */
+/** One near-field method as drawn in the side view: its computed path (if any) and its reported points. */
+interface SideViewLine {
+  readonly method: NearFieldMethodResult;
+  readonly path: [number, number][] | null;
+  readonly keys: ReturnType<typeof sideViewKeyPoints>;
+}
+
+/** The side view's frame and data-to-picture mappings, shared by the parts of the drawing. */
+interface SideViewPlot {
+  readonly f: Frame;
+  readonly sx: (x: number) => number;
+  readonly sy: (y: number) => number;
+  /** Plan distance at the right edge of the plot, m. */
+  readonly xMax: number;
+  /** Highest height drawn (the surface or the highest jet point), m above the seabed. */
+  readonly yTop: number;
+  /** Port height above the seabed, m. */
+  readonly hp: number;
+}
+
 export function sideViewSvg(input: SideViewInput): string {
   const hp = input.portHeight ?? 0;
-  const lines = input.nearField.map((m) => ({ method: m, path: sideViewPath(m, hp), keys: sideViewKeyPoints(m, hp) }));
-  let xMax = 1;
-  let yTop = input.depth ?? hp + 1;
-  for (const { method, path, keys } of lines) {
-    for (const [x, y] of path ?? []) {
-      xMax = Math.max(xMax, x);
-      yTop = Math.max(yTop, y);
-    }
-    for (const k of keys) xMax = Math.max(xMax, k.x);
-    if (method.maxRiseHeight !== null) yTop = Math.max(yTop, hp + method.maxRiseHeight);
-  }
-  xMax *= 1.08;
+  const lines: SideViewLine[] = input.nearField.map((m) => ({
+    method: m,
+    path: sideViewPath(m, hp),
+    keys: sideViewKeyPoints(m, hp),
+  }));
+  const { xMax, yTop } = sideViewExtent(lines, hp, input.depth);
   // A little headroom above the surface for its label; the legend sits below the plot, never on it.
   const yMax = yTop * 1.1;
   const scale = sideViewScales(xMax, yMax);
@@ -166,23 +180,70 @@ export function sideViewSvg(input: SideViewInput): string {
   };
   const sx = (x: number) => f.left + x * scale.kx;
   const sy = (y: number) => f.top + scale.height - y * scale.ky;
+  const plot: SideViewPlot = { f, sx, sy, xMax, yTop, hp };
+  const axisY = f.top + scale.height + 6 + 30;
+  const legendTop = axisY + 8;
+  const parts = [
+    ...waterAndSeabedParts(plot, input.depth),
+    ...sideViewAxesParts(plot, scale, axisY),
+    ...lines.flatMap((line, i) => methodParts(plot, line, legendTop + i * 14)),
+  ];
+  const ve = scale.exaggeration;
+  const veText =
+    Math.abs(ve - 1) > 0.05
+      ? `vertical exaggeration ×${reportNumber(Number(ve.toPrecision(2)))}`
+      : "true scale (no vertical exaggeration)";
+  parts.push(
+    `<text x="${f.left}" y="${n(legendTop + lines.length * 14 + 3.5)}" font-size="10" fill="#475569" ${FONT}>● seabed impact · □ return to port level · ${escapeHtml(veText)}</text>`,
+  );
+  return svgWrap(parts, "Side view of the jet centrelines above the seabed", f);
+}
+
+/** The plan distance (with 8 % room) and the height the side view must show, m. */
+function sideViewExtent(
+  lines: readonly SideViewLine[],
+  hp: number,
+  depth: number | null,
+): { xMax: number; yTop: number } {
+  let xMax = 1;
+  let yTop = depth ?? hp + 1;
+  for (const { method, path, keys } of lines) {
+    for (const [x, y] of path ?? []) {
+      xMax = Math.max(xMax, x);
+      yTop = Math.max(yTop, y);
+    }
+    for (const k of keys) xMax = Math.max(xMax, k.x);
+    if (method.maxRiseHeight !== null) yTop = Math.max(yTop, hp + method.maxRiseHeight);
+  }
+  return { xMax: xMax * 1.08, yTop };
+}
+
+/** Water, surface (with its depth) and seabed. */
+function waterAndSeabedParts(plot: SideViewPlot, depth: number | null): string[] {
+  const { f, sx, sy, xMax } = plot;
   const parts: string[] = [];
-  // Water, seabed and surface.
-  if (input.depth !== null) {
+  if (depth !== null) {
     parts.push(
-      `<rect x="${n(sx(0))}" y="${n(sy(input.depth))}" width="${n(plotWidth(f))}" height="${n(sy(0) - sy(input.depth))}" fill="#eef6fb"/>`,
+      `<rect x="${n(sx(0))}" y="${n(sy(depth))}" width="${n(plotWidth(f))}" height="${n(sy(0) - sy(depth))}" fill="#eef6fb"/>`,
     );
     parts.push(
-      `<line x1="${n(sx(0))}" y1="${n(sy(input.depth))}" x2="${n(sx(xMax))}" y2="${n(sy(input.depth))}" stroke="#0369a1" stroke-width="1.2"/>`,
+      `<line x1="${n(sx(0))}" y1="${n(sy(depth))}" x2="${n(sx(xMax))}" y2="${n(sy(depth))}" stroke="#0369a1" stroke-width="1.2"/>`,
     );
     parts.push(
-      `<text x="${n(sx(xMax))}" y="${n(sy(input.depth) - 4)}" text-anchor="end" font-size="10" fill="#075985" ${FONT}>water surface (depth ${escapeHtml(reportNumber(input.depth))} m)</text>`,
+      `<text x="${n(sx(xMax))}" y="${n(sy(depth) - 4)}" text-anchor="end" font-size="10" fill="#075985" ${FONT}>water surface (depth ${escapeHtml(reportNumber(depth))} m)</text>`,
     );
   }
   parts.push(`<rect x="${n(sx(0))}" y="${n(sy(0))}" width="${n(plotWidth(f))}" height="6" fill="#d6c7a1"/>`);
   parts.push(
     `<line x1="${n(sx(0))}" y1="${n(sy(0))}" x2="${n(sx(xMax))}" y2="${n(sy(0))}" stroke="#7c6a3c" stroke-width="1.4"/>`,
   );
+  return parts;
+}
+
+/** Axes with ticks and titles, and the riser with its port. */
+function sideViewAxesParts(plot: SideViewPlot, scale: { width: number; height: number }, axisY: number): string[] {
+  const { f, sx, sy, xMax, yTop, hp } = plot;
+  const parts: string[] = [];
   // Axes and ticks (fewer on a narrow plot so the labels never touch).
   const xTickCount = Math.max(2, Math.min(6, Math.floor(scale.width / 70)));
   parts.push(...axisTicks(linearTicks(0, xMax, xTickCount), (t) => sx(t), sy(0) + 6, "x"));
@@ -195,7 +256,6 @@ export function sideViewSvg(input: SideViewInput): string {
     ),
   );
   parts.push(`<line x1="${n(sx(0))}" y1="${n(sy(0))}" x2="${n(sx(0))}" y2="${n(sy(yTop))}" stroke="#334155"/>`);
-  const axisY = f.top + scale.height + 6 + 30;
   parts.push(
     `<text x="${n(f.left)}" y="${n(axisY)}" font-size="11" ${FONT}>plan distance from the port along the discharge (m)</text>`,
   );
@@ -207,74 +267,74 @@ export function sideViewSvg(input: SideViewInput): string {
     `<line x1="${n(sx(0))}" y1="${n(sy(0))}" x2="${n(sx(0))}" y2="${n(sy(hp))}" stroke="#334155" stroke-width="3"/>`,
   );
   parts.push(`<circle cx="${n(sx(0))}" cy="${n(sy(hp))}" r="3" fill="#334155"/>`);
-  const legendTop = axisY + 8;
-  lines.forEach(({ method, path, keys }, i) => {
-    const colour = METHOD_COLOURS[method.method] ?? "#475569";
-    if (path) {
-      parts.push(
-        `<path d="${polyline(path.map(([x, y]) => [sx(x), sy(y)] as const))}" fill="none" stroke="${colour}" stroke-width="2"/>`,
-      );
-    } else if (keys.some((k) => k.kind === "max-rise")) {
-      // A line through the reported points only (port, max rise, return, impact): no shape is invented between them.
-      const pts: [number, number][] = [[sx(0), sy(hp)], ...keys.map((k) => [sx(k.x), sy(k.y)] as [number, number])];
-      parts.push(
-        `<path d="${smoothPath(pts)}" fill="none" stroke="${colour}" stroke-width="1.6" stroke-dasharray="6 3"/>`,
-      );
-    }
-    for (const k of keys) {
-      if (k.kind === "impact") parts.push(`<circle cx="${n(sx(k.x))}" cy="${n(sy(0))}" r="4" fill="${colour}"/>`);
-      if (k.kind === "return")
-        parts.push(
-          `<rect x="${n(sx(k.x) - 3.5)}" y="${n(sy(k.y) - 3.5)}" width="7" height="7" fill="none" stroke="${colour}" stroke-width="1.5"/>`,
-        );
-    }
-    if (method.maxRiseHeight !== null) {
-      const y = sy(hp + method.maxRiseHeight);
-      if (method.maxRiseDistance !== null) {
-        const x = sx(method.maxRiseDistance);
-        parts.push(
-          `<line x1="${n(x - 7)}" y1="${n(y)}" x2="${n(x + 7)}" y2="${n(y)}" stroke="${colour}" stroke-width="2"/>`,
-        );
-      } else {
-        // Location of the maximum not reported: the height is drawn as a level across the rising jet.
-        // Without a return point the level runs across the whole plot: it states a height, not a place.
-        const xEnd = sx(keys.find((k) => k.kind === "return")?.x ?? xMax);
-        parts.push(
-          `<line x1="${n(sx(0))}" y1="${n(y)}" x2="${n(xEnd)}" y2="${n(y)}" stroke="${colour}" stroke-width="1.2" stroke-dasharray="2 3"/>`,
-        );
-      }
-    }
-    const field = method.risingField;
-    if (field && field.kind !== "none") {
-      // A rising plume's field: where it spreads (the surface or the trap level), from where it starts.
-      const y = sy(hp + field.height);
-      parts.push(
-        `<line x1="${n(sx(Math.max(0, field.distance - 2 * field.halfWidth)))}" y1="${n(y)}" x2="${n(sx(Math.min(xMax, field.distance + 0.25 * xMax)))}" y2="${n(y)}" stroke="${colour}" stroke-width="4" stroke-opacity="0.45"/>`,
-      );
-      parts.push(
-        `<text x="${n(sx(Math.min(xMax * 0.97, field.distance + 0.02 * xMax)))}" y="${n(y + 12)}" font-size="9" fill="${colour}" ${FONT}>${escapeHtml(`${method.method}: ${field.kind === "trapped" ? "trapped field (trap level)" : "surface field"}, S = ${reportNumber(field.dilution)}`)}</text>`,
-      );
-    }
-    const label = path
-      ? `${method.method}: computed centreline; bar = upper edge at maximum rise`
-      : method.maxRiseDistance !== null
-        ? `${method.method}: reported points joined; bar = upper edge at maximum rise`
-        : `${method.method}: reported points; dotted level = maximum rise of the upper edge`;
-    const ly = legendTop + i * 14;
+  return parts;
+}
+
+/** One method's marks: its centreline or joined points, impact and return, maximum rise, rising field, legend row at `ly`. */
+function methodParts(plot: SideViewPlot, line: SideViewLine, ly: number): string[] {
+  const { f, sx, sy, hp } = plot;
+  const { method, path, keys } = line;
+  const colour = METHOD_COLOURS[method.method] ?? "#475569";
+  const parts: string[] = [];
+  if (path) {
     parts.push(
-      `<line x1="${f.left}" y1="${n(ly)}" x2="${f.left + 24}" y2="${n(ly)}" stroke="${colour}" stroke-width="2"${path ? "" : ` stroke-dasharray="6 3"`}/>`,
+      `<path d="${polyline(path.map(([x, y]) => [sx(x), sy(y)] as const))}" fill="none" stroke="${colour}" stroke-width="2"/>`,
     );
-    parts.push(`<text x="${f.left + 30}" y="${n(ly + 3.5)}" font-size="10" ${FONT}>${escapeHtml(label)}</text>`);
-  });
-  const ve = scale.exaggeration;
-  const veText =
-    Math.abs(ve - 1) > 0.05
-      ? `vertical exaggeration ×${reportNumber(Number(ve.toPrecision(2)))}`
-      : "true scale (no vertical exaggeration)";
+  } else if (keys.some((k) => k.kind === "max-rise")) {
+    // A line through the reported points only (port, max rise, return, impact): no shape is invented between them.
+    const pts: [number, number][] = [[sx(0), sy(hp)], ...keys.map((k) => [sx(k.x), sy(k.y)] as [number, number])];
+    parts.push(
+      `<path d="${smoothPath(pts)}" fill="none" stroke="${colour}" stroke-width="1.6" stroke-dasharray="6 3"/>`,
+    );
+  }
+  for (const k of keys) {
+    if (k.kind === "impact") parts.push(`<circle cx="${n(sx(k.x))}" cy="${n(sy(0))}" r="4" fill="${colour}"/>`);
+    if (k.kind === "return")
+      parts.push(
+        `<rect x="${n(sx(k.x) - 3.5)}" y="${n(sy(k.y) - 3.5)}" width="7" height="7" fill="none" stroke="${colour}" stroke-width="1.5"/>`,
+      );
+  }
+  parts.push(...maxRiseParts(plot, line, colour), ...risingFieldParts(plot, method, colour));
+  const label = path
+    ? `${method.method}: computed centreline; bar = upper edge at maximum rise`
+    : method.maxRiseDistance !== null
+      ? `${method.method}: reported points joined; bar = upper edge at maximum rise`
+      : `${method.method}: reported points; dotted level = maximum rise of the upper edge`;
   parts.push(
-    `<text x="${f.left}" y="${n(legendTop + lines.length * 14 + 3.5)}" font-size="10" fill="#475569" ${FONT}>● seabed impact · □ return to port level · ${escapeHtml(veText)}</text>`,
+    `<line x1="${f.left}" y1="${n(ly)}" x2="${f.left + 24}" y2="${n(ly)}" stroke="${colour}" stroke-width="2"${path ? "" : ` stroke-dasharray="6 3"`}/>`,
   );
-  return svgWrap(parts, "Side view of the jet centrelines above the seabed", f);
+  parts.push(`<text x="${f.left + 30}" y="${n(ly + 3.5)}" font-size="10" ${FONT}>${escapeHtml(label)}</text>`);
+  return parts;
+}
+
+/** The maximum rise of the upper edge: a bar where it is located, otherwise a dotted level. */
+function maxRiseParts(plot: SideViewPlot, line: SideViewLine, colour: string): string[] {
+  const { sx, sy, xMax, hp } = plot;
+  const { method, keys } = line;
+  if (method.maxRiseHeight === null) return [];
+  const y = sy(hp + method.maxRiseHeight);
+  if (method.maxRiseDistance !== null) {
+    const x = sx(method.maxRiseDistance);
+    return [`<line x1="${n(x - 7)}" y1="${n(y)}" x2="${n(x + 7)}" y2="${n(y)}" stroke="${colour}" stroke-width="2"/>`];
+  }
+  // Location of the maximum not reported: the height is drawn as a level across the rising jet.
+  // Without a return point the level runs across the whole plot: it states a height, not a place.
+  const xEnd = sx(keys.find((k) => k.kind === "return")?.x ?? xMax);
+  return [
+    `<line x1="${n(sx(0))}" y1="${n(y)}" x2="${n(xEnd)}" y2="${n(y)}" stroke="${colour}" stroke-width="1.2" stroke-dasharray="2 3"/>`,
+  ];
+}
+
+/** A rising plume's field: where it spreads (the surface or the trap level), from where it starts. */
+function risingFieldParts(plot: SideViewPlot, method: NearFieldMethodResult, colour: string): string[] {
+  const { sx, sy, xMax, hp } = plot;
+  const field = method.risingField;
+  if (!field || field.kind === "none") return [];
+  const y = sy(hp + field.height);
+  return [
+    `<line x1="${n(sx(Math.max(0, field.distance - 2 * field.halfWidth)))}" y1="${n(y)}" x2="${n(sx(Math.min(xMax, field.distance + 0.25 * xMax)))}" y2="${n(y)}" stroke="${colour}" stroke-width="4" stroke-opacity="0.45"/>`,
+    `<text x="${n(sx(Math.min(xMax * 0.97, field.distance + 0.02 * xMax)))}" y="${n(y + 12)}" font-size="9" fill="${colour}" ${FONT}>${escapeHtml(`${method.method}: ${field.kind === "trapped" ? "trapped field (trap level)" : "surface field"}, S = ${reportNumber(field.dilution)}`)}</text>`,
+  ];
 }
 
 export function axisTicks(

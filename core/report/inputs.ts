@@ -54,6 +54,18 @@ function table(caption: string, body: RawHtml): RawHtml {
 
 /** All inputs tables for a read scenario. */
 export function inputsHtml(file: unknown, s: Scenario): RawHtml {
+  return join([
+    ...dischargeTables(file, s),
+    ...plantTables(file, s),
+    ...ambientTables(file, s),
+    ...diffuserTables(file, s),
+    ...mixingZoneTables(file, s),
+    ...optionTables(file, s),
+  ]);
+}
+
+/** The discharge and its constituents. */
+function dischargeTables(file: unknown, s: Scenario): RawHtml[] {
   const parts: RawHtml[] = [];
   const d = s.discharge;
   const fromPlant = s.plant ? "(from the plant below)" : undefined;
@@ -78,6 +90,12 @@ export function inputsHtml(file: unknown, s: Scenario): RawHtml {
       html`<table class="inputs"><caption>Constituents in the discharge (kept in the unit entered)</caption><thead><tr><th>Constituent</th><th>Field</th><th>In the discharge</th><th>Background</th><th>Unit</th></tr></thead><tbody>${join(rows)}</tbody></table>`,
     );
   }
+  return parts;
+}
+
+/** The desalination plant the discharge is derived from, when the scenario has one. */
+function plantTables(file: unknown, s: Scenario): RawHtml[] {
+  const parts: RawHtml[] = [];
   if (s.plant) {
     const p = s.plant;
     const rows: InputRow[] = [
@@ -101,6 +119,12 @@ export function inputsHtml(file: unknown, s: Scenario): RawHtml {
     });
     parts.push(table("Desalination plant (the discharge is derived from it)", rowsHtml(file, rows)));
   }
+  return parts;
+}
+
+/** The receiving water: stated conditions, the profile when not uniform, further ambient cases. */
+function ambientTables(file: unknown, s: Scenario): RawHtml[] {
+  const parts: RawHtml[] = [];
   const a = s.ambient;
   const bottom = a.profile[a.profile.length - 1]!;
   const ambientRows: InputRow[] = [
@@ -158,6 +182,12 @@ export function inputsHtml(file: unknown, s: Scenario): RawHtml {
       html`<table class="inputs"><caption>Further ambient cases (SI; seabed values)</caption><thead><tr><th>Case</th><th>Weight</th><th>Depth (m)</th><th>Salinity (g/kg)</th><th>Temperature (°C)</th><th>Current (m/s)</th><th>Direction (°)</th></tr></thead><tbody>${join(rows)}</tbody></table>`,
     );
   }
+  return parts;
+}
+
+/** The diffuser, with its risers when it has them. */
+function diffuserTables(file: unknown, s: Scenario): RawHtml[] {
+  const parts: RawHtml[] = [];
   const f = s.diffuser;
   const diffuserRows: InputRow[] = [
     { label: "Layout", path: "diffuser.layout", si: f.layout, unit: "" },
@@ -185,6 +215,12 @@ export function inputsHtml(file: unknown, s: Scenario): RawHtml {
     );
   }
   parts.push(table("Diffuser", rowsHtml(file, diffuserRows)));
+  return parts;
+}
+
+/** The mixing zone's radius and limits, as entered and as used. */
+function mixingZoneTables(file: unknown, s: Scenario): RawHtml[] {
+  const parts: RawHtml[] = [];
   const limitRows = s.mixingZone.limits.map((l, i) => {
     const rawLimit = valueAtPath(file, `mixingZone.limits.${i}`) as Record<string, unknown> | undefined;
     const entered =
@@ -204,6 +240,12 @@ export function inputsHtml(file: unknown, s: Scenario): RawHtml {
   parts.push(
     html`<table class="inputs"><caption>Mixing zone: radius ${reportNumber(s.mixingZone.radius)} m (entered: ${asEntered(valueAtPath(file, "mixingZone.radius"))})</caption><thead><tr><th>Limit on</th><th>As entered</th><th>Used</th><th>Unit</th><th>Background</th><th>Basis</th></tr></thead><tbody>${join(limitRows)}</tbody></table>`,
   );
+  return parts;
+}
+
+/** Options, uncertain inputs and the unit conversions applied while reading. */
+function optionTables(file: unknown, s: Scenario): RawHtml[] {
+  const parts: RawHtml[] = [];
   const optionRows: InputRow[] = [
     {
       label: "Near-field dilution carried to the edge",
@@ -236,7 +278,7 @@ export function inputsHtml(file: unknown, s: Scenario): RawHtml {
       html`<p class="note"><strong>Conversions applied while reading the file:</strong></p><ul class="conversions">${join(s.conversions.map((c) => html`<li>${c}</li>`))}</ul>`,
     );
   }
-  return join(parts);
+  return parts;
 }
 
 /** Fallback when the file could not be read as a scenario: every leaf as entered, no SI column. */

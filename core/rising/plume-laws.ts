@@ -27,8 +27,6 @@
 import { STANDARD_GRAVITY } from "../constants";
 import { interpolateLinear } from "../interpolate";
 
-export const GRAVITY = STANDARD_GRAVITY;
-
 export const ROUND_JET_CONCENTRATION_COEFFICIENT = 5.64;
 export const ROUND_PLUME_BUOYANCY_COEFFICIENT = 11;
 export const TRAP_HEIGHT_COEFFICIENT = 3.8;
@@ -96,5 +94,5 @@ export function bulkBuoyancyFrequencySquared(
   if (!(h > 0)) return 0;
   const rhoPort = interpolateLinear(column.depths, column.densities, h);
   const rhoTop = interpolateLinear(column.depths, column.densities, 0);
-  return (GRAVITY * (rhoPort - rhoTop)) / (rhoPort * h);
+  return (STANDARD_GRAVITY * (rhoPort - rhoTop)) / (rhoPort * h);
 }

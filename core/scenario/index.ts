@@ -20,4 +20,4 @@ export {
   stripBom,
   formatByteSize,
   tooLargeMessage,
-} from "./jsonText";
+} from "./json-text";

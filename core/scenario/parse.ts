@@ -7,7 +7,7 @@ import type { z } from "zod";
 import { scenarioFileSchema, SCENARIO_FORMAT, SCENARIO_VERSION } from "./schema";
 import { normaliseScenario, issue, type ScenarioIssue } from "./normalise";
 import type { Scenario } from "./types";
-import { MAX_INPUT_BYTES, parseJsonText } from "./jsonText";
+import { MAX_INPUT_BYTES, parseJsonText } from "./json-text";
 
 export type { ScenarioIssue } from "./normalise";
 

@@ -3,7 +3,7 @@
  * contract in electron/contract.ts); in a plain browser it falls back to a file-input upload, download
  * links and localStorage. Components call these functions and never look at `window.brinefieldHost`.
  */
-import { decodeInputBytes, MAX_INPUT_BYTES, tooLargeMessage } from "../../core/scenario/jsonText";
+import { decodeInputBytes, MAX_INPUT_BYTES, tooLargeMessage } from "../../core/scenario/json-text";
 import {
   isReplyTo,
   type BrinefieldHost,

@@ -5,7 +5,7 @@
  */
 
 import { MAX_SCENARIO_TEXT } from "../../core/scenario/parse";
-import { parseJsonText } from "../../core/scenario/jsonText";
+import { parseJsonText } from "../../core/scenario/json-text";
 import { SCENARIO_FORMAT } from "../../core/scenario/schema";
 
 /** The raw scenario file: plain, serialisable JSON. Parsing and validation belong to core. */

@@ -7,7 +7,7 @@
  * overrides are what differs from the base.
  */
 import { MAX_SCENARIO_TEXT } from "../../core/scenario/parse";
-import { parseJsonText } from "../../core/scenario/jsonText";
+import { parseJsonText } from "../../core/scenario/json-text";
 import { parseStudy, STUDY_FORMAT, STUDY_VERSION } from "../../core/study/study-file";
 import { withRawOverride } from "../../core/study/overrides";
 import { fieldBounds } from "../../core/scenario/bounds";

@@ -22,7 +22,7 @@ import {
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { cliMain, nodeIO } from "../../core/cli/main";
-import { MAX_INPUT_BYTES, MAX_JSON_DEPTH } from "../../core/scenario/jsonText";
+import { MAX_INPUT_BYTES, MAX_JSON_DEPTH } from "../../core/scenario/json-text";
 
 const root = join(__dirname, "../..");
 const demo = readFileSync(join(root, "demo-scenarios/island-cove.json"), "utf8");

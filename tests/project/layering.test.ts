@@ -74,11 +74,11 @@ describe("layering", () => {
     expect(bad, "electron main stays thin").toEqual([]);
   });
 
-  it("core/cli/node/ imports only Node built-ins, playwright-core and core's pure text rules (core/scenario/jsonText.ts)", () => {
+  it("core/cli/node/ imports only Node built-ins, playwright-core and core's pure text rules (core/scenario/json-text.ts)", () => {
     const bad: string[] = [];
     for (const f of files(join(root, "core/cli/node"))) {
       for (const i of imports(f)) {
-        if (i.target && !i.target.startsWith("core/cli/node/") && i.target !== "core/scenario/jsonText")
+        if (i.target && !i.target.startsWith("core/cli/node/") && i.target !== "core/scenario/json-text")
           bad.push(`${relative(root, f)} → ${i.spec}`);
         if (!i.target && !NODE_BUILTINS.test(i.spec) && i.spec !== "playwright-core")
           bad.push(`${relative(root, f)} → ${i.spec}`);

@@ -1,7 +1,7 @@
 /**
  * Benchmark of the integral jet model (near-field Method 2): median microseconds per solve of the
  * exact `nearFieldIntegral` code path the app uses (default tolerances, path included), timed in
- * alternating batches with a minimal hand-written solver of the same equations (./minimalSolver), so
+ * alternating batches with a minimal hand-written solver of the same equations (./minimal-solver), so
  * both see the same machine load; the accuracy study behind the default tolerance; and mathjs
  * `solveODE` on the same right-hand side at equal accuracy.
  *
@@ -30,7 +30,7 @@ import { CENTRELINE_PROFILE_FACTOR } from "../../nearfield/integral-setup";
 import { integrateAdaptive } from "../../ode/adaptive";
 import { stepperDormandPrince45 } from "../../ode/dormand-prince-45";
 import type { AmbientColumn, JetSource, NearFieldMethodResult } from "../../nearfield/types";
-import { minimalImpactSolve } from "./minimalSolver";
+import { minimalImpactSolve } from "./minimal-solver";
 import { STANDARD_GRAVITY } from "../../constants";
 
 type SolveODE = (
@@ -193,8 +193,16 @@ export function benchIntegral(): IntegralBench {
   const params = integralParamsFrom(BENCH_JET, BENCH_COLUMN);
   const y0 = integralInitialState(BENCH_JET, BENCH_COLUMN, params);
   const atol = benchAtol(y0, INTEGRAL_DEFAULT_ABS_TOL);
-  const minimal = () =>
-    minimalImpactSolve(params, y0, BENCH_JET.portHeight, INTEGRAL_DEFAULT_REL_TOL, atol, 0.1 * BENCH_JET.diameter, 100);
+  const minimalInput = {
+    params,
+    y0,
+    portHeight: BENCH_JET.portHeight,
+    rtol: INTEGRAL_DEFAULT_REL_TOL,
+    atol,
+    h0: 0.1 * BENCH_JET.diameter,
+    hMax: 100,
+  };
+  const minimal = () => minimalImpactSolve(minimalInput);
   const ours = () => nearFieldIntegral(BENCH_JET, BENCH_COLUMN);
   let sink = 0;
   for (let i = 0; i < 3000; i++) sink += (ours().impactDistance ?? 0) + minimal().s;

@@ -1,20 +1,21 @@
 /** `brinefield design`: search port count, diameter, angle and spacing for designs that meet every limit. */
-import { jsonText } from "../../result/json";
 import { CAUTION } from "../../result/contract";
-import { withCaution } from "../../result/caution";
 import { CliError, type CliCommand, type CliIO } from "../command";
 import { readArgs } from "../args";
-import { loadJsonFile, formatIssues } from "../load";
+import { loadJsonFile, formatIssues, pathIssueLines } from "../load";
+import { printJsonAnswer, printTextAnswer } from "../output";
+import type { Scenario } from "../../scenario/types";
 import { parseScenario } from "../../scenario/parse";
-import { describeCases, expandCases } from "../../cases";
+import { describeCases, expandCases, type CaseSpec } from "../../cases";
 import {
   candidateOverrides,
   designConstraintsFrom,
   planDesignSearch,
   DESIGN_MAX_CANDIDATES,
   DESIGN_MAX_RUNS,
+  type DesignConstraints,
 } from "../../study/design";
-import { designOutcome } from "../../study/design-rank";
+import { designOutcome, type DesignOutcome } from "../../study/design-rank";
 import { textTable } from "../../study/table";
 import { formatNumber } from "../../units";
 import { EXIT_CANCELLED, pointsOnWorkers, workersOption, withProgress } from "../workers/run-study";
@@ -67,6 +68,28 @@ numbers or values with units, e.g. "design": { "maxExitVelocity": "5 m/s", "maxL
 Exit codes: 0 an answer (designs, or none with the nearest miss); 2 bad input or constraints, or a
 search over the cap; 130 cancelled.`;
 
+const OPTIONS = {
+  "min-velocity": { type: "string" },
+  "max-velocity": { type: "string" },
+  "max-length": { type: "string" },
+  "max-ports": { type: "string" },
+  angles: { type: "string" },
+  "port-heights": { type: "string" },
+  "diameter-steps": { type: "string" },
+  "min-diameter": { type: "string" },
+  "max-diameter": { type: "string" },
+  "nominal-sizes": { type: "boolean" },
+  "spacing-steps": { type: "string" },
+  "min-margin": { type: "string" },
+  "surface-clearance": { type: "string" },
+  "max-designs": { type: "string" },
+  "no-slack-water": { type: "boolean" },
+  json: { type: "boolean" },
+  workers: { type: "string" },
+} as const;
+
+type DesignValues = ReturnType<typeof readArgs<typeof OPTIONS>>["values"];
+
 function list(v: string | undefined): string[] | undefined {
   return v === undefined
     ? undefined
@@ -84,29 +107,7 @@ function int(v: string | undefined, flag: string): number | undefined {
 }
 
 async function run(argv: readonly string[], io: CliIO): Promise<number> {
-  const { values, positionals } = readArgs(
-    argv,
-    {
-      "min-velocity": { type: "string" },
-      "max-velocity": { type: "string" },
-      "max-length": { type: "string" },
-      "max-ports": { type: "string" },
-      angles: { type: "string" },
-      "port-heights": { type: "string" },
-      "diameter-steps": { type: "string" },
-      "min-diameter": { type: "string" },
-      "max-diameter": { type: "string" },
-      "nominal-sizes": { type: "boolean" },
-      "spacing-steps": { type: "string" },
-      "min-margin": { type: "string" },
-      "surface-clearance": { type: "string" },
-      "max-designs": { type: "string" },
-      "no-slack-water": { type: "boolean" },
-      json: { type: "boolean" },
-      workers: { type: "string" },
-    },
-    NAME,
-  );
+  const { values, positionals } = readArgs(argv, OPTIONS, NAME);
   if (positionals.length !== 1) throw new CliError(`brinefield ${NAME}: give one scenario file.\n\n${HELP}`);
   const path = positionals[0]!;
   const workers = workersOption(values.workers, io, NAME);
@@ -117,9 +118,36 @@ async function run(argv: readonly string[], io: CliIO): Promise<number> {
   if (values["no-slack-water"]) {
     scenario = { ...scenario, options: { ...scenario.options, addSlackWater: false } };
   }
-  // Plain numbers are SI; anything else (e.g. "5 m/s") is read with its unit by the constraint schema.
+  const block = (raw as { design?: unknown }).design;
+  const cons = designConstraintsFrom(scenario, block, constraintFlags(values));
+  if (!cons.ok) throw new CliError(`${path}: design constraints:\n${pathIssueLines(cons.issues)}`);
+  const c = cons.constraints;
+  const cases = expandCases(scenario);
+  const plan = planDesignSearch(scenario, c, cases.length);
+  if (!plan.ok) throw new CliError(`brinefield ${NAME}: ${plan.message}`);
+  const candidates = plan.candidates;
+  if (candidates.length === 0) {
+    printNoCandidates(io, { scenario, constraints: c, json: values.json === true });
+    return 0;
+  }
+  const overrides = candidates.map(candidateOverrides);
+  const done = await withProgress(io, "Design search", candidates.length, (onProgress) =>
+    pointsOnWorkers(scenario, overrides, workers, onProgress),
+  );
+  if (!done) return EXIT_CANCELLED;
+  const { value: points, elapsedSeconds } = done;
+  const rawDiffuser = (raw as { diffuser?: unknown }).diffuser;
+  const outcome = designOutcome(scenario, c, candidates, points, rawDiffuser);
+  const answer: DesignAnswer = { scenario, constraints: c, cases, outcome, elapsedSeconds };
+  if (values.json) printJsonAnswer(io, designJson(answer));
+  else printTextAnswer(io, designTextLines(answer));
+  return 0;
+}
+
+/** The constraint flags given on the command line. Plain numbers are SI; anything else (e.g. "5 m/s") is read with its unit by the constraint schema. */
+function constraintFlags(values: DesignValues): Record<string, unknown> {
   const num = (v: string | undefined) => (v === undefined ? undefined : Number.isFinite(Number(v)) ? Number(v) : v);
-  const flags = Object.fromEntries(
+  return Object.fromEntries(
     Object.entries({
       minExitVelocity: num(values["min-velocity"]),
       maxExitVelocity: num(values["max-velocity"]),
@@ -137,134 +165,139 @@ async function run(argv: readonly string[], io: CliIO): Promise<number> {
       maxDesigns: int(values["max-designs"], "max-designs"),
     }).filter(([, v]) => v !== undefined),
   );
-  const block = (raw as { design?: unknown }).design;
-  const cons = designConstraintsFrom(scenario, block, flags);
-  if (!cons.ok) {
-    const list = cons.issues.map((i) => `  - ${i.path}: ${i.message}`).join("\n");
-    throw new CliError(`${path}: design constraints:\n${list}`);
-  }
-  const c = cons.constraints;
-  const cases = expandCases(scenario);
-  const casesNote = describeCases(cases, scenario);
-  const plan = planDesignSearch(scenario, c, cases.length);
-  if (!plan.ok) throw new CliError(`brinefield ${NAME}: ${plan.message}`);
-  const candidates = plan.candidates;
-  const rawDiffuser = (raw as { diffuser?: unknown }).diffuser;
-  const constraintsLine =
+}
+
+/** The constraints in one line of the text output. */
+function constraintsLine(c: DesignConstraints): string {
+  return (
     `Constraints: exit velocity ${c.minExitVelocity}–${c.maxExitVelocity} m/s, port diameter ` +
     `${formatNumber(c.minPortDiameter)}–${formatNumber(c.maxPortDiameter)} m${c.nominalSizes ? " (nominal sizes)" : ""}, ` +
     `diffuser length ≤ ${formatNumber(c.maxLength)} m, ports ${Math.min(...c.portCounts)}–${Math.max(...c.portCounts)}, ` +
     `angles ${c.portAngles.join(", ")}°, port height ${c.portHeights.map((h) => formatNumber(h)).join(", ")} m, ` +
-    `margin ≥ ${c.minMargin}, jet's upper edge ≥ ${c.surfaceClearance} m below the surface.`;
-  if (candidates.length === 0) {
-    const headline =
-      `No design meets every limit in every ambient case: no candidate geometry fits the constraints ` +
-      `(no diameter gives an exit velocity of ${c.minExitVelocity}–${c.maxExitVelocity} m/s within ` +
-      `${formatNumber(c.minPortDiameter)}–${formatNumber(c.maxPortDiameter)} m for ${Math.min(...c.portCounts)}–${Math.max(...c.portCounts)} ports); ` +
-      "widen design.minPortDiameter/maxPortDiameter, the velocity range or the port counts.";
-    if (values.json) {
-      io.stdout(
-        jsonText({
-          format: "brinefield-design",
-          version: 1,
-          scenarioName: scenario.name,
-          headline,
-          constraints: c,
-          candidatesTried: 0,
-          candidatesPassing: 0,
-          designs: [],
-          nearestMiss: null,
-          caution: CAUTION,
-        }),
-      );
-    } else {
-      io.stdout(withCaution([headline, constraintsLine].join("\n") + "\n"));
-    }
-    return 0;
-  }
-  const overrides = candidates.map(candidateOverrides);
-  const done = await withProgress(io, "Design search", candidates.length, (onProgress) =>
-    pointsOnWorkers(scenario, overrides, workers, onProgress),
+    `margin ≥ ${c.minMargin}, jet's upper edge ≥ ${c.surfaceClearance} m below the surface.`
   );
-  if (!done) return EXIT_CANCELLED;
-  const { value: points, elapsedSeconds } = done;
-  const outcome = designOutcome(scenario, c, candidates, points, rawDiffuser);
-  if (values.json) {
-    io.stdout(
-      jsonText({
-        format: "brinefield-design",
-        version: 1,
-        scenarioName: scenario.name,
-        headline: outcome.headline,
-        rankingRule: outcome.rankingRule,
-        constraints: c,
-        ambientCases: cases.map((k) => k.name),
-        slackWaterAdded: cases.some((k) => k.addedSlackWater),
-        candidatesTried: outcome.candidatesTried,
-        candidatesPassing: outcome.candidatesPassing,
-        candidatesRefused: outcome.candidatesRefused,
-        designs: outcome.designs,
-        nearestMiss: outcome.nearestMiss,
-        notes: [casesNote, ...outcome.notes],
-        elapsedSeconds,
-        caution: outcome.caution,
-      }),
-    );
-    return 0;
+}
+
+/** The answer when no candidate geometry fits the constraints at all: nothing was run. */
+function printNoCandidates(
+  io: CliIO,
+  input: { readonly scenario: Scenario; readonly constraints: DesignConstraints; readonly json: boolean },
+): void {
+  const { scenario, constraints: c } = input;
+  const headline =
+    `No design meets every limit in every ambient case: no candidate geometry fits the constraints ` +
+    `(no diameter gives an exit velocity of ${c.minExitVelocity}–${c.maxExitVelocity} m/s within ` +
+    `${formatNumber(c.minPortDiameter)}–${formatNumber(c.maxPortDiameter)} m for ${Math.min(...c.portCounts)}–${Math.max(...c.portCounts)} ports); ` +
+    "widen design.minPortDiameter/maxPortDiameter, the velocity range or the port counts.";
+  if (input.json) {
+    printJsonAnswer(io, {
+      format: "brinefield-design",
+      version: 1,
+      scenarioName: scenario.name,
+      headline,
+      constraints: c,
+      candidatesTried: 0,
+      candidatesPassing: 0,
+      designs: [],
+      nearestMiss: null,
+      caution: CAUTION,
+    });
+  } else {
+    printTextAnswer(io, [headline, constraintsLine(c)]);
   }
+}
+
+/** What a finished search answers, for the JSON or the text output. */
+interface DesignAnswer {
+  readonly scenario: Scenario;
+  readonly constraints: DesignConstraints;
+  readonly cases: readonly CaseSpec[];
+  readonly outcome: DesignOutcome;
+  readonly elapsedSeconds: number;
+}
+
+function designJson(answer: DesignAnswer): unknown {
+  const { scenario, cases, outcome } = answer;
+  return {
+    format: "brinefield-design",
+    version: 1,
+    scenarioName: scenario.name,
+    headline: outcome.headline,
+    rankingRule: outcome.rankingRule,
+    constraints: answer.constraints,
+    ambientCases: cases.map((k) => k.name),
+    slackWaterAdded: cases.some((k) => k.addedSlackWater),
+    candidatesTried: outcome.candidatesTried,
+    candidatesPassing: outcome.candidatesPassing,
+    candidatesRefused: outcome.candidatesRefused,
+    designs: outcome.designs,
+    nearestMiss: outcome.nearestMiss,
+    notes: [describeCases(cases, scenario), ...outcome.notes],
+    elapsedSeconds: answer.elapsedSeconds,
+    caution: outcome.caution,
+  };
+}
+
+function designTextLines(answer: DesignAnswer): string[] {
+  const { scenario, outcome } = answer;
   const out = [
     outcome.headline,
-    `Design search: ${scenario.name} (${formatNumber(elapsedSeconds)} s).`,
-    casesNote,
-    constraintsLine,
+    `Design search: ${scenario.name} (${formatNumber(answer.elapsedSeconds)} s).`,
+    describeCases(answer.cases, scenario),
+    constraintsLine(answer.constraints),
     `Ranking: ${outcome.rankingRule}`,
     ...outcome.notes.slice(1),
     "",
   ];
-  if (outcome.nearestMiss) {
-    const m = outcome.nearestMiss;
-    out.push(
-      `Nearest miss: ${m.design.portCount} port(s), diameter ${m.design.portDiameter} m, angle ${m.design.portAngle}°` +
-        (m.design.portCount > 1
-          ? `, spacing ${m.design.portSpacing} m (length ${formatNumber(m.design.length)} m)`
-          : "") +
-        `, exit velocity ${formatNumber(m.design.exitVelocity)} m/s; worst margin ${m.design.worstMargin.toFixed(2)} in case "${m.design.governingCase}".`,
-      "Why it fails:",
-      ...m.reasons.map((r) => `  - ${r}`),
-      "What would close the gap:",
-      ...m.toClose.map((t) => `  - ${t.field ? `${t.field}: ` : ""}${t.message}`),
-      "",
-      "Its diffuser block:",
-      JSON.stringify(m.design.diffuser),
-    );
-  } else if (outcome.designs.length > 0) {
-    out.push(
-      textTable(
-        [
-          ...["#", "ports", "diameter (m)", "angle (°)", "spacing (m)", "length (m)", "height (m)"],
-          ...["exit vel. (m/s)", "worst margin", "governing case", "best for"],
-        ],
-        outcome.ranked.map((d) => [
-          d.rank,
-          d.candidate.portCount,
-          d.candidate.portDiameter,
-          d.candidate.portAngle,
-          d.candidate.portCount > 1 ? d.candidate.portSpacing : null,
-          d.candidate.length,
-          d.candidate.portHeight,
-          d.candidate.exitVelocity,
-          d.worstMargin,
-          d.governingCase,
-          d.bestFor.join(", "),
-        ]),
-      ),
-      "Diffuser block of #1 (paste into the scenario's \"diffuser\"; --json lists every design's block):",
-      JSON.stringify(outcome.designs[0]!.diffuser),
-      "Screening only: check the chosen design with the full `brinefield run` output and its warnings.",
-    );
-  }
-  io.stdout(withCaution(out.join("\n") + "\n"));
-  return 0;
+  if (outcome.nearestMiss) out.push(...nearestMissLines(outcome.nearestMiss));
+  else if (outcome.designs.length > 0) out.push(...rankedDesignLines(outcome));
+  return out;
+}
+
+/** The candidate that came closest, why it fails and what would close the gap. */
+function nearestMissLines(m: NonNullable<DesignOutcome["nearestMiss"]>): string[] {
+  return [
+    `Nearest miss: ${m.design.portCount} port(s), diameter ${m.design.portDiameter} m, angle ${m.design.portAngle}°` +
+      (m.design.portCount > 1
+        ? `, spacing ${m.design.portSpacing} m (length ${formatNumber(m.design.length)} m)`
+        : "") +
+      `, exit velocity ${formatNumber(m.design.exitVelocity)} m/s; worst margin ${m.design.worstMargin.toFixed(2)} in case "${m.design.governingCase}".`,
+    "Why it fails:",
+    ...m.reasons.map((r) => `  - ${r}`),
+    "What would close the gap:",
+    ...m.toClose.map((t) => `  - ${t.field ? `${t.field}: ` : ""}${t.message}`),
+    "",
+    "Its diffuser block:",
+    JSON.stringify(m.design.diffuser),
+  ];
+}
+
+/** The ranked short list as a table, and the first design's pasteable diffuser block. */
+function rankedDesignLines(outcome: DesignOutcome): string[] {
+  return [
+    textTable(
+      [
+        ...["#", "ports", "diameter (m)", "angle (°)", "spacing (m)", "length (m)", "height (m)"],
+        ...["exit vel. (m/s)", "worst margin", "governing case", "best for"],
+      ],
+      outcome.ranked.map((d) => [
+        d.rank,
+        d.candidate.portCount,
+        d.candidate.portDiameter,
+        d.candidate.portAngle,
+        d.candidate.portCount > 1 ? d.candidate.portSpacing : null,
+        d.candidate.length,
+        d.candidate.portHeight,
+        d.candidate.exitVelocity,
+        d.worstMargin,
+        d.governingCase,
+        d.bestFor.join(", "),
+      ]),
+    ),
+    "Diffuser block of #1 (paste into the scenario's \"diffuser\"; --json lists every design's block):",
+    JSON.stringify(outcome.designs[0]!.diffuser),
+    "Screening only: check the chosen design with the full `brinefield run` output and its warnings.",
+  ];
 }
 
 export const command: CliCommand = {

@@ -1,18 +1,18 @@
 /** `brinefield sweep`: vary one or two inputs over a range and tabulate the verdict at each point. */
-import { jsonText } from "../../result/json";
 import { dirname, isAbsolute, join } from "node:path";
-import { sweepPointsIssue, workIssue } from "../../study/budget";
+import { sweepPointsIssue } from "../../study/budget";
 import { csvWithCaution, flatRowsCsv } from "../../report/csv";
 import { inputsHash } from "../../scenario/hash";
 import { CliError, type CliCommand, type CliIO } from "../command";
 import { readArgs } from "../args";
 import { formatIssues, loadJsonFile } from "../load";
+import { printJsonAnswer, printTextAnswer } from "../output";
+import { refuseOverWorkCap } from "../work-cap";
 import { parseScenario } from "../../scenario/parse";
 import { blendSignChange } from "../../rising/blend";
 import type { Scenario } from "../../scenario/types";
 import { describeCases, expandCases, keptValueNotes } from "../../cases";
 import { CAUTION } from "../../result/contract";
-import { withCaution } from "../../result/caution";
 import { parseStudy } from "../../study/study-file";
 import {
   axisFromParts,
@@ -98,30 +98,11 @@ async function run(argv: readonly string[], io: CliIO): Promise<number> {
   }
   const workers = workersOption(values.workers, io, NAME);
   const { scenario, studyAxes } = loadTarget(positionals[0]!, io);
-  const axes =
-    values.vary && values.vary.length > 0
-      ? values.vary.map((t) => {
-          const a = parseSweepAxis(t);
-          if (!a.ok) throw new CliError(`brinefield ${NAME}: --vary ${a.message}`);
-          return a.axis;
-        })
-      : studyAxes;
-  if (axes.length < 1 || axes.length > 2) {
-    throw new CliError(`brinefield ${NAME}: give one or two --vary options.\n\n${HELP}`);
-  }
-  if (axes.length === 2 && axes[0]!.path === axes[1]!.path) {
-    throw new CliError(`brinefield ${NAME}: ${axes[0]!.path} is varied twice`);
-  }
+  const axes = sweepAxes(values.vary, studyAxes);
   const pointCount = axes.reduce((n, a) => n * a.steps, 1);
-  const caseCount = expandCases(scenario).length;
-  const tooMuch =
-    sweepPointsIssue(pointCount) ??
-    workIssue(
-      `a sweep of ${pointCount} points × ${caseCount} ambient case${caseCount === 1 ? "" : "s"}`,
-      pointCount * caseCount,
-      scenario,
-    );
-  if (tooMuch) throw new CliError(`brinefield ${NAME}: ${tooMuch}`);
+  const tooManyPoints = sweepPointsIssue(pointCount);
+  if (tooManyPoints) throw new CliError(`brinefield ${NAME}: ${tooManyPoints}`);
+  refuseOverWorkCap(NAME, `a sweep of ${pointCount} points`, pointCount, scenario);
   const grid = sweepGrid(axes);
   const done = await withProgress(io, "Sweep", grid.length, (onProgress) =>
     pointsOnWorkers(
@@ -134,6 +115,65 @@ async function run(argv: readonly string[], io: CliIO): Promise<number> {
   if (!done) return EXIT_CANCELLED;
   const { value: points, elapsedSeconds } = done;
   const rows = sweepRows(grid, points);
+  const answer = sweepAnswer(scenario, axes, rows);
+  const { columns: cols, records: flat } = sweepRecords(axes, rows);
+  if (values.csv) {
+    await io.writeFile(
+      values.csv,
+      csvWithCaution(flatRowsCsv(flat as Record<string, unknown>[], cols), undefined, {
+        scenario: scenario.name,
+        inputsHash: inputsHash(scenario),
+      }),
+    );
+  }
+  if (values.json) {
+    printJsonAnswer(io, {
+      format: "brinefield-sweep",
+      version: 1,
+      caution: CAUTION,
+      scenarioName: scenario.name,
+      tally: answer.tally,
+      axes,
+      points: flat,
+      equationOfStateCrossings: answer.crossings,
+      buoyancySignChanges: answer.signChanges,
+      ...(answer.blend
+        ? { blendSignChangeRatio: answer.blend.signChangeRatio, blendSignChanges: answer.blend.signChanges }
+        : {}),
+      counts: answer.counts,
+      noPointMeets: answer.counts.meets === 0,
+      notes: [answer.casesNote, ...answer.keptNotes, ...answer.crossingText, ...answer.signText],
+      elapsedSeconds,
+    });
+    return 0;
+  }
+  printTextAnswer(io, sweepTextLines({ scenario, axes, rows, answer, pointCount: grid.length, elapsedSeconds }));
+  return 0;
+}
+
+/** The axes from --vary options, or else from the study file's "sweep" block: one or two, no path twice. */
+function sweepAxes(vary: readonly string[] | undefined, studyAxes: SweepAxis[]): SweepAxis[] {
+  const axes =
+    vary && vary.length > 0
+      ? vary.map((t) => {
+          const a = parseSweepAxis(t);
+          if (!a.ok) throw new CliError(`brinefield ${NAME}: --vary ${a.message}`);
+          return a.axis;
+        })
+      : studyAxes;
+  if (axes.length < 1 || axes.length > 2) {
+    throw new CliError(`brinefield ${NAME}: give one or two --vary options.\n\n${HELP}`);
+  }
+  if (axes.length === 2 && axes[0]!.path === axes[1]!.path) {
+    throw new CliError(`brinefield ${NAME}: ${axes[0]!.path} is varied twice`);
+  }
+  return axes;
+}
+
+type SweepRow = ReturnType<typeof sweepRows>[number];
+
+/** What the points say as a whole: counts, crossings of the equation of state and of the buoyancy sign, notes. */
+function sweepAnswer(scenario: Scenario, axes: readonly SweepAxis[], rows: readonly SweepRow[]) {
   const crossings = eosCrossings(axes, rows);
   const signChanges = buoyancyCrossings(axes, rows);
   // Where the blend ratio is swept, the blend ratio at which the buoyancy changes sign, located exactly.
@@ -145,16 +185,6 @@ async function run(argv: readonly string[], io: CliIO): Promise<number> {
     axes.map((a) => a.path),
   );
   const tally = `Points: ${rows.length} — meets ${counts.meets}, exceeds ${counts.exceeds}, outside-scope ${counts["outside-scope"]}, refused ${counts.refused}.`;
-  const { columns: cols, records: flat } = sweepRecords(axes, rows);
-  if (values.csv) {
-    await io.writeFile(
-      values.csv,
-      csvWithCaution(flatRowsCsv(flat as Record<string, unknown>[], cols), undefined, {
-        scenario: scenario.name,
-        inputsHash: inputsHash(scenario),
-      }),
-    );
-  }
   const crossingText = crossings.map((c) => {
     const [a, b] = c.between;
     const other = axes.find((x) => x.path !== c.path)?.path;
@@ -174,31 +204,23 @@ async function run(argv: readonly string[], io: CliIO): Promise<number> {
     );
   });
   if (blend && blend.signChanges.length > 0) signText.push(`Blend: ${blend.note}`);
-  if (values.json) {
-    io.stdout(
-      jsonText({
-        format: "brinefield-sweep",
-        version: 1,
-        caution: CAUTION,
-        scenarioName: scenario.name,
-        tally,
-        axes,
-        points: flat,
-        equationOfStateCrossings: crossings,
-        buoyancySignChanges: signChanges,
-        ...(blend ? { blendSignChangeRatio: blend.signChangeRatio, blendSignChanges: blend.signChanges } : {}),
-        counts,
-        noPointMeets: counts.meets === 0,
-        notes: [casesNote, ...keptNotes, ...crossingText, ...signText],
-        elapsedSeconds,
-      }),
-    );
-    return 0;
-  }
+  return { crossings, signChanges, blend, counts, casesNote, keptNotes, tally, crossingText, signText };
+}
+
+/** The text output: tally, the table of points, refused and out-of-scope points, crossings. */
+function sweepTextLines(input: {
+  readonly scenario: Scenario;
+  readonly axes: readonly SweepAxis[];
+  readonly rows: readonly SweepRow[];
+  readonly answer: ReturnType<typeof sweepAnswer>;
+  readonly pointCount: number;
+  readonly elapsedSeconds: number;
+}): string[] {
+  const { axes, rows, answer } = input;
   const out: string[] = [];
-  if (counts.meets === 0) out.push(`NO POINT MEETS EVERY LIMIT. ${tally}`);
-  out.push(`Sweep: ${scenario.name} — ${grid.length} points, ${formatNumber(elapsedSeconds)} s`);
-  out.push(tally, casesNote, ...keptNotes, "");
+  if (answer.counts.meets === 0) out.push(`NO POINT MEETS EVERY LIMIT. ${answer.tally}`);
+  out.push(`Sweep: ${input.scenario.name} — ${input.pointCount} points, ${formatNumber(input.elapsedSeconds)} s`);
+  out.push(answer.tally, answer.casesNote, ...answer.keptNotes, "");
   out.push(
     textTable(
       [
@@ -229,14 +251,12 @@ async function run(argv: readonly string[], io: CliIO): Promise<number> {
     out.push(`Outside scope at ${at} (${r.governingCase}): ${r.scopeReasons.join(" ")}`);
   }
   if (outside.length > 5) out.push(`… and ${outside.length - 5} more points outside the methods' scope.`);
-  if (crossingText.length > 0) out.push(...crossingText);
+  if (answer.crossingText.length > 0) out.push(...answer.crossingText);
   else out.push("The equation of state is the same at every point.");
-  out.push(...signText);
-  io.stdout(withCaution(out.join("\n") + "\n"));
-  return 0;
+  out.push(...answer.signText);
+  return out;
 }
 
-/** Points that meet every limit, that do not, and that could not be computed (counted apart). */
 /** Points per verdict; "refused" points broke a scenario rule and were not computed. */
 function sweepCounts(
   rows: readonly { verdict: string }[],

@@ -1,13 +1,20 @@
 /** `brinefield uncertainty`: seeded, reproducible Monte Carlo over uncertain inputs, on all cores. */
-import { jsonText } from "../../result/json";
 import { CliError, type CliCommand, type CliIO } from "../command";
 import { readArgs } from "../args";
-import { loadScenarioFile } from "../load";
-import { MAX_RUNS, planMonteCarlo, summariseMonteCarlo, type MonteCarloStats } from "../../study/montecarlo";
-import { workIssue } from "../../study/budget";
+import { loadScenarioFile, pathIssueLines } from "../load";
+import { printJsonAnswer, printTextAnswer } from "../output";
+import { refuseOverWorkCap } from "../work-cap";
+import type { Scenario } from "../../scenario/types";
+import {
+  MAX_RUNS,
+  planMonteCarlo,
+  summariseMonteCarlo,
+  type MonteCarloPlan,
+  type MonteCarloStats,
+  type MonteCarloSummary,
+} from "../../study/montecarlo";
 import { describeCases, expandCases, keptValueNotes } from "../../cases";
 import { CAUTION } from "../../result/contract";
-import { withCaution } from "../../result/caution";
 import { seedFromText } from "../../study/random";
 import { textTable } from "../../study/table";
 import { formatNumber } from "../../units";
@@ -82,28 +89,13 @@ async function run(argv: readonly string[], io: CliIO): Promise<number> {
     NAME,
   );
   if (positionals.length !== 1) throw new CliError(`brinefield ${NAME}: give one scenario file.\n\n${HELP}`);
-  const runs = values.runs === undefined ? DEFAULT_RUNS : Number(values.runs);
-  if (!Number.isInteger(runs) || runs < 1 || runs > MAX_RUNS) {
-    throw new CliError(`brinefield ${NAME}: --runs ${values.runs} must be a whole number from 1 to ${MAX_RUNS}`);
-  }
-  const seed = values.seed === undefined ? DEFAULT_SEED : seedFromText(values.seed);
-  if (seed === null) {
-    const problem = "must be a whole number from 0 to 4294967295";
-    throw new CliError(`brinefield ${NAME}: --seed ${values.seed} ${problem}`);
-  }
+  const { runs, seed } = runsAndSeed(values.runs, values.seed);
   const workers = Math.min(workersOption(values.workers, io, NAME), runs);
   const scenario = loadScenarioFile(positionals[0]!, io);
-  const caseCount = expandCases(scenario).length;
-  const tooMuch = workIssue(
-    `--runs ${runs} × ${caseCount} ambient case${caseCount === 1 ? "" : "s"}`,
-    runs * caseCount,
-    scenario,
-  );
-  if (tooMuch) throw new CliError(`brinefield ${NAME}: ${tooMuch}`);
+  refuseOverWorkCap(NAME, `--runs ${runs}`, runs, scenario);
   const planned = planMonteCarlo(scenario, runs, seed);
   if (!planned.ok) {
-    const list = planned.issues.map((i) => `  - ${i.path}: ${i.message}`).join("\n");
-    throw new CliError(`${positionals[0]}: the uncertainty inputs cannot be used:\n${list}`);
+    throw new CliError(`${positionals[0]}: the uncertainty inputs cannot be used:\n${pathIssueLines(planned.issues)}`);
   }
   const plan = planned.plan;
   const done = await withProgress(io, "Monte Carlo", runs, (onProgress) =>
@@ -119,46 +111,93 @@ async function run(argv: readonly string[], io: CliIO): Promise<number> {
       plan.distributions.map((d) => d.path),
     ),
   ].join(" ");
-  if (values.json) {
-    io.stdout(
-      jsonText({
-        format: "brinefield-uncertainty",
-        version: 1,
-        caution: CAUTION,
-        scenarioName: scenario.name,
-        runs: summary.runs,
-        seed: summary.seed,
-        usedDefaultSpreads: summary.usedDefaultSpreads,
-        inputs: plan.distributions,
-        notes: [...summary.notes, casesNote],
-        cases: summary.cases.map(statsJson),
-        worstCase: statsJson(summary.worstCase),
-        noRunMeets: summary.worstCase.meetingRuns === 0,
-        clampedSamples: summary.clampedSamples,
-        clampedByInput: summary.clampedByInput,
-        firstError: summary.firstError,
-        workers,
-        elapsedSeconds,
-      }),
-    );
-    return 0;
+  const answer: UncertaintyAnswer = { scenario, plan, summary, casesNote, workers, elapsedSeconds };
+  if (values.json) printJsonAnswer(io, uncertaintyJson(answer));
+  else printTextAnswer(io, uncertaintyTextLines(answer));
+  return 0;
+}
+
+/** --runs and --seed, checked, with their defaults. */
+function runsAndSeed(runsText: string | undefined, seedText: string | undefined): { runs: number; seed: number } {
+  const runs = runsText === undefined ? DEFAULT_RUNS : Number(runsText);
+  if (!Number.isInteger(runs) || runs < 1 || runs > MAX_RUNS) {
+    throw new CliError(`brinefield ${NAME}: --runs ${runsText} must be a whole number from 1 to ${MAX_RUNS}`);
   }
+  const seed = seedText === undefined ? DEFAULT_SEED : seedFromText(seedText);
+  if (seed === null) {
+    const problem = "must be a whole number from 0 to 4294967295";
+    throw new CliError(`brinefield ${NAME}: --seed ${seedText} ${problem}`);
+  }
+  return { runs, seed };
+}
+
+/** A finished Monte Carlo, for the JSON or the text output. */
+interface UncertaintyAnswer {
+  readonly scenario: Scenario;
+  readonly plan: MonteCarloPlan;
+  readonly summary: MonteCarloSummary;
+  /** The ambient cases and the inputs they keep, one sentence each. */
+  readonly casesNote: string;
+  readonly workers: number;
+  readonly elapsedSeconds: number;
+}
+
+function uncertaintyJson(answer: UncertaintyAnswer): unknown {
+  const { summary } = answer;
+  return {
+    format: "brinefield-uncertainty",
+    version: 1,
+    caution: CAUTION,
+    scenarioName: answer.scenario.name,
+    runs: summary.runs,
+    seed: summary.seed,
+    usedDefaultSpreads: summary.usedDefaultSpreads,
+    inputs: answer.plan.distributions,
+    notes: [...summary.notes, answer.casesNote],
+    cases: summary.cases.map(statsJson),
+    worstCase: statsJson(summary.worstCase),
+    noRunMeets: summary.worstCase.meetingRuns === 0,
+    clampedSamples: summary.clampedSamples,
+    clampedByInput: summary.clampedByInput,
+    firstError: summary.firstError,
+    workers: answer.workers,
+    elapsedSeconds: answer.elapsedSeconds,
+  };
+}
+
+function uncertaintyTextLines(answer: UncertaintyAnswer): string[] {
+  const { summary, workers } = answer;
   const out: string[] = [];
   const w = summary.worstCase;
   const counts = verdictCountsSentence(w, summary.runs);
   if (w.meetingRuns === 0) out.push(`NO RUN MEETS EVERY LIMIT: ${counts}`);
-  out.push(`Monte Carlo: ${scenario.name}`);
+  out.push(`Monte Carlo: ${answer.scenario.name}`);
   out.push(headlineSentence(w, w.requiredDilution.p50));
   if (w.meetingRuns > 0) out.push(counts);
   const plural = workers === 1 ? "" : "s";
-  const took = formatNumber(elapsedSeconds);
+  const took = formatNumber(answer.elapsedSeconds);
   out.push(`${summary.runs} runs, seed ${summary.seed}, ${workers} worker${plural}, ${took} s`);
   if (summary.usedDefaultSpreads) {
     out.push("NOTE: the scenario states no uncertain inputs; default spreads were used (see below).");
   }
   out.push("Inputs (spreads in SI units):");
   for (const n of summary.notes) out.push(`  ${n}`);
-  out.push(casesNote, "");
+  out.push(answer.casesNote, "");
+  out.push(...percentileTableLines(summary));
+  out.push("", "What these mean:");
+  for (const e of UNCERTAINTY_EXPLANATIONS) out.push(`  ${e}`);
+  const clamped = clampedSentences(summary);
+  if (clamped.length > 0) {
+    out.push("", "Clamped inputs (a drawn value outside the field's physical bounds is set to the nearest bound):");
+    for (const c of clamped) out.push(`  ${c}`);
+  }
+  if (summary.firstError)
+    out.push(`Some draws were refused (they break a scenario rule); first: ${summary.firstError}`);
+  return out;
+}
+
+/** Percentiles of the edge dilution, chance of not meeting the limit and runs per verdict, per case and overall. */
+function percentileTableLines(summary: MonteCarloSummary): string[] {
   const rows = [...summary.cases, summary.worstCase].map((s) => [
     s.name === "overall" ? "overall (per-run worst case)" : s.name,
     s.edgeDilution.p5,
@@ -171,8 +210,8 @@ async function run(argv: readonly string[], io: CliIO): Promise<number> {
     s.verdicts["outside-scope"],
     s.verdicts.refused,
   ]);
-  out.push("Dilution at the mixing-zone edge (× — parts of mixed water per part of brine):");
-  out.push(
+  return [
+    "Dilution at the mixing-zone edge (× — parts of mixed water per part of brine):",
     textTable(
       [
         "case",
@@ -188,18 +227,7 @@ async function run(argv: readonly string[], io: CliIO): Promise<number> {
       ],
       rows,
     ),
-  );
-  out.push("", "What these mean:");
-  for (const e of UNCERTAINTY_EXPLANATIONS) out.push(`  ${e}`);
-  const clamped = clampedSentences(summary);
-  if (clamped.length > 0) {
-    out.push("", "Clamped inputs (a drawn value outside the field's physical bounds is set to the nearest bound):");
-    for (const c of clamped) out.push(`  ${c}`);
-  }
-  if (summary.firstError)
-    out.push(`Some draws were refused (they break a scenario rule); first: ${summary.firstError}`);
-  io.stdout(withCaution(out.join("\n") + "\n"));
-  return 0;
+  ];
 }
 
 export const command: CliCommand = {

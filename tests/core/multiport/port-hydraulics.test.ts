@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
+import { STANDARD_GRAVITY } from "../../../core/constants";
 import {
-  GRAVITY,
   flowFractionsFromScenario,
   portCountFromDiffuser,
   portFlowsAndHydraulics,
@@ -20,7 +20,7 @@ describe("portFlowsAndHydraulics() — flow split, exit velocity, Froude number,
     const area = (Math.PI * 0.2 * 0.2) / 4;
     expect(h.port.count, "four ports").toBe(4);
     for (const p of h.ports) expect(p.velocity, `port ${p.index}`).toBeCloseTo(0.2 / area, 12);
-    const gp = (GRAVITY * (1052 - 1023.5)) / 1023.5;
+    const gp = (STANDARD_GRAVITY * (1052 - 1023.5)) / 1023.5;
     expect(h.port.froude, "F = U/√(g′d), the usual definition").toBeCloseTo(0.2 / area / Math.sqrt(gp * 0.2), 12);
   });
 
@@ -195,7 +195,7 @@ describe("port counts and flow splits — the rules exactly (continuity; common 
         },
       });
     const h = portFlowsAndHydraulics({ scenario: s(0.8), ...densities });
-    const loss = (q: number) => Math.pow(q / (0.8 * area), 2) / (2 * GRAVITY);
+    const loss = (q: number) => Math.pow(q / (0.8 * area), 2) / (2 * STANDARD_GRAVITY);
     expect(h.ports[0]!.headLoss).toBeCloseTo(loss(0.3), 12);
     expect(h.ports[1]!.headLoss).toBeCloseTo(loss(0.1), 12);
     expect(h.port.headLoss, "the worst port").toBeCloseTo(loss(0.3), 12);

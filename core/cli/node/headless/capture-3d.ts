@@ -1,6 +1,6 @@
 /**
  * Capturing the app's 3D view as a PNG for the report. The built renderer (dist/renderer) is served on
- * 127.0.0.1 by the shared static server (../staticServer.ts); Chromium opens `?capture=3d` with the scenario text placed in
+ * 127.0.0.1 by the shared static server (../static-server.ts); Chromium opens `?capture=3d` with the scenario text placed in
  * `window.__brinefieldCapture` by an init script, waits until the renderer sets
  * `document.body.dataset.ready = "true"`, and takes a screenshot. Builds the renderer first when the
  * build is missing or older than its sources. Throws `Capture3dError` with a readable reason otherwise,
@@ -12,7 +12,7 @@ import { join, resolve, sep, dirname } from "node:path";
 import { fileURLToPath } from "node:url";
 import { spawn } from "node:child_process";
 import { withChromium } from "./chromium";
-import { startStaticServer } from "../staticServer";
+import { startStaticServer } from "../static-server";
 
 export class Capture3dError extends Error {
   constructor(message: string) {
@@ -104,7 +104,7 @@ export function buildRenderer(root: string, timeoutMs = 120_000): Promise<void> 
 
 /**
  * Serves `dir` read-only on 127.0.0.1 at a free port, for the headless browser only, with the shared
- * static server (../staticServer.ts): GET and HEAD, the Host header must name this server (so a page
+ * static server (../static-server.ts): GET and HEAD, the Host header must name this server (so a page
  * elsewhere cannot reach it by DNS rebinding), malformed paths, NUL, backslash or anything outside the
  * folder refused, and no request can throw inside the handler.
  */

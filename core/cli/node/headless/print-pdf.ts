@@ -3,7 +3,7 @@
  * SVG and data-URI images), so it is loaded with setContent and no network is involved. Page size and
  * margins come from the report's own @page rule.
  */
-import { writeFileAtomic } from "../atomicWrite";
+import { writeFileAtomic } from "../atomic-write";
 import { withChromium } from "./chromium";
 
 /** The options every Brinefield PDF is printed with: tagged (accessible, ISO 14289 structure) and with an outline. */
@@ -27,7 +27,7 @@ export async function pdfFromHtml(html: string): Promise<Uint8Array> {
 }
 
 /**
- * Renders `html` to a PDF file at `outPath` with Brinefield's one atomic writer (core/cli/node/atomicWrite.ts:
+ * Renders `html` to a PDF file at `outPath` with Brinefield's one atomic writer (core/cli/node/atomic-write.ts:
  * random exclusive temporary file, fsync, rename; a folder, device or link to nothing is refused);
  * returns the bytes written.
  */

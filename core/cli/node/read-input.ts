@@ -7,7 +7,7 @@
  */
 import { closeSync, constants as fsConstants, fstatSync, openSync, readSync, statSync, type Stats } from "node:fs";
 import * as fsp from "node:fs/promises";
-import { decodeInputBytes, MAX_INPUT_BYTES, tooLargeMessage } from "../../scenario/jsonText";
+import { decodeInputBytes, MAX_INPUT_BYTES, tooLargeMessage } from "../../scenario/json-text";
 
 export { MAX_INPUT_BYTES };
 

@@ -19,7 +19,7 @@ import { randomBytes } from "node:crypto";
 import { constants as fsConstants, type Stats } from "node:fs";
 import * as fsp from "node:fs/promises";
 import { basename, dirname, join, resolve } from "node:path";
-import { notRegularFileReason, type FileIdentity } from "./readInput";
+import { notRegularFileReason, type FileIdentity } from "./read-input";
 
 export interface AtomicWriteOptions {
   /**
