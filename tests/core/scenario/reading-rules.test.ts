@@ -1,0 +1,198 @@
+/**
+ * Reading a scenario from start to end without throwing: the file check (an object, the format name, a
+ * version this build reads), unknown fields, the cap on issues shown, text in, errors for callers that
+ * prefer exceptions, and what normalising adds: option defaults, optional sections, uncertain inputs,
+ * a frozen result. Format rules are the project's own (common practice, no source).
+ */
+import { describe, it, expect } from "vitest";
+import {
+  parseScenario,
+  parseScenarioText,
+  scenarioFromRaw,
+  ScenarioError,
+  SCENARIO_MIGRATIONS,
+  SCENARIO_VERSION,
+} from "../../../core/scenario";
+import { AMBIENT_CASE_FIELDS } from "../../../core/scenario/types";
+import { accepted, baseRaw, edited, refusedIssues, refusedMessages } from "./rule-fixtures";
+
+describe("the file check", () => {
+  it("wants a JSON object", () => {
+    const msg = (t: string) => `(file): "${t}" must be a JSON object with "format": "brinefield-scenario"`;
+    expect(refusedIssues(null)).toEqual([{ path: "", value: "object", message: msg("object") }]);
+    expect(refusedMessages([])).toEqual([msg("object")]);
+    expect(refusedMessages(5)).toEqual([msg("number")]);
+    expect(refusedMessages("{}")).toEqual([msg("string")]);
+  });
+
+  it("wants the format name", () => {
+    expect(refusedMessages(edited((r) => delete r.format))).toEqual([
+      'format: is missing; must be "brinefield-scenario": this is not a Brinefield scenario file',
+    ]);
+    expect(refusedMessages(edited((r) => (r.format = "brinefield-study")))).toEqual([
+      'format: "brinefield-study" must be "brinefield-scenario": this is not a Brinefield scenario file',
+    ]);
+  });
+
+  it("wants a whole version number from 1, and refuses a newer one than it reads", () => {
+    expect(SCENARIO_VERSION).toBe(1);
+    expect(SCENARIO_MIGRATIONS).toEqual({});
+    for (const v of ["1", 1.5, 0, -1, null])
+      expect(refusedMessages(edited((r) => (r.version = v)))).toEqual([
+        `version: ${JSON.stringify(v)} must be a format version number (this Brinefield reads version 1)`,
+      ]);
+    expect(refusedMessages(edited((r) => (r.version = 2)))).toEqual([
+      "version: 2 is newer than this Brinefield understands (it reads up to version 1); the file was written by a newer Brinefield — update Brinefield rather than risk misreading it",
+    ]);
+    const r = parseScenario(baseRaw());
+    expect(r.ok && r.notes).toEqual([]);
+  });
+
+  it("names unknown fields at the top and inside sections", () => {
+    expect(refusedIssues(edited((r) => (r.colour = "red")))).toEqual([
+      {
+        path: "colour",
+        value: "red",
+        message: 'colour: "red" is not a field of this section; check the spelling (see the format in README.md)',
+      },
+    ]);
+    expect(refusedIssues(edited((r) => (r.ambient.tide = 2)))[0]!.path).toBe("ambient.tide");
+  });
+
+  it("shows at most 40 issues, from the schema or from normalising", () => {
+    const manyKeys = edited((r) => {
+      for (let i = 0; i < 45; i++) r.diffuser[`extra${i}`] = i;
+    });
+    expect(refusedIssues(manyKeys)).toHaveLength(40);
+    const manyNames = edited((r) => {
+      r.discharge.constituents = Array.from({ length: 45 }, () => ({
+        name: "Salinity",
+        concentration: 1,
+        unit: "g/kg",
+      }));
+    });
+    expect(refusedIssues(manyNames)).toHaveLength(40);
+  });
+});
+
+describe("reading text and throwing", () => {
+  it("reads scenario text, and refuses non-text and bad JSON as the whole file", () => {
+    expect(parseScenarioText(JSON.stringify(baseRaw())).ok).toBe(true);
+    expect(parseScenarioText(5 as unknown as string)).toEqual({
+      ok: false,
+      issues: [{ path: "", value: "number", message: '(file): "number" must be text' }],
+    });
+    const bad = parseScenarioText("{");
+    expect(bad.ok).toBe(false);
+    if (bad.ok) return;
+    expect(bad.issues).toHaveLength(1);
+    expect(bad.issues[0]!.path).toBe("");
+    expect(bad.issues[0]!.value).toBeUndefined();
+    expect(bad.issues[0]!.message).toMatch(/^\(file\): is not valid JSON: /);
+  });
+
+  it("scenarioFromRaw returns the scenario or throws every issue at once", () => {
+    expect(scenarioFromRaw(baseRaw()).name).toBe("Rule test diffuser");
+    const raw = edited((r) => {
+      r.diffuser.portAngle = 91;
+      r.ambient.depth = -1;
+    });
+    let thrown: unknown;
+    try {
+      scenarioFromRaw(raw);
+    } catch (e) {
+      thrown = e;
+    }
+    expect(thrown).toBeInstanceOf(ScenarioError);
+    const err = thrown as ScenarioError;
+    expect(err.name).toBe("ScenarioError");
+    expect(err.issues).toHaveLength(2);
+    expect(err.message).toBe(err.issues.map((i) => i.message).join("\n"));
+    expect(err.message.split("\n")).toHaveLength(2);
+  });
+});
+
+describe("what normalising adds", () => {
+  it("fills option defaults and keeps options given", () => {
+    expect(accepted(baseRaw()).options).toEqual({
+      nearFieldForEdge: "conservative",
+      farField: "conservative",
+      addSlackWater: true,
+    });
+    const given = { nearFieldForEdge: "integral", farField: "passive-diffusion", addSlackWater: false };
+    expect(accepted(edited((r) => (r.options = given))).options).toEqual(given);
+  });
+
+  it("keeps a description, an intake and a time-compliance target only when given", () => {
+    const plain = accepted(edited((r) => (r.description = "")));
+    expect("description" in plain).toBe(false);
+    expect("intake" in plain).toBe(false);
+    expect("plant" in plain).toBe(false);
+    expect("uncertainty" in plain).toBe(false);
+    expect(plain.mixingZone).toEqual({
+      radius: 100,
+      limits: [{ constituent: "salinity", unit: "g/kg", maxIncrease: 2 }],
+    });
+    const full = accepted(
+      edited((r) => {
+        r.description = "Invented bay";
+        r.intake = { distance: "1 km", bearing: 45, heightAboveSeabed: 2 };
+        r.mixingZone.timeCompliance = { percentOfTime: 95 };
+      }),
+    );
+    expect(full.description).toBe("Invented bay");
+    expect(full.intake).toEqual({ distance: 1000, bearing: 45, heightAboveSeabed: 2 });
+    expect(full.mixingZone.timeCompliance).toEqual({ percentOfTime: 95 });
+    expect(full.format).toBe("brinefield-scenario");
+    expect(full.version).toBe(1);
+  });
+
+  it("keeps each uncertain input once with its numeric parameters", () => {
+    const s = accepted(
+      edited(
+        (r) =>
+          (r.uncertainty = {
+            inputs: [
+              { path: "ambient.currentSpeed", distribution: "normal", mean: 0.1, sd: 0.02 },
+              { path: "ambient.depth", distribution: "triangular", min: 14, mode: 15, max: 16 },
+            ],
+          }),
+      ),
+    );
+    expect(s.uncertainty).toEqual({
+      inputs: [
+        { path: "ambient.currentSpeed", distribution: "normal", params: { mean: 0.1, sd: 0.02 } },
+        { path: "ambient.depth", distribution: "triangular", params: { min: 14, mode: 15, max: 16 } },
+      ],
+    });
+    const twice = edited(
+      (r) =>
+        (r.uncertainty = {
+          inputs: [
+            { path: "ambient.currentSpeed", distribution: "normal", sd: 0.02 },
+            { path: "ambient.depth", distribution: "uniform", min: 14, max: 16 },
+            { path: "ambient.currentSpeed", distribution: "uniform", min: 0, max: 0.2 },
+          ],
+        }),
+    );
+    expect(refusedIssues(twice)).toEqual([
+      {
+        path: "uncertainty.inputs.2.path",
+        value: "ambient.currentSpeed",
+        message: 'uncertainty.inputs.2.path: "ambient.currentSpeed" is listed twice; give each uncertain input once',
+      },
+    ]);
+  });
+
+  it("freezes the whole scenario", () => {
+    const s = accepted(baseRaw());
+    expect(Object.isFrozen(s)).toBe(true);
+    expect(Object.isFrozen(s.diffuser.flowSplit)).toBe(true);
+    expect(Object.isFrozen(s.ambient.profile[0])).toBe(true);
+    expect(Object.isFrozen(s.mixingZone.limits[0])).toBe(true);
+  });
+
+  it("lists the ambient fields a case may set", () => {
+    expect(AMBIENT_CASE_FIELDS).toEqual(["depth", "salinity", "temperature", "currentSpeed", "currentDirection"]);
+  });
+});
