@@ -36,6 +36,9 @@ describe("hashText", () => {
 
   it("starts its high lane from 0x050c5d1f and pads both lanes to 8 hex digits", () => {
     expect(hashText("")).toBe("050c5d1f811c9dc5");
+    // High lane: the same FNV-1a step over each code unit + 0x9e37 (evaluated independently in Python).
+    expect(hashText("a")).toBe("7a17cd85e40c292c");
+    expect(hashText("foobar")).toBe("29c49da6bf9cf968");
     for (const t of ["a", "foobar", "{}", "é", "x".repeat(1000)]) expect(hashText(t)).toMatch(/^[0-9a-f]{16}$/);
   });
 
@@ -54,6 +57,10 @@ describe("inputsHash", () => {
     const s = accepted(baseRaw());
     const { name: _n, description: _d, conversions: _c, ...rest } = s;
     expect(inputsHash(s)).toBe(hashText(canonical(rest)).slice(0, 12));
+    const withCase = accepted(edited((r) => (r.ambientCases = [{ name: "c", currentSpeed: 0.3 }])));
+    const { name: _n2, conversions: _c2, ...physics } = withCase;
+    const cases = withCase.ambientCases.map(({ sets: _s, ...c }) => c);
+    expect(inputsHash(withCase)).toBe(hashText(canonical({ ...physics, ambientCases: cases })).slice(0, 12));
   });
 
   it("writes non-finite numbers and undefined array items as null, and leaves undefined members out", () => {
