@@ -100,6 +100,17 @@ describe("discharge computed from the plant", () => {
     expect(accepted(plantRaw({ feedTemperature: undefined }, { temperature: 30 })).discharge.temperature).toBe(30);
   });
 
+  it("reads a feed salinity in mg/L at the feed temperature, else at the brine temperature", () => {
+    const direct = (t: number) =>
+      accepted(edited((r) => Object.assign(r.discharge, { salinity: "37000 mg/L", temperature: t }))).discharge
+        .salinity;
+    const at20 = accepted(plantRaw({ feedSalinity: "37000 mg/L" }, { temperature: 30 })).plant!.feedSalinity;
+    expect(at20).toBe(direct(20));
+    const noFeedT = plantRaw({ feedSalinity: "37000 mg/L", feedTemperature: undefined }, { temperature: 30 });
+    expect(accepted(noFeedT).plant!.feedSalinity).toBe(direct(30));
+    expect(direct(30)).not.toBe(direct(20));
+  });
+
   it("mixes blending streams in by flow-weighted means and notes the result", () => {
     const s = accepted(
       plantRaw({ saltRejection: 1, blending: [{ name: "seawater", flow: 1, salinity: 36, temperature: 23 }] }),

@@ -63,6 +63,17 @@ describe("decodeInputBytes", () => {
     expect(refusedBytes([0x7b, 0x20, 0x7d], 2)).toBe(tooLargeMessage(3, 2));
   });
 
+  it("caps input at 5 MB by default, before looking at the bytes", () => {
+    expect(decodeInputBytes(new Uint8Array(MAX_INPUT_BYTES + 1))).toEqual({
+      ok: false,
+      message: "is 5.0 MB, larger than the 5 MB Brinefield reads; refused unread",
+    });
+    expect(parseJsonText(" ".repeat(MAX_INPUT_BYTES + 1))).toEqual({
+      ok: false,
+      message: "is 5.0 MB, larger than the 5 MB Brinefield reads; refused unread",
+    });
+  });
+
   it("decodes UTF-8 (multi-byte characters kept) and drops a UTF-8 byte-order mark", () => {
     expect(decoded([0x22, 0xc3, 0xa9, 0x22])).toBe('"é"');
     expect(decoded([0xef, 0xbb, 0xbf, 0x7b, 0x7d])).toBe("{}");

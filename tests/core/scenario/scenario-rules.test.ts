@@ -86,6 +86,32 @@ describe("expectationFor: the words of each form of bound", () => {
   });
 });
 
+describe("the words of every bounded field, as the file reader says them", () => {
+  it.each([
+    ["ambient.depth", 'must be a positive water depth up to 1000 m (e.g. 12 or "40 ft")'],
+    ["ambient.temperature", 'must be an ambient temperature from -2 to 60 °C (e.g. 20 or "20 degC")'],
+    ["ambient.currentDirection", 'must be a current direction from 0 to 360 ° (e.g. 60 or "60 deg")'],
+    ["ambient.bedSlopeAzimuth", 'must be a downslope direction from 0 to 360 ° (e.g. 60 or "60 deg")'],
+    ["discharge.flow", 'must be a positive total brine flow up to 100 m³/s (e.g. 0.5 or "12 MGD")'],
+    [
+      "discharge.salinity",
+      'must be a discharge salinity from 0 to 160 g/kg Absolute Salinity (e.g. 68, "68 g/kg", "36 psu" or "40000 mg/L")',
+    ],
+    ["discharge.temperature", 'must be a discharge temperature from -2 to 60 °C (e.g. 20 or "20 degC")'],
+    ["diffuser.portHeight", 'must be a port height above the seabed from 0 to 100 m (e.g. 12 or "40 ft")'],
+    ["diffuser.portAzimuth", 'must be a port azimuth from 0 to 360 ° (e.g. 60 or "60 deg")'],
+    ["diffuser.diffuserAzimuth", 'must be a diffuser axis azimuth from 0 to 360 ° (e.g. 60 or "60 deg")'],
+    ["diffuser.length", 'must be a diffuser length from 0 to 10000 m (e.g. 12 or "40 ft")'],
+    ["mixingZone.radius", 'must be a positive mixing-zone radius up to 20000 m (e.g. 12 or "40 ft")'],
+    [
+      "plant.blendRatio",
+      'must be a blend ratio (total blending flow ÷ brine flow) from 0 to 100 (e.g. 0.45 or "45 %")',
+    ],
+  ])("%s", (path, words) => {
+    expect(expectationFor(fieldBounds(path)!)).toBe(words);
+  });
+});
+
 describe("field bounds on a normalised scenario", () => {
   it("accepts the base scenario", () => {
     expect(scenarioRuleIssues(base)).toEqual([]);
@@ -168,6 +194,7 @@ describe("field bounds on a normalised scenario", () => {
       'diffuser.portSpacing: 1001 must be a positive port spacing up to 1000 m (e.g. 12 or "40 ft")',
     ]);
     expect(messages(withDiffuser({ layout: "single", portCount: 1, flowSplit: [1], portSpacing: 1001 }))).toEqual([]);
+    expect(messages(withDiffuser({ layout: "line", portCount: 1, flowSplit: [1], portSpacing: 1001 }))).toEqual([]);
   });
 });
 
