@@ -64,6 +64,7 @@ describe("decodeInputBytes", () => {
   });
 
   it("caps input at 5 MB by default, before looking at the bytes", () => {
+    // One byte over 5 MiB is not a whole number of MiB, so it is written with one decimal.
     expect(decodeInputBytes(new Uint8Array(MAX_INPUT_BYTES + 1))).toEqual({
       ok: false,
       message: "is 5.0 MB, larger than the 5 MB Brinefield reads; refused unread",

@@ -70,6 +70,32 @@ describe("salinity limits written with a unit", () => {
   });
 });
 
+describe("the number in a limit string", () => {
+  it("reads signs, decimals and exponents in either case", () => {
+    const read = (v: string) => limitOf({ constituent: "salinity", maxIncrease: v }).maxIncrease;
+    expect(read("+2")).toBe(2);
+    expect(read("2.")).toBe(2);
+    expect(read("1E1")).toBe(10);
+    expect(read("2e-1 g/kg")).toBe(0.2);
+    expect(read("2e+1g/kg")).toBe(20);
+    expect(read("\t0.25\tg/kg")).toBe(0.25);
+  });
+
+  it("adds no conversion note when the value is already in the constituent's unit", () => {
+    const inUnit = accepted(withLimit({ constituent: "salinity", maxIncrease: "2 g/kg", background: "36 g/kg" }));
+    expect(inUnit.conversions.some((c) => c.startsWith("mixingZone"))).toBe(false);
+    const listed = accepted(withLimit({ constituent: "Antiscalant", maxConcentration: "3 mg/L" }, antiscalant));
+    expect(listed.mixingZone.limits[0]!.maxConcentration).toBe(3);
+    expect(listed.conversions.some((c) => c.startsWith("mixingZone"))).toBe(false);
+  });
+
+  it("checks the size of a negative value before its sign", () => {
+    expect(refusal({ constituent: "salinity", maxIncrease: 2, background: -2e9 })).toBe(
+      "mixingZone.limits.0.background: -2000000000 must be a finite number (in g/kg) of at most 1e9 in size",
+    );
+  });
+});
+
 describe("temperature limits", () => {
   it("reads an increase in °F as a difference (×5/9) and in K or °C as it is", () => {
     for (const v of ["9 degF", "9 °F", "9 F", "9 degf"])

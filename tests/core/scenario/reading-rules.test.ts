@@ -14,7 +14,26 @@ import {
   SCENARIO_VERSION,
 } from "../../../core/scenario";
 import { AMBIENT_CASE_FIELDS } from "../../../core/scenario/types";
+import { issue } from "../../../core/scenario/issue";
 import { accepted, baseRaw, edited, refusedIssues, refusedMessages } from "./rule-fixtures";
+
+describe("the shape of an issue", () => {
+  it("shows the path, the value given (or that it is missing) and what is expected", () => {
+    expect(issue("a.b", 2, "must be 1")).toStrictEqual({ path: "a.b", value: 2, message: "a.b: 2 must be 1" });
+    expect(issue("a.b", undefined, "expected x").message).toBe("a.b: is missing; expected x");
+    expect(issue("", "x", "must be y").message).toBe('(file): "x" must be y');
+    expect(issue("n", Number.NaN, "e").message).toBe("n: NaN e");
+    expect(issue("n", Number.NEGATIVE_INFINITY, "e").message).toBe("n: -Infinity e");
+    expect(issue("n", () => 1, "e").message).toBe("n: () => 1 e");
+    expect(issue("n", "y".repeat(100), "e").message).toBe(`n: "${"y".repeat(79)} e`);
+  });
+
+  it("lists related fields only when there are some", () => {
+    expect("related" in issue("a", 1, "e")).toBe(false);
+    expect("related" in issue("a", 1, "e", [])).toBe(false);
+    expect(issue("a", 1, "e", ["b"]).related).toEqual(["b"]);
+  });
+});
 
 describe("the file check", () => {
   it("wants a JSON object", () => {
