@@ -121,6 +121,9 @@ describe("jsonNestingDepth", () => {
     expect(jsonNestingDepth("1")).toBe(0);
     expect(jsonNestingDepth('{"a":[1,{"b":[]}]}')).toBe(4);
     expect(jsonNestingDepth("[][][]")).toBe(1);
+    expect(jsonNestingDepth("[[[]],[]]")).toBe(3);
+    expect(jsonNestingDepth('[{"a":{}},{}]')).toBe(3);
+    expect(jsonNestingDepth("{}{}{}")).toBe(1);
     expect(jsonNestingDepth('["[[[{{{"]')).toBe(1);
     expect(jsonNestingDepth("[[[[[[", 2)).toBe(3);
   });
