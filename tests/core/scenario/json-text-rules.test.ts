@@ -147,6 +147,7 @@ describe("firstDuplicateKey", () => {
     expect(firstDuplicateKey('{"a":"a","b":"a"}')).toBeNull();
     expect(firstDuplicateKey('["a","a"]')).toBeNull();
     expect(firstDuplicateKey("[1,2]")).toBeNull();
+    expect(firstDuplicateKey('"a"')).toBeNull();
   });
 
   it("reads escaped quotes inside keys and values", () => {
@@ -189,6 +190,10 @@ describe("parseJsonText", () => {
     expect(m.startsWith("is not valid JSON: ")).toBe(true);
     expect(m.length).toBeGreaterThan("is not valid JSON: ".length);
     expect(m.length).toBeLessThanOrEqual("is not valid JSON: ".length + 200);
+    const long = refusedText(`{"a": "${"x".repeat(400)}" "b"}\n`);
+    expect(long.startsWith("is not valid JSON: ")).toBe(true);
+    expect(long.length).toBeLessThanOrEqual("is not valid JSON: ".length + 200);
+    expect(long).not.toContain("\n");
   });
 
   it("refuses a duplicate key naming its path", () => {
