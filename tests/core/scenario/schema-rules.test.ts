@@ -115,6 +115,15 @@ describe("salinities", () => {
     );
   });
 
+  it("psu and mg/L from 0, both included, on the scale written", () => {
+    for (const v of ["0 psu", "0 mg/L"])
+      expect(accepted(edited((r) => (r.ambient.salinity = v))).ambient.profile[0]!.salinity).toBe(0);
+    for (const v of ["-1 psu", "-1 mg/L"])
+      expect(only((r) => (r.ambient.salinity = v))).toBe(`ambient.salinity: ${JSON.stringify(v)} ${AMBIENT}`);
+    // 80 psu is within the cap as written; its Absolute Salinity (80.38 g/kg) is then over it.
+    expect(only((r) => (r.ambient.salinity = "80 psu"))).toBe(`ambient.salinity: ${(80 * 35.16504) / 35} ${AMBIENT}`);
+  });
+
   it("mg/L up to 1200 × the cap, read before the density conversion", () => {
     expect(accepted(edited((r) => (r.ambient.salinity = "40000 mg/L"))).ambient.profile[0]!.salinity).toBeGreaterThan(
       38,
