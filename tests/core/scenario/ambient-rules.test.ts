@@ -158,6 +158,45 @@ describe("ambient profile", () => {
   });
 });
 
+describe("ambient record", () => {
+  const record = (extra: Raw = {}) => ({
+    time: [0, 3600],
+    currentSpeed: [0.1, 0.2],
+    currentDirection: [90, 270],
+    ...extra,
+  });
+
+  it("converts salinities by the rule of ambient.salinity, with one note for the column", () => {
+    const s = accepted(edited((r) => (r.ambient.record = record({ salinity: ["35 psu", 36] }))));
+    expect(s.ambient.record!.salinity![0]).toBeCloseTo(35.16504, 12);
+    expect(s.ambient.record!.salinity![1]).toBe(36);
+    expect(s.ambient.record!.time).toEqual([0, 3600]);
+    expect(s.conversions).toEqual([
+      "ambient.record.salinity: 1 value(s) converted to Absolute Salinity (g/kg) by the same rule as ambient.salinity",
+    ]);
+  });
+
+  it("reads a TDS salinity at the temperature of the deepest stated point when the record has none", () => {
+    const direct = (t: number) =>
+      accepted(edited((r) => Object.assign(r.discharge, { salinity: "37000 mg/L", temperature: t }))).discharge
+        .salinity;
+    const raw = withProfile([
+      { depth: 0, salinity: 36, temperature: 25 },
+      { depth: 15, salinity: 36, temperature: 10 },
+    ]);
+    raw.ambient.record = record({ salinity: ["37000 mg/L", "37000 mg/L"] });
+    expect(accepted(raw).ambient.record!.salinity).toEqual([direct(10), direct(10)]);
+    expect(direct(10)).not.toBe(direct(25));
+  });
+
+  it("refuses a record whose columns do not match its times", () => {
+    const raw = edited((r) => (r.ambient.record = record({ currentDirection: [90] })));
+    expect(refusedMessages(raw)).toEqual([
+      'ambient.record.currentDirection: "1 values" must list one value per time (2 times)',
+    ]);
+  });
+});
+
 describe("enclosed basin", () => {
   it("takes a flushing time (with a unit) or an exchange flow beside the volume", () => {
     const flushed = accepted(edited((r) => (r.ambient.basin = { volume: 2e8, flushingTime: "10 days" })));
