@@ -109,6 +109,8 @@ describe("rosettes", () => {
   it("spreads the ports evenly round each riser from the port azimuth, or takes one azimuth per port", () => {
     const d = diffuserOf((g) => (rosette(g, { portsPerRiser: 4 }), (g.portAzimuth = 30)));
     expect(d.risers!.portAzimuths).toEqual([30, 120, 210, 300]);
+    const wrapped = diffuserOf((g) => (rosette(g, { portsPerRiser: 4 }), (g.portAzimuth = 300)));
+    expect(wrapped.risers!.portAzimuths).toEqual([300, 30, 120, 210]);
     expect(diffuserOf((g) => rosette(g, { portAzimuths: [10, 20, 30] })).risers!.portAzimuths).toEqual([10, 20, 30]);
     const issues = refusedIssues(edited((r) => rosette(r.diffuser, { portAzimuths: [0, 90] })));
     expect(issues.map((i) => i.message)).toEqual([

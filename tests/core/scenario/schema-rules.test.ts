@@ -6,7 +6,7 @@
  * Desalination and Water Treatment 16:354–380, eq. 8 gives about 1090 kg/m³ at 120 g/kg, 20 °C).
  */
 import { describe, it, expect } from "vitest";
-import { salinity, scenarioFileSchema } from "../../../core/scenario/schema";
+import { salinity, scenarioFileSchema, scenarioJsonSchema } from "../../../core/scenario/schema";
 import { accepted, baseRaw, edited, refusedMessages, type Raw } from "./rule-fixtures";
 
 /** The one message of a scenario refused after `edit`. */
@@ -94,8 +94,24 @@ describe("quantities", () => {
 });
 
 function scenarioFileSchemaJson(): unknown {
-  return scenarioFileSchema.toJSONSchema({ io: "input", unrepresentable: "any" });
+  return scenarioJsonSchema();
 }
+
+describe("the JSON Schema export", () => {
+  it("is draft 2020-12, input side (numbers or strings with units), titled and described", () => {
+    // Typed loosely: the export is plain JSON.
+    const js = scenarioJsonSchema() as Record<string, any>;
+    expect(js.$schema).toBe("https://json-schema.org/draft/2020-12/schema");
+    expect(js.title).toBe("Brinefield scenario");
+    expect(js.description).toBe("A brine outfall screening scenario (format version 1).");
+    const diameter = js.properties.diffuser.properties.portDiameter;
+    expect(diameter.type).toEqual(["number", "string"]);
+    expect(js.properties.ambient.properties.basin.description).toBe(
+      "Enclosed water: {volume, flushingTime} or {volume, exchangeFlow}; a well-mixed box model raises the background",
+    );
+    expect(js.required).toEqual(["format", "version", "name", "ambient", "diffuser", "mixingZone"]);
+  });
+});
 
 describe("salinities", () => {
   const AMBIENT =
