@@ -12,6 +12,7 @@ import {
   ScenarioError,
   SCENARIO_MIGRATIONS,
   SCENARIO_VERSION,
+  decodeInputBytes,
 } from "../../../core/scenario";
 import { AMBIENT_CASE_FIELDS } from "../../../core/scenario/types";
 import { issue } from "../../../core/scenario/issue";
@@ -91,6 +92,64 @@ describe("the file check", () => {
       }));
     });
     expect(refusedIssues(manyNames)).toHaveLength(40);
+  });
+});
+
+describe("hostile files, read in-process the way every command reads them", () => {
+  const text = JSON.stringify(baseRaw(), null, 1);
+  const fileMessage = (t: string) => {
+    const r = parseScenarioText(t);
+    expect(r.ok, t.slice(0, 40)).toBe(false);
+    return r.ok ? [] : r.issues.map((i) => i.message);
+  };
+
+  it("reads a scenario with a byte-order mark, as text or as bytes", () => {
+    expect(parseScenarioText("\ufeff" + text).ok).toBe(true);
+    const bytes = decodeInputBytes(Uint8Array.from(Buffer.from("\ufeff" + text, "utf8")));
+    expect(bytes.ok && parseScenarioText(bytes.value).ok).toBe(true);
+  });
+
+  it("refuses UTF-16 with or without a mark, Latin-1 and binary bytes", () => {
+    const utf16le = Buffer.from(text, "utf16le");
+    const utf16be = Buffer.from(text, "utf16le").swap16();
+    const refusal = (b: Buffer) => {
+      const r = decodeInputBytes(Uint8Array.from(b));
+      return r.ok ? "" : r.message;
+    };
+    const UTF16 = "is UTF-16 text; save it as UTF-8 and open it again";
+    expect(refusal(Buffer.concat([Buffer.from([0xff, 0xfe]), utf16le]))).toBe(UTF16);
+    expect(refusal(Buffer.concat([Buffer.from([0xfe, 0xff]), utf16be]))).toBe(UTF16);
+    expect(refusal(utf16le)).toBe(UTF16);
+    expect(refusal(Buffer.from(text.replace("Rule test", "Île test"), "latin1"))).toBe(
+      "is not UTF-8 text (save it as UTF-8)",
+    );
+    const png = Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a, 0, 0, 0, 0x0d]);
+    expect(refusal(png)).toBe("is not UTF-8 text (save it as UTF-8)");
+  });
+
+  it("refuses deep nesting inside a scenario, duplicate keys by path, and JSON that is no object", () => {
+    const deep = text.replace('"name":', `"deep": ${"[".repeat(5000)}${"]".repeat(5000)}, "name":`);
+    expect(fileMessage(deep)).toEqual(["(file): is nested more than 64 levels deep; no Brinefield file is"]);
+    const dup = text.replace('"depth": 15', '"depth": 15, "depth": 500');
+    expect(fileMessage(dup)).toEqual(["(file): ambient.depth: is given twice; each key may appear once"]);
+    expect(fileMessage("")).toEqual(["(file): is empty (expected JSON)"]);
+    expect(fileMessage(text.slice(0, 100))[0]).toMatch(/^\(file\): is not valid JSON: /);
+    const notObject = '(file): "object" must be a JSON object with "format": "brinefield-scenario"';
+    expect(fileMessage("[1, 2, 3]")).toEqual([notObject]);
+    expect(fileMessage("null")).toEqual([notObject]);
+    expect(fileMessage("42")).toEqual(['(file): "number" must be a JSON object with "format": "brinefield-scenario"']);
+  });
+
+  it("refuses nonsense fields naming them", () => {
+    expect(refusedMessages(edited((r) => (r.diffuser.portCount = 0)))).toEqual([
+      "diffuser.portCount: 0 must be a whole number of ports from 1 to 1000",
+    ]);
+    expect(refusedMessages(edited((r) => (r.mixingZone.radius = -100)))).toEqual([
+      'mixingZone.radius: -100 must be a positive mixing-zone radius up to 20000 m (e.g. 12 or "40 ft")',
+    ]);
+    expect(refusedMessages(edited((r) => (r.ambient.depth = "deep")))[0]).toMatch(
+      /^ambient\.depth: "deep" .+; must be a positive water depth up to 1000 m/,
+    );
   });
 });
 
