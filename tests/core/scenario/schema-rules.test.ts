@@ -83,6 +83,37 @@ describe("quantities", () => {
     expect(accepted(tiny).diffuser.portDiameter).toBe(0.005);
   });
 
+  it("includes both ends of an inclusive range and refuses just outside", () => {
+    const ANGLE = 'must be a port angle above horizontal from 0 to 90 ° (e.g. 60 or "60 deg")';
+    expect(accepted(edited((r) => (r.diffuser.portAngle = 0))).diffuser.portAngle).toBe(0);
+    expect(accepted(edited((r) => (r.diffuser.portAngle = 90))).diffuser.portAngle).toBe(90);
+    // 1° = π/180 rad (BIPM 2019 SI Brochure, non-SI units accepted for use with the SI).
+    expect(accepted(edited((r) => (r.diffuser.portAngle = "1.5707963267948966 rad"))).diffuser.portAngle).toBeCloseTo(
+      90,
+      10,
+    );
+    expect(only((r) => (r.diffuser.portAngle = -0.01))).toBe(`diffuser.portAngle: -0.01 ${ANGLE}`);
+    expect(only((r) => (r.diffuser.portAngle = 90.01))).toBe(`diffuser.portAngle: 90.01 ${ANGLE}`);
+    expect(accepted(edited((r) => (r.mixingZone.radius = 20000))).mixingZone.radius).toBe(20000);
+  });
+
+  it("counts are whole numbers within their range", () => {
+    const PORTS = "must be a whole number of ports from 1 to 1000";
+    expect(only((r) => (r.diffuser.portCount = 2.5))).toBe(`diffuser.portCount: 2.5 ${PORTS}`);
+    expect(only((r) => (r.diffuser.portCount = "4"))).toBe(`diffuser.portCount: "4" ${PORTS}`);
+    expect(only((r) => (r.diffuser.portCount = 1001))).toBe(`diffuser.portCount: 1001 ${PORTS}`);
+    const risers = (count: number, portsPerRiser: number) => (r: Raw) => {
+      delete r.diffuser.layout;
+      delete r.diffuser.portCount;
+      r.diffuser.risers = { count, portsPerRiser, spacing: 1 };
+      r.diffuser.length = 1000;
+    };
+    expect(only(risers(201, 1))).toBe("diffuser.risers.count: 201 must be a whole number of risers from 1 to 200");
+    expect(only(risers(1, 13))).toBe(
+      "diffuser.risers.portsPerRiser: 13 must be a whole number of ports per riser from 1 to 12",
+    );
+  });
+
   it("describes each quantity field in the JSON Schema with its SI unit and an example", () => {
     const text = JSON.stringify(scenarioFileSchemaJson());
     expect(text).toContain('port diameter in m (number) or a string with a unit, e.g. 0.2 or \\"8 in\\"');
