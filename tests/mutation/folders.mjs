@@ -3,7 +3,8 @@
  * (its own unit tests, the suites that check its rules or published values through the pipeline, and the
  * property test at a reduced count). The slow generators (fuzz project, study and report suites, browser
  * tests, the hostile-input suite, which starts real command-line processes) are deliberately not in
- * any set: the scenario reader's rules are checked in-process by tests/core/scenario/.
+ * any set: the scenario reader's rules are checked in-process by tests/core/scenario/, so the scenario set
+ * leaves out the property test too (each of its cases runs the whole pipeline).
  */
 export const PROPERTY = "tests/core/properties-based.test.ts";
 
@@ -12,9 +13,7 @@ export const FOLDERS = {
     "tests/core/scenario/**/*.test.ts",
     "tests/core/validation/**/*.test.ts",
     "tests/core/units/**/*.test.ts",
-    "tests/core/study/study-file.test.ts",
     "tests/core/study/same-rules-every-path.test.ts",
-    PROPERTY,
   ],
   "core/compliance": ["tests/core/compliance/**/*.test.ts", PROPERTY],
   "core/nearfield": [

@@ -14,7 +14,7 @@ import {
   stripBom,
   tooLargeMessage,
 } from "../../../core/scenario";
-import { firstDuplicateKey, jsonNestingDepth } from "../../../core/scenario/jsonText";
+import { firstDuplicateKey, jsonNestingDepth } from "../../../core/scenario/json-text";
 
 const UTF16 = "is UTF-16 text; save it as UTF-8 and open it again";
 const NOT_UTF8 = "is not UTF-8 text (save it as UTF-8)";
