@@ -263,6 +263,20 @@ describe("passive diffusion takes over where 2·√(g′h) ≤ 12·α_ε·b^{1/3
     }
   });
 
+  it("does not hand over while the layer still spreads radially, even where the rule already holds", () => {
+    const ctx = ctxOf({ ambient: { currentSpeed: 0.02 } });
+    const c = chainsFromNearField([lengthScaleFixture()], 1).chains[0]!;
+    const gc = farSeries(ctx, c, "gravity-current");
+    const rule = (i: number) =>
+      2 * Math.sqrt((G_PRIME / c.fluxFactor / gc.dilution[i]!) * gc.thickness[i]!) <=
+      12 * FOUR_THIRDS_LAW_COEFFICIENT * Math.cbrt(gc.width[i]!);
+    const early = gc.distance.findIndex((_, i) => rule(i));
+    expect(gc.distance[early], "the rule holds on the radial layer").toBeLessThan(gc.switchDistance!);
+    expect(farSeries(ctx, c, "passive-diffusion").handOverDistance, "at the switch, not before").toBe(
+      gc.switchDistance,
+    );
+  });
+
   it("never hands over a layer that does not drift within range", () => {
     const ctx = ctxOf({ ambient: { currentSpeed: 0.002 } });
     const c = chainsFromNearField([lengthScaleFixture()], 1).chains[0]!;

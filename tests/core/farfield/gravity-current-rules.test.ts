@@ -210,6 +210,8 @@ describe("spreadingLayerFromNearFieldEnd() — flat bed in a current: radial, th
 describe("spreadingLayerFromNearFieldEnd() — neutral and degenerate inputs", () => {
   it("keeps a neutral layer (g′ = 0) undiluted, infinitely thick and at rest in still water", () => {
     for (const reducedGravity of [0, -0.1]) {
+      // An entraining layer first: nothing of its state may carry over into the next call.
+      expect(spreadingLayerFromNearFieldEnd({ ...base, bedSlope: 0.1 }).entrainment[5], "E > 0").toBeGreaterThan(0);
       const s = spreadingLayerFromNearFieldEnd({ ...base, reducedGravity, bedSlope: 0.1 });
       expect(
         s.dilution.every((d) => d === 50),
@@ -219,6 +221,9 @@ describe("spreadingLayerFromNearFieldEnd() — neutral and degenerate inputs", (
       expect(s.velocity[5], "at rest").toBe(0);
       expect(s.richardson[5], "Ri = ∞").toBe(Infinity);
       expect(s.entrainmentVelocity[5], "w_e = 0").toBe(0);
+      expect(s.entrainment[5], "E = 0").toBe(0);
+      expect(s.switchDistance, "never carried off in still water").toBeNull();
+      expect(s.width[5], "still the radial perimeter").toBeCloseTo(W0 + 2 * Math.PI * 10, 9);
     }
   });
 
