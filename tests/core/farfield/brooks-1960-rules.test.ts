@@ -105,6 +105,7 @@ describe("brooksDilutionFromDistanceValidityIssues() — α_ε range 0.002–0.0
     expect(at(ALPHA_LOW * 0.999), "exactly 0.1 % below the low end").toEqual([]);
     expect(at(ALPHA_LOW * 0.9995), "inside the tolerance").toEqual([]);
     expect(at(FOUR_THIRDS_LAW_COEFFICIENT * 1.0005), "inside the tolerance above").toEqual([]);
+    expect(at(FOUR_THIRDS_LAW_COEFFICIENT * 1.001), "exactly 0.1 % above the high end").toEqual([]);
   });
 
   it("flags α_ε outside the range as info, naming the parameter, value, range and source", () => {
