@@ -211,6 +211,30 @@ describe("warnings of a run that does not end on the seabed", () => {
     const neutral = event(r, "neutral-buoyancy")!;
     expect(neutral.s, "the trap level is crossed before the jet stops").toBeLessThan(ev.s);
   });
+
+  it("an inclined light jet overshoots its trap level and is stopped where its axis is level, at the top", () => {
+    const col: AmbientColumn = {
+      ...uniformColumn(100),
+      depths: [0, 100],
+      densities: [1015, 1030],
+      salinities: [30, 38],
+    };
+    const light = jet60({ angle: 45, velocity: 1, reducedGravity: -0.02, froude: 1 / Math.sqrt(0.02 * 0.2) });
+    const rows: number[][] = [];
+    const r = nearFieldIntegral(light, col, {
+      sink: { begin() {}, end() {}, sample: (s, x, y, z) => rows.push([s, z]) },
+    });
+    const trapped = event(r, "trapped");
+    const neutral = r.events!.filter((e) => e.kind === "neutral-buoyancy");
+    expect(neutral.length, "one crossing of the trap level on the way up").toBe(1);
+    expect(trapped.z - neutral[0].z, "momentum carries it well past the trap level").toBeGreaterThan(1);
+    const [a, b] = rows.slice(-2);
+    expect(
+      Math.abs((b[1] - a[1]) / (b[0] - a[0])),
+      "axis nearly level at the stop (sin 45° = 0.71 at the port)",
+    ).toBeLessThan(0.15);
+    expect(trapped.s, "stopped at the last sample").toBe(b[0]);
+  });
 });
 
 describe("warnings for a discharge that is not a dense jet", () => {

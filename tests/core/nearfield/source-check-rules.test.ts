@@ -73,6 +73,12 @@ describe("surface contact: the largest published upper-edge rise plus the port h
     expect(codes(jet, reach + 1e-9), "just deeper than the reach").toContain("jet-near-surface");
     expect(codes(jet, reach / 0.9 - 1e-9), "just inside 90 %").toContain("jet-near-surface");
     expect(codes(jet, reach / 0.9 + 1e-9), "just outside 90 %").not.toContain("jet-near-surface");
+    // Exactly 90 %: F = 20 gives a 2.2·0.2·20 = 8.8 m rise; a port 0.2 m up reaches 9 m = 0.9 × 10 m.
+    const f20 = makeJet({ F: 20 });
+    const rise20 = Math.max(...publishedRiseHeights(f20).map((r) => r.height));
+    const exact = { ...f20, portHeight: 9 - rise20 };
+    expect(rise20 + exact.portHeight, "reach is exactly 0.9 × depth").toBe(0.9 * 10);
+    expect(codes(exact, 10), "at exactly 90 %").toContain("jet-near-surface");
   });
 
   it("adds that a steeper port likely rises higher than any dataset (above 60° only)", () => {
