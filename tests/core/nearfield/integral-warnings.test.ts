@@ -267,6 +267,26 @@ describe("warnings for a discharge that is not a dense jet", () => {
     });
   });
 
+  it("zero g′ with a finite F given is near-neutral too, with that F in the message", () => {
+    const r = nearFieldIntegral(jet60({ reducedGravity: 0 }), uniformColumn(20), { maxLength: 50 });
+    expect(find(r, "integral-near-neutral")?.message, "F = 25").toBe(
+      "Near-neutral buoyancy (g′ = 0.00 m/s², F = 25): the discharge behaves as a pure jet and may not return to the seabed within the model.",
+    );
+  });
+
+  it("a neutral discharge rising into lighter water stalls as a fountain: it is not reported as trapped", () => {
+    // Entraining lighter water makes it denser than its surroundings from the start: no level where it turns light.
+    const col: AmbientColumn = {
+      ...uniformColumn(100),
+      depths: [0, 100],
+      densities: [1015, 1030],
+      salinities: [30, 38],
+    };
+    const r = nearFieldIntegral(jet60({ angle: 90, velocity: 1, reducedGravity: 0, froude: Infinity }), col);
+    expect(codes(r), "stalled, not trapped").toContain("jet-momentum-exhausted");
+    expect(codes(r), "stalled, not trapped").not.toContain("jet-trapped");
+  });
+
   it("|F| above 1000 counts as near-neutral, F = 1000 does not (common practice, no source)", () => {
     const r = nearFieldIntegral(jet60({ froude: 1001 }), uniformColumn(20));
     expect(find(r, "integral-near-neutral")?.message, "g′ to 3 digits, F whole").toBe(
@@ -279,6 +299,41 @@ describe("warnings for a discharge that is not a dense jet", () => {
     const r2 = nearFieldIntegral(lightFast, uniformColumn(20), { maxLength: 20 });
     expect(codes(r2), "F = −2000: near-neutral, not positively buoyant").toContain("integral-near-neutral");
     expect(codes(r2), "one buoyancy warning only").not.toContain("integral-positively-buoyant");
+  });
+});
+
+describe("a run without impact reports no impact-derived number", () => {
+  it("nulls every impact and near-field quantity, the range and the entrained flow", () => {
+    const r = nearFieldIntegral(jet60({ angle: 90 }), uniformColumn(50));
+    for (const f of [
+      "impactDistance",
+      "impactDilution",
+      "nearFieldDistance",
+      "nearFieldDilution",
+      "impactDilutionFluxAveraged",
+      "nearFieldDilutionFluxAveraged",
+      "entrainedFlow",
+      "dilutionRange",
+      "returnDistance",
+    ] as const)
+      expect(r[f], `${f} null`).toBeNull();
+    expect(r.maxRiseHeight!, "the rise is still given").toBeGreaterThan(0);
+    expect(r.fluxAveragingFactor, "the factor is still stated").toBeCloseTo(2.44 / 1.44, 14);
+  });
+
+  it("accepts a one-point ambient profile (uniform water)", () => {
+    const one: AmbientColumn = {
+      ...uniformColumn(20),
+      depths: [0],
+      densities: [1025],
+      salinities: [35],
+      temperatures: [20],
+    };
+    const r = nearFieldIntegral(jet60(), one);
+    expect(r.available, "runs").toBe(true);
+    expect(r.impactDilution, "same as the two-point uniform column").toBe(
+      nearFieldIntegral(jet60(), uniformColumn(20)).impactDilution,
+    );
   });
 });
 

@@ -188,6 +188,31 @@ describe("a port at 45°: Lai & Lee (2012) alone, carried to the near-field end"
   });
 });
 
+describe("a port at 30°: a rise but no dilution (Lai & Lee 2012 state S_t and S_i only for 38°–60°)", () => {
+  const r = nearFieldLengthScale(makeJet({ angle: 30, d: 0.2, F: 30 }), col);
+  it("gives the interpolated rise and nothing that needs a dilution", () => {
+    expect(r.available, "available").toBe(true);
+    expect(r.maxRiseHeight, "(0.44 + (15/45)·1.64)·dF").toBeCloseTo((0.44 + (15 / 45) * 1.64) * 6, 10);
+    for (const f of [
+      "impactDilution",
+      "nearFieldDilution",
+      "maxRiseDilution",
+      "impactDilutionFluxAveraged",
+      "nearFieldDilutionFluxAveraged",
+      "entrainedFlow",
+      "dilutionRange",
+      "nearFieldDistance",
+    ] as const)
+      expect(r[f], `${f} null`).toBeNull();
+    expect(r.notes, "no carry without an impact dilution").toEqual([
+      "Lai & Lee (2012) rise interpolated linearly between 15° and 60° (the paper's values at 30°, 38°, 45° and 52° are not held).",
+      "Lai & Lee (2012) state S_t and S_i only for 38°–60°; none given at 30.0°.",
+      NO_RANGE,
+      FLUX_NOTE,
+    ]);
+  });
+});
+
 describe("a raised port at 60°: two datasets, the less favourable value of each", () => {
   const jet = makeJet({ angle: 60, d: 0.2, F: 30, portHeight: 1.5 });
   const r = nearFieldLengthScale(jet, col);
@@ -235,6 +260,11 @@ describe("a raised port at 60°: two datasets, the less favourable value of each
     expect(
       low.notes!.some((n) => n.startsWith("Impact distance")),
       "no descent note",
+    ).toBe(false);
+    const onBed = nearFieldLengthScale(makeJet({ angle: 60, portHeight: 0 }), col);
+    expect(
+      onBed.notes!.some((n) => n.startsWith("Impact distance")),
+      "port on the bed: nothing added, no note",
     ).toBe(false);
   });
 });

@@ -395,6 +395,10 @@ describe("event functions of the integral model", () => {
     const eps = profileAt(p.depths, p.epsilon, 15);
     expect(single(EV_NEUTRAL)[EV_NEUTRAL], "B/Q − ε").toBeCloseTo(0.04 - eps, 14);
     expect(single(EV_ENTRAINMENT_SWITCH)[EV_ENTRAINMENT_SWITCH], "switch").toBeCloseTo(entrainmentSwitch(y, p), 14);
+    const dy = new Float64Array(INTEGRAL_DIM);
+    integralJetRhs(0, y, dy, p);
+    expect(single(EV_MAX_RISE)[EV_MAX_RISE], "turning point of the upper edge").toBeCloseTo(upperEdgeSlope(y, dy), 14);
+    expect(single(EV_SURFACE_EDGE)[EV_SURFACE_EDGE], "upper edge below the surface").toBeCloseTo(18 - (3 + half), 14);
     const ret = single(EV_RETURN);
     expect(ret[EV_IMPACT], "other values untouched").toBe(123);
     const edge = single(EV_SEABED_EDGE);
@@ -455,6 +459,15 @@ describe("IntegralPathBuffer: recording and decimation of the centreline path", 
     expect(buf.edge[0], "z + vertical half-extent").toBeCloseTo(3 + verticalHalfExtent(y), 14);
     buf.reset();
     expect(buf.length, "reset empties it").toBe(0);
+  });
+
+  it("grows past its first 512 recorded states without losing any", () => {
+    const buf = new IntegralPathBuffer();
+    buf.q0 = 1;
+    for (let i = 0; i < 600; i++) buf.pushState(i, state({ x: i, z: -i, q: 4, m: [1, 0, 0], b: 0 }));
+    expect(buf.length, "all states").toBe(600);
+    for (const i of [511, 512, 513, 599]) expect([buf.s[i], buf.x[i], buf.z[i]], `state ${i}`).toEqual([i, i, -i]);
+    expect(buf.dilution[599], "4 × λ²/(1 + λ²)").toBeCloseTo(4 * CENTRELINE_PROFILE_FACTOR, 14);
   });
 
   it("grows past its first 512 rows without losing any", () => {
