@@ -134,6 +134,39 @@ describe("edge cases of the impact and the near-field carry", () => {
   });
 });
 
+describe("a solve started while another is running (from a sink)", () => {
+  it("gets its own integrator, and neither solve's event numbers change", () => {
+    const outerJet = denseJet({ azimuth: 90 });
+    const innerJet = denseJet({ angle: 45, azimuth: 0 });
+    const alone = nearFieldIntegral(outerJet, uniformColumn(20));
+    const innerAlone = nearFieldIntegral(innerJet, uniformColumn(30));
+    let inner: NearFieldMethodResult | null = null;
+    const outer = nearFieldIntegral(outerJet, uniformColumn(20), {
+      sink: {
+        begin() {},
+        end() {},
+        sample(s) {
+          if (!inner && s > 5) inner = nearFieldIntegral(innerJet, uniformColumn(30), { includePath: false });
+        },
+      },
+    });
+    const numbers = (r: NearFieldMethodResult) => [
+      r.maxRiseHeight,
+      r.returnDistance,
+      r.impactDistance,
+      r.impactDilution,
+      r.nearFieldDilution,
+    ];
+    expect(inner, "the nested solve ran").not.toBeNull();
+    expect(numbers(inner!), "nested = alone").toEqual(numbers(innerAlone));
+    expect(numbers(outer), "outer = alone").toEqual(numbers(alone));
+    expect(
+      outer.events!.map((e) => [e.kind, e.s]),
+      "outer events = alone",
+    ).toEqual(alone.events!.map((e) => [e.kind, e.s]));
+  });
+});
+
 describe("the bias against Lai & Lee's (2012) impact dilution, 1.06·F over 38°–60°", () => {
   const points = integralBiasByAngle(nearFieldIntegral);
 

@@ -183,6 +183,17 @@ describe("warnings of a run that does not end on the seabed", () => {
     expect(ev.z, "stalled near the fountain top").toBeCloseTo(r.maxRiseHeight!, 6);
   });
 
+  it("a neutral discharge moving with the current at its speed has no velocity excess: passive from the first step", () => {
+    // Velocity relative to the ambient is what mixes (physics); here it is zero, so the model stops at once.
+    const withCurrent = jet60({ angle: 0, azimuth: 30, velocity: 0.3, reducedGravity: 0, froude: Infinity });
+    const current = uniformColumn(20, { currentSpeed: 0.3, currentDirection: 30 });
+    const r = nearFieldIntegral(withCurrent, current, { maxLength: 100 });
+    expect(codes(r), "passive at once").toContain("jet-momentum-exhausted");
+    expect(event(r, "passive-layer").s, "after the first step").toBeLessThan(1);
+    const across = nearFieldIntegral(withCurrent, { ...current, currentDirection: 120 }, { maxLength: 100 });
+    expect(codes(across), "across the current it has an excess and goes on").not.toContain("jet-momentum-exhausted");
+  });
+
   it("trapped rising discharge: the depth of the trap level in the message, and the trap event", () => {
     const col: AmbientColumn = {
       ...uniformColumn(100),
