@@ -285,6 +285,7 @@ describe("very low F: dilutions floored at 1, and a measured near-field value be
       "no carry note",
     ).toBe(false);
     expect(r.notes![0], "origins").toContain(`nearFieldDilution from ${ROB}; maxRiseDilution from ${LAI}.`);
+    expect(r.notes![0], "a tie keeps the first dataset listed (Lai & Lee)").toContain(`impactDilution from ${LAI};`);
     expect(
       r.warnings.map((w) => w.code),
       "both datasets' Froude checks",

@@ -342,6 +342,11 @@ describe("entrainmentSwitch(): shear minus forced entrainment (Lee & Cheung 1990
     expect(entrainmentSwitch(y, fast), "forced dominates").toBeLessThan(0);
   });
 
+  it("stays a number at zero momentum flux (a fountain top)", () => {
+    const stalled = state({ z: 3, q: 0.5, m: [0, 0, 0], b: 0.02 });
+    expect(Number.isNaN(entrainmentSwitch(stalled, p)), "no 0/0").toBe(false);
+  });
+
   it("has no shear entrainment when the jet is slower than the current along its axis", () => {
     const fast = integralParamsFrom(jet, { ...uniformColumn(20), currentSpeed: 3, currentDirection: 90 });
     const y = state({ z: 3, q: 1, m: [0.5, 0, 0.01], b: 0.02 });

@@ -174,6 +174,10 @@ describe("port Reynolds number U·d/ν below 10⁴ (Abdel-Rahman et al. 1996)", 
     const at = (u: number) => ({ ...base, velocity: u });
     expect(codes(at(u10k * 0.999), 30), "Re = 9990").toContain("port-reynolds-low");
     expect(codes(at(u10k * 1.001), 30), "Re = 10 010").not.toContain("port-reynolds-low");
+    // Exactly 10⁴ is not below 10⁴: find the velocity whose Re rounds to exactly 10⁴.
+    const exact = [0, -1, 1, -2, 2].map((k) => u10k * (1 + k * 2 ** -52)).find((u) => (u * d) / nu === 1e4);
+    expect(exact, "a velocity with Re = 10⁴ exactly").toBeDefined();
+    expect(codes(at(exact!), 30), "Re = 10⁴").not.toContain("port-reynolds-low");
   });
 
   it("says nothing when Re cannot be computed", () => {
