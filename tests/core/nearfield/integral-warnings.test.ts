@@ -166,6 +166,25 @@ describe("warnings of a run that does not end on the seabed", () => {
     expect(codes(r), "length limit, then no impact").toEqual(["integral-length-limit", "integral-no-impact"]);
   });
 
+  it("step underflow: the arc length where the step collapsed, and the port as the highest point reached", () => {
+    // Zero tolerances cannot be met by any step: the step size collapses at the port.
+    const r = nearFieldIntegral(jet60(), uniformColumn(20), { relTol: 0, absTol: 0 });
+    expect(find(r, "integral-step-underflow"), "underflow warning").toEqual({
+      code: "integral-step-underflow",
+      severity: "warning",
+      message:
+        "The integrator's step size collapsed at s = 0.000 m (a singular point, e.g. a fountain top); results beyond it are not available.",
+      stage: "integral",
+    });
+    expect(codes(r), "underflow, then no impact").toEqual(["integral-step-underflow", "integral-no-impact"]);
+    expect(
+      r.events!.map((e) => e.kind),
+      "only the maximum rise (at the port)",
+    ).toEqual(["max-rise"]);
+    expect(r.maxRiseHeight, "upper edge of the port: (d/2)·cos 60°").toBeCloseTo(0.05, 12);
+    expect(r.notes!.join("\n"), "stop reason").toMatch(/stop: step-underflow\./);
+  });
+
   it("stalled vertical fountain: momentum exhausted, with the arc length where it stalled", () => {
     const r = nearFieldIntegral(jet60({ angle: 90 }), uniformColumn(50));
     const ev = event(r, "passive-layer")!;
