@@ -12,7 +12,7 @@ import type { AmbientColumn, JetSource, NearFieldMethodResult } from "../../../c
 const jet60 = (over: Partial<JetSource> = {}): JetSource => ({ ...denseJet({ azimuth: 90 }), ...over });
 const codes = (r: NearFieldMethodResult) => r.warnings.map((w) => w.code);
 const find = (r: NearFieldMethodResult, code: string) => r.warnings.find((w) => w.code === code);
-const event = (r: NearFieldMethodResult, kind: string) => r.events!.find((e) => e.kind === kind);
+const event = (r: NearFieldMethodResult, kind: string) => r.events!.find((e) => e.kind === kind)!;
 
 describe("inputs the integral model cannot run with", () => {
   function expectInvalid(r: NearFieldMethodResult, message: string, parameter: string, value: number) {
