@@ -317,6 +317,26 @@ describe("warnings for a discharge that is not a dense jet", () => {
     expect(codes(r), "stalled, not trapped").not.toContain("jet-trapped");
   });
 
+  it("zero g′ in uniform water runs to the length limit like any pure jet (no integration failure)", () => {
+    const r = nearFieldIntegral(jet60({ reducedGravity: 0, froude: Infinity, angle: 0 }), uniformColumn(20), {
+      maxLength: 50,
+    });
+    expect(codes(r), "length limit, near-neutral, no impact, angle outside 15°–75°").toEqual([
+      "integral-length-limit",
+      "integral-near-neutral",
+      "integral-no-impact",
+      "integral-angle-outside-validation",
+    ]);
+  });
+
+  it("a discharge at the ambient salinity dilutes exactly like any other: salt is a passive tracer", () => {
+    // Conservation of the salinity-excess flux does not feed back on the flow (physics).
+    const a = nearFieldIntegral(jet60({ salinity: 35 }), uniformColumn(20));
+    const b = nearFieldIntegral(jet60({ salinity: 68 }), uniformColumn(20));
+    expect(codes(a), "clean run").toEqual([]);
+    expect(Math.abs(a.impactDilution! / b.impactDilution! - 1), "same impact dilution").toBeLessThan(1e-6);
+  });
+
   it("|F| above 1000 counts as near-neutral, F = 1000 does not (common practice, no source)", () => {
     const r = nearFieldIntegral(jet60({ froude: 1001 }), uniformColumn(20));
     expect(find(r, "integral-near-neutral")?.message, "g′ to 3 digits, F whole").toBe(
