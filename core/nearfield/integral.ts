@@ -220,7 +220,8 @@ export function nearFieldIntegral(
   const { stepper, atol, log, shared } = takeSolverSet();
   fillAbsoluteTolerance(atol, y0, absTol, d, u0);
   const events = integralEventsFor(jet.reducedGravity, params);
-  const path = sharedPath;
+  // A nested solve (started from a sink callback) gets its own path buffer, so it cannot overwrite the outer path.
+  const path = shared ? sharedPath : new IntegralPathBuffer();
   path.reset();
   path.q0 = q0;
   const monitor = stepMonitor(jet, params, path, sink);

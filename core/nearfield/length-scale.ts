@@ -98,7 +98,7 @@ function toDimensional(e: EvaluatedDataset, jet: JetSource): Dimensional {
   // point at the discharge angle (mirror image of the ascent). Published dense-jet trajectories descend at
   // least as steeply as they rise (FROM MEMORY), so the added distance portHeight/tanθ is an upper bound.
   const drop = Math.max(0, jet.portHeight);
-  const slope = Math.tan((c.angle * Math.PI) / 180);
+  const slope = Math.tan((jet.angle * Math.PI) / 180);
   const impactDistance = returnDistance === null ? null : returnDistance + drop / slope;
   return {
     source: e.dataset.source,

@@ -135,7 +135,7 @@ describe("edge cases of the impact and the near-field carry", () => {
 });
 
 describe("a solve started while another is running (from a sink)", () => {
-  it("gets its own integrator, and neither solve's event numbers change", () => {
+  it("gets its own integrator and path, and neither solve's numbers nor the outer path change", () => {
     const outerJet = denseJet({ azimuth: 90 });
     const innerJet = denseJet({ angle: 45, azimuth: 0 });
     const alone = nearFieldIntegral(outerJet, uniformColumn(20));
@@ -164,6 +164,8 @@ describe("a solve started while another is running (from a sink)", () => {
       outer.events!.map((e) => [e.kind, e.s]),
       "outer events = alone",
     ).toEqual(alone.events!.map((e) => [e.kind, e.s]));
+    // The outer path is the outer jet's own: the nested solve wrote into its own buffer.
+    expect(outer.path, "outer path = alone").toEqual(alone.path);
   });
 });
 

@@ -147,6 +147,20 @@ describe("which discharges the laws describe", () => {
       FLUX_NOTE,
     ]);
   });
+
+  it("continues the descent of a raised 61.5° port at the port's own angle, as its note says", () => {
+    const jet = makeJet({ angle: 61.5, d: 0.2, F: 30, portHeight: 1.5 });
+    const r = nearFieldLengthScale(jet, col);
+    // Return distance 2.4 dF (Roberts et al. 1997) plus the straight descent h/tanθ at θ = 61.5°.
+    expect(r.impactDistance, "2.4 dF + 1.5/tan 61.5°").toBeCloseTo(
+      2.4 * 6 + 1.5 / Math.tan((61.5 * Math.PI) / 180),
+      10,
+    );
+    expect(
+      r.notes.some((n) => n.startsWith("Impact distance = return distance + portHeight/tan(61.5°)")),
+      "the note names 61.5°",
+    ).toBe(true);
+  });
 });
 
 describe("a port at 45°: Lai & Lee (2012) alone, carried to the near-field end", () => {
