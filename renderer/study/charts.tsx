@@ -3,7 +3,17 @@
  * margin for a two-input sweep with the limit contour (margin = 1) marked, and a Monte Carlo histogram
  * with P5/P50/P95. No physics here: the charts draw numbers the core computed.
  */
-import { contours, extent, geoPath, interpolateRdYlGn, line, scaleLinear, scaleLog, scaleSequential } from "d3";
+import {
+  contours,
+  extent,
+  geoPath,
+  interpolateRdYlGn,
+  line,
+  scaleLinear,
+  scaleLog,
+  scaleSequential,
+  type ContourMultiPolygon,
+} from "d3";
 import type { SweepRow } from "../../core/study/sweep";
 import { formatNumber } from "../../core/units";
 import { logTicks } from "../../core/report/figures";
@@ -195,21 +205,7 @@ export function SweepHeatmap({ rows, axes }: { rows: readonly SweepRow[]; axes: 
   // Symmetric in log(margin) so that margin = 1 is the scale's middle colour.
   const span = Math.max(Math.abs(lo), Math.abs(hi));
   const colour = scaleSequential(interpolateRdYlGn).domain([-span, span]);
-  // The limit contour: margin = 1 (edge dilution equals the required dilution). d3-contour closes every
-  // ring along the grid's border, which would draw the plot's frame as if it were the limit; the grid is
-  // therefore padded by one replicated cell on each side and the padding is clipped away.
-  const px = nx + 2;
-  const py = ny + 2;
-  const field = new Array<number>(px * py);
-  for (let j = 0; j < py; j++) {
-    for (let i = 0; i < px; i++) {
-      const v = grid[Math.min(ny - 1, Math.max(0, j - 1)) * nx + Math.min(nx - 1, Math.max(0, i - 1))]!;
-      field[j * px + i] = Number.isFinite(v) ? v : 0; // a point that could not run counts as failing
-    }
-  }
-  const hasPass = field.some((v) => v >= 1);
-  const hasFail = field.some((v) => v < 1);
-  const limit = nx > 1 && ny > 1 && hasPass && hasFail ? contours().size([px, py]).thresholds([1])(field)[0] : null;
+  const limit = limitContour(grid, nx, ny);
   // d3-contour places value (i, j) at (i + 0.5, j + 0.5) in grid units: scaling by the cell size maps
   // the contour onto the cell centres of the heat map (after removing the one-cell padding).
   const project = geoPath(null);
@@ -217,26 +213,13 @@ export function SweepHeatmap({ rows, axes }: { rows: readonly SweepRow[]; axes: 
   return (
     <div className="chart study-chart" ref={ref} data-role="sweep-heatmap">
       <svg width={w} height={h} role="img" aria-label={`Margin over ${a.label} and ${b.label}, limit contour marked`}>
-        <defs>
-          <clipPath id={clipId}>
-            {/* In the heat map's own (translated, y-up) coordinates. */}
-            <rect x={0} y={0} width={w - M.left - M.right - legendW} height={h - M.top - M.bottom} />
-          </clipPath>
-          <pattern
-            id={`${clipId}-hatch`}
-            width="6"
-            height="6"
-            patternUnits="userSpaceOnUse"
-            patternTransform="rotate(45)"
-          >
-            <line x1="0" y1="0" x2="0" y2="6" stroke="#1d2833" strokeOpacity="0.35" strokeWidth="1.2" />
-          </pattern>
-          <linearGradient id={`${clipId}-legend`} x1="0" y1="1" x2="0" y2="0">
-            {[0, 0.25, 0.5, 0.75, 1].map((f) => (
-              <stop key={f} offset={f} stopColor={colour(-span + 2 * span * f)} />
-            ))}
-          </linearGradient>
-        </defs>
+        <HeatmapDefs
+          clipId={clipId}
+          width={w - M.left - M.right - legendW}
+          height={h - M.top - M.bottom}
+          colour={colour}
+          span={span}
+        />
         <g transform={`translate(${M.left},${h - M.bottom}) scale(1,-1)`} clipPath={`url(#${clipId})`}>
           {grid.map((v, k) => (
             <rect
@@ -274,27 +257,7 @@ export function SweepHeatmap({ rows, axes }: { rows: readonly SweepRow[]; axes: 
             </g>
           ) : null}
         </g>
-        {xv.map((t, i) =>
-          i % Math.ceil(nx / Math.max(2, Math.floor((nx * cw) / 64))) === 0 ? (
-            <text key={`x${i}`} className="tick" x={M.left + (i + 0.5) * cw} y={h - M.bottom + 14} textAnchor="middle">
-              {formatNumber(t)}
-            </text>
-          ) : null,
-        )}
-        {yv.map((t, j) =>
-          j % Math.ceil(ny / Math.max(2, Math.floor((ny * ch) / 20))) === 0 ? (
-            <text
-              key={`y${j}`}
-              className="tick"
-              x={M.left - 6}
-              y={h - M.bottom - (j + 0.5) * ch}
-              dy="0.32em"
-              textAnchor="end"
-            >
-              {formatNumber(t)}
-            </text>
-          ) : null,
-        )}
+        <HeatmapTicks xv={xv} yv={yv} nx={nx} ny={ny} cw={cw} ch={ch} h={h} />
         <XLabel w={w - legendW} h={h} text={a.label} />
         <YLabel h={h} text={b.label} />
         <HeatLegend
@@ -307,6 +270,92 @@ export function SweepHeatmap({ rows, axes }: { rows: readonly SweepRow[]; axes: 
         />
       </svg>
     </div>
+  );
+}
+
+/**
+ * The limit contour: margin = 1 (edge dilution equals the required dilution), or null when the grid does not
+ * cross it. d3-contour closes every ring along the grid's border, which would draw the plot's frame as if it
+ * were the limit; the grid is therefore padded by one replicated cell on each side and the padding is
+ * clipped away.
+ */
+function limitContour(grid: readonly number[], nx: number, ny: number): ContourMultiPolygon | null {
+  const px = nx + 2;
+  const py = ny + 2;
+  const field = new Array<number>(px * py);
+  for (let j = 0; j < py; j++) {
+    for (let i = 0; i < px; i++) {
+      const v = grid[Math.min(ny - 1, Math.max(0, j - 1)) * nx + Math.min(nx - 1, Math.max(0, i - 1))]!;
+      field[j * px + i] = Number.isFinite(v) ? v : 0; // a point that could not run counts as failing
+    }
+  }
+  const hasPass = field.some((v) => v >= 1);
+  const hasFail = field.some((v) => v < 1);
+  return nx > 1 && ny > 1 && hasPass && hasFail ? (contours().size([px, py]).thresholds([1])(field)[0] ?? null) : null;
+}
+
+/** The heat map's clip rectangle, the hatch that marks points not meeting the limit and the legend's gradient. */
+function HeatmapDefs(props: {
+  clipId: string;
+  width: number;
+  height: number;
+  colour: (v: number) => string;
+  span: number;
+}) {
+  const { clipId, width, height, colour, span } = props;
+  return (
+    <defs>
+      <clipPath id={clipId}>
+        {/* In the heat map's own (translated, y-up) coordinates. */}
+        <rect x={0} y={0} width={width} height={height} />
+      </clipPath>
+      <pattern id={`${clipId}-hatch`} width="6" height="6" patternUnits="userSpaceOnUse" patternTransform="rotate(45)">
+        <line x1="0" y1="0" x2="0" y2="6" stroke="#1d2833" strokeOpacity="0.35" strokeWidth="1.2" />
+      </pattern>
+      <linearGradient id={`${clipId}-legend`} x1="0" y1="1" x2="0" y2="0">
+        {[0, 0.25, 0.5, 0.75, 1].map((f) => (
+          <stop key={f} offset={f} stopColor={colour(-span + 2 * span * f)} />
+        ))}
+      </linearGradient>
+    </defs>
+  );
+}
+
+/** Tick labels at cell centres, thinned so they do not overprint. */
+function HeatmapTicks(props: {
+  xv: readonly number[];
+  yv: readonly number[];
+  nx: number;
+  ny: number;
+  cw: number;
+  ch: number;
+  h: number;
+}) {
+  const { xv, yv, nx, ny, cw, ch, h } = props;
+  return (
+    <>
+      {xv.map((t, i) =>
+        i % Math.ceil(nx / Math.max(2, Math.floor((nx * cw) / 64))) === 0 ? (
+          <text key={`x${i}`} className="tick" x={M.left + (i + 0.5) * cw} y={h - M.bottom + 14} textAnchor="middle">
+            {formatNumber(t)}
+          </text>
+        ) : null,
+      )}
+      {yv.map((t, j) =>
+        j % Math.ceil(ny / Math.max(2, Math.floor((ny * ch) / 20))) === 0 ? (
+          <text
+            key={`y${j}`}
+            className="tick"
+            x={M.left - 6}
+            y={h - M.bottom - (j + 0.5) * ch}
+            dy="0.32em"
+            textAnchor="end"
+          >
+            {formatNumber(t)}
+          </text>
+        ) : null,
+      )}
+    </>
   );
 }
 
