@@ -1,8 +1,9 @@
 /**
- * Size limits of core/ (see DEVELOPERS.md, "Size limits"): no source file over 400 lines and no function
- * over 120 lines, so each file and function can be read at once. Functions are found with the TypeScript
- * parser (declarations, methods, arrow functions and function expressions); a function's length counts
- * every line from its first to its last, comments included. Checked as a test so the limits stay true.
+ * Size limits (see DEVELOPERS.md, "Size limits"): no source file of core/ over 400 lines, and no function
+ * of core/, renderer/ or electron/ over 120 lines, so each file and function can be read at once.
+ * Functions are found with the TypeScript parser (declarations, methods, arrow functions and function
+ * expressions); a function's length counts every line from its first to its last, comments included.
+ * Checked as a test so the limits stay true.
  *
  * `LONG_FUNCTIONS_TO_SPLIT` lists the functions still over the limit, with their length today: none may
  * grow, a new one may not join, and an entry that has been split must leave the list (the test fails
@@ -17,7 +18,7 @@ const root = join(__dirname, "../..");
 export const MAX_FILE_LINES = 400;
 export const MAX_FUNCTION_LINES = 120;
 
-/** Functions of core/ still over MAX_FUNCTION_LINES ("file#name" → lines today); split them, then remove them here. */
+/** Functions still over MAX_FUNCTION_LINES ("file#name" → lines today); split them, then remove them here. */
 const LONG_FUNCTIONS_TO_SPLIT: Readonly<Record<string, number>> = {
   "core/cli/bench/minimalSolver.ts#minimalImpactSolve": 141,
   "core/cli/commands/design.ts#run": 183,
@@ -32,7 +33,14 @@ const LONG_FUNCTIONS_TO_SPLIT: Readonly<Record<string, number>> = {
   "core/ode/adaptive.ts#integrateAdaptive": 145,
   "core/report/figures.ts#sideViewSvg": 138,
   "core/report/inputs.ts#inputsHtml": 281,
+  "renderer/App.tsx#App": 689,
+  "renderer/study/VariantsSection.tsx#VariantEditor": 129,
+  "renderer/study/VariantsSection.tsx#VariantsSection": 194,
+  "renderer/view3d/plumeScene.ts#buildPlumeScene": 357,
 };
+
+/** Folders whose functions the function limit covers; the file limit covers core/ only. */
+const FUNCTION_LIMIT_DIRS = ["core", "renderer", "electron"];
 
 function sourceFiles(dir: string): string[] {
   const out: string[] = [];
@@ -76,11 +84,12 @@ function functionName(node: ts.Node, sf: ts.SourceFile, line: number): string {
   return `(anonymous, line ${line + 1})`;
 }
 
-describe("size limits of core/", () => {
-  const files = sourceFiles(join(root, "core"));
+describe("size limits of core/, renderer/ and electron/", () => {
+  const coreFiles = sourceFiles(join(root, "core"));
+  const files = FUNCTION_LIMIT_DIRS.flatMap((dir) => sourceFiles(join(root, dir)));
 
-  it(`has no source file over ${MAX_FILE_LINES} lines`, () => {
-    const long = files
+  it(`has no source file in core/ over ${MAX_FILE_LINES} lines`, () => {
+    const long = coreFiles
       .map((f) => ({ file: relative(root, f), lines: lineCount(readFileSync(f, "utf8")) }))
       .filter((f) => f.lines > MAX_FILE_LINES);
     expect(long).toEqual([]);
