@@ -18,7 +18,8 @@ import { flatRowsCsv } from "../../core/report/csv";
 import { inputsHash } from "../../core/scenario/hash";
 import { exportFile } from "../platform/host";
 import { csvWithCaution } from "../exports";
-import { SweepHeatmap, SweepLineChart } from "./charts";
+import { SweepLineChart } from "./charts";
+import { SweepHeatmap } from "./SweepHeatmap";
 import { PATHS, axisDisplay, patchAt, pathTitle, type RunPoints } from "./sections";
 
 interface AxisForm {
