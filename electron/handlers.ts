@@ -8,7 +8,7 @@
  * (open) or a Save dialog (save), so a compromised page cannot read or clobber arbitrary files.
  */
 import { dirname, extname, isAbsolute, join, resolve } from "node:path";
-import { isReplyTo, type FileFilter, type HostRequest, type HostResponse } from "./contract";
+import { isReplyTo, type FileFilter, type HostRequest, type HostRequestOf, type HostResponse } from "./contract";
 import {
   MAX_SCENARIO_BYTES,
   type AutosaveStore,
@@ -112,11 +112,154 @@ export function ensureExtension(path: string, filters: readonly FileFilter[]): s
   return `${path}.${first[0]}`;
 }
 
-export function createHostHandlers(deps: HostHandlerDeps): HostHandlers {
-  const platform = deps.platform ?? process.platform;
+/** What the per-request handlers share: the dependencies, the granted paths and the last folder used. */
+interface HandlerSession {
+  readonly deps: HostHandlerDeps;
+  grantPath(path: string): void;
+  isGranted(path: string): Promise<boolean>;
+  rememberRecent(path: string): Promise<void>;
+  /** Folder the next dialog starts in. */
+  startDir(): string;
+  setLastDir(dir: string): void;
+  openPath(path: string): Promise<HostResponse>;
+  writeTo(path: string, data: string | Uint8Array): Promise<HostResponse>;
+}
+
+function firstLine(error: unknown): string {
+  return error instanceof Error ? error.message.split("\n")[0] : String(error);
+}
+
+async function openScenario(s: HandlerSession): Promise<HostResponse> {
+  const path = await s.deps.showOpenDialog({
+    title: "Open scenario",
+    defaultPath: s.startDir(),
+    filters: SCENARIO_FILTERS,
+  });
+  return path === null ? { kind: "cancelled" } : s.openPath(path);
+}
+
+async function openGrantedPath(s: HandlerSession, request: HostRequestOf<"open-path">): Promise<HostResponse> {
+  if (!(await s.isGranted(request.path))) {
+    const message = "That file was not chosen in an Open dialog or from the recent files.";
+    return { kind: "error", message };
+  }
+  const response = await s.openPath(request.path);
+  if (response.kind === "error") {
+    // A recent entry that no longer opens is dropped from the list.
+    try {
+      s.deps.onRecentChanged?.(await s.deps.recent.list());
+    } catch {
+      // Listing is best effort here.
+    }
+  }
+  return response;
+}
+
+async function saveFile(s: HandlerSession, request: HostRequestOf<"save-file">): Promise<HostResponse> {
+  const known = request.path !== null && isAbsolute(request.path) && (await s.isGranted(request.path));
+  let target = known && request.path !== null ? resolve(request.path) : null;
+  if (target === null) {
+    // Unknown or bare-name paths only suggest a name; the user picks the folder.
+    const bare = request.path !== null && !isAbsolute(request.path);
+    const name = bare && request.path !== null ? request.path : request.suggestedName;
+    const filters = request.filters.length > 0 ? request.filters : SCENARIO_FILTERS;
+    const chosen = await s.deps.showSaveDialog({
+      title: "Save scenario",
+      defaultPath: join(s.startDir(), name),
+      filters,
+    });
+    if (chosen === null) return { kind: "cancelled" };
+    target = ensureExtension(resolve(chosen), filters);
+  }
+  const response = await s.writeTo(target, request.text);
+  if (response.kind === "saved") {
+    s.grantPath(target);
+    await s.rememberRecent(target);
+  }
+  return response;
+}
+
+async function exportFile(s: HandlerSession, request: HostRequestOf<"export-file">): Promise<HostResponse> {
+  const chosen = await s.deps.showSaveDialog({
+    title: "Export",
+    defaultPath: join(s.startDir(), request.suggestedName),
+    filters: request.filters,
+  });
+  if (chosen === null) return { kind: "cancelled" };
+  const target = ensureExtension(resolve(chosen), request.filters);
+  const response = await s.writeTo(target, request.text);
+  if (response.kind === "saved") s.setLastDir(dirname(target));
+  return response;
+}
+
+async function printPdf(s: HandlerSession, request: HostRequestOf<"print-pdf">): Promise<HostResponse> {
+  const pdfFilters: FileFilter[] = [{ name: "PDF document", extensions: ["pdf"] }];
+  const suggested = request.suggestedName;
+  const name = extname(suggested).toLowerCase() === ".pdf" ? suggested : `${suggested}.pdf`;
+  const chosen = await s.deps.showSaveDialog({
+    title: "Print to PDF",
+    defaultPath: join(s.startDir(), name),
+    filters: pdfFilters,
+  });
+  if (chosen === null) return { kind: "cancelled" };
+  const target = ensureExtension(resolve(chosen), pdfFilters);
+  let pdf: Uint8Array;
+  try {
+    pdf = await s.deps.printToPdf();
+  } catch (error) {
+    return { kind: "error", message: `Could not print to PDF: ${firstLine(error)}` };
+  }
+  const response = await s.writeTo(target, pdf);
+  if (response.kind === "saved") s.setLastDir(dirname(target));
+  return response;
+}
+
+async function autosaveWrite(s: HandlerSession, request: HostRequestOf<"autosave-write">): Promise<HostResponse> {
+  try {
+    await s.deps.autosave.write(request.text);
+    return { kind: "ok" };
+  } catch (error) {
+    return { kind: "error", message: `Autosave failed: ${firstLine(error)}` };
+  }
+}
+
+async function dispatch(s: HandlerSession, request: HostRequest): Promise<HostResponse> {
+  const { deps } = s;
+  switch (request.kind) {
+    case "open-scenario":
+      return openScenario(s);
+    case "open-path":
+      return openGrantedPath(s, request);
+    case "save-file":
+      return saveFile(s, request);
+    case "export-file":
+      return exportFile(s, request);
+    case "print-pdf":
+      return printPdf(s, request);
+    case "recent-files":
+      return { kind: "recent", paths: await deps.recent.list() };
+    case "autosave-write":
+      return autosaveWrite(s, request);
+    case "autosave-read": {
+      const entry = await deps.autosave.read();
+      return { kind: "autosave", text: entry?.text ?? null, savedAt: entry?.savedAt ?? null };
+    }
+    case "autosave-clear":
+      await deps.autosave.clear();
+      return { kind: "ok" };
+    case "set-document-state":
+      deps.setDocumentState({ dirty: request.dirty, title: request.title });
+      return { kind: "ok" };
+  }
+}
+
+function createSession(
+  deps: HostHandlerDeps,
+  platform: NodeJS.Platform,
+  log: (message: string) => void,
+): HandlerSession {
   const granted: string[] = [];
   let lastDir: string | null = null;
-  const log = deps.log ?? (() => undefined);
 
   const grantPath = (path: string) => {
     const full = resolve(path);
@@ -140,8 +283,6 @@ export function createHostHandlers(deps: HostHandlerDeps): HostHandlers {
     }
   }
 
-  const startDir = () => lastDir ?? deps.documentsDir;
-
   async function openPath(path: string): Promise<HostResponse> {
     const read = await readJsonTextFile(path, { maxBytes: MAX_SCENARIO_BYTES, label: "scenario" });
     if (!read.ok) return { kind: "error", message: read.message };
@@ -159,116 +300,28 @@ export function createHostHandlers(deps: HostHandlerDeps): HostHandlers {
     }
   }
 
-  async function dispatch(request: HostRequest): Promise<HostResponse> {
-    switch (request.kind) {
-      case "open-scenario": {
-        const path = await deps.showOpenDialog({
-          title: "Open scenario",
-          defaultPath: startDir(),
-          filters: SCENARIO_FILTERS,
-        });
-        return path === null ? { kind: "cancelled" } : openPath(path);
-      }
-      case "open-path": {
-        if (!(await isGranted(request.path))) {
-          const message = "That file was not chosen in an Open dialog or from the recent files.";
-          return { kind: "error", message };
-        }
-        const response = await openPath(request.path);
-        if (response.kind === "error") {
-          // A recent entry that no longer opens is dropped from the list.
-          try {
-            deps.onRecentChanged?.(await deps.recent.list());
-          } catch {
-            // Listing is best effort here.
-          }
-        }
-        return response;
-      }
-      case "save-file": {
-        const known = request.path !== null && isAbsolute(request.path) && (await isGranted(request.path));
-        let target = known && request.path !== null ? resolve(request.path) : null;
-        if (target === null) {
-          // Unknown or bare-name paths only suggest a name; the user picks the folder.
-          const bare = request.path !== null && !isAbsolute(request.path);
-          const name = bare && request.path !== null ? request.path : request.suggestedName;
-          const filters = request.filters.length > 0 ? request.filters : SCENARIO_FILTERS;
-          const chosen = await deps.showSaveDialog({
-            title: "Save scenario",
-            defaultPath: join(startDir(), name),
-            filters,
-          });
-          if (chosen === null) return { kind: "cancelled" };
-          target = ensureExtension(resolve(chosen), filters);
-        }
-        const response = await writeTo(target, request.text);
-        if (response.kind === "saved") {
-          grantPath(target);
-          await rememberRecent(target);
-        }
-        return response;
-      }
-      case "export-file": {
-        const chosen = await deps.showSaveDialog({
-          title: "Export",
-          defaultPath: join(startDir(), request.suggestedName),
-          filters: request.filters,
-        });
-        if (chosen === null) return { kind: "cancelled" };
-        const target = ensureExtension(resolve(chosen), request.filters);
-        const response = await writeTo(target, request.text);
-        if (response.kind === "saved") lastDir = dirname(target);
-        return response;
-      }
-      case "print-pdf": {
-        const pdfFilters: FileFilter[] = [{ name: "PDF document", extensions: ["pdf"] }];
-        const suggested = request.suggestedName;
-        const name = extname(suggested).toLowerCase() === ".pdf" ? suggested : `${suggested}.pdf`;
-        const chosen = await deps.showSaveDialog({
-          title: "Print to PDF",
-          defaultPath: join(startDir(), name),
-          filters: pdfFilters,
-        });
-        if (chosen === null) return { kind: "cancelled" };
-        const target = ensureExtension(resolve(chosen), pdfFilters);
-        let pdf: Uint8Array;
-        try {
-          pdf = await deps.printToPdf();
-        } catch (error) {
-          const detail = error instanceof Error ? error.message.split("\n")[0] : String(error);
-          return { kind: "error", message: `Could not print to PDF: ${detail}` };
-        }
-        const response = await writeTo(target, pdf);
-        if (response.kind === "saved") lastDir = dirname(target);
-        return response;
-      }
-      case "recent-files":
-        return { kind: "recent", paths: await deps.recent.list() };
-      case "autosave-write": {
-        try {
-          await deps.autosave.write(request.text);
-          return { kind: "ok" };
-        } catch (error) {
-          const detail = error instanceof Error ? error.message.split("\n")[0] : String(error);
-          return { kind: "error", message: `Autosave failed: ${detail}` };
-        }
-      }
-      case "autosave-read": {
-        const entry = await deps.autosave.read();
-        return { kind: "autosave", text: entry?.text ?? null, savedAt: entry?.savedAt ?? null };
-      }
-      case "autosave-clear":
-        await deps.autosave.clear();
-        return { kind: "ok" };
-      case "set-document-state":
-        deps.setDocumentState({ dirty: request.dirty, title: request.title });
-        return { kind: "ok" };
-    }
-  }
-
   return {
+    deps,
     grantPath,
     isGranted,
+    rememberRecent,
+    startDir: () => lastDir ?? deps.documentsDir,
+    setLastDir: (dir) => {
+      lastDir = dir;
+    },
+    openPath,
+    writeTo,
+  };
+}
+
+export function createHostHandlers(deps: HostHandlerDeps): HostHandlers {
+  const platform = deps.platform ?? process.platform;
+  const log = deps.log ?? (() => undefined);
+  const session = createSession(deps, platform, log);
+
+  return {
+    grantPath: session.grantPath,
+    isGranted: session.isGranted,
     async handle(sender, payload) {
       if (!isTrustedSender(sender, deps.trustedRenderer())) {
         log(`rejected IPC from untrusted sender ${sender.frameUrl.slice(0, 200)}`);
@@ -282,10 +335,9 @@ export function createHostHandlers(deps: HostHandlerDeps): HostHandlers {
       }
       let response: HostResponse;
       try {
-        response = await dispatch(parsed.request);
+        response = await dispatch(session, parsed.request);
       } catch (error) {
-        const detail = error instanceof Error ? error.message.split("\n")[0] : String(error);
-        const message = `The app could not complete “${parsed.request.kind}”: ${detail}`;
+        const message = `The app could not complete “${parsed.request.kind}”: ${firstLine(error)}`;
         response = { kind: "error", message };
       }
       const replyKind: string = response.kind;

@@ -3,11 +3,17 @@
  * increase) and the mixing-zone edge marked, plus each near-field method's impact and end-of-near-field
  * points.
  */
-import { line, scaleLinear, scaleLog } from "d3";
+import { line, scaleLinear, scaleLog, type ScaleLinear, type ScaleLogarithmic } from "d3";
 import type { BrinefieldResult } from "../../core/result/contract";
 import { formatNumber, siToDisplay, type UnitSystem } from "../../core/units";
 import { useSize } from "../ui/useSize";
-import { distanceSeries, impactDilutionMarkers, salinityIncreaseLimit, type DistanceSeriesPoint } from "./chartData";
+import {
+  distanceSeries,
+  impactDilutionMarkers,
+  salinityIncreaseLimit,
+  type DistanceSeriesPoint,
+  type MethodMarker,
+} from "./chartData";
 
 const MARGIN = { top: 26, right: 14, bottom: 34, left: 52 };
 
@@ -106,20 +112,7 @@ export function DistanceChart({ result, unitSystem, quantity }: Props) {
             mixing-zone edge {formatNumber(edge, 3)} {unit}
           </text>
         </g>
-        {markers.map((m, i) => (
-          <g
-            key={i}
-            className={`marker method-${m.method}`}
-            transform={`translate(${x(m.distance)},${y(Math.max(y.domain()[0], m.value))})`}
-          >
-            {m.method === "integral" ? (
-              <circle r={4} />
-            ) : (
-              <rect x={-4} y={-4} width={8} height={8} transform="rotate(45)" />
-            )}
-            <title>{`${m.method}: ${m.label}, dilution ${formatNumber(m.value, 3)} at ${formatNumber(m.distance, 3)} ${unit}`}</title>
-          </g>
-        ))}
+        <ImpactMarkers markers={markers} x={x} y={y} unit={unit} />
         <text className="axis-label" x={(x.range()[0] + x.range()[1]) / 2} y={height - 4} textAnchor="middle">
           distance from diffuser ({unit})
         </text>
@@ -131,23 +124,64 @@ export function DistanceChart({ result, unitSystem, quantity }: Props) {
           {label}
         </text>
       </svg>
-      <div className="chart-key">
-        {stages.map((s) => (
-          <span key={s}>
-            <i className={`key-line stage-${s}`} /> {s.replace(/-/g, " ")}
-          </span>
-        ))}
-        {markers.some((m) => m.method === "integral") ? (
-          <span>
-            <i className="dot integral" /> integral
-          </span>
-        ) : null}
-        {markers.some((m) => m.method !== "integral") ? (
-          <span>
-            <i className="diamond" /> length-scale
-          </span>
-        ) : null}
-      </div>
+      <DistanceChartKey stages={stages} markers={markers} />
+    </div>
+  );
+}
+
+/** Each near-field method's impact and end-of-near-field points: a dot (integral) or a diamond (length-scale). */
+function ImpactMarkers(props: {
+  readonly markers: readonly MethodMarker[];
+  readonly x: ScaleLinear<number, number>;
+  readonly y: ScaleLogarithmic<number, number>;
+  readonly unit: string;
+}) {
+  const { markers, x, y, unit } = props;
+  return (
+    <>
+      {markers.map((m, i) => (
+        <g
+          key={i}
+          className={`marker method-${m.method}`}
+          transform={`translate(${x(m.distance)},${y(Math.max(y.domain()[0], m.value))})`}
+        >
+          {m.method === "integral" ? (
+            <circle r={4} />
+          ) : (
+            <rect x={-4} y={-4} width={8} height={8} transform="rotate(45)" />
+          )}
+          <title>{`${m.method}: ${m.label}, dilution ${formatNumber(m.value, 3)} at ${formatNumber(m.distance, 3)} ${unit}`}</title>
+        </g>
+      ))}
+    </>
+  );
+}
+
+/** The key under the chart: one entry per drawn stage, then the marker shapes shown. */
+function DistanceChartKey({
+  stages,
+  markers,
+}: {
+  readonly stages: readonly string[];
+  readonly markers: readonly MethodMarker[];
+}) {
+  return (
+    <div className="chart-key">
+      {stages.map((s) => (
+        <span key={s}>
+          <i className={`key-line stage-${s}`} /> {s.replace(/-/g, " ")}
+        </span>
+      ))}
+      {markers.some((m) => m.method === "integral") ? (
+        <span>
+          <i className="dot integral" /> integral
+        </span>
+      ) : null}
+      {markers.some((m) => m.method !== "integral") ? (
+        <span>
+          <i className="diamond" /> length-scale
+        </span>
+      ) : null}
     </div>
   );
 }

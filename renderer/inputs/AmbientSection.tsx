@@ -11,20 +11,7 @@ export function AmbientSection() {
   const editor = useEditor();
   const profile = getAtPath(editor.file, "ambient.profile");
   const isProfile = Array.isArray(profile);
-  const [pasteOpen, setPasteOpen] = useState(false);
-  const [pasteText, setPasteText] = useState("");
-  const [pasteErrors, setPasteErrors] = useState<string[]>([]);
-  const fileInput = useRef<HTMLInputElement | null>(null);
-
-  const importText = (text: string) => {
-    const parsed = parseProfileText(text);
-    setPasteErrors(parsed.errors);
-    if (parsed.errors.length === 0) {
-      editor.perform(replaceProfile, { rows: parsed.rows });
-      setPasteOpen(false);
-      setPasteText("");
-    }
-  };
+  const importer = useProfileImport();
 
   return (
     <section className="input-section" aria-labelledby="sec-ambient">
@@ -87,109 +74,8 @@ export function AmbientSection() {
       {isProfile ? (
         <div className="sub-table">
           <h3>Profile (depth below surface)</h3>
-          <table className="profile-table">
-            <thead>
-              <tr>
-                <th scope="col">#</th>
-                <th scope="col">Depth</th>
-                <th scope="col">Salinity</th>
-                <th scope="col">Temperature</th>
-                <th />
-              </tr>
-            </thead>
-            <tbody>
-              {profile.map((_, i) => (
-                <tr key={i}>
-                  <td className="muted">{i + 1}</td>
-                  <td>
-                    <QuantityField path={`ambient.profile.${i}.depth`} label={`Depth, row ${i + 1}`} kind="length" />
-                  </td>
-                  <td>
-                    <QuantityField
-                      path={`ambient.profile.${i}.salinity`}
-                      label={`Salinity, row ${i + 1}`}
-                      kind="salinity"
-                    />
-                  </td>
-                  <td>
-                    <QuantityField
-                      path={`ambient.profile.${i}.temperature`}
-                      label={`Temperature, row ${i + 1}`}
-                      kind="temperature"
-                    />
-                  </td>
-                  <td>
-                    <button
-                      type="button"
-                      className="icon-button"
-                      aria-label={`Remove row ${i + 1}`}
-                      onClick={() => editor.perform(removeArrayItem, { path: "ambient.profile", index: i })}
-                    >
-                      ×
-                    </button>
-                  </td>
-                </tr>
-              ))}
-            </tbody>
-          </table>
-          <div className="button-row">
-            <button type="button" className="link-button" onClick={() => editor.perform(addProfileRow, undefined)}>
-              + Add row
-            </button>
-            <button type="button" className="link-button" onClick={() => setPasteOpen((o) => !o)}>
-              Paste from spreadsheet…
-            </button>
-            <button type="button" className="link-button" onClick={() => fileInput.current?.click()}>
-              Load CSV…
-            </button>
-            <input
-              ref={fileInput}
-              type="file"
-              accept=".csv,.tsv,.txt,text/csv"
-              hidden
-              data-role="profile-csv-input"
-              onChange={(event) => {
-                const file = event.target.files?.[0];
-                if (file) {
-                  readDroppedFile(file).then(
-                    (opened) => importText(opened.text),
-                    (error: unknown) =>
-                      setPasteErrors([`${file.name}: ${error instanceof Error ? error.message : String(error)}`]),
-                  );
-                }
-                event.target.value = "";
-              }}
-            />
-          </div>
-          {pasteOpen ? (
-            <div className="paste-box">
-              <label htmlFor="profile-paste">
-                Paste rows: depth, salinity, temperature (header optional; units in brackets, e.g. "depth (ft)")
-              </label>
-              <textarea
-                id="profile-paste"
-                rows={5}
-                value={pasteText}
-                onChange={(e) => setPasteText(e.target.value)}
-                spellCheck={false}
-              />
-              <div className="button-row">
-                <button type="button" onClick={() => importText(pasteText)}>
-                  Use these rows
-                </button>
-                <button type="button" className="link-button" onClick={() => setPasteOpen(false)}>
-                  Cancel
-                </button>
-              </div>
-            </div>
-          ) : null}
-          {pasteErrors.length ? (
-            <div className="section-issues" role="alert">
-              {pasteErrors.map((e, i) => (
-                <div key={i}>{e}</div>
-              ))}
-            </div>
-          ) : null}
+          <ProfileTable rows={profile.length} />
+          <ProfileImport importer={importer} />
         </div>
       ) : null}
       <SectionIssues
@@ -208,5 +94,142 @@ export function AmbientSection() {
         ]}
       />
     </section>
+  );
+}
+
+/** State of the profile import (paste box and CSV file), kept while the water column switches mode. */
+function useProfileImport() {
+  const editor = useEditor();
+  const [pasteOpen, setPasteOpen] = useState(false);
+  const [pasteText, setPasteText] = useState("");
+  const [pasteErrors, setPasteErrors] = useState<string[]>([]);
+  const fileInput = useRef<HTMLInputElement | null>(null);
+
+  const importText = (text: string) => {
+    const parsed = parseProfileText(text);
+    setPasteErrors(parsed.errors);
+    if (parsed.errors.length === 0) {
+      editor.perform(replaceProfile, { rows: parsed.rows });
+      setPasteOpen(false);
+      setPasteText("");
+    }
+  };
+  return { pasteOpen, setPasteOpen, pasteText, setPasteText, pasteErrors, setPasteErrors, fileInput, importText };
+}
+
+/** One editable row per profile point: depth, salinity, temperature and a remove button. */
+function ProfileTable({ rows }: { readonly rows: number }) {
+  const editor = useEditor();
+  return (
+    <table className="profile-table">
+      <thead>
+        <tr>
+          <th scope="col">#</th>
+          <th scope="col">Depth</th>
+          <th scope="col">Salinity</th>
+          <th scope="col">Temperature</th>
+          <th />
+        </tr>
+      </thead>
+      <tbody>
+        {Array.from({ length: rows }, (_, i) => (
+          <tr key={i}>
+            <td className="muted">{i + 1}</td>
+            <td>
+              <QuantityField path={`ambient.profile.${i}.depth`} label={`Depth, row ${i + 1}`} kind="length" />
+            </td>
+            <td>
+              <QuantityField path={`ambient.profile.${i}.salinity`} label={`Salinity, row ${i + 1}`} kind="salinity" />
+            </td>
+            <td>
+              <QuantityField
+                path={`ambient.profile.${i}.temperature`}
+                label={`Temperature, row ${i + 1}`}
+                kind="temperature"
+              />
+            </td>
+            <td>
+              <button
+                type="button"
+                className="icon-button"
+                aria-label={`Remove row ${i + 1}`}
+                onClick={() => editor.perform(removeArrayItem, { path: "ambient.profile", index: i })}
+              >
+                ×
+              </button>
+            </td>
+          </tr>
+        ))}
+      </tbody>
+    </table>
+  );
+}
+
+/** Add a row, paste rows from a spreadsheet or load a CSV file; errors from either are listed. */
+function ProfileImport({ importer }: { readonly importer: ReturnType<typeof useProfileImport> }) {
+  const editor = useEditor();
+  const { pasteOpen, setPasteOpen, pasteText, setPasteText, pasteErrors, setPasteErrors, fileInput, importText } =
+    importer;
+  return (
+    <>
+      <div className="button-row">
+        <button type="button" className="link-button" onClick={() => editor.perform(addProfileRow, undefined)}>
+          + Add row
+        </button>
+        <button type="button" className="link-button" onClick={() => setPasteOpen((o) => !o)}>
+          Paste from spreadsheet…
+        </button>
+        <button type="button" className="link-button" onClick={() => fileInput.current?.click()}>
+          Load CSV…
+        </button>
+        <input
+          ref={fileInput}
+          type="file"
+          accept=".csv,.tsv,.txt,text/csv"
+          hidden
+          data-role="profile-csv-input"
+          onChange={(event) => {
+            const file = event.target.files?.[0];
+            if (file) {
+              readDroppedFile(file).then(
+                (opened) => importText(opened.text),
+                (error: unknown) =>
+                  setPasteErrors([`${file.name}: ${error instanceof Error ? error.message : String(error)}`]),
+              );
+            }
+            event.target.value = "";
+          }}
+        />
+      </div>
+      {pasteOpen ? (
+        <div className="paste-box">
+          <label htmlFor="profile-paste">
+            Paste rows: depth, salinity, temperature (header optional; units in brackets, e.g. "depth (ft)")
+          </label>
+          <textarea
+            id="profile-paste"
+            rows={5}
+            value={pasteText}
+            onChange={(e) => setPasteText(e.target.value)}
+            spellCheck={false}
+          />
+          <div className="button-row">
+            <button type="button" onClick={() => importText(pasteText)}>
+              Use these rows
+            </button>
+            <button type="button" className="link-button" onClick={() => setPasteOpen(false)}>
+              Cancel
+            </button>
+          </div>
+        </div>
+      ) : null}
+      {pasteErrors.length ? (
+        <div className="section-issues" role="alert">
+          {pasteErrors.map((e, i) => (
+            <div key={i}>{e}</div>
+          ))}
+        </div>
+      ) : null}
+    </>
   );
 }

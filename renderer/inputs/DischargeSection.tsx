@@ -68,88 +68,8 @@ export function DischargeSection() {
           placeholder={plant ? "feed temperature" : undefined}
         />
       </div>
-      {plant ? (
-        <div className="sub-table">
-          <h3>Blending streams</h3>
-          {Array.isArray(blending) && blending.length ? (
-            blending.map((_, i) => (
-              <div className="row-fields" key={i}>
-                <TextField path={`plant.blending.${i}.name`} label="Name" />
-                <QuantityField path={`plant.blending.${i}.flow`} label="Flow" kind="flow" />
-                <QuantityField path={`plant.blending.${i}.salinity`} label="Salinity" kind="salinity" />
-                <QuantityField path={`plant.blending.${i}.temperature`} label="Temperature" kind="temperature" />
-                <button
-                  type="button"
-                  className="icon-button"
-                  aria-label={`Remove blending stream ${i + 1}`}
-                  onClick={() => editor.perform(removeArrayItem, { path: "plant.blending", index: i })}
-                >
-                  ×
-                </button>
-              </div>
-            ))
-          ) : (
-            <p className="muted">None: brine is discharged undiluted.</p>
-          )}
-          <button
-            type="button"
-            className="link-button"
-            onClick={() =>
-              editor.perform(appendArrayItem, {
-                path: "plant.blending",
-                item: { name: "cooling water", flow: 0, salinity: 38, temperature: 25 },
-              })
-            }
-          >
-            + Add blending stream
-          </button>
-        </div>
-      ) : null}
-      <div className="sub-table">
-        <h3>Other constituents</h3>
-        {Array.isArray(constituents) && constituents.length ? (
-          constituents.map((c, i) => (
-            <div className="row-fields" key={i}>
-              <TextField path={`discharge.constituents.${i}.name`} label="Name" />
-              <QuantityField
-                path={`discharge.constituents.${i}.concentration`}
-                label="In discharge"
-                kind="ratio"
-                unitText={constituentUnit(c)}
-              />
-              <TextField path={`discharge.constituents.${i}.unit`} label="Unit" placeholder="mg/L" />
-              <QuantityField
-                path={`discharge.constituents.${i}.background`}
-                label="Background"
-                kind="ratio"
-                unitText={constituentUnit(c)}
-              />
-              <button
-                type="button"
-                className="icon-button"
-                aria-label={`Remove constituent ${i + 1}`}
-                onClick={() => editor.perform(removeArrayItem, { path: "discharge.constituents", index: i })}
-              >
-                ×
-              </button>
-            </div>
-          ))
-        ) : (
-          <p className="muted">Salinity and temperature only.</p>
-        )}
-        <button
-          type="button"
-          className="link-button"
-          onClick={() =>
-            editor.perform(appendArrayItem, {
-              path: "discharge.constituents",
-              item: { name: "antiscalant", concentration: 5, unit: "mg/L", background: 0 },
-            })
-          }
-        >
-          + Add constituent
-        </button>
-      </div>
+      {plant ? <BlendingStreams blending={blending} /> : null}
+      <Constituents constituents={constituents} />
       <SectionIssues path="discharge" shownPaths={["discharge.flow", "discharge.salinity", "discharge.temperature"]} />
       {plant ? (
         <SectionIssues
@@ -164,5 +84,99 @@ export function DischargeSection() {
         />
       ) : null}
     </section>
+  );
+}
+
+/** The plant's blending streams, each with a remove button, and a button to add one. */
+function BlendingStreams({ blending }: { readonly blending: unknown }) {
+  const editor = useEditor();
+  return (
+    <div className="sub-table">
+      <h3>Blending streams</h3>
+      {Array.isArray(blending) && blending.length ? (
+        blending.map((_, i) => (
+          <div className="row-fields" key={i}>
+            <TextField path={`plant.blending.${i}.name`} label="Name" />
+            <QuantityField path={`plant.blending.${i}.flow`} label="Flow" kind="flow" />
+            <QuantityField path={`plant.blending.${i}.salinity`} label="Salinity" kind="salinity" />
+            <QuantityField path={`plant.blending.${i}.temperature`} label="Temperature" kind="temperature" />
+            <button
+              type="button"
+              className="icon-button"
+              aria-label={`Remove blending stream ${i + 1}`}
+              onClick={() => editor.perform(removeArrayItem, { path: "plant.blending", index: i })}
+            >
+              ×
+            </button>
+          </div>
+        ))
+      ) : (
+        <p className="muted">None: brine is discharged undiluted.</p>
+      )}
+      <button
+        type="button"
+        className="link-button"
+        onClick={() =>
+          editor.perform(appendArrayItem, {
+            path: "plant.blending",
+            item: { name: "cooling water", flow: 0, salinity: 38, temperature: 25 },
+          })
+        }
+      >
+        + Add blending stream
+      </button>
+    </div>
+  );
+}
+
+/** Constituents besides salinity and temperature, in the units the user names. */
+function Constituents({ constituents }: { readonly constituents: unknown }) {
+  const editor = useEditor();
+  return (
+    <div className="sub-table">
+      <h3>Other constituents</h3>
+      {Array.isArray(constituents) && constituents.length ? (
+        constituents.map((c, i) => (
+          <div className="row-fields" key={i}>
+            <TextField path={`discharge.constituents.${i}.name`} label="Name" />
+            <QuantityField
+              path={`discharge.constituents.${i}.concentration`}
+              label="In discharge"
+              kind="ratio"
+              unitText={constituentUnit(c)}
+            />
+            <TextField path={`discharge.constituents.${i}.unit`} label="Unit" placeholder="mg/L" />
+            <QuantityField
+              path={`discharge.constituents.${i}.background`}
+              label="Background"
+              kind="ratio"
+              unitText={constituentUnit(c)}
+            />
+            <button
+              type="button"
+              className="icon-button"
+              aria-label={`Remove constituent ${i + 1}`}
+              onClick={() => editor.perform(removeArrayItem, { path: "discharge.constituents", index: i })}
+            >
+              ×
+            </button>
+          </div>
+        ))
+      ) : (
+        <p className="muted">Salinity and temperature only.</p>
+      )}
+      <button
+        type="button"
+        className="link-button"
+        onClick={() =>
+          editor.perform(appendArrayItem, {
+            path: "discharge.constituents",
+            item: { name: "antiscalant", concentration: 5, unit: "mg/L", background: 0 },
+          })
+        }
+      >
+        + Add constituent
+      </button>
+    </div>
   );
 }

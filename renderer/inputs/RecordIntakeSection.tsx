@@ -15,6 +15,66 @@ export function RecordIntakeSection() {
   const record = getAtPath(editor.file, "ambient.record") as { time?: unknown[] } | undefined;
   const steps = Array.isArray(record?.time) ? record.time.length : 0;
   const intake = getAtPath(editor.file, "intake");
+  const importer = useRecordImport();
+
+  return (
+    <section className="input-section" aria-labelledby="sec-record">
+      <header>
+        <h2 id="sec-record">Record over time and intake</h2>
+      </header>
+      <p className="hint" data-role="record-steps">
+        {steps > 0
+          ? `Ambient record: ${steps} steps (they replace the ambient cases; each step is screened as a quasi-steady state).`
+          : "No ambient record: the stated conditions and the ambient cases are screened."}
+      </p>
+      <RecordImport importer={importer} steps={steps} />
+      <div className="field-grid">
+        <QuantityField
+          path="mixingZone.timeCompliance.percentOfTime"
+          label="Limit met for at least"
+          kind="ratio"
+          unitText="% of the time"
+          placeholder="every step"
+          hint="with a record"
+        />
+        <QuantityField
+          path="intake.distance"
+          label="Intake distance"
+          kind="length"
+          hint="from the diffuser centre"
+          placeholder="no intake"
+        />
+        <QuantityField path="intake.bearing" label="Intake bearing" kind="angle" hint="clockwise from north" />
+        <QuantityField path="intake.heightAboveSeabed" label="Intake height" kind="length" hint="above the seabed" />
+        <QuantityField
+          path="intake.maxSalinityIncrease"
+          label="Intake limit"
+          kind="salinity"
+          hint="max salinity increase (optional)"
+          placeholder="none"
+        />
+      </div>
+      {intake !== undefined ? (
+        <button
+          type="button"
+          className="link-button"
+          onClick={() => editor.perform(setField, { path: "intake", value: undefined })}
+          data-command="intake-remove"
+        >
+          Remove intake
+        </button>
+      ) : null}
+      <SectionIssues
+        path="intake"
+        shownPaths={["intake.distance", "intake.bearing", "intake.heightAboveSeabed", "intake.maxSalinityIncrease"]}
+      />
+    </section>
+  );
+}
+
+/** State of the record import (paste box and CSV file); a good import replaces `ambient.record` whole. */
+function useRecordImport() {
+  const editor = useEditor();
   const [pasteOpen, setPasteOpen] = useState(false);
   const [pasteText, setPasteText] = useState("");
   const [errors, setErrors] = useState<string[]>([]);
@@ -33,17 +93,16 @@ export function RecordIntakeSection() {
     setPasteOpen(false);
     setPasteText("");
   };
+  return { pasteOpen, setPasteOpen, pasteText, setPasteText, errors, setErrors, fileInput, importText };
+}
 
+/** Load, paste or remove the ambient record; import errors are listed under the buttons. */
+function RecordImport(props: { readonly importer: ReturnType<typeof useRecordImport>; readonly steps: number }) {
+  const editor = useEditor();
+  const { steps } = props;
+  const { pasteOpen, setPasteOpen, pasteText, setPasteText, errors, setErrors, fileInput, importText } = props.importer;
   return (
-    <section className="input-section" aria-labelledby="sec-record">
-      <header>
-        <h2 id="sec-record">Record over time and intake</h2>
-      </header>
-      <p className="hint" data-role="record-steps">
-        {steps > 0
-          ? `Ambient record: ${steps} steps (they replace the ambient cases; each step is screened as a quasi-steady state).`
-          : "No ambient record: the stated conditions and the ambient cases are screened."}
-      </p>
+    <>
       <div className="button-row">
         <button
           type="button"
@@ -125,46 +184,6 @@ export function RecordIntakeSection() {
           ))}
         </div>
       ) : null}
-      <div className="field-grid">
-        <QuantityField
-          path="mixingZone.timeCompliance.percentOfTime"
-          label="Limit met for at least"
-          kind="ratio"
-          unitText="% of the time"
-          placeholder="every step"
-          hint="with a record"
-        />
-        <QuantityField
-          path="intake.distance"
-          label="Intake distance"
-          kind="length"
-          hint="from the diffuser centre"
-          placeholder="no intake"
-        />
-        <QuantityField path="intake.bearing" label="Intake bearing" kind="angle" hint="clockwise from north" />
-        <QuantityField path="intake.heightAboveSeabed" label="Intake height" kind="length" hint="above the seabed" />
-        <QuantityField
-          path="intake.maxSalinityIncrease"
-          label="Intake limit"
-          kind="salinity"
-          hint="max salinity increase (optional)"
-          placeholder="none"
-        />
-      </div>
-      {intake !== undefined ? (
-        <button
-          type="button"
-          className="link-button"
-          onClick={() => editor.perform(setField, { path: "intake", value: undefined })}
-          data-command="intake-remove"
-        >
-          Remove intake
-        </button>
-      ) : null}
-      <SectionIssues
-        path="intake"
-        shownPaths={["intake.distance", "intake.bearing", "intake.heightAboveSeabed", "intake.maxSalinityIncrease"]}
-      />
-    </section>
+    </>
   );
 }

@@ -86,46 +86,9 @@ export function CompareView({
         </p>
       ) : null}
       <h4>Governing case per variant</h4>
-      <ul className="compare-governing" data-role="compare-governing">
-        {overall.map((r) => (
-          <li key={String(r.variant)}>
-            <b>{String(r.variant)}</b>:{" "}
-            <span className={`gov-verdict ${VERDICT_CLASS[String(r.verdict)] ?? ""}`}>{String(r.verdict)}</span>
-            {r.verdict === "refused" ? (
-              <> — {String(r.error ?? "breaks a scenario rule")}</>
-            ) : (
-              <>
-                , margin {cellText(r.margin)}; governed by <b>{String(r.governingCase ?? "—")}</b> through the chain{" "}
-                <b data-role="governing-chain">{String(r.chain ?? "—")}</b>
-              </>
-            )}
-          </li>
-        ))}
-      </ul>
+      <GoverningList overall={overall} />
       <MarginChart rows={rows} />
-      <details className="compare-columns">
-        <summary>
-          Columns ({columns.length} of {all.length} shown)
-        </summary>
-        <div className="column-choices">
-          {all.map((c) => (
-            <label key={c}>
-              <input
-                type="checkbox"
-                checked={shown.has(c)}
-                data-column={c}
-                onChange={(e) => {
-                  const next = new Set(shown);
-                  if (e.target.checked) next.add(c);
-                  else next.delete(c);
-                  setShown(next);
-                }}
-              />
-              {columnLabel(c, lengthUnit)}
-            </label>
-          ))}
-        </div>
-      </details>
+      <ColumnChoices all={all} shown={shown} setShown={setShown} lengthUnit={lengthUnit} />
       <div className="study-table-wrap">
         <table data-role="study-variants-table">
           <caption className="visually-hidden">
@@ -187,6 +150,64 @@ export function CompareView({
         SI.
       </p>
     </div>
+  );
+}
+
+/** Each variant's overall verdict, margin, governing case and the method chain to the edge. */
+function GoverningList({ overall }: { overall: readonly FlatRow[] }) {
+  return (
+    <ul className="compare-governing" data-role="compare-governing">
+      {overall.map((r) => (
+        <li key={String(r.variant)}>
+          <b>{String(r.variant)}</b>:{" "}
+          <span className={`gov-verdict ${VERDICT_CLASS[String(r.verdict)] ?? ""}`}>{String(r.verdict)}</span>
+          {r.verdict === "refused" ? (
+            <> — {String(r.error ?? "breaks a scenario rule")}</>
+          ) : (
+            <>
+              , margin {cellText(r.margin)}; governed by <b>{String(r.governingCase ?? "—")}</b> through the chain{" "}
+              <b data-role="governing-chain">{String(r.chain ?? "—")}</b>
+            </>
+          )}
+        </li>
+      ))}
+    </ul>
+  );
+}
+
+/** The comparison table's column picker: every column with a checkbox, the key ones ticked at first. */
+function ColumnChoices(props: {
+  all: readonly string[];
+  shown: ReadonlySet<string>;
+  setShown: (next: ReadonlySet<string>) => void;
+  lengthUnit: string;
+}) {
+  const { all, shown, setShown, lengthUnit } = props;
+  const count = all.filter((c) => shown.has(c)).length;
+  return (
+    <details className="compare-columns">
+      <summary>
+        Columns ({count} of {all.length} shown)
+      </summary>
+      <div className="column-choices">
+        {all.map((c) => (
+          <label key={c}>
+            <input
+              type="checkbox"
+              checked={shown.has(c)}
+              data-column={c}
+              onChange={(e) => {
+                const next = new Set(shown);
+                if (e.target.checked) next.add(c);
+                else next.delete(c);
+                setShown(next);
+              }}
+            />
+            {columnLabel(c, lengthUnit)}
+          </label>
+        ))}
+      </div>
+    </details>
   );
 }
 

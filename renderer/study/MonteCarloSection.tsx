@@ -91,45 +91,7 @@ export function MonteCarloSection({ scenario, busy, runJob, poolSize }: MonteCar
             <b>{headlineSentence(w, w.requiredDilution.p50)}</b> {verdictCountsSentence(w, out.summary.runs)}
           </p>
           <MonteCarloHistogram bins={out.bins} worst={w} />
-          <table data-role="monte-carlo-table">
-            <caption className="visually-hidden">Dilution at the mixing-zone edge per ambient case (×)</caption>
-            <thead>
-              <tr>
-                {[
-                  "ambient case",
-                  "edge dilution P5 (×)",
-                  "P50 (×)",
-                  "P95 (×)",
-                  "margin P5",
-                  "chance not meeting limit",
-                  "meets",
-                  "exceeds",
-                  "outside scope",
-                  "refused",
-                ].map((h) => (
-                  <th key={h} className={h === "ambient case" ? "text" : ""} scope="col">
-                    {h}
-                  </th>
-                ))}
-              </tr>
-            </thead>
-            <tbody>
-              {[...out.summary.cases, w].map((c) => (
-                <tr key={c.name} className={c === w ? "worst" : ""}>
-                  <td className="text">{c === w ? "overall (per-run worst case)" : c.name}</td>
-                  <td>{formatNumber(c.edgeDilution.p5)}</td>
-                  <td>{formatNumber(c.edgeDilution.p50)}</td>
-                  <td>{formatNumber(c.edgeDilution.p95)}</td>
-                  <td>{formatNumber(c.margin.p5)}</td>
-                  <td>{percentText(c.probabilityOfExceedance)}</td>
-                  <td>{c.verdicts.meets}</td>
-                  <td>{c.verdicts.exceeds}</td>
-                  <td>{c.verdicts["outside-scope"]}</td>
-                  <td>{c.verdicts.refused}</td>
-                </tr>
-              ))}
-            </tbody>
-          </table>
+          <MonteCarloTable summary={out.summary} />
           <details className="mc-explain" open data-role="monte-carlo-explanations">
             <summary>What these numbers mean</summary>
             <ul>
@@ -160,5 +122,51 @@ export function MonteCarloSection({ scenario, busy, runJob, poolSize }: MonteCar
         </div>
       ) : null}
     </section>
+  );
+}
+
+/** Edge dilution percentiles, margin, chance of not meeting the limit and verdict counts per ambient case. */
+function MonteCarloTable({ summary }: { summary: MonteCarloSummary }) {
+  const w = summary.worstCase;
+  return (
+    <table data-role="monte-carlo-table">
+      <caption className="visually-hidden">Dilution at the mixing-zone edge per ambient case (×)</caption>
+      <thead>
+        <tr>
+          {[
+            "ambient case",
+            "edge dilution P5 (×)",
+            "P50 (×)",
+            "P95 (×)",
+            "margin P5",
+            "chance not meeting limit",
+            "meets",
+            "exceeds",
+            "outside scope",
+            "refused",
+          ].map((h) => (
+            <th key={h} className={h === "ambient case" ? "text" : ""} scope="col">
+              {h}
+            </th>
+          ))}
+        </tr>
+      </thead>
+      <tbody>
+        {[...summary.cases, w].map((c) => (
+          <tr key={c.name} className={c === w ? "worst" : ""}>
+            <td className="text">{c === w ? "overall (per-run worst case)" : c.name}</td>
+            <td>{formatNumber(c.edgeDilution.p5)}</td>
+            <td>{formatNumber(c.edgeDilution.p50)}</td>
+            <td>{formatNumber(c.edgeDilution.p95)}</td>
+            <td>{formatNumber(c.margin.p5)}</td>
+            <td>{percentText(c.probabilityOfExceedance)}</td>
+            <td>{c.verdicts.meets}</td>
+            <td>{c.verdicts.exceeds}</td>
+            <td>{c.verdicts["outside-scope"]}</td>
+            <td>{c.verdicts.refused}</td>
+          </tr>
+        ))}
+      </tbody>
+    </table>
   );
 }

@@ -5,16 +5,13 @@
  * the core pipeline; this component only plans with core helpers, shows progress and draws results.
  * Each section lives in its own file; this one holds the worker pool, the progress bar and the tabs.
  */
-import { useCallback, useEffect, useState } from "react";
+import { useEffect, useState } from "react";
 import type { Scenario } from "../../core/scenario/types";
 import type { UnitSystem } from "../../core/units";
-import type { Overrides } from "../../core/study/overrides";
-import { splitRuns } from "../../core/study/montecarlo";
 import { describeCases, expandCases } from "../../core/cases";
-import type { PointEvaluation } from "../../core/study/evaluate-point";
-import type { StudyTask } from "../../core/study/worker-protocol";
-import { StudyCancelled, StudyWorkerPool, sharedStudyPool } from "./workerPool";
-import type { Replies } from "./sections";
+import { sharedStudyPool } from "./workerPool";
+import { useStudyJobs, type StudyJob } from "./use-study-jobs";
+import { useStudyScenario } from "./use-study-scenario";
 import { VariantsSection } from "./VariantsSection";
 import { SweepSection } from "./SweepSection";
 import { DesignSection } from "./DesignSection";
@@ -24,12 +21,6 @@ import type { StudyPart } from "../state/studyDocument";
 import "./study.css";
 
 type Section = "variants" | "sweep" | "design" | "monte-carlo";
-
-interface Job {
-  readonly label: string;
-  readonly total: number;
-  readonly done: number;
-}
 
 interface Props {
   /** False while the Study tab is hidden (the panel stays mounted so nothing is lost on a tab switch). */
@@ -67,71 +58,9 @@ export function StudyPanel({
   useEffect(() => {
     setOpened((o) => (o.has(section) ? o : new Set([...o, section])));
   }, [section]);
-  const [scenario, setScenario] = useState<Scenario | null>(null);
-  const [scenarioError, setScenarioError] = useState<string | null>(null);
-  const [job, setJob] = useState<Job | null>(null);
-  const [error, setError] = useState<string | null>(null);
+  const { scenario, scenarioError } = useStudyScenario(scenarioFile, active);
+  const { job, error, runJob, runPoints } = useStudyJobs(pool);
   const busy = job !== null;
-
-  // Read the document in a worker whenever it changes (debounced: typing should not queue work).
-  useEffect(() => {
-    if (!active) return; // read again when the tab is shown
-    let live = true;
-    let reader: StudyWorkerPool | null = null;
-    const t = setTimeout(() => {
-      reader = new StudyWorkerPool(1);
-      reader
-        .run([{ kind: "prepare", file: scenarioFile }])
-        .then(([r]) => {
-          if (!live || r?.kind !== "prepared") return;
-          setScenario(r.scenario);
-          setScenarioError(null);
-        })
-        .catch((e: unknown) => {
-          if (!live) return;
-          setScenario(null);
-          setScenarioError(e instanceof Error ? e.message : String(e));
-        })
-        .finally(() => reader?.dispose());
-    }, 300);
-    return () => {
-      live = false;
-      clearTimeout(t);
-      // A newer document or leaving the tab: stop reading the old one rather than let it run on.
-      reader?.dispose();
-    };
-  }, [scenarioFile, active]);
-
-  /** Runs tasks on the pool with a progress bar; returns null when cancelled or failed. */
-  const runJob = useCallback(
-    async <T,>(label: string, total: number, tasks: readonly StudyTask[], finish: (r: Replies) => T) => {
-      setError(null);
-      setJob({ label, total, done: 0 });
-      try {
-        const replies = await pool.run(tasks, (done) => setJob({ label, total, done }));
-        return finish(replies);
-      } catch (e) {
-        if (!(e instanceof StudyCancelled)) setError(e instanceof Error ? e.message : String(e));
-        return null;
-      } finally {
-        setJob(null);
-      }
-    },
-    [pool],
-  );
-
-  const runPoints = useCallback(
-    async (label: string, s: Scenario, list: readonly Overrides[]): Promise<PointEvaluation[] | null> => {
-      const chunks = splitRuns(list.length, pool.size * 4);
-      return runJob(
-        label,
-        list.length,
-        chunks.map((c) => ({ kind: "points" as const, scenario: s, overrides: list.slice(c.start, c.end) })),
-        (replies) => replies.flatMap((r) => (r.kind === "points" ? r.points : [])),
-      );
-    },
-    [pool, runJob],
-  );
 
   return (
     <div className="study-panel" data-role="study-panel">
@@ -156,34 +85,13 @@ export function StudyPanel({
           </button>
         ))}
       </div>
-      <div className="study-progress" aria-live="polite">
-        {job ? (
-          <>
-            <span>{job.label}</span>
-            <progress max={job.total} value={job.done} data-role="study-progress" />
-            <span>
-              {job.done} / {job.total}
-            </span>
-            <button type="button" onClick={() => pool.cancel()} data-command="study-cancel">
-              Cancel
-            </button>
-          </>
-        ) : scenarioError ? (
-          <span className="study-error">
-            The scenario has problems; fix them to run studies.{"\n"}
-            {scenarioError}
-          </span>
-        ) : scenario ? (
-          <span className="study-note">{describeCases(expandCases(scenario), scenario)}</span>
-        ) : (
-          <span className="study-note">Reading the scenario…</span>
-        )}
-        {error ? (
-          <span className="study-error" role="alert">
-            {error}
-          </span>
-        ) : null}
-      </div>
+      <StudyProgress
+        job={job}
+        error={error}
+        scenario={scenario}
+        scenarioError={scenarioError}
+        onCancel={() => pool.cancel()}
+      />
       <div hidden={section !== "variants"} role="tabpanel" aria-label="Variants">
         <VariantsSection
           active={active && section === "variants"}
@@ -219,6 +127,47 @@ export function StudyPanel({
         <div hidden={section !== "monte-carlo"} role="tabpanel" aria-label="Monte Carlo">
           <MonteCarloSection scenario={scenario} busy={busy} runJob={runJob} poolSize={pool.size} />
         </div>
+      ) : null}
+    </div>
+  );
+}
+
+/** The running job's progress with a Cancel button, or what the scenario's cases are (or why it cannot run). */
+function StudyProgress(props: {
+  job: StudyJob | null;
+  error: string | null;
+  scenario: Scenario | null;
+  scenarioError: string | null;
+  onCancel: () => void;
+}) {
+  const { job, error, scenario, scenarioError, onCancel } = props;
+  return (
+    <div className="study-progress" aria-live="polite">
+      {job ? (
+        <>
+          <span>{job.label}</span>
+          <progress max={job.total} value={job.done} data-role="study-progress" />
+          <span>
+            {job.done} / {job.total}
+          </span>
+          <button type="button" onClick={onCancel} data-command="study-cancel">
+            Cancel
+          </button>
+        </>
+      ) : scenarioError ? (
+        <span className="study-error">
+          The scenario has problems; fix them to run studies.{"\n"}
+          {scenarioError}
+        </span>
+      ) : scenario ? (
+        <span className="study-note">{describeCases(expandCases(scenario), scenario)}</span>
+      ) : (
+        <span className="study-note">Reading the scenario…</span>
+      )}
+      {error ? (
+        <span className="study-error" role="alert">
+          {error}
+        </span>
       ) : null}
     </div>
   );

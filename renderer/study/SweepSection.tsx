@@ -18,7 +18,8 @@ import { flatRowsCsv } from "../../core/report/csv";
 import { inputsHash } from "../../core/scenario/hash";
 import { exportFile } from "../platform/host";
 import { csvWithCaution } from "../exports";
-import { SweepHeatmap, SweepLineChart } from "./charts";
+import { SweepLineChart } from "./charts";
+import { SweepHeatmap } from "./SweepHeatmap";
 import { PATHS, axisDisplay, patchAt, pathTitle, type RunPoints } from "./sections";
 
 interface AxisForm {
@@ -79,7 +80,6 @@ export function SweepSection({
     if (points) setResult({ axes, rows: sweepRows(grid, points) });
   };
 
-  const crossings = result ? eosCrossings(result.axes, result.rows) : [];
   return (
     <section>
       <h3>Sweep</h3>
@@ -88,33 +88,13 @@ export function SweepSection({
         shows. One input draws a line chart; two draw a heat map of the margin with the limit contour.
       </p>
       {forms.map((f, i) => (
-        <div className="study-form" key={i}>
-          <label>
-            input {i + 1}
-            <select value={f.path} onChange={(e) => setForms(patchAt(forms, i, { path: e.target.value }))}>
-              {PATHS.map((p) => (
-                <option key={p} value={p}>
-                  {pathTitle(p)}
-                </option>
-              ))}
-            </select>
-          </label>
-          {(["from", "to", "steps"] as const).map((k) => (
-            <label key={k}>
-              {k}
-              <input
-                className="narrow"
-                value={f[k]}
-                onChange={(e) => setForms(patchAt(forms, i, { [k]: e.target.value }))}
-              />
-            </label>
-          ))}
-          {i === 1 ? (
-            <button type="button" onClick={() => setForms(forms.slice(0, 1))}>
-              Remove
-            </button>
-          ) : null}
-        </div>
+        <SweepAxisRow
+          key={i}
+          form={f}
+          index={i}
+          onChange={(patch) => setForms(patchAt(forms, i, patch))}
+          onRemove={() => setForms(forms.slice(0, 1))}
+        />
       ))}
       <div className="button-row">
         {forms.length === 1 ? (
@@ -131,27 +111,7 @@ export function SweepSection({
       </div>
       {problem ? <div className="study-error">{problem}</div> : null}
       {result ? (
-        <div className="button-row sweep-view" role="group" aria-label="Show the sweep as">
-          <button
-            type="button"
-            aria-pressed={view === "chart"}
-            onClick={() => setView("chart")}
-            data-command="sweep-chart"
-          >
-            Chart
-          </button>
-          <button
-            type="button"
-            aria-pressed={view === "table"}
-            onClick={() => setView("table")}
-            data-command="sweep-table"
-          >
-            Table
-          </button>
-          <button type="button" onClick={() => exportSweepCsv(result, scenario, setProblem)} data-command="sweep-csv">
-            Export CSV
-          </button>
-        </div>
+        <SweepViewSwitch view={view} onView={setView} onExport={() => exportSweepCsv(result, scenario, setProblem)} />
       ) : null}
       {result && view === "table" ? <SweepTable result={result} unitSystem={unitSystem} /> : null}
       {result && view === "chart" && result.axes.length === 1 ? (
@@ -166,34 +126,97 @@ export function SweepSection({
           axes={[heatAxis(result.axes[0]!, unitSystem), heatAxis(result.axes[1]!, unitSystem)]}
         />
       ) : null}
-      {result ? (
-        <p className="study-note" data-role="study-tally">
-          {`Points: ${result.rows.length} — ` +
-            (["meets", "exceeds", "outside-scope", "refused"] as const)
-              .map((v) => `${v} ${result.rows.filter((r) => r.verdict === v).length}`)
-              .join(", ") +
-            ". "}
-          {result.rows
-            .filter((r) => r.verdict === "refused")
-            .slice(0, 3)
-            .map((r) => `Refused: ${r.error ?? ""}`)
-            .join(" ")}
-        </p>
-      ) : null}
-      {result ? (
-        <p className="study-note" data-role="study-eos">
-          {crossings.length === 0
-            ? `Equation of state at every point: ${result.rows[0]?.equationOfState ?? "—"}.`
-            : crossings
-                .map(
-                  (c) =>
-                    `Equation of state changes from ${c.from} to ${c.to} between ${c.path} = ` +
-                    `${siText(c.path, c.between[0][c.path]!)} and ${siText(c.path, c.between[1][c.path]!)}.`,
-                )
-                .join(" ")}
-        </p>
-      ) : null}
+      {result ? <SweepNotes result={result} /> : null}
     </section>
+  );
+}
+
+/** One varied input: which input, its bounds (values with units) and the number of steps. */
+function SweepAxisRow(props: {
+  form: AxisForm;
+  index: number;
+  onChange: (patch: Partial<AxisForm>) => void;
+  onRemove: () => void;
+}) {
+  const { form, index, onChange, onRemove } = props;
+  return (
+    <div className="study-form">
+      <label>
+        input {index + 1}
+        <select value={form.path} onChange={(e) => onChange({ path: e.target.value })}>
+          {PATHS.map((p) => (
+            <option key={p} value={p}>
+              {pathTitle(p)}
+            </option>
+          ))}
+        </select>
+      </label>
+      {(["from", "to", "steps"] as const).map((k) => (
+        <label key={k}>
+          {k}
+          <input className="narrow" value={form[k]} onChange={(e) => onChange({ [k]: e.target.value })} />
+        </label>
+      ))}
+      {index === 1 ? (
+        <button type="button" onClick={onRemove}>
+          Remove
+        </button>
+      ) : null}
+    </div>
+  );
+}
+
+/** Chart or table, and the CSV export. */
+function SweepViewSwitch(props: {
+  view: "chart" | "table";
+  onView: (view: "chart" | "table") => void;
+  onExport: () => void;
+}) {
+  const { view, onView, onExport } = props;
+  return (
+    <div className="button-row sweep-view" role="group" aria-label="Show the sweep as">
+      <button type="button" aria-pressed={view === "chart"} onClick={() => onView("chart")} data-command="sweep-chart">
+        Chart
+      </button>
+      <button type="button" aria-pressed={view === "table"} onClick={() => onView("table")} data-command="sweep-table">
+        Table
+      </button>
+      <button type="button" onClick={onExport} data-command="sweep-csv">
+        Export CSV
+      </button>
+    </div>
+  );
+}
+
+/** The count of points per verdict (with the first refusals) and where the equation of state changes. */
+function SweepNotes({ result }: { result: { axes: SweepAxis[]; rows: SweepRow[] } }) {
+  const crossings = eosCrossings(result.axes, result.rows);
+  return (
+    <>
+      <p className="study-note" data-role="study-tally">
+        {`Points: ${result.rows.length} — ` +
+          (["meets", "exceeds", "outside-scope", "refused"] as const)
+            .map((v) => `${v} ${result.rows.filter((r) => r.verdict === v).length}`)
+            .join(", ") +
+          ". "}
+        {result.rows
+          .filter((r) => r.verdict === "refused")
+          .slice(0, 3)
+          .map((r) => `Refused: ${r.error ?? ""}`)
+          .join(" ")}
+      </p>
+      <p className="study-note" data-role="study-eos">
+        {crossings.length === 0
+          ? `Equation of state at every point: ${result.rows[0]?.equationOfState ?? "—"}.`
+          : crossings
+              .map(
+                (c) =>
+                  `Equation of state changes from ${c.from} to ${c.to} between ${c.path} = ` +
+                  `${siText(c.path, c.between[0][c.path]!)} and ${siText(c.path, c.between[1][c.path]!)}.`,
+              )
+              .join(" ")}
+      </p>
+    </>
   );
 }
 
