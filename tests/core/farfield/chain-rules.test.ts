@@ -316,6 +316,8 @@ describe("truncateSeries() and seriesFromChain() — the displayed series", () =
     dilution: [1, 2, 3, 4],
     thickness: [5, 6, 7, 8],
     width: [9, 10, 11, 12],
+    richardson: [0.1, 0.2, 0.3, 0.4],
+    bedRichardson: [1, 2, 3, 4],
     switchDistance: 3,
     handOverDistance: 4,
   };
@@ -326,6 +328,9 @@ describe("truncateSeries() and seriesFromChain() — the displayed series", () =
       dilution: [1, 2, 2.5],
       thickness: [5, 6, 6.5],
       width: [9, 10, 10.5],
+      // At the cut the entrainment laws' inputs are those of the next point (the interval being cut).
+      richardson: [0.1, 0.2, 0.3],
+      bedRichardson: [1, 2, 3],
       switchDistance: 3,
       handOverDistance: 4,
     });

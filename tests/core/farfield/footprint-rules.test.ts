@@ -92,6 +92,8 @@ describe("footprintStage()", () => {
       dilution: [2, 3],
       thickness: [1, 1],
       width: [1, 1],
+      richardson: [0, 0],
+      bedRichardson: [0, 0],
       switchDistance: null,
     },
     range,

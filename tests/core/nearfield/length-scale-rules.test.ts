@@ -157,7 +157,7 @@ describe("which discharges the laws describe", () => {
       10,
     );
     expect(
-      r.notes.some((n) => n.startsWith("Impact distance = return distance + portHeight/tan(61.5°)")),
+      (r.notes ?? []).some((n) => n.startsWith("Impact distance = return distance + portHeight/tan(61.5°)")),
       "the note names 61.5°",
     ).toBe(true);
   });
