@@ -79,10 +79,21 @@ describe("the number in a limit string", () => {
     expect(read("2e-1 g/kg")).toBe(0.2);
     expect(read("2e+1g/kg")).toBe(20);
     expect(read("\t0.25\tg/kg")).toBe(0.25);
+    expect(read("12.5 g/kg")).toBe(12.5);
+    expect(read(".25")).toBe(0.25);
+    expect(read("2psu")).toBeCloseTo(2 * SR_FACTOR, 12);
+  });
+
+  it("refuses text before the number and a second line after the unit", () => {
+    for (const v of ["x2 g/kg", "2 g/kg\nx"])
+      expect(refusal({ constituent: "salinity", maxIncrease: v })).toBe(
+        `mixingZone.limits.0.maxIncrease: ${JSON.stringify(v)} must be a number with an optional unit (in g/kg)`,
+      );
   });
 
   it("adds no conversion note when the value is already in the constituent's unit", () => {
-    const inUnit = accepted(withLimit({ constituent: "salinity", maxIncrease: "2 g/kg", background: "36 g/kg" }));
+    const inUnit = accepted(withLimit({ constituent: "salinity", maxIncrease: "2 g/kg ", background: "36 ppt " }));
+    expect(inUnit.mixingZone.limits[0]).toMatchObject({ maxIncrease: 2, background: 36 });
     expect(inUnit.conversions.some((c) => c.startsWith("mixingZone"))).toBe(false);
     const listed = accepted(withLimit({ constituent: "Antiscalant", maxConcentration: "3 mg/L" }, antiscalant));
     expect(listed.mixingZone.limits[0]!.maxConcentration).toBe(3);
