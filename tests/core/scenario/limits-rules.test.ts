@@ -180,6 +180,10 @@ describe("limit signs, sizes and the limit's shape", () => {
     const s = accepted(withLimit({ constituent: "ANTISCALANT", maxConcentration: "0.5 g/L" }, antiscalant));
     expect(s.mixingZone.limits[0]).toEqual({ constituent: "Antiscalant", unit: "mg/L", maxConcentration: 500 });
     expect(s.conversions).toContain("mixingZone.limits.0.maxConcentration: 0.5 g/L → 500 mg/L");
+    // A conversion that overflows is refused as unconvertible, not read as an infinite limit.
+    expect(refusal({ constituent: "Antiscalant", maxConcentration: "1e308 g/L" }, antiscalant)).toBe(
+      `mixingZone.limits.0.maxConcentration: "1e308 g/L" has a unit that cannot be converted to the constituent's unit (mg/L)`,
+    );
     expect(refusal({ constituent: "Antiscalant", maxConcentration: "2 kg" }, antiscalant)).toBe(
       `mixingZone.limits.0.maxConcentration: "2 kg" has a unit that cannot be converted to the constituent's unit (mg/L)`,
     );
