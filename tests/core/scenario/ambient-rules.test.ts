@@ -76,6 +76,11 @@ describe("ambient profile", () => {
       r.ambient.profile = [{ depth: 0, salinity: 36, temperature: 20 }];
     });
     expect(refusedMessages(tempOnly)[0]).toMatch(/^ambient\.profile: "\(profile and uniform values\)" give either/);
+    const salinityOnly = edited((r) => {
+      delete r.ambient.temperature;
+      r.ambient.profile = [{ depth: 0, salinity: 36, temperature: 20 }];
+    });
+    expect(refusedMessages(salinityOnly)[0]).toMatch(/^ambient\.profile: "\(profile and uniform values\)" give either/);
   });
 
   it("refuses a point below the seabed, naming it as given and the water depth", () => {
@@ -92,6 +97,16 @@ describe("ambient profile", () => {
         message: "ambient.profile.1.depth: 15.5 is below the seabed (the water is 15 m deep)",
         related: ["ambient.depth"],
       },
+    ]);
+  });
+
+  it("refuses a first point below the seabed", () => {
+    const first = withProfile([
+      { depth: 16, salinity: 37, temperature: 18 },
+      { depth: 0, salinity: 36, temperature: 20 },
+    ]);
+    expect(refusedMessages(first)).toEqual([
+      "ambient.profile.0.depth: 16 is below the seabed (the water is 15 m deep)",
     ]);
   });
 

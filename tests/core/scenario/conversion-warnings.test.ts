@@ -102,4 +102,19 @@ describe("addConversionWarnings", () => {
     expect(ctx.warnings![1]!.value).toBe(0);
     expect(ctx.warnings).toHaveLength(2);
   });
+
+  it("keeps warnings of different codes on one field apart, and the first of two equally far outside", () => {
+    const ctx: NormaliseContext = { issues: [], conversions: [], warnings: [] };
+    addConversionWarnings(ctx, "p", [w(43, [2, 42])]);
+    addConversionWarnings(ctx, "p", [{ ...w(50, [2, 42]), code: "d" }]);
+    expect(ctx.warnings!.map((x) => [x.code, x.value])).toEqual([
+      ["c", 43],
+      ["d", 50],
+    ]);
+    addConversionWarnings(ctx, "p", [w(1, [2, 42])]);
+    expect(ctx.warnings!.map((x) => [x.code, x.value])).toEqual([
+      ["c", 43],
+      ["d", 50],
+    ]);
+  });
 });

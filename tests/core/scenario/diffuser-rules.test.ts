@@ -160,6 +160,9 @@ describe("flow split", () => {
     expect(refusal((d) => (d.flowSplit = [1, 1, 1]))).toEqual([
       'diffuser.flowSplit: "3 values" must list one share per port (4)',
     ]);
+    expect(refusal((d) => (d.flowSplit = [1, 0, 1]))).toEqual([
+      'diffuser.flowSplit: "3 values" must list one share per port (4)',
+    ]);
   });
 
   it("lists positive shares only, showing the first five", () => {

@@ -123,6 +123,21 @@ describe("discharge computed from the plant", () => {
     );
   });
 
+  it("notes practical-salinity conversions of the feed and of each blending stream by their fields", () => {
+    const s = accepted(
+      plantRaw({
+        feedSalinity: "35 psu",
+        blending: [{ name: "seawater", flow: 0.1, salinity: "35 psu", temperature: 20 }],
+      }),
+    );
+    expect(s.plant!.feedSalinity).toBeCloseTo(35.16504, 12);
+    expect(s.plant!.blending[0]!.salinity).toBeCloseTo(35.16504, 12);
+    const note = (path: string) =>
+      `${path}: 35 psu practical salinity → 35.17 g/kg Absolute Salinity (TEOS-10 reference-composition factor 35.16504/35)`;
+    expect(s.conversions).toContain(note("plant.feedSalinity"));
+    expect(s.conversions).toContain(note("plant.blending.0.salinity"));
+  });
+
   it("scales the blending streams together to the blend ratio × the brine flow", () => {
     const blending = [
       { name: "a", flow: 1, salinity: 36, temperature: 20 },

@@ -79,10 +79,21 @@ describe("the number in a limit string", () => {
     expect(read("2e-1 g/kg")).toBe(0.2);
     expect(read("2e+1g/kg")).toBe(20);
     expect(read("\t0.25\tg/kg")).toBe(0.25);
+    expect(read("12.5 g/kg")).toBe(12.5);
+    expect(read(".25")).toBe(0.25);
+    expect(read("2psu")).toBeCloseTo(2 * SR_FACTOR, 12);
+  });
+
+  it("refuses text before the number and a second line after the unit", () => {
+    for (const v of ["x2 g/kg", "2 g/kg\nx"])
+      expect(refusal({ constituent: "salinity", maxIncrease: v })).toBe(
+        `mixingZone.limits.0.maxIncrease: ${JSON.stringify(v)} must be a number with an optional unit (in g/kg)`,
+      );
   });
 
   it("adds no conversion note when the value is already in the constituent's unit", () => {
-    const inUnit = accepted(withLimit({ constituent: "salinity", maxIncrease: "2 g/kg", background: "36 g/kg" }));
+    const inUnit = accepted(withLimit({ constituent: "salinity", maxIncrease: "2 g/kg ", background: "36 ppt " }));
+    expect(inUnit.mixingZone.limits[0]).toMatchObject({ maxIncrease: 2, background: 36 });
     expect(inUnit.conversions.some((c) => c.startsWith("mixingZone"))).toBe(false);
     const listed = accepted(withLimit({ constituent: "Antiscalant", maxConcentration: "3 mg/L" }, antiscalant));
     expect(listed.mixingZone.limits[0]!.maxConcentration).toBe(3);
@@ -169,6 +180,10 @@ describe("limit signs, sizes and the limit's shape", () => {
     const s = accepted(withLimit({ constituent: "ANTISCALANT", maxConcentration: "0.5 g/L" }, antiscalant));
     expect(s.mixingZone.limits[0]).toEqual({ constituent: "Antiscalant", unit: "mg/L", maxConcentration: 500 });
     expect(s.conversions).toContain("mixingZone.limits.0.maxConcentration: 0.5 g/L → 500 mg/L");
+    // A conversion that overflows is refused as unconvertible, not read as an infinite limit.
+    expect(refusal({ constituent: "Antiscalant", maxConcentration: "1e308 g/L" }, antiscalant)).toBe(
+      `mixingZone.limits.0.maxConcentration: "1e308 g/L" has a unit that cannot be converted to the constituent's unit (mg/L)`,
+    );
     expect(refusal({ constituent: "Antiscalant", maxConcentration: "2 kg" }, antiscalant)).toBe(
       `mixingZone.limits.0.maxConcentration: "2 kg" has a unit that cannot be converted to the constituent's unit (mg/L)`,
     );

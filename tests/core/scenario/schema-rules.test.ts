@@ -329,6 +329,15 @@ describe("the words of the file format's refusals", () => {
     else expect(m.endsWith(message), m).toBe(true);
   });
 
+  it("reports its own range and unit checks as custom issues, passed on word for word", () => {
+    const codes = (edit: (r: Raw) => void) =>
+      scenarioFileSchema.safeParse(edited(edit)).error!.issues.map((i) => [i.code, i.path.join(".")]);
+    expect(codes((r) => (r.diffuser.portAngle = "steep"))).toEqual([["custom", "diffuser.portAngle"]]);
+    expect(codes((r) => (r.diffuser.portAngle = 91))).toEqual([["custom", "diffuser.portAngle"]]);
+    expect(codes((r) => (r.ambient.bedSlope = "steep"))).toEqual([["custom", "ambient.bedSlope"]]);
+    expect(codes((r) => (r.ambient.bedSlope = 0.9))).toEqual([["custom", "ambient.bedSlope"]]);
+  });
+
   it("format and version words of the schema itself", () => {
     const wrongFormat = scenarioFileSchema.safeParse({ ...baseRaw(), format: "other" });
     expect(wrongFormat.error!.issues.map((i) => i.message)).toEqual(['must be "brinefield-scenario"']);
