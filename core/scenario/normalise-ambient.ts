@@ -164,6 +164,18 @@ function num(v: number | undefined, fallback: number): number {
   return v === undefined ? fallback : v;
 }
 
+/** The stated profile with a case's own salinity or own temperature at every depth. */
+function profileWithOneQuantity(
+  stated: readonly ProfilePoint[],
+  c: { salinity?: SalinityValue; temperature?: number },
+  path: string,
+  ctx: Ctx,
+): ProfilePoint[] {
+  if (c.temperature !== undefined) return stated.map((p) => ({ ...p, temperature: c.temperature! }));
+  const sa = resolveSalinity(c.salinity!, stated[0]!.temperature, `${path}.salinity`, ctx);
+  return stated.map((p) => ({ ...p, salinity: sa }));
+}
+
 /** The ambient cases: each the stated ambient with the fields it sets. */
 export function ambientCasesFromFile(f: ScenarioFileParsed, ambient: AmbientInput | null, ctx: Ctx): AmbientCase[] {
   const ambientCases: AmbientCase[] = [];
@@ -173,10 +185,21 @@ export function ambientCasesFromFile(f: ScenarioFileParsed, ambient: AmbientInpu
     const hasOwnWater = c.profile !== undefined || c.salinity !== undefined || c.temperature !== undefined;
     let profile = ambient.profile.map((p) => ({ ...p }));
     let uniform = ambient.uniform;
-    if (hasOwnWater) {
+    const onlyOneOfTwo = c.profile === undefined && (c.salinity === undefined) !== (c.temperature === undefined);
+    if (hasOwnWater && onlyOneOfTwo && !ambient.uniform) {
+      // Stratified stated water and a case that sets only its salinity or only its temperature: the other
+      // quantity keeps the stated profile, depth by depth, rather than its surface value all the way down.
+      profile = profileWithOneQuantity(ambient.profile, c, `ambientCases.${i}`, ctx);
+      if (cd !== ambient.depth) {
+        const last = profile[profile.length - 1]!;
+        if (last.depth < cd) profile.push({ ...last, depth: cd });
+      }
+      uniform = profile.every((p) => p.salinity === profile[0]!.salinity && p.temperature === profile[0]!.temperature);
+    } else if (hasOwnWater) {
       const base = ambient.profile[0]!;
+      // A case's profile beside its own salinity or temperature is refused, as for the stated ambient.
       const own: RawAmbientLike = c.profile
-        ? { profile: c.profile }
+        ? { profile: c.profile, salinity: c.salinity, temperature: c.temperature }
         : {
             salinity: c.salinity ?? { basis: "absolute", value: base.salinity, raw: base.salinity },
             temperature: c.temperature ?? base.temperature,

@@ -106,6 +106,16 @@ function limitValueInUnit(
   return undefined;
 }
 
+/**
+ * A limit value with the limit's `unit` attached when the value itself names none: `500` with unit "ug/L"
+ * is read as "500 ug/L" and converted to the constituent's unit like any written unit.
+ */
+function withLimitUnit(raw: number | string | undefined, unit: string | undefined): number | string | undefined {
+  if (raw === undefined || unit === undefined || unit.trim() === "") return raw;
+  if (typeof raw === "number") return Number.isFinite(raw) ? `${raw} ${unit.trim()}` : raw;
+  return /^\s*[-+]?(?:\d+\.?\d*|\.\d+)(?:e[-+]?\d+)?\s*$/i.test(raw) ? `${raw.trim()} ${unit.trim()}` : raw;
+}
+
 /** The mixing zone's limits, each in its constituent's unit; problems are added to the issues. */
 export function limitsFromFile(
   f: ScenarioFileParsed,
@@ -132,9 +142,18 @@ export function limitsFromFile(
       ctx.issues.push(issue(path, l.constituent, "must give exactly one of maxIncrease or maxConcentration"));
       return;
     }
-    const inc = parseLimitValue(l.maxIncrease, key, unit, "maxIncrease", `${path}.maxIncrease`, ctx);
-    const abs = parseLimitValue(l.maxConcentration, key, unit, "maxConcentration", `${path}.maxConcentration`, ctx);
-    const bg = parseLimitValue(l.background, key, unit, "background", `${path}.background`, ctx);
+    // The limit's own `unit` applies to its values that carry none (a value written with a unit keeps it).
+    const inUnit = (raw: number | string | undefined) => withLimitUnit(raw, l.unit);
+    const inc = parseLimitValue(inUnit(l.maxIncrease), key, unit, "maxIncrease", `${path}.maxIncrease`, ctx);
+    const abs = parseLimitValue(
+      inUnit(l.maxConcentration),
+      key,
+      unit,
+      "maxConcentration",
+      `${path}.maxConcentration`,
+      ctx,
+    );
+    const bg = parseLimitValue(inUnit(l.background), key, unit, "background", `${path}.background`, ctx);
     limits.push({
       constituent: key === "salinity" || key === "temperature" ? key : c!.name,
       unit,

@@ -32,10 +32,15 @@ function math(): ReturnType<typeof create> {
 
 /**
  * `value` in `from` expressed in `to`, with the one units instance of core (trade units included).
- * Throws when mathjs does not know a unit or the two are not of one kind.
+ * The micro sign may be written as µ. Throws when mathjs does not know a unit or the two are not of one kind.
  */
 export function convertUnit(value: number, from: string, to: string): number {
-  return math().unit(value, from).toNumber(to);
+  return math().unit(value, withAsciiMicro(from)).toNumber(withAsciiMicro(to));
+}
+
+/** The micro sign (µ, or Greek mu) written as mathjs's prefix "u": "µg/L" → "ug/L". */
+function withAsciiMicro(unit: string): string {
+  return unit.replace(/[\u00b5\u03bc]/g, "u");
 }
 
 /** Kinds of quantity the scenario format uses, with their SI unit and a US customary display unit. */

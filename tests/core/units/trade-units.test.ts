@@ -138,3 +138,12 @@ describe("a scenario written in the trade's units", () => {
     expect(top?.related, "the depth is named").toContain("ambient.depth");
   });
 });
+
+describe("the micro sign", () => {
+  it("reads µg/L (micro sign or Greek mu) as ug/L: 1 µg/L = 0.001 mg/L (SI prefixes, BIPM 2019 SI Brochure)", async () => {
+    const { convertUnit } = await import("../../../core/units/units");
+    expect(convertUnit(1, "\u00b5g/L", "mg/L")).toBeCloseTo(0.001, 15);
+    expect(convertUnit(1, "\u03bcg/L", "mg/L")).toBeCloseTo(0.001, 15);
+    expect(convertUnit(2, "mg/L", "\u00b5g/L")).toBeCloseTo(2000, 9);
+  });
+});
