@@ -257,14 +257,15 @@ function limitVerdict(input: {
   const margin = Number.isFinite(required) ? edgeDilution / required : 0;
   let text = lim.text;
   if (!Number.isFinite(required)) {
-    text += `: can never be met — the limit ${lim.absolute} ${limit.unit} is at or below the background ${formatNumber(dilutesToward)}${basin ? " raised by the basin build-up" : ""}`;
+    const u = unitSymbol(limit.unit);
+    text += `: can never be met — the limit ${formatNumber(lim.absolute)} ${u} is at or below the background ${formatNumber(dilutesToward)} ${u}${basin ? " raised by the basin build-up" : ""}`;
     warnings.push(
       warning(
         "limit-below-background",
         "serious",
         basin
-          ? `The ${source.name} limit (${formatNumber(lim.absolute)} ${limit.unit}) is at or below the background raised by the basin build-up (${formatNumber(dilutesToward)}); no dilution meets it.`
-          : `The ${source.name} limit (${lim.absolute} ${limit.unit}) is at or below background (${lim.background}); no dilution meets it.`,
+          ? `The ${source.name} limit (${formatNumber(lim.absolute)} ${u}) is at or below the background raised by the basin build-up (${formatNumber(dilutesToward)} ${u}); no dilution meets it.`
+          : `The ${source.name} limit (${formatNumber(lim.absolute)} ${u}) is at or below background (${formatNumber(lim.background)} ${u}); no dilution meets it.`,
         { parameter: basin ? "ambient.basin" : "mixingZone.limits", value: lim.absolute, stage: "compliance" },
       ),
     );

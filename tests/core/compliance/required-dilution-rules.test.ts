@@ -110,11 +110,11 @@ describe("complianceFromEdgeDilution() — one verdict per limit, the smallest m
     expect(c.margin).toBe(0);
     expect(c.requiredDilution).toBe(Infinity);
     expect(c.limit).toBe(
-      "salinity at most 33 g/kg: can never be met — the limit 33 g/kg is at or below the background 33.5",
+      "salinity at most 33 g/kg: can never be met — the limit 33 g/kg is at or below the background 33.5 g/kg",
     );
     const w = a.warnings.find((x) => x.code === "limit-below-background")!;
     expect(w.severity).toBe("serious");
-    expect(w.message).toBe("The salinity limit (33 g/kg) is at or below background (33.5); no dilution meets it.");
+    expect(w.message).toBe("The salinity limit (33 g/kg) is at or below background (33.5 g/kg); no dilution meets it.");
     expect(w.parameter).toBe("mixingZone.limits");
     expect(w.value).toBe(33);
     expect(w.stage).toBe("compliance");
@@ -225,11 +225,11 @@ describe("complianceFromEdgeDilution() in an enclosed basin — the edge dilutes
     expect(a.compliance.pass).toBe(false);
     expect(a.compliance.requiredDilution).toBe(Infinity);
     expect(a.compliance.constituents[0]!.limit).toBe(
-      "salinity at most 33.8 g/kg: can never be met — the limit 33.8 g/kg is at or below the background 33.87 raised by the basin build-up",
+      "salinity at most 33.8 g/kg: can never be met — the limit 33.8 g/kg is at or below the background 33.87 g/kg raised by the basin build-up",
     );
     const w = a.warnings.find((x) => x.code === "limit-below-background")!;
     expect(w.message).toBe(
-      "The salinity limit (33.8 g/kg) is at or below the background raised by the basin build-up (33.87); no dilution meets it.",
+      "The salinity limit (33.8 g/kg) is at or below the background raised by the basin build-up (33.87 g/kg); no dilution meets it.",
     );
     expect(w.parameter).toBe("ambient.basin");
     const open = complianceFromEdgeDilution(
