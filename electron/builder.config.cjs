@@ -36,7 +36,7 @@ module.exports = {
     enableNodeCliInspectArguments: false,
     enableEmbeddedAsarIntegrityValidation: true,
     onlyLoadAppFromAsar: true,
-    // The renderer is served from the app's own brinefield:// scheme (electron/appProtocol.ts), so
+    // The renderer is served from the app's own brinefield:// scheme (electron/app-protocol.ts), so
     // file:// pages get no extra privileges.
     grantFileProtocolExtraPrivileges: false,
   },

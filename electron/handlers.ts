@@ -17,9 +17,9 @@ import {
   readJsonTextFile,
   samePath,
   writeFileAtomic,
-} from "./fileStore";
-import { parseHostRequest } from "./requestSchema";
-import { isAppUrl } from "./appProtocol";
+} from "./file-store";
+import { parseHostRequest } from "./request-schema";
+import { isAppUrl } from "./app-protocol";
 
 /** Who sent an IPC message, reduced to plain values by main.ts. */
 export interface IpcSender {

@@ -13,7 +13,7 @@ import { existsSync, readFileSync, statSync } from "node:fs";
 import * as fsp from "node:fs/promises";
 import { createRequire } from "node:module";
 import { dirname, join } from "node:path";
-import { portFromArgs, startWebServer, type StartedWebServer } from "./webServer";
+import { portFromArgs, startWebServer, type StartedWebServer } from "./web-server";
 
 /** The electron 45 package (and its downloader) require this Node version. */
 export const ELECTRON_MIN_NODE: readonly [number, number, number] = [22, 12, 0];

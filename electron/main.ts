@@ -1,8 +1,8 @@
 /**
  * Electron main process (bundled to dist/electron/main.cjs). Thin wiring only: the logic lives in
- * handlers.ts, fileStore.ts, closeGuard.ts, menu.ts and security.ts, which are unit-tested without
+ * handlers.ts, file-store.ts, close-guard.ts, menu.ts and security.ts, which are unit-tested without
  * Electron. One window, sandboxed and isolated, loading brinefield://app/index.html: the app's own
- * privileged scheme serves the packaged dist/renderer folder (appProtocol.ts), so nothing is loaded over
+ * privileged scheme serves the packaged dist/renderer folder (app-protocol.ts), so nothing is loaded over
  * file:// and the file-protocol fuse is off.
  */
 import {
@@ -18,10 +18,10 @@ import {
   type WebContents,
 } from "electron";
 import { join } from "node:path";
-import { APP_INDEX_URL, APP_SCHEME, appSchemeRegistration, createAppProtocolHandler } from "./appProtocol";
-import { createCloseGuard, type CloseChoice } from "./closeGuard";
+import { APP_INDEX_URL, APP_SCHEME, appSchemeRegistration, createAppProtocolHandler } from "./app-protocol";
+import { createCloseGuard, type CloseChoice } from "./close-guard";
 import { IPC_INVOKE, IPC_MENU, type MenuCommand } from "./contract";
-import { createAutosaveStore, createRecentFilesStore } from "./fileStore";
+import { createAutosaveStore, createRecentFilesStore } from "./file-store";
 import { createHostHandlers, type IpcSender } from "./handlers";
 import { buildMenuTemplate } from "./menu";
 import { isAllowedExternalUrl, isAllowedRequestUrl, secureWebPreferences, withSecurityHeaders } from "./security";

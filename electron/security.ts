@@ -3,7 +3,7 @@
  * tests/electron/security.test.ts): which URLs the renderer may load, which web addresses may open in
  * the system browser, and the webPreferences every window gets.
  */
-import { isAppUrl } from "./appProtocol";
+import { isAppUrl } from "./app-protocol";
 import { CONTENT_SECURITY_POLICY } from "./csp";
 
 /**

@@ -1,7 +1,7 @@
 #!/usr/bin/env node
 /**
  * `npm run web`: serve the built renderer (dist/renderer) on http://127.0.0.1:5178/ (or --port N /
- * PORT; a free port when that one is taken). See electron/webServer.ts.
+ * PORT; a free port when that one is taken). See electron/web-server.ts.
  */
 import { join } from "node:path";
 import { pathToFileURL } from "node:url";

@@ -435,7 +435,7 @@ describe("control characters in user text never reach the terminal", () => {
       const o = await cli(...args);
       expect(o.code, `${args.join(" ")} runs`).toBe(0);
       // The pattern matches control characters on purpose, to refuse them.
-      // eslint-disable-next-line no-control-regex
+      // eslint-disable-next-line no-control-regex -- the pattern matches control characters on purpose, to find them in the output
       const control = /[\u001b\r\u0007\u0080-\u009f]/;
       expect(o.out + o.err, `${args.join(" ")}: no ESC, CR, BEL or C1 control`).not.toMatch(control);
     }

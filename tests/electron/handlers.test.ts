@@ -4,7 +4,7 @@ import { join } from "node:path";
 import { pathToFileURL } from "node:url";
 import { afterEach, beforeEach, describe, expect, it } from "vitest";
 import type { HostResponse } from "../../electron/contract";
-import { MAX_SCENARIO_BYTES, createAutosaveStore, createRecentFilesStore } from "../../electron/fileStore";
+import { MAX_SCENARIO_BYTES, createAutosaveStore, createRecentFilesStore } from "../../electron/file-store";
 import {
   createHostHandlers,
   ensureExtension,
@@ -13,8 +13,8 @@ import {
   type IpcSender,
   type SaveDialogOptions,
 } from "../../electron/handlers";
-import { parseHostRequest } from "../../electron/requestSchema";
-import { APP_INDEX_URL } from "../../electron/appProtocol";
+import { parseHostRequest } from "../../electron/request-schema";
+import { APP_INDEX_URL } from "../../electron/app-protocol";
 
 let dir: string;
 const WINDOW_ID = 7;

@@ -1,10 +1,10 @@
 /**
  * The one static file server: the built renderer (dist/renderer) on 127.0.0.1 for `npm run web`, for
- * `npm start` when Electron cannot run (both through electron/webServer.ts, which adds the app's
+ * `npm start` when Electron cannot run (both through electron/web-server.ts, which adds the app's
  * Content-Security-Policy), and for the headless 3D capture of the report (headless/capture-3d.ts).
  * Read-only: GET and HEAD of regular files inside the root, nosniff, no directory listings and no path
- * traversal. Its MIME table and path rules also serve the app's brinefield:// scheme (electron/appProtocol.ts).
- * Tested in tests/electron/webServer.test.ts.
+ * traversal. Its MIME table and path rules also serve the app's brinefield:// scheme (electron/app-protocol.ts).
+ * Tested in tests/electron/web-server.test.ts.
  */
 import { createReadStream } from "node:fs";
 import * as fsp from "node:fs/promises";

@@ -1,6 +1,6 @@
 /** The host facade's file reading in a browser: dropped files are read only when they could be a scenario. */
 import { describe, expect, it } from "vitest";
-import { MAX_SCENARIO_BYTES } from "../../../electron/fileStore";
+import { MAX_SCENARIO_BYTES } from "../../../electron/file-store";
 import { MAX_DROPPED_FILE_BYTES, readDroppedFile } from "../../../renderer/platform/host";
 
 describe("readDroppedFile()", () => {

@@ -3,7 +3,7 @@
  * static server with the app's Content-Security-Policy, as `npm run web` and Electron send it), so browser
  * tests run under the same policy.
  */
-import { startWebServer } from "../../../electron/webServer";
+import { startWebServer } from "../../../electron/web-server";
 
 export interface StaticServer {
   readonly url: string;

@@ -1,6 +1,6 @@
 /**
  * The unsaved-changes prompt on window close, as a small state machine with the dialog and the window
- * injected (tests/electron/closeGuard.test.ts). The renderer reports dirtiness through the
+ * injected (tests/electron/close-guard.test.ts). The renderer reports dirtiness through the
  * `set-document-state` request; main asks before closing a dirty window:
  *   Save → the renderer is told to save; the window closes once that save succeeds (stays open if the
  *          save is cancelled or fails);

@@ -6,7 +6,7 @@ import {
   checkedChannel,
   createHostBridge,
   type BridgeIpc,
-} from "../../electron/hostBridge";
+} from "../../electron/host-bridge";
 
 type Listener = (event: unknown, ...args: unknown[]) => void;
 

@@ -2,7 +2,7 @@
  * The app's own privileged scheme: the window loads `brinefield://app/index.html` instead of a file://
  * URL, so the file-protocol fuse can be off and every response carries our headers. Wired in main.ts
  * (scheme registered before `ready`, handler installed on the default session after it); tested in
- * tests/electron/appProtocol.test.ts without Electron.
+ * tests/electron/app-protocol.test.ts without Electron.
  *
  * The handler serves GET and HEAD of regular files inside the packaged renderer folder only: the path is
  * resolved with the static web server's rules (`resolveRequestPath`: no "..", encoded or raw, no
@@ -11,7 +11,7 @@
  * server's (`locateServedFile`), so both refuse the same paths.
  */
 import * as fsp from "node:fs/promises";
-import { STATUS_TEXT, locateServedFile, mimeTypeFor, securityHeaders } from "./webServer";
+import { STATUS_TEXT, locateServedFile, mimeTypeFor, securityHeaders } from "./web-server";
 
 export const APP_SCHEME = "brinefield";
 export const APP_HOST = "app";

@@ -11,7 +11,7 @@ import {
   formatBytes,
   readJsonTextFile,
   writeFileAtomic,
-} from "../../electron/fileStore";
+} from "../../electron/file-store";
 
 let dir: string;
 
@@ -60,7 +60,7 @@ describe("writeFileAtomic()", () => {
     async () => {
       const target = join(dir, "scenario.json");
       await writeFile(target, '{"version":"previous"}');
-      const moduleUrl = pathToFileURL(join(process.cwd(), "electron", "fileStore.ts")).href;
+      const moduleUrl = pathToFileURL(join(process.cwd(), "electron", "file-store.ts")).href;
       const script = [
         `import { writeFileAtomic } from ${JSON.stringify(moduleUrl)};`,
         `await writeFileAtomic(${JSON.stringify(target)}, '{"version":"next"}', {`,

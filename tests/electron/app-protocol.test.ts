@@ -1,5 +1,5 @@
 /**
- * The app's own scheme (electron/appProtocol.ts): registered as standard and secure without CSP bypass,
+ * The app's own scheme (electron/app-protocol.ts): registered as standard and secure without CSP bypass,
  * serving GET/HEAD of regular files inside the renderer folder only, with the right MIME types and the
  * CSP + nosniff headers on every response, errors included.
  */
@@ -14,7 +14,7 @@ import {
   appSchemeRegistration,
   createAppProtocolHandler,
   isAppUrl,
-} from "../../electron/appProtocol";
+} from "../../electron/app-protocol";
 import { CONTENT_SECURITY_POLICY } from "../../electron/csp";
 
 let dir: string;

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { createCloseGuard, type CloseChoice } from "../../electron/closeGuard";
+import { createCloseGuard, type CloseChoice } from "../../electron/close-guard";
 
 function setup(choice: CloseChoice | (() => Promise<CloseChoice>)) {
   const calls: string[] = [];

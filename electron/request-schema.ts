@@ -7,7 +7,7 @@
 import { isAbsolute } from "node:path";
 import { z } from "zod";
 import type { HostRequest } from "./contract";
-import { MAX_EXPORT_BYTES, MAX_SCENARIO_BYTES, formatBytes } from "./fileStore";
+import { MAX_EXPORT_BYTES, MAX_SCENARIO_BYTES, formatBytes } from "./file-store";
 
 /** Longest path accepted (Windows long paths reach 32 767; real scenario paths are far shorter). */
 export const MAX_PATH_CHARS = 4096;

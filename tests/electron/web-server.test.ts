@@ -12,7 +12,7 @@ import {
   resolveRequestPath,
   startWebServer,
   type StartedWebServer,
-} from "../../electron/webServer";
+} from "../../electron/web-server";
 
 let base: string;
 let root: string;

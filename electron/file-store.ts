@@ -1,7 +1,7 @@
 /**
  * Safe file I/O for the main process: atomic writes, size-limited UTF-8 JSON reads, the recent-files
  * list and the autosave slot. Plain Node (fs/promises); no Electron import, so every function here is
- * unit-tested without an Electron binary (tests/electron/fileStore.test.ts).
+ * unit-tested without an Electron binary (tests/electron/file-store.test.ts).
  *
  * The reader and the atomic writer are the shared ones of core/cli/node/ (also used by the command line), so
  * the app and the command line accept, refuse and write files by the same rules.
