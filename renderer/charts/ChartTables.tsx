@@ -13,7 +13,7 @@ import {
   salinityIncreaseLimit,
   trajectorySeries,
   type MethodMarker,
-} from "./chartData";
+} from "./chart-data";
 
 /** Every n-th item so that at most `max` remain, first and last always kept. */
 export function thinned<T>(items: readonly T[], max = 60): T[] {

@@ -6,14 +6,14 @@
 import { line, scaleLinear, scaleLog, type ScaleLinear, type ScaleLogarithmic } from "d3";
 import type { BrinefieldResult } from "../../core/result/contract";
 import { formatNumber, siToDisplay, type UnitSystem } from "../../core/units";
-import { useSize } from "../ui/useSize";
+import { useSize } from "../ui/use-size";
 import {
   distanceSeries,
   impactDilutionMarkers,
   salinityIncreaseLimit,
   type DistanceSeriesPoint,
   type MethodMarker,
-} from "./chartData";
+} from "./chart-data";
 
 const MARGIN = { top: 26, right: 14, bottom: 34, left: 52 };
 

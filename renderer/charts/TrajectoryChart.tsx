@@ -3,9 +3,9 @@ import { area, line, scaleLinear } from "d3";
 import type { BrinefieldResult } from "../../core/result/contract";
 import type { Scenario } from "../../core/scenario/types";
 import { formatNumber, siToDisplay, type UnitSystem } from "../../core/units";
-import { useSize } from "../ui/useSize";
-import { riseMarkers, trajectorySeries } from "./chartData";
-import { dilutionColour, dilutionDomain, rgbToHex } from "../view3d/colourScale";
+import { useSize } from "../ui/use-size";
+import { riseMarkers, trajectorySeries } from "./chart-data";
+import { dilutionColour, dilutionDomain, rgbToHex } from "../view3d/colour-scale";
 
 const MARGIN = { top: 26, right: 14, bottom: 34, left: 46 };
 

@@ -1,10 +1,10 @@
 /** Receiving water: depth, uniform or profiled salinity and temperature, current and bed slope. */
 import { useRef, useState } from "react";
 import { addProfileRow, removeArrayItem, replaceProfile, setAmbientMode } from "../state/actions";
-import { getAtPath } from "../state/scenarioState";
+import { getAtPath } from "../state/scenario-state";
 import { useEditor } from "./EditorContext";
 import { QuantityField, SectionIssues } from "./fields";
-import { parseProfileText } from "./profileText";
+import { parseProfileText } from "./profile-text";
 import { readDroppedFile } from "../platform/host";
 
 export function AmbientSection() {

@@ -4,7 +4,7 @@
  */
 import { useRef, useState } from "react";
 import { setField } from "../state/actions";
-import { getAtPath } from "../state/scenarioState";
+import { getAtPath } from "../state/scenario-state";
 import { useEditor } from "./EditorContext";
 import { QuantityField, SectionIssues } from "./fields";
 import { recordFromCsv, RECORD_COLUMNS } from "../../core/record/csv";

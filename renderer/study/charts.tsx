@@ -9,7 +9,7 @@ import { formatNumber } from "../../core/units";
 import { logTicks } from "../../core/report/figures";
 import { uncertaintyHistogramSvg } from "../../core/report/uncertainty";
 import type { MonteCarloStats } from "../../core/study/montecarlo";
-import { useSize } from "../ui/useSize";
+import { useSize } from "../ui/use-size";
 
 export const M = { top: 20, right: 16, bottom: 40, left: 60 };
 
