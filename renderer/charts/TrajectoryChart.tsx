@@ -1,24 +1,14 @@
 /** Side view of the jet: centreline and half-width band above the seabed, water surface, method markers. */
 import { area, line, scaleLinear } from "d3";
-import type { BrinefieldResult } from "../../core/result/contract";
-import type { Scenario } from "../../core/scenario/types";
-import { formatNumber, siToDisplay, type UnitSystem } from "../../core/units";
+import { formatNumber, siToDisplay } from "../../core/units";
 import { useSize } from "../ui/use-size";
-import { riseMarkers, trajectorySeries } from "./chart-data";
+import { riseMarkers, trajectorySeries, type SideViewProps } from "./chart-data";
 import { dilutionColour, dilutionDomain, rgbToHex } from "../view3d/colour-scale";
 import { XGridTicks } from "./XGridTicks";
 
 const MARGIN = { top: 26, right: 14, bottom: 34, left: 46 };
 
-export function TrajectoryChart({
-  result,
-  scenario,
-  unitSystem,
-}: {
-  result: BrinefieldResult;
-  scenario: Scenario;
-  unitSystem: UnitSystem;
-}) {
+export function TrajectoryChart({ result, scenario, unitSystem }: SideViewProps) {
   const [ref, size] = useSize<HTMLDivElement>();
   const points = trajectorySeries(result, scenario, unitSystem);
   const markers = riseMarkers(result, scenario, unitSystem);
