@@ -10,7 +10,7 @@ import { DesignWorkspace } from "./DesignWorkspace";
 import { useChartChoice } from "./charts/use-chart-choice";
 import { useAppEngine } from "./engine/use-app-engine";
 import { useWhenResultsCurrent } from "./engine/use-results-current";
-import { issuesByPath } from "./engine/useEngine";
+import { issuesByPath } from "./engine/use-engine";
 import { EditorContext, type Editor } from "./inputs/EditorContext";
 import { StartView } from "./start/StartView";
 import { applyDesign } from "./state/actions";

@@ -3,9 +3,9 @@ import type { Scenario } from "../core/scenario/types";
 import type { UnitSystem } from "../core/units";
 import { ChartPanel } from "./charts/ChartPanel";
 import type { ChartChoice } from "./charts/use-chart-choice";
-import type { EngineState } from "./engine/useEngine";
+import type { EngineState } from "./engine/use-engine";
 import { InputsColumn } from "./inputs/InputsColumn";
-import type { RecordRun } from "./record/useRecordRun";
+import type { RecordRun } from "./record/use-record-run";
 import { ResultsColumn } from "./results/ResultsColumn";
 import { View3dPanel } from "./view3d/View3dPanel";
 

@@ -1,5 +1,5 @@
 /** Demo scenarios bundled from demo-scenarios/*.json, in file-name order. */
-import type { ScenarioFile } from "./state/scenarioState";
+import type { ScenarioFile } from "./state/scenario-state";
 
 export interface DemoScenario {
   readonly id: string;

@@ -5,7 +5,7 @@ import { exportFile } from "./platform/host";
 import { aboutResult, csvTable, csvWithCaution } from "../core/report/csv";
 
 export { csvWithCaution };
-import { serialiseScenario, suggestedFileName, type ScenarioFile } from "./state/scenarioState";
+import { serialiseScenario, suggestedFileName, type ScenarioFile } from "./state/scenario-state";
 
 /**
  * The view's compass lives over the canvas, not in it: the exported picture gets a north arrow drawn in

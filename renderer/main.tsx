@@ -2,7 +2,7 @@
 import { StrictMode, Suspense, lazy } from "react";
 import { createRoot } from "react-dom/client";
 import { App } from "./App";
-import { startEngineWorker } from "./engine/engineWorker";
+import { startEngineWorker } from "./engine/engine-worker";
 import "./styles.css";
 
 // The 3D capture route (three.js) loads only when asked for.

@@ -1,6 +1,6 @@
 /// <reference lib="webworker" />
 /** The core worker: parses and runs scenarios off the UI thread so typing never waits for physics. */
-import { runFile } from "./engine/runFile";
+import { runFile } from "./engine/run-file";
 import type { EngineRequest } from "./engine/messages";
 
 const scope = self as unknown as DedicatedWorkerGlobalScope;

@@ -50,15 +50,25 @@ export interface PathPoint {
 
 export type NearFieldMethodName = "length-scale" | "integral";
 
-export interface NearFieldVariant {
-  readonly source: string;
+/** The numbers every near-field estimate gives (null where it gives none). */
+export interface NearFieldNumbers {
+  /** Upper edge of the jet above the port, m. */
   readonly maxRiseHeight: number | null;
+  /** Plan distance from the port to the point of maximum rise, m. */
   readonly maxRiseDistance: number | null;
+  /** Plan distance where the centreline is back at port level, m. */
   readonly returnDistance: number | null;
+  /** Plan distance where the centreline reaches the seabed, m. */
   readonly impactDistance: number | null;
+  /** Centreline dilution at impact. */
   readonly impactDilution: number | null;
+  /** Plan distance to the end of the near field, m. */
   readonly nearFieldDistance: number | null;
   readonly nearFieldDilution: number | null;
+}
+
+export interface NearFieldVariant extends NearFieldNumbers {
+  readonly source: string;
   readonly note?: string;
 }
 
@@ -82,26 +92,13 @@ export interface NearFieldEvent {
 }
 
 /** One method's result, the shape promised under `nearField` in the result contract. */
-export interface NearFieldMethodResult {
+export interface NearFieldMethodResult extends NearFieldNumbers {
   readonly method: NearFieldMethodName;
   readonly source: string;
   /** False when the method does not cover the case (its numbers are then null). */
   readonly available: boolean;
   /** Why the method does not cover the case; null when available. */
   readonly notAvailableReason: string | null;
-  /** Upper edge of the jet above the port, m. */
-  readonly maxRiseHeight: number | null;
-  /** Plan distance from the port to the point of maximum rise, m. */
-  readonly maxRiseDistance: number | null;
-  /** Plan distance where the centreline is back at port level, m. */
-  readonly returnDistance: number | null;
-  /** Plan distance where the centreline reaches the seabed, m. */
-  readonly impactDistance: number | null;
-  /** Centreline dilution at impact. */
-  readonly impactDilution: number | null;
-  /** Plan distance to the end of the near field, m. */
-  readonly nearFieldDistance: number | null;
-  readonly nearFieldDilution: number | null;
   /** Dilution at maximum rise (centreline), where the method gives it. */
   readonly maxRiseDilution?: number | null;
   /**

@@ -16,6 +16,29 @@ const R = 16;
 const T = 20;
 const B = 40;
 
+/** Grid lines with their numbers: vertical at `xs` (labelled by `xText`), horizontal at `ys`. */
+function gridSvg(
+  xs: readonly number[],
+  sx: (x: number) => number,
+  xText: (x: number) => string,
+  ys: readonly number[],
+  sy: (y: number) => number,
+): string {
+  const xt = xs
+    .map(
+      (x) =>
+        `<g><line x1="${sx(x)}" x2="${sx(x)}" y1="${T}" y2="${H - B}" stroke="#e5e7eb"/><text x="${sx(x)}" y="${H - B + 14}" font-size="10" text-anchor="middle">${xText(x)}</text></g>`,
+    )
+    .join("");
+  const yt = ys
+    .map(
+      (y) =>
+        `<g><line x1="${L}" x2="${W - R}" y1="${sy(y)}" y2="${sy(y)}" stroke="#f3f4f6"/><text x="${L - 5}" y="${sy(y) + 3}" font-size="10" text-anchor="end">${escapeHtml(reportNumber(y))}</text></g>`,
+    )
+    .join("");
+  return xt + yt;
+}
+
 /** Periods (seconds) whose steps do not meet the limit: each step stands until the next. */
 export function periodsNotMeeting(rec: RecordResult): { from: number; to: number }[] {
   const t = rec.series.time;
@@ -94,20 +117,9 @@ function panel(
     });
     return d;
   };
-  const xt = linearTicks(t0, t1, 8)
-    .map(
-      (x) =>
-        `<g><line x1="${sx(x)}" x2="${sx(x)}" y1="${T}" y2="${H - B}" stroke="#e5e7eb"/><text x="${sx(x)}" y="${H - B + 14}" font-size="10" text-anchor="middle">${escapeHtml(reportNumber(x))}</text></g>`,
-    )
-    .join("");
-  const yt = yTicks(lo, hi)
-    .map(
-      (y) =>
-        `<g><line x1="${L}" x2="${W - R}" y1="${sy(y)}" y2="${sy(y)}" stroke="#f3f4f6"/><text x="${L - 5}" y="${sy(y) + 3}" font-size="10" text-anchor="end">${escapeHtml(reportNumber(y))}</text></g>`,
-    )
-    .join("");
+  const grid = gridSvg(linearTicks(t0, t1, 8), sx, (x) => escapeHtml(reportNumber(x)), yTicks(lo, hi), sy);
   return `<svg xmlns="http://www.w3.org/2000/svg" id="${id}" viewBox="0 0 ${W} ${H}" width="${W}" height="${H}" role="img" aria-label="${escapeHtml(label)} against time" ${FONT}>
-${shade}${xt}${yt}
+${shade}${grid}
 <line x1="${L}" x2="${L}" y1="${T}" y2="${H - B}" stroke="#111"/><line x1="${L}" x2="${W - R}" y1="${H - B}" y2="${H - B}" stroke="#111"/>
 <path d="${path(limit)}" fill="none" stroke="#b91c1c" stroke-width="1.4" stroke-dasharray="6 3"/>
 <path d="${path(values)}" fill="none" stroke="#1d4ed8" stroke-width="1.2"/>
@@ -166,20 +178,9 @@ export function recordDurationSvg(rec: RecordResult): string {
     rec.percentOfTime !== null
       ? `<line x1="${sx(rec.percentOfTime)}" x2="${sx(rec.percentOfTime)}" y1="${T}" y2="${H - B}" stroke="#6b7280" stroke-dasharray="3 3"/><text x="${sx(rec.percentOfTime) - 4}" y="${T + 12}" font-size="10" text-anchor="end">${escapeHtml(reportNumber(rec.percentOfTime))} % of the time</text>`
       : "";
-  const xt = [0, 20, 40, 60, 80, 100]
-    .map(
-      (x) =>
-        `<g><line x1="${sx(x)}" x2="${sx(x)}" y1="${T}" y2="${H - B}" stroke="#e5e7eb"/><text x="${sx(x)}" y="${H - B + 14}" font-size="10" text-anchor="middle">${x}</text></g>`,
-    )
-    .join("");
-  const yt = yTicks(lo, hi)
-    .map(
-      (y) =>
-        `<g><line x1="${L}" x2="${W - R}" y1="${sy(y)}" y2="${sy(y)}" stroke="#f3f4f6"/><text x="${L - 5}" y="${sy(y) + 3}" font-size="10" text-anchor="end">${escapeHtml(reportNumber(y))}</text></g>`,
-    )
-    .join("");
+  const grid = gridSvg([0, 20, 40, 60, 80, 100], sx, String, yTicks(lo, hi), sy);
   return `<svg xmlns="http://www.w3.org/2000/svg" id="record-duration-chart" viewBox="0 0 ${W} ${H}" width="${W}" height="${H}" role="img" aria-label="duration curve of the edge dilution" ${FONT}>
-${xt}${yt}
+${grid}
 <line x1="${L}" x2="${L}" y1="${T}" y2="${H - B}" stroke="#111"/><line x1="${L}" x2="${W - R}" y1="${H - B}" y2="${H - B}" stroke="#111"/>
 ${required ? `<line x1="${L}" x2="${W - R}" y1="${sy(required)}" y2="${sy(required)}" stroke="#b91c1c" stroke-dasharray="6 3"/><text x="${W - R}" y="${sy(required) - 4}" font-size="10" text-anchor="end" fill="#b91c1c">required dilution ${escapeHtml(reportNumber(required))}</text>` : ""}
 ${rule}

@@ -77,13 +77,7 @@ export function weightedQuantile(values: readonly number[], weights: readonly nu
   const idx = values.map((_, i) => i).filter((i) => Number.isFinite(values[i]!));
   if (idx.length === 0) return Number.NaN;
   idx.sort((a, b) => values[a]! - values[b]!);
-  const total = idx.reduce((s, i) => s + weights[i]!, 0);
-  let acc = 0;
-  for (const i of idx) {
-    acc += weights[i]!;
-    if (acc >= q * total * (1 - 1e-12)) return values[i]!;
-  }
-  return values[idx[idx.length - 1]!]!;
+  return valueAtWeightShare(values, weights, idx, q);
 }
 
 /** Largest value reached or bettered for share q (0–1) of the total weight (NaN values count as −∞). */
@@ -91,6 +85,16 @@ export function valueExceededFor(values: readonly number[], weights: readonly nu
   const idx = values.map((_, i) => i);
   const key = (v: number) => (Number.isNaN(v) ? Number.NEGATIVE_INFINITY : v);
   idx.sort((a, b) => key(values[b]!) - key(values[a]!));
+  return valueAtWeightShare(values, weights, idx, q);
+}
+
+/** Walking the values in the order `idx`, the first at which share q of the total weight is reached. */
+function valueAtWeightShare(
+  values: readonly number[],
+  weights: readonly number[],
+  idx: readonly number[],
+  q: number,
+): number {
   const total = idx.reduce((s, i) => s + weights[i]!, 0);
   let acc = 0;
   for (const i of idx) {

@@ -1,5 +1,5 @@
 /** The report's opening sections: the question asked, the verdict (per ambient case), the job and the derived inputs. */
-import type { BrinefieldResult, Verdict } from "../result/contract";
+import { overallOf, scopeReasonsOf, type BrinefieldResult, type Verdict } from "../result/contract";
 import type { Scenario } from "../scenario/types";
 import { escapeHtml, html, join, raw, reportNumber, type RawHtml } from "./format";
 import { resultRow, keyValueTable } from "./section-parts";
@@ -32,18 +32,9 @@ function casesHtml(result: BrinefieldResult): RawHtml {
 
 export function verdictHtml(result: BrinefieldResult): RawHtml {
   const c = result.compliance;
-  const o = result.overall ?? {
-    verdict: c.verdict,
-    governingCase: "stated",
-    margin: c.margin,
-    edgeDilution: result.mixingZone.dilution,
-  };
+  const o = overallOf(result);
   const style = verdictStyle(o.verdict);
-  const reasons = [
-    ...new Set(
-      (result.cases ?? []).flatMap((k) => k.scopeReasons.map((r) => (k.name === "stated" ? r : `${k.name}: ${r}`))),
-    ),
-  ];
+  const reasons = scopeReasonsOf(result);
   return html`<div class="verdict ${style.cls}" id="verdict" data-verdict="${o.verdict}">
 <div class="badge">${style.badge}</div>
 <div>Overall verdict over every ambient case: <strong>${o.verdict}</strong>; governing case: <strong>${o.governingCase}</strong>, margin <strong data-path="overall.margin">${reportNumber(o.margin)}</strong></div>

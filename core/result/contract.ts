@@ -193,6 +193,27 @@ export interface OverallResult {
   readonly edgeDilution: number;
 }
 
+/**
+ * The overall verdict of a result; a result without one (written before cases were weighed) is read
+ * as its stated conditions alone.
+ */
+export function overallOf(result: BrinefieldResult): OverallResult {
+  return (
+    result.overall ?? {
+      verdict: result.compliance.verdict,
+      governingCase: "stated",
+      margin: result.compliance.margin,
+      edgeDilution: result.mixingZone.dilution,
+    }
+  );
+}
+
+/** Why the result is outside the methods' scope: every case's reasons, each once, a listed case's named. */
+export function scopeReasonsOf(result: BrinefieldResult): string[] {
+  const cases = result.cases ?? [];
+  return [...new Set(cases.flatMap((k) => k.scopeReasons.map((r) => (k.name === "stated" ? r : `${k.name}: ${r}`))))];
+}
+
 export type { BlendResult } from "../rising/blend";
 import type { BlendResult } from "../rising/blend";
 

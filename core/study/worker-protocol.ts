@@ -1,6 +1,6 @@
 /**
  * The one study worker protocol, shared by the command line's worker threads (core/cli/workers/) and the
- * app's Web Workers (renderer/study/studyWorker.ts): the task and reply messages (plain,
+ * app's Web Workers (renderer/study/study-worker.ts): the task and reply messages (plain,
  * structured-cloneable data) and the handler both kinds of worker run. Every task is a loop around the one
  * pipeline (`evaluateScenario`); progress is posted every few runs so the caller can draw a bar.
  */

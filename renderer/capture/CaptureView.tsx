@@ -5,7 +5,7 @@
  */
 import { useMemo } from "react";
 import type { UnitSystem } from "../../core/units";
-import { runFile } from "../engine/runFile";
+import { runFile } from "../engine/run-file";
 import { PlumeView } from "../view3d/PlumeView";
 
 function markError(message: string): void {

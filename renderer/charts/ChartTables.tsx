@@ -4,7 +4,6 @@
  * about 60 rows, always keeping the first and last point.
  */
 import type { BrinefieldResult } from "../../core/result/contract";
-import type { Scenario } from "../../core/scenario/types";
 import { formatNumber, siToDisplay, type UnitSystem } from "../../core/units";
 import {
   distanceSeries,
@@ -13,7 +12,8 @@ import {
   salinityIncreaseLimit,
   trajectorySeries,
   type MethodMarker,
-} from "./chartData";
+  type SideViewProps,
+} from "./chart-data";
 
 /** Every n-th item so that at most `max` remain, first and last always kept. */
 export function thinned<T>(items: readonly T[], max = 60): T[] {
@@ -63,15 +63,7 @@ function MarkerRows({
   );
 }
 
-export function TrajectoryTable({
-  result,
-  scenario,
-  unitSystem,
-}: {
-  result: BrinefieldResult;
-  scenario: Scenario;
-  unitSystem: UnitSystem;
-}) {
+export function TrajectoryTable({ result, scenario, unitSystem }: SideViewProps) {
   const unit = siToDisplay(1, "length", unitSystem).unit;
   const points = thinned(trajectorySeries(result, scenario, unitSystem));
   return (

@@ -6,14 +6,15 @@
 import { line, scaleLinear, scaleLog, type ScaleLinear, type ScaleLogarithmic } from "d3";
 import type { BrinefieldResult } from "../../core/result/contract";
 import { formatNumber, siToDisplay, type UnitSystem } from "../../core/units";
-import { useSize } from "../ui/useSize";
+import { useSize } from "../ui/use-size";
 import {
   distanceSeries,
   impactDilutionMarkers,
   salinityIncreaseLimit,
   type DistanceSeriesPoint,
   type MethodMarker,
-} from "./chartData";
+} from "./chart-data";
+import { XGridTicks } from "./XGridTicks";
 
 const MARGIN = { top: 26, right: 14, bottom: 34, left: 52 };
 
@@ -68,14 +69,7 @@ export function DistanceChart({ result, unitSystem, quantity }: Props) {
   return (
     <div className="chart" ref={ref} data-role={`${quantity}-chart`}>
       <svg width={width} height={height} role="img" aria-label={`${label} against distance from the diffuser`}>
-        {x.ticks(6).map((t) => (
-          <g key={`x${t}`} transform={`translate(${x(t)},0)`}>
-            <line className="gridline" y1={MARGIN.top} y2={height - MARGIN.bottom} />
-            <text className="tick" y={height - MARGIN.bottom + 14} textAnchor="middle">
-              {formatNumber(t)}
-            </text>
-          </g>
-        ))}
+        <XGridTicks ticks={x.ticks(6)} at={x} top={MARGIN.top} bottom={height - MARGIN.bottom} />
         {y.ticks(4).map((t, i) => (
           <g key={`y${i}`} transform={`translate(0,${y(t)})`}>
             <line className="gridline minor" x1={MARGIN.left} x2={width - MARGIN.right} />

@@ -1,23 +1,14 @@
 /** Side view of the jet: centreline and half-width band above the seabed, water surface, method markers. */
 import { area, line, scaleLinear } from "d3";
-import type { BrinefieldResult } from "../../core/result/contract";
-import type { Scenario } from "../../core/scenario/types";
-import { formatNumber, siToDisplay, type UnitSystem } from "../../core/units";
-import { useSize } from "../ui/useSize";
-import { riseMarkers, trajectorySeries } from "./chartData";
-import { dilutionColour, dilutionDomain, rgbToHex } from "../view3d/colourScale";
+import { formatNumber, siToDisplay } from "../../core/units";
+import { useSize } from "../ui/use-size";
+import { riseMarkers, trajectorySeries, type SideViewProps } from "./chart-data";
+import { dilutionColour, dilutionDomain, rgbToHex } from "../view3d/colour-scale";
+import { XGridTicks } from "./XGridTicks";
 
 const MARGIN = { top: 26, right: 14, bottom: 34, left: 46 };
 
-export function TrajectoryChart({
-  result,
-  scenario,
-  unitSystem,
-}: {
-  result: BrinefieldResult;
-  scenario: Scenario;
-  unitSystem: UnitSystem;
-}) {
+export function TrajectoryChart({ result, scenario, unitSystem }: SideViewProps) {
   const [ref, size] = useSize<HTMLDivElement>();
   const points = trajectorySeries(result, scenario, unitSystem);
   const markers = riseMarkers(result, scenario, unitSystem);
@@ -67,14 +58,7 @@ export function TrajectoryChart({
           width={x.range()[1] - x.range()[0]}
           height={y(0) - y(depth)}
         />
-        {x.ticks(6).map((t) => (
-          <g key={`x${t}`} transform={`translate(${x(t)},0)`}>
-            <line className="gridline" y1={MARGIN.top} y2={height - MARGIN.bottom} />
-            <text className="tick" y={height - MARGIN.bottom + 14} textAnchor="middle">
-              {formatNumber(t)}
-            </text>
-          </g>
-        ))}
+        <XGridTicks ticks={x.ticks(6)} at={x} top={MARGIN.top} bottom={height - MARGIN.bottom} />
         {y.ticks(5).map((t) => (
           <g key={`y${t}`} transform={`translate(0,${y(t)})`}>
             <line className="gridline" x1={MARGIN.left} x2={width - MARGIN.right} />

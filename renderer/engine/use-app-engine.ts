@@ -3,8 +3,8 @@
  * long ambient record, the record's full result from the study workers in its place.
  */
 import { useMemo } from "react";
-import { useRecordRun } from "../record/useRecordRun";
-import { useEngine } from "./useEngine";
+import { useRecordRun } from "../record/use-record-run";
+import { useEngine } from "./use-engine";
 
 export function useAppEngine(file: unknown) {
   const engineRun = useEngine(file);

@@ -4,7 +4,7 @@
  */
 import { useCallback, useEffect, useRef } from "react";
 import type { BrinefieldResult } from "../../core/result/contract";
-import { exportBlocked, type EngineState } from "./useEngine";
+import { exportBlocked, type EngineState } from "./use-engine";
 
 export function useWhenResultsCurrent(
   engine: Pick<EngineState, "result" | "error" | "running">,

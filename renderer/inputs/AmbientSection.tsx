@@ -1,11 +1,10 @@
 /** Receiving water: depth, uniform or profiled salinity and temperature, current and bed slope. */
-import { useRef, useState } from "react";
 import { addProfileRow, removeArrayItem, replaceProfile, setAmbientMode } from "../state/actions";
-import { getAtPath } from "../state/scenarioState";
+import { getAtPath } from "../state/scenario-state";
 import { useEditor } from "./EditorContext";
 import { QuantityField, SectionIssues } from "./fields";
-import { parseProfileText } from "./profileText";
-import { readDroppedFile } from "../platform/host";
+import { parseProfileText } from "./profile-text";
+import { ImportFileInput, PasteBoxAndErrors, useTextImport, type TextImport } from "./TextImport";
 
 export function AmbientSection() {
   const editor = useEditor();
@@ -100,21 +99,11 @@ export function AmbientSection() {
 /** State of the profile import (paste box and CSV file), kept while the water column switches mode. */
 function useProfileImport() {
   const editor = useEditor();
-  const [pasteOpen, setPasteOpen] = useState(false);
-  const [pasteText, setPasteText] = useState("");
-  const [pasteErrors, setPasteErrors] = useState<string[]>([]);
-  const fileInput = useRef<HTMLInputElement | null>(null);
-
-  const importText = (text: string) => {
+  return useTextImport((text) => {
     const parsed = parseProfileText(text);
-    setPasteErrors(parsed.errors);
-    if (parsed.errors.length === 0) {
-      editor.perform(replaceProfile, { rows: parsed.rows });
-      setPasteOpen(false);
-      setPasteText("");
-    }
-  };
-  return { pasteOpen, setPasteOpen, pasteText, setPasteText, pasteErrors, setPasteErrors, fileInput, importText };
+    if (parsed.errors.length === 0) editor.perform(replaceProfile, { rows: parsed.rows });
+    return parsed.errors;
+  });
 }
 
 /** One editable row per profile point: depth, salinity, temperature and a remove button. */
@@ -166,70 +155,30 @@ function ProfileTable({ rows }: { readonly rows: number }) {
 }
 
 /** Add a row, paste rows from a spreadsheet or load a CSV file; errors from either are listed. */
-function ProfileImport({ importer }: { readonly importer: ReturnType<typeof useProfileImport> }) {
+function ProfileImport({ importer }: { readonly importer: TextImport }) {
   const editor = useEditor();
-  const { pasteOpen, setPasteOpen, pasteText, setPasteText, pasteErrors, setPasteErrors, fileInput, importText } =
-    importer;
   return (
     <>
       <div className="button-row">
         <button type="button" className="link-button" onClick={() => editor.perform(addProfileRow, undefined)}>
           + Add row
         </button>
-        <button type="button" className="link-button" onClick={() => setPasteOpen((o) => !o)}>
+        <button type="button" className="link-button" onClick={() => importer.setPasteOpen((o) => !o)}>
           Paste from spreadsheet…
         </button>
-        <button type="button" className="link-button" onClick={() => fileInput.current?.click()}>
+        <button type="button" className="link-button" onClick={() => importer.fileInput.current?.click()}>
           Load CSV…
         </button>
-        <input
-          ref={fileInput}
-          type="file"
-          accept=".csv,.tsv,.txt,text/csv"
-          hidden
-          data-role="profile-csv-input"
-          onChange={(event) => {
-            const file = event.target.files?.[0];
-            if (file) {
-              readDroppedFile(file).then(
-                (opened) => importText(opened.text),
-                (error: unknown) =>
-                  setPasteErrors([`${file.name}: ${error instanceof Error ? error.message : String(error)}`]),
-              );
-            }
-            event.target.value = "";
-          }}
-        />
+        <ImportFileInput importer={importer} role="profile-csv-input" />
       </div>
-      {pasteOpen ? (
-        <div className="paste-box">
-          <label htmlFor="profile-paste">
-            Paste rows: depth, salinity, temperature (header optional; units in brackets, e.g. "depth (ft)")
-          </label>
-          <textarea
-            id="profile-paste"
-            rows={5}
-            value={pasteText}
-            onChange={(e) => setPasteText(e.target.value)}
-            spellCheck={false}
-          />
-          <div className="button-row">
-            <button type="button" onClick={() => importText(pasteText)}>
-              Use these rows
-            </button>
-            <button type="button" className="link-button" onClick={() => setPasteOpen(false)}>
-              Cancel
-            </button>
-          </div>
-        </div>
-      ) : null}
-      {pasteErrors.length ? (
-        <div className="section-issues" role="alert">
-          {pasteErrors.map((e, i) => (
-            <div key={i}>{e}</div>
-          ))}
-        </div>
-      ) : null}
+      <PasteBoxAndErrors
+        importer={importer}
+        id="profile-paste"
+        label={'Paste rows: depth, salinity, temperature (header optional; units in brackets, e.g. "depth (ft)")'}
+        rows={5}
+        useLabel="Use these rows"
+        source="pasted rows"
+      />
     </>
   );
 }

@@ -2,11 +2,11 @@
 import { defaultDiffuserAzimuth } from "../../core/scenario/normalise";
 import type { DiffuserInput } from "../../core/scenario/types";
 import { setLayout } from "../state/actions";
-import { getAtPath, isPlainObject } from "../state/scenarioState";
+import { getAtPath, isPlainObject } from "../state/scenario-state";
 import { useEditor } from "./EditorContext";
 import { ChoiceField, CountField, QuantityField, SectionIssues } from "./fields";
 import { DiffuserSketch } from "./DiffuserSketch";
-import { siNumber } from "./quantityText";
+import { siNumber } from "./quantity-text";
 
 const LAYOUTS = [
   { value: "single", label: "Single port" },

@@ -1,7 +1,7 @@
 /** Small plan sketch of the diffuser: ports, their azimuths, the diffuser axis, north and the current. */
 import type { DiffuserInput } from "../../core/scenario/types";
 import { formatNumber, siToDisplay, type UnitSystem } from "../../core/units";
-import { azimuthToEastNorth } from "../view3d/plumeGeometry";
+import { azimuthToEastNorth } from "../view3d/plume-geometry";
 import { portPlacements } from "../view3d/ports";
 
 export function DiffuserSketch(props: {

@@ -1,6 +1,6 @@
 /** Discharge: given directly (flow, salinity, temperature) or from plant data, plus constituents. */
 import { appendArrayItem, removeArrayItem, setDischargeSource } from "../state/actions";
-import { getAtPath, isPlainObject } from "../state/scenarioState";
+import { getAtPath, isPlainObject } from "../state/scenario-state";
 import { useEditor } from "./EditorContext";
 import { QuantityField, SectionIssues, TextField } from "./fields";
 

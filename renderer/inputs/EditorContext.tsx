@@ -3,7 +3,7 @@ import { createContext, useContext } from "react";
 import type { UnitSystem } from "../../core/units";
 import type { Scenario } from "../../core/scenario/types";
 import type { Action } from "../state/actions";
-import type { ScenarioFile } from "../state/scenarioState";
+import type { ScenarioFile } from "../state/scenario-state";
 
 export interface Editor {
   readonly file: ScenarioFile;

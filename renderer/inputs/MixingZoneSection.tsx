@@ -1,6 +1,6 @@
 /** Mixing zone radius and the limits that apply at its edge; method choices. */
 import { appendArrayItem, removeArrayItem, setField } from "../state/actions";
-import { getAtPath, isPlainObject } from "../state/scenarioState";
+import { getAtPath, isPlainObject } from "../state/scenario-state";
 import { useEditor } from "./EditorContext";
 import { ChoiceField, QuantityField, SectionIssues, TextField } from "./fields";
 

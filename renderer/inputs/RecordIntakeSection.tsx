@@ -2,13 +2,12 @@
  * Records and the intake: import an ambient record from CSV or a paste (saved in the scenario as
  * `ambient.record`), the time share of `mixingZone.timeCompliance`, and the plant's `intake`.
  */
-import { useRef, useState } from "react";
 import { setField } from "../state/actions";
-import { getAtPath } from "../state/scenarioState";
+import { getAtPath } from "../state/scenario-state";
 import { useEditor } from "./EditorContext";
 import { QuantityField, SectionIssues } from "./fields";
 import { recordFromCsv, RECORD_COLUMNS } from "../../core/record/csv";
-import { readDroppedFile } from "../platform/host";
+import { ImportFileInput, PasteBoxAndErrors, useTextImport, type TextImport } from "./TextImport";
 
 export function RecordIntakeSection() {
   const editor = useEditor();
@@ -75,39 +74,27 @@ export function RecordIntakeSection() {
 /** State of the record import (paste box and CSV file); a good import replaces `ambient.record` whole. */
 function useRecordImport() {
   const editor = useEditor();
-  const [pasteOpen, setPasteOpen] = useState(false);
-  const [pasteText, setPasteText] = useState("");
-  const [errors, setErrors] = useState<string[]>([]);
-  const fileInput = useRef<HTMLInputElement | null>(null);
-
-  const importText = (text: string, source: string) => {
+  return useTextImport((text, source) => {
     const r = recordFromCsv(text, source);
-    if (!r.ok) {
-      setErrors([r.message]);
-      return;
-    }
-    setErrors([]);
+    if (!r.ok) return [r.message];
     // The whole record is replaced: columns the new one lacks are removed (the patch merges otherwise).
     const value = Object.fromEntries(RECORD_COLUMNS.map((c) => [c, r.record[c]]));
     editor.perform(setField, { path: "ambient.record", value });
-    setPasteOpen(false);
-    setPasteText("");
-  };
-  return { pasteOpen, setPasteOpen, pasteText, setPasteText, errors, setErrors, fileInput, importText };
+    return [];
+  });
 }
 
 /** Load, paste or remove the ambient record; import errors are listed under the buttons. */
-function RecordImport(props: { readonly importer: ReturnType<typeof useRecordImport>; readonly steps: number }) {
+function RecordImport(props: { readonly importer: TextImport; readonly steps: number }) {
   const editor = useEditor();
-  const { steps } = props;
-  const { pasteOpen, setPasteOpen, pasteText, setPasteText, errors, setErrors, fileInput, importText } = props.importer;
+  const { importer, steps } = props;
   return (
     <>
       <div className="button-row">
         <button
           type="button"
           className="link-button"
-          onClick={() => fileInput.current?.click()}
+          onClick={() => importer.fileInput.current?.click()}
           data-command="record-load"
         >
           Load record CSV…
@@ -115,7 +102,7 @@ function RecordImport(props: { readonly importer: ReturnType<typeof useRecordImp
         <button
           type="button"
           className="link-button"
-          onClick={() => setPasteOpen((o) => !o)}
+          onClick={() => importer.setPasteOpen((o) => !o)}
           data-command="record-paste"
         >
           Paste record…
@@ -130,60 +117,22 @@ function RecordImport(props: { readonly importer: ReturnType<typeof useRecordImp
             Remove record
           </button>
         ) : null}
-        <input
-          ref={fileInput}
-          type="file"
-          accept=".csv,.tsv,.txt,text/csv"
-          hidden
-          data-role="record-csv-input"
-          onChange={(event) => {
-            const file = event.target.files?.[0];
-            if (file) {
-              readDroppedFile(file).then(
-                (opened) => importText(opened.text, file.name),
-                (error: unknown) =>
-                  setErrors([`${file.name}: ${error instanceof Error ? error.message : String(error)}`]),
-              );
-            }
-            event.target.value = "";
-          }}
-        />
+        <ImportFileInput importer={importer} role="record-csv-input" />
       </div>
-      {pasteOpen ? (
-        <div className="paste-box">
-          <label htmlFor="record-paste">
-            Paste the record with a header naming the columns, units in brackets: time (h), currentSpeed (m/s),
-            currentDirection (deg), and optionally depth (m), salinity (g/kg), temperature (degC)
-          </label>
-          <textarea
-            id="record-paste"
-            rows={6}
-            value={pasteText}
-            onChange={(e) => setPasteText(e.target.value)}
-            spellCheck={false}
-            data-role="record-paste-text"
-          />
-          <div className="button-row">
-            <button
-              type="button"
-              onClick={() => importText(pasteText, "pasted record")}
-              data-command="record-use-paste"
-            >
-              Use this record
-            </button>
-            <button type="button" className="link-button" onClick={() => setPasteOpen(false)}>
-              Cancel
-            </button>
-          </div>
-        </div>
-      ) : null}
-      {errors.length ? (
-        <div className="section-issues" role="alert" data-role="record-errors">
-          {errors.map((e, i) => (
-            <div key={i}>{e}</div>
-          ))}
-        </div>
-      ) : null}
+      <PasteBoxAndErrors
+        importer={importer}
+        id="record-paste"
+        label={
+          "Paste the record with a header naming the columns, units in brackets: time (h), currentSpeed (m/s), " +
+          "currentDirection (deg), and optionally depth (m), salinity (g/kg), temperature (degC)"
+        }
+        rows={6}
+        useLabel="Use this record"
+        source="pasted record"
+        textRole="record-paste-text"
+        useCommand="record-use-paste"
+        errorsRole="record-errors"
+      />
     </>
   );
 }

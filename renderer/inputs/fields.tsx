@@ -5,9 +5,9 @@
 import { useId, useState, type ReactNode } from "react";
 import type { QuantityKind } from "../../core/units";
 import { setField } from "../state/actions";
-import { getAtPath } from "../state/scenarioState";
+import { getAtPath } from "../state/scenario-state";
 import { issuesUnder, useEditor } from "./EditorContext";
-import { fieldView, storedValueInField } from "./quantityText";
+import { fieldView, storedValueInField } from "./quantity-text";
 
 function FieldShell(props: {
   id: string;

@@ -6,7 +6,7 @@ import type { BrinefieldResult } from "../../core/result/contract";
 import { formatNumber } from "../../core/units";
 import { recordDilutionSvg, recordDurationSvg, recordIncreaseSvg } from "../../core/record/charts";
 import { recordLines, intakeLines } from "../../core/record/text";
-import type { RecordRun } from "./useRecordRun";
+import type { RecordRun } from "./use-record-run";
 
 export function RecordStatus({ run, steps }: { run: RecordRun; steps: number }) {
   if (steps === 0) return null;

@@ -1,6 +1,6 @@
 /** How the results show a quantity (number and unit in the chosen system) and a dilution (number, ×, range). */
 import { formatNumber, type QuantityKind, type UnitSystem } from "../../core/units";
-import { formatQuantity } from "../inputs/quantityText";
+import { formatQuantity } from "../inputs/quantity-text";
 
 export function Q({
   value,

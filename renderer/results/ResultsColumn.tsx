@@ -2,9 +2,9 @@
 import { CAUTION } from "../../core/result/contract";
 import type { Scenario } from "../../core/scenario/types";
 import type { UnitSystem } from "../../core/units";
-import type { EngineState } from "../engine/useEngine";
+import type { EngineState } from "../engine/use-engine";
 import { RecordStatus, RecordSummary } from "../record/RecordPanel";
-import type { RecordRun } from "../record/useRecordRun";
+import type { RecordRun } from "../record/use-record-run";
 import { ClaimPanel } from "./ClaimPanel";
 import { ResultsPanel } from "./ResultsPanel";
 

@@ -2,7 +2,7 @@
  * Results: the verdict with its margin, headline numbers per near-field method side by side, the
  * mixing-zone edge, multiport regime, discharge properties, warnings and the sources of every method.
  */
-import type { BrinefieldResult, Verdict } from "../../core/result/contract";
+import { overallOf, scopeReasonsOf, type BrinefieldResult, type Verdict } from "../../core/result/contract";
 import type { NearFieldMethodResult } from "../../core/nearfield/types";
 import { formatNumber, type UnitSystem } from "../../core/units";
 import { D, Q } from "./QuantityCells";
@@ -32,17 +32,10 @@ const VERDICT_LOOK: Record<Verdict, { cls: string; word: string }> = {
 
 export function VerdictBanner({ result }: { result: BrinefieldResult }) {
   const c = result.compliance;
-  const o = result.overall ?? {
-    verdict: c.verdict,
-    governingCase: "stated",
-    margin: c.margin,
-    edgeDilution: result.mixingZone.dilution,
-  };
+  const o = overallOf(result);
   const look = VERDICT_LOOK[o.verdict];
   const cases = result.cases ?? [];
-  const reasons = [
-    ...new Set(cases.flatMap((k) => k.scopeReasons.map((r) => (k.name === "stated" ? r : `${k.name}: ${r}`)))),
-  ];
+  const reasons = scopeReasonsOf(result);
   return (
     <div className={`verdict ${look.cls}`} data-role="verdict" data-verdict={o.verdict}>
       <div className="verdict-word">

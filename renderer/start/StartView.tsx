@@ -1,5 +1,5 @@
 /** Start view: demo scenarios, recent files, a new blank scenario, open from disk. */
-import { useModal } from "../ui/useModal";
+import { useModal } from "../ui/use-modal";
 import type { DemoScenario } from "../demos";
 
 export interface StartViewProps {

@@ -9,7 +9,7 @@ import {
   updateScenario,
   type DocumentState,
   type ScenarioFile,
-} from "./scenarioState";
+} from "./scenario-state";
 
 export interface Action<Input> {
   readonly name: string;

@@ -2,7 +2,7 @@
  * Undo and redo over document states. Edits to the same field within `mergeWindowMs` merge into one
  * step, so typing "45" is one undo, not two. Loading another document starts a fresh history.
  */
-import type { DocumentState } from "./scenarioState";
+import type { DocumentState } from "./scenario-state";
 
 export interface History {
   readonly past: readonly DocumentState[];

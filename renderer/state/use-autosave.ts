@@ -6,8 +6,8 @@
 import { useCallback, useEffect, useState, type MutableRefObject } from "react";
 import * as host from "../platform/host";
 import { errorText, logFailure } from "../platform/log-failure";
-import type { DocumentState } from "./scenarioState";
-import { serialiseDocument } from "./studyDocument";
+import type { DocumentState } from "./scenario-state";
+import { serialiseDocument } from "./study-document";
 
 export const AUTOSAVE_INTERVAL_MS = 5000;
 

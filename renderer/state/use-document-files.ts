@@ -8,8 +8,8 @@ import * as host from "../platform/host";
 import { errorText, logFailure } from "../platform/log-failure";
 import type { ConfirmRequest } from "../ui/ConfirmDialog";
 import { historyStart } from "./history";
-import { documentFromFile, type DocumentState } from "./scenarioState";
-import { documentFromText, documentName, serialiseDocument, suggestedDocumentName } from "./studyDocument";
+import { documentFromFile, type DocumentState } from "./scenario-state";
+import { documentFromText, documentName, serialiseDocument, suggestedDocumentName } from "./study-document";
 import type { DocumentHistory } from "./use-document-history";
 
 /** What the files touch of the window: the start view and the main tab. */

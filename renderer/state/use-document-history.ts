@@ -9,8 +9,8 @@ import { logFailure } from "../platform/log-failure";
 import * as host from "../platform/host";
 import type { Action } from "./actions";
 import { historyPush, historyRedo, historyReplace, historyStart, historyUndo, type History } from "./history";
-import { blankScenario, documentFromFile, type DocumentState, type ScenarioFile } from "./scenarioState";
-import { documentName, type StudyPart } from "./studyDocument";
+import { blankScenario, documentFromFile, type DocumentState, type ScenarioFile } from "./scenario-state";
+import { documentName, type StudyPart } from "./study-document";
 
 /** The file and study part as on disk, or null when nothing of the document is on disk. */
 export type SavedFile = { file: ScenarioFile; study: StudyPart | null } | null;

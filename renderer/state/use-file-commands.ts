@@ -10,9 +10,9 @@ import type { DemoScenario } from "../demos";
 import { exportReport, exportSeriesCsv, printReportInBrowser } from "../exports";
 import * as host from "../platform/host";
 import { logFailure } from "../platform/log-failure";
-import { useFileDrop } from "../ui/useFileDrop";
-import { blankScenario, documentFromFile, suggestedFileName, type ScenarioFile } from "./scenarioState";
-import { documentFromText } from "./studyDocument";
+import { useFileDrop } from "../ui/use-file-drop";
+import { blankScenario, documentFromFile, suggestedFileName, type ScenarioFile } from "./scenario-state";
+import { documentFromText } from "./study-document";
 import type { FileView, useDocumentFiles } from "./use-document-files";
 import type { DocumentHistory } from "./use-document-history";
 

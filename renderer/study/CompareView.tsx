@@ -8,8 +8,8 @@ import { useState } from "react";
 import { formatNumber, siToDisplay, type UnitSystem } from "../../core/units";
 import { columnsOf, sortRows, type FlatRow } from "../../core/study/compare";
 import { logTicks } from "../../core/report/figures";
-import { useSize } from "../ui/useSize";
-import { isLengthColumn } from "./variantsCsv";
+import { useSize } from "../ui/use-size";
+import { isLengthColumn } from "./variants-csv";
 
 const DEFAULT_COLUMNS = [
   "variant",

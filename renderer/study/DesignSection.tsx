@@ -9,7 +9,7 @@ import { candidateOverrides, designConstraintsFrom, planDesignSearch } from "../
 import { designOutcome, type DesignOutcome } from "../../core/study/design-rank";
 import { expandCases } from "../../core/cases";
 import type { RunPoints } from "./sections";
-import { isPlainObject, scenarioName, type ScenarioFile } from "../state/scenarioState";
+import { isPlainObject, scenarioName, type ScenarioFile } from "../state/scenario-state";
 
 export function DesignSection({
   scenario,

@@ -9,15 +9,15 @@ import { useEffect, useState } from "react";
 import type { Scenario } from "../../core/scenario/types";
 import type { UnitSystem } from "../../core/units";
 import { describeCases, expandCases } from "../../core/cases";
-import { sharedStudyPool } from "./workerPool";
+import { sharedStudyPool } from "./worker-pool";
 import { useStudyJobs, type StudyJob } from "./use-study-jobs";
 import { useStudyScenario } from "./use-study-scenario";
 import { VariantsSection } from "./VariantsSection";
 import { SweepSection } from "./SweepSection";
 import { DesignSection } from "./DesignSection";
 import { MonteCarloSection } from "./MonteCarloSection";
-import type { ScenarioFile } from "../state/scenarioState";
-import type { StudyPart } from "../state/studyDocument";
+import type { ScenarioFile } from "../state/scenario-state";
+import type { StudyPart } from "../state/study-document";
 import "./study.css";
 
 type Section = "variants" | "sweep" | "design" | "monte-carlo";

@@ -2,8 +2,8 @@
 import { Suspense, lazy } from "react";
 import { CAUTION } from "../../core/result/contract";
 import type { UnitSystem } from "../../core/units";
-import type { ScenarioFile } from "../state/scenarioState";
-import type { StudyPart } from "../state/studyDocument";
+import type { ScenarioFile } from "../state/scenario-state";
+import type { StudyPart } from "../state/study-document";
 
 // The Study tab loads on first use (its own workers and charts stay out of the first screen).
 const StudyPanel = lazy(() => import("./StudyPanel").then((m) => ({ default: m.StudyPanel })));

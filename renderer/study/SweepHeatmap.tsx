@@ -5,7 +5,7 @@
 import { contours, geoPath, interpolateRdYlGn, scaleSequential, type ContourMultiPolygon } from "d3";
 import type { SweepRow } from "../../core/study/sweep";
 import { formatNumber } from "../../core/units";
-import { useSize } from "../ui/useSize";
+import { useSize } from "../ui/use-size";
 import { M, XLabel, YLabel, readableLogTicks, type GridAxis } from "./charts";
 
 export function SweepHeatmap({ rows, axes }: { rows: readonly SweepRow[]; axes: readonly [GridAxis, GridAxis] }) {

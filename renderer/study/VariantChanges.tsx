@@ -4,8 +4,8 @@
  */
 import { fieldBounds } from "../../core/scenario/bounds";
 import { siToDisplay } from "../../core/units";
-import { getAtPath, type ScenarioFile } from "../state/scenarioState";
-import { pathWords } from "../state/studyDocument";
+import { getAtPath, type ScenarioFile } from "../state/scenario-state";
+import { pathWords } from "../state/study-document";
 
 /** A value as entered, with the SI unit when it is a bare number of a field with a unit. */
 function valueText(path: string, value: unknown): string {

@@ -8,14 +8,14 @@ import { DischargeSection } from "../inputs/DischargeSection";
 import { EditorContext, type Editor } from "../inputs/EditorContext";
 import { MixingZoneSection } from "../inputs/MixingZoneSection";
 import type { Action } from "../state/actions";
-import { documentFromFile, type ScenarioFile } from "../state/scenarioState";
+import { documentFromFile, type ScenarioFile } from "../state/scenario-state";
 import {
   overridesBetween,
   variantScenario,
   withVariant,
   type StudyPart,
   type StudyVariantDoc,
-} from "../state/studyDocument";
+} from "../state/study-document";
 import { ChangedMarker, VariantChanges } from "./VariantChanges";
 
 interface EditorProps {

@@ -1,5 +1,5 @@
 /** The study's variants as a list to pick one from, and the invitation to start a study. */
-import type { StudyVariantDoc } from "../state/studyDocument";
+import type { StudyVariantDoc } from "../state/study-document";
 
 interface ListProps {
   readonly variants: readonly StudyVariantDoc[];

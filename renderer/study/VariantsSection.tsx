@@ -5,8 +5,8 @@
  * they are saved, autosaved, undone and kept across tab switches; any variant opens as a scenario.
  */
 import type { UnitSystem } from "../../core/units";
-import { scenarioName, type ScenarioFile } from "../state/scenarioState";
-import { variantScenario, type StudyPart } from "../state/studyDocument";
+import { scenarioName, type ScenarioFile } from "../state/scenario-state";
+import { variantScenario, type StudyPart } from "../state/study-document";
 import type { RunJob } from "./sections";
 import { CompareView } from "./CompareView";
 import { VariantEditor } from "./VariantEditor";

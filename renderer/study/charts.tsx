@@ -9,7 +9,8 @@ import { formatNumber } from "../../core/units";
 import { logTicks } from "../../core/report/figures";
 import { uncertaintyHistogramSvg } from "../../core/report/uncertainty";
 import type { MonteCarloStats } from "../../core/study/montecarlo";
-import { useSize } from "../ui/useSize";
+import { useSize } from "../ui/use-size";
+import { XGridTicks } from "../charts/XGridTicks";
 
 export const M = { top: 20, right: 16, bottom: 40, left: 60 };
 
@@ -97,14 +98,7 @@ export function SweepLineChart({ rows, axis }: { rows: readonly SweepRow[]; axis
     <div className="sweep-chart-block">
       <div className="chart study-chart" ref={ref} data-role="sweep-line-chart">
         <svg width={w} height={h} role="img" aria-label={`Edge dilution against ${axis.label}`}>
-          {x.ticks(linearTickCount(w - M.left - M.right)).map((t) => (
-            <g key={`x${t}`} transform={`translate(${x(t)},0)`}>
-              <line className="gridline" y1={M.top} y2={h - M.bottom} />
-              <text className="tick" y={h - M.bottom + 14} textAnchor="middle">
-                {formatNumber(t)}
-              </text>
-            </g>
-          ))}
+          <XGridTicks ticks={x.ticks(linearTickCount(w - M.left - M.right))} at={x} top={M.top} bottom={h - M.bottom} />
           {readableLogTicks(y.domain()[0]!, y.domain()[1]!, (v) => y(v), 18).map((t, i) => (
             <g key={`y${i}`} transform={`translate(0,${y(t)})`}>
               <line className="gridline" x1={M.left} x2={w - M.right} />

@@ -4,7 +4,7 @@ import { siToDisplay, type UnitSystem } from "../../core/units";
 import { OVERRIDE_PATHS, type Overrides } from "../../core/study/overrides";
 import type { PointEvaluation } from "../../core/study/evaluate-point";
 import type { StudyTask } from "../../core/study/worker-protocol";
-import type { StudyWorkerPool } from "./workerPool";
+import type { StudyWorkerPool } from "./worker-pool";
 import type { AxisDisplay } from "./charts";
 
 export type Replies = Awaited<ReturnType<StudyWorkerPool["run"]>>;

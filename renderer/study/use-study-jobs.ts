@@ -5,7 +5,7 @@ import type { Overrides } from "../../core/study/overrides";
 import { splitRuns } from "../../core/study/montecarlo";
 import type { PointEvaluation } from "../../core/study/evaluate-point";
 import type { StudyTask } from "../../core/study/worker-protocol";
-import { StudyCancelled, type StudyWorkerPool } from "./workerPool";
+import { StudyCancelled, type StudyWorkerPool } from "./worker-pool";
 import type { Replies } from "./sections";
 
 export interface StudyJob {

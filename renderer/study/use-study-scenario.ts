@@ -1,8 +1,8 @@
 /** The Study tab's reading of the document: core's normalised scenario, or why it cannot be read. */
 import { useEffect, useState } from "react";
 import type { Scenario } from "../../core/scenario/types";
-import type { ScenarioFile } from "../state/scenarioState";
-import { StudyWorkerPool } from "./workerPool";
+import type { ScenarioFile } from "../state/scenario-state";
+import { StudyWorkerPool } from "./worker-pool";
 
 /** Reads the document in a worker whenever it changes while `active` (debounced: typing should not queue work). */
 export function useStudyScenario(

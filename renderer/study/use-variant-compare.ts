@@ -6,10 +6,10 @@ import { useState } from "react";
 import { flattenRow, type FlatRow } from "../../core/study/compare";
 import type { StudyTask } from "../../core/study/worker-protocol";
 import { exportFile } from "../platform/host";
-import type { ScenarioFile } from "../state/scenarioState";
-import { serialiseDocument, suggestedDocumentName, type StudyPart } from "../state/studyDocument";
+import type { ScenarioFile } from "../state/scenario-state";
+import { serialiseDocument, suggestedDocumentName, type StudyPart } from "../state/study-document";
 import type { RunJob } from "./sections";
-import { variantsCsv } from "./variantsCsv";
+import { variantsCsv } from "./variants-csv";
 
 export function useVariantCompare(
   scenarioFile: ScenarioFile,

@@ -3,8 +3,8 @@
  * study, adding, duplicating and removing variants (each one change of the study part, one undo step).
  */
 import { useState } from "react";
-import type { ScenarioFile } from "../state/scenarioState";
-import { freshVariantName, newStudyPart, type StudyPart, type StudyVariantDoc } from "../state/studyDocument";
+import type { ScenarioFile } from "../state/scenario-state";
+import { freshVariantName, newStudyPart, type StudyPart, type StudyVariantDoc } from "../state/study-document";
 
 export function useVariantSelection(
   scenarioFile: ScenarioFile,

@@ -1,6 +1,6 @@
 /** A small modal question with keyboard focus on the safe choice; Escape cancels. */
 import { useRef } from "react";
-import { useModal } from "./useModal";
+import { useModal } from "./use-modal";
 
 export interface ConfirmRequest {
   readonly title: string;

@@ -1,6 +1,6 @@
 /** The window's top bar: the File commands, the document's title and state, the view tabs and the units. */
 import type { UnitSystem } from "../../core/units";
-import type { DocumentState } from "../state/scenarioState";
+import type { DocumentState } from "../state/scenario-state";
 import type { FileCommands } from "../state/use-file-commands";
 import type { useTabs } from "./Tabs";
 

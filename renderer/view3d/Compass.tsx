@@ -6,7 +6,7 @@
 import { forwardRef } from "react";
 import { Vector3, type Camera } from "three";
 import { formatNumber, siToDisplay, type UnitSystem } from "../../core/units";
-import { azimuthToEastNorth, worldToScene } from "./plumeGeometry";
+import { azimuthToEastNorth, worldToScene } from "./plume-geometry";
 
 /**
  * Where a plan direction (degrees clockwise from north) points on screen, in degrees clockwise from

@@ -2,7 +2,7 @@
  * Colour bar for dilution (log axis) with tick numbers, plus the key to the lines the 3D view draws —
  * only those it draws for this result, with their distances.
  */
-import { dilutionTicks, dilutionToUnit, rampGradientCss, type DilutionDomain } from "./colourScale";
+import { dilutionTicks, dilutionToUnit, rampGradientCss, type DilutionDomain } from "./colour-scale";
 import { formatNumber, siToDisplay, type UnitSystem } from "../../core/units";
 
 export interface LegendContent {

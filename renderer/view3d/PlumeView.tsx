@@ -1,5 +1,5 @@
 /**
- * The 3D view: draws the scene from plumeScene.ts with orbit/zoom, reset and preset views, a dilution
+ * The 3D view: draws the scene from plume-scene.ts with orbit/zoom, reset and preset views, a dilution
  * legend with numbers, and renders only on demand (no animation loop) so it stays cheap on software WebGL.
  */
 import { useCallback, useEffect, useRef, useState, type RefObject } from "react";
@@ -7,7 +7,7 @@ import { WebGLRenderer } from "three";
 import type { BrinefieldResult } from "../../core/result/contract";
 import type { Scenario } from "../../core/scenario/types";
 import type { UnitSystem } from "../../core/units";
-import { buildPlumeScene, type PlumeSceneOutput } from "./plumeScene";
+import { buildPlumeScene, type PlumeSceneOutput } from "./plume-scene";
 import { DilutionLegend, type LegendContent } from "./DilutionLegend";
 import { Compass } from "./Compass";
 import { drawFrame, mountStage, placeCamera, type Stage, type ViewPreset } from "./plume-stage";

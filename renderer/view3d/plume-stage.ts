@@ -13,8 +13,8 @@ import {
   type WebGLRenderer,
 } from "three";
 import { OrbitControls } from "three/examples/jsm/controls/OrbitControls.js";
-import type { PlumeSceneOutput } from "./plumeScene";
-import { azimuthToEastNorth } from "./plumeGeometry";
+import type { PlumeSceneOutput } from "./plume-scene";
+import { azimuthToEastNorth } from "./plume-geometry";
 import { screenBearing } from "./Compass";
 
 export type ViewPreset = "perspective" | "side" | "plan" | "overview";

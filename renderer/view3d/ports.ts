@@ -4,7 +4,7 @@
  * the diffuser; rosette risers spaced along the axis, each with its own port azimuths).
  */
 import type { DiffuserInput } from "../../core/scenario/types";
-import { azimuthToEastNorth, type PortPlacement } from "./plumeGeometry";
+import { azimuthToEastNorth, type PortPlacement } from "./plume-geometry";
 
 export function portPlacements(diffuser: DiffuserInput): PortPlacement[] {
   const axis = azimuthToEastNorth(diffuser.diffuserAzimuth);

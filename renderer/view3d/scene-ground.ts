@@ -35,7 +35,7 @@ import {
   worldToScene,
   type BedSpec,
   type PortPlacement,
-} from "./plumeGeometry";
+} from "./plume-geometry";
 
 export const COLOURS = {
   seabed: 0xc9bfa8,

@@ -5,8 +5,8 @@
 import { CircleGeometry, Color, DoubleSide, Mesh, MeshBasicMaterial, MeshLambertMaterial, Vector3 } from "three";
 import type { BrinefieldResult } from "../../core/result/contract";
 import type { PathPoint } from "../../core/nearfield/types";
-import type { Rgb } from "./colourScale";
-import { annulusGeometry, placePathPoint, tubeGeometry, worldToScene } from "./plumeGeometry";
+import type { Rgb } from "./colour-scale";
+import { annulusGeometry, placePathPoint, tubeGeometry, worldToScene } from "./plume-geometry";
 import { bedZ, type SceneFrame, type SceneKit } from "./scene-ground";
 
 type ColourOf = (dilution: number) => Rgb;

@@ -11,7 +11,7 @@ import { mkdirSync } from "node:fs";
 import { dirname, join, resolve } from "node:path";
 import { fileURLToPath } from "node:url";
 import { launchChromium } from "../../core/cli/node/headless/chromium";
-import { serveDirectory, type StaticServer } from "../renderer/support/staticServer";
+import { serveDirectory, type StaticServer } from "../renderer/support/static-server";
 import { ensureWebBuilt, WEB_DIST } from "./support/web-build";
 
 const root = resolve(dirname(fileURLToPath(import.meta.url)), "../..");

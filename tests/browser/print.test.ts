@@ -8,7 +8,7 @@ import { join, resolve, dirname } from "node:path";
 import { fileURLToPath } from "node:url";
 import { existsSync } from "node:fs";
 import { launchChromium } from "../../core/cli/node/headless/chromium";
-import { serveDirectory, type StaticServer } from "../renderer/support/staticServer";
+import { serveDirectory, type StaticServer } from "../renderer/support/static-server";
 
 const root = resolve(dirname(fileURLToPath(import.meta.url)), "../..");
 const dist = join(root, "dist/renderer");

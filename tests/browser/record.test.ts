@@ -9,7 +9,7 @@ import type { Browser, Page } from "playwright-core";
 import { mkdirSync } from "node:fs";
 import { dirname, join, resolve } from "node:path";
 import { fileURLToPath } from "node:url";
-import { serveDirectory, type StaticServer } from "../renderer/support/staticServer";
+import { serveDirectory, type StaticServer } from "../renderer/support/static-server";
 import { ensureWebBuilt, WEB_DIST } from "./support/web-build";
 
 const root = resolve(dirname(fileURLToPath(import.meta.url)), "../..");

@@ -11,7 +11,7 @@ import type { Browser, Page } from "playwright-core";
 import { mkdirSync, readFileSync, writeFileSync } from "node:fs";
 import { dirname, join, resolve } from "node:path";
 import { fileURLToPath } from "node:url";
-import { serveDirectory, type StaticServer } from "../renderer/support/staticServer";
+import { serveDirectory, type StaticServer } from "../renderer/support/static-server";
 import { ensureWebBuilt, WEB_DIST } from "./support/web-build";
 import { parseStudy } from "../../core/study/study-file";
 import { compareVariant, studyVariants } from "../../core/study/compare";

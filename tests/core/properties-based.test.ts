@@ -5,7 +5,7 @@
  */
 import { describe, it, expect } from "vitest";
 import fc from "fast-check";
-import { checkValidScenario, checkInvalidScenario, type ValidOutcome } from "../helpers/scenarioProperties";
+import { checkValidScenario, checkInvalidScenario, type ValidOutcome } from "../helpers/scenario-properties";
 import { validScenarioFile, directDischargeFile, corruption } from "../helpers/arbitraries";
 
 const RUNS = Number(process.env.BRINEFIELD_PROPERTY_RUNS ?? 1000);

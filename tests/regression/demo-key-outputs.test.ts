@@ -1,7 +1,7 @@
-/** Regression record of the demo scenarios' key outputs (see demoKeyOutputs.ts for how to update it). */
+/** Regression record of the demo scenarios' key outputs (see demo-key-outputs.ts for how to update it). */
 import { describe, it, expect } from "vitest";
 import { readFileSync } from "node:fs";
-import { demoKeyOutputs, RECORD_FILE } from "./demoKeyOutputs";
+import { demoKeyOutputs, RECORD_FILE } from "./demo-key-outputs";
 
 const recorded = JSON.parse(readFileSync(RECORD_FILE, "utf8")) as Record<string, Record<string, unknown>>;
 const current = demoKeyOutputs();

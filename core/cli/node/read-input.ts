@@ -67,6 +67,14 @@ export function fsErrorReason(err: unknown): string {
 // nothing. O_NOCTTY: a terminal device never becomes our controlling terminal.
 const OPEN_FLAGS = fsConstants.O_RDONLY | (fsConstants.O_NONBLOCK ?? 0) | (fsConstants.O_NOCTTY ?? 0);
 
+/** The refusal of a file that is not a regular file or is larger than `max` bytes; null when it may be read. */
+function refusal(st: Stats, max: number): ReadInputOutcome | null {
+  const reason = notRegularFileReason(st);
+  if (reason) return { ok: false, message: reason };
+  if (st.size > max) return { ok: false, message: tooLargeMessage(st.size, max) };
+  return null;
+}
+
 function finish(bytes: Uint8Array, st: Stats, max: number): ReadInputOutcome {
   if (bytes.length > max) return { ok: false, message: tooLargeMessage(bytes.length, max) };
   const decoded = decodeInputBytes(bytes, max);
@@ -81,14 +89,12 @@ export function readInputFileSync(path: string, options: ReadInputOptions = {}):
   try {
     // stat first so a FIFO or device is refused before it is even opened.
     const pre = statSync(path);
-    const preReason = notRegularFileReason(pre);
-    if (preReason) return { ok: false, message: preReason };
-    if (pre.size > max) return { ok: false, message: tooLargeMessage(pre.size, max) };
+    const preReason = refusal(pre, max);
+    if (preReason) return preReason;
     fd = openSync(path, OPEN_FLAGS);
     const st = fstatSync(fd); // the file actually opened (it may have been swapped since the stat)
-    const reason = notRegularFileReason(st);
-    if (reason) return { ok: false, message: reason };
-    if (st.size > max) return { ok: false, message: tooLargeMessage(st.size, max) };
+    const reason = refusal(st, max);
+    if (reason) return reason;
     // Read at most one byte past the cap, in case the file grows while it is read.
     const buffer = Buffer.alloc(Math.min(st.size, max) + 1);
     let length = 0;
@@ -111,14 +117,12 @@ export async function readInputFile(path: string, options: ReadInputOptions = {}
   let handle: fsp.FileHandle | undefined;
   try {
     const pre = await fsp.stat(path);
-    const preReason = notRegularFileReason(pre);
-    if (preReason) return { ok: false, message: preReason };
-    if (pre.size > max) return { ok: false, message: tooLargeMessage(pre.size, max) };
+    const preReason = refusal(pre, max);
+    if (preReason) return preReason;
     handle = await fsp.open(path, OPEN_FLAGS);
     const st = await handle.stat();
-    const reason = notRegularFileReason(st);
-    if (reason) return { ok: false, message: reason };
-    if (st.size > max) return { ok: false, message: tooLargeMessage(st.size, max) };
+    const reason = refusal(st, max);
+    if (reason) return reason;
     const buffer = Buffer.alloc(Math.min(st.size, max) + 1);
     let length = 0;
     while (length < buffer.length) {

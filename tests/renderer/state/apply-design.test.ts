@@ -4,7 +4,7 @@ import { readFileSync } from "node:fs";
 import { fileURLToPath } from "node:url";
 import { historyPush, historyStart, historyUndo } from "../../../renderer/state/history";
 import { applyDesign } from "../../../renderer/state/actions";
-import { documentFromFile } from "../../../renderer/state/scenarioState";
+import { documentFromFile } from "../../../renderer/state/scenario-state";
 import { parseScenario } from "../../../core/scenario/parse";
 import { designDiffuserBlock } from "../../../core/study/design-rank";
 import { exitVelocity } from "../../../core/study/design";

@@ -9,7 +9,7 @@ import {
   HISTORY_LIMIT,
 } from "../../../renderer/state/history";
 import { setField } from "../../../renderer/state/actions";
-import { blankScenario, documentFromFile, getAtPath } from "../../../renderer/state/scenarioState";
+import { blankScenario, documentFromFile, getAtPath } from "../../../renderer/state/scenario-state";
 
 const start = documentFromFile(blankScenario(), "site.json");
 const angle = (h: { present: { file: unknown } }) => getAtPath(h.present.file, "diffuser.portAngle");

@@ -14,8 +14,8 @@ import {
   seabedHeight,
   tubeGeometry,
   worldToScene,
-} from "../../../renderer/view3d/plumeGeometry";
-import type { Rgb } from "../../../renderer/view3d/colourScale";
+} from "../../../renderer/view3d/plume-geometry";
+import type { Rgb } from "../../../renderer/view3d/colour-scale";
 
 /** A dense jet's arc in the vertical east plane: up and over, like a 60° discharge. */
 function arc(n: number): Vector3[] {

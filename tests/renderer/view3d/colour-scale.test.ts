@@ -15,7 +15,7 @@ import {
   rampOklab,
   srgbDecode,
   srgbEncode,
-} from "../../../renderer/view3d/colourScale";
+} from "../../../renderer/view3d/colour-scale";
 
 const deltaE = (a: readonly number[], b: readonly number[]) => Math.hypot(a[0] - b[0], a[1] - b[1], a[2] - b[2]);
 

@@ -11,9 +11,9 @@ import {
   issuesByPath,
   nextRequest,
   type EngineState,
-} from "../../../renderer/engine/useEngine";
-import { runFile, withoutPathPrefix } from "../../../renderer/engine/runFile";
-import { blankScenario } from "../../../renderer/state/scenarioState";
+} from "../../../renderer/engine/use-engine";
+import { runFile, withoutPathPrefix } from "../../../renderer/engine/run-file";
+import { blankScenario } from "../../../renderer/state/scenario-state";
 
 const empty: EngineState = {
   result: null,

@@ -12,7 +12,7 @@ import {
   formatQuantity,
   storedValueFromText,
   storedValueInField,
-} from "../../../renderer/inputs/quantityText";
+} from "../../../renderer/inputs/quantity-text";
 
 describe("displayText()", () => {
   it("shows SI numbers as they are in SI", () => {

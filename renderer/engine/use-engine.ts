@@ -10,8 +10,8 @@ import { useEffect, useRef, useState } from "react";
 import type { BrinefieldResult } from "../../core/result/contract";
 import type { Scenario } from "../../core/scenario/types";
 import type { EngineIssue, EngineRequest, EngineResponse } from "./messages";
-import { runFile } from "./runFile";
-import { dropEngineWorker, startEngineWorker } from "./engineWorker";
+import { runFile } from "./run-file";
+import { dropEngineWorker, startEngineWorker } from "./engine-worker";
 
 export interface EngineState {
   /** Last successful run (kept while later edits fail). */

@@ -1,6 +1,6 @@
 /** Reading a receiving-water profile pasted from a spreadsheet or loaded from CSV (d3-dsv). */
 import { describe, expect, it } from "vitest";
-import { parseProfileText } from "../../../renderer/inputs/profileText";
+import { parseProfileText } from "../../../renderer/inputs/profile-text";
 
 describe("parseProfileText()", () => {
   it("reads tab-separated rows pasted from a spreadsheet, with a header giving units", () => {

@@ -3,7 +3,7 @@ import { describe, expect, it } from "vitest";
 import { csvParseRows } from "d3-dsv";
 import { CAUTION } from "../../../core/result/contract";
 import type { FlatRow } from "../../../core/study/compare";
-import { csvColumnName, variantsCsv } from "../../../renderer/study/variantsCsv";
+import { csvColumnName, variantsCsv } from "../../../renderer/study/variants-csv";
 
 const rows: FlatRow[] = [
   {

@@ -2,7 +2,7 @@
  * Builds the three.js scene for one result: seabed with a distance grid, water surface, diffuser and
  * ports, each jet as a dilution-coloured tube, impact spots, the spreading layer out to the mixing-zone
  * edge, the mixing-zone boundary, the limit-exceedance extent, current and north arrows. It only places
- * numbers core computed; the geometry itself comes from plumeGeometry.ts, and the parts are drawn by
+ * numbers core computed; the geometry itself comes from plume-geometry.ts, and the parts are drawn by
  * scene-ground.ts (seabed, water, diffuser, edges) and scene-jets.ts (jets, spots, layers, camera targets).
  */
 import type { Group, Vector3 } from "three";
@@ -10,8 +10,8 @@ import type { BrinefieldResult } from "../../core/result/contract";
 import type { PathPoint } from "../../core/nearfield/types";
 import type { Scenario } from "../../core/scenario/types";
 import type { UnitSystem } from "../../core/units";
-import { dilutionColour, dilutionDomain, type DilutionDomain, type Rgb } from "./colourScale";
-import type { BedSpec } from "./plumeGeometry";
+import { dilutionColour, dilutionDomain, type DilutionDomain, type Rgb } from "./colour-scale";
+import type { BedSpec } from "./plume-geometry";
 import { pathStartAzimuth, portPlacements, representativeAzimuth } from "./ports";
 import { addDiffuser, addSeabed, addWaterColumn, addZoneEdges, sceneKit, type SceneFrame } from "./scene-ground";
 import { addImpactSpots, addJets, addRisingField, addSpreadingLayer, cameraTargets } from "./scene-jets";

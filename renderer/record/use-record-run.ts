@@ -8,7 +8,7 @@ import type { Scenario } from "../../core/scenario/types";
 import type { StepOutcome } from "../../core/record/summary";
 import { distinctStepIndices, outcomesFromDistinct } from "../../core/record/run";
 import { withRecord } from "../../core/record/result";
-import { StudyCancelled, StudyWorkerPool } from "../study/workerPool";
+import { StudyCancelled, StudyWorkerPool } from "../study/worker-pool";
 import { isRecordPending } from "./pending";
 
 export interface RecordRun {

@@ -7,9 +7,9 @@ import { readFileSync } from "node:fs";
 import { join } from "node:path";
 import { describe, expect, it } from "vitest";
 import { Box3, Line, Mesh, Vector3 } from "three";
-import { runFile } from "../../../renderer/engine/runFile";
-import { buildPlumeScene, niceStep } from "../../../renderer/view3d/plumeScene";
-import { azimuthToEastNorth } from "../../../renderer/view3d/plumeGeometry";
+import { runFile } from "../../../renderer/engine/run-file";
+import { buildPlumeScene, niceStep } from "../../../renderer/view3d/plume-scene";
+import { azimuthToEastNorth } from "../../../renderer/view3d/plume-geometry";
 
 function demo(name: string) {
   const response = runFile(1, JSON.parse(readFileSync(join(__dirname, "../../../demo-scenarios", name), "utf8")));

@@ -18,7 +18,7 @@ import {
   serialiseScenario,
   type DocumentState,
   type ScenarioFile,
-} from "./scenarioState";
+} from "./scenario-state";
 
 export interface StudyVariantDoc {
   readonly name: string;

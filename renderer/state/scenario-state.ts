@@ -19,10 +19,10 @@ export interface DocumentState {
   /** Increases on every edit; lets autosave and the engine tell edits apart cheaply. */
   readonly revision: number;
   /**
-   * For a study document: its name and variants (renderer/state/studyDocument.ts); `file` is then the
+   * For a study document: its name and variants (renderer/state/study-document.ts); `file` is then the
    * study's base scenario. Absent or null for a scenario document.
    */
-  readonly study?: import("./studyDocument").StudyPart | null;
+  readonly study?: import("./study-document").StudyPart | null;
 }
 
 /**

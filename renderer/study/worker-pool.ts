@@ -21,7 +21,7 @@ export class StudyWorkerPool {
 
   private ensure(n: number): Worker[] {
     while (this.workers.length < n) {
-      this.workers.push(new Worker(new URL("./studyWorker.ts", import.meta.url), { type: "module" }));
+      this.workers.push(new Worker(new URL("./study-worker.ts", import.meta.url), { type: "module" }));
     }
     return this.workers.slice(0, n);
   }

@@ -5,12 +5,12 @@ import {
   riseMarkers,
   salinityIncreaseLimit,
   trajectorySeries,
-} from "../../../renderer/charts/chartData";
+} from "../../../renderer/charts/chart-data";
 import { csvParseRows } from "d3-dsv";
 import { CAUTION } from "../../../core/result/contract";
 import { csvWithCaution, seriesCsv } from "../../../renderer/exports";
-import { runFile } from "../../../renderer/engine/runFile";
-import { blankScenario } from "../../../renderer/state/scenarioState";
+import { runFile } from "../../../renderer/engine/run-file";
+import { blankScenario } from "../../../renderer/state/scenario-state";
 
 const response = runFile(1, blankScenario());
 if (!response.ok) throw new Error(response.message);

@@ -15,7 +15,7 @@ import {
   serialiseScenario,
   suggestedFileName,
   updateScenario,
-} from "../../../renderer/state/scenarioState";
+} from "../../../renderer/state/scenario-state";
 import {
   addProfileRow,
   appendArrayItem,

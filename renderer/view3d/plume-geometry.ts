@@ -6,7 +6,7 @@
  * point (e, n, u) becomes the scene point (e, u, −n). `worldToScene` is the one place that mapping lives.
  */
 import { BufferAttribute, BufferGeometry, Vector3 } from "three";
-import type { Rgb } from "./colourScale";
+import type { Rgb } from "./colour-scale";
 
 export interface WorldPoint {
   readonly x: number; // m east

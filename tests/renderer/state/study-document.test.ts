@@ -13,8 +13,8 @@ import {
   serialiseDocument,
   suggestedDocumentName,
   variantScenario,
-} from "../../../renderer/state/studyDocument";
-import { documentFromFile, updateScenario, patchAtPath } from "../../../renderer/state/scenarioState";
+} from "../../../renderer/state/study-document";
+import { documentFromFile, updateScenario, patchAtPath } from "../../../renderer/state/scenario-state";
 import { parseStudy } from "../../../core/study/study-file";
 import { studyVariants } from "../../../core/study/compare";
 import { parseScenario } from "../../../core/scenario/parse";

@@ -25,6 +25,13 @@ export interface MethodMarker {
 
 const len = (v: number, system: UnitSystem) => siToDisplay(v, "length", system).value;
 
+/** What the side view of the jet (chart and table) is drawn from. */
+export interface SideViewProps {
+  readonly result: BrinefieldResult;
+  readonly scenario: Scenario;
+  readonly unitSystem: UnitSystem;
+}
+
 export function trajectorySeries(result: BrinefieldResult, scenario: Scenario, system: UnitSystem): TrajectoryPoint[] {
   const path = result.nearField.find((m) => m.method === "integral")?.path ?? [];
   const portHeight = scenario.diffuser.portHeight;
