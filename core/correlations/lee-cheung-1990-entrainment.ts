@@ -127,7 +127,7 @@ export interface EntrainmentValidityInputs {
   /** Port densimetric Froude number F = U/√(g′d). */
   readonly froude: number;
   /** Discharge angle above horizontal, degrees. */
-  readonly angleDeg: number;
+  readonly angle: number;
   /** Ambient current speed, m/s. */
   readonly currentSpeed: number;
   /** Port exit velocity, m/s. */
@@ -137,7 +137,7 @@ export interface EntrainmentValidityInputs {
 /** Structured warnings where the closure is used outside its validated range. Never throws. */
 export function entrainmentLeeCheung1990ValidityIssues(inputs: EntrainmentValidityInputs): ResultWarning[] {
   const out: ResultWarning[] = [];
-  const { froude, angleDeg, currentSpeed, velocity } = inputs;
+  const { froude, angle, currentSpeed, velocity } = inputs;
   if (Number.isFinite(froude) && (froude < 10 || froude > 40)) {
     out.push(
       warning(
@@ -148,15 +148,15 @@ export function entrainmentLeeCheung1990ValidityIssues(inputs: EntrainmentValidi
       ),
     );
   }
-  if (angleDeg < 15 || angleDeg > 75) {
+  if (angle < 15 || angle > 75) {
     out.push(
       warning(
         "integral-angle-outside-validation",
         "info",
-        `Discharge angle ${angleDeg.toFixed(0)}° is outside the 15°–75° range of inclined dense-jet experiments.`,
+        `Discharge angle ${angle.toFixed(0)}° is outside the 15°–75° range of inclined dense-jet experiments.`,
         {
           parameter: "angle",
-          value: angleDeg,
+          value: angle,
           range: [15, 75],
           source: "Papakonstantis et al. (2011); Lai & Lee (2012)",
           stage: "integral",

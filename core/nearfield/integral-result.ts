@@ -331,7 +331,7 @@ export function assembleIntegralResult(outcome: IntegralRunOutcome): NearFieldMe
   warnings.push(
     ...entrainmentLeeCheung1990ValidityIssues({
       froude: jet.froude,
-      angleDeg: jet.angle,
+      angle: jet.angle,
       currentSpeed: params.currentSpeed,
       velocity: u0,
     }),

@@ -71,13 +71,13 @@ describe("entrainmentLeeCheung1990Rate()", () => {
 describe("entrainmentLeeCheung1990ValidityIssues()", () => {
   it("is silent inside the validated range (60°, F = 20, no current)", () => {
     expect(
-      entrainmentLeeCheung1990ValidityIssues({ froude: 20, angleDeg: 60, currentSpeed: 0, velocity: 4 }),
+      entrainmentLeeCheung1990ValidityIssues({ froude: 20, angle: 60, currentSpeed: 0, velocity: 4 }),
       "no issues",
     ).toEqual([]);
   });
 
   it("flags Froude number, angle and weak crossflow with ranges and sources", () => {
-    const codes = entrainmentLeeCheung1990ValidityIssues({ froude: 60, angleDeg: 90, currentSpeed: 0.01, velocity: 4 });
+    const codes = entrainmentLeeCheung1990ValidityIssues({ froude: 60, angle: 90, currentSpeed: 0.01, velocity: 4 });
     expect(codes.map((w) => w.code).sort(), "three issues").toEqual([
       "integral-angle-outside-validation",
       "integral-froude-outside-validation",
