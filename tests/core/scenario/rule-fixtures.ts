@@ -2,29 +2,13 @@
 import { expect } from "vitest";
 import { parseScenario, type ScenarioIssue } from "../../../core/scenario";
 import type { Scenario } from "../../../core/scenario/types";
+import { fourPortScenarioRaw } from "../../helpers/four-port-scenario";
 
 export type Raw = Record<string, any>;
 
-/** A 4-port line diffuser, 0.25 m³/s of 65 g/kg brine in 15 m of 36 g/kg water (invented example). */
+/** The shared 4-port base scenario, named for these tests (invented example). */
 export function baseRaw(): Raw {
-  return {
-    format: "brinefield-scenario",
-    version: 1,
-    name: "Rule test diffuser",
-    discharge: { flow: 0.25, salinity: 65, temperature: 22 },
-    ambient: { depth: 15, salinity: 36, temperature: 20, currentSpeed: 0.1, currentDirection: 90 },
-    diffuser: {
-      layout: "line",
-      portCount: 4,
-      portDiameter: 0.12,
-      portAngle: 60,
-      portHeight: 1,
-      portSpacing: 5,
-      portAzimuth: 0,
-      diffuserAzimuth: 90,
-    },
-    mixingZone: { radius: 100, limits: [{ constituent: "salinity", maxIncrease: 2 }] },
-  };
+  return fourPortScenarioRaw("Rule test diffuser");
 }
 
 /** The base scenario after `edit`. */

@@ -1,28 +1,12 @@
 /** Small scenarios and fake evaluators shared by the study tests. */
 import { parseScenario } from "../../../core/scenario/parse";
 import type { Scenario } from "../../../core/scenario/types";
+import { fourPortScenarioRaw } from "../../helpers/four-port-scenario";
 import type { CaseSummary, Evaluator } from "../../../core/study/summary";
 
 /** A 4-port line diffuser in a uniform 15 m ambient with a weak current (invented example). */
 export function fourPortRaw(): Record<string, unknown> {
-  return {
-    format: "brinefield-scenario",
-    version: 1,
-    name: "Four-port test diffuser",
-    discharge: { flow: 0.25, salinity: 65, temperature: 22 },
-    ambient: { depth: 15, salinity: 36, temperature: 20, currentSpeed: 0.1, currentDirection: 90 },
-    diffuser: {
-      layout: "line",
-      portCount: 4,
-      portDiameter: 0.12,
-      portAngle: 60,
-      portHeight: 1,
-      portSpacing: 5,
-      portAzimuth: 0,
-      diffuserAzimuth: 90,
-    },
-    mixingZone: { radius: 100, limits: [{ constituent: "salinity", maxIncrease: 2 }] },
-  };
+  return fourPortScenarioRaw("Four-port test diffuser");
 }
 
 export function scenarioFrom(raw: unknown): Scenario {
