@@ -1,26 +1,12 @@
 /** Invented scenarios for the record and intake tests. */
 import { parseScenario } from "../../../core/scenario/parse";
 import type { Scenario } from "../../../core/scenario/types";
+import { fourPortScenarioRaw } from "../../helpers/four-port-scenario";
 
-export const BASE = {
-  format: "brinefield-scenario",
-  version: 1,
-  name: "Record test: four-port diffuser",
-  discharge: { flow: 0.25, salinity: 65, temperature: 22 },
-  ambient: { depth: 15, salinity: 36, temperature: 20, currentSpeed: 0.1, currentDirection: 90 },
-  diffuser: {
-    layout: "line",
-    portCount: 4,
-    portDiameter: 0.12,
-    portAngle: 60,
-    portHeight: 1,
-    portSpacing: 5,
-    portAzimuth: 0,
-    diffuserAzimuth: 90,
-  },
-  mixingZone: { radius: 100, limits: [{ constituent: "salinity", maxIncrease: 2 }] },
+export const BASE: Record<string, any> = {
+  ...fourPortScenarioRaw("Record test: four-port diffuser"),
   options: { addSlackWater: false },
-} as const;
+};
 
 type Raw = Record<string, unknown>;
 
