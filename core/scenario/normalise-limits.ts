@@ -56,6 +56,9 @@ function limitValueProblem(value: number, constituent: string, unit: string, fie
   return value <= 0 ? `must be a positive concentration (in ${unit}); a limit of zero or less can never be met` : null;
 }
 
+/** A decimal number, then whatever follows it (the unit, possibly empty). */
+const NUMBER_THEN_UNIT = /^\s*([-+]?(?:\d+\.?\d*|\.\d+)(?:e[-+]?\d+)?)\s*(.*)$/i;
+
 function limitValueInUnit(
   raw: number | string,
   constituent: string,
@@ -75,7 +78,7 @@ function limitValueInUnit(
     );
     return undefined;
   }
-  const m = /^\s*([-+]?(?:\d+\.?\d*|\.\d+)(?:e[-+]?\d+)?)\s*(.*)$/i.exec(raw);
+  const m = NUMBER_THEN_UNIT.exec(raw);
   if (!m) {
     ctx.issues.push(issue(path, raw, `must be a number with an optional unit (in ${unit})`));
     return undefined;
@@ -113,7 +116,8 @@ function limitValueInUnit(
 function withLimitUnit(raw: number | string | undefined, unit: string | undefined): number | string | undefined {
   if (raw === undefined || unit === undefined || unit.trim() === "") return raw;
   if (typeof raw === "number") return Number.isFinite(raw) ? `${raw} ${unit.trim()}` : raw;
-  return /^\s*[-+]?(?:\d+\.?\d*|\.\d+)(?:e[-+]?\d+)?\s*$/i.test(raw) ? `${raw.trim()} ${unit.trim()}` : raw;
+  const m = NUMBER_THEN_UNIT.exec(raw);
+  return m && m[2]!.trim() === "" ? `${raw.trim()} ${unit.trim()}` : raw;
 }
 
 /** The mixing zone's limits, each in its constituent's unit; problems are added to the issues. */
