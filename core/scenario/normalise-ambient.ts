@@ -164,6 +164,12 @@ function num(v: number | undefined, fallback: number): number {
   return v === undefined ? fallback : v;
 }
 
+/** A profile held at its deepest values down to a deeper seabed (in place). */
+function extendToDepth(profile: ProfilePoint[], depth: number): void {
+  const last = profile[profile.length - 1]!;
+  if (last.depth < depth) profile.push({ ...last, depth });
+}
+
 /** The stated profile with a case's own salinity or own temperature at every depth. */
 function profileWithOneQuantity(
   stated: readonly ProfilePoint[],
@@ -190,10 +196,7 @@ export function ambientCasesFromFile(f: ScenarioFileParsed, ambient: AmbientInpu
       // Stratified stated water and a case that sets only its salinity or only its temperature: the other
       // quantity keeps the stated profile, depth by depth, rather than its surface value all the way down.
       profile = profileWithOneQuantity(ambient.profile, c, `ambientCases.${i}`, ctx);
-      if (cd !== ambient.depth) {
-        const last = profile[profile.length - 1]!;
-        if (last.depth < cd) profile.push({ ...last, depth: cd });
-      }
+      extendToDepth(profile, cd);
       uniform = profile.every((p) => p.salinity === profile[0]!.salinity && p.temperature === profile[0]!.temperature);
     } else if (hasOwnWater) {
       const base = ambient.profile[0]!;
@@ -208,9 +211,8 @@ export function ambientCasesFromFile(f: ScenarioFileParsed, ambient: AmbientInpu
       if (!pr) return;
       profile = pr.profile;
       uniform = pr.uniform;
-    } else if (cd !== ambient.depth) {
-      const last = profile[profile.length - 1]!;
-      if (last.depth < cd) profile.push({ ...last, depth: cd });
+    } else {
+      extendToDepth(profile, cd);
     }
     const sets: AmbientCaseField[] = [];
     if (c.depth !== undefined) sets.push("depth");
