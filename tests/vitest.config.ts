@@ -17,6 +17,7 @@ export default defineConfig({
           // tests/mutation/ holds Stryker's sandbox copies of the tests while `npm run mutate` runs.
           exclude: ["tests/browser/**", "tests/fuzz/**", "tests/mutation/**", "node_modules/**"],
           testTimeout: 30_000,
+          globalSetup: ["tests/helpers/build-cli-bundle.ts"],
         },
       },
       {
