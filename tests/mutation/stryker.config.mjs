@@ -50,7 +50,9 @@ export default {
     reportMutants: false,
   },
   // Generous: on a shared, loaded machine a shorter timeout counts slow runs as "timed out" (detected).
-  timeoutMS: 15_000,
+  // BRINEFIELD_MUTATE_TIMEOUT_MS shortens it on a quiet machine, where mutants that never end the
+  // integration loop otherwise hold a test runner for the whole allowance and its restart.
+  timeoutMS: Number(process.env.BRINEFIELD_MUTATE_TIMEOUT_MS ?? 15_000),
   timeoutFactor: 1.5,
   thresholds: { high: 85, low: 75, break: null },
 };
