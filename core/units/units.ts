@@ -4,6 +4,7 @@
  * are defined here once. Inside core every number is SI (m, s, m³/s, g/kg, °C, degrees for angles).
  */
 import { create, createUnitDependencies, unitDependencies } from "mathjs";
+import { commonQuantityIn, convertCommonUnit } from "./common-units";
 
 // mathjs with the trade units below, created on first use: study worker threads never parse a unit, and
 // creating the instance is most of their start-up time.
@@ -35,7 +36,15 @@ function math(): ReturnType<typeof create> {
  * The micro sign may be written as µ. Throws when mathjs does not know a unit or the two are not of one kind.
  */
 export function convertUnit(value: number, from: string, to: string): number {
-  return math().unit(value, withAsciiMicro(from)).toNumber(withAsciiMicro(to));
+  const a = withAsciiMicro(from);
+  const b = withAsciiMicro(to);
+  const common = convertCommonUnit(value, a, b);
+  return typeof common === "number" ? common : convertUnitWithMathjs(value, a, b);
+}
+
+/** The same conversion always through mathjs: the path for units outside the common list, and the tests' reference. */
+export function convertUnitWithMathjs(value: number, from: string, to: string): number {
+  return math().unit(value, from).toNumber(to);
 }
 
 /** The micro sign (µ, or Greek mu) written as mathjs's prefix "u": "µg/L" → "ug/L". */
@@ -123,9 +132,14 @@ export function quantityToSI(raw: unknown, kind: QuantityKind): QuantityParse {
   }
   let value: number;
   try {
-    const u = math().unit(normaliseUnitText(text));
-    if (u.value === null || u.value === undefined) return { ok: false, message: "has a unit but no number" };
-    value = u.toNumber(target);
+    const written = normaliseUnitText(text);
+    const common = commonQuantityIn(written, target);
+    if (typeof common === "number") value = common;
+    else {
+      const u = math().unit(written);
+      if (u.value === null || u.value === undefined) return { ok: false, message: "has a unit but no number" };
+      value = u.toNumber(target);
+    }
   } catch (err) {
     const msg = err instanceof Error ? err.message : String(err);
     const unknown = /Unit "([^"]*)" not found/i.exec(msg);
@@ -177,7 +191,7 @@ export function siToDisplay(value: number, kind: QuantityKind, system: UnitSyste
   const k = QUANTITY_KINDS[kind];
   const target = system === "si" ? k.si : k.us;
   if (target === k.si || target === "") return { value, unit: unitSymbol(target) };
-  return { value: math().unit(value, k.si).toNumber(target), unit: unitSymbol(target) };
+  return { value: convertUnit(value, k.si, target), unit: unitSymbol(target) };
 }
 
 /** Converts a display value back to SI. */
@@ -185,7 +199,7 @@ export function displayToSI(value: number, kind: QuantityKind, system: UnitSyste
   const k = QUANTITY_KINDS[kind];
   const from = system === "si" ? k.si : k.us;
   if (from === k.si || from === "") return value;
-  return math().unit(value, from).toNumber(k.si);
+  return convertUnit(value, from, k.si);
 }
 
 /** Compact engineering formatting: 4 significant figures, no exponent for ordinary magnitudes. */
