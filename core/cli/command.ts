@@ -15,8 +15,13 @@ export interface CliIO {
   readFile(path: string): string;
   /** Writes atomically (see core/cli/node/atomic-write.ts); throws CliError when the output is refused or fails. */
   writeFile(path: string, data: string | Uint8Array): Promise<void> | void;
-  /** True when stdout is an interactive terminal (progress bars only then). */
+  /** True when stderr is an interactive terminal (progress bars only then). */
   readonly isTTY: boolean;
+  /**
+   * Progress of long runs as plain lines on stderr when it is not a terminal (BRINEFIELD_PROGRESS=lines:
+   * for logs of unattended runs and for programs that drive the command line).
+   */
+  readonly progressLines?: boolean;
   /** Number of logical cores available for worker threads. */
   readonly cores: number;
 }

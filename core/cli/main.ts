@@ -13,6 +13,7 @@ import { BRINEFIELD_VERSION } from "../version";
 import { CAUTION } from "../result/contract";
 import { readInputFileSync, writeFileAtomic, fsErrorReason, OutputRefusedError, type FileIdentity } from "./node";
 import { terminalSafeChunk } from "./terminal";
+import { BENCH_SCENARIO_INPUT } from "./bench/study";
 
 /** The process's file system and terminal. Every file read is remembered so no output overwrites it. */
 export function nodeIO(): CliIO {
@@ -21,6 +22,7 @@ export function nodeIO(): CliIO {
   return {
     cwd,
     isTTY: Boolean(process.stderr.isTTY),
+    progressLines: process.env.BRINEFIELD_PROGRESS === "lines",
     cores: availableParallelism(),
     stdout: (t) => void process.stdout.write(t),
     stderr: (t) => void process.stderr.write(t),
@@ -109,6 +111,24 @@ async function dispatch(argv: readonly string[], io: CliIO): Promise<number> {
     return 0;
   }
   return cmd.run(rest, io);
+}
+
+/**
+ * Runs `run --json` on the invented benchmark scenario with nothing printed, so the code cache the
+ * launcher saves after it holds the compiled scenario reader and pipeline (core/cli/launcher.mjs).
+ */
+export async function warmUpForCodeCache(): Promise<void> {
+  const text = JSON.stringify(BENCH_SCENARIO_INPUT);
+  const silent: CliIO = {
+    cwd: process.cwd(),
+    isTTY: false,
+    cores: 1,
+    stdout: () => undefined,
+    stderr: () => undefined,
+    readFile: () => text,
+    writeFile: () => Promise.reject(new Error("the warm-up writes no file")),
+  };
+  await cliMain(["run", "warm-up.json", "--json"], silent);
 }
 
 // Worker threads of studies and Monte Carlo start on this same bundle (core/cli/workers/pool.ts).

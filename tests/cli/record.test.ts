@@ -71,8 +71,8 @@ describe("run with an ambient record", () => {
     const dir = mkdtempSync(join(tmpdir(), "brinefield-record-"));
     const csv = join(dir, "year.csv");
     const lines = ["time (h),currentSpeed (m/s),currentDirection (deg)"];
-    // Three years of hourly steps: on the 2-core VM one year takes about 9 s on two workers, so the run is still
-    // going long after the Ctrl-C below, even on a machine several times faster.
+    // Three years of hourly steps: on the 2-core VM one year takes about 9 s on two workers, so the run is
+    // far from its end when the first progress line (asked for with BRINEFIELD_PROGRESS) says it started.
     for (let i = 0; i < 3 * 8760; i++)
       lines.push(
         `${i},${(0.3 * Math.abs(Math.sin((2 * Math.PI * i) / 12.42)) + 0.001 * (i % 7)).toFixed(4)},${(i * 7) % 360}`,
@@ -80,14 +80,16 @@ describe("run with an ambient record", () => {
     writeFileSync(csv, lines.join("\n") + "\n");
     const child = spawn(process.execPath, [launcher, "run", DEMO, "--record", csv, "--json", "--workers", "2"], {
       cwd: root,
+      env: { ...process.env, BRINEFIELD_PROGRESS: "lines" },
     });
     let stderr = "";
-    child.stderr.on("data", (d) => (stderr += String(d)));
-    const code = await new Promise<number | null>((resolve) => {
-      setTimeout(() => child.kill("SIGINT"), 3000);
-      child.on("exit", (c) => resolve(c));
+    child.stderr.on("data", (d) => {
+      stderr += String(d);
+      if (/Record steps: 0 %/.test(stderr) && child.exitCode === null && !child.killed) child.kill("SIGINT");
     });
+    const code = await new Promise<number | null>((resolve) => child.on("exit", (c) => resolve(c)));
     expect(code, stderr).toBe(130);
     expect(stderr).toMatch(/Cancelled/);
+    expect(stderr, "cancelled long before the end").not.toMatch(/100 %/);
   }, 120_000);
 });

@@ -31,27 +31,29 @@ const CONTROL_ITERATIONS = 40_000_000;
 const MC_RUNS = 10_000;
 const SEED = 20_240_601;
 
-/** Invented 4-port example: 0.25 m³/s of 65 g/kg brine, 15 m of water, weak current. */
+/** Invented 4-port example: 0.25 m³/s of 65 g/kg brine, 15 m of water, weak current (the scenario file's text). */
+export const BENCH_SCENARIO_INPUT = {
+  format: "brinefield-scenario",
+  version: 1,
+  name: "Study benchmark: four-port diffuser",
+  discharge: { flow: 0.25, salinity: 65, temperature: 22 },
+  ambient: { depth: 15, salinity: 36, temperature: 20, currentSpeed: 0.1, currentDirection: 90 },
+  diffuser: {
+    layout: "line",
+    portCount: 4,
+    portDiameter: 0.12,
+    portAngle: 60,
+    portHeight: 1,
+    portSpacing: 5,
+    portAzimuth: 0,
+    diffuserAzimuth: 90,
+  },
+  mixingZone: { radius: 100, limits: [{ constituent: "salinity", maxIncrease: 2 }] },
+  options: { addSlackWater: false },
+} as const;
+
 export function benchScenario(): Scenario {
-  const r = parseScenario({
-    format: "brinefield-scenario",
-    version: 1,
-    name: "Study benchmark: four-port diffuser",
-    discharge: { flow: 0.25, salinity: 65, temperature: 22 },
-    ambient: { depth: 15, salinity: 36, temperature: 20, currentSpeed: 0.1, currentDirection: 90 },
-    diffuser: {
-      layout: "line",
-      portCount: 4,
-      portDiameter: 0.12,
-      portAngle: 60,
-      portHeight: 1,
-      portSpacing: 5,
-      portAzimuth: 0,
-      diffuserAzimuth: 90,
-    },
-    mixingZone: { radius: 100, limits: [{ constituent: "salinity", maxIncrease: 2 }] },
-    options: { addSlackWater: false },
-  });
+  const r = parseScenario(BENCH_SCENARIO_INPUT);
   if (!r.ok) throw new Error(`benchmark scenario: ${r.issues.map((i) => i.message).join("; ")}`);
   return r.scenario;
 }

@@ -21,9 +21,13 @@ export interface ProgressBar {
   finish(): void;
 }
 
-/** A one-line progress bar on stderr, redrawn at most ten times a second; silent when not a terminal. */
+/**
+ * A one-line progress bar on stderr, redrawn at most ten times a second; when stderr is not a terminal,
+ * plain lines at each tenth done if asked for (`io.progressLines`), otherwise silent.
+ */
 export function progressBar(io: CliIO, label: string, total: number): ProgressBar {
-  if (!io.isTTY || total <= 0) return { update() {}, finish() {} };
+  if (total <= 0) return { update() {}, finish() {} };
+  if (!io.isTTY) return io.progressLines ? progressLines(io, label, total) : { update() {}, finish() {} };
   let last = 0;
   const width = 30;
   const draw = (done: number) => {
@@ -43,6 +47,19 @@ export function progressBar(io: CliIO, label: string, total: number): ProgressBa
       io.stderr(`\r${" ".repeat(label.length + width + 30)}\r`);
     },
   };
+}
+
+/** "Record steps: 0 % (0/7902)" when the work starts, then a line at each further tenth done. */
+function progressLines(io: CliIO, label: string, total: number): ProgressBar {
+  let shown = -1;
+  const line = (done: number) => {
+    const tenth = Math.floor((10 * Math.min(done, total)) / total);
+    if (tenth <= shown) return;
+    shown = tenth;
+    io.stderr(`${label}: ${tenth * 10} % (${Math.min(done, total)}/${total})\n`);
+  };
+  line(0);
+  return { update: line, finish() {} };
 }
 
 /** Runs `work` with a pool; Ctrl-C cancels the pool and the promise rejects with CancelledError. */
