@@ -2,7 +2,7 @@
 import { useEffect, useState } from "react";
 import type { Scenario } from "../../core/scenario/types";
 import type { ScenarioFile } from "../state/scenario-state";
-import { StudyWorkerPool } from "./worker-pool";
+import { sharedReaderPool } from "./worker-pool";
 
 /** Reads the document in a worker whenever it changes while `active` (debounced: typing should not queue work). */
 export function useStudyScenario(
@@ -15,9 +15,12 @@ export function useStudyScenario(
   useEffect(() => {
     if (!active) return; // read again when the tab is shown
     let live = true;
-    let reader: StudyWorkerPool | null = null;
+    let started = false;
+    // The page's reader worker stays alive between reads (no worker start-up for each edit).
+    const reader = sharedReaderPool();
     const t = setTimeout(() => {
-      reader = new StudyWorkerPool(1);
+      started = true;
+      reader.stopIfRunning();
       reader
         .run([{ kind: "prepare", file: scenarioFile }])
         .then(([r]) => {
@@ -29,14 +32,13 @@ export function useStudyScenario(
           if (!live) return;
           setScenario(null);
           setScenarioError(e instanceof Error ? e.message : String(e));
-        })
-        .finally(() => reader?.dispose());
+        });
     }, 300);
     return () => {
       live = false;
       clearTimeout(t);
       // A newer document or leaving the tab: stop reading the old one rather than let it run on.
-      reader?.dispose();
+      if (started) reader.stopIfRunning();
     };
   }, [scenarioFile, active]);
 

@@ -91,14 +91,34 @@ export class StudyWorkerPool {
   }
 }
 
-let shared: StudyWorkerPool | null = null;
+const kept = new Map<"study" | "record" | "reader", StudyWorkerPool>();
+
+/** The page's pool for one kind of job, created on first use and kept for the page's life. */
+function keptPool(kind: "study" | "record" | "reader", size: number): StudyWorkerPool {
+  let pool = kept.get(kind);
+  if (!pool) kept.set(kind, (pool = new StudyWorkerPool(size)));
+  return pool;
+}
 
 /**
  * The page's study pool, kept alive between studies and tab switches: warm workers skip the start-up and
  * the compiler's warm-up that a fresh worker spends on its first thousands of cases.
  */
 export function sharedStudyPool(): StudyWorkerPool {
-  return (shared ??= new StudyWorkerPool(defaultWorkerCount()));
+  return keptPool("study", defaultWorkerCount());
+}
+
+/**
+ * The pool for long ambient records, kept between runs like the study pool. A pool runs one job at a time,
+ * so a record on the Design tab and a study on the Study tab each have their own.
+ */
+export function sharedRecordPool(): StudyWorkerPool {
+  return keptPool("record", defaultWorkerCount());
+}
+
+/** One kept worker that reads the document for the Study tab (each edit is read again). */
+export function sharedReaderPool(): StudyWorkerPool {
+  return keptPool("reader", 1);
 }
 
 export function defaultWorkerCount(): number {

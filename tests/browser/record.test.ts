@@ -29,6 +29,23 @@ beforeAll(async () => {
   page = await (await browser.newContext({ viewport: { width: 1600, height: 1000 } })).newPage();
   page.on("pageerror", (e) => problems.push(e.message));
   page.on("console", (m) => m.type() === "error" && problems.push(m.text()));
+  // Counts the Web Workers the page starts and the record tasks it posts to them, to check the record's
+  // workers are kept warm between runs.
+  await page.addInitScript(() => {
+    const counts = { workers: 0, recordTasks: 0 };
+    (window as unknown as { __brinefieldWorkerCounts: typeof counts }).__brinefieldWorkerCounts = counts;
+    const Base = window.Worker;
+    window.Worker = class extends Base {
+      constructor(url: string | URL, options?: WorkerOptions) {
+        super(url, options);
+        counts.workers++;
+      }
+      override postMessage(message: unknown, transfer?: unknown) {
+        if ((message as { kind?: string } | null)?.kind === "record-steps") counts.recordTasks++;
+        super.postMessage(message, transfer as Transferable[]);
+      }
+    };
+  });
   await page.goto(server.url);
   await page.locator("[data-role=headline-table]").waitFor({ timeout: 60_000 });
 });
@@ -56,6 +73,29 @@ describe("ambient record in the app", () => {
     await page.locator("[data-command=chart-duration]").click();
     expect(await page.locator("[data-role=record-duration-chart] #record-duration-chart").count()).toBe(1);
     await page.screenshot({ path: join(artifacts, "app-record.png") });
+    expect(problems).toEqual([]);
+  }, 300_000);
+
+  it("runs the record again after an edit on the same, warm workers", async () => {
+    type Counts = { workers: number; recordTasks: number };
+    const counts = () =>
+      page.evaluate(() => ({
+        ...(window as unknown as { __brinefieldWorkerCounts: Counts }).__brinefieldWorkerCounts,
+      }));
+    const before = await counts();
+    expect(before.recordTasks, "the first run posted its tasks").toBeGreaterThan(0);
+    const depth = page.getByLabel("Water depth at diffuser");
+    await depth.fill("17");
+    await depth.press("Enter");
+    await page.waitForFunction(
+      (n) =>
+        (window as unknown as { __brinefieldWorkerCounts: Counts }).__brinefieldWorkerCounts.recordTasks > n &&
+        document.querySelector("[data-role=record-status][data-state=done]") !== null,
+      before.recordTasks,
+      { timeout: 240_000 },
+    );
+    const after = await counts();
+    expect(after.workers, "no worker started for the second run").toBe(before.workers);
     expect(problems).toEqual([]);
   }, 300_000);
 
