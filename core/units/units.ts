@@ -31,11 +31,142 @@ function math(): ReturnType<typeof create> {
 }
 
 /**
+ * The units written most often, with mathjs's own factors, so that reading "5000 m^3/day" or "24 degC"
+ * needs no mathjs instance (creating one is most of the first run's time in a fresh page or worker).
+ * The arithmetic below is mathjs's own (Unit._normalize, Unit.to, Unit._denormalize for plain numbers),
+ * so the numbers are the same to the last bit; tests/core/units/units-fast-path.test.ts checks every unit
+ * here against mathjs. Anything else (other units, powers, prefixes, offsets between units) goes to mathjs.
+ */
+interface PlainUnit {
+  /** mathjs's unit value and prefix value (kept apart: mathjs multiplies them before the power). */
+  readonly value: number;
+  readonly prefix: number;
+  /** Exponents of mass, length, time, temperature. */
+  readonly dims: readonly [number, number, number, number];
+  readonly offset: number;
+}
+
+const plain = (value: number, dims: PlainUnit["dims"], prefix = 1, offset = 0): PlainUnit => ({
+  value,
+  prefix,
+  dims,
+  offset,
+});
+const LENGTH = [0, 1, 0, 0] as const;
+const MASS = [1, 0, 0, 0] as const;
+const TIME = [0, 0, 1, 0] as const;
+
+const PLAIN_BASE_UNITS: Readonly<Record<string, PlainUnit>> = {
+  m: plain(1, LENGTH),
+  km: plain(1, LENGTH, 1e3),
+  cm: plain(1, LENGTH, 1e-2),
+  mm: plain(1, LENGTH, 1e-3),
+  in: plain(0.0254, LENGTH),
+  ft: plain(0.3048, LENGTH),
+  L: plain(0.001, [0, 3, 0, 0]),
+  ML: plain(0.001, [0, 3, 0, 0], 1e6),
+  g: plain(0.001, MASS),
+  kg: plain(0.001, MASS, 1e3),
+  mg: plain(0.001, MASS, 1e-3),
+  s: plain(1, TIME),
+  min: plain(60, TIME),
+  h: plain(3600, TIME),
+  hour: plain(3600, TIME),
+  day: plain(86400, TIME),
+  degC: plain(1, [0, 0, 0, 1], 1, 273.15),
+};
+
+interface UnitPart {
+  readonly unit: PlainUnit;
+  readonly power: number;
+}
+
+const WS = "[ \\t\\n\\r]";
+const PLAIN_PART = "([A-Za-z]+)(?:\\^([1-9]))?";
+const PLAIN_UNIT = new RegExp(`^${PLAIN_PART}(?:${WS}*/${WS}*${PLAIN_PART})?$`);
+const PLAIN_QUANTITY = new RegExp(`^([-+]?(?:\\d+\\.?\\d*|\\.\\d+)(?:[eE][-+]?\\d+)?)${WS}+(.+)$`);
+
+/** "m^3/day" as unit parts with powers, or null when the fast path does not read it. */
+function plainParts(text: string): UnitPart[] | null {
+  const m = PLAIN_UNIT.exec(text);
+  if (!m) return null;
+  const first = PLAIN_UNITS[m[1]!];
+  if (!first) return null;
+  const parts: UnitPart[] = [{ unit: first, power: Number(m[2] ?? 1) }];
+  if (m[3] !== undefined) {
+    const second = PLAIN_UNITS[m[3]];
+    if (!second) return null;
+    parts.push({ unit: second, power: -Number(m[4] ?? 1) });
+  }
+  return parts;
+}
+
+/** mathjs's Unit._normalize for a number: the value in SI base units. */
+function normalised(value: number, parts: readonly UnitPart[]): number {
+  let res = value;
+  for (const { unit, power } of parts) res = res * Math.pow(unit.value * unit.prefix, power);
+  return res;
+}
+
+function dimsOf(parts: readonly UnitPart[]): number[] {
+  const dims = [0, 0, 0, 0];
+  for (const { unit, power } of parts) for (let i = 0; i < 4; i++) dims[i]! += unit.dims[i]! * power;
+  return dims;
+}
+
+/** Trade units defined from the units above, as mathjs's createUnit derives them from their definitions. */
+function tradeUnit(value: number, definition: string): PlainUnit {
+  const parts = plainParts(definition)!;
+  const d = dimsOf(parts);
+  return plain(normalised(value, parts), [d[0]!, d[1]!, d[2]!, d[3]!]);
+}
+
+// The trade units of math() below, from the same definitions.
+const PLAIN_UNITS: Record<string, PlainUnit> = { ...PLAIN_BASE_UNITS };
+Object.assign(PLAIN_UNITS, {
+  MGD: tradeUnit(3785.411784, "m^3/day"),
+  MLD: tradeUnit(1000, "m^3/day"),
+  cms: tradeUnit(1, "m^3/s"),
+  cfs: tradeUnit(1, "ft^3/s"),
+  ppt: tradeUnit(1, "g/kg"),
+});
+const KNOT = tradeUnit(1852, "m/hour");
+for (const name of ["knot", "knots", "kn", "kt"]) PLAIN_UNITS[name] = KNOT;
+
+/**
+ * `value` `from` in `to` by mathjs's arithmetic, or null when the fast path cannot say (a unit it does
+ * not hold, units of different kinds, or two units with different offsets): mathjs then decides.
+ */
+function plainConvert(value: number, from: string, to: string): number | null {
+  const source = plainParts(from);
+  const target = plainParts(to);
+  if (!source || !target) return null;
+  const a = dimsOf(source);
+  const b = dimsOf(target);
+  for (let i = 0; i < 4; i++) if (Math.abs(a[i]! - b[i]!) > 1e-12) return null;
+  const derived = source.length > 1 || source[0]!.power !== 1;
+  if (!derived && source[0]!.unit.offset !== target[0]!.unit.offset) return null;
+  let res = normalised(value, source);
+  for (const { unit, power } of target) res = res / Math.pow(unit.value * unit.prefix, power);
+  return res;
+}
+
+/** For the test that holds the fast path to mathjs: its unit names, its conversion, and mathjs's. */
+export const plainUnitsForTest = {
+  names: (): string[] => Object.keys(PLAIN_UNITS),
+  convert: plainConvert,
+  mathjs: (value: number, from: string, to: string): number => math().unit(value, from).toNumber(to),
+  mathjsText: (text: string, to: string): number => math().unit(text).toNumber(to),
+};
+
+/**
  * `value` in `from` expressed in `to`, with the one units instance of core (trade units included).
  * The micro sign may be written as µ. Throws when mathjs does not know a unit or the two are not of one kind.
  */
 export function convertUnit(value: number, from: string, to: string): number {
-  return math().unit(value, withAsciiMicro(from)).toNumber(withAsciiMicro(to));
+  const fromUnit = withAsciiMicro(from);
+  const toUnit = withAsciiMicro(to);
+  return plainConvert(value, fromUnit, toUnit) ?? math().unit(value, fromUnit).toNumber(toUnit);
 }
 
 /** The micro sign (µ, or Greek mu) written as mathjs's prefix "u": "µg/L" → "ug/L". */
@@ -122,19 +253,24 @@ export function quantityToSI(raw: unknown, kind: QuantityKind): QuantityParse {
     return { ok: false, message: 'must be a plain number or a percentage (e.g. 0.45 or "45 %")' };
   }
   let value: number;
-  try {
-    const u = math().unit(normaliseUnitText(text));
-    if (u.value === null || u.value === undefined) return { ok: false, message: "has a unit but no number" };
-    value = u.toNumber(target);
-  } catch (err) {
-    const msg = err instanceof Error ? err.message : String(err);
-    const unknown = /Unit "([^"]*)" not found/i.exec(msg);
-    if (unknown) return { ok: false, message: `has a unit Brinefield does not know ("${unknown[1]}")` };
-    return {
-      ok: false,
-      message: `is not a ${QUANTITY_KINDS[kind].label} (expected a unit convertible to ${unitSymbol(target)})`,
-    };
-  }
+  const unitText = normaliseUnitText(text);
+  const quantity = PLAIN_QUANTITY.exec(unitText);
+  const fast = quantity ? plainConvert(parseFloat(quantity[1]!), quantity[2]!, target) : null;
+  if (fast !== null) value = fast;
+  else
+    try {
+      const u = math().unit(unitText);
+      if (u.value === null || u.value === undefined) return { ok: false, message: "has a unit but no number" };
+      value = u.toNumber(target);
+    } catch (err) {
+      const msg = err instanceof Error ? err.message : String(err);
+      const unknown = /Unit "([^"]*)" not found/i.exec(msg);
+      if (unknown) return { ok: false, message: `has a unit Brinefield does not know ("${unknown[1]}")` };
+      return {
+        ok: false,
+        message: `is not a ${QUANTITY_KINDS[kind].label} (expected a unit convertible to ${unitSymbol(target)})`,
+      };
+    }
   if (!Number.isFinite(value)) return { ok: false, message: `is not a finite ${QUANTITY_KINDS[kind].label}` };
   return { ok: true, value, converted: true, note: `${raw} → ${formatNumber(value)} ${unitSymbol(target)}` };
 }
@@ -177,7 +313,7 @@ export function siToDisplay(value: number, kind: QuantityKind, system: UnitSyste
   const k = QUANTITY_KINDS[kind];
   const target = system === "si" ? k.si : k.us;
   if (target === k.si || target === "") return { value, unit: unitSymbol(target) };
-  return { value: math().unit(value, k.si).toNumber(target), unit: unitSymbol(target) };
+  return { value: convertUnit(value, k.si, target), unit: unitSymbol(target) };
 }
 
 /** Converts a display value back to SI. */
@@ -185,7 +321,7 @@ export function displayToSI(value: number, kind: QuantityKind, system: UnitSyste
   const k = QUANTITY_KINDS[kind];
   const from = system === "si" ? k.si : k.us;
   if (from === k.si || from === "") return value;
-  return math().unit(value, from).toNumber(k.si);
+  return convertUnit(value, from, k.si);
 }
 
 /** Compact engineering formatting: 4 significant figures, no exponent for ordinary magnitudes. */
