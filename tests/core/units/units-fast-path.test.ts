@@ -1,5 +1,5 @@
 /**
- * Common unit strings are read without a mathjs instance (core/units/units.ts, the plain-unit fast path).
+ * Common unit strings are read without a mathjs instance (core/units/plain-units.ts).
  * mathjs stays the reference: every unit the fast path holds, alone, raised to a power and divided by
  * another, is converted both ways and must give the very same double as mathjs's Unit, for values across
  * many magnitudes. Anything the fast path does not hold must be left to mathjs.
@@ -7,9 +7,14 @@
 import { readFileSync, readdirSync } from "node:fs";
 import { join } from "node:path";
 import { describe, expect, it } from "vitest";
-import { normaliseUnitText, plainUnitsForTest, quantityToSI, QUANTITY_KINDS } from "../../../core/units/units";
-
-const { names, convert, mathjs, mathjsText } = plainUnitsForTest;
+import { plainConvert as convert, plainUnitNames as names } from "../../../core/units/plain-units";
+import {
+  mathjsConvert as mathjs,
+  mathjsQuantity as mathjsText,
+  normaliseUnitText,
+  quantityToSI,
+  QUANTITY_KINDS,
+} from "../../../core/units/units";
 
 /** Values across magnitudes and signs, from a fixed-seed generator, plus round and demo-like values. */
 function values(): number[] {
