@@ -15,10 +15,21 @@ let failed = false;
 interface FirstRun {
   readonly file: unknown;
   response: EngineResponse | null;
-  taken: boolean;
-  deliver: ((response: EngineResponse) => void) | null;
+  /** Where the response goes once it is there (the hook that took the run over), if anywhere. */
+  taker: ((response: EngineResponse) => void) | null;
+  /** True once the response has gone to a taker. */
+  done: boolean;
 }
 let firstRun: FirstRun | null = null;
+
+/** Hands the first run's response to its taker when both are there. */
+function settle(run: FirstRun): void {
+  const { response, taker } = run;
+  if (!response || !taker || run.done) return;
+  run.done = true;
+  run.taker = null;
+  taker(response);
+}
 
 /** Starts the engine worker if it is not running yet; null when this platform cannot start one. */
 export function startEngineWorker(): Worker | null {
@@ -35,9 +46,7 @@ export function startEngineWorker(): Worker | null {
     const run = firstRun;
     if (event.data.id !== FIRST_RUN_ID || !run || run.response) return;
     run.response = event.data;
-    const deliver = run.deliver;
-    run.deliver = null;
-    deliver?.(event.data);
+    settle(run);
   });
   // A worker that fails before the engine hook listens (its script did not load) is not used: the hook
   // then runs core on the UI thread. Later failures reach the hook's own listener too.
@@ -51,29 +60,30 @@ export function startEngineWorker(): Worker | null {
 export function sendFirstRun(file: unknown): void {
   const started = startEngineWorker();
   if (!started || firstRun) return;
-  firstRun = { file, response: null, taken: false, deliver: null };
+  firstRun = { file, response: null, taker: null, done: false };
   const request: EngineRequest = { id: FIRST_RUN_ID, file };
   started.postMessage(request);
 }
 
 /**
- * Takes over the run sent by sendFirstRun when `file` is that very file (same object) and nobody took it
- * yet: `deliver` gets its response, on a later microtask when it has already arrived. False otherwise (the
+ * Takes over the run sent by sendFirstRun when `file` is that very file (same object) and no one holds it:
+ * `deliver` gets its response, on a later microtask when it has already arrived. False otherwise (the
  * caller sends its own request).
  */
 export function takeFirstRun(file: unknown, deliver: (response: EngineResponse) => void): boolean {
   const run = firstRun;
-  if (!run || run.taken || run.file !== file || !worker) return false;
-  run.taken = true;
-  const response = run.response;
-  if (response) queueMicrotask(() => deliver(response));
-  else run.deliver = deliver;
+  if (!run || run.done || run.taker || run.file !== file || !worker) return false;
+  run.taker = deliver;
+  if (run.response) queueMicrotask(() => settle(run));
   return true;
 }
 
-/** Forgets where a taken first run's response should go (the hook that took it unmounted). */
+/**
+ * The hook that took the first run over unmounted before its response came: the response waits for the
+ * next taker (a remount takes the run over again).
+ */
 export function releaseFirstRun(): void {
-  if (firstRun) firstRun.deliver = null;
+  if (firstRun && !firstRun.done) firstRun.taker = null;
 }
 
 /** Forgets the worker (after it crashed): the next `startEngineWorker` call does not retry. */
