@@ -1,9 +1,7 @@
-/** Entry: the capture route for the report printer, or the app. */
+/** The capture route for the report printer, or the app (loaded by renderer/boot.ts, the page's entry). */
 import { StrictMode, Suspense, lazy } from "react";
 import { createRoot } from "react-dom/client";
 import { App } from "./App";
-import { startEngineWorker } from "./engine/engine-worker";
-import "./styles.css";
 
 // The 3D capture route (three.js) loads only when asked for.
 const CaptureView = lazy(() => import("./capture/CaptureView").then((m) => ({ default: m.CaptureView })));
@@ -19,8 +17,6 @@ if (params.get("capture") === "3d") {
     </Suspense>,
   );
 } else {
-  // The core worker starts loading now, while React renders the first screen.
-  startEngineWorker();
   root.render(
     <StrictMode>
       <App />

@@ -4,7 +4,7 @@
  * are defined here once. Inside core every number is SI (m, s, m³/s, g/kg, °C, degrees for angles).
  */
 import { create, createUnitDependencies, unitDependencies } from "mathjs";
-import { commonQuantityIn, convertCommonUnit } from "./common-units";
+import { PLAIN_QUANTITY, plainConvert } from "./plain-units";
 
 // mathjs with the trade units below, created on first use: study worker threads never parse a unit, and
 // creating the instance is most of their start-up time.
@@ -31,20 +31,24 @@ function math(): ReturnType<typeof create> {
   return m;
 }
 
+/** mathjs's own conversion, without the fast path of plain-units.ts: the reference that path is held to. */
+export function mathjsConvert(value: number, from: string, to: string): number {
+  return math().unit(value, from).toNumber(to);
+}
+
+/** mathjs's own reading of a quantity string in `to`, without the fast path (see mathjsConvert). */
+export function mathjsQuantity(text: string, to: string): number {
+  return math().unit(text).toNumber(to);
+}
+
 /**
  * `value` in `from` expressed in `to`, with the one units instance of core (trade units included).
  * The micro sign may be written as µ. Throws when mathjs does not know a unit or the two are not of one kind.
  */
 export function convertUnit(value: number, from: string, to: string): number {
-  const a = withAsciiMicro(from);
-  const b = withAsciiMicro(to);
-  const common = convertCommonUnit(value, a, b);
-  return typeof common === "number" ? common : convertUnitWithMathjs(value, a, b);
-}
-
-/** The same conversion always through mathjs: the path for units outside the common list, and the tests' reference. */
-export function convertUnitWithMathjs(value: number, from: string, to: string): number {
-  return math().unit(value, from).toNumber(to);
+  const fromUnit = withAsciiMicro(from);
+  const toUnit = withAsciiMicro(to);
+  return plainConvert(value, fromUnit, toUnit) ?? math().unit(value, fromUnit).toNumber(toUnit);
 }
 
 /** The micro sign (µ, or Greek mu) written as mathjs's prefix "u": "µg/L" → "ug/L". */
@@ -131,24 +135,24 @@ export function quantityToSI(raw: unknown, kind: QuantityKind): QuantityParse {
     return { ok: false, message: 'must be a plain number or a percentage (e.g. 0.45 or "45 %")' };
   }
   let value: number;
-  try {
-    const written = normaliseUnitText(text);
-    const common = commonQuantityIn(written, target);
-    if (typeof common === "number") value = common;
-    else {
-      const u = math().unit(written);
+  const unitText = normaliseUnitText(text);
+  const quantity = PLAIN_QUANTITY.exec(unitText);
+  const fast = quantity ? plainConvert(parseFloat(quantity[1]!), quantity[2]!, target) : null;
+  if (fast !== null) value = fast;
+  else
+    try {
+      const u = math().unit(unitText);
       if (u.value === null || u.value === undefined) return { ok: false, message: "has a unit but no number" };
       value = u.toNumber(target);
+    } catch (err) {
+      const msg = err instanceof Error ? err.message : String(err);
+      const unknown = /Unit "([^"]*)" not found/i.exec(msg);
+      if (unknown) return { ok: false, message: `has a unit Brinefield does not know ("${unknown[1]}")` };
+      return {
+        ok: false,
+        message: `is not a ${QUANTITY_KINDS[kind].label} (expected a unit convertible to ${unitSymbol(target)})`,
+      };
     }
-  } catch (err) {
-    const msg = err instanceof Error ? err.message : String(err);
-    const unknown = /Unit "([^"]*)" not found/i.exec(msg);
-    if (unknown) return { ok: false, message: `has a unit Brinefield does not know ("${unknown[1]}")` };
-    return {
-      ok: false,
-      message: `is not a ${QUANTITY_KINDS[kind].label} (expected a unit convertible to ${unitSymbol(target)})`,
-    };
-  }
   if (!Number.isFinite(value)) return { ok: false, message: `is not a finite ${QUANTITY_KINDS[kind].label}` };
   return { ok: true, value, converted: true, note: `${raw} → ${formatNumber(value)} ${unitSymbol(target)}` };
 }

@@ -2,7 +2,8 @@
  * Runs the current scenario file in the core worker and keeps the last good result on screen while the
  * file has errors. The first edit is sent at once (no debounce); edits made while a run is in flight are
  * coalesced into one run of the latest file, sent when the reply arrives. Stale responses (an older edit
- * finishing late) are dropped.
+ * finishing late) are dropped. The first document's run was already sent before the first render
+ * (renderer/boot.ts); the hook takes it over rather than sending the same file again.
  */
 import { fieldBounds } from "../../core/scenario/bounds";
 import { formatNumber, siLabel } from "../../core/units";
@@ -11,7 +12,7 @@ import type { BrinefieldResult } from "../../core/result/contract";
 import type { Scenario } from "../../core/scenario/types";
 import type { EngineIssue, EngineRequest, EngineResponse } from "./messages";
 import { runFile } from "./run-file";
-import { dropEngineWorker, startEngineWorker } from "./engine-worker";
+import { dropEngineWorker, FIRST_RUN_ID, releaseFirstRun, startEngineWorker, takeFirstRun } from "./engine-worker";
 
 export interface EngineState {
   /** Last successful run (kept while later edits fail). */
@@ -80,6 +81,8 @@ export function useEngine(file: unknown): EngineState {
   const inFlight = useRef(false);
   // Set when no worker can run (e.g. a platform that refuses module workers): core then runs here.
   const inThread = useRef(false);
+  // What a reply from the worker does (set once the worker is listened to).
+  const onReply = useRef<(response: EngineResponse) => void>(() => {});
 
   const pump = useRef<() => void>(() => {});
   pump.current = () => {
@@ -89,7 +92,9 @@ export function useEngine(file: unknown): EngineState {
     const request: EngineRequest = { id, file: latestFile.current };
     if (workerRef.current) {
       inFlight.current = true;
-      workerRef.current.postMessage(request);
+      // The first document's run may already be running in the worker since before the first render.
+      const taken = takeFirstRun(request.file, (response) => onReply.current({ ...response, id }));
+      if (!taken) workerRef.current.postMessage(request);
     } else if (inThread.current) {
       const response = runFile(id, request.file);
       if (response.id === latestId.current) setState((previous) => applyResponse(previous, response));
@@ -114,10 +119,14 @@ export function useEngine(file: unknown): EngineState {
       return;
     }
     workerRef.current = worker;
-    const onMessage = (event: MessageEvent<EngineResponse>) => {
+    onReply.current = (response: EngineResponse) => {
       inFlight.current = false;
-      accept(event.data);
+      accept(response);
       pump.current(); // edits made during the run: one request with the newest file
+    };
+    const onMessage = (event: MessageEvent<EngineResponse>) => {
+      // The run sent before the first render reaches the hook through takeFirstRun.
+      if (event.data.id !== FIRST_RUN_ID) onReply.current(event.data);
     };
     const onError = (event: ErrorEvent) => {
       // The worker could not load or crashed: keep working on this thread rather than stop.
@@ -133,6 +142,8 @@ export function useEngine(file: unknown): EngineState {
       // The worker belongs to the page (started before the first render) and stays for the next mount.
       worker.removeEventListener("message", onMessage);
       worker.removeEventListener("error", onError);
+      releaseFirstRun();
+      onReply.current = () => {};
       workerRef.current = null;
       inFlight.current = false;
       sentId.current = 0;

@@ -118,6 +118,42 @@ describe("the built app", () => {
     expect(consoleProblems, "no console errors or CSP violations while loading").toEqual([]);
   });
 
+  it("sends the first document to the core worker once, before the app renders", async () => {
+    // The page's entry posts the first run before React loads; the engine hook takes it over rather
+    // than posting the same file again after the first render.
+    const context = await browser.newContext({ viewport: { width: 1600, height: 950 } });
+    await context.addInitScript(() => {
+      const log: string[] = [];
+      (window as unknown as { __engineLog: string[] }).__engineLog = log;
+      const post = Worker.prototype.postMessage;
+      Worker.prototype.postMessage = function (this: Worker, ...args: Parameters<Worker["postMessage"]>) {
+        log.push("request");
+        return post.apply(this, args);
+      } as Worker["postMessage"];
+      new MutationObserver(() => {
+        if (!log.includes("render") && document.getElementById("root")?.firstChild) log.push("render");
+        if (!log.includes("results") && document.querySelector("[data-role=headline-table]")) log.push("results");
+      }).observe(document, { childList: true, subtree: true });
+    });
+    const fresh = await context.newPage();
+    try {
+      await fresh.goto(server.url);
+      await fresh.locator("[data-role=headline-table]").waitFor({ timeout: 60_000 });
+      const log = await fresh.evaluate(() => (window as unknown as { __engineLog: string[] }).__engineLog);
+      expect(log.slice(0, 3), "one request, sent before the first render, then the results").toEqual([
+        "request",
+        "render",
+        "results",
+      ]);
+      expect(
+        await fresh.locator("[data-role=engine-status]").getAttribute("data-engine"),
+        "core runs in the Web Worker",
+      ).toBe("worker");
+    } finally {
+      await context.close();
+    }
+  });
+
   it("opens on the first demo scenario with results, the 3D view and the caution on screen", async () => {
     const caution = page.locator("[data-role=caution]");
     await expect.poll(() => caution.isVisible(), { message: "caution visible" }).toBe(true);

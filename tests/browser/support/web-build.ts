@@ -39,7 +39,8 @@ export function ensureWebBuilt(): void {
       "--logLevel",
       "error",
     ],
-    { cwd: root, encoding: "utf8", timeout: 240_000 },
+    // The production build, as users get it: vitest's NODE_ENV ("test") would give React's development build.
+    { cwd: root, encoding: "utf8", timeout: 240_000, env: { ...process.env, NODE_ENV: "production" } },
   );
   if (run.status !== 0) throw new Error(`renderer build failed: ${run.stderr || run.stdout}`);
 }

@@ -2,8 +2,9 @@
  * Browser-side speed figures for `brinefield bench`: the production web build (dist/renderer, rebuilt
  * when older than its sources) served on 127.0.0.1 and driven in headless Chromium.
  *
- *  - page load → first result: `performance.now()` (from navigation start) when the results table first
- *    appears, median of several fresh loads;
+ *  - page load → first result: `performance.now()` (from navigation start) when the results table, which
+ *    is only rendered with a result's numbers in it, first appears in the page; median of several loads,
+ *    each in a fresh browser context (no cache, storage or renderer process carried over);
  *  - typing → new numbers: an edit of the port angle made inside the page (the input's value set and an
  *    `input` event dispatched, as a keystroke does), timed until the results table shows other numbers,
  *    median of several edits. Timed in the page itself, so the driver's round trips are not counted.
@@ -88,13 +89,19 @@ export async function benchBrowser(root = defaultRoot()): Promise<BrowserBench> 
   try {
     return await withChromium(async (browser) => {
       // bypassCSP lets the probes below run as page scripts; it does not change what the app loads or runs.
-      const context = await browser.newContext({ viewport: { width: 1400, height: 900 }, bypassCSP: true });
-      await context.addInitScript(FIRST_RESULT_PROBE);
+      const freshContext = async () => {
+        const context = await browser.newContext({ viewport: { width: 1400, height: 900 }, bypassCSP: true });
+        await context.addInitScript(FIRST_RESULT_PROBE);
+        return context;
+      };
       const loads: number[] = [];
+      let context = await freshContext();
       let page = await context.newPage();
       for (let i = 0; i < LOADS; i++) {
         if (i > 0) {
-          await page.close();
+          // A fresh context each time: every load starts cold, as the app does when it is opened.
+          await context.close();
+          context = await freshContext();
           page = await context.newPage();
         }
         await page.goto(url);
