@@ -131,7 +131,7 @@ export function runScenario(scenario: Scenario, options: RunOptions = {}): Brine
 
 /** One record step through the pipeline: the study summary with the intake's figures. */
 export function recordStepEvaluator(s: Scenario) {
-  return summaryWithIntake(s, runAmbientCase(s, { includePath: false, detail: caseDetail(s) }));
+  return summaryWithIntake(s, runAmbientCase(s, { detail: caseDetail(s) }));
 }
 
 /**

@@ -6,7 +6,10 @@ import { describe, it, expect } from "vitest";
 import { readFileSync, readdirSync } from "node:fs";
 import { join } from "node:path";
 import { parseScenario } from "../../core/scenario/parse";
-import { runScenario } from "../../core/pipeline";
+import { runAmbientCase, runScenario } from "../../core/pipeline";
+import { evaluateScenario } from "../../core/study/evaluate";
+import { summaryWithIntake } from "../../core/intake/summary";
+import { expandCases } from "../../core/cases";
 
 const demoDir = join(__dirname, "../../demo-scenarios");
 const demos = readdirSync(demoDir).filter((f) => f.endsWith(".json"));
@@ -98,6 +101,22 @@ describe("runScenario()", () => {
       edge.nearField.map((m) => m.impactDilution),
       "near-field dilutions",
     ).toEqual(full.nearField.map((m) => m.impactDilution));
+  });
+
+  it.each(demos)("gives a study the summary and warnings of the full pipeline, case by case (%s)", (file) => {
+    for (const c of expandCases(scenarioOf(load(file)))) {
+      const full = runAmbientCase(c.scenario);
+      const edge = runAmbientCase(c.scenario, { detail: "edge" });
+      expect(evaluateScenario(c.scenario), `${c.name}: study summary`).toEqual(summaryWithIntake(c.scenario, full));
+      expect(edge.warnings, `${c.name}: warnings`).toEqual(full.warnings);
+      expect(edge.port, `${c.name}: port`).toEqual(full.port);
+      expect(edge.densities, `${c.name}: densities`).toEqual(full.densities);
+      for (const [i, m] of edge.nearField.entries()) {
+        const f = full.nearField[i]!;
+        for (const k of ["maxRiseHeight", "impactDistance", "impactDilution", "nearFieldDilution", "warnings"] as const)
+          expect(m[k], `${c.name}: ${m.method} ${k}`).toEqual(f[k]);
+      }
+    }
   });
 });
 
