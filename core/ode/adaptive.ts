@@ -271,7 +271,7 @@ function eventsInStep<P>(run: AdaptiveRun<P>, t: number, hUsed: number, tNew: nu
     }
   }
   const stop = stepHits ? recordCrossings(run, stepHits, tNew) : STOP_NONE;
-  if (stop !== STOP_RESTART) gOld.set(gNew);
+  if (stop !== STOP_RESTART) for (let e = 0; e < specs.length; e++) gOld[e] = gNew[e];
   return stop;
 }
 
