@@ -309,11 +309,11 @@ function withAngleBias(result: NearFieldMethodResult, jet: JetSource, text: bool
     out.dilutionRange = [si, Math.max(si, si / ratio)];
     if (text)
       notes.push(
-      `dilutionRange: low = the computed centreline impact dilution; high = computed ÷ ${ratio.toFixed(2)}, ` +
-        (at.covered
-          ? "the model ÷ published ratio at this angle against Lai & Lee's (2012) 1.06·F."
-          : "the lowest model ÷ published ratio over 38°–60° (no published impact dilution at this angle is held)."),
-    );
+        `dilutionRange: low = the computed centreline impact dilution; high = computed ÷ ${ratio.toFixed(2)}, ` +
+          (at.covered
+            ? "the model ÷ published ratio at this angle against Lai & Lee's (2012) 1.06·F."
+            : "the lowest model ÷ published ratio over 38°–60° (no published impact dilution at this angle is held)."),
+      );
   }
   let statement = statementByAngle.get(jet.angle);
   if (statement === undefined) {

@@ -58,7 +58,9 @@ export function profileAtDepth(
 }
 
 /** `profileAtDepth` for one profile, its columns read once (the stage interpolates at several depths). */
-function profileInterpolator(profile: readonly ProfilePoint[]): (depth: number) => { salinity: number; temperature: number } {
+function profileInterpolator(
+  profile: readonly ProfilePoint[],
+): (depth: number) => { salinity: number; temperature: number } {
   const depths = profile.map((p) => p.depth);
   const salinities = profile.map((p) => p.salinity);
   const temperatures = profile.map((p) => p.temperature);
