@@ -60,8 +60,9 @@ export interface RunOptions {
   readonly sink?: PathSink;
   /**
    * "full" (default), or "edge" for loops that read only the edge verdict and near-field numbers:
-   * `mixingZone.alternatives`, `series` and `footprint` are then left empty and `inputsHash` is "" (same
-   * physics, less output).
+   * `mixingZone.alternatives`, `series` and `footprint` are then left empty, `inputsHash` is "", the
+   * near-field methods' `notes` are empty (and their variants carry no `note`), and `multiport.reason` is ""
+   * (same physics, numbers and warnings; less output).
    */
   readonly detail?: "full" | "edge";
 }
@@ -131,7 +132,7 @@ export function runScenario(scenario: Scenario, options: RunOptions = {}): Brine
 
 /** One record step through the pipeline: the study summary with the intake's figures. */
 export function recordStepEvaluator(s: Scenario) {
-  return summaryWithIntake(s, runAmbientCase(s, { includePath: false, detail: caseDetail(s) }));
+  return summaryWithIntake(s, runAmbientCase(s, { detail: caseDetail(s) }));
 }
 
 /**
@@ -156,7 +157,7 @@ export function runAmbientCase(scenario: Scenario, options: RunOptions = {}): Am
     sourceWarnings = nearField.warnings;
     after = risingStagesAfterNearField({ ...common, methods: nearField.methods });
   } else {
-    const nearField = nearFieldStage({ jet, column: props.column, sink: options.sink });
+    const nearField = nearFieldStage({ jet, column: props.column, sink: options.sink, detail: options.detail });
     sourceWarnings = nearField.warnings;
     after = stagesAfterNearField({ ...common, nearField: nearField.methods });
   }
@@ -208,14 +209,23 @@ export function runAmbientCase(scenario: Scenario, options: RunOptions = {}): Am
   };
 }
 
-/** Stage 3: both near-field methods side by side, and the port-level checks of the jet. */
-export function nearFieldStage(input: { jet: JetSource; column: AmbientColumn; sink?: PathSink }): {
+/**
+ * Stage 3: both near-field methods side by side, and the port-level checks of the jet. In "edge" detail the
+ * methods build no notes (nothing in a study loop reads them).
+ */
+export function nearFieldStage(input: {
+  jet: JetSource;
+  column: AmbientColumn;
+  sink?: PathSink;
+  detail?: "full" | "edge";
+}): {
   methods: NearFieldMethodResult[];
   warnings: ResultWarning[];
 } {
-  const lengthScale = nearFieldLengthScale(input.jet, input.column);
+  const text = input.detail !== "edge";
+  const lengthScale = nearFieldLengthScale(input.jet, input.column, { text });
   // The path is always computed: the edge may lie inside the jet, where its dilution is read off the path.
-  const integral = nearFieldIntegral(input.jet, input.column, { includePath: true, sink: input.sink });
+  const integral = nearFieldIntegral(input.jet, input.column, { includePath: true, sink: input.sink, text });
   return { methods: [lengthScale, integral], warnings: jetSourceWarnings(input.jet, input.column) };
 }
 
@@ -264,7 +274,12 @@ export interface AfterNearFieldInput {
 export function stagesAfterNearField(input: AfterNearFieldInput): AfterNearField {
   const { scenario, detail } = input;
   // 4. Multiport: merging of neighbouring jets; its own `nearField` is the near-field results after merging.
-  const multiport = multiportFromNearField({ scenario, jet: input.jet, nearField: input.nearField });
+  const multiport = multiportFromNearField({
+    scenario,
+    jet: input.jet,
+    nearField: input.nearField,
+    text: detail !== "edge",
+  });
   // 5. Far field: from the near-field end (after merging) to the mixing-zone edge.
   const farField = farFieldStage({
     scenario,

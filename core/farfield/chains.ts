@@ -40,7 +40,8 @@ export interface FarSeries {
 
 export interface Chain {
   nf: NearFieldMethodResult;
-  profile: JetProfile;
+  /** The jet's dilution along plan distance, built on first read (edge-only runs mostly never read it). */
+  readonly profile: JetProfile;
   end: { distance: number; dilution: number };
   impactDistance: number;
   layerRadius: number;
@@ -132,9 +133,12 @@ export function chainsFromNearField(
     // least the jet's half-width at impact (judgement); 0.5 m floor keeps the geometry finite.
     const halfAtImpact = (jetWidthsFromNearField(nf, portHeight)?.widthAtImpact ?? 0) / 2;
     const layerRadius = Math.max(end.distance - xi, halfAtImpact, 0.5);
+    let profile: JetProfile | undefined;
     chains.push({
       nf,
-      profile: jetProfileFromNearField(nf),
+      get profile() {
+        return (profile ??= jetProfileFromNearField(nf));
+      },
       end,
       impactDistance: Math.min(xi, end.distance),
       layerRadius,

@@ -173,7 +173,10 @@ export function farFieldStage(input: FarFieldInput): FarFieldOutput {
   };
   const governing: GoverningLayer | null = chain
     ? {
-        profile: chain.profile,
+        // Read through the chain: built only if the footprint (full detail) asks for it.
+        get profile() {
+          return chain.profile;
+        },
         impactDistance: chain.impactDistance,
         nearFieldEnd: chain.end.distance,
         layer: farSeries(ctx, chain, farMethod),

@@ -31,6 +31,12 @@ export interface MultiportInput {
   readonly scenario: Scenario;
   readonly jet: JetSource;
   readonly nearField: readonly NearFieldMethodResult[];
+  /**
+   * Build the texts (default true): `reason` and the note added to each scaled method. Study loops that
+   * read only numbers and warnings turn it off: the same regime, factors and warnings, `reason` "" and no
+   * note added.
+   */
+  readonly text?: boolean;
 }
 
 export interface JetWidths {
@@ -154,7 +160,12 @@ function mergedLineLength(scenario: Scenario, maxRiseDistance: number): number {
  * the range, and impact ≤ near-field end, survive the scaling; flux-averaged values and the entrained flow
  * are recomputed from the scaled centreline values with the method's own factor.
  */
-function scaleMethod(nf: NearFieldMethodResult, factor: number, note: string, portFlow: number): NearFieldMethodResult {
+function scaleMethod(
+  nf: NearFieldMethodResult,
+  factor: number,
+  note: string | null,
+  portFlow: number,
+): NearFieldMethodResult {
   if (factor >= 1) return nf;
   const path = nf.path;
   let iTop = 0;
@@ -188,7 +199,7 @@ function scaleMethod(nf: NearFieldMethodResult, factor: number, note: string, po
           ? null
           : nf.entrainedFlow * factor,
     path: scaledPath,
-    notes: [...(nf.notes ?? []), note],
+    notes: note === null ? nf.notes : [...(nf.notes ?? []), note],
   };
 }
 
@@ -229,9 +240,10 @@ function regimeFor(
  */
 export function multiportFromNearField(input: MultiportInput): MultiportAssessment {
   const { scenario, jet, nearField } = input;
+  const text = input.text !== false;
   const n = portCountFromDiffuser(scenario);
   if (n <= 1) return singlePortAssessment(nearField);
-  const each = nearField.map((nf) => methodMergingFromNearField(scenario, jet, nf));
+  const each = nearField.map((nf) => methodMergingFromNearField(scenario, jet, nf, text));
   const perMethod = each.map((m) => m.merging);
   const warnings: ResultWarning[] = each.flatMap((m) => m.warnings);
   const known = perMethod.filter((m) => m.regime !== "unknown");
@@ -258,7 +270,7 @@ export function multiportFromNearField(input: MultiportInput): MultiportAssessme
       regime,
       merged: regime === "merged-line-source",
       portsUsed: n,
-      reason: mergingReason({ known, sensitivity, dF, spacing }),
+      reason: text ? mergingReason({ known, sensitivity, dF, spacing }) : "",
       spacingRatio: dF > 0 && Number.isFinite(dF) ? spacing / dF : null,
       dilutionFactor: worst ? worst.factor : 1,
       mergingSensitivity: sensitivity.map(({ method, definition, widthFactor, regime, factor }) => ({
@@ -302,6 +314,7 @@ function methodMergingFromNearField(
   scenario: Scenario,
   jet: JetSource,
   nf: NearFieldMethodResult,
+  text: boolean,
 ): { merging: MethodMerging; adjusted: NearFieldMethodResult; warnings: ResultWarning[] } {
   const widths = jetWidthsFromNearField(nf, scenario.diffuser.portHeight);
   if (!widths || nf.impactDilution === null) {
@@ -340,9 +353,10 @@ function methodMergingFromNearField(
     lineDilution,
     sensitivity,
   };
-  const note =
-    `Multiport ${regime}: dilutions after maximum rise multiplied by ${factor.toFixed(3)} ` +
-    `(line-plume dilution ${lineDilution.toFixed(1)} vs single-jet impact dilution ${nf.impactDilution.toFixed(1)}).`;
+  const note = text
+    ? `Multiport ${regime}: dilutions after maximum rise multiplied by ${factor.toFixed(3)} ` +
+      `(line-plume dilution ${lineDilution.toFixed(1)} vs single-jet impact dilution ${nf.impactDilution.toFixed(1)}).`
+    : null;
   return { merging, adjusted: scaleMethod(nf, factor, note, jet.flow), warnings: [...warnings] };
 }
 

@@ -64,11 +64,14 @@ function eventValues(
   only = -1,
 ): void {
   const z = y[IZ];
-  if (only >= 0 && only !== EV_SEABED_EDGE && only !== EV_SURFACE_EDGE && only !== EV_MAX_RISE) {
-    // Root search on a cheap event: just that value.
+  if (only >= 0) {
+    // Root search: just that event's value, by the same expression as below (the same number).
     if (only === EV_RETURN) out[EV_RETURN] = z;
+    else if (only === EV_SEABED_EDGE) out[EV_SEABED_EDGE] = z - verticalHalfExtent(y) + p.portHeight;
     else if (only === EV_IMPACT) out[EV_IMPACT] = z + p.portHeight;
+    else if (only === EV_SURFACE_EDGE) out[EV_SURFACE_EDGE] = p.portDepth - (z + verticalHalfExtent(y));
     else if (only === EV_SURFACE_CENTRE) out[EV_SURFACE_CENTRE] = p.portDepth - z;
+    else if (only === EV_MAX_RISE) out[EV_MAX_RISE] = maxRiseValue(s, y, p, dy);
     else if (only === EV_TOP) out[EV_TOP] = y[IMZ];
     else if (only === EV_NEUTRAL) out[EV_NEUTRAL] = neutralBuoyancy(y, p);
     else out[EV_ENTRAINMENT_SWITCH] = entrainmentSwitch(y, p);
@@ -80,14 +83,17 @@ function eventValues(
   out[EV_IMPACT] = z + p.portHeight;
   out[EV_SURFACE_EDGE] = p.portDepth - (z + half);
   out[EV_SURFACE_CENTRE] = p.portDepth - z;
-  if (dy) out[EV_MAX_RISE] = upperEdgeSlope(y, dy);
-  else {
-    integralJetRhs(s, y, scratchDy, p);
-    out[EV_MAX_RISE] = upperEdgeSlope(y, scratchDy);
-  }
+  out[EV_MAX_RISE] = maxRiseValue(s, y, p, dy);
   out[EV_TOP] = y[IMZ];
   if (out.length > EV_ENTRAINMENT_SWITCH) out[EV_ENTRAINMENT_SWITCH] = entrainmentSwitch(y, p);
   if (out.length > EV_NEUTRAL) out[EV_NEUTRAL] = neutralBuoyancy(y, p);
+}
+
+/** The upper edge's slope (zero at the maximum rise), from dy when given, else from the right-hand side. */
+function maxRiseValue(s: number, y: Float64Array, p: IntegralParams, dy: Float64Array | undefined): number {
+  if (dy) return upperEdgeSlope(y, dy);
+  integralJetRhs(s, y, scratchDy, p);
+  return upperEdgeSlope(y, scratchDy);
 }
 
 /** The centreline's reduced gravity relative to the water at its level: zero at the trap level. */

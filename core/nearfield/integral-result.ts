@@ -86,6 +86,8 @@ export interface IntegralRunOutcome {
   readonly maxSteps: number;
   /** Arc length at which the integration stops, m. */
   readonly maxLength: number;
+  /** Build the notes (default true; see IntegralOptions.text). */
+  readonly text?: boolean;
 }
 
 /** One event of the result at state y (arc length s), with the centreline dilution there. */
@@ -300,6 +302,7 @@ export function assembleIntegralResult(outcome: IntegralRunOutcome): NearFieldMe
   const { jet, column, params, run, log, q0, u0, includePath, path } = outcome;
   const warnings: ResultWarning[] = [];
   const notes: string[] = [];
+  const text = outcome.text !== false;
   const logged = eventsFromLog(log, q0);
   const { events, returnHit, impactHit } = logged;
   let maxRise = logged.maxRise;
@@ -346,9 +349,11 @@ export function assembleIntegralResult(outcome: IntegralRunOutcome): NearFieldMe
     notes.push(NEAR_FIELD_GROWTH_NOTE);
   }
   notes.push(CENTRELINE_NOTE);
-  notes.push(
-    `Integration: Dormand–Prince 5(4), ${run.steps} steps, ${run.rejected} rejected, ${run.evaluations} evaluations, stop: ${run.reason}.`,
-  );
+  if (text) {
+    notes.push(
+      `Integration: Dormand–Prince 5(4), ${run.steps} steps, ${run.rejected} rejected, ${run.evaluations} evaluations, stop: ${run.reason}.`,
+    );
+  }
 
   events.sort((a, b) => a.s - b.s);
   return {
@@ -373,6 +378,6 @@ export function assembleIntegralResult(outcome: IntegralRunOutcome): NearFieldMe
     warnings,
     path: includePath ? path.decimate() : undefined,
     events,
-    notes,
+    notes: text ? notes : [],
   };
 }

@@ -60,6 +60,11 @@ export interface IntegralOptions {
   relTol?: number;
   /** Absolute tolerance, relative to each variable's source scale (default 3e-10). */
   absTol?: number;
+  /**
+   * Build the `notes` (default true). Study loops that read only numbers and warnings turn it off: the same
+   * numbers, warnings, events, bias and path, with `notes` empty.
+   */
+  text?: boolean;
   /** Maximum accepted steps (default 5000). */
   maxSteps?: number;
   /** Maximum centreline length, m (default max(2000 m, 200·depth)). */
@@ -270,11 +275,12 @@ export function nearFieldIntegral(
       path,
       maxSteps,
       maxLength,
+      text: options.text !== false,
     });
   } finally {
     if (shared) stepperBusy = false;
   }
-  return withAngleBias(result, jet);
+  return withAngleBias(result, jet, options.text !== false);
 }
 
 let computingBias = false;
@@ -285,7 +291,7 @@ const statementByAngle = new Map<number, string>();
  * Adds the angle-dependent bias statement and dilution range (see integral-bias.ts) to the result just
  * assembled (a fresh object, so it is completed in place); never recurses twice.
  */
-function withAngleBias(result: NearFieldMethodResult, jet: JetSource): NearFieldMethodResult {
+function withAngleBias(result: NearFieldMethodResult, jet: JetSource, text: boolean): NearFieldMethodResult {
   if (computingBias) return result;
   let points: readonly IntegralBiasPoint[];
   computingBias = true;
@@ -301,12 +307,13 @@ function withAngleBias(result: NearFieldMethodResult, jet: JetSource): NearField
   if (si !== null && at) {
     const ratio = Math.min(at.ratio, 1);
     out.dilutionRange = [si, Math.max(si, si / ratio)];
-    notes.push(
-      `dilutionRange: low = the computed centreline impact dilution; high = computed ÷ ${ratio.toFixed(2)}, ` +
-        (at.covered
-          ? "the model ÷ published ratio at this angle against Lai & Lee's (2012) 1.06·F."
-          : "the lowest model ÷ published ratio over 38°–60° (no published impact dilution at this angle is held)."),
-    );
+    if (text)
+      notes.push(
+        `dilutionRange: low = the computed centreline impact dilution; high = computed ÷ ${ratio.toFixed(2)}, ` +
+          (at.covered
+            ? "the model ÷ published ratio at this angle against Lai & Lee's (2012) 1.06·F."
+            : "the lowest model ÷ published ratio over 38°–60° (no published impact dilution at this angle is held)."),
+      );
   }
   let statement = statementByAngle.get(jet.angle);
   if (statement === undefined) {

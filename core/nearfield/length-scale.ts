@@ -214,12 +214,12 @@ function conservativeHeadline(own: readonly OwnValues[]): Headline {
  * near-field end; the conservative headline takes the lower of that and any measured value. Updates
  * `headline` in place and notes what it did.
  */
-function carryImpactToNearFieldEnd(headline: Headline, jet: JetSource, notes: string[]): void {
+function carryImpactToNearFieldEnd(headline: Headline, jet: JetSource, notes: string[] | null): void {
   const { top, from } = headline;
   if (top.impactDilution === null) return;
   const grown = top.impactDilution * ROBERTS_1997_NEAR_FIELD_GROWTH.dilution;
   if (top.nearFieldDilution === null || grown < top.nearFieldDilution) {
-    notes.push(
+    notes?.push(
       `nearFieldDilution = impact dilution ${top.impactDilution.toFixed(1)} × ` +
         `${ROBERTS_1997_NEAR_FIELD_GROWTH.dilution.toFixed(3)}, the growth from impact to the end of the ` +
         `near field in Roberts et al. (1997) (S_n/S_i = 2.6/1.6)` +
@@ -248,8 +248,22 @@ function impactDilutionRange(own: readonly OwnValues[], notes: string[]): readon
   return dilutionRange;
 }
 
+/** What a length-scale estimate writes besides its numbers and warnings. */
+export interface LengthScaleOptions {
+  /**
+   * Build the `notes` and the variants' `note` texts (default true). Study loops that read only numbers and
+   * warnings turn it off: the same numbers, warnings and source, with `notes` empty.
+   */
+  readonly text?: boolean;
+}
+
 /** Length-scale (Method 1) near-field estimate for one round dense jet. */
-export function nearFieldLengthScale(jet: JetSource, column: AmbientColumn): NearFieldMethodResult {
+export function nearFieldLengthScale(
+  jet: JetSource,
+  column: AmbientColumn,
+  options: LengthScaleOptions = {},
+): NearFieldMethodResult {
+  const text = options.text !== false;
   const notApplicable = notADenseUpwardJet(jet);
   if (notApplicable) return notApplicable;
   const entries = LENGTH_SCALE_DATASETS.flatMap((dataset) => {
@@ -263,17 +277,17 @@ export function nearFieldLengthScale(jet: JetSource, column: AmbientColumn): Nea
   for (const e of entries) {
     warnings.push(...e.dataset.validityIssues({ angle: jet.angle, froude: jet.froude }));
   }
-  warnings.push(...currentIssues(jet, column, notes));
+  warnings.push(...currentIssues(jet, column, text ? notes : []));
   warnings.push(...stratificationIssues(jet, column, Math.max(0, ...publishedRiseHeights(jet).map((r) => r.height))));
 
   const own = entries.map((e) => ({ label: e.dataset.label, values: toDimensional(e, jet) }));
-  for (const e of entries) notes.push(...e.coefficients.notes);
+  if (text) for (const e of entries) notes.push(...e.coefficients.notes);
 
   const headline = conservativeHeadline(own);
-  carryImpactToNearFieldEnd(headline, jet, notes);
+  carryImpactToNearFieldEnd(headline, jet, text ? notes : null);
   const { top, from } = headline;
   const used = [...new Set(Object.values(from))];
-  if (own.length > 1) {
+  if (text && own.length > 1) {
     notes.push(
       "Headline values are the less favourable of the datasets for each quantity (lower dilution, higher " +
         "rise, longer distance): " +
@@ -283,13 +297,13 @@ export function nearFieldLengthScale(jet: JetSource, column: AmbientColumn): Nea
         ".",
     );
   }
-  if (top.impactDistance !== null && jet.portHeight > 0) {
+  if (text && top.impactDistance !== null && jet.portHeight > 0) {
     notes.push(
       `Impact distance = return distance + portHeight/tan(${jet.angle.toFixed(1)}°): the descent below port ` +
         `level is continued as a straight line at the discharge angle (an upper bound on the added distance).`,
     );
   }
-  const dilutionRange = impactDilutionRange(own, notes);
+  const dilutionRange = impactDilutionRange(own, text ? notes : []);
 
   const source =
     own.length === 1
@@ -318,15 +332,15 @@ export function nearFieldLengthScale(jet: JetSource, column: AmbientColumn): Nea
     entrainedFlow: flux === null ? null : jet.flow * (flux - 1),
     bias: BIAS,
     warnings,
-    variants: own.map((v) => toVariant(v.values)),
-    notes: [
-      ...notes,
-      `Dilutions are centreline (minimum) values; the …FluxAveraged values are × ${FLUX_AVERAGING_FACTOR.toFixed(3)} ` +
-        "= (1 + λ²)/λ² for Gaussian velocity and tracer profiles with λ = 1.2 (Fischer et al. 1979), the same " +
-        "basis as the integral model. entrainedFlow = Q0 × (flux-averaged impact dilution − 1).",
-    ],
+    variants: own.map((v) => toVariant(v.values, text)),
+    notes: text ? [...notes, BASIS_NOTE] : [],
   };
 }
+
+const BASIS_NOTE =
+  `Dilutions are centreline (minimum) values; the …FluxAveraged values are × ${FLUX_AVERAGING_FACTOR.toFixed(3)} ` +
+  "= (1 + λ²)/λ² for Gaussian velocity and tracer profiles with λ = 1.2 (Fischer et al. 1979), the same " +
+  "basis as the integral model. entrainedFlow = Q0 × (flux-averaged impact dilution − 1).";
 
 type HeadlineField = NearFieldHeadlineField;
 const HEADLINE_FIELDS = NEAR_FIELD_HEADLINE_FIELDS;
@@ -342,7 +356,7 @@ const BIAS =
   `against these measurements (S_t/F = ${LAI_LEE_2012_MAX_RISE_DILUTION.value}).`;
 
 /** The contract's variant shape (it has no dilution at maximum rise). */
-function toVariant(v: Dimensional): NearFieldVariant {
+function toVariant(v: Dimensional, withNote: boolean): NearFieldVariant {
   const { source, maxRiseHeight, maxRiseDistance, returnDistance, impactDistance, impactDilution } = v;
   const { nearFieldDistance, nearFieldDilution, note } = v;
   const out = {
@@ -355,6 +369,7 @@ function toVariant(v: Dimensional): NearFieldVariant {
     nearFieldDistance,
     nearFieldDilution,
   };
+  if (!withNote) return out;
   const rise = v.maxRiseDilution;
   const extra = rise === null ? [] : [`Dilution at maximum rise ${rise.toFixed(1)}.`];
   const text = [...(note ? [note] : []), ...extra].join(" ");

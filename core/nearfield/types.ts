@@ -147,7 +147,17 @@ export type NearFieldHeadlineField = (typeof NEAR_FIELD_HEADLINE_FIELDS)[number]
 
 /** Every headline field, null. */
 export function emptyNearFieldHeadline(): Record<NearFieldHeadlineField, number | null> {
-  return Object.fromEntries(NEAR_FIELD_HEADLINE_FIELDS.map((f) => [f, null])) as Record<NearFieldHeadlineField, null>;
+  // Written out (in NEAR_FIELD_HEADLINE_FIELDS order): a literal has one fixed shape; this runs in every study case.
+  return {
+    maxRiseHeight: null,
+    maxRiseDistance: null,
+    returnDistance: null,
+    impactDistance: null,
+    impactDilution: null,
+    nearFieldDistance: null,
+    nearFieldDilution: null,
+    maxRiseDilution: null,
+  };
 }
 
 /**

@@ -202,8 +202,6 @@ interface AdaptiveRun<P> {
   readonly log: EventLog | undefined;
   /** Some restart event has a rate (dg/dt) to predict its crossing from. */
   readonly hasRestart: boolean;
-  /** Some event needs the slope of the solution during its root search. */
-  readonly anySlope: boolean;
   /** t and event index of the crossing that stopped or cut the last step (set by eventsInStep). */
   stopT: number;
   stopIndex: number;
@@ -220,12 +218,10 @@ function startRun<P>(stepper: Stepper<P>, params: P, events: EventSet<P>, log: E
   ws.rateOld.fill(Number.NaN);
   log?.reset();
   let hasRestart = false;
-  let anySlope = false;
   for (let e = 0; e < ne; e++) {
     if (specs[e].restart && events.rates) hasRestart = true;
-    if (specs[e].slope) anySlope = true;
   }
-  return { stepper, events, params, ws, hits: [], log, hasRestart, anySlope, stopT: 0, stopIndex: -1 };
+  return { stepper, events, params, ws, hits: [], log, hasRestart, stopT: 0, stopIndex: -1 };
 }
 
 /** Records an event hit: in the event log when the run has one, else as a copy in `hits`. */
@@ -269,12 +265,13 @@ function eventsInStep<P>(run: AdaptiveRun<P>, t: number, hUsed: number, tNew: nu
     const down = a > 0 && b <= 0;
     const up = a < 0 && b >= 0;
     if ((dir <= 0 && down) || (dir >= 0 && up)) {
-      const theta = locateRoot(stepper, events, e, run.anySlope, params, t, hUsed, a, b, ws.yTry, ws.dyTry, ws.gTry);
+      const slope = specs[e].slope === true;
+      const theta = locateRoot(stepper, events, e, slope, params, t, hUsed, a, b, ws.yTry, ws.dyTry, ws.gTry);
       (stepHits ??= []).push({ index: e, t: t + theta * hUsed, theta });
     }
   }
   const stop = stepHits ? recordCrossings(run, stepHits, tNew) : STOP_NONE;
-  if (stop !== STOP_RESTART) gOld.set(gNew);
+  if (stop !== STOP_RESTART) for (let e = 0; e < specs.length; e++) gOld[e] = gNew[e];
   return stop;
 }
 

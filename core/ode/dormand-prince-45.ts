@@ -141,7 +141,7 @@ class DormandPrince45<P> implements Stepper<P> {
       const q = err / sc;
       sum += q * q;
     }
-    yOut.set(yNew);
+    for (let i = 0; i < n; i++) yOut[i] = yNew[i]; // a loop: cheaper than TypedArray.set for a few components
     const norm = Math.sqrt(sum / n);
     // A NaN norm (RHS blew up inside the step) must read as "reject", never as "accept".
     return norm === norm ? norm : Infinity;
@@ -159,8 +159,10 @@ class DormandPrince45<P> implements Stepper<P> {
       r4[i] = ydiff - h * k7[i] - bspl;
       r5[i] = h * (D1 * k1[i] + D3 * k3[i] + D4 * k4[i] + D5 * k5[i] + D6 * k6[i] + D7 * k7[i]);
     }
-    y.set(yNew);
-    k1.set(k7); // first same as last
+    for (let i = 0; i < n; i++) {
+      y[i] = yNew[i];
+      k1[i] = k7[i]; // first same as last
+    }
     this.t += h;
   }
 

@@ -37,7 +37,7 @@ export interface EventSet<P> {
   readonly specs: readonly EventSpec[];
   /**
    * Writes g_e(t, y) for every event e into `out`. `dy` is f(t, y) at step ends; inside a step it is the
-   * dense output's derivative when any event has `slope`, else undefined. `only` (the root search) names
+   * dense output's derivative when the event searched has `slope`, else undefined. `only` (the root search) names
    * the one event whose value is read: an implementation may skip the others.
    */
   values(t: number, y: Float64Array, params: P, dy: Float64Array | undefined, out: Float64Array, only?: number): void;
@@ -50,8 +50,9 @@ export function eventSetFrom<P>(events: readonly OdeEvent<P>[]): EventSet<P> {
   const withRate = events.some((e) => e.restart && e.rate);
   return {
     specs: events,
-    values(t, y, params, dy, out) {
-      for (let e = 0; e < events.length; e++) out[e] = events[e].fn(t, y, params, dy);
+    values(t, y, params, dy, out, only = -1) {
+      if (only >= 0) out[only] = events[only].fn(t, y, params, dy);
+      else for (let e = 0; e < events.length; e++) out[e] = events[e].fn(t, y, params, dy);
     },
     rates: withRate
       ? (t, y, params, dy, out) => {

@@ -57,6 +57,37 @@ export function profileAtDepth(
   };
 }
 
+/** `profileAtDepth` for one profile, its columns read once (the stage interpolates at several depths). */
+function profileInterpolator(
+  profile: readonly ProfilePoint[],
+): (depth: number) => { salinity: number; temperature: number } {
+  const depths = profile.map((p) => p.depth);
+  const salinities = profile.map((p) => p.salinity);
+  const temperatures = profile.map((p) => p.temperature);
+  return (depth) => ({
+    salinity: interpolateLinear(depths, salinities, depth),
+    temperature: interpolateLinear(depths, temperatures, depth),
+  });
+}
+
+/**
+ * The equation of state's density, evaluated once per distinct (salinity, temperature, pressure) within
+ * one stage: a uniform column asks for the same water at the same reference pressure at every depth and
+ * at the port. The value is the function's own, so nothing changes but the count of evaluations.
+ */
+export function densityOnce(eos: EquationOfState): (salinity: number, temperature: number, pressure: number) => number {
+  const seen: number[] = []; // salinity, temperature, pressure, density; four numbers per evaluation
+  return (salinity, temperature, pressure) => {
+    for (let i = 0; i < seen.length; i += 4) {
+      if (Object.is(seen[i], salinity) && Object.is(seen[i + 1], temperature) && Object.is(seen[i + 2], pressure))
+        return seen[i + 3]!;
+    }
+    const rho = eos.density(salinity, temperature, pressure);
+    seen.push(salinity, temperature, pressure, rho);
+    return rho;
+  };
+}
+
 /**
  * Densities for the pipeline from a normalised scenario.
  * @param scenario the frozen, SI scenario
@@ -93,9 +124,10 @@ export function propertiesFromScenario(scenario: Scenario): PropertiesStage {
   depthSet.add(portDepth);
   depthSet.add(waterDepth);
   const depths = [...depthSet].sort((a, b) => a - b);
-  const states = depths.map((d) => profileAtDepth(profile, d));
-  const portState = profileAtDepth(profile, portDepth);
-  const surfaceState = profileAtDepth(profile, 0);
+  const at = profileInterpolator(profile);
+  const states = depths.map(at);
+  const portState = at(portDepth);
+  const surfaceState = at(0);
 
   const eos = equationOfStateFor(
     [discharge.salinity, ...profile.map((p) => p.salinity)],
@@ -110,12 +142,13 @@ export function propertiesFromScenario(scenario: Scenario): PropertiesStage {
   // The column carries potential densities referenced to the port's pressure: a column of uniform
   // salinity and temperature is then neutral (no spurious "stratification" from compressibility), and the
   // jet's buoyancy compares like with like. In-situ values are reported as ambientSurface/ambientBottom.
-  const densities = states.map((s) => eos.density(s.salinity, s.temperature, portPressure));
-  const dischargeDensity = eos.density(discharge.salinity, discharge.temperature, portPressure);
-  const ambientDensityAtPort = eos.density(portState.salinity, portState.temperature, portPressure);
-  const ambientSurface = eos.density(surfaceState.salinity, surfaceState.temperature, 0);
+  const density = densityOnce(eos);
+  const densities = states.map((s) => density(s.salinity, s.temperature, portPressure));
+  const dischargeDensity = density(discharge.salinity, discharge.temperature, portPressure);
+  const ambientDensityAtPort = density(portState.salinity, portState.temperature, portPressure);
+  const ambientSurface = density(surfaceState.salinity, surfaceState.temperature, 0);
   const bottomState = states[depths.length - 1];
-  const ambientBottom = eos.density(bottomState.salinity, bottomState.temperature, pressures[depths.length - 1]);
+  const ambientBottom = density(bottomState.salinity, bottomState.temperature, pressures[depths.length - 1]);
   const reducedGravity = (STANDARD_GRAVITY * (dischargeDensity - ambientDensityAtPort)) / ambientDensityAtPort;
 
   warnings.push(...eos.validityIssues(discharge.salinity, discharge.temperature, portPressure, "discharge"));

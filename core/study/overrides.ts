@@ -145,8 +145,12 @@ export function withOverrides(s: Scenario, overrides: Overrides): Scenario {
   if (Object.keys(dischargePatch).length > 0) {
     // An overridden discharge no longer follows the plant's mass balance: drop the plant so results
     // and messages speak of the discharge (result.discharge.fromPlant becomes false).
-    const { plant: _plant, ...rest } = out;
-    out = { ...rest, discharge: { ...out.discharge, ...dischargePatch } };
+    const discharge = { ...out.discharge, ...dischargePatch };
+    if (out.plant === undefined && !("plant" in out)) out = { ...out, discharge };
+    else {
+      const { plant: _plant, ...rest } = out;
+      out = { ...rest, discharge };
+    }
   }
   if (Object.keys(diffuserPatch).length > 0) {
     out = { ...out, diffuser: patchDiffuser(out.diffuser, diffuserPatch) };

@@ -213,10 +213,13 @@ export function formatNumber(value: number, significant = 4): string {
   const abs = Math.abs(value);
   if (abs >= 1e-3 && abs < 1e7) {
     const digits = Math.max(0, significant - 1 - Math.floor(Math.log10(abs)));
-    return value
-      .toFixed(Math.min(digits, 10))
-      .replace(/(\.\d*?)0+$/, "$1")
-      .replace(/\.$/, "");
+    const text = value.toFixed(Math.min(digits, 10));
+    if (text.indexOf(".") < 0) return text;
+    // Trailing zeros of the fraction go, then a bare decimal point (a loop: this runs in every study case).
+    let end = text.length;
+    while (text.charCodeAt(end - 1) === 48) end--; // "0"
+    if (text.charCodeAt(end - 1) === 46) end--; // "."
+    return end === text.length ? text : text.slice(0, end);
   }
   return value.toExponential(significant - 1);
 }

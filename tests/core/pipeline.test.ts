@@ -6,7 +6,10 @@ import { describe, it, expect } from "vitest";
 import { readFileSync, readdirSync } from "node:fs";
 import { join } from "node:path";
 import { parseScenario } from "../../core/scenario/parse";
-import { runScenario } from "../../core/pipeline";
+import { runAmbientCase, runScenario } from "../../core/pipeline";
+import { evaluateScenario } from "../../core/study/evaluate";
+import { summaryWithIntake } from "../../core/intake/summary";
+import { expandCases } from "../../core/cases";
 
 const demoDir = join(__dirname, "../../demo-scenarios");
 const demos = readdirSync(demoDir).filter((f) => f.endsWith(".json"));
@@ -98,6 +101,37 @@ describe("runScenario()", () => {
       edge.nearField.map((m) => m.impactDilution),
       "near-field dilutions",
     ).toEqual(full.nearField.map((m) => m.impactDilution));
+  });
+
+  it.each(demos)("gives a study the summary and warnings of the full pipeline, case by case (%s)", (file) => {
+    // The footprint is computed in full detail only, and with it its warning.
+    const notFootprint = (w: { code: string }) => w.code !== "footprint-beyond-range";
+    for (const c of expandCases(scenarioOf(load(file)))) {
+      const full = runAmbientCase(c.scenario);
+      const edge = runAmbientCase(c.scenario, { detail: "edge" });
+      const fullWithoutFootprint = { ...full, warnings: full.warnings.filter(notFootprint) };
+      expect(evaluateScenario(c.scenario), `${c.name}: study summary`).toEqual(
+        summaryWithIntake(c.scenario, fullWithoutFootprint),
+      );
+      expect(edge.warnings, `${c.name}: warnings`).toEqual(fullWithoutFootprint.warnings);
+      // Edge detail builds no texts: the merging reason and the methods' notes are empty, all else is equal.
+      expect({ ...edge.multiport, reason: "" }, `${c.name}: merging`).toEqual({ ...full.multiport, reason: "" });
+      // (A rising plume's stages build their texts in either detail.)
+      const sinks = full.densities.reducedGravity > 0;
+      if (sinks) expect(edge.multiport.reason, `${c.name}: no merging reason`).toBe("");
+      expect(edge.port, `${c.name}: port`).toEqual(full.port);
+      expect(edge.densities, `${c.name}: densities`).toEqual(full.densities);
+      const withoutText = ({ notes: _n, variants, ...rest }: (typeof full.nearField)[number]) => ({
+        ...rest,
+        variants: variants?.map(({ note: _v, ...v }) => v),
+      });
+      for (const [i, m] of edge.nearField.entries()) {
+        const f = full.nearField[i]!;
+        expect(withoutText(m), `${c.name}: ${m.method}, all but the texts`).toEqual(withoutText(f));
+        if (sinks) expect(m.notes, `${c.name}: ${m.method} builds no notes`).toEqual([]);
+        expect(f.notes!.length > 0, `${c.name}: ${m.method} has notes in full detail`).toBe(true);
+      }
+    }
   });
 });
 

@@ -5,7 +5,8 @@
  * numbers and the same warnings as the full detail (exact equality, no tolerance).
  */
 import { describe, expect, it } from "vitest";
-import { stagesAfterNearField } from "../../../core/pipeline";
+import { runAmbientCase, stagesAfterNearField } from "../../../core/pipeline";
+import { parseScenario } from "../../../core/scenario/parse";
 import { spreadingLayerFromNearFieldEnd, type SpreadingLayerInput } from "../../../core/farfield/gravity-current";
 import { beyondInputFixture, scenarioFixture } from "./fixtures";
 
@@ -77,5 +78,46 @@ describe("stagesAfterNearField() in edge detail", () => {
     const input = beyondInputFixture(scenarioFixture(variants[7]![1]));
     const codes = stagesAfterNearField({ ...input, detail: "edge" }).warnings.map((w) => w.code);
     expect(codes, "shallow water, large flow: layer-thickness warning").toContain("layer-thick-for-depth");
+  });
+});
+
+describe("an edge inside the integral model's near field", () => {
+  // Invented four-port example (as in the study benchmark) with a 5 m mixing zone and the integral chain chosen.
+  const raw = {
+    format: "brinefield-scenario",
+    version: 1,
+    name: "edge inside the jet",
+    discharge: { flow: 0.25, salinity: 65, temperature: 22 },
+    ambient: { depth: 15, salinity: 36, temperature: 20, currentSpeed: 0.1, currentDirection: 90 },
+    diffuser: {
+      layout: "line",
+      portCount: 4,
+      portDiameter: 0.12,
+      portAngle: 60,
+      portHeight: 1,
+      portSpacing: 5,
+      portAzimuth: 0,
+      diffuserAzimuth: 90,
+    },
+    mixingZone: { radius: 5, limits: [{ constituent: "salinity", maxIncrease: 2 }] },
+    options: { addSlackWater: false, nearFieldForEdge: "integral" },
+  };
+
+  it.each(["full", "edge"] as const)("reads the dilution off the jet's path at the edge (%s detail)", (detail) => {
+    const parsed = parseScenario(raw);
+    if (!parsed.ok) throw new Error(parsed.issues.map((i) => i.message).join("; "));
+    const r = runAmbientCase(parsed.scenario, { detail });
+    expect(r.mixingZone.edgeInsideNearField, "the edge lies inside the near field").toBe(true);
+    const path = r.nearField.find((m) => m.method === "integral")!.path!;
+    // The first path point at or beyond 5 m in plan, and the one before it (dilution rises along the path).
+    const k = path.findIndex((p) => Math.hypot(p.x, p.y) >= 5);
+    expect(k > 0, "the path crosses the edge").toBe(true);
+    const r0 = Math.hypot(path[k - 1]!.x, path[k - 1]!.y);
+    const r1 = Math.hypot(path[k]!.x, path[k]!.y);
+    const expected = path[k - 1]!.dilution + ((5 - r0) / (r1 - r0)) * (path[k]!.dilution - path[k - 1]!.dilution);
+    expect(
+      Math.abs(r.mixingZone.dilution / expected - 1),
+      "linear between the path points around the edge",
+    ).toBeLessThan(1e-9);
   });
 });

@@ -147,6 +147,39 @@ describe("integrateAdaptive() at a kink of the right-hand side and with slope ev
     expect(Math.abs(r.t - Math.PI / 2), "maximum of sin at π/2 (exact)").toBeLessThan(1e-8);
     expect(calls.length, "the root search adds no right-hand-side evaluations").toBe(st.evaluations);
   });
+
+  it("searches each crossing on its own event only: a slope event always gets dy, a plain one's search skips it", () => {
+    const st = stepperDormandPrince45(osc, 2);
+    let slopeWithoutDy = 0;
+    let inPlainSearch = false; // the plain event was last called inside a step (dy undefined)
+    let slopeCallsInPlainSearch = 0;
+    // sin t crosses zero downward at π (plain event); its maximum at π/2 is the slope event.
+    const events: OdeEvent<object>[] = [
+      {
+        fn: (_t, y, _p, dy) => {
+          inPlainSearch = dy === undefined;
+          return y[0];
+        },
+        direction: -1,
+        terminal: true,
+      },
+      {
+        fn: (_t, _y, _p, dy) => {
+          if (inPlainSearch) slopeCallsInPlainSearch++;
+          if (!dy) slopeWithoutDy++;
+          return dy ? dy[0] : Number.NaN;
+        },
+        direction: -1,
+        terminal: false,
+        slope: true,
+      },
+    ];
+    const r = integrateAdaptive(st, osc, {}, 0, Float64Array.of(0, 1), opts(), events);
+    expect(Math.abs(r.t - Math.PI), "stops where sin t returns to zero at π (exact)").toBeLessThan(1e-8);
+    expect(Math.abs(r.events[0]!.t - Math.PI / 2), "maximum of sin at π/2 (exact)").toBeLessThan(1e-8);
+    expect(slopeWithoutDy, "the slope event is never called without dy").toBe(0);
+    expect(slopeCallsInPlainSearch, "the plain event's root search does not evaluate the slope event").toBe(0);
+  });
 });
 
 describe("Dormand–Prince dense output derivative", () => {

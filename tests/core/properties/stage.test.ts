@@ -9,7 +9,8 @@ import {
   profileAtDepth,
   propertiesFromScenario,
 } from "../../../core/properties";
-import { DENSITY_INVERSION_TOLERANCE, staticInstability } from "../../../core/properties/stage";
+import { DENSITY_INVERSION_TOLERANCE, densityOnce, staticInstability } from "../../../core/properties/stage";
+import { equationOfStateTeos10 } from "../../../core/properties/equation-of-state";
 import type { ProfilePoint, Scenario } from "../../../core/scenario/types";
 
 function scenario(options: {
@@ -207,5 +208,22 @@ describe("a statically unstable ambient column", () => {
       lowerDepth: 20,
     });
     expect(DENSITY_INVERSION_TOLERANCE, "tolerance").toBe(0.02);
+  });
+});
+
+describe("densityOnce()", () => {
+  it("evaluates the equation of state once per distinct water and returns its own values", () => {
+    const eos = equationOfStateTeos10("test");
+    let calls = 0;
+    const counted = { ...eos, density: (s: number, t: number, p: number) => (calls++, eos.density(s, t, p)) };
+    const rho = densityOnce(counted);
+    const a = rho(35, 20, 10);
+    expect(rho(35, 20, 10), "the same water again: the same value").toBe(a);
+    expect(calls, "evaluated once").toBe(1);
+    expect(a, "TEOS-10's own value").toBe(eos.density(35, 20, 10));
+    expect(rho(35, 20, 0), "another pressure: its own value").toBe(eos.density(35, 20, 0));
+    expect(rho(36, 20, 10), "another salinity: its own value").toBe(eos.density(36, 20, 10));
+    expect(rho(35, 21, 10), "another temperature: its own value").toBe(eos.density(35, 21, 10));
+    expect(calls, "one evaluation per distinct water").toBe(4);
   });
 });
