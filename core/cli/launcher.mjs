@@ -76,6 +76,9 @@ async function ensureBundle() {
       plugins: [zodEnglishOnly],
       // The sources locate the bundle (worker threads start on it) through import.meta.url.
       define: { "import.meta.url": "__brinefieldBundleUrl" },
+      // A script run through vm.Script cannot import() on Node 20 (without an experimental flag), so the
+      // packages kept outside the bundle (playwright-core, CommonJS) are loaded with require() instead.
+      supported: { "dynamic-import": false },
       banner: { js: "var __brinefieldBundleUrl = require('node:url').pathToFileURL(__filename).href;" },
     });
   } catch (err) {

@@ -9,25 +9,8 @@
  *    `input` event dispatched, as a keystroke does), timed until the results table shows other numbers,
  *    median of several edits. Timed in the page itself, so the driver's round trips are not counted.
  */
-import { existsSync } from "node:fs";
-import { dirname, join } from "node:path";
-import { fileURLToPath } from "node:url";
-import { rendererBuildIsStale, buildRenderer, serveStatic } from "./capture-3d";
+import { rendererBuildIsStale, buildRenderer, serveStatic, repositoryRoot } from "./capture-3d";
 import { withChromium } from "./chromium";
-
-/**
- * Repository root: the nearest folder above this file holding the project's package.json (this file is
- * core/cli/node/headless/… in the sources and dist/cli/… in the command-line bundle).
- */
-function defaultRoot(): string {
-  let dir = dirname(fileURLToPath(import.meta.url));
-  for (;;) {
-    if (existsSync(join(dir, "package.json")) && existsSync(join(dir, "renderer"))) return dir;
-    const up = dirname(dir);
-    if (up === dir) return process.cwd();
-    dir = up;
-  }
-}
 
 export interface BrowserBench {
   /** Median ms from navigation start to the first results on screen. */
@@ -83,7 +66,7 @@ const EDIT_AND_WAIT = `(value) => new Promise((resolve, reject) => {
   input.dispatchEvent(new Event("input", { bubbles: true }));
 })`;
 
-export async function benchBrowser(root = defaultRoot()): Promise<BrowserBench> {
+export async function benchBrowser(root = repositoryRoot()): Promise<BrowserBench> {
   if (rendererBuildIsStale(root)) await buildRenderer(root, 240_000);
   const { server, url } = await serveStatic(`${root}/dist/renderer`);
   try {

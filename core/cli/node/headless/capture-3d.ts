@@ -8,7 +8,7 @@
  */
 import type { Server } from "node:http";
 import { existsSync, readdirSync, statSync } from "node:fs";
-import { join, resolve, sep, dirname } from "node:path";
+import { join, sep, dirname } from "node:path";
 import { fileURLToPath } from "node:url";
 import { spawn } from "node:child_process";
 import { withChromium } from "./chromium";
@@ -21,12 +21,17 @@ export class Capture3dError extends Error {
   }
 }
 
-/** Repository root (this file is core/cli/node/headless/capture-3d.ts; the CLI bundle passes it explicitly). */
-function defaultRoot(): string {
-  try {
-    return resolve(dirname(fileURLToPath(import.meta.url)), "../../../..");
-  } catch {
-    return process.cwd();
+/**
+ * Repository root: the nearest folder above this file holding the project's package.json and renderer/
+ * (this file is core/cli/node/headless/… in the sources and dist/cli/… in the command-line bundle).
+ */
+export function repositoryRoot(): string {
+  let dir = dirname(fileURLToPath(import.meta.url));
+  for (;;) {
+    if (existsSync(join(dir, "package.json")) && existsSync(join(dir, "renderer"))) return dir;
+    const up = dirname(dir);
+    if (up === dir) return process.cwd();
+    dir = up;
   }
 }
 
@@ -121,7 +126,7 @@ export async function serveStatic(dir: string): Promise<{ server: Server; url: s
  * Throws Capture3dError (renderer cannot be built, route never ready) or ChromiumMissingError.
  */
 export async function capture3dView(scenarioText: string, options: Capture3dOptions = {}): Promise<string> {
-  const root = options.root ?? defaultRoot();
+  const root = options.root ?? repositoryRoot();
   if (rendererBuildIsStale(root)) await buildRenderer(root, options.buildTimeoutMs);
   const { server, url } = await serveStatic(join(root, "dist/renderer"));
   try {
