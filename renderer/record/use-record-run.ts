@@ -8,7 +8,7 @@ import type { Scenario } from "../../core/scenario/types";
 import type { StepOutcome } from "../../core/record/summary";
 import { distinctStepIndices, outcomesFromDistinct } from "../../core/record/run";
 import { withRecord } from "../../core/record/result";
-import { StudyCancelled, StudyWorkerPool } from "../study/worker-pool";
+import { StudyCancelled, sharedRecordPool, type StudyWorkerPool } from "../study/worker-pool";
 import { isRecordPending } from "./pending";
 
 export interface RecordRun {
@@ -51,8 +51,10 @@ export function useRecordRun(scenario: Scenario | null, pendingResult: Brinefiel
       );
       return;
     }
-    const cores = Math.max(1, Math.min(8, navigator.hardwareConcurrency || 2));
-    const pool = new StudyWorkerPool(cores);
+    // The page's record pool: its workers stay warm between runs; a run still going is stopped first.
+    const pool = sharedRecordPool();
+    pool.stopIfRunning();
+    const cores = pool.size;
     poolRef.current = pool;
     const distinct = distinctStepIndices(scenario);
     const chunks: number[][] = [];
@@ -118,7 +120,7 @@ export function useRecordRun(scenario: Scenario | null, pendingResult: Brinefiel
       );
     return () => {
       live = false;
-      pool.cancel();
+      pool.stopIfRunning();
       poolRef.current = null;
     };
   }, [scenario, pendingResult, pending, attempt]);
