@@ -9,6 +9,7 @@ import { runAmbientCase, stagesAfterNearField } from "../../../core/pipeline";
 import { parseScenario } from "../../../core/scenario/parse";
 import { spreadingLayerFromNearFieldEnd, type SpreadingLayerInput } from "../../../core/farfield/gravity-current";
 import { beyondInputFixture, scenarioFixture } from "./fixtures";
+import { fourPortScenarioRaw } from "../../helpers/four-port-scenario";
 
 const layer: SpreadingLayerInput = {
   startDistance: 36,
@@ -82,23 +83,9 @@ describe("stagesAfterNearField() in edge detail", () => {
 });
 
 describe("an edge inside the integral model's near field", () => {
-  // Invented four-port example (as in the study benchmark) with a 5 m mixing zone and the integral chain chosen.
+  // The invented four-port base scenario with a 5 m mixing zone and the integral chain chosen.
   const raw = {
-    format: "brinefield-scenario",
-    version: 1,
-    name: "edge inside the jet",
-    discharge: { flow: 0.25, salinity: 65, temperature: 22 },
-    ambient: { depth: 15, salinity: 36, temperature: 20, currentSpeed: 0.1, currentDirection: 90 },
-    diffuser: {
-      layout: "line",
-      portCount: 4,
-      portDiameter: 0.12,
-      portAngle: 60,
-      portHeight: 1,
-      portSpacing: 5,
-      portAzimuth: 0,
-      diffuserAzimuth: 90,
-    },
+    ...fourPortScenarioRaw("edge inside the jet"),
     mixingZone: { radius: 5, limits: [{ constituent: "salinity", maxIncrease: 2 }] },
     options: { addSlackWater: false, nearFieldForEdge: "integral" },
   };
