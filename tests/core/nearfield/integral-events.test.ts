@@ -9,7 +9,7 @@
  * Geometric identities (plan distance = √(x² + y²), event planes z = 0 and z = −portHeight, flux-averaged
  * = centreline × (1 + λ²)/λ²) follow from the definitions.
  */
-import { describe, expect, it } from "vitest";
+import { describe, expect, it, beforeEach } from "vitest";
 import { denseJet, uniformColumn } from "../../helpers/jets";
 import { nearFieldIntegral, CENTRELINE_PROFILE_FACTOR } from "../../../core/nearfield/integral";
 import {
@@ -21,7 +21,7 @@ import {
   laboratoryJet,
   type IntegralBiasPoint,
 } from "../../../core/nearfield/integral-bias";
-import type { JetSource, NearFieldMethodResult } from "../../../core/nearfield/types";
+import type { JetSource, NearFieldEvent, NearFieldMethodResult } from "../../../core/nearfield/types";
 
 const G = 9.80665; // standard gravity, m/s²
 const FACTOR = 2.44 / 1.44; // (1 + λ²)/λ², λ = 1.2 (Fischer et al. 1979, ch. 9)
@@ -29,10 +29,16 @@ const event = (r: NearFieldMethodResult, kind: string) => r.events!.find((e) => 
 
 describe("events of a 60° dense jet discharged toward north-east", () => {
   const jet: JetSource = denseJet({ azimuth: 45, portHeight: 1 });
-  const r = nearFieldIntegral(jet, uniformColumn(20));
-  const rise = event(r, "max-rise");
-  const ret = event(r, "return-to-port-level");
-  const impact = event(r, "centreline-impact");
+  let r: NearFieldMethodResult;
+  let rise: NearFieldEvent;
+  let ret: NearFieldEvent;
+  let impact: NearFieldEvent;
+  beforeEach(() => {
+    r = nearFieldIntegral(jet, uniformColumn(20));
+    rise = event(r, "max-rise");
+    ret = event(r, "return-to-port-level");
+    impact = event(r, "centreline-impact");
+  });
 
   it("lists maximum rise, return, seabed contact of the lower edge and centreline impact, in order along s", () => {
     expect(
@@ -170,7 +176,8 @@ describe("a solve started while another is running (from a sink)", () => {
 });
 
 describe("the bias against Lai & Lee's (2012) impact dilution, 1.06·F over 38°–60°", () => {
-  const points = integralBiasByAngle(nearFieldIntegral);
+  let points: ReturnType<typeof integralBiasByAngle>;
+  beforeEach(() => void (points = integralBiasByAngle(nearFieldIntegral)));
 
   it("runs the laboratory jet (d = 1 cm, g′ = 0.2 m/s², F = 30, port on the bed) at 38°, 45°, 52° and 60°", () => {
     expect(

@@ -3,7 +3,7 @@
  * its right-hand side core/nearfield/integral-rhs.ts. Every check value names its source; the
  * published laboratory bands live in tests/check-values/entrainment-lee-cheung-1990.json.
  */
-import { describe, expect, it } from "vitest";
+import { describe, expect, it, beforeEach } from "vitest";
 import { uniformColumn } from "../../helpers/jets";
 import * as mathjs from "mathjs";
 import checkValues from "../../check-values/entrainment-lee-cheung-1990.json";
@@ -16,7 +16,13 @@ import {
 import { IB, IC, INTEGRAL_DIM, IMX, IMY, IQ, IX, IY, IZ, integralJetRhs } from "../../../core/nearfield/integral-rhs";
 import { integrateAdaptive } from "../../../core/ode/adaptive";
 import { stepperDormandPrince45 } from "../../../core/ode/dormand-prince-45";
-import type { AmbientColumn, JetSource, PathSink } from "../../../core/nearfield/types";
+import type {
+  AmbientColumn,
+  JetSource,
+  NearFieldEvent,
+  NearFieldMethodResult,
+  PathSink,
+} from "../../../core/nearfield/types";
 
 /** mathjs ships `solveODE` (Dormand–Prince RK45) but its type declarations omit it. */
 const solveODE = (
@@ -93,9 +99,14 @@ const rel = (a: number, b: number) => Math.abs(a - b) / Math.max(Math.abs(b), 1e
 describe("nearFieldIntegral(): agreement with an independent integration of the same equations", () => {
   const jet = jetFor({ angle: 60 });
   const column = uniformColumn(20, { currentSpeed: 0.1, currentDirection: 0 });
-  const r = nearFieldIntegral(jet, column);
-  const impact = r.events!.find((e) => e.kind === "centreline-impact")!;
-  const maxRise = r.events!.find((e) => e.kind === "max-rise")!;
+  let r: NearFieldMethodResult;
+  let impact: NearFieldEvent;
+  let maxRise: NearFieldEvent;
+  beforeEach(() => {
+    r = nearFieldIntegral(jet, column);
+    impact = r.events!.find((e) => e.kind === "centreline-impact")!;
+    maxRise = r.events!.find((e) => e.kind === "max-rise")!;
+  });
 
   it("matches mathjs solveODE at the max-rise and impact points to 1e-4 (relative)", () => {
     expect(impact, "the typical 60° case reaches the seabed").toBeDefined();

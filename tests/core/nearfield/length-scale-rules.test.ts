@@ -12,7 +12,7 @@
  * (2016), abstract. The 45°/135° split of co-, cross- and counter-flow and the 0.01 kg/m³, 0.1 and 1
  * stratification thresholds are common practice, no source.
  */
-import { describe, expect, it } from "vitest";
+import { describe, expect, it, beforeEach } from "vitest";
 import { denseJet, uniformColumn, type JetOptions } from "../../helpers/jets";
 import {
   denseJetDatasetsAtAngle,
@@ -165,7 +165,8 @@ describe("which discharges the laws describe", () => {
 
 describe("a port at 45°: Lai & Lee (2012) alone, carried to the near-field end", () => {
   const jet = makeJet({ angle: 45, d: 0.2, F: 30 });
-  const r = nearFieldLengthScale(jet, col);
+  let r: NearFieldMethodResult;
+  beforeEach(() => void (r = nearFieldLengthScale(jet, col)));
   it("takes the interpolated rise and the 38°–60° dilutions, and carries S_i with the growth 2.6/1.6", () => {
     expect(r.source, "one dataset").toBe(`${LAI_LEE_2012_SOURCE} — the only dataset held that covers this angle`);
     expect(r.maxRiseHeight, "(0.44 + (30/45)·1.64)·dF").toBeCloseTo((0.44 + (30 / 45) * 1.64) * 6, 10);
@@ -203,7 +204,8 @@ describe("a port at 45°: Lai & Lee (2012) alone, carried to the near-field end"
 });
 
 describe("a port at 30°: a rise but no dilution (Lai & Lee 2012 state S_t and S_i only for 38°–60°)", () => {
-  const r = nearFieldLengthScale(makeJet({ angle: 30, d: 0.2, F: 30 }), col);
+  let r: NearFieldMethodResult;
+  beforeEach(() => void (r = nearFieldLengthScale(makeJet({ angle: 30, d: 0.2, F: 30 }), col)));
   it("gives the interpolated rise and nothing that needs a dilution", () => {
     expect(r.available, "available").toBe(true);
     expect(r.maxRiseHeight, "(0.44 + (15/45)·1.64)·dF").toBeCloseTo((0.44 + (15 / 45) * 1.64) * 6, 10);
@@ -229,7 +231,8 @@ describe("a port at 30°: a rise but no dilution (Lai & Lee 2012 state S_t and S
 
 describe("a raised port at 60°: two datasets, the less favourable value of each", () => {
   const jet = makeJet({ angle: 60, d: 0.2, F: 30, portHeight: 1.5 });
-  const r = nearFieldLengthScale(jet, col);
+  let r: NearFieldMethodResult;
+  beforeEach(() => void (r = nearFieldLengthScale(jet, col)));
   it("names both datasets and which one each headline came from", () => {
     expect(r.source, "both, with the rule and the origins").toBe(
       `${LAI_LEE_2012_SOURCE}; ${ROBERTS_1997_SOURCE} — headline is the less favourable value of each quantity ` +
@@ -285,7 +288,8 @@ describe("a raised port at 60°: two datasets, the less favourable value of each
 
 describe("very low F: dilutions floored at 1, and a measured near-field value below the carry kept", () => {
   const jet = makeJet({ angle: 60, d: 0.2, F: 0.5 });
-  const r = nearFieldLengthScale(jet, col);
+  let r: NearFieldMethodResult;
+  beforeEach(() => void (r = nearFieldLengthScale(jet, col)));
   it("never reports a dilution below 1 (undiluted brine)", () => {
     expect(r.impactDilution, "1.06·0.5 → 1").toBe(1);
     expect(r.maxRiseDilution, "0.45·0.5 → 1").toBe(1);
